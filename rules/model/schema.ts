@@ -1,0 +1,179 @@
+/**
+ * Design file, version 1 (design-format.md): the one zod schema. The TypeScript types below
+ * and rules/schema/design.schema.json are both derived from it.
+ *
+ * The schema checks shape and local values; references between records (a net naming a pin,
+ * a part naming a rail) are checked by the reader (reader.ts), which reports both kinds with
+ * the same JSON paths.
+ */
+import { z } from 'zod';
+import { parseLevel } from '../levels/level.ts';
+import { RULE_IDS } from './ruleIds.ts';
+
+// zod would otherwise compile validators with `new Function`, which a strict CSP forbids.
+z.config({ jitless: true });
+
+export const FORMAT_ID = 'railcross.design';
+export const FORMAT_VERSION = 1;
+
+const nonNegative = (what: string) =>
+  z.number().min(0, { message: `expected a ${what} of 0 or more` });
+const positive = (what: string) =>
+  z.number().gt(0, { message: `expected a positive ${what}` });
+
+/** A record id. Finding ids are built as `rule:NET:SCENARIO:PART.PIN`, hence the forbidden characters. */
+const id = (kind: string, allowDot: boolean) =>
+  z
+    .string()
+    .min(1, { message: `expected a non-empty ${kind} id` })
+    .refine((s) => !s.includes(':') && !s.includes('>'), {
+      message: `expected a ${kind} id without ":" or ">"`,
+    })
+    .refine((s) => allowDot || !s.includes('.'), { message: `expected a ${kind} id without "."` });
+
+export const LevelSchema = z.union([
+  z.number(),
+  z.string().superRefine((s, ctx) => {
+    const r = parseLevel(s);
+    if (!r.ok) {
+      ctx.addIssue({
+        code: 'custom',
+        message: `expected a Level such as "2.0", "0.7*VDD" or "VDD-0.45": ${r.error} at character ${r.at + 1} of "${s}"`,
+      });
+    }
+  }),
+]).describe('Volts, or a linear expression of the pin\'s supply VDD, e.g. "0.7*VDD", "VDD-0.45"');
+
+const OutputPointSchema = z.strictObject({
+  v: LevelSchema,
+  i: nonNegative('current (A)'),
+});
+
+const VddRangeSchema = z
+  .tuple([z.number(), z.number()])
+  .refine(([lo, hi]) => lo <= hi, { message: 'expected vddRange [min, max] with min ≤ max' });
+
+export const ParamsSchema = z.strictObject({
+  vih: LevelSchema.optional(),
+  vil: LevelSchema.optional(),
+  schmitt: z.strictObject({ vtPlus: LevelSchema, vtMinus: LevelSchema }).optional(),
+  iih: nonNegative('current (A)').optional(),
+  iil: nonNegative('current (A)').optional(),
+  cin: nonNegative('capacitance (F)').optional(),
+  viMax: LevelSchema.optional(),
+  unpoweredSafe: z.boolean().optional(),
+  viMaxOff: z.number().optional(),
+  voh: z.array(OutputPointSchema).optional(),
+  vol: z.array(OutputPointSchema).optional(),
+  ioMax: nonNegative('current (A)').optional(),
+  maxInputRamp: nonNegative('ramp (s/V)').optional(),
+  vddRange: VddRangeSchema.optional(),
+});
+
+export const PullSchema = z.strictObject({
+  to: z.string().min(1, { message: 'expected a rail id or "ground"' }),
+  ohms: positive('resistance (Ω)'),
+});
+
+const PositionSchema = z.strictObject({ x: z.number(), y: z.number() });
+
+export const RailSchema = z
+  .strictObject({
+    id: id('rail', true),
+    label: z.string(),
+    nominal: z.number(),
+    tolerance: nonNegative('tolerance (fraction)').optional(),
+    min: z.number().optional(),
+    max: z.number().optional(),
+    colour: z.string().optional(),
+  });
+
+export const ScenarioSchema = z.strictObject({
+  id: id('scenario', true).refine((s) => s !== 'all-on', {
+    message: 'expected a scenario id other than "all-on" (reserved for the state with every rail on)',
+  }),
+  label: z.string(),
+  off: z.array(z.string()),
+});
+
+export const ProfileSchema = z.strictObject({
+  id: id('profile', true),
+  label: z.string(),
+  source: z.string().trim().min(1, { message: 'expected a non-empty source (where the numbers come from)' }),
+  params: ParamsSchema,
+});
+
+export const PinSchema = z.strictObject({
+  id: id('pin', false),
+  role: z.enum(['input', 'output', 'bidir']),
+  drive: z.enum(['push-pull', 'three-state', 'open-drain']).optional(),
+  rail: z.string().optional(),
+  profile: z.string().optional(),
+  params: ParamsSchema.optional(),
+  pull: PullSchema.optional(),
+  side: z.enum(['left', 'right', 'top', 'bottom']).optional(),
+});
+
+export const PartSchema = z.strictObject({
+  id: id('part', false),
+  label: z.string(),
+  rail: z.string(),
+  profile: z.string(),
+  params: ParamsSchema.optional(),
+  position: PositionSchema.optional(),
+  pins: z.array(PinSchema),
+});
+
+export const WaiverSchema = z.strictObject({
+  rule: z.enum(RULE_IDS, { message: `expected a rule id: ${RULE_IDS.join(', ')}` }),
+  scenario: z.string().optional(),
+  note: z.string(),
+});
+
+export const NetSchema = z.strictObject({
+  id: id('net', false),
+  label: z.string().optional(),
+  pins: z.array(z.string()),
+  pull: PullSchema.optional(),
+  wiringCapacitance: nonNegative('capacitance (F)').optional(),
+  maxRiseTime: nonNegative('time (s)').optional(),
+  waivers: z.array(WaiverSchema).optional(),
+  route: z.array(z.tuple([z.string(), z.string()])).optional(),
+});
+
+export const SettingsSchema = z.strictObject({
+  minMargin: z.number().optional(),
+  defaultWiringCapacitance: nonNegative('capacitance (F)').optional(),
+});
+
+export const DesignSchema = z.strictObject({
+  format: z.literal(FORMAT_ID, { message: `expected "${FORMAT_ID}": this is not a Railcross design file` }),
+  version: z.literal(FORMAT_VERSION, { message: `expected version ${FORMAT_VERSION}` }),
+  title: z.string(),
+  settings: SettingsSchema.optional(),
+  rails: z.array(RailSchema),
+  scenarios: z.array(ScenarioSchema).optional(),
+  profiles: z.array(ProfileSchema).optional(),
+  parts: z.array(PartSchema),
+  nets: z.array(NetSchema),
+});
+
+export type Design = z.infer<typeof DesignSchema>;
+export type Rail = z.infer<typeof RailSchema>;
+export type Scenario = z.infer<typeof ScenarioSchema>;
+export type Profile = z.infer<typeof ProfileSchema>;
+export type Part = z.infer<typeof PartSchema>;
+export type Pin = z.infer<typeof PinSchema>;
+export type Net = z.infer<typeof NetSchema>;
+export type Params = z.infer<typeof ParamsSchema>;
+export type Pull = z.infer<typeof PullSchema>;
+export type Waiver = z.infer<typeof WaiverSchema>;
+export type OutputPoint = z.infer<typeof OutputPointSchema>;
+export type Settings = z.infer<typeof SettingsSchema>;
+export type PinRole = Pin['role'];
+export type PinDrive = NonNullable<Pin['drive']>;
+
+/** Defaults of `settings` (design-format.md). */
+export const DEFAULT_MIN_MARGIN = 0.2;
+export const DEFAULT_WIRING_CAPACITANCE = 5e-12;
+export const DEFAULT_TOLERANCE = 0.05;
