@@ -1,0 +1,23 @@
+/**
+ * The one registry of rules, in the catalogue's order (rules-catalogue.md); reports sort by it.
+ * Adding a rule: its module, its test table, its documentation paragraph, and one line here.
+ */
+import type { AnyRule } from './defineRule.ts';
+import levelHigh from './level-high.ts';
+import levelLow from './level-low.ts';
+import overvoltage from './overvoltage.ts';
+import railRange from './rail-range.ts';
+import railCrossing from './rail-crossing.ts';
+
+export const RULES: readonly AnyRule[] = [
+  levelHigh,
+  levelLow,
+  overvoltage,
+  railRange,
+  railCrossing,
+];
+
+/** The rule with an id, if it is built. */
+export function ruleById(id: string): AnyRule | undefined {
+  return RULES.find((r) => r.id === id);
+}

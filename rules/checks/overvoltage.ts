@@ -1,0 +1,59 @@
+/**
+ * overvoltage: a powered pin whose `viMax` is exceeded by the highest voltage that the net's other
+ * sources can put on it, at the worst corner (rules-catalogue.md).
+ */
+import { levelAt } from '../levels/level.ts';
+import { exceeds } from '../levels/compare.ts';
+import { netSources, worstExposure } from '../engine/netMath.ts';
+import { defineRule } from './defineRule.ts';
+import { volts } from './format.ts';
+import { partsOf } from './keys.ts';
+
+interface Data {
+  pin: string;
+  vNet: number;
+  viMax: number;
+  from: string;
+  pinVdd: number;
+}
+
+export default defineRule({
+  id: 'overvoltage',
+  meta: {
+    title: 'No pin sees more than it may',
+    severity: 'error',
+    explanation:
+      'Every pin on a powered rail that has a viMax is compared with the highest voltage any other ' +
+      'source on its net can apply: each powered push-pull or three-state driver\'s rail, and each ' +
+      'pull resistor\'s rail (its own internal pull included), with the source\'s rail at its highest ' +
+      'and the pin\'s at its lowest. Above viMax a CMOS input\'s clamp diode conducts into its rail.',
+    hint:
+      'Use a receiver whose inputs tolerate the voltage (a 5 V-tolerant input), a dual-supply ' +
+      'translator, or pull the net up to the receiver\'s own rail; a series resistor only limits the ' +
+      'clamp current.',
+    messages: {
+      tooHigh: (d: Data) =>
+        `${d.from} can put ${volts(d.vNet)} on ${d.pin}, whose limit is ${volts(d.viMax)} at its supply of ${volts(d.pinVdd)}.`,
+    },
+  },
+  checkNet(view, report) {
+    const sourcesOf = (pin: (typeof view.pins)[number]) => netSources(pin, view.drivers, view.pulls);
+    for (const pin of view.pins) {
+      const viMax = pin.params.viMax;
+      if (!pin.powered || viMax === undefined) continue;
+      const worst = worstExposure(pin, sourcesOf(pin), view.rails, (vdd) => levelAt(viMax, vdd));
+      if (worst === undefined || !exceeds(worst.vNet, worst.limit)) continue;
+      const from = worst.source.kind === 'driver' ? worst.source.from
+        : worst.source.from === 'net' ? `The net's pull-up to ${worst.source.rail}` : `${worst.source.from}'s internal pull-up`;
+      report({
+        messageId: 'tooHigh',
+        data: { pin: pin.key, vNet: worst.vNet, viMax: worst.limit, from, pinVdd: worst.pinVdd },
+        severity: 'error',
+        pins: [pin.key],
+        parts: partsOf(pin.key),
+        suffix: pin.key,
+        values: { vNet: worst.vNet, viMax: worst.limit, pin: pin.key, source: worst.source.from, pinVdd: worst.pinVdd },
+      });
+    }
+  },
+});

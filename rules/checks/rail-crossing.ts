@@ -1,0 +1,46 @@
+/**
+ * rail-crossing: every net that joins pins of different rails, with its worst margins, as one
+ * row of the crossing table in each power state (rules-catalogue.md).
+ */
+import { defineRule } from './defineRule.ts';
+import { volts } from './format.ts';
+import { partsOf } from './keys.ts';
+
+interface Data {
+  net: string;
+  rails: string[];
+  marginHigh: number | null;
+  marginLow: number | null;
+}
+
+const margin = (m: number | null) => (m === null ? 'no driver/receiver pair' : volts(m));
+
+export default defineRule({
+  id: 'rail-crossing',
+  meta: {
+    title: 'Nets that cross rails',
+    severity: 'info',
+    explanation:
+      'Every net whose pins sit on more than one rail is listed in each power state with its worst ' +
+      'high and low margins, so that a review sees every crossing, passing or not. A pull ' +
+      'resistor\'s rail does not make a crossing.',
+    hint: 'Review each crossing: margins, over-voltage and the unpowered cases are checked by the other rules.',
+    messages: {
+      crosses: (d: Data) =>
+        `${d.net} joins rails ${d.rails.join(', ')}: worst NMH ${margin(d.marginHigh)}, worst NML ${margin(d.marginLow)}.`,
+    },
+  },
+  checkNet(view, report) {
+    if (view.pinRails.length < 2) return;
+    const { worstHigh, worstLow } = view.analysis;
+    const keys = view.pins.map((p) => p.key);
+    report({
+      messageId: 'crosses',
+      data: { net: view.net.label ?? view.net.id, rails: [...view.pinRails], marginHigh: worstHigh, marginLow: worstLow },
+      severity: 'info',
+      pins: keys,
+      parts: partsOf(...keys),
+      values: { rails: [...view.pinRails], marginHigh: worstHigh, marginLow: worstLow },
+    });
+  },
+});

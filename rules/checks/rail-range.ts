@@ -1,0 +1,74 @@
+/**
+ * rail-range: a rail whose range leaves the supply range over which a profile's numbers hold,
+ * one finding per (rail, profile); runs once, in `all-on` (rules-catalogue.md).
+ */
+import { below, exceeds } from '../levels/compare.ts';
+import type { PinView } from '../engine/types.ts';
+import { defineRule } from './defineRule.ts';
+import { volts } from './format.ts';
+import { partsOf } from './keys.ts';
+
+interface Data {
+  rail: string;
+  profile: string;
+  railMin: number;
+  railMax: number;
+  profileMin: number;
+  profileMax: number;
+  count: number;
+}
+
+export default defineRule({
+  id: 'rail-range',
+  once: true,
+  meta: {
+    title: 'Rails stay inside the families\' supply ranges',
+    severity: 'warning',
+    explanation:
+      'A profile\'s levels hold only over its vddRange. Each rail is compared with the narrowest ' +
+      'vddRange of the pins on it that use one profile; outside it, the profile\'s numbers are not ' +
+      'guaranteed and every margin on those pins is in doubt.',
+    hint:
+      'Bring the rail inside the family\'s range, or take the chosen part\'s datasheet values for ' +
+      'this supply into a design-local profile.',
+    messages: {
+      outside: (d: Data) =>
+        `Rail ${d.rail} spans ${volts(d.railMin)}–${volts(d.railMax)}, outside the ${volts(d.profileMin)}–${volts(d.profileMax)} ` +
+        `over which ${d.profile} holds (${d.count} pin${d.count === 1 ? '' : 's'}).`,
+    },
+  },
+  checkState(state, report) {
+    for (const rail of state.design.rails) {
+      const range = state.rails.onRanges.get(rail.id);
+      if (range === undefined) continue;
+      const byProfile = new Map<string, PinView[]>();
+      for (const pin of state.allPins) {
+        if (pin.rail !== rail.id || pin.params.vddRange === undefined) continue;
+        const list = byProfile.get(pin.profileId);
+        if (list === undefined) byProfile.set(pin.profileId, [pin]);
+        else list.push(pin);
+      }
+      for (const [profile, pins] of byProfile) {
+        let profileMin = -Infinity;
+        let profileMax = Infinity;
+        for (const p of pins) {
+          const [lo, hi] = p.params.vddRange!;
+          profileMin = Math.max(profileMin, lo);
+          profileMax = Math.min(profileMax, hi);
+        }
+        if (!below(range.min, profileMin) && !exceeds(range.max, profileMax)) continue;
+        const keys = pins.map((p) => p.key);
+        report({
+          messageId: 'outside',
+          data: { rail: rail.id, profile, railMin: range.min, railMax: range.max, profileMin, profileMax, count: keys.length },
+          severity: 'warning',
+          pins: keys,
+          parts: partsOf(...keys),
+          subject: rail.id,
+          suffix: profile,
+          values: { rail: rail.id, railMin: range.min, railMax: range.max, profileMin, profileMax, profile },
+        });
+      }
+    }
+  },
+});

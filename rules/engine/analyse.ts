@@ -1,0 +1,114 @@
+/**
+ * The level analysis of a net: every powered driver/receiver pair on different parts, each side
+ * (high, low) at its worst corner, with the level that the actual load selects. The level rules,
+ * the report's margin table and the editor all read this one analysis.
+ */
+import { levelAt } from '../levels/level.ts';
+import { outputLevel } from '../levels/output.ts';
+import { below } from '../levels/compare.ts';
+import { highThreshold, lowThreshold } from './resolve.ts';
+import { pullRails, thevenin, worstCorner } from './netMath.ts';
+import type {
+  DriverLoad, EffectiveSettings, LevelSide, NetAnalysis, PairAnalysis, PairStatus, PinView, PullSource, RailStates,
+} from './types.ts';
+
+export interface AnalysisInput {
+  readonly pins: readonly PinView[];
+  readonly drivers: readonly PinView[];
+  readonly receivers: readonly PinView[];
+  readonly pulls: readonly PullSource[];
+  readonly highFromPull: boolean;
+  readonly loads: ReadonlyMap<string, DriverLoad>;
+  readonly rails: RailStates;
+  readonly settings: EffectiveSettings;
+}
+
+/** Pass, warning or fail for a level `out` against a threshold, `higherIsBetter` for the high side. */
+function judge(better: number, worse: number, minMargin: number): PairStatus {
+  // Compare the levels themselves, never their difference with 0 (rules-catalogue.md).
+  if (below(better, worse)) return 'fail';
+  if (below(better, worse + minMargin)) return 'warning';
+  return 'pass';
+}
+
+type Scored = LevelSide & { score: number };
+
+function highSide(input: AnalysisInput, driver: PinView, receiver: PinView, sumIih: number): LevelSide | null {
+  const vih = highThreshold(receiver);
+  if (vih === undefined) return null;
+  const { rails, settings } = input;
+  if (driver.drive === 'open-drain') {
+    if (!input.highFromPull) return null;
+    const railIds = [...pullRails(input.pulls), receiver.rail];
+    const worst = worstCorner<Scored>(railIds, rails, (c) => {
+      const th = thevenin(input.pulls, c)!;
+      const out = th.v - th.r * sumIih;
+      const receiverVdd = c.get(receiver.rail) ?? 0;
+      const threshold = levelAt(vih, receiverVdd);
+      return {
+        out, threshold, margin: out - threshold, driverVdd: null, receiverVdd, vpull: th.v,
+        estimate: false, status: judge(out, threshold, settings.minMargin), load: sumIih, score: out - threshold,
+      };
+    });
+    return worst === undefined ? null : strip(worst);
+  }
+  const voh = driver.params.voh;
+  if (voh === undefined || voh.length === 0) return null;
+  const load = input.loads.get(driver.key)?.high ?? 0;
+  const worst = worstCorner<Scored>([driver.rail, receiver.rail], rails, (c) => {
+    const driverVdd = c.get(driver.rail) ?? 0;
+    const receiverVdd = c.get(receiver.rail) ?? 0;
+    const level = outputLevel(voh, load, driverVdd, 'high')!;
+    const threshold = levelAt(vih, receiverVdd);
+    return {
+      out: level.v, threshold, margin: level.v - threshold, driverVdd, receiverVdd,
+      estimate: level.estimate, status: judge(level.v, threshold, settings.minMargin), load, score: level.v - threshold,
+    };
+  });
+  return worst === undefined ? null : strip(worst);
+}
+
+function lowSide(input: AnalysisInput, driver: PinView, receiver: PinView): LevelSide | null {
+  const vil = lowThreshold(receiver);
+  const vol = driver.params.vol;
+  if (vil === undefined || vol === undefined || vol.length === 0) return null;
+  const { rails, settings } = input;
+  const load = input.loads.get(driver.key)?.low ?? 0;
+  const worst = worstCorner<Scored>([driver.rail, receiver.rail], rails, (c) => {
+    const driverVdd = c.get(driver.rail) ?? 0;
+    const receiverVdd = c.get(receiver.rail) ?? 0;
+    const level = outputLevel(vol, load, driverVdd, 'low')!;
+    const threshold = levelAt(vil, receiverVdd);
+    return {
+      out: level.v, threshold, margin: threshold - level.v, driverVdd, receiverVdd,
+      estimate: level.estimate, status: judge(threshold, level.v, settings.minMargin), load, score: threshold - level.v,
+    };
+  });
+  return worst === undefined ? null : strip(worst);
+}
+
+function strip(s: Scored): LevelSide {
+  const { score: _score, ...side } = s;
+  return side;
+}
+
+/** The analysis of one net in one power state. */
+export function analyseNet(input: AnalysisInput): NetAnalysis {
+  const pairs: PairAnalysis[] = [];
+  let sumIih = 0;
+  for (const p of input.pins) sumIih += p.params.iih ?? 0;
+  let worstHigh: number | null = null;
+  let worstLow: number | null = null;
+  for (const driver of input.drivers) {
+    for (const receiver of input.receivers) {
+      if (driver.part.id === receiver.part.id) continue;
+      const high = highSide(input, driver, receiver, sumIih);
+      const low = lowSide(input, driver, receiver);
+      if (high === null && low === null) continue;
+      if (high !== null && (worstHigh === null || high.margin < worstHigh)) worstHigh = high.margin;
+      if (low !== null && (worstLow === null || low.margin < worstLow)) worstLow = low.margin;
+      pairs.push({ driver: driver.key, receiver: receiver.key, high, low });
+    }
+  }
+  return { pairs, worstHigh, worstLow };
+}

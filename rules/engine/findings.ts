@@ -1,0 +1,90 @@
+/** Turning rule drafts into findings: ids, waivers, and the report's order. */
+import type { Net } from '../model/schema.ts';
+import type { Draft, MessageFns, Rule } from '../checks/defineRule.ts';
+import { RULE_IDS } from '../model/ruleIds.ts';
+import type { Finding, PowerState, Summary } from './types.ts';
+
+/** Completes a draft: `rule:NET:SCENARIO[:suffix]` (report-format.md, "Finding"). */
+export function completeFinding<M extends MessageFns>(
+  rule: Rule<M>,
+  draft: Draft<M>,
+  state: PowerState,
+  net: Net | null,
+): Finding {
+  const place = net?.id ?? draft.subject ?? '';
+  const id = `${rule.id}:${place}:${state.id}${draft.suffix === undefined ? '' : `:${draft.suffix}`}`;
+  const message = rule.meta.messages[draft.messageId]!(draft.data);
+  let waived: string | undefined;
+  if (net?.waivers !== undefined) {
+    for (const w of net.waivers) {
+      if (w.rule === rule.id && (w.scenario === undefined || w.scenario === state.id)) {
+        waived = w.note;
+        break;
+      }
+    }
+  }
+  return {
+    id,
+    rule: rule.id,
+    severity: draft.severity,
+    scenario: state.id,
+    net: net?.id ?? null,
+    pins: draft.pins,
+    parts: draft.parts,
+    message,
+    messageId: draft.messageId,
+    values: draft.values,
+    hint: draft.hint ?? rule.meta.hint,
+    ...(waived === undefined ? {} : { waived }),
+  };
+}
+
+const ruleOrder = new Map<string, number>(RULE_IDS.map((id, k) => [id, k]));
+
+/** Code-point order of two strings (JS `<` compares UTF-16 units). */
+export function compareCodePoints(a: string, b: string): number {
+  const ia = a[Symbol.iterator]();
+  const ib = b[Symbol.iterator]();
+  for (;;) {
+    const x = ia.next();
+    const y = ib.next();
+    if (x.done) return y.done ? 0 : -1;
+    if (y.done) return 1;
+    const d = x.value.codePointAt(0)! - y.value.codePointAt(0)!;
+    if (d !== 0) return d;
+  }
+}
+
+/**
+ * The report's order: power state (`all-on` first, then the file's order), net in the file's
+ * order (findings with no net last), rule in the catalogue's order, then id by code point.
+ */
+export function sortFindings(
+  findings: Finding[],
+  stateOrder: ReadonlyMap<string, number>,
+  netOrder: ReadonlyMap<string, number>,
+): Finding[] {
+  const netRank = (f: Finding) => (f.net === null ? Number.MAX_SAFE_INTEGER : (netOrder.get(f.net) ?? Number.MAX_SAFE_INTEGER - 1));
+  return findings.sort(
+    (a, b) =>
+      (stateOrder.get(a.scenario) ?? 0) - (stateOrder.get(b.scenario) ?? 0) ||
+      netRank(a) - netRank(b) ||
+      (ruleOrder.get(a.rule) ?? 0) - (ruleOrder.get(b.rule) ?? 0) ||
+      compareCodePoints(a.id, b.id),
+  );
+}
+
+/** Unwaived findings by severity, and the waived ones. */
+export function summarize(findings: readonly Finding[]): Summary {
+  let error = 0;
+  let warning = 0;
+  let info = 0;
+  let waived = 0;
+  for (const f of findings) {
+    if (f.waived !== undefined) waived++;
+    else if (f.severity === 'error') error++;
+    else if (f.severity === 'warning') warning++;
+    else info++;
+  }
+  return { error, warning, info, waived };
+}

@@ -1,0 +1,180 @@
+/**
+ * The electrical arithmetic shared by the engine and the rules: pull-resistor Thévenin
+ * equivalents, load currents on a driver, and the worst-corner search.
+ */
+import type { Corner, Range } from '../levels/rails.ts';
+import { corners } from '../levels/rails.ts';
+import { levelAt } from '../levels/level.ts';
+import { largestTestCurrent, sortedPoints } from '../levels/output.ts';
+import type { DriverLoad, PinView, PullSource, RailStates } from './types.ts';
+import { GROUND } from './powerStates.ts';
+
+/** The voltage at a pull's far end in a corner (0 V for ground or an off rail). */
+export function pullEndVoltage(pull: PullSource, corner: Corner): number {
+  if (pull.to === GROUND) return 0;
+  return corner.get(pull.to) ?? 0;
+}
+
+/** The rails a set of pulls goes to (ground excluded). */
+export function pullRails(pulls: readonly PullSource[]): string[] {
+  const out: string[] = [];
+  for (const p of pulls) if (p.to !== GROUND && !out.includes(p.to)) out.push(p.to);
+  return out;
+}
+
+export interface Thevenin {
+  /** Ω */
+  readonly r: number;
+  /** V */
+  readonly v: number;
+}
+
+/** `R = 1/Σ(1/Rk)`, `Vpull = R × Σ(Vk/Rk)`, each Vk at the corner. Undefined without pulls. */
+export function thevenin(pulls: readonly PullSource[], corner: Corner): Thevenin | undefined {
+  if (pulls.length === 0) return undefined;
+  let g = 0;
+  let i = 0;
+  for (const p of pulls) {
+    g += 1 / p.ohms;
+    i += pullEndVoltage(p, corner) / p.ohms;
+  }
+  const r = 1 / g;
+  return { r, v: r * i };
+}
+
+/** The parallel resistance of the pulls, Ω (undefined without pulls). */
+export function parallelResistance(pulls: readonly PullSource[]): number | undefined {
+  if (pulls.length === 0) return undefined;
+  let g = 0;
+  for (const p of pulls) g += 1 / p.ohms;
+  return 1 / g;
+}
+
+function rangeOf(rails: RailStates, rail: string): Range {
+  return rails.ranges.get(rail) ?? { min: 0, max: 0 };
+}
+
+/** Lowest and highest voltage a pull's far end can take in this power state. */
+function pullEndRange(pull: PullSource, rails: RailStates): Range {
+  return pull.to === GROUND ? { min: 0, max: 0 } : rangeOf(rails, pull.to);
+}
+
+/**
+ * Load currents on a driver (rules-catalogue.md, "Load currents on a driver"): bounds taken at
+ * the rails' ends, not per corner.
+ */
+export function driverLoad(
+  driver: PinView,
+  pins: readonly PinView[],
+  pulls: readonly PullSource[],
+  rails: RailStates,
+): DriverLoad {
+  let high = 0;
+  let low = 0;
+  for (const p of pins) {
+    if (p === driver) continue;
+    high += p.params.iih ?? 0;
+    low += p.params.iil ?? 0;
+  }
+  const own = rangeOf(rails, driver.rail);
+  const volPoints = driver.params.vol;
+  let volAtTop = 0;
+  if (volPoints !== undefined && volPoints.length > 0) {
+    const sorted = sortedPoints(volPoints);
+    volAtTop = levelAt(sorted[sorted.length - 1]!.v, own.max);
+  }
+  for (const pull of pulls) {
+    const end = pullEndRange(pull, rails);
+    // A pull whose end can sit below the driver's rail draws current from a high output.
+    const below = pull.to === GROUND || rails.off.has(pull.to) || end.min < own.max;
+    if (below && pull.to !== driver.rail) high += (own.max - end.min) / pull.ohms;
+    // A pull to a powered rail feeds current into a low output.
+    if (pull.to !== GROUND && !rails.off.has(pull.to)) low += (end.max - volAtTop) / pull.ohms;
+  }
+  return { high, low };
+}
+
+/**
+ * The worst of a function over every corner of the given rails: the corner whose score is
+ * lowest (for a margin) is kept. Returns undefined when `score` gives undefined everywhere.
+ */
+export function worstCorner<T extends { score: number }>(
+  railIds: Iterable<string>,
+  rails: RailStates,
+  evaluate: (corner: Corner) => T | undefined,
+): T | undefined {
+  let worst: T | undefined;
+  for (const c of corners(railIds, rails.ranges)) {
+    const r = evaluate(c);
+    if (r !== undefined && (worst === undefined || r.score < worst.score)) worst = r;
+  }
+  return worst;
+}
+
+export { largestTestCurrent };
+
+/** Something that can put a voltage on a net: a powered driver's rail, or a pull's rail. */
+export interface NetSource {
+  /** The driver's pin key, or the pull's origin (`net` or the pin key). */
+  readonly from: string;
+  readonly kind: 'driver' | 'pull';
+  readonly rail: string;
+}
+
+/**
+ * The sources other than `pin` itself that can put a voltage on the net: every powered driver's
+ * rail (open-drain drivers excepted: they only pull low) and every pull resistor's rail, the
+ * pin's own internal pull included (rules-catalogue.md, `overvoltage`, `back-power`).
+ */
+export function netSources(
+  pin: PinView,
+  drivers: readonly PinView[],
+  pulls: readonly PullSource[],
+): NetSource[] {
+  const out: NetSource[] = [];
+  for (const d of drivers) {
+    if (d.key === pin.key || d.drive === 'open-drain') continue;
+    out.push({ from: d.key, kind: 'driver', rail: d.rail });
+  }
+  for (const p of pulls) {
+    if (p.to === GROUND) continue;
+    out.push({ from: p.origin, kind: 'pull', rail: p.to });
+  }
+  return out;
+}
+
+export interface Exposure {
+  /** The highest voltage on the net at the worst corner, V. */
+  readonly vNet: number;
+  /** The pin's limit at that corner, V. */
+  readonly limit: number;
+  readonly source: NetSource;
+  /** The corner's supply of the pin's rail (0 for an off rail). */
+  readonly pinVdd: number;
+}
+
+/**
+ * The worst exposure of a pin to the net's sources: over every source and every corner of the
+ * source's rail and the pin's rail (shared when they are the same rail), the largest excess of
+ * the source's voltage over `limit(pinVdd)`.
+ */
+export function worstExposure(
+  pin: PinView,
+  sources: readonly NetSource[],
+  rails: RailStates,
+  limit: (pinVdd: number) => number,
+): Exposure | undefined {
+  let worst: (Exposure & { excess: number }) | undefined;
+  for (const source of sources) {
+    for (const c of corners([source.rail, pin.rail], rails.ranges)) {
+      const vNet = c.get(source.rail) ?? 0;
+      const pinVdd = c.get(pin.rail) ?? 0;
+      const lim = limit(pinVdd);
+      const excess = vNet - lim;
+      if (worst === undefined || excess > worst.excess) worst = { vNet, limit: lim, source, pinVdd, excess };
+    }
+  }
+  if (worst === undefined) return undefined;
+  const { excess: _excess, ...exposure } = worst;
+  return exposure;
+}

@@ -1,0 +1,72 @@
+/**
+ * Preparing a net once per power state: its pins resolved, drivers and receivers by kind, pulls,
+ * capacitance, load currents and the level analysis. Every rule reads this one view.
+ */
+import type { Design, Net, Part, Pin } from '../model/schema.ts';
+import { analyseNet } from './analyse.ts';
+import { driverLoad } from './netMath.ts';
+import { GROUND } from './powerStates.ts';
+import { resolvePin } from './resolve.ts';
+import type { DriverLoad, EffectiveSettings, NetView, PinView, PowerState, PullSource, RailStates } from './types.ts';
+
+/** Where each `PART.PIN` of the design lives. */
+export type PinIndex = ReadonlyMap<string, { readonly part: Part; readonly pin: Pin }>;
+
+/** The pin index of a design. */
+export function indexPins(design: Design): PinIndex {
+  const index = new Map<string, { part: Part; pin: Pin }>();
+  for (const part of design.parts) {
+    for (const pin of part.pins) index.set(`${part.id}.${pin.id}`, { part, pin });
+  }
+  return index;
+}
+
+/** A pin in a power state: powered unless its rail is off (or unknown to the design). */
+export function pinView(design: Design, part: Part, pin: Pin, rails: RailStates): PinView {
+  const r = resolvePin(design, part, pin);
+  const powered = !rails.off.has(r.rail) && rails.ranges.has(r.rail);
+  return { ...r, powered };
+}
+
+export interface PrepareContext {
+  readonly design: Design;
+  readonly state: PowerState;
+  readonly rails: RailStates;
+  readonly settings: EffectiveSettings;
+  readonly pinIndex: PinIndex;
+}
+
+/** The prepared view of one net in one power state. */
+export function prepareNet(ctx: PrepareContext, net: Net, netIndex: number): NetView {
+  const { design, rails, settings } = ctx;
+  const pins: PinView[] = [];
+  for (const key of net.pins) {
+    const at = ctx.pinIndex.get(key);
+    if (at !== undefined) pins.push(pinView(design, at.part, at.pin, rails));
+  }
+  const drivers = pins.filter((p) => p.powered && p.role !== 'input');
+  const receivers = pins.filter((p) => p.powered && p.role !== 'output');
+  const unpowered = pins.filter((p) => !p.powered);
+
+  const pulls: PullSource[] = [];
+  if (net.pull !== undefined) pulls.push({ ohms: net.pull.ohms, to: net.pull.to, origin: 'net' });
+  for (const p of pins) if (p.pull !== undefined) pulls.push({ ohms: p.pull.ohms, to: p.pull.to, origin: p.key });
+
+  let capacitance = net.wiringCapacitance ?? settings.defaultWiringCapacitance;
+  for (const p of pins) capacitance += p.params.cin ?? 0;
+
+  const highFromPull =
+    drivers.length > 0 && drivers.every((d) => d.drive === 'open-drain') && pulls.some((p) => p.to !== GROUND);
+
+  const loads = new Map<string, DriverLoad>();
+  for (const d of drivers) loads.set(d.key, driverLoad(d, pins, pulls, rails));
+
+  const pinRails: string[] = [];
+  for (const p of pins) if (!pinRails.includes(p.rail)) pinRails.push(p.rail);
+
+  const analysis = analyseNet({ pins, drivers, receivers, pulls, highFromPull, loads, rails, settings });
+  return {
+    net, netIndex, state: ctx.state, settings, rails, pins, drivers, receivers, unpowered, pulls,
+    capacitance, highFromPull, loads, pinRails, analysis,
+  };
+}

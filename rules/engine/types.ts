@@ -1,0 +1,190 @@
+/**
+ * The engine's prepared views and results. Everything here lives outside the design document:
+ * the document stays plain (architecture.md, "The engine's contract").
+ */
+import type { Design, Net, Params, Part, Pin, PinDrive, PinRole, Profile, Pull, Scenario, Waiver } from '../model/schema.ts';
+import type { RuleId } from '../model/ruleIds.ts';
+import type { Range } from '../levels/rails.ts';
+
+export type Severity = 'error' | 'warning' | 'info';
+
+/** Where an effective parameter came from. */
+export type ParamOrigin = 'pin' | 'part' | 'profile';
+
+/** A pin with every parameter resolved key by key (pin params, then part params, then profile). */
+export interface ResolvedPin {
+  /** `PART.PIN` */
+  readonly key: string;
+  readonly part: Part;
+  readonly pin: Pin;
+  readonly role: PinRole;
+  /** Effective drive for outputs and bidir pins; undefined for inputs. */
+  readonly drive: PinDrive | undefined;
+  readonly rail: string;
+  readonly profileId: string;
+  readonly profile: Profile | undefined;
+  readonly params: Params;
+  readonly origin: Readonly<Partial<Record<keyof Params, ParamOrigin>>>;
+  readonly pull: Pull | undefined;
+}
+
+/** A power state: `all-on`, or a scenario of the design. */
+export interface PowerState {
+  readonly id: string;
+  readonly label: string;
+  readonly off: ReadonlySet<string>;
+  readonly scenario: Scenario | undefined;
+}
+
+/** A pin in a power state. */
+export interface PinView extends ResolvedPin {
+  readonly powered: boolean;
+}
+
+/** A pull resistor of a net: the net's own, or a pin's internal one. */
+export interface PullSource {
+  readonly ohms: number;
+  /** Rail id, or `ground`. */
+  readonly to: string;
+  /** `net` for the net's own pull, else the pin key `PART.PIN` whose internal pull it is. */
+  readonly origin: string;
+}
+
+/** Rail ranges in one power state (an off rail is 0 V). */
+export interface RailStates {
+  readonly ranges: ReadonlyMap<string, Range>;
+  /** The ranges with every rail on, for limits stated "at the rail's lowest voltage". */
+  readonly onRanges: ReadonlyMap<string, Range>;
+  readonly off: ReadonlySet<string>;
+}
+
+/** Settings with defaults applied. */
+export interface EffectiveSettings {
+  readonly minMargin: number;
+  readonly defaultWiringCapacitance: number;
+}
+
+/** One net prepared once per power state: what every net rule receives. */
+export interface NetView {
+  readonly net: Net;
+  readonly netIndex: number;
+  readonly state: PowerState;
+  readonly settings: EffectiveSettings;
+  readonly rails: RailStates;
+  /** Every pin on the net, powered or not, in the net's order. */
+  readonly pins: readonly PinView[];
+  /** Powered outputs and bidir pins. */
+  readonly drivers: readonly PinView[];
+  /** Powered inputs and bidir pins. */
+  readonly receivers: readonly PinView[];
+  /** Pins on an off rail. */
+  readonly unpowered: readonly PinView[];
+  readonly pulls: readonly PullSource[];
+  /** Σ cin of the net's pins + wiring capacitance, F. */
+  readonly capacitance: number;
+  /** Every powered driver is open-drain, there is one, and a pull goes to a rail. */
+  readonly highFromPull: boolean;
+  /** Load currents on each powered driver (bounds, A), by pin key. */
+  readonly loads: ReadonlyMap<string, DriverLoad>;
+  /** Distinct rails of the net's pins (pull rails excluded), in order of first appearance. */
+  readonly pinRails: readonly string[];
+  /** The level analysis of every driver/receiver pair. */
+  readonly analysis: NetAnalysis;
+}
+
+export interface DriverLoad {
+  readonly high: number;
+  readonly low: number;
+}
+
+/** What a power state offers the rules that look beyond single nets. */
+export interface StateView {
+  readonly design: Design;
+  readonly state: PowerState;
+  readonly settings: EffectiveSettings;
+  readonly rails: RailStates;
+  /** Pins that are on no net. */
+  readonly unconnected: readonly PinView[];
+  /** Every pin of the design, resolved, in part order. */
+  readonly allPins: readonly PinView[];
+}
+
+export type PairStatus = 'pass' | 'warning' | 'fail';
+
+/** One side (high or low) of a driver/receiver pair at its worst corner. */
+export interface LevelSide {
+  /** VOH (high) or VOL (low), V. */
+  readonly out: number;
+  /** VIH (high) or VIL (low), V. */
+  readonly threshold: number;
+  /** NMH = VOH − VIH, or NML = VIL − VOL. */
+  readonly margin: number;
+  readonly driverVdd: number | null;
+  readonly receiverVdd: number;
+  /** Thévenin voltage of the pulls at the corner, when the high level comes from the pull-up. */
+  readonly vpull?: number;
+  readonly estimate: boolean;
+  readonly status: PairStatus;
+  /** The load current the level was selected for, A. */
+  readonly load: number;
+}
+
+export interface PairAnalysis {
+  readonly driver: string;
+  readonly receiver: string;
+  readonly high: LevelSide | null;
+  readonly low: LevelSide | null;
+}
+
+export interface NetAnalysis {
+  readonly pairs: readonly PairAnalysis[];
+  /** Worst NMH / NML over the pairs, null when no pair has that side. */
+  readonly worstHigh: number | null;
+  readonly worstLow: number | null;
+}
+
+/** A finding (report-format.md, "Finding"); `messageId` names the rule's message. */
+export interface Finding {
+  readonly id: string;
+  readonly rule: RuleId;
+  readonly severity: Severity;
+  readonly scenario: string;
+  readonly net: string | null;
+  readonly pins: readonly string[];
+  readonly parts: readonly string[];
+  readonly message: string;
+  readonly messageId: string;
+  readonly values: Readonly<Record<string, unknown>>;
+  readonly hint: string;
+  readonly waived?: string;
+}
+
+/** Results of one net in one power state. */
+export interface NetResult {
+  readonly net: Net;
+  readonly view: NetView;
+  readonly findings: readonly Finding[];
+}
+
+export interface Summary {
+  readonly error: number;
+  readonly warning: number;
+  readonly info: number;
+  readonly waived: number;
+}
+
+export interface CheckResult {
+  /** The design this result belongs to (the incremental check compares against it). */
+  readonly design: Design;
+  readonly states: readonly PowerState[];
+  /** Per power state id, per net id. */
+  readonly nets: ReadonlyMap<string, ReadonlyMap<string, NetResult>>;
+  /** Findings with no net (rail-range, pins on no net), per power state id. */
+  readonly stateFindings: ReadonlyMap<string, readonly Finding[]>;
+  /** Every finding, in the report's order. */
+  readonly findings: readonly Finding[];
+  readonly summary: Summary;
+  readonly stats: { readonly netsChecked: number; readonly ms: number };
+}
+
+export type { Waiver };

@@ -1,0 +1,52 @@
+/**
+ * Rail ranges and the corner enumeration of rules-catalogue.md: a check that involves several
+ * rails is evaluated at every combination of their ends, each distinct rail at its min or its
+ * max and shared by every pin on it, so that two pins on one rail are never judged at
+ * different supply voltages.
+ */
+import type { Rail } from '../model/schema.ts';
+import { DEFAULT_TOLERANCE } from '../model/schema.ts';
+
+export interface Range {
+  readonly min: number;
+  readonly max: number;
+}
+
+/** The rail's resolved range: nominal × (1 ± tolerance), an explicit `min`/`max` winning for its end. */
+export function railRange(rail: Rail): Range {
+  const tolerance = rail.tolerance ?? DEFAULT_TOLERANCE;
+  return {
+    min: rail.min ?? rail.nominal * (1 - tolerance),
+    max: rail.max ?? rail.nominal * (1 + tolerance),
+  };
+}
+
+/** One combination of rail ends: the supply voltage of each rail involved. */
+export type Corner = ReadonlyMap<string, number>;
+
+/**
+ * Every combination of the ends of the given rails (duplicates are taken once). A rail whose
+ * range is a single value (an off rail at 0 V, or min = max) contributes one value.
+ * `ranges` maps a rail id to its range in the power state being checked.
+ */
+export function corners(railIds: Iterable<string>, ranges: ReadonlyMap<string, Range>): Corner[] {
+  let result: Map<string, number>[] = [new Map()];
+  const seen = new Set<string>();
+  for (const id of railIds) {
+    if (seen.has(id)) continue;
+    seen.add(id);
+    const r = ranges.get(id);
+    if (r === undefined) continue;
+    const ends = r.min === r.max ? [r.min] : [r.min, r.max];
+    const next: Map<string, number>[] = [];
+    for (const c of result) {
+      for (const v of ends) {
+        const m = new Map(c);
+        m.set(id, v);
+        next.push(m);
+      }
+    }
+    result = next;
+  }
+  return result;
+}

@@ -1,0 +1,30 @@
+/**
+ * The built-in profile ids of design file version 1 (design-format.md). The library may add
+ * ids, never rename these: designs name them. The reader accepts a part's or a pin's
+ * `profile` when it is one of these or a design-local profile's id.
+ */
+export const BUILTIN_PROFILE_IDS = [
+  'ttl',
+  '74ls',
+  '74ls-oc',
+  '74hc',
+  '74hct',
+  '74ac',
+  '74act',
+  '74ahc',
+  '74ahct',
+  '74lvc',
+  'lvttl33',
+  'lvcmos33',
+  'lvcmos25',
+  'lvcmos18',
+  'lvcmos15',
+  'lvcmos12',
+  'cmos4000',
+  'i2c',
+  'i2c-lv',
+  'mcu-gpio',
+  'off-board',
+] as const satisfies readonly string[];
+
+export type BuiltinProfileId = (typeof BUILTIN_PROFILE_IDS)[number];

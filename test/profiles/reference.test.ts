@@ -1,0 +1,282 @@
+/**
+ * The built-in profiles against the published values they stand for. Each table names its
+ * source; values are transcribed here (tests never read the shared reference at run time).
+ * "restated" = the standard's value as printed in the DC tables of parts that claim it.
+ */
+import { describe, expect, it } from 'vitest';
+import type { OutputPoint, Profile } from '../../rules/model/schema.ts';
+import { levelAt, type Level } from '../../rules/levels/level.ts';
+import { builtinProfile } from '../../rules/profiles/index.ts';
+
+const TOL = 1e-9;
+const µA = 1e-6;
+const mA = 1e-3;
+
+function profile(id: string): Profile {
+  const p = builtinProfile(id);
+  if (!p) throw new Error(`no built-in profile ${id}`);
+  return p;
+}
+
+function input(id: string, key: 'vih' | 'vil', vdd: number): number {
+  const level: Level | undefined = profile(id).params[key];
+  if (level === undefined) throw new Error(`${id} has no ${key}`);
+  return levelAt(level, vdd);
+}
+
+/** The profile's guaranteed output level at exactly this test current. */
+function output(id: string, key: 'voh' | 'vol', current: number, vdd: number): number {
+  const rows: OutputPoint[] = profile(id).params[key] ?? [];
+  const row = rows.find((r) => Math.abs(r.i - current) <= 1e-12 * current);
+  if (!row) throw new Error(`${id} has no ${key} row at ${current} A`);
+  return levelAt(row.v, vdd);
+}
+
+/** Never optimistic: VIH may only be higher than the table, VIL only lower. */
+function expectConservative(key: 'vih' | 'vil', line: number, table: number): void {
+  if (key === 'vih') expect(line).toBeGreaterThanOrEqual(table - TOL);
+  else expect(line).toBeLessThanOrEqual(table + TOL);
+}
+
+describe('74HC input thresholds: JESD7, as restated in parts\' DC tables', () => {
+  // [VDD, key, table value, exact?]: exact at 2 V and 6 V, never optimistic at 4.5 V.
+  it.each([
+    [2, 'vih', 1.5, true],
+    [2, 'vil', 0.5, true],
+    [4.5, 'vih', 3.15, false],
+    [4.5, 'vil', 1.35, false],
+    [6, 'vih', 4.2, true],
+    [6, 'vil', 1.8, true],
+    [5.5, 'vih', 3.85, false],
+  ] as const)('at %s V %s vs %s V (exact: %s)', (vdd, key, table, exact) => {
+    const line = input('74hc', key, vdd);
+    expectConservative(key, line, table);
+    if (exact) expect(Math.abs(line - table)).toBeLessThanOrEqual(TOL);
+  });
+
+  // builtin-profiles.md / logic-families.md: the line's own values, to the hundredth as quoted there.
+  it.each([
+    [4.5, 'vih', 3.19],
+    [4.5, 'vil', 1.31],
+    [5.5, 'vih', 3.86],
+  ] as const)('the line gives %s V %s ≈ %s V', (vdd, key, quoted) => {
+    expect(input('74hc', key, vdd)).toBeCloseTo(quoted, 2);
+  });
+});
+
+describe('74HC/HCT outputs: JESD7, as restated in parts\' DC tables', () => {
+  // 4 mA rows at 4.5 V, −40…85 °C: VOH 3.84 V, VOL 0.33 V; 20 µA rows VDD−0.1 / 0.1 V.
+  it.each([
+    ['74hc', 'voh', 4 * mA, 4.5, 3.84],
+    ['74hc', 'vol', 4 * mA, 4.5, 0.33],
+    ['74hct', 'voh', 4 * mA, 4.5, 3.84],
+    ['74hct', 'vol', 4 * mA, 4.5, 0.33],
+    ['74hc', 'voh', 20 * µA, 4.5, 4.4],
+    ['74hc', 'voh', 20 * µA, 6, 5.9],
+    ['74hc', 'vol', 20 * µA, 6, 0.1],
+  ] as const)('%s %s @ %s A at %s V = %s V', (id, key, current, vdd, table) => {
+    expect(Math.abs(output(id, key, current, vdd) - table)).toBeLessThanOrEqual(TOL);
+  });
+
+  it.each([
+    ['vih', 2],
+    ['vil', 0.8],
+  ] as const)('74HCT %s is the fixed %s V at 4.5, 5 and 5.5 V', (key, table) => {
+    for (const vdd of [4.5, 5, 5.5]) expect(Math.abs(input('74hct', key, vdd) - table)).toBeLessThanOrEqual(TOL);
+  });
+});
+
+describe('4000B thresholds: JESD13, as restated', () => {
+  // exact at 5 V and 15 V, conservative at 10 V
+  it.each([
+    [5, 'vih', 3.5, true],
+    [5, 'vil', 1.5, true],
+    [10, 'vih', 7.0, false],
+    [10, 'vil', 3.0, false],
+    [15, 'vih', 11.0, true],
+    [15, 'vil', 4.0, true],
+  ] as const)('at %s V %s vs %s V (exact: %s)', (vdd, key, table, exact) => {
+    const line = input('cmos4000', key, vdd);
+    expectConservative(key, line, table);
+    if (exact) expect(Math.abs(line - table)).toBeLessThanOrEqual(TOL);
+  });
+
+  // JESD13 restated: 4.6 V / 0.4 V @ 0.36 mA at 5 V (85 °C)
+  it.each([
+    ['voh', 4.6],
+    ['vol', 0.4],
+  ] as const)('%s @ 0.36 mA at 5 V = %s V', (key, table) => {
+    expect(Math.abs(output('cmos4000', key, 360 * µA, 5) - table)).toBeLessThanOrEqual(TOL);
+  });
+});
+
+describe('3.3 V LVTTL / LVCMOS: JESD8C, as restated in parts\' DC tables', () => {
+  const supplies = [3.0, 3.3, 3.6];
+  // [id, key, current (outputs) or null (inputs), expected level as a function of VDD]
+  const cases: [string, 'vih' | 'vil' | 'voh' | 'vol', number | null, (vdd: number) => number][] = [
+    ['lvttl33', 'vih', null, () => 2.0],
+    ['lvttl33', 'vil', null, () => 0.8],
+    ['lvttl33', 'voh', 2 * mA, () => 2.4], // current from memory
+    ['lvttl33', 'vol', 2 * mA, () => 0.4], // current from memory
+    ['lvcmos33', 'vih', null, () => 2.0], // from memory
+    ['lvcmos33', 'vil', null, () => 0.8],
+    ['lvcmos33', 'voh', 100 * µA, (vdd) => vdd - 0.2],
+    ['lvcmos33', 'vol', 100 * µA, () => 0.2],
+    ['74lvc', 'vih', null, () => 2.0], // 74LVC restated
+    ['74lvc', 'vil', null, () => 0.8], // 74LVC restated
+  ];
+  it.each(cases)('%s %s', (id, key, current, expected) => {
+    for (const vdd of supplies) {
+      const got = key === 'vih' || key === 'vil' ? input(id, key, vdd) : output(id, key, current!, vdd);
+      expect(Math.abs(got - expected(vdd))).toBeLessThanOrEqual(TOL);
+    }
+  });
+});
+
+describe('74LVC 12 mA rows, as restated in parts\' DC tables', () => {
+  // VOH 2.2 V @ 12 mA at 2.7 V, 2.4 V at 3.0 V; VOL 0.4 V @ 12 mA at 2.7 V
+  it.each([
+    ['voh', 2.7, 2.2, false],
+    ['voh', 3.0, 2.4, true],
+    ['vol', 2.7, 0.4, true],
+  ] as const)('%s at %s V vs %s V (exact: %s)', (key, vdd, table, exact) => {
+    const got = output('74lvc', key, 12 * mA, vdd);
+    if (key === 'voh') expect(got).toBeLessThanOrEqual(table + TOL);
+    else expect(got).toBeGreaterThanOrEqual(table - TOL);
+    if (exact) expect(Math.abs(got - table)).toBeLessThanOrEqual(TOL);
+  });
+});
+
+describe('1.8 V LVCMOS: JESD8-7, as restated', () => {
+  it.each([1.65, 1.8, 1.95])('at %s V: VIH 0.65·VDD, VIL 0.35·VDD, VOH VDD−0.45 and VOL 0.45 @ 2 mA', (vdd) => {
+    expect(Math.abs(input('lvcmos18', 'vih', vdd) - 0.65 * vdd)).toBeLessThanOrEqual(TOL);
+    expect(Math.abs(input('lvcmos18', 'vil', vdd) - 0.35 * vdd)).toBeLessThanOrEqual(TOL);
+    expect(Math.abs(output('lvcmos18', 'voh', 2 * mA, vdd) - (vdd - 0.45))).toBeLessThanOrEqual(TOL);
+    expect(Math.abs(output('lvcmos18', 'vol', 2 * mA, vdd) - 0.45)).toBeLessThanOrEqual(TOL);
+  });
+});
+
+describe('2.5 V LVCMOS: JESD8-5', () => {
+  it.each([
+    ['voh', 1 * mA, 2.0], // restated
+    ['vol', 1 * mA, 0.4], // restated
+    ['vih', null, 1.7], // from memory
+    ['vil', null, 0.7], // from memory
+  ] as const)('%s = %s V at 2.3, 2.5 and 2.7 V', (key, current, table) => {
+    for (const vdd of [2.3, 2.5, 2.7]) {
+      const got = key === 'vih' || key === 'vil' ? input('lvcmos25', key, vdd) : output('lvcmos25', key, current!, vdd);
+      expect(Math.abs(got - table)).toBeLessThanOrEqual(TOL);
+    }
+  });
+});
+
+describe('two-wire bus: I2C-bus specification', () => {
+  it.each([
+    ['i2c', 2.5],
+    ['i2c', 3.3],
+    ['i2c', 5.0],
+    ['i2c-lv', 1.65],
+    ['i2c-lv', 1.8],
+    ['i2c-lv', 2.0],
+  ])('%s at %s V: VIH 0.7·VDD, VIL 0.3·VDD (std)', (id, vdd) => {
+    expect(Math.abs(input(id, 'vih', vdd) - 0.7 * vdd)).toBeLessThanOrEqual(TOL);
+    expect(Math.abs(input(id, 'vil', vdd) - 0.3 * vdd)).toBeLessThanOrEqual(TOL);
+  });
+
+  it.each([
+    ['i2c', 2.5, 0.4], // VDD > 2 V: 0.4 V @ 3 mA (current std, level restated)
+    ['i2c', 3.3, 0.4],
+    ['i2c', 5.0, 0.4],
+    ['i2c-lv', 1.65, 0.2 * 1.65], // VDD ≤ 2 V: 0.2·VDD @ 3 mA (restated)
+    ['i2c-lv', 1.8, 0.2 * 1.8],
+    ['i2c-lv', 2.0, 0.2 * 2.0],
+  ])('%s at %s V: VOL %s V @ 3 mA', (id, vdd, table) => {
+    expect(Math.abs(output(id, 'vol', 3 * mA, vdd) - table)).toBeLessThanOrEqual(TOL);
+  });
+
+  it.each(['i2c', 'i2c-lv'])('%s: ±10 µA and 10 pF (restated), open-drain (no VOH)', (id) => {
+    const p = profile(id).params;
+    expect(p.iih).toBeCloseTo(10 * µA, 12);
+    expect(p.iil).toBeCloseTo(10 * µA, 12);
+    expect(p.cin).toBeCloseTo(10e-12, 18);
+    expect(p.voh).toBeUndefined();
+  });
+
+  it('the low-supply profile starts where the other ends (VDD ≤ 2 V vs VDD > 2 V)', () => {
+    expect(profile('i2c-lv').params.vddRange?.[1]).toBe(2);
+    expect(profile('i2c').params.vddRange?.[0]).toBe(2);
+  });
+});
+
+describe('bipolar TTL, 5 V ± 5 %: handbook tables', () => {
+  it.each([
+    ['ttl', 'voh', 0.4 * mA, 2.4],
+    ['ttl', 'vol', 16 * mA, 0.4],
+    ['74ls', 'voh', 0.4 * mA, 2.7],
+    ['74ls', 'vol', 8 * mA, 0.5],
+    ['74ls', 'vol', 4 * mA, 0.4],
+    ['74ls-oc', 'vol', 8 * mA, 0.5],
+  ] as const)('%s %s @ %s A = %s V', (id, key, current, table) => {
+    for (const vdd of [4.75, 5, 5.25]) {
+      expect(Math.abs(output(id, key, current, vdd) - table)).toBeLessThanOrEqual(TOL);
+    }
+  });
+
+  it.each([
+    ['ttl', 'iih', 40 * µA],
+    ['ttl', 'iil', 1.6 * mA],
+    ['74ls', 'iih', 20 * µA],
+    ['74ls', 'iil', 0.4 * mA],
+    ['74ls-oc', 'iih', 0.1 * mA], // off-state leakage ≤ 0.1 mA at 5.5 V
+  ] as const)('%s %s = %s A', (id, key, table) => {
+    const got = profile(id).params[key];
+    expect(got).toBeDefined();
+    expect(Math.abs(got! - table)).toBeLessThanOrEqual(1e-12);
+  });
+
+  it.each([
+    ['ttl', 'vih', 2.0],
+    ['ttl', 'vil', 0.8],
+    ['74ls', 'vih', 2.0],
+    ['74ls', 'vil', 0.8],
+  ] as const)('%s %s = %s V', (id, key, table) => {
+    expect(Math.abs(input(id, key, 5) - table)).toBeLessThanOrEqual(TOL);
+  });
+
+  // handbook: fan-out within the family, 10 for standard 74 and 20 for 74LS, on both the low
+  // side (IOL / IIL) and the high side (IOH / IIH) of the profile's own numbers
+  it.each([
+    ['ttl', 16 * mA, 0.4 * mA, 10],
+    ['74ls', 8 * mA, 0.4 * mA, 20],
+  ] as const)('%s fans out to %s', (id, iol, ioh, fanOut) => {
+    const p = profile(id).params;
+    const low = Math.floor(iol / p.iil! + 1e-9);
+    const high = Math.floor(ioh / p.iih! + 1e-9);
+    expect(Math.min(low, high)).toBe(fanOut);
+    expect(p.vol?.some((r) => Math.abs(r.i - iol) <= 1e-12)).toBe(true);
+    expect(p.voh?.some((r) => Math.abs(r.i - ioh) <= 1e-12)).toBe(true);
+  });
+});
+
+describe('5 V levels as the trade quotes them (common practice)', () => {
+  it('TTL noise margin is 0.4 V on both sides, from the ttl profile\'s own numbers', () => {
+    const vdd = 5;
+    const high = output('ttl', 'voh', 0.4 * mA, vdd) - input('ttl', 'vih', vdd);
+    const low = input('ttl', 'vil', vdd) - output('ttl', 'vol', 16 * mA, vdd);
+    expect(Math.abs(high - 0.4)).toBeLessThanOrEqual(TOL);
+    expect(Math.abs(low - 0.4)).toBeLessThanOrEqual(TOL);
+  });
+
+  // common practice: CMOS driving TTL passes; TTL driving 5 V CMOS fails high (2.4 V < VIH).
+  // [driver, its VOH/VOL test currents, receiver, high side passes, low side passes]
+  it.each([
+    ['74hc', 4 * mA, 4 * mA, 'ttl', true, true],
+    ['ttl', 0.4 * mA, 16 * mA, '74hc', false, true],
+    ['ttl', 0.4 * mA, 16 * mA, 'cmos4000', false, true],
+    ['ttl', 0.4 * mA, 16 * mA, '74hct', true, true], // HCT inputs exist for this case (JESD7, VIH 2.0 V)
+  ] as const)('%s (@ %s A high, %s A low) driving %s at 5 V: high passes %s, low passes %s', (driver, ioh, iol, receiver, high, low) => {
+    const vdd = 5;
+    expect(output(driver, 'voh', ioh, vdd) - input(receiver, 'vih', vdd) >= 0).toBe(high);
+    expect(input(receiver, 'vil', vdd) - output(driver, 'vol', iol, vdd) >= 0).toBe(low);
+  });
+});

@@ -1,0 +1,106 @@
+/**
+ * A strict table tester for rules (house-style.md): every case named, no duplicate names,
+ * every invalid case expects at least one finding, every message of the rule is used by some
+ * case, and the designs are deep-frozen so that a rule that mutates its input fails.
+ * Each case's design must also be a valid design file.
+ */
+import { describe, expect, it } from 'vitest';
+import type { AnyRule } from '../../rules/checks/defineRule.ts';
+import type { Design } from '../../rules/model/schema.ts';
+import type { Finding, Severity } from '../../rules/engine/types.ts';
+import { check } from '../../rules/engine/check.ts';
+import { validateDesign } from '../../rules/model/reader.ts';
+
+export interface ValidCase {
+  name: string;
+  design: Design;
+}
+
+export interface ExpectedFinding {
+  messageId: string;
+  severity: Severity;
+  scenario?: string;
+  net?: string | null;
+  id?: string;
+  pins?: string[];
+  /** Compared key by key; numbers within 1e-9 absolute. */
+  values?: Record<string, unknown>;
+  waived?: string;
+}
+
+export interface InvalidCase {
+  name: string;
+  design: Design;
+  findings: ExpectedFinding[];
+}
+
+export function deepFreeze<T>(value: T): T {
+  if (value !== null && typeof value === 'object' && !Object.isFrozen(value)) {
+    Object.freeze(value);
+    for (const v of Object.values(value)) deepFreeze(v);
+  }
+  return value;
+}
+
+function expectValue(actual: unknown, expected: unknown, path: string): void {
+  if (typeof expected === 'number' && typeof actual === 'number') {
+    expect(Math.abs(actual - expected), `${path}: ${actual} vs ${expected}`).toBeLessThanOrEqual(1e-9);
+  } else if (Array.isArray(expected)) {
+    expect(Array.isArray(actual), path).toBe(true);
+    expect((actual as unknown[]).length, path).toBe(expected.length);
+    expected.forEach((e, k) => expectValue((actual as unknown[])[k], e, `${path}[${k}]`));
+  } else {
+    expect(actual, path).toEqual(expected);
+  }
+}
+
+/** Runs only `rule` on the design and returns its findings in the report's order. */
+export function findingsOf(rule: AnyRule, design: Design): readonly Finding[] {
+  return check(design, undefined, [rule]).findings;
+}
+
+export function ruleTester(rule: AnyRule, table: { valid: ValidCase[]; invalid: InvalidCase[] }): void {
+  describe(`rule ${rule.id}`, () => {
+    it('has a well-formed table', () => {
+      const names = [...table.valid, ...table.invalid].map((c) => c.name);
+      for (const n of names) expect(n.trim(), 'every case is named').not.toBe('');
+      expect(new Set(names).size, `duplicate case names in ${names.join(' | ')}`).toBe(names.length);
+      for (const c of table.invalid) expect(c.findings.length, `${c.name} expects no finding`).toBeGreaterThan(0);
+      const used = new Set(table.invalid.flatMap((c) => c.findings.map((f) => f.messageId)));
+      for (const id of Object.keys(rule.meta.messages)) expect(used.has(id), `message ${id} is used by no case`).toBe(true);
+    });
+
+    for (const c of table.valid) {
+      it(`valid: ${c.name}`, () => {
+        const d = deepFreeze(c.design);
+        const read = validateDesign(d);
+        expect(read.ok ? [] : read.errors, 'the case is a valid design').toEqual([]);
+        const found = findingsOf(rule, d);
+        expect(found.map((f) => `${f.id}: ${f.message}`)).toEqual([]);
+      });
+    }
+
+    for (const c of table.invalid) {
+      it(`invalid: ${c.name}`, () => {
+        const d = deepFreeze(c.design);
+        const read = validateDesign(d);
+        expect(read.ok ? [] : read.errors, 'the case is a valid design').toEqual([]);
+        const found = findingsOf(rule, d);
+        expect(found.length, found.map((f) => `${f.id}: ${f.message}`).join('\n')).toBe(c.findings.length);
+        c.findings.forEach((e, k) => {
+          const f = found[k]!;
+          expect(f.rule).toBe(rule.id);
+          expect(f.messageId, f.message).toBe(e.messageId);
+          expect(f.severity, f.message).toBe(e.severity);
+          expect(f.message.length).toBeGreaterThan(0);
+          if (e.scenario !== undefined) expect(f.scenario).toBe(e.scenario);
+          if (e.net !== undefined) expect(f.net).toBe(e.net);
+          if (e.id !== undefined) expect(f.id).toBe(e.id);
+          if (e.pins !== undefined) expect(f.pins).toEqual(e.pins);
+          if (e.waived !== undefined) expect(f.waived).toBe(e.waived);
+          for (const [key, v] of Object.entries(e.values ?? {})) expectValue(f.values[key], v, `${f.id} values.${key}`);
+        });
+      });
+    }
+  });
+}
