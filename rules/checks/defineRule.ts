@@ -4,7 +4,7 @@
  * (ids, power state, net, waivers, order).
  */
 import type { RuleId } from '../model/ruleIds.ts';
-import type { NetView, Severity, StateView } from '../engine/types.ts';
+import type { LonePinView, NetView, RailView, Severity } from '../engine/types.ts';
 
 // eslint-style message functions: each takes the data a finding carries and writes one sentence.
 // eslint-disable-next-line @typescript-eslint/no-explicit-any
@@ -45,12 +45,12 @@ export type Reporter<M extends MessageFns> = (draft: Draft<M>) => void;
 export interface Rule<M extends MessageFns = MessageFns> {
   readonly id: RuleId;
   readonly meta: RuleMeta<M>;
-  /** Runs once, in `all-on` only (rail-range). */
-  readonly once?: boolean;
   /** Judges one prepared net in one power state. */
   readonly checkNet?: (net: NetView, report: Reporter<M>) => void;
-  /** Judges what lies beyond single nets (rails, pins on no net) in one power state. */
-  readonly checkState?: (state: StateView, report: Reporter<M>) => void;
+  /** Judges a pin that is on no net, in one power state. */
+  readonly checkPin?: (pin: LonePinView, report: Reporter<M>) => void;
+  /** Judges a rail and the pins on it, once (in `all-on`). */
+  readonly checkRail?: (rail: RailView, report: Reporter<M>) => void;
 }
 
 /** Declares a rule; the identity function, there for the types. */

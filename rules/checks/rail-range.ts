@@ -20,7 +20,6 @@ interface Data {
 
 export default defineRule({
   id: 'rail-range',
-  once: true,
   meta: {
     title: 'Rails stay inside the families\' supply ranges',
     severity: 'warning',
@@ -37,38 +36,35 @@ export default defineRule({
         `over which ${d.profile} holds (${d.count} pin${d.count === 1 ? '' : 's'}).`,
     },
   },
-  checkState(state, report) {
-    for (const rail of state.design.rails) {
-      const range = state.rails.onRanges.get(rail.id);
-      if (range === undefined) continue;
-      const byProfile = new Map<string, PinView[]>();
-      for (const pin of state.allPins) {
-        if (pin.rail !== rail.id || pin.params.vddRange === undefined) continue;
-        const list = byProfile.get(pin.profileId);
-        if (list === undefined) byProfile.set(pin.profileId, [pin]);
-        else list.push(pin);
+  checkRail(view, report) {
+    const { rail, range } = view;
+    const byProfile = new Map<string, PinView[]>();
+    for (const pin of view.pins) {
+      if (pin.params.vddRange === undefined) continue;
+      const list = byProfile.get(pin.profileId);
+      if (list === undefined) byProfile.set(pin.profileId, [pin]);
+      else list.push(pin);
+    }
+    for (const [profile, pins] of byProfile) {
+      let profileMin = -Infinity;
+      let profileMax = Infinity;
+      for (const p of pins) {
+        const [lo, hi] = p.params.vddRange!;
+        profileMin = Math.max(profileMin, lo);
+        profileMax = Math.min(profileMax, hi);
       }
-      for (const [profile, pins] of byProfile) {
-        let profileMin = -Infinity;
-        let profileMax = Infinity;
-        for (const p of pins) {
-          const [lo, hi] = p.params.vddRange!;
-          profileMin = Math.max(profileMin, lo);
-          profileMax = Math.min(profileMax, hi);
-        }
-        if (!below(range.min, profileMin) && !exceeds(range.max, profileMax)) continue;
-        const keys = pins.map((p) => p.key);
-        report({
-          messageId: 'outside',
-          data: { rail: rail.id, profile, railMin: range.min, railMax: range.max, profileMin, profileMax, count: keys.length },
-          severity: 'warning',
-          pins: keys,
-          parts: partsOf(...keys),
-          subject: rail.id,
-          suffix: profile,
-          values: { rail: rail.id, railMin: range.min, railMax: range.max, profileMin, profileMax, profile },
-        });
-      }
+      if (!below(range.min, profileMin) && !exceeds(range.max, profileMax)) continue;
+      const keys = pins.map((p) => p.key);
+      report({
+        messageId: 'outside',
+        data: { rail: rail.id, profile, railMin: range.min, railMax: range.max, profileMin, profileMax, count: keys.length },
+        severity: 'warning',
+        pins: keys,
+        parts: partsOf(...keys),
+        subject: rail.id,
+        suffix: profile,
+        values: { rail: rail.id, railMin: range.min, railMax: range.max, profileMin, profileMax, profile },
+      });
     }
   },
 });

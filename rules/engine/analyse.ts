@@ -101,7 +101,7 @@ export function analyseNet(input: AnalysisInput): NetAnalysis {
   let worstLow: number | null = null;
   for (const driver of input.drivers) {
     for (const receiver of input.receivers) {
-      if (driver.part.id === receiver.part.id) continue;
+      if (driver.partId === receiver.partId) continue;
       const high = highSide(input, driver, receiver, sumIih);
       const low = lowSide(input, driver, receiver);
       if (high === null && low === null) continue;

@@ -7,6 +7,7 @@ import { analyseNet } from './analyse.ts';
 import { driverLoad } from './netMath.ts';
 import { GROUND } from './powerStates.ts';
 import { resolvePin } from './resolve.ts';
+import type { Range } from '../levels/rails.ts';
 import type { DriverLoad, EffectiveSettings, NetView, PinView, PowerState, PullSource, RailStates } from './types.ts';
 
 /** Where each `PART.PIN` of the design lives. */
@@ -37,12 +38,12 @@ export interface PrepareContext {
 }
 
 /** The prepared view of one net in one power state. */
-export function prepareNet(ctx: PrepareContext, net: Net, netIndex: number): NetView {
-  const { design, rails, settings } = ctx;
+export function prepareNet(ctx: PrepareContext, net: Net): NetView {
+  const { design, settings } = ctx;
   const pins: PinView[] = [];
   for (const key of net.pins) {
     const at = ctx.pinIndex.get(key);
-    if (at !== undefined) pins.push(pinView(design, at.part, at.pin, rails));
+    if (at !== undefined) pins.push(pinView(design, at.part, at.pin, ctx.rails));
   }
   const drivers = pins.filter((p) => p.powered && p.role !== 'input');
   const receivers = pins.filter((p) => p.powered && p.role !== 'output');
@@ -58,6 +59,7 @@ export function prepareNet(ctx: PrepareContext, net: Net, netIndex: number): Net
   const highFromPull =
     drivers.length > 0 && drivers.every((d) => d.drive === 'open-drain') && pulls.some((p) => p.to !== GROUND);
 
+  const rails = netRails(ctx.rails, pins, pulls);
   const loads = new Map<string, DriverLoad>();
   for (const d of drivers) loads.set(d.key, driverLoad(d, pins, pulls, rails));
 
@@ -66,7 +68,28 @@ export function prepareNet(ctx: PrepareContext, net: Net, netIndex: number): Net
 
   const analysis = analyseNet({ pins, drivers, receivers, pulls, highFromPull, loads, rails, settings });
   return {
-    net, netIndex, state: ctx.state, settings, rails, pins, drivers, receivers, unpowered, pulls,
+    net, state: ctx.state, settings, rails, pins, drivers, receivers, unpowered, pulls,
     capacitance, highFromPull, loads, pinRails, analysis,
   };
+}
+
+/**
+ * The rail states a net depends on: its pins' rails and its pulls' rails, nothing else, so that
+ * a net's view changes only when something it depends on changes.
+ */
+function netRails(all: RailStates, pins: readonly PinView[], pulls: readonly PullSource[]): RailStates {
+  const ranges = new Map<string, Range>();
+  const onRanges = new Map<string, Range>();
+  const off = new Set<string>();
+  const take = (id: string) => {
+    if (ranges.has(id)) return;
+    const r = all.ranges.get(id);
+    if (r === undefined) return;
+    ranges.set(id, r);
+    onRanges.set(id, all.onRanges.get(id)!);
+    if (all.off.has(id)) off.add(id);
+  };
+  for (const p of pins) take(p.rail);
+  for (const p of pulls) if (p.to !== GROUND) take(p.to);
+  return { ranges, onRanges, off };
 }

@@ -30,19 +30,29 @@ export function lookupProfile(design: Design, id: string): Profile | undefined {
 }
 
 interface CacheEntry {
-  readonly part: Part;
+  readonly partId: string;
+  readonly partRail: string;
+  readonly partParams: Params | undefined;
   readonly profile: Profile | undefined;
   readonly resolved: ResolvedPin;
 }
 
 const cache = new WeakMap<Pin, CacheEntry>();
 
-/** The pin with its effective parameters. Cached while the pin, its part and its profile are unchanged. */
+/**
+ * The pin with its effective parameters. Cached while the pin, the part's id, rail and params and
+ * the profile are unchanged: a part that only moved keeps its pins' resolution.
+ */
 export function resolvePin(design: Design, part: Part, pin: Pin): ResolvedPin {
   const profileId = pin.profile ?? part.profile;
   const profile = lookupProfile(design, profileId);
   const hit = cache.get(pin);
-  if (hit !== undefined && hit.part === part && hit.profile === profile) return hit.resolved;
+  if (
+    hit !== undefined && hit.profile === profile && hit.partId === part.id && hit.partRail === part.rail &&
+    hit.partParams === part.params
+  ) {
+    return hit.resolved;
+  }
 
   const params: Record<string, unknown> = {};
   const origin: Partial<Record<keyof Params, ParamOrigin>> = {};
@@ -62,7 +72,7 @@ export function resolvePin(design: Design, part: Part, pin: Pin): ResolvedPin {
     pin.role === 'input' ? undefined : (pin.drive ?? (pin.role === 'bidir' ? 'three-state' : 'push-pull'));
   const resolved: ResolvedPin = {
     key: `${part.id}.${pin.id}`,
-    part,
+    partId: part.id,
     pin,
     role: pin.role,
     drive,
@@ -73,7 +83,7 @@ export function resolvePin(design: Design, part: Part, pin: Pin): ResolvedPin {
     origin,
     pull: pin.pull,
   };
-  cache.set(pin, { part, profile, resolved });
+  cache.set(pin, { partId: part.id, partRail: part.rail, partParams: part.params, profile, resolved });
   return resolved;
 }
 

@@ -2,7 +2,7 @@
  * The engine's prepared views and results. Everything here lives outside the design document:
  * the document stays plain (architecture.md, "The engine's contract").
  */
-import type { Design, Net, Params, Part, Pin, PinDrive, PinRole, Profile, Pull, Scenario, Waiver } from '../model/schema.ts';
+import type { Design, Net, Params, Pin, PinDrive, PinRole, Profile, Pull, Rail, Scenario, Waiver } from '../model/schema.ts';
 import type { RuleId } from '../model/ruleIds.ts';
 import type { Range } from '../levels/rails.ts';
 
@@ -15,7 +15,7 @@ export type ParamOrigin = 'pin' | 'part' | 'profile';
 export interface ResolvedPin {
   /** `PART.PIN` */
   readonly key: string;
-  readonly part: Part;
+  readonly partId: string;
   readonly pin: Pin;
   readonly role: PinRole;
   /** Effective drive for outputs and bidir pins; undefined for inputs. */
@@ -67,7 +67,6 @@ export interface EffectiveSettings {
 /** One net prepared once per power state: what every net rule receives. */
 export interface NetView {
   readonly net: Net;
-  readonly netIndex: number;
   readonly state: PowerState;
   readonly settings: EffectiveSettings;
   readonly rails: RailStates;
@@ -97,16 +96,23 @@ export interface DriverLoad {
   readonly low: number;
 }
 
-/** What a power state offers the rules that look beyond single nets. */
-export interface StateView {
-  readonly design: Design;
+/** A pin on no net, in one power state (`floating-input` judges unused inputs). */
+export interface LonePinView {
+  readonly pin: PinView;
   readonly state: PowerState;
   readonly settings: EffectiveSettings;
   readonly rails: RailStates;
-  /** Pins that are on no net. */
-  readonly unconnected: readonly PinView[];
-  /** Every pin of the design, resolved, in part order. */
-  readonly allPins: readonly PinView[];
+}
+
+/** A rail with every pin on it (`rail-range`, judged once, in `all-on`). */
+export interface RailView {
+  readonly rail: Rail;
+  /** The rail's range with every rail on. */
+  readonly range: Range;
+  /** Every pin whose effective rail this is, ordered by key (code point). */
+  readonly pins: readonly PinView[];
+  readonly state: PowerState;
+  readonly settings: EffectiveSettings;
 }
 
 export type PairStatus = 'pass' | 'warning' | 'fail';
@@ -179,12 +185,22 @@ export interface CheckResult {
   readonly states: readonly PowerState[];
   /** Per power state id, per net id. */
   readonly nets: ReadonlyMap<string, ReadonlyMap<string, NetResult>>;
-  /** Findings with no net (rail-range, pins on no net), per power state id. */
-  readonly stateFindings: ReadonlyMap<string, readonly Finding[]>;
-  /** Every finding, in the report's order. */
+  /** Findings on pins that are on no net, per power state id, per pin key. */
+  readonly lonePins: ReadonlyMap<string, ReadonlyMap<string, readonly Finding[]>>;
+  /** Findings on rails (judged once, in `all-on`), per rail id. */
+  readonly railFindings: ReadonlyMap<string, readonly Finding[]>;
+  /** Every finding, in the report's order (built when first read). */
   readonly findings: readonly Finding[];
   readonly summary: Summary;
-  readonly stats: { readonly netsChecked: number; readonly ms: number };
+  readonly stats: CheckStats;
+}
+
+export interface CheckStats {
+  /** Nets prepared and checked by this call, counted once per power state. */
+  readonly netsChecked: number;
+  /** Whether this call re-checked only what changed. */
+  readonly incremental: boolean;
+  readonly ms: number;
 }
 
 export type { Waiver };

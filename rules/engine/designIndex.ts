@@ -1,0 +1,122 @@
+/**
+ * The engine's indexes over a design: pin → location and net, rail → pins, profile → pins,
+ * rail → nets pulled to it. Built once by a full check, then updated by the difference, so that
+ * no step of an incremental check is quadratic in the design's size.
+ */
+import type { Net, Part, Pin } from '../model/schema.ts';
+import { GROUND } from './powerStates.ts';
+
+/** What the index remembers of a pin, to take it out again when the pin changes. */
+interface PinEntry {
+  readonly part: Part;
+  readonly pin: Pin;
+  readonly rail: string;
+  readonly profile: string;
+  readonly pullTo: string | undefined;
+}
+
+function addTo(map: Map<string, Set<string>>, key: string, value: string): void {
+  let set = map.get(key);
+  if (set === undefined) {
+    set = new Set();
+    map.set(key, set);
+  }
+  set.add(value);
+}
+
+function removeFrom(map: Map<string, Set<string>>, key: string, value: string): void {
+  const set = map.get(key);
+  if (set === undefined) return;
+  set.delete(value);
+  if (set.size === 0) map.delete(key);
+}
+
+export class DesignIndex {
+  /** `PART.PIN` → where it lives. */
+  readonly pins = new Map<string, PinEntry>();
+  /** Part id → part (the current object). */
+  readonly parts = new Map<string, Part>();
+  /** Net id → net (the current object). */
+  readonly nets = new Map<string, Net>();
+  /** `PART.PIN` → the id of the net it is on. */
+  readonly netOfPin = new Map<string, string>();
+  /** Rail id → keys of the pins whose effective rail it is. */
+  readonly pinsOfRail = new Map<string, Set<string>>();
+  /** Rail id → keys of the pins with an internal pull to it. */
+  readonly pullPinsOfRail = new Map<string, Set<string>>();
+  /** Profile id → keys of the pins that use it. */
+  readonly pinsOfProfile = new Map<string, Set<string>>();
+  /** Rail id → ids of the nets whose own pull goes to it. */
+  readonly netsPulledTo = new Map<string, Set<string>>();
+
+  /** An index of every part and net. */
+  static build(parts: readonly Part[], nets: readonly Net[]): DesignIndex {
+    const index = new DesignIndex();
+    for (const part of parts) index.addPart(part);
+    for (const net of nets) index.addNet(net);
+    return index;
+  }
+
+  addPart(part: Part): void {
+    this.parts.set(part.id, part);
+    for (const pin of part.pins) this.addPin(part, pin);
+  }
+
+  removePart(part: Part): void {
+    if (this.parts.get(part.id) === part) this.parts.delete(part.id);
+    for (const pin of part.pins) this.removePin(`${part.id}.${pin.id}`);
+  }
+
+  addPin(part: Part, pin: Pin): void {
+    const key = `${part.id}.${pin.id}`;
+    const entry: PinEntry = { part, pin, rail: pin.rail ?? part.rail, profile: pin.profile ?? part.profile, pullTo: pin.pull?.to };
+    this.pins.set(key, entry);
+    addTo(this.pinsOfRail, entry.rail, key);
+    addTo(this.pinsOfProfile, entry.profile, key);
+    if (entry.pullTo !== undefined && entry.pullTo !== GROUND) addTo(this.pullPinsOfRail, entry.pullTo, key);
+  }
+
+  removePin(key: string): void {
+    const entry = this.pins.get(key);
+    if (entry === undefined) return;
+    this.pins.delete(key);
+    removeFrom(this.pinsOfRail, entry.rail, key);
+    removeFrom(this.pinsOfProfile, entry.profile, key);
+    if (entry.pullTo !== undefined) removeFrom(this.pullPinsOfRail, entry.pullTo, key);
+  }
+
+  /** Points an unchanged pin at its part's new object (a part that moved or was relabelled). */
+  retargetPart(part: Part): void {
+    this.parts.set(part.id, part);
+    for (const pin of part.pins) {
+      const key = `${part.id}.${pin.id}`;
+      const entry = this.pins.get(key);
+      if (entry !== undefined) this.pins.set(key, { ...entry, part });
+    }
+  }
+
+  addNet(net: Net): void {
+    this.nets.set(net.id, net);
+    for (const key of net.pins) this.netOfPin.set(key, net.id);
+    if (net.pull !== undefined && net.pull.to !== GROUND) addTo(this.netsPulledTo, net.pull.to, net.id);
+  }
+
+  removeNet(net: Net): void {
+    if (this.nets.get(net.id) === net) this.nets.delete(net.id);
+    for (const key of net.pins) if (this.netOfPin.get(key) === net.id) this.netOfPin.delete(key);
+    if (net.pull !== undefined) removeFrom(this.netsPulledTo, net.pull.to, net.id);
+  }
+
+  /** Ids of the nets whose result depends on a rail: pins on it, pulls to it. */
+  netsTouchingRail(rail: string, into: Set<string>): void {
+    for (const key of this.pinsOfRail.get(rail) ?? []) {
+      const n = this.netOfPin.get(key);
+      if (n !== undefined) into.add(n);
+    }
+    for (const key of this.pullPinsOfRail.get(rail) ?? []) {
+      const n = this.netOfPin.get(key);
+      if (n !== undefined) into.add(n);
+    }
+    for (const n of this.netsPulledTo.get(rail) ?? []) into.add(n);
+  }
+}

@@ -1,0 +1,211 @@
+/**
+ * One seeded generator of synthetic designs and of edits to them, shared by the incremental
+ * property test and the benchmark (`npm run bench`). Values are invented; the families are
+ * the built-in library's.
+ *
+ * Edits go through immer's `produce`, as the editor's commands do, so that everything an edit
+ * did not touch keeps its identity: that sharing is what the incremental check relies on.
+ */
+import { produce } from 'immer';
+import type { Design, Net, Part, Pin, Rail } from '../../rules/model/schema.ts';
+
+/** mulberry32: a small, fast, seedable generator (public-domain algorithm). */
+export function rng(seed: number): () => number {
+  let a = seed >>> 0;
+  return () => {
+    a = (a + 0x6d2b79f5) >>> 0;
+    let t = a;
+    t = Math.imul(t ^ (t >>> 15), t | 1);
+    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+  };
+}
+
+export type Rand = () => number;
+const pick = <T>(r: Rand, xs: readonly T[]): T => xs[Math.floor(r() * xs.length)]!;
+const int = (r: Rand, lo: number, hi: number): number => lo + Math.floor(r() * (hi - lo + 1));
+
+const RAILS: Rail[] = [
+  { id: 'r5v0', label: '5 V', nominal: 5, tolerance: 0.05, colour: '#b45309' },
+  { id: 'r3v3', label: '3.3 V', nominal: 3.3, tolerance: 0.05, colour: '#0f766e' },
+  { id: 'r2v5', label: '2.5 V', nominal: 2.5, tolerance: 0.05, colour: '#1d4ed8' },
+  { id: 'r1v8', label: '1.8 V', nominal: 1.8, tolerance: 0.05, colour: '#7c3aed' },
+];
+
+/** Families that suit each rail; a sprinkling of parts take another rail's family (faults). */
+const FAMILIES: Record<string, readonly string[]> = {
+  r5v0: ['74hc', '74hct', '74ac', '74ahct', 'ttl', '74ls', 'cmos4000'],
+  r3v3: ['lvcmos33', 'lvttl33', '74lvc', 'mcu-gpio', 'i2c'],
+  r2v5: ['lvcmos25', 'mcu-gpio'],
+  r1v8: ['lvcmos18', 'i2c-lv', 'mcu-gpio'],
+};
+
+function makePin(r: Rand, id: string): Pin {
+  const roll = r();
+  if (roll < 0.45) return { id, role: 'input' };
+  if (roll < 0.8) return { id, role: 'output' };
+  if (roll < 0.9) return { id, role: 'output', drive: 'open-drain' };
+  return { id, role: 'bidir', drive: r() < 0.5 ? 'open-drain' : 'three-state' };
+}
+
+function makePart(r: Rand, n: number, rails: readonly Rail[], faultRate: number): Part {
+  const rail = pick(r, rails).id;
+  const families = r() < faultRate ? FAMILIES[pick(r, rails).id]! : FAMILIES[rail]!;
+  const pins: Pin[] = [];
+  const count = int(r, 2, 6);
+  for (let k = 0; k < count; k++) pins.push(makePin(r, `P${k + 1}`));
+  return {
+    id: `U${n}`,
+    label: `Block ${n}`,
+    rail,
+    profile: pick(r, families),
+    position: { x: (n % 50) * 220, y: Math.floor(n / 50) * 180 },
+    pins,
+  };
+}
+
+export interface GeneratorOptions {
+  parts: number;
+  /** Share of parts given a family of another rail (default 0.05). */
+  faultRate?: number;
+  /** Share of pins left on no net (default 0.1). */
+  loneRate?: number;
+}
+
+/** A synthetic design: about 4 pins a part, nets of 2–6 pins, 4 rails, 2 power states. */
+export function generateDesign(seed: number, options: GeneratorOptions): Design {
+  const r = rng(seed);
+  const faultRate = options.faultRate ?? 0.05;
+  const loneRate = options.loneRate ?? 0.1;
+  const parts: Part[] = [];
+  for (let n = 1; n <= options.parts; n++) parts.push(makePart(r, n, RAILS, faultRate));
+
+  // Shuffle the pins, then deal them into nets of 2–6, keeping every net to one driver type mix
+  // as it falls: contention and floating faults come from the deal itself.
+  const keys: { key: string; pin: Pin }[] = [];
+  for (const p of parts) for (const pin of p.pins) if (r() >= loneRate) keys.push({ key: `${p.id}.${pin.id}`, pin });
+  for (let k = keys.length - 1; k > 0; k--) {
+    const j = Math.floor(r() * (k + 1));
+    [keys[k], keys[j]] = [keys[j]!, keys[k]!];
+  }
+  const nets: Net[] = [];
+  let at = 0;
+  while (keys.length - at >= 2) {
+    const size = Math.min(int(r, 2, 6), keys.length - at);
+    const members = keys.slice(at, at + size);
+    at += size;
+    const net: Net = { id: `N${nets.length + 1}`, pins: members.map((m) => m.key) };
+    if (members.some((m) => m.pin.drive === 'open-drain') && r() < 0.9) {
+      net.pull = { to: pick(r, RAILS).id, ohms: pick(r, [1000, 2200, 4700, 10000, 47000]) };
+    }
+    if (r() < 0.1) net.maxRiseTime = pick(r, [1e-6, 300e-9, 50e-9]);
+    nets.push(net);
+  }
+  return {
+    format: 'railcross.design',
+    version: 1,
+    title: `Synthetic design, ${options.parts} parts, seed ${seed}`,
+    rails: RAILS.map((x) => ({ ...x })),
+    scenarios: [{ id: 'standby', label: 'Standby: 1.8 V rail off', off: ['r1v8'] }],
+    parts,
+    nets,
+  };
+}
+
+export const EDIT_KINDS = [
+  'add-part', 'remove-part', 'connect', 'disconnect', 'move-part', 'rail-voltage',
+  'switch-profile', 'add-waiver', 'rail-off', 'net-pull',
+] as const;
+export type EditKind = (typeof EDIT_KINDS)[number];
+
+/** Removes a pin from whatever net holds it (dropping a net left with fewer than two pins is not needed: one-pin nets are valid). */
+function unplug(d: Design, key: string): void {
+  for (const net of d.nets) {
+    const k = net.pins.indexOf(key);
+    if (k >= 0) {
+      net.pins.splice(k, 1);
+      if (net.route !== undefined) net.route = net.route.filter(([a, b]) => a !== key && b !== key);
+    }
+  }
+}
+
+let partSerial = 0;
+
+/** One edit of the given kind, chosen with `r`; returns a new design sharing what it left alone. */
+export function applyEdit(design: Design, kind: EditKind, r: Rand): Design {
+  return produce(design, (d) => {
+    switch (kind) {
+      case 'add-part': {
+        partSerial++;
+        const part = makePart(r, 100000 + partSerial, d.rails, 0.1);
+        part.id = `X${partSerial}_${Math.floor(r() * 1e6)}`;
+        if (d.parts.some((p) => p.id === part.id)) return;
+        d.parts.push(part);
+        if (d.nets.length > 0 && part.pins.length > 0) pick(r, d.nets).pins.push(`${part.id}.${part.pins[0]!.id}`);
+        return;
+      }
+      case 'remove-part': {
+        if (d.parts.length === 0) return;
+        const k = Math.floor(r() * d.parts.length);
+        const part = d.parts[k]!;
+        for (const pin of part.pins) unplug(d, `${part.id}.${pin.id}`);
+        d.parts.splice(k, 1);
+        return;
+      }
+      case 'connect': {
+        if (d.parts.length === 0 || d.nets.length === 0) return;
+        const part = pick(r, d.parts);
+        if (part.pins.length === 0) return;
+        const key = `${part.id}.${pick(r, part.pins).id}`;
+        unplug(d, key);
+        pick(r, d.nets).pins.push(key);
+        return;
+      }
+      case 'disconnect': {
+        const withPins = d.nets.filter((n) => n.pins.length > 0);
+        if (withPins.length === 0) return;
+        const net = pick(r, withPins);
+        unplug(d, pick(r, net.pins));
+        return;
+      }
+      case 'move-part': {
+        if (d.parts.length === 0) return;
+        const part = pick(r, d.parts);
+        part.position = { x: (part.position?.x ?? 0) + 10, y: (part.position?.y ?? 0) + 5 };
+        return;
+      }
+      case 'rail-voltage': {
+        const rail = pick(r, d.rails);
+        rail.nominal = Math.round(rail.nominal * (0.9 + r() * 0.2) * 100) / 100;
+        return;
+      }
+      case 'switch-profile': {
+        if (d.parts.length === 0) return;
+        const part = pick(r, d.parts);
+        part.profile = pick(r, FAMILIES[pick(r, d.rails).id] ?? ['mcu-gpio']);
+        return;
+      }
+      case 'add-waiver': {
+        if (d.nets.length === 0) return;
+        const net = pick(r, d.nets);
+        const rule = pick(r, ['level-high', 'level-low', 'overvoltage', 'contention', 'floating-input', 'rail-crossing'] as const);
+        net.waivers = [...(net.waivers ?? []), { rule, note: 'reviewed' }];
+        return;
+      }
+      case 'rail-off': {
+        const scenario = d.scenarios?.[0];
+        if (scenario === undefined) return;
+        const rail = pick(r, d.rails).id;
+        scenario.off = scenario.off.includes(rail) ? scenario.off.filter((x) => x !== rail) : [...scenario.off, rail];
+        return;
+      }
+      case 'net-pull': {
+        if (d.nets.length === 0) return;
+        const net = pick(r, d.nets);
+        if (net.pull === undefined) net.pull = { to: pick(r, d.rails).id, ohms: pick(r, [1000, 4700, 10000]) };
+        else delete net.pull;
+        return;
+      }
+    }
+  });
+}
