@@ -6,6 +6,13 @@ import type { AnyRule } from './defineRule.ts';
 import levelHigh from './level-high.ts';
 import levelLow from './level-low.ts';
 import overvoltage from './overvoltage.ts';
+import backPower from './back-power.ts';
+import driveLoad from './drive-load.ts';
+import edgeRate from './edge-rate.ts';
+import contention from './contention.ts';
+import floatingInput from './floating-input.ts';
+import missingPull from './missing-pull.ts';
+import pullRange from './pull-range.ts';
 import railRange from './rail-range.ts';
 import railCrossing from './rail-crossing.ts';
 
@@ -13,6 +20,13 @@ export const RULES: readonly AnyRule[] = [
   levelHigh,
   levelLow,
   overvoltage,
+  backPower,
+  driveLoad,
+  edgeRate,
+  contention,
+  floatingInput,
+  missingPull,
+  pullRange,
   railRange,
   railCrossing,
 ];

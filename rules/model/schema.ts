@@ -9,6 +9,7 @@
 import { z } from 'zod';
 import { parseLevel } from '../levels/level.ts';
 import { RULE_IDS } from './ruleIds.ts';
+import { describeValue } from './schemaIssues.ts';
 
 // zod would otherwise compile validators with `new Function`, which a strict CSP forbids.
 z.config({ jitless: true });
@@ -31,23 +32,47 @@ const id = (kind: string, allowDot: boolean) =>
     })
     .refine((s) => allowDot || !s.includes('.'), { message: `expected a ${kind} id without "."` });
 
-export const LevelSchema = z.union([
-  z.number(),
-  z.string().superRefine((s, ctx) => {
-    const r = parseLevel(s);
-    if (!r.ok) {
-      ctx.addIssue({
-        code: 'custom',
-        message: `expected a Level such as "2.0", "0.7*VDD" or "VDD-0.45": ${r.error} at character ${r.at + 1} of "${s}"`,
-      });
-    }
-  }),
-]).describe('Volts, or a linear expression of the pin\'s supply VDD, e.g. "0.7*VDD", "VDD-0.45"');
+const DECIMAL = '(?:[0-9]+(?:\\.[0-9]+)?|\\.[0-9]+)';
+const TIMES = ' *\\* *';
+const TERM = `-? *(?:${DECIMAL}(?:${TIMES}${DECIMAL})*(?:${TIMES}VDD(?:${TIMES}${DECIMAL})*)?|VDD(?:${TIMES}${DECIMAL})*)`;
+
+/**
+ * The Level grammar as a regular expression, for the published JSON Schema only (other tools
+ * can check Levels with it); the reader itself uses `parseLevel`, and a test holds the two
+ * together.
+ */
+export const LEVEL_PATTERN = `^ *${TERM}(?: *[-+] *${TERM})* *$`;
+
+export const LevelSchema = z
+  .union(
+    [
+      z.number(),
+      z
+        .string()
+        .superRefine((s, ctx) => {
+          const r = parseLevel(s);
+          if (!r.ok) {
+            ctx.addIssue({
+              code: 'custom',
+              message: `expected a Level such as "2.0", "0.7*VDD" or "VDD-0.45": ${r.error} at character ${r.at + 1} of "${s}"`,
+            });
+          }
+        })
+        .meta({ pattern: LEVEL_PATTERN }),
+    ],
+    {
+      error: (iss) =>
+        iss.input === undefined
+          ? 'missing: expected a Level, volts (a number) or a string such as "0.7*VDD"'
+          : `expected a Level: volts (a number) or a string such as "0.7*VDD", found ${describeValue(iss.input)}`,
+    },
+  )
+  .meta({ id: 'Level', description: 'Volts, or a linear expression of the pin\'s supply VDD, e.g. "0.7*VDD", "VDD-0.45"' });
 
 const OutputPointSchema = z.strictObject({
   v: LevelSchema,
   i: nonNegative('current (A)'),
-});
+}).meta({ id: 'OutputPoint', description: 'A guaranteed output level v (Level) at a load current i (A, magnitude)' });
 
 const VddRangeSchema = z
   .tuple([z.number(), z.number()])
@@ -68,25 +93,24 @@ export const ParamsSchema = z.strictObject({
   ioMax: nonNegative('current (A)').optional(),
   maxInputRamp: nonNegative('ramp (s/V)').optional(),
   vddRange: VddRangeSchema.optional(),
-});
+}).meta({ id: 'Params', description: 'Electrical parameters of a pin; each key is resolved on its own: pin params, part params, profile' });
 
 export const PullSchema = z.strictObject({
   to: z.string().min(1, { message: 'expected a rail id or "ground"' }),
   ohms: positive('resistance (Ω)'),
-});
+}).meta({ id: 'Pull', description: 'A pull resistor to a rail or to ground' });
 
 const PositionSchema = z.strictObject({ x: z.number(), y: z.number() });
 
-export const RailSchema = z
-  .strictObject({
-    id: id('rail', true),
-    label: z.string(),
-    nominal: z.number(),
-    tolerance: nonNegative('tolerance (fraction)').optional(),
-    min: z.number().optional(),
-    max: z.number().optional(),
-    colour: z.string().optional(),
-  });
+export const RailSchema = z.strictObject({
+  id: id('rail', true),
+  label: z.string(),
+  nominal: z.number(),
+  tolerance: nonNegative('tolerance (fraction)').optional(),
+  min: z.number().optional(),
+  max: z.number().optional(),
+  colour: z.string().optional(),
+}).meta({ id: 'Rail', description: 'A supply domain; range nominal × (1 ± tolerance), an explicit min or max wins for its end' });
 
 export const ScenarioSchema = z.strictObject({
   id: id('scenario', true).refine((s) => s !== 'all-on', {
@@ -94,14 +118,15 @@ export const ScenarioSchema = z.strictObject({
   }),
   label: z.string(),
   off: z.array(z.string()),
-});
+}).meta({ id: 'Scenario', description: 'A power state: the rails listed in off are at 0 V' });
 
 export const ProfileSchema = z.strictObject({
   id: id('profile', true),
   label: z.string(),
-  source: z.string().trim().min(1, { message: 'expected a non-empty source (where the numbers come from)' }),
+  // A refinement, not .trim(): the reader returns the document's own values, never altered ones.
+  source: z.string().refine((v) => v.trim() !== '', { message: 'expected a non-empty source (where the numbers come from)' }),
   params: ParamsSchema,
-});
+}).meta({ id: 'Profile', description: 'A design-local logic-family profile' });
 
 export const PinSchema = z.strictObject({
   id: id('pin', false),
@@ -112,7 +137,7 @@ export const PinSchema = z.strictObject({
   params: ParamsSchema.optional(),
   pull: PullSchema.optional(),
   side: z.enum(['left', 'right', 'top', 'bottom']).optional(),
-});
+}).meta({ id: 'Pin', description: 'A signal pin; nets name it PART.PIN' });
 
 export const PartSchema = z.strictObject({
   id: id('part', false),
@@ -122,13 +147,13 @@ export const PartSchema = z.strictObject({
   params: ParamsSchema.optional(),
   position: PositionSchema.optional(),
   pins: z.array(PinSchema),
-});
+}).meta({ id: 'Part', description: 'A chip or an off-board connector' });
 
 export const WaiverSchema = z.strictObject({
   rule: z.enum(RULE_IDS, { message: `expected a rule id: ${RULE_IDS.join(', ')}` }),
   scenario: z.string().optional(),
   note: z.string(),
-});
+}).meta({ id: 'Waiver', description: 'A finding the engineer has reviewed and accepted, with the reason' });
 
 export const NetSchema = z.strictObject({
   id: id('net', false),
@@ -139,7 +164,7 @@ export const NetSchema = z.strictObject({
   maxRiseTime: nonNegative('time (s)').optional(),
   waivers: z.array(WaiverSchema).optional(),
   route: z.array(z.tuple([z.string(), z.string()])).optional(),
-});
+}).meta({ id: 'Net', description: 'An electrical connection between pins' });
 
 export const SettingsSchema = z.strictObject({
   minMargin: z.number().optional(),

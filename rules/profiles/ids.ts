@@ -3,7 +3,7 @@
  * ids, never rename these: designs name them. The reader accepts a part's or a pin's
  * `profile` when it is one of these or a design-local profile's id.
  */
-export const BUILTIN_PROFILE_IDS = [
+export const BUILTIN_PROFILE_IDS = Object.freeze([
   'ttl',
   '74ls',
   '74ls-oc',
@@ -25,6 +25,6 @@ export const BUILTIN_PROFILE_IDS = [
   'i2c-lv',
   'mcu-gpio',
   'off-board',
-] as const satisfies readonly string[];
+] as const satisfies readonly string[]);
 
 export type BuiltinProfileId = (typeof BUILTIN_PROFILE_IDS)[number];

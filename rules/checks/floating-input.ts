@@ -1,0 +1,73 @@
+/**
+ * floating-input: a powered receiver that nothing holds at a level: a net with no powered driver
+ * and no pull, a net whose powered drivers are all three-state and has no pull, or an input pin
+ * on no net without an internal pull (rules-catalogue.md).
+ */
+import { defineRule } from './defineRule.ts';
+import { partsOf } from './keys.ts';
+
+interface NetData {
+  net: string;
+  pins: string[];
+  drivers: string[];
+}
+
+interface PinData {
+  pin: string;
+}
+
+const plural = (n: number, one: string, many: string) => (n === 1 ? one : many);
+
+export default defineRule({
+  id: 'floating-input',
+  meta: {
+    title: 'No input is left floating',
+    severity: 'error for a net with no powered driver and no pull; warning for three-state-only nets and unconnected inputs',
+    explanation:
+      'A CMOS input that nothing drives drifts to an undefined level, draws shoot-through current and ' +
+      'may oscillate. A net with a powered receiver needs a powered driver or a pull resistor; a net ' +
+      'whose only drivers are three-state floats whenever none is enabled, unless a pull holds it. Any ' +
+      'pull counts here, the net\'s own or one inside a pin, even to a rail that is off. An input pin on ' +
+      'no net, on a powered rail and without an internal pull, floats too.',
+    hint: 'Add a pull resistor to a defined level, or tie the unused input to ground or its rail.',
+    messages: {
+      noDriver: (d: NetData) =>
+        `Nothing drives ${d.net} and it has no pull resistor: ${d.pins.join(', ')} ${plural(d.pins.length, 'floats', 'float')}.`,
+      allThreeState: (d: NetData) =>
+        `${d.net} is driven only by ${plural(d.drivers.length, 'a three-state output', 'three-state outputs')} ` +
+        `(${d.drivers.join(', ')}) and has no pull resistor: ${d.pins.join(', ')} ${plural(d.pins.length, 'floats', 'float')} while none is enabled.`,
+      unusedInput: (d: PinData) => `${d.pin} is on no net and has no internal pull: the unused input floats.`,
+    },
+  },
+  checkNet(view, report) {
+    if (view.receivers.length === 0 || view.pulls.length > 0) return;
+    const allThreeState = view.drivers.length > 0 && view.drivers.every((d) => d.drive === 'three-state');
+    if (view.drivers.length > 0 && !allThreeState) return;
+    const pins = view.receivers.map((r) => r.key);
+    const drivers = view.drivers.map((d) => d.key);
+    report({
+      messageId: allThreeState ? 'allThreeState' : 'noDriver',
+      data: { net: view.net.label ?? view.net.id, pins, drivers },
+      severity: allThreeState ? 'warning' : 'error',
+      pins,
+      parts: partsOf(...pins),
+      ...(allThreeState
+        ? { hint: 'Add a pull resistor, or make sure one of the outputs is always enabled.' }
+        : {}),
+      values: { pins, ...(allThreeState ? { drivers } : {}) },
+    });
+  },
+  checkPin({ pin }, report) {
+    if (pin.role !== 'input' || !pin.powered || pin.pull !== undefined) return;
+    report({
+      messageId: 'unusedInput',
+      data: { pin: pin.key },
+      severity: 'warning',
+      pins: [pin.key],
+      parts: partsOf(pin.key),
+      subject: pin.key,
+      hint: 'Tie the unused input to ground or its rail, directly or through a resistor.',
+      values: { pins: [pin.key] },
+    });
+  },
+});
