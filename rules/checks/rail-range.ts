@@ -3,7 +3,7 @@
  * one finding per (rail, profile); runs once, in `all-on` (rules-catalogue.md).
  */
 import { below, exceeds } from '../levels/compare.ts';
-import type { PinView } from '../engine/types.ts';
+import { compareCodePoints } from '../engine/findings.ts';
 import { defineRule } from './defineRule.ts';
 import { volts } from './format.ts';
 import { partsOf } from './keys.ts';
@@ -37,34 +37,28 @@ export default defineRule({
     },
   },
   checkRail(view, report) {
-    const { rail, range } = view;
-    const byProfile = new Map<string, PinView[]>();
+    const { rail, range, profile } = view;
+    let profileMin = -Infinity;
+    let profileMax = Infinity;
+    const keys: string[] = [];
     for (const pin of view.pins) {
       if (pin.params.vddRange === undefined) continue;
-      const list = byProfile.get(pin.profileId);
-      if (list === undefined) byProfile.set(pin.profileId, [pin]);
-      else list.push(pin);
+      const [lo, hi] = pin.params.vddRange;
+      profileMin = Math.max(profileMin, lo);
+      profileMax = Math.min(profileMax, hi);
+      keys.push(pin.key);
     }
-    for (const [profile, pins] of byProfile) {
-      let profileMin = -Infinity;
-      let profileMax = Infinity;
-      for (const p of pins) {
-        const [lo, hi] = p.params.vddRange!;
-        profileMin = Math.max(profileMin, lo);
-        profileMax = Math.min(profileMax, hi);
-      }
-      if (!below(range.min, profileMin) && !exceeds(range.max, profileMax)) continue;
-      const keys = pins.map((p) => p.key);
-      report({
-        messageId: 'outside',
-        data: { rail: rail.id, profile, railMin: range.min, railMax: range.max, profileMin, profileMax, count: keys.length },
-        severity: 'warning',
-        pins: keys,
-        parts: partsOf(...keys),
-        subject: rail.id,
-        suffix: profile,
-        values: { rail: rail.id, railMin: range.min, railMax: range.max, profileMin, profileMax, profile },
-      });
-    }
+    if (keys.length === 0 || (!below(range.min, profileMin) && !exceeds(range.max, profileMax))) return;
+    keys.sort(compareCodePoints);
+    report({
+      messageId: 'outside',
+      data: { rail: rail.id, profile, railMin: range.min, railMax: range.max, profileMin, profileMax, count: keys.length },
+      severity: 'warning',
+      pins: keys,
+      parts: partsOf(...keys),
+      subject: rail.id,
+      suffix: profile,
+      values: { rail: rail.id, railMin: range.min, railMax: range.max, profileMin, profileMax, profile },
+    });
   },
 });

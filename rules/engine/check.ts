@@ -12,8 +12,8 @@ import { RULES } from '../checks/index.ts';
 import type { AnyRule } from '../checks/defineRule.ts';
 import { ALL_ON, effectiveSettings, powerStates, railStates } from './powerStates.ts';
 import { pinView, prepareNet, type PrepareContext } from './prepare.ts';
-import { compareCodePoints, completeFinding, sortFindings } from './findings.ts';
-import { DesignIndex } from './designIndex.ts';
+import { completeFinding, sortFindings } from './findings.ts';
+import { DesignIndex, groupKey, splitGroupKey } from './designIndex.ts';
 import type { CheckResult, CheckStats, Finding, NetResult, PinView, PowerState, RailStates, Summary } from './types.ts';
 
 // The engine runs in Node and the browser alike; both have a monotonic clock here.
@@ -75,17 +75,18 @@ function checkLonePin(ctx: StateContext, pin: PinView): Finding[] {
   return found;
 }
 
-function checkRail(ctx: StateContext, index: DesignIndex, rail: Rail): Finding[] {
+/** One (rail, profile) group, judged in `all-on`. */
+function checkGroup(ctx: StateContext, index: DesignIndex, rail: Rail, profile: string): Finding[] {
   const range = ctx.rails.onRanges.get(rail.id)!;
-  const keys = [...(index.pinsOfRail.get(rail.id) ?? [])].sort(compareCodePoints);
-  const pins = keys.map((k) => {
+  const pins: PinView[] = [];
+  for (const k of index.pinsOfGroup.get(groupKey(rail.id, profile)) ?? []) {
     const at = index.pins.get(k)!;
-    return pinView(ctx.design, at.part, at.pin, ctx.rails);
-  });
+    pins.push(pinView(ctx.design, at.part, at.pin, ctx.rails));
+  }
   const found: Finding[] = [];
   for (const rule of ctx.rules) {
     if (rule.checkRail === undefined) continue;
-    rule.checkRail({ rail, range, pins, state: ctx.state, settings: ctx.settings }, (draft) =>
+    rule.checkRail({ rail, range, profile, pins, state: ctx.state, settings: ctx.settings }, (draft) =>
       found.push(completeFinding(rule, draft, ctx.state, null)),
     );
   }
@@ -163,10 +164,12 @@ function fullCheck(design: Design, rules: readonly AnyRule[], started: number): 
     checkState(ctx, index, t);
     if (state.id === ALL_ON) {
       for (const rail of design.rails) {
-        const found = checkRail(ctx, index, rail);
-        if (found.length > 0) {
-          t.railFindings.set(rail.id, found);
-          count(t.summary, found, 1);
+        for (const group of index.groupsOfRail.get(rail.id) ?? []) {
+          const found = checkGroup(ctx, index, rail, splitGroupKey(group)[1]);
+          if (found.length > 0) {
+            t.railFindings.set(group, found);
+            count(t.summary, found, 1);
+          }
         }
       }
     }
@@ -180,7 +183,8 @@ function fullCheck(design: Design, rules: readonly AnyRule[], started: number): 
 interface Dirty {
   nets: Set<string>;
   pins: Set<string>;
-  rails: Set<string>;
+  /** (rail, profile) group keys. */
+  groups: Set<string>;
   states: Set<string>;
 }
 
@@ -219,7 +223,7 @@ function markPinsOf(part: Part, dirty: Dirty): void {
 function incrementalCheck(design: Design, prev: CheckResult, inner: Internals, started: number): CheckResult {
   const before = prev.design;
   const { index, rules } = inner;
-  const dirty: Dirty = { nets: new Set(), pins: new Set(), rails: new Set(), states: new Set() };
+  const dirty: Dirty = { nets: new Set(), pins: new Set(), groups: new Set(), states: new Set() };
 
   // Power states: a changed scenario is re-checked whole; states come back in the file's order.
   const states = before.scenarios === design.scenarios ? prev.states : powerStates(design);
@@ -236,7 +240,7 @@ function incrementalCheck(design: Design, prev: CheckResult, inner: Internals, s
   if (before.rails !== design.rails) for (const r of before.rails) oldRails.set(r.id, r);
   changedById(before.rails, design.rails, (id) => oldRails.get(id), (old, now) => {
     const id = (now ?? old)!.id;
-    dirty.rails.add(id);
+    for (const g of index.groupsOfRail.get(id) ?? []) dirty.groups.add(g);
     index.netsTouchingRail(id, dirty.nets);
     for (const key of index.pinsOfRail.get(id) ?? []) dirty.pins.add(key);
   });
@@ -275,13 +279,16 @@ function incrementalCheck(design: Design, prev: CheckResult, inner: Internals, s
     for (const key of now?.pins ?? []) dirty.pins.add(key);
   });
 
-  // A changed pin re-checks the net it was on, its rail's range, and itself if it is alone.
-  for (const key of dirty.pins) {
-    const n = index.netOfPin.get(key);
-    if (n !== undefined) dirty.nets.add(n);
-    const at = index.pins.get(key);
-    if (at !== undefined) dirty.rails.add(at.rail);
-  }
+  // A changed pin re-checks the net it was on, its (rail, profile) group, and itself if alone.
+  const touch = () => {
+    for (const key of dirty.pins) {
+      const n = index.netOfPin.get(key);
+      if (n !== undefined) dirty.nets.add(n);
+      const at = index.pins.get(key);
+      if (at !== undefined) dirty.groups.add(groupKey(at.rail, at.profile));
+    }
+  };
+  touch();
 
   // Bring the index up to date.
   for (const [old, now] of partChanges) {
@@ -293,12 +300,7 @@ function incrementalCheck(design: Design, prev: CheckResult, inner: Internals, s
   }
   for (const [old] of netChanges) if (old !== undefined) index.removeNet(old);
   for (const [, now] of netChanges) if (now !== undefined) index.addNet(now);
-  for (const key of dirty.pins) {
-    const n = index.netOfPin.get(key);
-    if (n !== undefined) dirty.nets.add(n);
-    const at = index.pins.get(key);
-    if (at !== undefined) dirty.rails.add(at.rail);
-  }
+  touch();
 
   // Re-check, taking over the previous result's tables.
   inner.consumed = true;
@@ -345,23 +347,18 @@ function incrementalCheck(design: Design, prev: CheckResult, inner: Internals, s
         if (found.length > 0) { lone.set(key, found); count(t.summary, found, 1); }
       }
     }
-    if (state.id === ALL_ON) {
+    if (state.id === ALL_ON && dirty.groups.size > 0) {
       const railById = new Map(design.rails.map((r) => [r.id, r]));
-      for (const id of dirty.rails) {
-        const old = t.railFindings.get(id);
-        if (old !== undefined) { count(t.summary, old, -1); t.railFindings.delete(id); }
-        const rail = railById.get(id);
-        if (rail === undefined) continue;
-        const found = checkRail(ctx, index, rail);
-        if (found.length > 0) { t.railFindings.set(id, found); count(t.summary, found, 1); }
+      for (const group of dirty.groups) {
+        const old = t.railFindings.get(group);
+        if (old !== undefined) { count(t.summary, old, -1); t.railFindings.delete(group); }
+        const [railId, profile] = splitGroupKey(group);
+        const rail = railById.get(railId);
+        if (rail === undefined || !index.pinsOfGroup.has(group)) continue;
+        const found = checkGroup(ctx, index, rail, profile);
+        if (found.length > 0) { t.railFindings.set(group, found); count(t.summary, found, 1); }
       }
     }
-  }
-  // Rail findings are listed in the rails' order; a Map keeps insertion order, so re-insert.
-  if (dirty.rails.size > 0) {
-    const ordered = new Map<string, readonly Finding[]>();
-    for (const r of design.rails) { const f = t.railFindings.get(r.id); if (f !== undefined) ordered.set(r.id, f); }
-    t.railFindings = ordered;
   }
   const result = makeResult(design, states, t, { netsChecked: t.netsChecked, incremental: true, ms: now() - started });
   internals.set(result, { index, rules, consumed: false });

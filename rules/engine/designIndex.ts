@@ -31,6 +31,17 @@ function removeFrom(map: Map<string, Set<string>>, key: string, value: string): 
   if (set.size === 0) map.delete(key);
 }
 
+/** The key of a (rail, profile) group: `rail-range` judges each group once. */
+export function groupKey(rail: string, profile: string): string {
+  return `${rail}\u0000${profile}`;
+}
+
+/** The rail and profile of a group key. */
+export function splitGroupKey(key: string): [string, string] {
+  const k = key.indexOf('\u0000');
+  return [key.slice(0, k), key.slice(k + 1)];
+}
+
 export class DesignIndex {
   /** `PART.PIN` → where it lives. */
   readonly pins = new Map<string, PinEntry>();
@@ -48,6 +59,10 @@ export class DesignIndex {
   readonly pinsOfProfile = new Map<string, Set<string>>();
   /** Rail id → ids of the nets whose own pull goes to it. */
   readonly netsPulledTo = new Map<string, Set<string>>();
+  /** (rail, profile) group key → keys of the pins on that rail using that profile. */
+  readonly pinsOfGroup = new Map<string, Set<string>>();
+  /** Rail id → the (rail, profile) group keys on it. */
+  readonly groupsOfRail = new Map<string, Set<string>>();
 
   /** An index of every part and net. */
   static build(parts: readonly Part[], nets: readonly Net[]): DesignIndex {
@@ -73,6 +88,9 @@ export class DesignIndex {
     this.pins.set(key, entry);
     addTo(this.pinsOfRail, entry.rail, key);
     addTo(this.pinsOfProfile, entry.profile, key);
+    const group = groupKey(entry.rail, entry.profile);
+    addTo(this.pinsOfGroup, group, key);
+    addTo(this.groupsOfRail, entry.rail, group);
     if (entry.pullTo !== undefined && entry.pullTo !== GROUND) addTo(this.pullPinsOfRail, entry.pullTo, key);
   }
 
@@ -82,6 +100,9 @@ export class DesignIndex {
     this.pins.delete(key);
     removeFrom(this.pinsOfRail, entry.rail, key);
     removeFrom(this.pinsOfProfile, entry.profile, key);
+    const group = groupKey(entry.rail, entry.profile);
+    removeFrom(this.pinsOfGroup, group, key);
+    if (!this.pinsOfGroup.has(group)) removeFrom(this.groupsOfRail, entry.rail, group);
     if (entry.pullTo !== undefined) removeFrom(this.pullPinsOfRail, entry.pullTo, key);
   }
 

@@ -6,7 +6,7 @@ import type { Design, Net, Part, Pin } from '../model/schema.ts';
 import { analyseNet } from './analyse.ts';
 import { driverLoad } from './netMath.ts';
 import { GROUND } from './powerStates.ts';
-import { resolvePin } from './resolve.ts';
+import { resolvedView } from './resolve.ts';
 import type { Range } from '../levels/rails.ts';
 import type { DriverLoad, EffectiveSettings, NetView, PinView, PowerState, PullSource, RailStates } from './types.ts';
 
@@ -24,9 +24,8 @@ export function indexPins(design: Design): PinIndex {
 
 /** A pin in a power state: powered unless its rail is off (or unknown to the design). */
 export function pinView(design: Design, part: Part, pin: Pin, rails: RailStates): PinView {
-  const r = resolvePin(design, part, pin);
-  const powered = !rails.off.has(r.rail) && rails.ranges.has(r.rail);
-  return { ...r, powered };
+  const rail = pin.rail ?? part.rail;
+  return resolvedView(design, part, pin, !rails.off.has(rail) && rails.ranges.has(rail));
 }
 
 export interface PrepareContext {
@@ -78,6 +77,27 @@ export function prepareNet(ctx: PrepareContext, net: Net): NetView {
  * a net's view changes only when something it depends on changes.
  */
 function netRails(all: RailStates, pins: readonly PinView[], pulls: readonly PullSource[]): RailStates {
+  // Nets on the same rails share one object: most nets of a board sit on one or two rails.
+  const ids: string[] = [];
+  for (const p of pins) if (!ids.includes(p.rail)) ids.push(p.rail);
+  for (const p of pulls) if (p.to !== GROUND && !ids.includes(p.to)) ids.push(p.to);
+  ids.sort();
+  const key = ids.join('\u0000');
+  let memo = netRailsMemo.get(all);
+  if (memo === undefined) {
+    memo = new Map();
+    netRailsMemo.set(all, memo);
+  }
+  const hit = memo.get(key);
+  if (hit !== undefined) return hit;
+  const made = restrictRails(all, ids);
+  memo.set(key, made);
+  return made;
+}
+
+const netRailsMemo = new WeakMap<RailStates, Map<string, RailStates>>();
+
+function restrictRails(all: RailStates, ids: readonly string[]): RailStates {
   const ranges = new Map<string, Range>();
   const onRanges = new Map<string, Range>();
   const off = new Set<string>();
@@ -89,7 +109,6 @@ function netRails(all: RailStates, pins: readonly PinView[], pulls: readonly Pul
     onRanges.set(id, all.onRanges.get(id)!);
     if (all.off.has(id)) off.add(id);
   };
-  for (const p of pins) take(p.rail);
-  for (const p of pulls) if (p.to !== GROUND) take(p.to);
+  for (const id of ids) take(id);
   return { ranges, onRanges, off };
 }

@@ -5,7 +5,7 @@
  */
 import type { Design, Params, Part, Pin, Profile } from '../model/schema.ts';
 import { builtinProfile } from '../profiles/index.ts';
-import type { ParamOrigin, ResolvedPin } from './types.ts';
+import type { ParamOrigin, PinView, ResolvedPin } from './types.ts';
 
 const PARAM_KEYS: readonly (keyof Params)[] = [
   'vih', 'vil', 'schmitt', 'iih', 'iil', 'cin', 'viMax', 'unpoweredSafe', 'viMaxOff',
@@ -30,6 +30,8 @@ export function lookupProfile(design: Design, id: string): Profile | undefined {
 }
 
 interface CacheEntry {
+  /** The resolved pin as seen powered [1] and unpowered [0], made once each. */
+  views: [PinView | undefined, PinView | undefined];
   readonly partId: string;
   readonly partRail: string;
   readonly partParams: Params | undefined;
@@ -44,6 +46,55 @@ const cache = new WeakMap<Pin, CacheEntry>();
  * the profile are unchanged: a part that only moved keeps its pins' resolution.
  */
 export function resolvePin(design: Design, part: Part, pin: Pin): ResolvedPin {
+  return entryOf(design, part, pin).resolved;
+}
+
+/** The pin in a power state, powered or not; the same object while nothing it depends on changes. */
+export function resolvedView(design: Design, part: Part, pin: Pin, powered: boolean): PinView {
+  const entry = entryOf(design, part, pin);
+  const k = powered ? 1 : 0;
+  let view = entry.views[k];
+  if (view === undefined) {
+    view = { ...entry.resolved, powered };
+    entry.views[k] = view;
+  }
+  return view;
+}
+
+const NO_PARAMS: Params = Object.freeze({});
+const NO_ORIGIN: Partial<Record<keyof Params, ParamOrigin>> = Object.freeze({});
+const profileOrigins = new WeakMap<Profile, Partial<Record<keyof Params, ParamOrigin>>>();
+
+function profileOrigin(profile: Profile): Partial<Record<keyof Params, ParamOrigin>> {
+  let origin = profileOrigins.get(profile);
+  if (origin === undefined) {
+    origin = {};
+    for (const key of PARAM_KEYS) if (profile.params[key] !== undefined) origin[key] = 'profile';
+    profileOrigins.set(profile, Object.freeze(origin));
+  }
+  return origin;
+}
+
+/** Each key from the first of pin, part and profile that has it; lists and objects whole. */
+function mergeParams(pin: Params | undefined, part: Params | undefined, profile: Params | undefined) {
+  const params: Record<string, unknown> = {};
+  const origin: Partial<Record<keyof Params, ParamOrigin>> = {};
+  for (const key of PARAM_KEYS) {
+    if (pin?.[key] !== undefined) {
+      params[key] = pin[key];
+      origin[key] = 'pin';
+    } else if (part?.[key] !== undefined) {
+      params[key] = part[key];
+      origin[key] = 'part';
+    } else if (profile?.[key] !== undefined) {
+      params[key] = profile[key];
+      origin[key] = 'profile';
+    }
+  }
+  return { params, origin };
+}
+
+function entryOf(design: Design, part: Part, pin: Pin): CacheEntry {
   const profileId = pin.profile ?? part.profile;
   const profile = lookupProfile(design, profileId);
   const hit = cache.get(pin);
@@ -51,22 +102,17 @@ export function resolvePin(design: Design, part: Part, pin: Pin): ResolvedPin {
     hit !== undefined && hit.profile === profile && hit.partId === part.id && hit.partRail === part.rail &&
     hit.partParams === part.params
   ) {
-    return hit.resolved;
+    return hit;
   }
 
-  const params: Record<string, unknown> = {};
-  const origin: Partial<Record<keyof Params, ParamOrigin>> = {};
-  for (const key of PARAM_KEYS) {
-    if (pin.params?.[key] !== undefined) {
-      params[key] = pin.params[key];
-      origin[key] = 'pin';
-    } else if (part.params?.[key] !== undefined) {
-      params[key] = part.params[key];
-      origin[key] = 'part';
-    } else if (profile?.params[key] !== undefined) {
-      params[key] = profile.params[key];
-      origin[key] = 'profile';
-    }
+  let params: Record<string, unknown>;
+  let origin: Partial<Record<keyof Params, ParamOrigin>>;
+  if (pin.params === undefined && part.params === undefined) {
+    // Most pins take their family's numbers as they are: share the profile's own objects.
+    params = (profile?.params ?? NO_PARAMS) as Record<string, unknown>;
+    origin = profile === undefined ? NO_ORIGIN : profileOrigin(profile);
+  } else {
+    ({ params, origin } = mergeParams(pin.params, part.params, profile?.params));
   }
   const drive =
     pin.role === 'input' ? undefined : (pin.drive ?? (pin.role === 'bidir' ? 'three-state' : 'push-pull'));
@@ -83,8 +129,9 @@ export function resolvePin(design: Design, part: Part, pin: Pin): ResolvedPin {
     origin,
     pull: pin.pull,
   };
-  cache.set(pin, { partId: part.id, partRail: part.rail, partParams: part.params, profile, resolved });
-  return resolved;
+  const entry: CacheEntry = { views: [undefined, undefined], partId: part.id, partRail: part.rail, partParams: part.params, profile, resolved };
+  cache.set(pin, entry);
+  return entry;
 }
 
 /** The VIH a receiver is judged by: `schmitt.vtPlus` for a Schmitt input, else `vih`. */

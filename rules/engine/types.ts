@@ -104,12 +104,13 @@ export interface LonePinView {
   readonly rails: RailStates;
 }
 
-/** A rail with every pin on it (`rail-range`, judged once, in `all-on`). */
+/** The pins on one rail that use one profile (`rail-range`, judged once, in `all-on`). */
 export interface RailView {
   readonly rail: Rail;
   /** The rail's range with every rail on. */
   readonly range: Range;
-  /** Every pin whose effective rail this is, ordered by key (code point). */
+  readonly profile: string;
+  /** Every pin whose effective rail and profile these are, in no particular order. */
   readonly pins: readonly PinView[];
   readonly state: PowerState;
   readonly settings: EffectiveSettings;
@@ -187,7 +188,7 @@ export interface CheckResult {
   readonly nets: ReadonlyMap<string, ReadonlyMap<string, NetResult>>;
   /** Findings on pins that are on no net, per power state id, per pin key. */
   readonly lonePins: ReadonlyMap<string, ReadonlyMap<string, readonly Finding[]>>;
-  /** Findings on rails (judged once, in `all-on`), per rail id. */
+  /** Findings on rails (judged once, in `all-on`), per (rail, profile) group. */
   readonly railFindings: ReadonlyMap<string, readonly Finding[]>;
   /** Every finding, in the report's order (built when first read). */
   readonly findings: readonly Finding[];

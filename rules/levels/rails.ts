@@ -30,6 +30,25 @@ export type Corner = ReadonlyMap<string, number>;
  * `ranges` maps a rail id to its range in the power state being checked.
  */
 export function corners(railIds: Iterable<string>, ranges: ReadonlyMap<string, Range>): Corner[] {
+  // The same few rail combinations come up on net after net: enumerate each once per ranges map.
+  const ids = Array.isArray(railIds) ? (railIds as string[]) : [...railIds];
+  const key = ids.join('\u0000');
+  let memo = cornerMemo.get(ranges);
+  if (memo === undefined) {
+    memo = new Map();
+    cornerMemo.set(ranges, memo);
+  }
+  let hit = memo.get(key);
+  if (hit === undefined) {
+    hit = enumerate(ids, ranges);
+    memo.set(key, hit);
+  }
+  return hit;
+}
+
+const cornerMemo = new WeakMap<ReadonlyMap<string, Range>, Map<string, Corner[]>>();
+
+function enumerate(railIds: readonly string[], ranges: ReadonlyMap<string, Range>): Corner[] {
   let result: Map<string, number>[] = [new Map()];
   const seen = new Set<string>();
   for (const id of railIds) {

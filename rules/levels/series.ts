@@ -66,7 +66,19 @@ export function seriesValuesBetween(series: readonly number[], lo: number, hi: n
  * value to choose).
  */
 export function largestInRange(series: readonly number[], lo: number, hi: number): number | null {
-  if (!Number.isFinite(hi)) return null;
-  const values = seriesValuesBetween(series, lo, hi);
-  return values.length === 0 ? null : values[values.length - 1]!;
+  if (!Number.isFinite(hi) || Number.isNaN(lo) || lo > hi || hi <= 0) return null;
+  const lower = lo > 0 ? lo * (1 - END_TOLERANCE) : lo;
+  const upper = hi * (1 + END_TOLERANCE);
+  // Walk down from the decade above hi: the first value at or below hi is the answer if it is
+  // not below lo (the engine asks this once per pulled net, so no list is built).
+  const top = Math.min(MAX_DECADE, decadeOf(hi) + 1);
+  for (let decade = top; decade >= MIN_DECADE; decade--) {
+    let best: number | null = null;
+    for (const m of series) {
+      const v = scaled(m, decade);
+      if (v <= upper && (best === null || v > best)) best = v;
+    }
+    if (best !== null) return best >= lower ? best : null;
+  }
+  return null;
 }

@@ -29,7 +29,7 @@ describe('incremental check', () => {
         fc.integer({ min: 3, max: 14 }),
         fc.array(fc.tuple(fc.constantFrom(...EDIT_KINDS), fc.integer({ min: 1, max: 2 ** 31 - 1 })), { minLength: 1, maxLength: 12 }),
         (seed, parts, edits) => {
-          let design = generateDesign(seed, { parts, faultRate: 0.3 });
+          let design = generateDesign(seed, { parts, faultRate: 0.3, wiring: seed % 2 === 0 ? 'random' : 'board' });
           let result = check(design);
           for (const [kind, editSeed] of edits) {
             design = applyEdit(design, kind, rng(editSeed));

@@ -32,13 +32,15 @@ const RAILS: Rail[] = [
   { id: 'r1v8', label: '1.8 V', nominal: 1.8, tolerance: 0.05, colour: '#7c3aed' },
 ];
 
-/** Families that suit each rail; a sprinkling of parts take another rail's family (faults). */
+/** Families that suit each rail and each other on it. */
 const FAMILIES: Record<string, readonly string[]> = {
-  r5v0: ['74hc', '74hct', '74ac', '74ahct', 'ttl', '74ls', 'cmos4000'],
-  r3v3: ['lvcmos33', 'lvttl33', '74lvc', 'mcu-gpio', 'i2c'],
-  r2v5: ['lvcmos25', 'mcu-gpio'],
-  r1v8: ['lvcmos18', 'i2c-lv', 'mcu-gpio'],
+  r5v0: ['74hc', '74hct', '74ac', '74ahct'],
+  r3v3: ['lvcmos33', '74lvc', 'mcu-gpio'],
+  r2v5: ['lvcmos25'],
+  r1v8: ['lvcmos18', 'mcu-gpio'],
 };
+/** Families that a sprinkling of parts take instead: another rail's, or an older 5 V one. */
+const ODD_FAMILIES: readonly string[] = ['ttl', '74ls', 'cmos4000', 'lvttl33', 'lvcmos18', 'lvcmos33', '74hc', 'i2c'];
 
 function makePin(r: Rand, id: string): Pin {
   const roll = r();
@@ -50,7 +52,7 @@ function makePin(r: Rand, id: string): Pin {
 
 function makePart(r: Rand, n: number, rails: readonly Rail[], faultRate: number): Part {
   const rail = pick(r, rails).id;
-  const families = r() < faultRate ? FAMILIES[pick(r, rails).id]! : FAMILIES[rail]!;
+  const families = r() < faultRate ? ODD_FAMILIES : (FAMILIES[rail] ?? ODD_FAMILIES);
   const pins: Pin[] = [];
   const count = int(r, 2, 6);
   for (let k = 0; k < count; k++) pins.push(makePin(r, `P${k + 1}`));
@@ -68,31 +70,26 @@ export interface GeneratorOptions {
   parts: number;
   /** Share of parts given a family of another rail (default 0.05). */
   faultRate?: number;
-  /** Share of pins left on no net (default 0.1). */
+  /** Share of pins left on no net (default 0.1 when wiring is random, else 0.01). */
   loneRate?: number;
+  /**
+   * `board` (default): each net has one driver and its receivers, mostly on the driver's rail,
+   * open-drain nets pulled up to their own rail, so that faults stay a sprinkling, as on a
+   * real board. `random`: pins dealt into nets at random, so that every rule fires often
+   * (what the incremental property test wants).
+   */
+  wiring?: 'board' | 'random';
 }
 
-/** A synthetic design: about 4 pins a part, nets of 2–6 pins, 4 rails, 2 power states. */
-export function generateDesign(seed: number, options: GeneratorOptions): Design {
-  const r = rng(seed);
-  const faultRate = options.faultRate ?? 0.05;
-  const loneRate = options.loneRate ?? 0.1;
-  const parts: Part[] = [];
-  for (let n = 1; n <= options.parts; n++) parts.push(makePart(r, n, RAILS, faultRate));
+interface Dealt { key: string; pin: Pin; rail: string }
 
-  // Shuffle the pins, then deal them into nets of 2–6, keeping every net to one driver type mix
-  // as it falls: contention and floating faults come from the deal itself.
-  const keys: { key: string; pin: Pin }[] = [];
-  for (const p of parts) for (const pin of p.pins) if (r() >= loneRate) keys.push({ key: `${p.id}.${pin.id}`, pin });
-  for (let k = keys.length - 1; k > 0; k--) {
-    const j = Math.floor(r() * (k + 1));
-    [keys[k], keys[j]] = [keys[j]!, keys[k]!];
-  }
+/** Nets of 2–6 pins dealt at random. */
+function randomNets(r: Rand, pool: Dealt[]): Net[] {
   const nets: Net[] = [];
   let at = 0;
-  while (keys.length - at >= 2) {
-    const size = Math.min(int(r, 2, 6), keys.length - at);
-    const members = keys.slice(at, at + size);
+  while (pool.length - at >= 2) {
+    const size = Math.min(int(r, 2, 6), pool.length - at);
+    const members = pool.slice(at, at + size);
     at += size;
     const net: Net = { id: `N${nets.length + 1}`, pins: members.map((m) => m.key) };
     if (members.some((m) => m.pin.drive === 'open-drain') && r() < 0.9) {
@@ -101,6 +98,60 @@ export function generateDesign(seed: number, options: GeneratorOptions): Design 
     if (r() < 0.1) net.maxRiseTime = pick(r, [1e-6, 300e-9, 50e-9]);
     nets.push(net);
   }
+  return nets;
+}
+
+/** Nets as a board has them: one driver, 1–5 receivers, one receiver in twenty from another rail. */
+function boardNets(r: Rand, pool: Dealt[]): Net[] {
+  const drivers = pool.filter((d) => d.pin.role !== 'input');
+  const inputsByRail = new Map<string, Dealt[]>();
+  for (const d of pool) {
+    if (d.pin.role !== 'input') continue;
+    const list = inputsByRail.get(d.rail) ?? [];
+    list.push(d);
+    inputsByRail.set(d.rail, list);
+  }
+  const takeInput = (rail: string): Dealt | undefined => {
+    const own = inputsByRail.get(rail);
+    if (own !== undefined && own.length > 0 && r() < 0.95) return own.pop();
+    for (const list of inputsByRail.values()) if (list.length > 0) return list.pop();
+    return undefined;
+  };
+  const nets: Net[] = [];
+  for (const d of drivers) {
+    const members = [d];
+    const receivers = int(r, 1, 5);
+    for (let k = 0; k < receivers; k++) {
+      const x = takeInput(d.rail);
+      if (x !== undefined) members.push(x);
+    }
+    if (members.length < 2) break;
+    const net: Net = { id: `N${nets.length + 1}`, pins: members.map((m) => m.key) };
+    if (d.pin.drive === 'open-drain') net.pull = { to: d.rail, ohms: pick(r, [2200, 4700, 10000]) };
+    if (r() < 0.02) net.maxRiseTime = pick(r, [1e-6, 300e-9]);
+    nets.push(net);
+  }
+  return nets;
+}
+
+/** A synthetic design: about 4 pins a part, nets of 2–6 pins, 4 rails, 2 power states. */
+export function generateDesign(seed: number, options: GeneratorOptions): Design {
+  const r = rng(seed);
+  const wiring = options.wiring ?? 'board';
+  const faultRate = options.faultRate ?? 0.05;
+  const loneRate = options.loneRate ?? (wiring === 'random' ? 0.1 : 0.01);
+  const parts: Part[] = [];
+  for (let n = 1; n <= options.parts; n++) parts.push(makePart(r, n, RAILS, faultRate));
+
+  const pool: Dealt[] = [];
+  for (const p of parts) {
+    for (const pin of p.pins) if (r() >= loneRate) pool.push({ key: `${p.id}.${pin.id}`, pin, rail: pin.rail ?? p.rail });
+  }
+  for (let k = pool.length - 1; k > 0; k--) {
+    const j = Math.floor(r() * (k + 1));
+    [pool[k], pool[j]] = [pool[j]!, pool[k]!];
+  }
+  const nets = wiring === 'random' ? randomNets(r, pool) : boardNets(r, pool);
   return {
     format: 'railcross.design',
     version: 1,
@@ -182,7 +233,7 @@ export function applyEdit(design: Design, kind: EditKind, r: Rand): Design {
       case 'switch-profile': {
         if (d.parts.length === 0) return;
         const part = pick(r, d.parts);
-        part.profile = pick(r, FAMILIES[pick(r, d.rails).id] ?? ['mcu-gpio']);
+        part.profile = pick(r, r() < 0.5 ? ODD_FAMILIES : (FAMILIES[part.rail] ?? ODD_FAMILIES));
         return;
       }
       case 'add-waiver': {

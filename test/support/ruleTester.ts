@@ -23,7 +23,7 @@ export interface ExpectedFinding {
   net?: string | null;
   id?: string;
   pins?: string[];
-  /** Compared key by key; numbers within 1e-9 absolute. */
+  /** Compared key by key; numbers to 1e-9 of the larger magnitude (1e-15 absolute near 0). */
   values?: Record<string, unknown>;
   waived?: string;
 }
@@ -44,7 +44,9 @@ export function deepFreeze<T>(value: T): T {
 
 function expectValue(actual: unknown, expected: unknown, path: string): void {
   if (typeof expected === 'number' && typeof actual === 'number') {
-    expect(Math.abs(actual - expected), `${path}: ${actual} vs ${expected}`).toBeLessThanOrEqual(1e-9);
+    // Relative, so that nanoseconds and picofarads are compared as finely as volts.
+    const tolerance = 1e-9 * Math.max(Math.abs(actual), Math.abs(expected)) + 1e-15;
+    expect(Math.abs(actual - expected), `${path}: ${actual} vs ${expected}`).toBeLessThanOrEqual(tolerance);
   } else if (Array.isArray(expected)) {
     expect(Array.isArray(actual), path).toBe(true);
     expect((actual as unknown[]).length, path).toBe(expected.length);

@@ -1,0 +1,33 @@
+/**
+ * The command line's real io: files through node:fs, output through process. The only module
+ * of the project, with rules/cli/railcross.mjs, that is bound to Node.
+ */
+import { readFileSync, writeFileSync } from 'node:fs';
+import process from 'node:process';
+import { main, EXIT_UNCHECKED, type CliIo } from './main.ts';
+
+/** Standard streams, the file system and the environment of this process. */
+export const nodeIo: CliIo = {
+  stdout: (text) => void process.stdout.write(text),
+  stderr: (text) => void process.stderr.write(text),
+  readFile: (path) => readFileSync(path, 'utf8'),
+  writeFile: (path, data) => writeFileSync(path, data),
+  env: process.env,
+};
+
+/**
+ * Runs `main` with this process's arguments and io, and returns its exit status. A reader that
+ * closes the pipe early (`railcross check … | head`) ends the output quietly.
+ */
+export async function run(argv: readonly string[] = process.argv.slice(2)): Promise<number> {
+  process.stdout.on('error', (error: NodeJS.ErrnoException) => {
+    if (error.code === 'EPIPE') process.exit(process.exitCode ?? 0);
+    throw error;
+  });
+  try {
+    return await main(argv, nodeIo);
+  } catch (error) {
+    process.stderr.write(`railcross: internal error, please report it: ${error instanceof Error ? (error.stack ?? error.message) : String(error)}\n`);
+    return EXIT_UNCHECKED;
+  }
+}

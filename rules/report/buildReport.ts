@@ -1,0 +1,129 @@
+/**
+ * The report object (report-format.md) built from a design and the engine's result. Pure: the
+ * caller supplies the time, so that a report can be reproduced byte for byte.
+ */
+import type { Design } from '../model/schema.ts';
+import type { CheckResult, Finding, PowerState, Severity } from '../engine/types.ts';
+import { summarize } from '../engine/findings.ts';
+import { lookupProfile } from '../engine/resolve.ts';
+import { effectiveSettings } from '../engine/powerStates.ts';
+import { CAUTIONS } from './cautions.ts';
+import type { Crossing, FailOn, Report, ReportFinding } from './reportSchema.ts';
+import { REPORT_FORMAT_ID, REPORT_FORMAT_VERSION } from './reportSchema.ts';
+import { TOOL_NAME } from './version.ts';
+
+/** Options of {@link buildReport}. */
+export interface ReportOptions {
+  /** The least severity that fails the check (recorded in `settings.failOn`). */
+  readonly failOn: FailOn;
+  /** ISO 8601 time of the report, e.g. from `SOURCE_DATE_EPOCH`. */
+  readonly generatedAt: string;
+  /** Report this power state alone (`all-on` or a scenario id). */
+  readonly scenario?: string;
+}
+
+/** The finding as a report carries it: the engine's message id is internal. */
+function reportFinding(f: Finding): ReportFinding {
+  return {
+    id: f.id,
+    rule: f.rule,
+    severity: f.severity,
+    scenario: f.scenario,
+    net: f.net,
+    pins: [...f.pins],
+    parts: [...f.parts],
+    message: f.message,
+    values: { ...f.values },
+    hint: f.hint,
+    ...(f.waived === undefined ? {} : { waived: f.waived }),
+  };
+}
+
+const RANK: Readonly<Record<Severity, number>> = { info: 0, warning: 1, error: 2 };
+
+/** The most severe unwaived finding among these, info counting as ok. */
+function worstOf(findings: readonly Finding[]): Crossing['worst'] {
+  let worst = 0;
+  for (const f of findings) if (f.waived === undefined) worst = Math.max(worst, RANK[f.severity]);
+  return worst === 2 ? 'error' : worst === 1 ? 'warning' : 'ok';
+}
+
+/** One row per net joining pins of different rails, per power state, in state then net order. */
+function crossings(result: CheckResult, states: readonly PowerState[]): Crossing[] {
+  const rows: Crossing[] = [];
+  for (const state of states) {
+    const perNet = result.nets.get(state.id);
+    if (perNet === undefined) continue;
+    for (const { net, view, findings } of perNet.values()) {
+      if (view.pinRails.length < 2) continue;
+      rows.push({
+        net: net.id,
+        label: net.label ?? net.id,
+        rails: [...view.pinRails],
+        scenario: state.id,
+        marginHigh: view.analysis.worstHigh,
+        marginLow: view.analysis.worstLow,
+        worst: worstOf(findings),
+      });
+    }
+  }
+  return rows;
+}
+
+/**
+ * The profiles the design uses, by each pin's effective profile (the pin's own, else its
+ * part's), in order of first use; a part without pins counts its own profile.
+ */
+function usedProfiles(design: Design): Report['profiles'] {
+  const ids: string[] = [];
+  const use = (id: string) => {
+    if (!ids.includes(id)) ids.push(id);
+  };
+  for (const part of design.parts) {
+    if (part.pins.length === 0) use(part.profile);
+    for (const pin of part.pins) use(pin.profile ?? part.profile);
+  }
+  return ids.flatMap((id) => {
+    const p = lookupProfile(design, id);
+    return p === undefined ? [] : [{ id: p.id, label: p.label, source: p.source }];
+  });
+}
+
+/** The power states of a result, or the one a `scenario` option names. Undefined when it names none. */
+export function selectStates(result: CheckResult, scenario?: string): readonly PowerState[] | undefined {
+  if (scenario === undefined) return result.states;
+  const state = result.states.find((s) => s.id === scenario);
+  return state === undefined ? undefined : [state];
+}
+
+/**
+ * Builds the report of a check. `result` must be `check(design)`'s (with any setting the
+ * caller overrides already applied to `design`). With `scenario`, findings, scenarios,
+ * crossings and summary cover that power state alone.
+ *
+ * @throws RangeError when `scenario` is not a power state of the result: callers check
+ * user input first (the command line refuses it with exit status 2).
+ */
+export function buildReport(design: Design, result: CheckResult, options: ReportOptions): Report {
+  const states = selectStates(result, options.scenario);
+  if (states === undefined) {
+    throw new RangeError(`no power state "${options.scenario}": expected all-on or a scenario id of the design`);
+  }
+  const ids = new Set(states.map((s) => s.id));
+  const findings = result.findings.filter((f) => ids.has(f.scenario));
+  const settings = effectiveSettings(design);
+  return {
+    format: REPORT_FORMAT_ID,
+    version: REPORT_FORMAT_VERSION,
+    tool: TOOL_NAME,
+    generatedAt: options.generatedAt,
+    design: { title: design.title, parts: design.parts.length, nets: design.nets.length, rails: design.rails.length },
+    settings: { minMargin: settings.minMargin, defaultWiringCapacitance: settings.defaultWiringCapacitance, failOn: options.failOn },
+    scenarios: states.map((s) => ({ id: s.id, label: s.label, off: [...s.off] })),
+    summary: summarize(findings),
+    findings: findings.map(reportFinding),
+    crossings: crossings(result, states),
+    profiles: usedProfiles(design),
+    cautions: [...CAUTIONS],
+  };
+}

@@ -1,0 +1,20 @@
+/** The rule report (report-format.md): building it, its schema, and its text and Markdown renderings. */
+export { buildReport, selectStates, type ReportOptions } from './buildReport.ts';
+export { CAUTIONS } from './cautions.ts';
+export { renderText } from './renderText.ts';
+export { renderMarkdown, escapeMarkdown, codeSpan } from './renderMarkdown.ts';
+export { verdict, type Verdict } from './verdict.ts';
+export { TOOL_VERSION, TOOL_NAME } from './version.ts';
+export {
+  ReportSchema,
+  ReportFindingSchema,
+  CrossingSchema,
+  FailOnSchema,
+  REPORT_FORMAT_ID,
+  REPORT_FORMAT_VERSION,
+  type Report,
+  type ReportFinding,
+  type Crossing,
+  type FailOn,
+} from './reportSchema.ts';
+export { describeParams, describeProfile } from './describeProfile.ts';
