@@ -182,7 +182,10 @@ function fullCheck(design: Design, rules: readonly AnyRule[], started: number): 
 /** What changed between two versions of a design, as the sets of things to re-check. */
 interface Dirty {
   nets: Set<string>;
+  /** Pins whose own data changed (the pin, its part, its profile): nets, groups, lone status. */
   pins: Set<string>;
+  /** Pins whose net or rail state changed: their lone status is judged again. */
+  lone: Set<string>;
   /** (rail, profile) group keys. */
   groups: Set<string>;
   states: Set<string>;
@@ -223,7 +226,7 @@ function markPinsOf(part: Part, dirty: Dirty): void {
 function incrementalCheck(design: Design, prev: CheckResult, inner: Internals, started: number): CheckResult {
   const before = prev.design;
   const { index, rules } = inner;
-  const dirty: Dirty = { nets: new Set(), pins: new Set(), groups: new Set(), states: new Set() };
+  const dirty: Dirty = { nets: new Set(), pins: new Set(), lone: new Set(), groups: new Set(), states: new Set() };
 
   // Power states: a changed scenario is re-checked whole; states come back in the file's order.
   const states = before.scenarios === design.scenarios ? prev.states : powerStates(design);
@@ -242,7 +245,7 @@ function incrementalCheck(design: Design, prev: CheckResult, inner: Internals, s
     const id = (now ?? old)!.id;
     for (const g of index.groupsOfRail.get(id) ?? []) dirty.groups.add(g);
     index.netsTouchingRail(id, dirty.nets);
-    for (const key of index.pinsOfRail.get(id) ?? []) dirty.pins.add(key);
+    for (const key of index.pinsOfRail.get(id) ?? []) dirty.lone.add(key);
   });
 
   // Design-local profiles: every pin that uses a changed id.
@@ -275,8 +278,8 @@ function incrementalCheck(design: Design, prev: CheckResult, inner: Internals, s
   changedById(before.nets, design.nets, (id) => index.nets.get(id), (old, now) => {
     netChanges.push([old, now]);
     dirty.nets.add((now ?? old)!.id);
-    for (const key of old?.pins ?? []) dirty.pins.add(key);
-    for (const key of now?.pins ?? []) dirty.pins.add(key);
+    for (const key of old?.pins ?? []) dirty.lone.add(key);
+    for (const key of now?.pins ?? []) dirty.lone.add(key);
   });
 
   // A changed pin re-checks the net it was on, its (rail, profile) group, and itself if alone.
@@ -338,7 +341,8 @@ function incrementalCheck(design: Design, prev: CheckResult, inner: Internals, s
         t.netsChecked++;
       }
       const lone = t.lonePins.get(state.id)!;
-      for (const key of dirty.pins) {
+      for (const key of dirty.pins) dirty.lone.add(key);
+      for (const key of dirty.lone) {
         const old = lone.get(key);
         if (old !== undefined) { count(t.summary, old, -1); lone.delete(key); }
         const at = index.pins.get(key);

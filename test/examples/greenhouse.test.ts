@@ -1,6 +1,8 @@
 /**
- * The example design holds exactly its planted faults at error level, each with the numbers
- * and the corner it was judged at.
+ * The example design holds exactly its planted faults, one or more for each rule that can fail,
+ * each with the numbers and the corner it was judged at, and nothing else at error or warning
+ * level. Part values are the example's own (invented); the family values below are transcribed
+ * with their source beside them.
  */
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
@@ -9,20 +11,125 @@ import { check } from '../../rules/engine/check.ts';
 
 const text = readFileSync(new URL('../../rules/examples/greenhouse.json', import.meta.url), 'utf8');
 
-// 74HC VIH line 0.675·VDD + 0.15 (JESD7 as restated); the controller's VOH row VDD − 0.2 at
-// 100 µA is the example's own (invented) datasheet value.
-const planted: { id: string; values: Record<string, number | null> }[] = [
+type Expected = number | string | boolean | null | readonly string[];
+interface Planted {
+  readonly id: string;
+  readonly values: Readonly<Record<string, Expected>>;
+}
+
+// Rails of the example, nominal × (1 ± 5 %).
+const V33 = { min: 3.3 * 0.95, max: 3.3 * 1.05 };
+const V50 = { min: 5 * 0.95, max: 5 * 1.05 };
+const V18 = { min: 1.8 * 0.95 };
+
+// Standard TTL input currents: handbook table, 1.6 mA out of a low input, 40 µA into a high one.
+const TTL_IIL = 1.6e-3;
+const TTL_IIH = 40e-6;
+// 74HC output rows: JESD7 as restated, largest test current 4 mA for both VOH and VOL.
+const HC_IO_TEST = 4e-3;
+// 74HC VIH line 0.675·VDD + 0.15 (JESD7 as restated).
+const hcVih = (vdd: number) => 0.675 * vdd + 0.15;
+// Microcontroller inputs: VIH 0.7·VDD, VIL 0.3·VDD (common practice, the mcu-gpio starting point).
+const MCU_VIH = 0.7;
+// A CMOS pin's clamp diode to VDD conducts about 0.5 V above it (common practice): powered, the
+// limit is VDD + 0.5; unpowered (VDD = 0), 0.5 V.
+const CLAMP = 0.5;
+// 30–70 % of an RC edge: ln(7/3)·RC, the I2C-bus specification's rise-time figure (0.8473 RC).
+const RISE_30_70 = Math.log(7 / 3);
+const MIN_MARGIN = 0.2; // the example's settings.minMargin
+const U1_I = 1e-6; // the controller's iih and iil, the example's own datasheet value
+const U1_CIN = 5e-12; // the controller's cin, the example's own
+
+const plantedErrors: Planted[] = [
   // The 3.3 V bus pull-ups reach the 1.8 V sensor's pins: 3.465 V against VDD + 0.5 at 1.71 V.
-  { id: 'overvoltage:SDA:all-on:U2.SDA', values: { vNet: 3.465, viMax: 1.71 + 0.5 } },
-  { id: 'overvoltage:SCL:all-on:U2.SCL', values: { vNet: 3.465, viMax: 1.71 + 0.5 } },
-  // A 3.3 V output into an HC input on the 5 V valve board.
+  { id: 'overvoltage:SDA:all-on:U2.SDA', values: { vNet: V33.max, viMax: V18.min + CLAMP } },
+  { id: 'overvoltage:SCL:all-on:U2.SCL', values: { vNet: V33.max, viMax: V18.min + CLAMP } },
+  // A 3.3 V output into an HC input on the 5 V valve board; the controller's VOH row VDD − 0.2
+  // at 100 µA is the example's own value.
   {
     id: 'level-high:VALVE_EN:all-on:U1.VALVE_EN>U3.EN',
-    values: { voh: 3.135 - 0.2, vih: 0.675 * 5.25 + 0.15, driverVdd: 3.135, receiverVdd: 5.25 },
+    values: { voh: V33.min - 0.2, vih: hcVih(V50.max), driverVdd: V33.min, receiverVdd: V50.max },
   },
   // The 5 V display's push-pull output into the controller's 3.3 V input.
-  { id: 'overvoltage:DISP_RX:all-on:U1.DISP_RX', values: { vNet: 5.25, viMax: 3.135 + 0.5 } },
+  { id: 'overvoltage:DISP_RX:all-on:U1.DISP_RX', values: { vNet: V50.max, viMax: V33.min + CLAMP } },
+  // The valve board's HC status output drives three standard TTL inputs on the lamp board:
+  // 3 × 1.6 mA sunk when low, past the 4 mA row. High: 3 × 40 µA, well inside.
+  {
+    id: 'drive-load:STATUS:all-on:U3.STATUS',
+    values: {
+      driver: 'U3.STATUS', loadLow: 3 * TTL_IIL, ratedLow: HC_IO_TEST, loadHigh: 3 * TTL_IIH, ratedHigh: HC_IO_TEST,
+      ioMax: null,
+    },
+  },
+  // The controller and the manual override panel both drive the pump-enable line push-pull.
+  {
+    id: 'contention:PUMP_EN:all-on',
+    values: { drivers: ['U1.PUMP_EN', 'U7.PUMP_ON'], kinds: ['push-pull', 'push-pull'] },
+  },
+  // The two boards' sleep inputs are joined, but no output was ever put on the line.
+  { id: 'floating-input:SLEEP:all-on', values: { pins: ['U3.SLEEP', 'U4.SLEEP'] } },
+  // The tank float switch only pulls low and nothing pulls the line up.
+  { id: 'missing-pull:TANK_LOW:all-on', values: { drivers: ['J3.SW'] } },
+  // The frost alarm's 100 kΩ pull-up is too weak for the thermostat's 10 µA leakage (the
+  // example's own) plus the controller's 1 µA: Rmax = (VDD − 0.7·VDD − minMargin) / Σiih at
+  // VDD's low end; the line reads high only thanks to the controller's internal pull-up,
+  // which is not part of the range. Rmin = (VDD,max − VOL) / (IOL − the controller's iil), the
+  // thermostat's own 0.4 V @ 1 mA row. Largest E24 value inside (IEC 60063): 62 kΩ (68 k is above).
+  {
+    id: 'pull-range:FROST:all-on',
+    values: {
+      ohms: 100e3,
+      rMin: (V33.max - 0.4) / (1e-3 - U1_I),
+      rMax: ((1 - MCU_VIH) * V33.min - MIN_MARGIN) / (10e-6 + U1_I),
+      rMaxBy: 'level',
+      empty: false,
+      suggested: 62e3,
+    },
+  },
+  // Standby: the 1.8 V rail is off, the 3.3 V pull-ups stay: 3.465 V on an unpowered pin whose
+  // clamp diode conducts above 0.5 V (common practice).
+  { id: 'back-power:SDA:standby:U2.SDA', values: { vNet: V33.max, viMax: CLAMP, limit: 'clamp', source: 'net' } },
+  { id: 'back-power:SCL:standby:U2.SCL', values: { vNet: V33.max, viMax: CLAMP, limit: 'clamp', source: 'net' } },
 ];
+
+const plantedWarnings: Planted[] = [
+  // 15 m of cable to the flow meter (1.5 nF, the example's own) on the controller's internal
+  // 40 kΩ pull-up: ln(7/3) × 40 kΩ × 1.505 nF ≈ 51 µs, against the 10 µs the pulse counter needs.
+  {
+    id: 'edge-rate:FLOW:all-on',
+    values: {
+      riseTime: RISE_30_70 * 40e3 * (1.5e-9 + U1_CIN), span: '30-70', capacitance: 1.5e-9 + U1_CIN,
+      resistance: 40e3, limit: 10e-6,
+    },
+  },
+];
+
+/**
+ * Accepted extras: every rule runs again in each power state (rules-catalogue.md, "Power
+ * states"), and standby switches off only the 1.8 V sensor rail, which none of these nets
+ * touches, so each of these all-on faults is found again in standby with the same numbers.
+ */
+const errorsAgainInStandby: readonly string[] = [
+  'level-high:VALVE_EN:all-on:U1.VALVE_EN>U3.EN',
+  'overvoltage:DISP_RX:all-on:U1.DISP_RX',
+  'drive-load:STATUS:all-on:U3.STATUS',
+  'contention:PUMP_EN:all-on',
+  'floating-input:SLEEP:all-on',
+  'missing-pull:TANK_LOW:all-on',
+  'pull-range:FROST:all-on',
+];
+const warningsAgainInStandby: readonly string[] = ['edge-rate:FLOW:all-on'];
+const inStandby = (id: string) => id.replace(':all-on', ':standby');
+
+function expectClose(actual: unknown, expected: Expected, label: string): void {
+  if (typeof expected !== 'number') {
+    expect(actual, label).toEqual(expected);
+    return;
+  }
+  expect(typeof actual, label).toBe('number');
+  // Relative: the values span volts to nanofarads.
+  expect(Math.abs((actual as number) - expected), label).toBeLessThanOrEqual(1e-9 * Math.abs(expected));
+}
 
 describe('greenhouse irrigation controller example', () => {
   const read = readDesign(text);
@@ -31,19 +138,57 @@ describe('greenhouse irrigation controller example', () => {
   });
   const design = read.ok ? read.design : (JSON.parse(text) as never);
   const result = check(design);
-
+  const ids = (severity: string) =>
+    result.findings.filter((f) => f.severity === severity && f.waived === undefined).map((f) => f.id).sort();
   it('has exactly the planted faults at error level', () => {
-    const errors = result.findings.filter((f) => f.severity === 'error' && f.waived === undefined).map((f) => f.id);
-    expect([...errors].sort()).toEqual(planted.map((p) => p.id).sort());
+    const expected = [...plantedErrors.map((p) => p.id), ...errorsAgainInStandby.map(inStandby)];
+    expect(ids('error')).toEqual(expected.sort());
   });
 
-  it.each(planted)('$id carries its numbers and corner', ({ id, values }) => {
-    const f = result.findings.find((x) => x.id === id)!;
+  it('has exactly the planted warnings', () => {
+    const expected = [...plantedWarnings.map((p) => p.id), ...warningsAgainInStandby.map(inStandby)];
+    expect(ids('warning')).toEqual(expected.sort());
+  });
+
+  it.each([...plantedErrors, ...plantedWarnings])('$id carries its numbers and corner', ({ id, values }) => {
+    const f = result.findings.find((x) => x.id === id);
     expect(f, id).toBeDefined();
-    for (const [k, v] of Object.entries(values)) {
-      if (v === null) expect(f.values[k]).toBeNull();
-      else expect(f.values[k] as number, `${id} ${k}`).toBeCloseTo(v, 9);
+    for (const [k, v] of Object.entries(values)) expectClose(f!.values[k], v, `${id} ${k}`);
+    expect(f!.message).toMatch(/\d/);
+  });
+
+  it.each([...errorsAgainInStandby, ...warningsAgainInStandby])('%s is found again in standby with the same numbers', (id) => {
+    const allOn = result.findings.find((f) => f.id === id);
+    const standby = result.findings.find((f) => f.id === inStandby(id));
+    expect(allOn, id).toBeDefined();
+    expect(standby, inStandby(id)).toBeDefined();
+    expect(standby!.severity).toBe(allOn!.severity);
+    expect(standby!.values).toEqual(allOn!.values);
+  });
+
+  it('has the standby scenario, and back-power finds the sensor fed through its bus pins there only', () => {
+    expect(design.scenarios).toEqual([{ id: 'standby', label: 'Standby: sensor rail off', off: ['1v8'] }]);
+    const backPower = result.findings.filter((f) => f.rule === 'back-power');
+    expect(backPower.map((f) => `${f.scenario} ${f.id}`).sort()).toEqual([
+      'standby back-power:SCL:standby:U2.SCL',
+      'standby back-power:SDA:standby:U2.SDA',
+    ]);
+  });
+
+  // The editor draws a part as a box about 200 wide and 40 + 22 per pin tall, on a canvas of
+  // about 1200 × 700: the example's boxes must neither overlap nor leave it, and every pin is placed.
+  it('lays its parts out without overlaps, each pin on a side', () => {
+    const boxes = design.parts.map((p) => ({
+      id: p.id, x: p.position?.x ?? 0, y: p.position?.y ?? 0, w: 200, h: 40 + 22 * p.pins.length,
+    }));
+    const problems: string[] = [];
+    for (const b of boxes) if (b.x < 0 || b.y < 0 || b.x + b.w > 1200 || b.y + b.h > 700) problems.push(`${b.id} off canvas`);
+    for (const [i, a] of boxes.entries()) {
+      for (const b of boxes.slice(i + 1)) {
+        if (a.x < b.x + b.w && b.x < a.x + a.w && a.y < b.y + b.h && b.y < a.y + a.h) problems.push(`${a.id}/${b.id}`);
+      }
     }
-    expect(f.message).toMatch(/\d/);
+    for (const p of design.parts) for (const pin of p.pins) if (pin.side === undefined) problems.push(`${p.id}.${pin.id} no side`);
+    expect(problems).toEqual([]);
   });
 });
