@@ -1,16 +1,14 @@
-/**
- * The page's entry point. For now it shows the start page: the example design checked in the
- * browser by the same engine as `railcross check`; the editor takes its place later.
- */
+/** The page's entry point: open the stored design (or the example) and mount the editor. */
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
-import { StartPage } from './StartPage.tsx';
-import './start.css';
+import { App } from './App.tsx';
+import { boot } from './boot.ts';
 
 const root = document.getElementById('root');
 if (root === null) throw new Error('index.html has no #root element');
+const { store, saver } = await boot();
 createRoot(root).render(
   <StrictMode>
-    <StartPage />
+    <App store={store} saver={saver} />
   </StrictMode>,
 );

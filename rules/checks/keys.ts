@@ -8,10 +8,8 @@ export function partOf(pinKey: string): string {
 
 /** The distinct part ids of some pin keys, in order of first appearance. */
 export function partsOf(...pinKeys: readonly string[]): string[] {
-  const out: string[] = [];
-  for (const k of pinKeys) {
-    const part = partOf(k);
-    if (!out.includes(part)) out.push(part);
-  }
-  return out;
+  // A Set keeps first-appearance order; a rail-range finding may list thousands of pins.
+  const out = new Set<string>();
+  for (const k of pinKeys) out.add(partOf(k));
+  return [...out];
 }

@@ -3,7 +3,6 @@
  * one finding per (rail, profile); runs once, in `all-on` (rules-catalogue.md).
  */
 import { below, exceeds } from '../levels/compare.ts';
-import { compareCodePoints } from '../engine/findings.ts';
 import { defineRule } from './defineRule.ts';
 import { volts } from './format.ts';
 import { partsOf } from './keys.ts';
@@ -38,18 +37,15 @@ export default defineRule({
   },
   checkRail(view, report) {
     const { rail, range, profile } = view;
+    if (view.vddRanges.length === 0) return;
     let profileMin = -Infinity;
     let profileMax = Infinity;
-    const keys: string[] = [];
-    for (const pin of view.pins) {
-      if (pin.params.vddRange === undefined) continue;
-      const [lo, hi] = pin.params.vddRange;
+    for (const [lo, hi] of view.vddRanges) {
       profileMin = Math.max(profileMin, lo);
       profileMax = Math.min(profileMax, hi);
-      keys.push(pin.key);
     }
-    if (keys.length === 0 || (!below(range.min, profileMin) && !exceeds(range.max, profileMax))) return;
-    keys.sort(compareCodePoints);
+    if (!below(range.min, profileMin) && !exceeds(range.max, profileMax)) return;
+    const keys = view.pinKeys();
     report({
       messageId: 'outside',
       data: { rail: rail.id, profile, railMin: range.min, railMax: range.max, profileMin, profileMax, count: keys.length },

@@ -78,15 +78,14 @@ function checkLonePin(ctx: StateContext, pin: PinView): Finding[] {
 /** One (rail, profile) group, judged in `all-on`. */
 function checkGroup(ctx: StateContext, index: DesignIndex, rail: Rail, profile: string): Finding[] {
   const range = ctx.rails.onRanges.get(rail.id)!;
-  const pins: PinView[] = [];
-  for (const k of index.pinsOfGroup.get(groupKey(rail.id, profile)) ?? []) {
-    const at = index.pins.get(k)!;
-    pins.push(pinView(ctx.design, at.part, at.pin, ctx.rails));
-  }
+  const group = index.groups.get(groupKey(rail.id, profile));
+  if (group === undefined) return [];
+  const vddRanges = [...group.ranges.values()].map((slot) => slot.range);
+  const pinKeys = () => [...group.pins].filter((k) => index.pins.get(k)?.vddRange !== undefined).sort();
   const found: Finding[] = [];
   for (const rule of ctx.rules) {
     if (rule.checkRail === undefined) continue;
-    rule.checkRail({ rail, range, profile, pins, state: ctx.state, settings: ctx.settings }, (draft) =>
+    rule.checkRail({ rail, range, profile, vddRanges, pinKeys, state: ctx.state, settings: ctx.settings }, (draft) =>
       found.push(completeFinding(rule, draft, ctx.state, null)),
     );
   }
@@ -154,7 +153,7 @@ function makeResult(design: Design, states: readonly PowerState[], t: Tables, st
 function fullCheck(design: Design, rules: readonly AnyRule[], started: number): CheckResult {
   const states = powerStates(design);
   const settings = effectiveSettings(design);
-  const index = DesignIndex.build(design.parts, design.nets);
+  const index = DesignIndex.build(design);
   const t: Tables = {
     nets: new Map(), lonePins: new Map(), railFindings: new Map(),
     summary: { error: 0, warning: 0, info: 0, waived: 0 }, netsChecked: 0,
@@ -207,11 +206,31 @@ function changedById<T extends { id: string }>(
     if (old !== undefined) kept++;
     if (old !== item) onChange(old, item);
   }
-  if (kept < before.length) {
-    // Something was removed: only then pay for a set of the ids that remain.
-    const ids = new Set(after.map((x) => x.id));
-    for (const old of before) if (!ids.has(old.id)) onChange(old, undefined);
+  if (kept < before.length) removedFrom(before, after, (old) => onChange(old, undefined));
+}
+
+/**
+ * Calls `onRemoved` for each record of `before` whose id is gone from `after`. The editor
+ * appends and deletes without reordering, so a walk in step finds them without hashing every
+ * id; a reordered array falls back on a set of ids.
+ */
+function removedFrom<T extends { id: string }>(before: readonly T[], after: readonly T[], onRemoved: (old: T) => void): void {
+  const missing: T[] = [];
+  let j = 0;
+  let steps = 0;
+  for (const old of before) {
+    let k = j;
+    while (k < after.length && after[k]!.id !== old.id) k++;
+    steps += k - j + 1;
+    if (steps > 4 * (before.length + after.length)) {
+      const ids = new Set(after.map((x) => x.id));
+      for (const o of before) if (!ids.has(o.id)) onRemoved(o);
+      return;
+    }
+    if (k < after.length) j = k + 1;
+    else missing.push(old);
   }
+  for (const o of missing) onRemoved(o);
 }
 
 /** True when a part changed only where the rules do not look (position, label). */
@@ -249,11 +268,16 @@ function incrementalCheck(design: Design, prev: CheckResult, inner: Internals, s
   });
 
   // Design-local profiles: every pin that uses a changed id.
+  const profilePins = new Set<string>();
   if (before.profiles !== design.profiles) {
     const old = new Map((before.profiles ?? []).map((p) => [p.id, p]));
     const now = new Map((design.profiles ?? []).map((p) => [p.id, p]));
     for (const id of new Set([...old.keys(), ...now.keys()])) {
-      if (old.get(id) !== now.get(id)) for (const key of index.pinsOfProfile.get(id) ?? []) dirty.pins.add(key);
+      if (old.get(id) === now.get(id)) continue;
+      for (const key of index.pinsOfProfile.get(id) ?? []) {
+        dirty.pins.add(key);
+        profilePins.add(key);
+      }
     }
   }
 
@@ -298,9 +322,11 @@ function incrementalCheck(design: Design, prev: CheckResult, inner: Internals, s
     if (old !== undefined && now !== undefined && movedOnly(old, now)) index.retargetPart(now);
     else {
       if (old !== undefined) index.removePart(old);
-      if (now !== undefined) index.addPart(now);
+      if (now !== undefined) index.addPart(design, now);
     }
   }
+  // Pins whose design-local profile changed keep their part: refresh what the index holds of them.
+  for (const key of profilePins) index.refreshPin(design, key);
   for (const [old] of netChanges) if (old !== undefined) index.removeNet(old);
   for (const [, now] of netChanges) if (now !== undefined) index.addNet(now);
   touch();
@@ -358,7 +384,7 @@ function incrementalCheck(design: Design, prev: CheckResult, inner: Internals, s
         if (old !== undefined) { count(t.summary, old, -1); t.railFindings.delete(group); }
         const [railId, profile] = splitGroupKey(group);
         const rail = railById.get(railId);
-        if (rail === undefined || !index.pinsOfGroup.has(group)) continue;
+        if (rail === undefined || !index.groups.has(group)) continue;
         const found = checkGroup(ctx, index, rail, profile);
         if (found.length > 0) { t.railFindings.set(group, found); count(t.summary, found, 1); }
       }

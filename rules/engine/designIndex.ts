@@ -3,8 +3,9 @@
  * rail → nets pulled to it. Built once by a full check, then updated by the difference, so that
  * no step of an incremental check is quadratic in the design's size.
  */
-import type { Net, Part, Pin } from '../model/schema.ts';
+import type { Design, Net, Part, Pin } from '../model/schema.ts';
 import { GROUND } from './powerStates.ts';
+import { resolvePin } from './resolve.ts';
 
 /** What the index remembers of a pin, to take it out again when the pin changes. */
 interface PinEntry {
@@ -13,7 +14,17 @@ interface PinEntry {
   readonly rail: string;
   readonly profile: string;
   readonly pullTo: string | undefined;
+  /** The resolved `vddRange`, kept so that a group's ranges are counted without resolving again. */
+  readonly vddRange: readonly [number, number] | undefined;
 }
+
+/** A (rail, profile) group: its pins, and how many of them hold each distinct `vddRange`. */
+export interface PinGroup {
+  readonly pins: Set<string>;
+  readonly ranges: Map<string, { range: readonly [number, number]; count: number }>;
+}
+
+const rangeKey = (r: readonly [number, number]) => `${r[0]}:${r[1]}`;
 
 function addTo(map: Map<string, Set<string>>, key: string, value: string): void {
   let set = map.get(key);
@@ -59,22 +70,32 @@ export class DesignIndex {
   readonly pinsOfProfile = new Map<string, Set<string>>();
   /** Rail id → ids of the nets whose own pull goes to it. */
   readonly netsPulledTo = new Map<string, Set<string>>();
-  /** (rail, profile) group key → keys of the pins on that rail using that profile. */
-  readonly pinsOfGroup = new Map<string, Set<string>>();
+  /** (rail, profile) group key → its pins and the distinct vddRanges among them. */
+  readonly groups = new Map<string, PinGroup>();
   /** Rail id → the (rail, profile) group keys on it. */
   readonly groupsOfRail = new Map<string, Set<string>>();
 
   /** An index of every part and net. */
-  static build(parts: readonly Part[], nets: readonly Net[]): DesignIndex {
+  static build(design: Design): DesignIndex {
     const index = new DesignIndex();
-    for (const part of parts) index.addPart(part);
-    for (const net of nets) index.addNet(net);
+    for (const part of design.parts) index.addPart(design, part);
+    for (const net of design.nets) index.addNet(net);
     return index;
   }
 
-  addPart(part: Part): void {
+  addPart(design: Design, part: Part): void {
     this.parts.set(part.id, part);
-    for (const pin of part.pins) this.addPin(part, pin);
+    for (const pin of part.pins) this.addPin(design, part, pin);
+  }
+
+  /** Takes a pin out and puts it back as it is now (its part, pin or profile changed). */
+  refreshPin(design: Design, key: string): void {
+    const entry = this.pins.get(key);
+    if (entry === undefined) return;
+    const part = this.parts.get(entry.part.id);
+    const pin = part?.pins.find((p) => `${part.id}.${p.id}` === key);
+    this.removePin(key);
+    if (part !== undefined && pin !== undefined) this.addPin(design, part, pin);
   }
 
   removePart(part: Part): void {
@@ -82,15 +103,29 @@ export class DesignIndex {
     for (const pin of part.pins) this.removePin(`${part.id}.${pin.id}`);
   }
 
-  addPin(part: Part, pin: Pin): void {
+  addPin(design: Design, part: Part, pin: Pin): void {
     const key = `${part.id}.${pin.id}`;
-    const entry: PinEntry = { part, pin, rail: pin.rail ?? part.rail, profile: pin.profile ?? part.profile, pullTo: pin.pull?.to };
+    const vddRange = resolvePin(design, part, pin).params.vddRange;
+    const entry: PinEntry = {
+      part, pin, rail: pin.rail ?? part.rail, profile: pin.profile ?? part.profile, pullTo: pin.pull?.to, vddRange,
+    };
     this.pins.set(key, entry);
     addTo(this.pinsOfRail, entry.rail, key);
     addTo(this.pinsOfProfile, entry.profile, key);
-    const group = groupKey(entry.rail, entry.profile);
-    addTo(this.pinsOfGroup, group, key);
-    addTo(this.groupsOfRail, entry.rail, group);
+    const gk = groupKey(entry.rail, entry.profile);
+    let group = this.groups.get(gk);
+    if (group === undefined) {
+      group = { pins: new Set(), ranges: new Map() };
+      this.groups.set(gk, group);
+    }
+    group.pins.add(key);
+    if (vddRange !== undefined) {
+      const rk = rangeKey(vddRange);
+      const slot = group.ranges.get(rk);
+      if (slot === undefined) group.ranges.set(rk, { range: vddRange, count: 1 });
+      else slot.count++;
+    }
+    addTo(this.groupsOfRail, entry.rail, gk);
     if (entry.pullTo !== undefined && entry.pullTo !== GROUND) addTo(this.pullPinsOfRail, entry.pullTo, key);
   }
 
@@ -100,9 +135,20 @@ export class DesignIndex {
     this.pins.delete(key);
     removeFrom(this.pinsOfRail, entry.rail, key);
     removeFrom(this.pinsOfProfile, entry.profile, key);
-    const group = groupKey(entry.rail, entry.profile);
-    removeFrom(this.pinsOfGroup, group, key);
-    if (!this.pinsOfGroup.has(group)) removeFrom(this.groupsOfRail, entry.rail, group);
+    const gk = groupKey(entry.rail, entry.profile);
+    const group = this.groups.get(gk);
+    if (group !== undefined) {
+      group.pins.delete(key);
+      if (entry.vddRange !== undefined) {
+        const rk = rangeKey(entry.vddRange);
+        const slot = group.ranges.get(rk);
+        if (slot !== undefined && --slot.count === 0) group.ranges.delete(rk);
+      }
+      if (group.pins.size === 0) {
+        this.groups.delete(gk);
+        removeFrom(this.groupsOfRail, entry.rail, gk);
+      }
+    }
     if (entry.pullTo !== undefined) removeFrom(this.pullPinsOfRail, entry.pullTo, key);
   }
 

@@ -110,8 +110,10 @@ export interface RailView {
   /** The rail's range with every rail on. */
   readonly range: Range;
   readonly profile: string;
-  /** Every pin whose effective rail and profile these are, in no particular order. */
-  readonly pins: readonly PinView[];
+  /** The distinct resolved `vddRange`s among the group's pins (the engine keeps them counted). */
+  readonly vddRanges: readonly (readonly [number, number])[];
+  /** The keys of the group's pins that have a `vddRange`, sorted; built only when asked for. */
+  readonly pinKeys: () => string[];
   readonly state: PowerState;
   readonly settings: EffectiveSettings;
 }

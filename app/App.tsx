@@ -1,0 +1,34 @@
+/** The editor: parts palette, canvas, findings and details, top bar and status line. */
+import { ReactFlowProvider } from '@xyflow/react';
+import '@xyflow/react/dist/style.css';
+import './styles.css';
+import { Canvas } from './canvas/Canvas.tsx';
+import { DetailsPanel } from './panels/DetailsPanel.tsx';
+import { FindingsPanel } from './panels/FindingsPanel.tsx';
+import { Palette } from './panels/Palette.tsx';
+import { StatusLine } from './panels/StatusLine.tsx';
+import { TopBar } from './panels/TopBar.tsx';
+import type { Saver } from './storage/currentDesign.ts';
+import { EditorProvider } from './store/EditorProvider.tsx';
+import type { EditorStore } from './store/editorStore.ts';
+import { useShortcuts } from './useShortcuts.ts';
+
+export function App({ store, saver }: { store: EditorStore; saver: Saver }) {
+  useShortcuts(store);
+  return (
+    <EditorProvider store={store}>
+      <ReactFlowProvider>
+        <div className="rc-app">
+          <TopBar />
+          <Palette />
+          <Canvas />
+          <div className="rc-side">
+            <FindingsPanel />
+            <DetailsPanel />
+          </div>
+          <StatusLine saver={saver} />
+        </div>
+      </ReactFlowProvider>
+    </EditorProvider>
+  );
+}

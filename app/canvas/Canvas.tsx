@@ -1,0 +1,141 @@
+/**
+ * The canvas: React Flow showing nodes and edges derived from the design. It keeps no copy of
+ * the design; it turns React Flow's events into commands (connect, move, select).
+ */
+import { useCallback, useMemo, useRef, type DragEvent } from 'react';
+import {
+  Background, BackgroundVariant, ConnectionMode, Controls, Panel, ReactFlow,
+  type Connection, type EdgeChange, type FinalConnectionState, type IsValidConnection, type NodeChange,
+} from '@xyflow/react';
+import { connectPins, moveParts, parseWireId, type Move } from '../store/commands/index.ts';
+import { useEditor, useEditorStore } from '../store/EditorProvider.tsx';
+import type { XY } from '../store/editorStore.ts';
+import { ChipNode } from './ChipNode.tsx';
+import { createFlowDeriver, type ChipNode as ChipNodeType, type WireEdge as WireEdgeType } from './deriveFlow.ts';
+import { Legend } from './Legend.tsx';
+import { CANVAS_ID, fitViewOptions, TEMPLATE_MIME, usePlacePart } from './placement.ts';
+import { WireEdge } from './WireEdge.tsx';
+
+const nodeTypes = { chip: ChipNode };
+const edgeTypes = { wire: WireEdge };
+const proOptions = { hideAttribution: true };
+const snapGrid: [number, number] = [10, 10];
+
+const pinOf = (node: string, handle: string | null | undefined) => `${node}.${handle ?? ''}`;
+
+export function Canvas() {
+  const store = useEditorStore();
+  const parts = useEditor((s) => s.design.parts);
+  const nets = useEditor((s) => s.design.nets);
+  const selectedParts = useEditor((s) => s.selection.parts);
+  const selectedWires = useEditor((s) => s.selection.wires);
+  const drag = useEditor((s) => s.dragPositions);
+  const deriver = useRef(createFlowDeriver()).current;
+  const nodes = useMemo(() => deriver.nodes(parts, selectedParts, drag), [deriver, parts, selectedParts, drag]);
+  const edges = useMemo(() => deriver.edges(nets, selectedWires), [deriver, nets, selectedWires]);
+  const place = usePlacePart();
+
+  const onNodesChange = useCallback((changes: NodeChange<ChipNodeType>[]) => {
+    const s = store.getState();
+    let dragging: Map<string, XY> | undefined;
+    const moves: Move[] = [];
+    let selected: Set<string> | undefined;
+    for (const c of changes) {
+      if (c.type === 'dimensions' && c.dimensions !== undefined) deriver.measured.set(c.id, c.dimensions);
+      else if (c.type === 'position' && c.position !== undefined) {
+        if (c.dragging === true) (dragging ??= new Map(s.dragPositions ?? [])).set(c.id, c.position);
+        else moves.push({ id: c.id, ...c.position });
+      } else if (c.type === 'select') {
+        selected ??= new Set(s.selection.parts);
+        if (c.selected) selected.add(c.id);
+        else selected.delete(c.id);
+      }
+    }
+    if (dragging !== undefined) s.setDragPositions(dragging);
+    // The end of a drag is the one step that goes on the undo stack.
+    if (moves.length > 0) {
+      s.apply(moveParts(moves));
+      s.setDragPositions(null);
+    }
+    if (selected !== undefined) s.select({ parts: [...selected], ...(selected.size > 0 ? { net: null } : {}) });
+  }, [store, deriver]);
+
+  const onEdgesChange = useCallback((changes: EdgeChange<WireEdgeType>[]) => {
+    const s = store.getState();
+    let wires: Set<string> | undefined;
+    for (const c of changes) {
+      if (c.type !== 'select') continue;
+      wires ??= new Set(s.selection.wires);
+      if (c.selected) wires.add(c.id);
+      else wires.delete(c.id);
+    }
+    if (wires === undefined) return;
+    const list = [...wires];
+    const nets = new Set(list.map((id) => parseWireId(id)?.net));
+    const net = nets.size === 1 ? ([...nets][0] ?? null) : null;
+    s.select({ wires: list, ...(list.length > 0 ? { net } : {}) });
+  }, [store]);
+
+  const onConnect = useCallback((c: Connection) => {
+    store.getState().apply(connectPins(pinOf(c.source, c.sourceHandle), pinOf(c.target, c.targetHandle)));
+  }, [store]);
+
+  // Refused while dragging (a pin to itself, to its own net): the handle shows it; on release, say why.
+  const isValidConnection = useCallback<IsValidConnection>((c) => {
+    const a = pinOf(c.source, c.sourceHandle);
+    const b = pinOf(c.target, c.targetHandle);
+    return a !== b && !store.getState().design.nets.some((n) => n.pins.includes(a) && n.pins.includes(b));
+  }, [store]);
+
+  const onConnectEnd = useCallback((_: MouseEvent | TouchEvent, state: FinalConnectionState) => {
+    if (state.isValid === true || state.fromHandle === null || state.toHandle === null) return;
+    store.getState().apply(connectPins(pinOf(state.fromHandle.nodeId, state.fromHandle.id), pinOf(state.toHandle.nodeId, state.toHandle.id)));
+  }, [store]);
+
+  const onPaneClick = useCallback(() => store.getState().select({ parts: [], wires: [], net: null }), [store]);
+
+  const onDragOver = useCallback((e: DragEvent) => {
+    if (!e.dataTransfer.types.includes(TEMPLATE_MIME)) return;
+    e.preventDefault();
+    e.dataTransfer.dropEffect = 'copy';
+  }, []);
+
+  const onDrop = useCallback((e: DragEvent) => {
+    const id = e.dataTransfer.getData(TEMPLATE_MIME);
+    if (id === '') return;
+    e.preventDefault();
+    place(id, { x: e.clientX, y: e.clientY });
+  }, [place]);
+
+  return (
+    <div className="rc-canvas" id={CANVAS_ID} onDragOver={onDragOver} onDrop={onDrop}>
+      <ReactFlow<ChipNodeType, WireEdgeType>
+        nodes={nodes}
+        edges={edges}
+        nodeTypes={nodeTypes}
+        edgeTypes={edgeTypes}
+        onNodesChange={onNodesChange}
+        onEdgesChange={onEdgesChange}
+        onConnect={onConnect}
+        onConnectEnd={onConnectEnd}
+        onPaneClick={onPaneClick}
+        isValidConnection={isValidConnection}
+        connectionMode={ConnectionMode.Loose}
+        deleteKeyCode={null}
+        onlyRenderVisibleElements
+        snapToGrid
+        snapGrid={snapGrid}
+        fitView
+        fitViewOptions={fitViewOptions}
+        minZoom={0.1}
+        proOptions={proOptions}
+      >
+        <Background variant={BackgroundVariant.Dots} gap={20} size={1.2} className="rc-grid" />
+        <Controls showInteractive={false} position="bottom-right" />
+        <Panel position="bottom-left">
+          <Legend />
+        </Panel>
+      </ReactFlow>
+    </div>
+  );
+}

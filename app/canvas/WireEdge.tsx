@@ -1,0 +1,84 @@
+/**
+ * A wire: one pin pair of a net, drawn as right-angled segments. Its look comes from its
+ * net's worst unwaived severity in the chosen power state, read by net id from the store
+ * (not from the edge object, stack.md "React Flow at scale"): red and solid with a casing for
+ * an error, amber and dashed for a warning, neutral when clean.
+ */
+import { memo, useState } from 'react';
+import { BaseEdge, EdgeLabelRenderer, getSmoothStepPath, Position, type EdgeProps } from '@xyflow/react';
+import { formatQuantity } from '../../rules/levels/units.ts';
+import { useEditor } from '../store/EditorProvider.tsx';
+import type { WireEdge as WireEdgeType } from './deriveFlow.ts';
+import { SeverityGlyph } from './SeverityGlyph.tsx';
+
+function margin(v: number | null | undefined): string {
+  return v === null || v === undefined ? 'no pair' : formatQuantity(v, 'V');
+}
+
+/** What hovering a wire shows: the net's worst margins in the chosen power state. */
+function WireTip({ net, x, y }: { net: string; x: number; y: number }) {
+  const high = useEditor((s) => s.result.nets.get(s.powerState)?.get(net)?.view.analysis.worstHigh);
+  const low = useEditor((s) => s.result.nets.get(s.powerState)?.get(net)?.view.analysis.worstLow);
+  const count = useEditor((s) => s.result.nets.get(s.powerState)?.get(net)?.findings.filter((f) => f.waived === undefined).length ?? 0);
+  const state = useEditor((s) => s.result.states.find((st) => st.id === s.powerState)?.label ?? s.powerState);
+  return (
+    <div className="rc-wire-tip" style={{ transform: `translate(-50%, calc(-100% - 14px)) translate(${x}px, ${y}px)` }} role="tooltip">
+      <div className="rc-wire-tip-row"><span>worst high margin</span><b data-margin="high">{margin(high)}</b></div>
+      <div className="rc-wire-tip-row"><span>worst low margin</span><b data-margin="low">{margin(low)}</b></div>
+      <div className="rc-wire-tip-foot">{count === 0 ? 'no findings' : `${count} finding${count === 1 ? '' : 's'}`} · {state}</div>
+    </div>
+  );
+}
+
+/**
+ * The net's name sits just off its first pin, above the wire, as a name is written beside a
+ * pin on a schematic: mid-wire names pile up where wires share a channel.
+ */
+function labelPlace(x: number, y: number, side: Position): { transform: string } {
+  switch (side) {
+    case Position.Left:
+      return { transform: `translate(-100%, -100%) translate(${x - 10}px, ${y - 1}px)` };
+    case Position.Top:
+      return { transform: `translate(4px, -100%) translate(${x}px, ${y - 6}px)` };
+    case Position.Bottom:
+      return { transform: `translate(4px, 0) translate(${x}px, ${y + 6}px)` };
+    default:
+      return { transform: `translate(0, -100%) translate(${x + 10}px, ${y - 1}px)` };
+  }
+}
+
+function WireEdgeView(props: EdgeProps<WireEdgeType>) {
+  const { id, data, selected, sourceX, sourceY, targetX, targetY, sourcePosition, targetPosition } = props;
+  const net = data?.net ?? '';
+  const severity = useEditor((s) => s.netStatus.get(net)?.severity ?? 'clean');
+  const rule = useEditor((s) => s.netStatus.get(net)?.rule ?? '');
+  const highlighted = useEditor((s) => s.selection.net === net);
+  const [hover, setHover] = useState(false);
+  const [path, midX, midY] = getSmoothStepPath({ sourceX, sourceY, targetX, targetY, sourcePosition, targetPosition, borderRadius: 3, offset: 14 });
+  const name = labelPlace(sourceX, sourceY, sourcePosition);
+
+  const classes = ['rc-wire', `rc-wire--${severity}`, selected ? 'rc-wire--selected' : '', highlighted ? 'rc-wire--net' : ''].filter((c) => c !== '').join(' ');
+  return (
+    <g className={classes} data-net={net} data-severity={severity} data-rule={rule} onMouseEnter={() => setHover(true)} onMouseLeave={() => setHover(false)}>
+      {(selected || highlighted || severity === 'error') && <path d={path} className="rc-wire-under" fill="none" />}
+      <BaseEdge id={id} path={path} interactionWidth={14} />
+      {(data?.label != null || hover) && (
+        <EdgeLabelRenderer>
+          {data?.label != null && (
+            <div
+              className={`rc-net-label rc-net-label--${severity} nodrag nopan`}
+              style={{ transform: name.transform }}
+              data-net-label={net}
+            >
+              <SeverityGlyph severity={severity} size={11} />
+              <span>{data.label}</span>
+            </div>
+          )}
+          {hover && <WireTip net={net} x={midX} y={midY} />}
+        </EdgeLabelRenderer>
+      )}
+    </g>
+  );
+}
+
+export const WireEdge = memo(WireEdgeView);

@@ -1,0 +1,65 @@
+/** Where a chip's pins go, and how big the chip is drawn (the CSS in styles.css follows these numbers). */
+import type { Part, Pin } from '../../rules/model/schema.ts';
+
+export type Side = NonNullable<Pin['side']>;
+
+/** The side the design gives, else inputs left and outputs and bidir pins right. */
+export function sideOf(pin: Pin): Side {
+  return pin.side ?? (pin.role === 'input' ? 'left' : 'right');
+}
+
+export interface PinLayout {
+  readonly left: readonly Pin[];
+  readonly right: readonly Pin[];
+  readonly top: readonly Pin[];
+  readonly bottom: readonly Pin[];
+}
+
+const cache = new WeakMap<readonly Pin[], PinLayout>();
+
+export function pinLayout(pins: readonly Pin[]): PinLayout {
+  const hit = cache.get(pins);
+  if (hit !== undefined) return hit;
+  const out: Record<Side, Pin[]> = { left: [], right: [], top: [], bottom: [] };
+  for (const p of pins) out[sideOf(p)].push(p);
+  cache.set(pins, out);
+  return out;
+}
+
+export const CHIP_WIDTH = 208;
+/** Room around the chip inside its node, where the outer half of each handle sits (styles.css, .rc-chip). */
+export const NODE_MARGIN = 6;
+export const HEADER_HEIGHT = 44;
+export const ROW_HEIGHT = 20;
+export const STRIP_HEIGHT = 30;
+
+/** The chip's drawn size, for finding a free place before React Flow has measured it. */
+export function chipSize(part: Part): { width: number; height: number } {
+  const l = pinLayout(part.pins);
+  const rows = Math.max(l.left.length, l.right.length, 1);
+  const strips = (l.top.length > 0 ? STRIP_HEIGHT + 1 : 0) + (l.bottom.length > 0 ? STRIP_HEIGHT + 1 : 0);
+  return { width: CHIP_WIDTH, height: HEADER_HEIGHT + rows * ROW_HEIGHT + strips + 8 };
+}
+
+/**
+ * The first place near `at` where a chip of `size` overlaps no part, trying a widening ring
+ * of grid points around it.
+ */
+export function freePlace(parts: readonly Part[], at: { x: number; y: number }, size: { width: number; height: number }): { x: number; y: number } {
+  const gap = 24;
+  const boxes = parts.map((p) => ({ ...(p.position ?? { x: 0, y: 0 }), ...chipSize(p) }));
+  const free = (x: number, y: number) =>
+    boxes.every((b) => x + size.width + gap <= b.x || b.x + b.width + gap <= x || y + size.height + gap <= b.y || b.y + b.height + gap <= y);
+  const step = 40;
+  for (let ring = 0; ring < 30; ring++) {
+    for (let dx = -ring; dx <= ring; dx++) {
+      for (let dy = -ring; dy <= ring; dy++) {
+        if (Math.max(Math.abs(dx), Math.abs(dy)) !== ring) continue;
+        const x = at.x + dx * step;
+        const y = at.y + dy * step;
+        if (free(x, y)) return { x, y };
+      }
+    }
+  }
+  return at;
+}

@@ -1,0 +1,73 @@
+/** Placing parts from the palette and bringing things into view: canvas actions other panels call. */
+import { useCallback } from 'react';
+import { useReactFlow } from '@xyflow/react';
+import { addPart } from '../store/commands/index.ts';
+import { useEditorStore } from '../store/EditorProvider.tsx';
+import { templateById } from '../store/templates.ts';
+import { chipSize, freePlace } from './chipLayout.ts';
+
+export const CANVAS_ID = 'rc-canvas';
+export const TEMPLATE_MIME = 'application/x-railcross-template';
+
+/**
+ * How the whole design is fitted into view. Nodes outside the view are never rendered, so
+ * never measured (onlyRenderVisibleElements): `includeHiddenNodes` lets fitView fall back on
+ * their drawn size (the nodes' initialWidth/initialHeight).
+ */
+export const fitViewOptions = { padding: 0.12, maxZoom: 1.1, includeHiddenNodes: true };
+
+/**
+ * Place a part from a template: where it was dropped (`screen`, the pointer's position), or
+ * near the middle of the visible canvas, at the first free spot. Selects the new part.
+ */
+export function usePlacePart(): (templateId: string, screen?: { x: number; y: number }) => string | undefined {
+  const store = useEditorStore();
+  const { screenToFlowPosition } = useReactFlow();
+  return useCallback(
+    (templateId, screen) => {
+      const template = templateById(templateId);
+      const s = store.getState();
+      if (template === undefined) return undefined;
+      let point = screen;
+      if (point === undefined) {
+        const rect = document.getElementById(CANVAS_ID)?.getBoundingClientRect();
+        point = rect === undefined ? { x: 0, y: 0 } : { x: rect.left + rect.width / 2, y: rect.top + rect.height / 2 };
+      }
+      const centre = screenToFlowPosition(point);
+      const built = template.build(s.design, centre);
+      if ('refused' in built) {
+        s.notify({ kind: 'refused', text: built.refused });
+        return undefined;
+      }
+      const size = chipSize(built);
+      const corner = { x: centre.x - size.width / 2, y: centre.y - size.height / 2 };
+      const at = screen === undefined ? freePlace(s.design.parts, corner, size) : corner;
+      const part = { ...built, position: { x: Math.round(at.x), y: Math.round(at.y) } };
+      const out = s.apply(addPart(part));
+      if (!out.ok) return undefined;
+      s.select({ parts: [part.id], wires: [], net: null });
+      return part.id;
+    },
+    [store, screenToFlowPosition],
+  );
+}
+
+/** Bring a net (all the parts on it) or a part into view. */
+export function useFocus() {
+  const store = useEditorStore();
+  const { fitView } = useReactFlow();
+  return useCallback(
+    (target: { net: string } | { part: string }) => {
+      const { design } = store.getState();
+      let ids: string[];
+      if ('net' in target) {
+        const net = design.nets.find((n) => n.id === target.net);
+        ids = [...new Set((net?.pins ?? []).map((k) => k.slice(0, k.indexOf('.'))))];
+      } else ids = [target.part];
+      if (ids.length === 0) return;
+      // includeHiddenNodes: see fitViewOptions.
+      void fitView({ nodes: ids.map((id) => ({ id })), padding: 0.35, duration: 250, maxZoom: 1.2, includeHiddenNodes: true });
+    },
+    [store, fitView],
+  );
+}

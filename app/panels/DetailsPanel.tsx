@@ -1,0 +1,34 @@
+/** The details of the selection (a part, or a net), then the rails and the power states. */
+import { useEditor } from '../store/EditorProvider.tsx';
+import { NetDetails } from './NetDetails.tsx';
+import { PartDetails } from './PartDetails.tsx';
+import { PowerStatesEditor } from './PowerStatesEditor.tsx';
+import { RailsEditor } from './RailsEditor.tsx';
+
+export function DetailsPanel() {
+  const part = useEditor((s) => (s.selection.parts.length === 1 ? s.design.parts.find((p) => p.id === s.selection.parts[0]) : undefined));
+  const net = useEditor((s) => (s.selection.net === null ? undefined : s.design.nets.find((n) => n.id === s.selection.net)));
+  const many = useEditor((s) => s.selection.parts.length + s.selection.wires.length);
+  return (
+    <section className="rc-details" aria-label="Details">
+      <div className="rc-panel-head">Details</div>
+      <div className="rc-details-body">
+        {part !== undefined ? (
+          <PartDetails part={part} />
+        ) : net !== undefined ? (
+          <NetDetails net={net} />
+        ) : (
+          <p className="rc-empty">{many > 1 ? `${many} items selected: Delete removes them.` : 'Select a chip or a wire to edit it.'}</p>
+        )}
+        <details className="rc-fold">
+          <summary>Rails</summary>
+          <RailsEditor />
+        </details>
+        <details className="rc-fold">
+          <summary>Power states</summary>
+          <PowerStatesEditor />
+        </details>
+      </div>
+    </section>
+  );
+}

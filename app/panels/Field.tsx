@@ -1,0 +1,98 @@
+/**
+ * Form fields that edit the design through commands: they keep what is being typed locally
+ * and commit on Enter or on leaving the field; Escape puts the stored value back. A value the
+ * parser or the command refuses stays in the field with the reason beside it; nothing is
+ * stored.
+ */
+import { useId, useState, type KeyboardEvent } from 'react';
+import { formatQuantity, parseQuantity, type QuantityResult, type Unit } from '../../rules/levels/units.ts';
+import type { Outcome } from '../store/editorStore.ts';
+
+interface Editing {
+  draft: string | null;
+  error: string | null;
+}
+
+function useEditing(shown: string, commit: (text: string) => string | null) {
+  const [state, setState] = useState<Editing>({ draft: null, error: null });
+  const finish = () => {
+    if (state.draft === null || state.draft === shown) {
+      setState({ draft: null, error: null });
+      return;
+    }
+    const error = commit(state.draft);
+    setState(error === null ? { draft: null, error: null } : { draft: state.draft, error });
+  };
+  const onKeyDown = (e: KeyboardEvent<HTMLInputElement>) => {
+    if (e.key === 'Enter') finish();
+    if (e.key === 'Escape') setState({ draft: null, error: null });
+  };
+  return {
+    value: state.draft ?? shown,
+    error: state.error,
+    onChange: (text: string) => setState({ draft: text, error: state.error }),
+    onBlur: finish,
+    onKeyDown,
+  };
+}
+
+interface FieldProps {
+  label: string;
+  testId?: string;
+  /** Hide the label visually (it stays the input's accessible name). */
+  quiet?: boolean;
+}
+
+function Frame({ label, quiet, error, errorId, children }: { label: string; quiet?: boolean | undefined; error: string | null; errorId: string; children: React.ReactNode }) {
+  return (
+    <label className={`rc-field${error !== null ? ' rc-field--invalid' : ''}`}>
+      <span className={quiet === true ? 'rc-sr' : 'rc-field-label'}>{label}</span>
+      {children}
+      {error !== null && <span className="rc-field-error" id={errorId} role="alert">{error}</span>}
+    </label>
+  );
+}
+
+export function TextField({ label, value, onCommit, testId, quiet }: FieldProps & { value: string; onCommit: (text: string) => Outcome }) {
+  const errorId = useId();
+  const f = useEditing(value, (text) => {
+    const out = onCommit(text);
+    return out.ok ? null : out.reason;
+  });
+  return (
+    <Frame label={label} quiet={quiet} error={f.error} errorId={errorId}>
+      <input type="text" value={f.value} data-testid={testId} spellCheck={false} aria-invalid={f.error !== null}
+        aria-describedby={f.error !== null ? errorId : undefined}
+        onChange={(e) => f.onChange(e.target.value)} onBlur={f.onBlur} onKeyDown={f.onKeyDown} />
+    </Frame>
+  );
+}
+
+export interface QuantityFieldProps extends FieldProps {
+  value: number;
+  /** The unit the value is in; parsed with the engine's engineering-notation reader. */
+  unit: Unit;
+  onCommit: (value: number) => Outcome;
+  /** Text shown for the stored value; default engineering notation with four digits. */
+  format?: (value: number) => string;
+  /** Text to value; default `parseQuantity(text, unit)`. */
+  parse?: (text: string) => QuantityResult;
+}
+
+export function QuantityField({ label, value, unit, onCommit, format, parse, testId, quiet }: QuantityFieldProps) {
+  const errorId = useId();
+  const shown = format !== undefined ? format(value) : formatQuantity(value, unit, 4);
+  const f = useEditing(shown, (text) => {
+    const read = parse !== undefined ? parse(text) : parseQuantity(text, unit);
+    if (!read.ok) return read.error;
+    const out = onCommit(read.value);
+    return out.ok ? null : out.reason;
+  });
+  return (
+    <Frame label={label} quiet={quiet} error={f.error} errorId={errorId}>
+      <input type="text" inputMode="decimal" value={f.value} data-testid={testId} spellCheck={false} aria-invalid={f.error !== null}
+        aria-describedby={f.error !== null ? errorId : undefined}
+        onChange={(e) => f.onChange(e.target.value)} onBlur={f.onBlur} onKeyDown={f.onKeyDown} />
+    </Frame>
+  );
+}

@@ -1,0 +1,46 @@
+import type { Draft } from 'immer';
+import type { Design } from '../../../rules/model/schema.ts';
+
+/** Why a command was refused; nothing of the design changes. */
+export interface Refusal {
+  readonly refused: string;
+}
+
+/**
+ * One edit of the design: a verb-first name and a recipe that mutates an immer draft. The
+ * recipe may instead return a whole new design (New design, Open example) or a refusal.
+ */
+export interface Command {
+  readonly name: string;
+  readonly recipe: (draft: Draft<Design>) => Refusal | Design | void;
+}
+
+export function refuse(reason: string): Refusal {
+  return { refused: reason };
+}
+
+export function isRefusal(value: unknown): value is Refusal {
+  return typeof value === 'object' && value !== null && 'refused' in value;
+}
+
+/** `PART.PIN` split in two; undefined parts when the key has no dot. */
+export function splitPinKey(key: string): { part: string; pin: string } {
+  const dot = key.indexOf('.');
+  return dot < 0 ? { part: key, pin: '' } : { part: key.slice(0, dot), pin: key.slice(dot + 1) };
+}
+
+export function pinKey(part: string, pin: string): string {
+  return `${part}.${pin}`;
+}
+
+/** True when the design has that part and that pin. */
+export function hasPin(design: Design, key: string): boolean {
+  const { part, pin } = splitPinKey(key);
+  return design.parts.some((p) => p.id === part && p.pins.some((q) => q.id === pin));
+}
+
+/** The smallest `${prefix}${k}` (k ≥ 1) not among `taken`. */
+export function freshId(prefix: string, taken: Iterable<string>): string {
+  const used = new Set(taken);
+  for (let k = 1; ; k++) if (!used.has(`${prefix}${k}`)) return `${prefix}${k}`;
+}

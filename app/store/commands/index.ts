@@ -1,0 +1,10 @@
+/** Every edit of the design, as verb-first commands (house-style.md, "The editor"). */
+export { type Command, type Refusal, refuse, isRefusal, pinKey, splitPinKey, freshId } from './command.ts';
+export { connectPins } from './connectPins.ts';
+export { disconnectWire } from './disconnectWire.ts';
+export { addPart, moveParts, setPartLabel, setPartRail, setPartProfile, type Move } from './parts.ts';
+export { setNetLabel, setNetPull } from './nets.ts';
+export { addRail, setRailLabel, setRailVoltage, setRailTolerance, setRailColour, deleteRail } from './rails.ts';
+export { addPowerState, setPowerStateLabel, setRailOff, deletePowerState } from './powerStates.ts';
+export { setTitle, replaceDesign, deleteSelection, type Deletion } from './design.ts';
+export { netWires, wireGroups, wireId, parseWireId, type Pair } from './netGraph.ts';

@@ -1,0 +1,34 @@
+import type { Pull } from '../../../rules/model/schema.ts';
+import { GROUND } from '../../../rules/model/references.ts';
+import { refuse, type Command } from './command.ts';
+
+export function setNetLabel(id: string, label: string): Command {
+  return {
+    name: `Label net ${id}`,
+    recipe(design) {
+      const net = design.nets.find((n) => n.id === id);
+      if (net === undefined) return refuse(`There is no net ${id}.`);
+      const text = label.trim();
+      if (text === '') delete net.label;
+      else net.label = text;
+    },
+  };
+}
+
+/** Give a net an external pull resistor, or take it away (`null`). */
+export function setNetPull(id: string, pull: Pull | null): Command {
+  return {
+    name: pull === null ? `Remove the pull of net ${id}` : `Pull net ${id}`,
+    recipe(design) {
+      const net = design.nets.find((n) => n.id === id);
+      if (net === undefined) return refuse(`There is no net ${id}.`);
+      if (pull === null) {
+        delete net.pull;
+        return;
+      }
+      if (!(Number.isFinite(pull.ohms) && pull.ohms > 0)) return refuse('A pull resistor needs a positive value in Ω.');
+      if (pull.to !== GROUND && !design.rails.some((r) => r.id === pull.to)) return refuse(`There is no rail ${pull.to}.`);
+      net.pull = { to: pull.to, ohms: pull.ohms };
+    },
+  };
+}

@@ -1,0 +1,107 @@
+import type { Draft } from 'immer';
+import type { Design, Part } from '../../../rules/model/schema.ts';
+import { resolveProfile } from '../../../rules/profiles/index.ts';
+import { refuse, type Command } from './command.ts';
+import { netWires } from './netGraph.ts';
+
+const BAD_ID = /[.:>]/;
+
+/** Place a new part (a template made it, with a fresh designator). */
+export function addPart(part: Part): Command {
+  return {
+    name: `Add ${part.id}`,
+    recipe(design) {
+      if (part.id === '' || BAD_ID.test(part.id)) return refuse(`"${part.id}" cannot be a designator (no ".", ":" or ">").`);
+      if (design.parts.some((p) => p.id === part.id)) return refuse(`There is already a part ${part.id}.`);
+      if (!design.rails.some((r) => r.id === part.rail)) return refuse(`There is no rail ${part.rail}: add a rail first.`);
+      if (resolveProfile(design, part.profile) === undefined) return refuse(`There is no profile ${part.profile}.`);
+      design.parts.push(structuredClone(part));
+    },
+  };
+}
+
+export interface Move {
+  readonly id: string;
+  readonly x: number;
+  readonly y: number;
+}
+
+/** Move parts: one drag of one or several parts is one step. Positions are kept to whole units. */
+export function moveParts(moves: readonly Move[]): Command {
+  return {
+    name: moves.length === 1 ? `Move ${moves[0]!.id}` : `Move ${moves.length} parts`,
+    recipe(design) {
+      for (const m of moves) {
+        const part = design.parts.find((p) => p.id === m.id);
+        if (part === undefined || !Number.isFinite(m.x) || !Number.isFinite(m.y)) continue;
+        const x = Math.round(m.x);
+        const y = Math.round(m.y);
+        if (part.position?.x === x && part.position.y === y) continue;
+        part.position = { x, y };
+      }
+    },
+  };
+}
+
+function findPart(design: Draft<Design>, id: string) {
+  return design.parts.find((p) => p.id === id);
+}
+
+export function setPartLabel(id: string, label: string): Command {
+  return {
+    name: `Rename ${id}`,
+    recipe(design) {
+      const part = findPart(design, id);
+      if (part === undefined) return refuse(`There is no part ${id}.`);
+      part.label = label;
+    },
+  };
+}
+
+export function setPartRail(id: string, rail: string): Command {
+  return {
+    name: `Put ${id} on rail ${rail}`,
+    recipe(design) {
+      const part = findPart(design, id);
+      if (part === undefined) return refuse(`There is no part ${id}.`);
+      if (!design.rails.some((r) => r.id === rail)) return refuse(`There is no rail ${rail}.`);
+      part.rail = rail;
+    },
+  };
+}
+
+export function setPartProfile(id: string, profile: string): Command {
+  return {
+    name: `Give ${id} profile ${profile}`,
+    recipe(design) {
+      const part = findPart(design, id);
+      if (part === undefined) return refuse(`There is no part ${id}.`);
+      if (resolveProfile(design, profile) === undefined) return refuse(`There is no profile ${profile}.`);
+      part.profile = profile;
+    },
+  };
+}
+
+/**
+ * Remove parts and take their pins off every net. A net left with one pin goes; the others
+ * stay whole (the copper between the remaining pins is still there), their route keeping the
+ * wires that remain, the drawing joining what those leave apart.
+ */
+export function removeParts(design: Draft<Design>, ids: readonly string[]): void {
+  const gone = new Set(ids);
+  const isGone = (key: string) => gone.has(key.slice(0, key.indexOf('.')));
+  design.parts = design.parts.filter((p) => !gone.has(p.id));
+  for (let k = design.nets.length - 1; k >= 0; k--) {
+    const net = design.nets[k]!;
+    if (!net.pins.some(isGone)) continue;
+    const pins = net.pins.filter((p) => !isGone(p));
+    if (pins.length < 2) {
+      design.nets.splice(k, 1);
+      continue;
+    }
+    const route = netWires(net).filter(([a, b]) => !isGone(a) && !isGone(b));
+    net.pins = pins;
+    if (route.length > 0) net.route = route.map(([a, b]) => [a, b]);
+    else delete net.route;
+  }
+}

@@ -1,0 +1,163 @@
+/**
+ * The editor's store: the document (undoable), the UI state (selection, chosen power state,
+ * positions during a drag: never undone) and the findings (derived). Every edit goes through
+ * `apply(command)`, the one commit path: immer records the patches for undo, the engine
+ * re-checks with the previous result, and subscribers (storage) see the new design.
+ */
+import { applyPatches, enablePatches, produceWithPatches, type Patch } from 'immer';
+import { createStore, type StoreApi } from 'zustand/vanilla';
+import { check } from '../../rules/engine/check.ts';
+import { ALL_ON } from '../../rules/engine/powerStates.ts';
+import type { CheckResult } from '../../rules/engine/types.ts';
+import type { Design } from '../../rules/model/schema.ts';
+import { isRefusal, type Command } from './commands/command.ts';
+import { netStatuses, type NetStatus } from './netStatus.ts';
+import { cleanSelection, EMPTY_SELECTION, type Selection } from './selection.ts';
+
+enablePatches();
+
+/** One undo step. */
+export interface Step {
+  readonly name: string;
+  readonly patches: readonly Patch[];
+  readonly inverse: readonly Patch[];
+}
+
+export type Outcome = { readonly ok: true; readonly changed: boolean } | { readonly ok: false; readonly reason: string };
+
+/** The last re-check, for the status line. */
+export interface CheckStat {
+  readonly action: string;
+  readonly netsChecked: number;
+  readonly ms: number;
+}
+
+export interface Notice {
+  readonly kind: 'refused' | 'done';
+  readonly text: string;
+}
+
+export interface XY {
+  readonly x: number;
+  readonly y: number;
+}
+
+export interface EditorState {
+  readonly design: Design;
+  readonly result: CheckResult;
+  readonly past: readonly Step[];
+  readonly future: readonly Step[];
+  readonly selection: Selection;
+  /** The power state the wires are coloured for. */
+  readonly powerState: string;
+  /** Worst severity per net in `powerState`. */
+  readonly netStatus: ReadonlyMap<string, NetStatus>;
+  /** Where dragged parts are while the drag lasts; committed as one step when it ends. */
+  readonly dragPositions: ReadonlyMap<string, XY> | null;
+  readonly lastCheck: CheckStat;
+  readonly notice: Notice | null;
+
+  apply(command: Command): Outcome;
+  undo(): boolean;
+  redo(): boolean;
+  select(selection: Partial<Selection>): void;
+  setPowerState(id: string): void;
+  setDragPositions(positions: ReadonlyMap<string, XY> | null): void;
+  notify(notice: Notice | null): void;
+}
+
+export type EditorStore = StoreApi<EditorState>;
+
+/** Create an editor holding `design` (already validated) and its first full check. */
+export function createEditorStore(design: Design): EditorStore {
+  return createStore<EditorState>()((set, get) => {
+    /** Take a new design: re-check against the previous result and keep the UI state consistent. */
+    function adopt(next: Design, action: string, history: Pick<EditorState, 'past' | 'future'>, notice: Notice | null): void {
+      const s = get();
+      const result = check(next, s.result);
+      const powerState = result.states.some((st) => st.id === s.powerState) ? s.powerState : ALL_ON;
+      set({
+        ...history,
+        design: next,
+        result,
+        powerState,
+        netStatus: netStatuses(result, powerState, s.netStatus),
+        selection: cleanSelection(next, s.selection),
+        lastCheck: { action, netsChecked: result.stats.netsChecked, ms: result.stats.ms },
+        notice,
+      });
+    }
+
+    const first = check(design);
+    return {
+      design,
+      result: first,
+      past: [],
+      future: [],
+      selection: EMPTY_SELECTION,
+      powerState: ALL_ON,
+      netStatus: netStatuses(first, ALL_ON),
+      dragPositions: null,
+      lastCheck: { action: 'Open', netsChecked: first.stats.netsChecked, ms: first.stats.ms },
+      notice: null,
+
+      apply(command) {
+        const s = get();
+        let refusal: string | undefined;
+        const [next, patches, inverse] = produceWithPatches(s.design, (draft) => {
+          const out = command.recipe(draft);
+          if (isRefusal(out)) {
+            refusal = out.refused;
+            return undefined;
+          }
+          return out;
+        });
+        if (refusal !== undefined) {
+          set({ notice: { kind: 'refused', text: refusal } });
+          return { ok: false, reason: refusal };
+        }
+        if (patches.length === 0) return { ok: true, changed: false };
+        const step: Step = { name: command.name, patches, inverse };
+        adopt(next, command.name, { past: [...s.past, step], future: [] }, null);
+        return { ok: true, changed: true };
+      },
+
+      undo() {
+        const s = get();
+        const step = s.past[s.past.length - 1];
+        if (step === undefined) return false;
+        const next = applyPatches(s.design, step.inverse as Patch[]);
+        adopt(next, `Undo ${step.name}`, { past: s.past.slice(0, -1), future: [step, ...s.future] }, { kind: 'done', text: `Undid: ${step.name}` });
+        return true;
+      },
+
+      redo() {
+        const s = get();
+        const step = s.future[0];
+        if (step === undefined) return false;
+        const next = applyPatches(s.design, step.patches as Patch[]);
+        adopt(next, `Redo ${step.name}`, { past: [...s.past, step], future: s.future.slice(1) }, { kind: 'done', text: `Redid: ${step.name}` });
+        return true;
+      },
+
+      select(partial) {
+        const s = get();
+        set({ selection: cleanSelection(s.design, { ...s.selection, ...partial }) });
+      },
+
+      setPowerState(id) {
+        const s = get();
+        if (id === s.powerState || !s.result.states.some((st) => st.id === id)) return;
+        set({ powerState: id, netStatus: netStatuses(s.result, id, s.netStatus) });
+      },
+
+      setDragPositions(positions) {
+        set({ dragPositions: positions });
+      },
+
+      notify(notice) {
+        set({ notice });
+      },
+    };
+  });
+}
