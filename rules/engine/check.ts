@@ -12,7 +12,7 @@ import { RULES } from '../checks/index.ts';
 import type { AnyRule } from '../checks/defineRule.ts';
 import { ALL_ON, effectiveSettings, powerStates, railStates } from './powerStates.ts';
 import { pinView, prepareNet, type PrepareContext } from './prepare.ts';
-import { completeFinding, sortFindings } from './findings.ts';
+import { completeFinding, restampFinding, sortFindings } from './findings.ts';
 import { DesignIndex, groupKey, splitGroupKey } from './designIndex.ts';
 import type { CheckResult, CheckStats, Finding, NetResult, PinView, PowerState, RailStates, Summary } from './types.ts';
 
@@ -54,7 +54,18 @@ interface StateContext extends PrepareContext {
   readonly rules: readonly AnyRule[];
 }
 
-function checkNet(ctx: StateContext, net: Net): NetResult {
+/**
+ * One net in one power state. In a scenario, a net none of whose rails (its pins' and its pulls')
+ * is off sees exactly what it sees in `all-on`: its result there is re-stamped for this state.
+ */
+function checkNet(ctx: StateContext, net: Net, allOn?: NetResult): NetResult {
+  if (allOn !== undefined && allOn.net === net && ctx.state.id !== ALL_ON && !touchesOff(allOn, ctx.state)) {
+    return {
+      net,
+      view: { ...allOn.view, state: ctx.state },
+      findings: allOn.findings.map((f) => restampFinding(f, ALL_ON, ctx.state, net)),
+    };
+  }
   const view = prepareNet(ctx, net);
   const findings: Finding[] = [];
   for (const rule of ctx.rules) {
@@ -62,6 +73,12 @@ function checkNet(ctx: StateContext, net: Net): NetResult {
     rule.checkNet(view, (draft) => findings.push(completeFinding(rule, draft, ctx.state, net)));
   }
   return { net, view, findings };
+}
+
+function touchesOff(r: NetResult, state: PowerState): boolean {
+  if (state.off.size === 0) return false;
+  for (const rail of r.view.rails.ranges.keys()) if (state.off.has(rail)) return true;
+  return false;
 }
 
 function checkLonePin(ctx: StateContext, pin: PinView): Finding[] {
@@ -95,16 +112,17 @@ function checkGroup(ctx: StateContext, index: DesignIndex, rail: Rail, profile: 
 /** Every net and lone pin of one power state. */
 function checkState(ctx: StateContext, index: DesignIndex, t: Tables): void {
   const perNet: NetTable = new Map();
+  const allOn = t.nets.get(ALL_ON);
   for (const net of ctx.design.nets) {
-    const r = checkNet(ctx, net);
+    const r = checkNet(ctx, net, allOn?.get(net.id));
     perNet.set(net.id, r);
     count(t.summary, r.findings, 1);
     t.netsChecked++;
   }
   t.nets.set(ctx.state.id, perNet);
   const lone: LoneTable = new Map();
-  for (const [key, at] of index.pins) {
-    if (index.netOfPin.has(key)) continue;
+  for (const key of index.lone) {
+    const at = index.pins.get(key)!;
     const found = checkLonePin(ctx, pinView(ctx.design, at.part, at.pin, ctx.rails));
     if (found.length > 0) {
       lone.set(key, found);
@@ -263,8 +281,7 @@ function incrementalCheck(design: Design, prev: CheckResult, inner: Internals, s
   changedById(before.rails, design.rails, (id) => oldRails.get(id), (old, now) => {
     const id = (now ?? old)!.id;
     for (const g of index.groupsOfRail.get(id) ?? []) dirty.groups.add(g);
-    index.netsTouchingRail(id, dirty.nets);
-    for (const key of index.pinsOfRail.get(id) ?? []) dirty.lone.add(key);
+    index.touchingRail(id, dirty.nets, dirty.lone);
   });
 
   // Design-local profiles: every pin that uses a changed id.
@@ -274,7 +291,7 @@ function incrementalCheck(design: Design, prev: CheckResult, inner: Internals, s
     const now = new Map((design.profiles ?? []).map((p) => [p.id, p]));
     for (const id of new Set([...old.keys(), ...now.keys()])) {
       if (old.get(id) === now.get(id)) continue;
-      for (const key of index.pinsOfProfile.get(id) ?? []) {
+      for (const key of index.pinsUsingProfile(id)) {
         dirty.pins.add(key);
         profilePins.add(key);
       }
@@ -361,7 +378,7 @@ function incrementalCheck(design: Design, prev: CheckResult, inner: Internals, s
         if (old !== undefined) count(t.summary, old.findings, -1);
         const net = index.nets.get(id);
         if (net === undefined) { perNet.delete(id); continue; }
-        const r = checkNet(ctx, net);
+        const r = checkNet(ctx, net, t.nets.get(ALL_ON)?.get(id));
         perNet.set(id, r);
         count(t.summary, r.findings, 1);
         t.netsChecked++;

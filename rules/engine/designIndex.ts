@@ -1,10 +1,10 @@
 /**
- * The engine's indexes over a design: pin → location and net, rail → pins, profile → pins,
- * rail → nets pulled to it. Built once by a full check, then updated by the difference, so that
- * no step of an incremental check is quadratic in the design's size.
+ * The engine's indexes over a design: pin → location, resolved rail, profile and vddRange; pin
+ * → net; part and net by id; (rail, profile) groups with their counted vddRanges. Built once by
+ * a full check, then updated by the difference, so that no step of an incremental check is
+ * quadratic in the design's size. What only a rail or profile edit needs is scanned then.
  */
 import type { Design, Net, Part, Pin } from '../model/schema.ts';
-import { GROUND } from './powerStates.ts';
 import { resolvePin } from './resolve.ts';
 
 /** What the index remembers of a pin, to take it out again when the pin changes. */
@@ -62,14 +62,8 @@ export class DesignIndex {
   readonly nets = new Map<string, Net>();
   /** `PART.PIN` → the id of the net it is on. */
   readonly netOfPin = new Map<string, string>();
-  /** Rail id → keys of the pins whose effective rail it is. */
-  readonly pinsOfRail = new Map<string, Set<string>>();
-  /** Rail id → keys of the pins with an internal pull to it. */
-  readonly pullPinsOfRail = new Map<string, Set<string>>();
-  /** Profile id → keys of the pins that use it. */
-  readonly pinsOfProfile = new Map<string, Set<string>>();
-  /** Rail id → ids of the nets whose own pull goes to it. */
-  readonly netsPulledTo = new Map<string, Set<string>>();
+  /** Keys of the pins that are on no net (few on a real board: walked instead of every pin). */
+  readonly lone = new Set<string>();
   /** (rail, profile) group key → its pins and the distinct vddRanges among them. */
   readonly groups = new Map<string, PinGroup>();
   /** Rail id → the (rail, profile) group keys on it. */
@@ -110,8 +104,7 @@ export class DesignIndex {
       part, pin, rail: pin.rail ?? part.rail, profile: pin.profile ?? part.profile, pullTo: pin.pull?.to, vddRange,
     };
     this.pins.set(key, entry);
-    addTo(this.pinsOfRail, entry.rail, key);
-    addTo(this.pinsOfProfile, entry.profile, key);
+    if (!this.netOfPin.has(key)) this.lone.add(key);
     const gk = groupKey(entry.rail, entry.profile);
     let group = this.groups.get(gk);
     if (group === undefined) {
@@ -126,15 +119,13 @@ export class DesignIndex {
       else slot.count++;
     }
     addTo(this.groupsOfRail, entry.rail, gk);
-    if (entry.pullTo !== undefined && entry.pullTo !== GROUND) addTo(this.pullPinsOfRail, entry.pullTo, key);
   }
 
   removePin(key: string): void {
     const entry = this.pins.get(key);
     if (entry === undefined) return;
     this.pins.delete(key);
-    removeFrom(this.pinsOfRail, entry.rail, key);
-    removeFrom(this.pinsOfProfile, entry.profile, key);
+    this.lone.delete(key);
     const gk = groupKey(entry.rail, entry.profile);
     const group = this.groups.get(gk);
     if (group !== undefined) {
@@ -149,7 +140,6 @@ export class DesignIndex {
         removeFrom(this.groupsOfRail, entry.rail, gk);
       }
     }
-    if (entry.pullTo !== undefined) removeFrom(this.pullPinsOfRail, entry.pullTo, key);
   }
 
   /** Points an unchanged pin at its part's new object (a part that moved or was relabelled). */
@@ -164,26 +154,40 @@ export class DesignIndex {
 
   addNet(net: Net): void {
     this.nets.set(net.id, net);
-    for (const key of net.pins) this.netOfPin.set(key, net.id);
-    if (net.pull !== undefined && net.pull.to !== GROUND) addTo(this.netsPulledTo, net.pull.to, net.id);
+    for (const key of net.pins) {
+      this.netOfPin.set(key, net.id);
+      this.lone.delete(key);
+    }
   }
 
   removeNet(net: Net): void {
     if (this.nets.get(net.id) === net) this.nets.delete(net.id);
-    for (const key of net.pins) if (this.netOfPin.get(key) === net.id) this.netOfPin.delete(key);
-    if (net.pull !== undefined) removeFrom(this.netsPulledTo, net.pull.to, net.id);
+    for (const key of net.pins) {
+      if (this.netOfPin.get(key) !== net.id) continue;
+      this.netOfPin.delete(key);
+      if (this.pins.has(key)) this.lone.add(key);
+    }
   }
 
-  /** Ids of the nets whose result depends on a rail: pins on it, pulls to it. */
-  netsTouchingRail(rail: string, into: Set<string>): void {
-    for (const key of this.pinsOfRail.get(rail) ?? []) {
+  /**
+   * What depends on a rail: the nets of pins on it or pulled to it, and the pins on it. A rail
+   * edit reaches a large share of the design anyway, so this scans rather than keeping sets
+   * that every pin would pay for.
+   */
+  touchingRail(rail: string, nets: Set<string>, pins: Set<string>): void {
+    for (const [key, entry] of this.pins) {
+      if (entry.rail === rail) pins.add(key);
+      if (entry.rail !== rail && entry.pullTo !== rail) continue;
       const n = this.netOfPin.get(key);
-      if (n !== undefined) into.add(n);
+      if (n !== undefined) nets.add(n);
     }
-    for (const key of this.pullPinsOfRail.get(rail) ?? []) {
-      const n = this.netOfPin.get(key);
-      if (n !== undefined) into.add(n);
-    }
-    for (const n of this.netsPulledTo.get(rail) ?? []) into.add(n);
+    for (const net of this.nets.values()) if (net.pull?.to === rail) nets.add(net.id);
+  }
+
+  /** Keys of the pins whose effective profile id is this (scanned: design-local profiles change rarely). */
+  pinsUsingProfile(profile: string): string[] {
+    const out: string[] = [];
+    for (const [key, entry] of this.pins) if (entry.profile === profile) out.push(key);
+    return out;
   }
 }

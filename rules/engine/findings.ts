@@ -14,15 +14,7 @@ export function completeFinding<M extends MessageFns>(
   const place = net?.id ?? draft.subject ?? '';
   const id = `${rule.id}:${place}:${state.id}${draft.suffix === undefined ? '' : `:${draft.suffix}`}`;
   const message = rule.meta.messages[draft.messageId]!(draft.data);
-  let waived: string | undefined;
-  if (net?.waivers !== undefined) {
-    for (const w of net.waivers) {
-      if (w.rule === rule.id && (w.scenario === undefined || w.scenario === state.id)) {
-        waived = w.note;
-        break;
-      }
-    }
-  }
+  const waived = net === null ? undefined : waiverNote(net, rule.id, state.id);
   return {
     id,
     rule: rule.id,
@@ -35,6 +27,29 @@ export function completeFinding<M extends MessageFns>(
     messageId: draft.messageId,
     values: draft.values,
     hint: draft.hint ?? rule.meta.hint,
+    ...(waived === undefined ? {} : { waived }),
+  };
+}
+
+/** The note of the first waiver of the net that names this rule in this power state. */
+function waiverNote(net: Net, rule: string, state: string): string | undefined {
+  if (net.waivers === undefined) return undefined;
+  for (const w of net.waivers) if (w.rule === rule && (w.scenario === undefined || w.scenario === state)) return w.note;
+  return undefined;
+}
+
+/**
+ * The same finding in another power state: a net none of whose rails is off there is judged
+ * exactly as in `all-on`, so its findings are re-stamped rather than computed again.
+ */
+export function restampFinding(f: Finding, from: string, state: PowerState, net: Net): Finding {
+  const prefix = `${f.rule}:${net.id}:`;
+  const { waived: _old, ...rest } = f;
+  const waived = waiverNote(net, f.rule, state.id);
+  return {
+    ...rest,
+    id: `${prefix}${state.id}${f.id.slice(prefix.length + from.length)}`,
+    scenario: state.id,
     ...(waived === undefined ? {} : { waived }),
   };
 }

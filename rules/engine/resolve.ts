@@ -55,7 +55,13 @@ export function resolvedView(design: Design, part: Part, pin: Pin, powered: bool
   const k = powered ? 1 : 0;
   let view = entry.views[k];
   if (view === undefined) {
-    view = { ...entry.resolved, powered };
+    // A literal of one fixed shape: every view shares a hidden class, which keeps the hot loops
+    // over pins monomorphic (an object spread does not).
+    const r = entry.resolved;
+    view = {
+      key: r.key, partId: r.partId, pin: r.pin, role: r.role, drive: r.drive, rail: r.rail,
+      profileId: r.profileId, profile: r.profile, params: r.params, origin: r.origin, pull: r.pull, powered,
+    };
     entry.views[k] = view;
   }
   return view;
