@@ -14,6 +14,8 @@ import { describeProfile } from '../report/describeProfile.ts';
 import { renderMarkdown } from '../report/renderMarkdown.ts';
 import { renderText } from '../report/renderText.ts';
 import type { FailOn, Report } from '../report/reportSchema.ts';
+import type { PdfFonts } from '../report/pdf/fonts.ts';
+import type { Paper } from '../report/pdf/theme.ts';
 import { verdict } from '../report/verdict.ts';
 import { TOOL_NAME } from '../report/version.ts';
 import { parseArgs } from './args.ts';
@@ -26,8 +28,10 @@ export interface CliIo {
   stderr(text: string): void;
   /** Reads a UTF-8 file; throws when it cannot. */
   readFile(path: string): string;
-  /** Writes a file; throws when it cannot. */
-  writeFile(path: string, data: string): void;
+  /** Writes a file, text as UTF-8; throws when it cannot. */
+  writeFile(path: string, data: string | Uint8Array): void;
+  /** The TrueType fonts the PDF report embeds; throws when they cannot be read. */
+  loadPdfFonts(): PdfFonts;
   env: Record<string, string | undefined>;
 }
 
@@ -65,6 +69,8 @@ interface CheckOptions {
   file: string;
   format: Format;
   out: string | undefined;
+  pdf: string | undefined;
+  paper: Paper;
   scenario: string | undefined;
   minMargin: number | undefined;
   failOn: FailOn;
@@ -73,7 +79,7 @@ interface CheckOptions {
 function checkOptions(args: readonly string[]): CheckOptions | Refusal {
   const parsed = parseArgs(
     args,
-    { json: 'flag', format: 'value', out: 'value', pdf: 'value', scenario: 'value', 'min-margin': 'value', 'fail-on': 'value' },
+    { json: 'flag', format: 'value', out: 'value', pdf: 'value', paper: 'value', scenario: 'value', 'min-margin': 'value', 'fail-on': 'value' },
     'check',
   );
   if (!parsed.ok) return refuse(parsed.error, SEE_HELP);
@@ -98,12 +104,11 @@ function checkOptions(args: readonly string[]): CheckOptions | Refusal {
     minMargin = q.value;
   }
 
-  // Refused only once the rest of the command line is known to be good, so that one run
-  // reports the first real mistake.
-  if (options.has('pdf')) {
-    return refuse('PDF output comes in a later version; for now use --format md, or --out for the JSON report.');
-  }
-  return { file: positional[0]!, format, out: value('out'), scenario: value('scenario'), minMargin, failOn };
+  const paper = value('paper') ?? 'a4';
+  if (paper !== 'a4' && paper !== 'letter') return refuse(`--paper is "${paper}": expected a4 or letter`);
+  if (options.has('paper') && !options.has('pdf')) return refuse('--paper sets the PDF report\'s page size: give --pdf PATH as well');
+
+  return { file: positional[0]!, format, out: value('out'), pdf: value('pdf'), paper, scenario: value('scenario'), minMargin, failOn };
 }
 
 function loadDesign(file: string, io: CliIo): Design | Refusal {
@@ -121,7 +126,29 @@ function loadDesign(file: string, io: CliIo): Design | Refusal {
   return read.design;
 }
 
-function runCheck(args: readonly string[], io: CliIo): number | Refusal {
+/** Writes `data` to `path`, or the refusal that says why it could not. */
+function write(io: CliIo, path: string, data: string | Uint8Array): Refusal | undefined {
+  try {
+    io.writeFile(path, data);
+    return undefined;
+  } catch (error) {
+    return refuse(`cannot write ${path}: ${error instanceof Error ? error.message : String(error)}`);
+  }
+}
+
+/** The PDF report's bytes; jsPDF is loaded only when a PDF is asked for (it is large, and slow to load). */
+async function pdfBytes(io: CliIo, design: Design, result: ReturnType<typeof check>, report: Report, paper: Paper): Promise<Uint8Array | Refusal> {
+  let fonts: PdfFonts;
+  try {
+    fonts = io.loadPdfFonts();
+  } catch (error) {
+    return refuse(`cannot read the PDF report's fonts (the dejavu-fonts-ttf package): ${error instanceof Error ? error.message : String(error)}`);
+  }
+  const { writeReportPdf } = await import('../report/pdf/index.ts');
+  return writeReportPdf({ report, design, result, fonts, paper });
+}
+
+async function runCheck(args: readonly string[], io: CliIo): Promise<number | Refusal> {
   const options = checkOptions(args);
   if (options instanceof Refusal) return options;
   const time = generatedAt(io.env);
@@ -145,11 +172,15 @@ function runCheck(args: readonly string[], io: CliIo): number | Refusal {
   });
   const json = reportJson(report);
   if (options.out !== undefined) {
-    try {
-      io.writeFile(options.out, json);
-    } catch (error) {
-      return refuse(`cannot write ${options.out}: ${error instanceof Error ? error.message : String(error)}`);
-    }
+    const failed = write(io, options.out, json);
+    if (failed !== undefined) return failed;
+  }
+  // Written whatever the verdict: a failing design is when the PDF is most wanted.
+  if (options.pdf !== undefined) {
+    const bytes = await pdfBytes(io, design, result, report, options.paper);
+    if (bytes instanceof Refusal) return bytes;
+    const failed = write(io, options.pdf, bytes);
+    if (failed !== undefined) return failed;
   }
   io.stdout(options.format === 'json' ? json : options.format === 'md' ? renderMarkdown(report) : renderText(report));
   return verdict(report).fails ? EXIT_FAIL : EXIT_PASS;
@@ -193,7 +224,7 @@ export async function main(argv: readonly string[], io: CliIo): Promise<number> 
     io.stdout(`${TOOL_NAME}\n`);
     return EXIT_PASS;
   } else if (command === 'check') {
-    status = runCheck(rest, io);
+    status = await runCheck(rest, io);
   } else if (command === 'profiles') {
     status = runProfiles(rest, io);
   } else {

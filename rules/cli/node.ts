@@ -3,8 +3,20 @@
  * of the project, with rules/cli/railcross.mjs, that is bound to Node.
  */
 import { readFileSync, writeFileSync } from 'node:fs';
+import { createRequire } from 'node:module';
 import process from 'node:process';
+import type { PdfFonts } from '../report/pdf/fonts.ts';
 import { main, EXIT_UNCHECKED, type CliIo } from './main.ts';
+
+const require = createRequire(import.meta.url);
+
+/** A file of the dejavu-fonts-ttf package, found as Node finds the package itself. */
+const dejavu = (file: string): Uint8Array => new Uint8Array(readFileSync(require.resolve(`dejavu-fonts-ttf/ttf/${file}`)));
+
+/** DejaVu Sans, Sans Bold and Sans Mono: they cover Ω, µ, ≤, – and →, which the PDF's built-in fonts lack. */
+export function loadDejaVuFonts(): PdfFonts {
+  return { regular: dejavu('DejaVuSans.ttf'), bold: dejavu('DejaVuSans-Bold.ttf'), mono: dejavu('DejaVuSansMono.ttf') };
+}
 
 /** Standard streams, the file system and the environment of this process. */
 export const nodeIo: CliIo = {
@@ -12,6 +24,7 @@ export const nodeIo: CliIo = {
   stderr: (text) => void process.stderr.write(text),
   readFile: (path) => readFileSync(path, 'utf8'),
   writeFile: (path, data) => writeFileSync(path, data),
+  loadPdfFonts: loadDejaVuFonts,
   env: process.env,
 };
 

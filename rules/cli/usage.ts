@@ -14,7 +14,9 @@ Options of check:
   --format text|json|md     text: a summary for a terminal (the default);
                             json: the report; md: Markdown for a review or a pull request
   --out PATH                also write the JSON report to PATH
-  --pdf PATH                write the PDF report (comes in a later version)
+  --pdf PATH                also write the PDF report to PATH (cover, block diagram,
+                            findings, rail crossings, margins per net, method, cautions)
+  --paper a4|letter         the PDF report's page size (default: a4)
   --scenario ID             check one power state alone: all-on or a scenario id of the design
   --min-margin V            the least noise margin that passes without a warning,
                             e.g. 0.3, 300m or "300 mV" (overrides the design's setting)

@@ -76,7 +76,9 @@ describe('exit status and output', () => {
     ['--min-margin not a number', ['check', 'quiet.json', '--min-margin', 'lots'], 2, { err: /--min-margin is "lots"/, noOut: true }],
     ['--min-margin in amperes', ['check', 'quiet.json', '--min-margin', '3 mA'], 2, { err: /found a value in A/, noOut: true }],
     ['--min-margin negative', ['check', 'quiet.json', '--min-margin', '-0.1'], 2, { err: /0 V or more/, noOut: true }],
-    ['--pdf', ['check', 'quiet.json', '--pdf', 'r.pdf'], 2, { err: /PDF output comes in a later version/, noOut: true }],
+    ['--paper without --pdf', ['check', 'quiet.json', '--paper', 'letter'], 2, { err: /--paper sets the PDF report's page size: give --pdf PATH/, noOut: true }],
+    ['--paper a3', ['check', 'quiet.json', '--pdf', 'r.pdf', '--paper', 'a3'], 2, { err: /--paper is "a3": expected a4 or letter/, noOut: true }],
+    ['--pdf without its path', ['check', 'quiet.json', '--pdf'], 2, { err: /--pdf needs a value/, noOut: true }],
     ['no file', ['check'], 2, { err: /needs a design file/, noOut: true }],
     ['two files', ['check', 'quiet.json', 'greenhouse.json'], 2, { err: /one design file, found 2/, noOut: true }],
     ['an unknown command', ['lint', 'quiet.json'], 2, { err: /unknown command "lint"/, noOut: true }],
@@ -143,6 +145,69 @@ describe('--out', () => {
   it('nothing is written when the design is invalid', async () => {
     const { io } = await run(['check', 'invalid.json', '--out', 'report.json']);
     expect(io.files.has('report.json')).toBe(false);
+  });
+});
+
+describe('--pdf', () => {
+  const PDF_MAGIC = '%PDF-';
+  const head = (bytes: Uint8Array | undefined) => (bytes === undefined ? '' : String.fromCharCode(...bytes.subarray(0, 5)));
+
+  it.each<[string, string[], number]>([
+    ['a failing design: the PDF is written and the exit is still 1', ['check', 'greenhouse.json', '--pdf', 'r.pdf'], 1],
+    ['a passing design: exit 0', ['check', 'quiet.json', '--pdf', 'r.pdf'], 0],
+    ['with --paper letter', ['check', 'quiet.json', '--pdf=r.pdf', '--paper=letter'], 0],
+    ['with --scenario and --json', ['check', 'greenhouse.json', '--scenario', 'standby', '--json', '--pdf', 'r.pdf'], 1],
+    ['with --fail-on warning', ['check', 'quiet.json', '--min-margin', '0.8', '--fail-on', 'warning', '--pdf', 'r.pdf'], 1],
+  ])('%s', async (_name, argv, code) => {
+    const { code: actual, io } = await run(argv);
+    expect(actual, io.err).toBe(code);
+    expect(head(io.binaries.get('r.pdf'))).toBe(PDF_MAGIC);
+    expect(io.err).toBe('');
+    // stdout still carries the report in the asked format
+    expect(io.out).toMatch(argv.includes('--json') ? /^\{/ : /^Railcross check: /);
+  });
+
+  it('letter and a4 give different page sizes', async () => {
+    const a4 = (await run(['check', 'quiet.json', '--pdf', 'r.pdf'])).io.binaries.get('r.pdf')!;
+    const letter = (await run(['check', 'quiet.json', '--pdf', 'r.pdf', '--paper', 'letter'])).io.binaries.get('r.pdf')!;
+    const box = (b: Uint8Array) => /\/MediaBox \[0 0 ([\d.]+) /.exec(Buffer.from(b).toString('latin1'))?.[1];
+    expect(Number(box(a4))).toBeCloseTo(595.28, 1); // ISO 216 A4: 210 mm = 595.28 pt
+    expect(Number(box(letter))).toBe(612); // US Letter: 8.5 in = 612 pt
+  });
+
+  it('with SOURCE_DATE_EPOCH two runs write the same bytes', async () => {
+    const a = (await run(['check', 'greenhouse.json', '--pdf', 'r.pdf'])).io.binaries.get('r.pdf')!;
+    const b = (await run(['check', 'greenhouse.json', '--pdf', 'r.pdf'])).io.binaries.get('r.pdf')!;
+    expect(Buffer.from(a).equals(Buffer.from(b))).toBe(true);
+  });
+
+  it('writes the JSON report too with --out', async () => {
+    const { io } = await run(['check', 'greenhouse.json', '--out', 'r.json', '--pdf', 'r.pdf']);
+    expect(reportOf(io.files.get('r.json')!).findings.length).toBeGreaterThan(0);
+    expect(head(io.binaries.get('r.pdf'))).toBe(PDF_MAGIC);
+  });
+
+  it('a PDF that cannot be written: exit 2', async () => {
+    const io = fakeIo(FILES, EPOCH);
+    io.readOnly.add('ro/r.pdf');
+    expect(await main(['check', 'quiet.json', '--pdf', 'ro/r.pdf'], io)).toBe(2);
+    expect(io.err).toMatch(/cannot write ro\/r\.pdf: EACCES/);
+  });
+
+  it('fonts that cannot be read: exit 2, naming the package', async () => {
+    const io = fakeIo(FILES, EPOCH);
+    io.loadPdfFonts = () => {
+      throw new Error("Cannot find module 'dejavu-fonts-ttf/ttf/DejaVuSans.ttf'");
+    };
+    expect(await main(['check', 'quiet.json', '--pdf', 'r.pdf'], io)).toBe(2);
+    expect(io.err).toMatch(/cannot read the PDF report's fonts \(the dejavu-fonts-ttf package\): Cannot find module/);
+    expect(io.binaries.has('r.pdf')).toBe(false);
+  });
+
+  it('nothing is written when the design is invalid', async () => {
+    const { code, io } = await run(['check', 'invalid.json', '--pdf', 'r.pdf']);
+    expect(code).toBe(2);
+    expect(io.binaries.has('r.pdf')).toBe(false);
   });
 });
 

@@ -4,7 +4,7 @@
  * in-process.
  */
 import { spawnSync } from 'node:child_process';
-import { copyFileSync, mkdtempSync, rmSync } from 'node:fs';
+import { copyFileSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -45,5 +45,12 @@ describe('npx railcross', () => {
     const r = spawn(process.execPath, [SHIM, 'check', 'design.json', '--format', 'md'], away);
     expect(r.status, r.err).toBe(1);
     expect(r.out).toMatch(/^# Railcross check: Greenhouse irrigation controller$/m);
+  }, TIMEOUT);
+
+  it('check --pdf from another working directory: the PDF is written, the exit follows the findings', () => {
+    copyFileSync(EXAMPLE, join(away, 'design.json'));
+    const r = spawn(process.execPath, [SHIM, 'check', 'design.json', '--pdf', 'report.pdf', '--paper', 'letter'], away);
+    expect(r.status, r.err).toBe(1);
+    expect(readFileSync(join(away, 'report.pdf')).subarray(0, 5).toString('latin1')).toBe('%PDF-');
   }, TIMEOUT);
 });
