@@ -1,0 +1,54 @@
+/**
+ * The guaranteed output level at a load current (rules-catalogue.md, "Guaranteed output levels,
+ * not guesses"), on the 74HC rows of JESD7 as restated in parts' DC tables: VOH VDD−0.1 V at
+ * 20 µA and VDD−0.66 V at 4 mA (the 4.5 V row carried up), VOL 0.1 V at 20 µA, 0.33 V at 4 mA.
+ */
+import { describe, expect, it } from 'vitest';
+import { largestTestCurrent, outputLevel } from '../../rules/levels/output.ts';
+
+const voh = [{ v: 'VDD-0.1', i: 20e-6 }, { v: 'VDD-0.66', i: 4e-3 }];
+const vol = [{ v: 0.1, i: 20e-6 }, { v: 0.33, i: 4e-3 }];
+const slopeHigh = (-0.66 + 0.1) / (4e-3 - 20e-6);
+const slopeLow = (0.33 - 0.1) / (4e-3 - 20e-6);
+
+describe('outputLevel', () => {
+  const cases: [string, typeof voh | typeof vol, number, number, 'high' | 'low', number, boolean][] = [
+    ['no load takes the lightest row', voh, 0, 4.5, 'high', 4.4, false],
+    ['a load exactly at a test current takes that row', voh, 20e-6, 4.5, 'high', 4.4, false],
+    ['a load just above it takes the next row', voh, 21e-6, 4.5, 'high', 3.84, false],
+    ['exactly the largest test current is still guaranteed', voh, 4e-3, 5.5, 'high', 4.84, false],
+    ['within 1e-9 of a test current counts as at it', voh, 4e-3 * (1 + 1e-12), 4.5, 'high', 3.84, false],
+    ['above the last row: the line through the last two, extrapolated', voh, 5e-3, 4.5, 'high', 3.84 + slopeHigh * 1e-3, true],
+    ['the low side likewise', vol, 6e-3, 4.5, 'low', 0.33 + slopeLow * 2e-3, true],
+    ['low side, light load', vol, 1e-6, 5, 'low', 0.1, false],
+  ];
+  it.each(cases)('%s', (_name, points, load, vdd, sense, v, estimate) => {
+    const r = outputLevel(points, load, vdd, sense)!;
+    expect(r.v).toBeCloseTo(v, 12);
+    expect(r.estimate).toBe(estimate);
+  });
+
+  it('a single point gives that point\'s level as the estimate above it', () => {
+    // JESD8C LVCMOS: VOH VDD−0.2 V at 100 µA only.
+    const r = outputLevel([{ v: 'VDD-0.2', i: 100e-6 }], 1e-3, 3.0, 'high')!;
+    expect(r.v).toBeCloseTo(2.8, 12);
+    expect(r.estimate).toBe(true);
+  });
+
+  it('an extrapolation is never better than the last guaranteed row', () => {
+    // A list whose heavier row is (oddly) better than its lighter one: the estimate keeps the last row.
+    const r = outputLevel([{ v: 2.0, i: 1e-3 }, { v: 2.4, i: 2e-3 }], 5e-3, 3.3, 'high')!;
+    expect(r.v).toBe(2.4);
+  });
+
+  it('unsorted rows are read in order of current', () => {
+    expect(outputLevel([vol[1]!, vol[0]!], 1e-6, 5, 'low')!.v).toBe(0.1);
+  });
+
+  it('no rows, no level', () => {
+    expect(outputLevel(undefined, 0, 5, 'high')).toBeUndefined();
+    expect(outputLevel([], 0, 5, 'high')).toBeUndefined();
+    expect(largestTestCurrent(voh)).toBe(4e-3);
+    expect(largestTestCurrent(undefined)).toBeUndefined();
+  });
+});
