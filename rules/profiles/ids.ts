@@ -1,6 +1,7 @@
 /**
- * The built-in profile ids of design file version 1 (design-format.md). The library may add
- * ids, never rename these: designs name them. The reader accepts a part's or a pin's
+ * The built-in profile ids: those of design file version 1 (design-format.md), in its order,
+ * then the ids the library added since (`xlat-side`, `xlat-od`: dual-supply translator sides).
+ * The library may add ids, never rename these: designs name them. The reader accepts a part's or a pin's
  * `profile` when it is one of these or a design-local profile's id.
  */
 export const BUILTIN_PROFILE_IDS = Object.freeze([
@@ -25,6 +26,8 @@ export const BUILTIN_PROFILE_IDS = Object.freeze([
   'i2c-lv',
   'mcu-gpio',
   'off-board',
+  'xlat-side',
+  'xlat-od',
 ] as const satisfies readonly string[]);
 
 export type BuiltinProfileId = (typeof BUILTIN_PROFILE_IDS)[number];

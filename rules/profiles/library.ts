@@ -6,9 +6,11 @@ import { mcuGpio, offBoard } from './generic.ts';
 import { lvc, lvcmos12, lvcmos15, lvcmos18, lvcmos25, lvcmos33, lvttl33 } from './lowVoltage.ts';
 import { ls, lsOpenCollector, ttl } from './ttl.ts';
 import { i2c, i2cLowVoltage } from './twoWire.ts';
+import { translatorOpenDrain, translatorSide } from './translators.ts';
 
 /**
- * The built-in logic-family profiles, in the id order of design-format.md (version 1).
+ * The built-in logic-family profiles, in the id order of design-format.md (version 1), then the
+ * ids the library added since (dual-supply translator sides).
  * Deep-frozen: the library is shared by every design and must not be edited in place; a design
  * that needs other numbers declares a design-local profile instead.
  */
@@ -34,4 +36,6 @@ export const BUILTIN_PROFILES: readonly Profile[] = deepFreeze([
   i2cLowVoltage,
   mcuGpio,
   offBoard,
+  translatorSide,
+  translatorOpenDrain,
 ]);

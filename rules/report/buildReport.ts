@@ -48,13 +48,19 @@ function worstOf(findings: readonly Finding[]): Crossing['worst'] {
   return worst === 2 ? 'error' : worst === 1 ? 'warning' : 'ok';
 }
 
-/** One row per net joining pins of different rails, per power state, in state then net order. */
-function crossings(result: CheckResult, states: readonly PowerState[]): Crossing[] {
+/**
+ * One row per net joining pins of different rails, per power state, in state then the design's
+ * net order (an incremental result's tables are not in file order).
+ */
+export function crossingRows(result: CheckResult, states: readonly PowerState[] = result.states): Crossing[] {
   const rows: Crossing[] = [];
   for (const state of states) {
     const perNet = result.nets.get(state.id);
     if (perNet === undefined) continue;
-    for (const { net, view, findings } of perNet.values()) {
+    for (const design of result.design.nets) {
+      const r = perNet.get(design.id);
+      if (r === undefined) continue;
+      const { net, view, findings } = r;
       if (view.pinRails.length < 2) continue;
       rows.push({
         net: net.id,
@@ -122,7 +128,7 @@ export function buildReport(design: Design, result: CheckResult, options: Report
     scenarios: states.map((s) => ({ id: s.id, label: s.label, off: [...s.off] })),
     summary: summarize(findings),
     findings: findings.map(reportFinding),
-    crossings: crossings(result, states),
+    crossings: crossingRows(result, states),
     profiles: usedProfiles(design),
     cautions: [...CAUTIONS],
   };

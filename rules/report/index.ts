@@ -1,5 +1,6 @@
 /** The rule report (report-format.md): building it, its schema, and its text and Markdown renderings. */
-export { buildReport, selectStates, type ReportOptions } from './buildReport.ts';
+export { buildReport, crossingRows, selectStates, type ReportOptions } from './buildReport.ts';
+export { ladderFor, ladderAxis, type Ladder } from './ladder.ts';
 export { CAUTIONS } from './cautions.ts';
 export { renderText } from './renderText.ts';
 export { renderMarkdown, escapeMarkdown, codeSpan } from './renderMarkdown.ts';

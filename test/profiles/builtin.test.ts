@@ -3,7 +3,8 @@
  *
  * Source of the expected values: shared reference builtin-profiles.md, transcribed; each row's
  * own source is in the profile. Units converted to SI (µA → 1e-6 A, mA → 1e-3 A, pF → 1e-12 F).
- * The id list is design-format.md, version 1, transcribed.
+ * The id list is design-format.md, version 1, transcribed; the library may add ids after it
+ * (design-format.md: "the library may add more, never rename these"), listed in ADDED below.
  */
 import { describe, expect, it } from 'vitest';
 import { ProfileSchema, type Params } from '../../rules/model/schema.ts';
@@ -21,6 +22,11 @@ const V1_IDS = [
   'lvttl33', 'lvcmos33', 'lvcmos25', 'lvcmos18', 'lvcmos15', 'lvcmos12', 'cmos4000', 'i2c',
   'i2c-lv', 'mcu-gpio', 'off-board',
 ];
+
+/** Ids the library added after the v1 list, in the library's order. */
+const ADDED_IDS = ['xlat-side', 'xlat-od'];
+
+const ALL_IDS = [...V1_IDS, ...ADDED_IDS];
 
 const µA = 1e-6;
 const mA = 1e-3;
@@ -137,6 +143,33 @@ const TABLE: Record<string, Params> = {
   'off-board': {},
 };
 
+/**
+ * The added profiles. No shared reference table covers them: the expected values are the
+ * generic dual-supply translator numbers chosen for the library, each with its source.
+ */
+const ADDED: Record<string, Params> = {
+  'xlat-side': {
+    vddRange: [1.65, 5.5], // from memory: the usual span of either supply of such parts
+    vih: '0.65*VDD', vil: '0.35*VDD', // JESD8-7's scaled thresholds, over the whole range (from memory)
+    // JESD8-7 rows: 2 mA restated, 100 µA from memory; carried up the supply unchanged
+    voh: [{ v: 'VDD-0.2', i: 100 * µA }, { v: 'VDD-0.45', i: 2 * mA }],
+    vol: [{ v: 0.2, i: 100 * µA }, { v: 0.45, i: 2 * mA }],
+    iih: 1 * µA, iil: 1 * µA, // from memory
+    viMax: 'VDD+0.5', // common practice: clamp to the side's own supply
+    unpoweredSafe: true, viMaxOff: 5.5, // common practice: partial power-down; 5.5 V from memory
+  },
+  'xlat-od': {
+    vddRange: [1.65, 5.5], // from memory
+    vih: '0.65*VDD', vil: '0.35*VDD', // from memory
+    vol: [{ v: 0.15, i: 1 * mA }, { v: 0.3, i: 3 * mA }], // from memory
+    iih: 1 * µA, iil: 1 * µA, // from memory
+    viMax: 'VDD+0.5', // common practice
+    unpoweredSafe: true, viMaxOff: 5.5, // common practice: partial power-down; 5.5 V from memory
+  },
+};
+
+const EXPECTED: Record<string, Params> = { ...TABLE, ...ADDED };
+
 /** Equal within 1e-12 relative: 400 * µA and 400e-6 may differ in the last bit. */
 function closeTo(a: unknown, b: unknown): boolean {
   if (typeof a === 'number' && typeof b === 'number') {
@@ -169,10 +202,16 @@ function sameParams(actual: unknown, expected: unknown, path: string): string[] 
 }
 
 describe('built-in profile library', () => {
-  it('holds exactly the 21 ids of design-format.md v1, in its order', () => {
-    expect(BUILTIN_PROFILES.map((p) => p.id)).toEqual(V1_IDS);
-    expect(BUILTIN_PROFILE_IDS).toEqual(V1_IDS);
-    expect(IDS_MODULE).toEqual(V1_IDS);
+  it('holds the 21 ids of design-format.md v1 first, in its order, then the added ids', () => {
+    expect(BUILTIN_PROFILES.map((p) => p.id).slice(0, V1_IDS.length)).toEqual(V1_IDS);
+    expect(BUILTIN_PROFILES.map((p) => p.id)).toEqual(ALL_IDS);
+    expect(BUILTIN_PROFILE_IDS).toEqual(ALL_IDS);
+    expect(IDS_MODULE).toEqual(ALL_IDS);
+  });
+
+  it('adds no id that differs from a v1 id only in case', () => {
+    const v1 = new Set(V1_IDS.map((id) => id.toLowerCase()));
+    expect(ADDED_IDS.filter((id) => v1.has(id.toLowerCase()))).toEqual([]);
   });
 
   it('has unique ids', () => {
@@ -180,11 +219,12 @@ describe('built-in profile library', () => {
     expect(new Set(ids).size).toBe(ids.length);
   });
 
-  it('the transcribed table covers every profile', () => {
+  it('the transcribed tables cover every profile', () => {
     expect(Object.keys(TABLE).sort()).toEqual([...V1_IDS].sort());
+    expect(Object.keys(ADDED).sort()).toEqual([...ADDED_IDS].sort());
   });
 
-  describe.each(V1_IDS)('%s', (id) => {
+  describe.each(ALL_IDS)('%s', (id) => {
     const profile = builtinProfile(id);
 
     it('exists and has exactly the keys id, label, source, params', () => {
@@ -198,8 +238,8 @@ describe('built-in profile library', () => {
       expect(profile!.source.trim()).not.toBe('');
     });
 
-    it('has the parameters of builtin-profiles.md, every key exactly', () => {
-      expect(sameParams(profile!.params, TABLE[id], id)).toEqual([]);
+    it('has the parameters of its table (builtin-profiles.md, or ADDED), every key exactly', () => {
+      expect(sameParams(profile!.params, EXPECTED[id], id)).toEqual([]);
     });
 
     it('is a valid design-local profile too (Levels parse, currents non-negative)', () => {
