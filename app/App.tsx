@@ -8,12 +8,12 @@ import { FindingsPanel } from './panels/FindingsPanel.tsx';
 import { Palette } from './panels/Palette.tsx';
 import { StatusLine } from './panels/StatusLine.tsx';
 import { TopBar } from './panels/TopBar.tsx';
-import type { Saver } from './storage/currentDesign.ts';
+import type { SaveIndicator } from './storage/saver.ts';
 import { EditorProvider } from './store/EditorProvider.tsx';
 import type { EditorStore } from './store/editorStore.ts';
 import { useShortcuts } from './useShortcuts.ts';
 
-export function App({ store, saver }: { store: EditorStore; saver: Saver }) {
+export function App({ store, saver }: { store: EditorStore; saver: SaveIndicator }) {
   useShortcuts(store);
   return (
     <EditorProvider store={store}>

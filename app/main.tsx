@@ -1,14 +1,22 @@
-/** The page's entry point: open the stored design (or the example) and mount the editor. */
+/**
+ * The page's entry point: show that the editor is opening, open storage and the first design,
+ * then mount the editor. Reading and checking a large design takes a few hundred
+ * milliseconds; the page says so rather than staying blank.
+ */
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
-import { App } from './App.tsx';
-import { boot } from './boot.ts';
+import { Root } from './library/Root.tsx';
+import { startSession } from './library/start.ts';
 
-const root = document.getElementById('root');
-if (root === null) throw new Error('index.html has no #root element');
-const { store, saver } = await boot();
-createRoot(root).render(
+const element = document.getElementById('root');
+if (element === null) throw new Error('index.html has no #root element');
+const root = createRoot(element);
+root.render(<p className="rc-opening" role="status">Opening your designs…</p>);
+const session = await startSession();
+// `npm run bench:ui` drives the editor through this hook; without `?bench` its chunk is never loaded.
+if (new URLSearchParams(location.search).has('bench')) (await import('./bench/benchHooks.ts')).exposeForBench(session);
+root.render(
   <StrictMode>
-    <App store={store} saver={saver} />
+    <Root session={session} />
   </StrictMode>,
 );

@@ -2,9 +2,9 @@ import { useEffect } from 'react';
 import { deleteSelection, parseWireId, type Pair } from './store/commands/index.ts';
 import type { EditorStore } from './store/editorStore.ts';
 
-/** Keys typed into a field belong to the field (its own undo, its own Backspace). */
+/** Keys typed into a field belong to the field (its own undo, its own Backspace); keys in a dialog to the dialog. */
 function inField(target: EventTarget | null): boolean {
-  return target instanceof Element && target.closest('input, textarea, select, [contenteditable="true"]') !== null;
+  return target instanceof Element && target.closest('input, textarea, select, [contenteditable="true"], dialog') !== null;
 }
 
 /** Delete, Ctrl/Cmd+Z, Ctrl/Cmd+Shift+Z and Ctrl/Cmd+Y, anywhere but in a field. */

@@ -2,7 +2,7 @@
  * The canvas: React Flow showing nodes and edges derived from the design. It keeps no copy of
  * the design; it turns React Flow's events into commands (connect, move, select).
  */
-import { useCallback, useMemo, useRef, type DragEvent } from 'react';
+import { useCallback, useMemo, useRef, useState, type DragEvent } from 'react';
 import {
   Background, BackgroundVariant, ConnectionMode, Controls, Panel, ReactFlow,
   type Connection, type EdgeChange, type FinalConnectionState, type IsValidConnection, type NodeChange,
@@ -15,11 +15,15 @@ import { createFlowDeriver, type ChipNode as ChipNodeType, type WireEdge as Wire
 import { Legend } from './Legend.tsx';
 import { CANVAS_ID, fitViewOptions, TEMPLATE_MIME, usePlacePart } from './placement.ts';
 import { WireEdge } from './WireEdge.tsx';
+import { useCanvasKeys } from './useCanvasKeys.ts';
+import { Dialogs } from '../panels/Dialogs.tsx';
 
 const nodeTypes = { chip: ChipNode };
 const edgeTypes = { wire: WireEdge };
 const proOptions = { hideAttribution: true };
 const snapGrid: [number, number] = [10, 10];
+/** Shift adds a chip to the selection (and Shift+drag draws a selection box, React Flow's default); Ctrl and Cmd too. */
+const multiSelectionKeys = ['Shift', 'Meta', 'Control'];
 
 const pinOf = (node: string, handle: string | null | undefined) => `${node}.${handle ?? ''}`;
 
@@ -29,11 +33,14 @@ export function Canvas() {
   const nets = useEditor((s) => s.design.nets);
   const selectedParts = useEditor((s) => s.selection.parts);
   const selectedWires = useEditor((s) => s.selection.wires);
-  const drag = useEditor((s) => s.dragPositions);
+  // Where dragged chips are while a drag lasts: the canvas's own state, not the store's, so that
+  // a drag step wakes only the canvas; the end of the drag is the one command.
+  const [drag, setDrag] = useState<ReadonlyMap<string, XY> | null>(null);
   const deriver = useRef(createFlowDeriver()).current;
   const nodes = useMemo(() => deriver.nodes(parts, selectedParts, drag), [deriver, parts, selectedParts, drag]);
   const edges = useMemo(() => deriver.edges(nets, selectedWires), [deriver, nets, selectedWires]);
   const place = usePlacePart();
+  useCanvasKeys();
 
   const onNodesChange = useCallback((changes: NodeChange<ChipNodeType>[]) => {
     const s = store.getState();
@@ -43,7 +50,7 @@ export function Canvas() {
     for (const c of changes) {
       if (c.type === 'dimensions' && c.dimensions !== undefined) deriver.measured.set(c.id, c.dimensions);
       else if (c.type === 'position' && c.position !== undefined) {
-        if (c.dragging === true) (dragging ??= new Map(s.dragPositions ?? [])).set(c.id, c.position);
+        if (c.dragging === true) (dragging ??= new Map()).set(c.id, c.position);
         else moves.push({ id: c.id, ...c.position });
       } else if (c.type === 'select') {
         selected ??= new Set(s.selection.parts);
@@ -51,11 +58,14 @@ export function Canvas() {
         else selected.delete(c.id);
       }
     }
-    if (dragging !== undefined) s.setDragPositions(dragging);
+    if (dragging !== undefined) {
+      const step = dragging;
+      setDrag((was) => new Map([...(was ?? []), ...step]));
+    }
     // The end of a drag is the one step that goes on the undo stack.
     if (moves.length > 0) {
       s.apply(moveParts(moves));
-      s.setDragPositions(null);
+      setDrag(null);
     }
     if (selected !== undefined) s.select({ parts: [...selected], ...(selected.size > 0 ? { net: null } : {}) });
   }, [store, deriver]);
@@ -122,20 +132,27 @@ export function Canvas() {
         isValidConnection={isValidConnection}
         connectionMode={ConnectionMode.Loose}
         deleteKeyCode={null}
+        multiSelectionKeyCode={multiSelectionKeys}
         onlyRenderVisibleElements
         snapToGrid
         snapGrid={snapGrid}
         fitView
         fitViewOptions={fitViewOptions}
-        minZoom={0.1}
+        minZoom={0.05}
         proOptions={proOptions}
+        aria-label="Canvas: chips and the wires between them"
       >
         <Background variant={BackgroundVariant.Dots} gap={20} size={1.2} className="rc-grid" />
         <Controls showInteractive={false} position="bottom-right" />
         <Panel position="bottom-left">
           <Legend />
         </Panel>
+        <Panel position="top-right">
+          <button type="button" className="rc-keys-btn" aria-label="Keyboard shortcuts" title="Keyboard shortcuts (?)" data-testid="shortcuts-button"
+            onClick={() => store.getState().openDialog({ kind: 'keys' })}>?</button>
+        </Panel>
       </ReactFlow>
+      <Dialogs />
     </div>
   );
 }

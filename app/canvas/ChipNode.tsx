@@ -1,16 +1,21 @@
 /**
  * A chip on the canvas: a header with designator, label, rail (in the rail's colour) and
  * family; one row per pin with its handle on the side the design gives. Names are rendered
- * as text, never as markup.
+ * as text, never as markup. The chip reads its part from the store by id, so that an edit of
+ * the part leaves React Flow's node objects alone. Zoomed far out, where no text can be read,
+ * it draws only its outline, header and handles, at exactly the same size, so that wires keep
+ * their ends and the browser has a fraction of the elements to paint.
  */
 import { memo, useEffect, useRef, type CSSProperties } from 'react';
-import { Handle, Position, useUpdateNodeInternals, type NodeProps } from '@xyflow/react';
-import type { Pin } from '../../rules/model/schema.ts';
+import { Handle, Position, useStore as useFlowStore, useUpdateNodeInternals, type NodeProps } from '@xyflow/react';
+import type { Part, Pin, Rail } from '../../rules/model/schema.ts';
 import { formatQuantity } from '../../rules/levels/units.ts';
-import { resolveProfile } from '../../rules/profiles/index.ts';
-import { useEditor } from '../store/EditorProvider.tsx';
+import { CHIP_LOOK } from '../store/canvasViews.ts';
+import { useEditor, useEditorStore } from '../store/EditorProvider.tsx';
+import { useKeyed } from '../store/keyedView.ts';
 import { pinLayout, type Side } from './chipLayout.ts';
 import type { ChipNode as ChipNodeType } from './deriveFlow.ts';
+import { FAR_ZOOM } from './farZoom.ts';
 import { GLYPH_TEXT, glyphKind, PinGlyph } from './PinGlyph.tsx';
 
 const POSITION: Readonly<Record<Side, Position>> = { left: Position.Left, right: Position.Right, top: Position.Top, bottom: Position.Bottom };
@@ -19,69 +24,92 @@ function railStyle(colour: string | undefined): CSSProperties {
   return { '--rail': colour ?? 'var(--rail-default)' } as CSSProperties;
 }
 
+/** The swatch of a pin on a rail other than its part's: only such pins read the rails. */
+function OwnRail({ id }: { id: string }) {
+  const rail = useEditor((s) => s.design.rails.find((r) => r.id === id));
+  return <span className="rc-pin-rail" style={railStyle(rail?.colour)} aria-label={`rail ${rail?.label ?? id}`} title={`on rail ${rail?.label ?? id}`} />;
+}
+
 const PinRow = memo(function PinRow({ pin, side, partRail }: { pin: Pin; side: Side; partRail: string }) {
   const kind = glyphKind(pin);
   const ownRail = pin.rail !== undefined && pin.rail !== partRail ? pin.rail : undefined;
-  const rail = useEditor((s) => (ownRail === undefined ? undefined : s.design.rails.find((r) => r.id === ownRail)));
-  const detail = [GLYPH_TEXT[kind], ownRail === undefined ? '' : `on rail ${rail?.label ?? ownRail}`, pin.profile === undefined ? '' : `profile ${pin.profile}`];
+  const detail = [GLYPH_TEXT[kind], ownRail === undefined ? '' : `on rail ${ownRail}`, pin.profile === undefined ? '' : `profile ${pin.profile}`];
   return (
     <div className={`rc-pin rc-pin--${side}`} data-pin={pin.id} title={`${pin.id}: ${detail.filter((t) => t !== '').join(', ')}`}>
       <Handle type="source" position={POSITION[side]} id={pin.id} className="rc-handle" />
       <PinGlyph kind={kind} side={side} />
       <span className="rc-pin-name">{pin.id}</span>
-      {ownRail !== undefined && <span className="rc-pin-rail" style={railStyle(rail?.colour)} aria-label={`rail ${rail?.label ?? ownRail}`} />}
+      {ownRail !== undefined && <OwnRail id={ownRail} />}
     </div>
   );
 });
 
-function ChipNodeView({ id, data, selected }: NodeProps<ChipNodeType>) {
-  const { part } = data;
-  const rail = useEditor((s) => s.design.rails.find((r) => r.id === part.rail));
-  const family = useEditor((s) => resolveProfile(s.design, part.profile)?.label ?? part.profile);
-  const layout = pinLayout(part.pins);
-  const rows = Math.max(layout.left.length, layout.right.length);
+/**
+ * A pin as drawn far out: its handle, and its name kept for its width but never painted, so
+ * that every handle stays exactly where React Flow measured it.
+ */
+function PinStub({ pin, side, partRail }: { pin: Pin; side: Side; partRail: string }) {
+  return (
+    <div className={`rc-pin rc-pin--${side}`} data-pin={pin.id}>
+      <Handle type="source" position={POSITION[side]} id={pin.id} className="rc-handle" />
+      <span className="rc-glyph-gap" />
+      <span className="rc-pin-name">{pin.id}</span>
+      {pin.rail !== undefined && pin.rail !== partRail && <span className="rc-pin-rail" />}
+    </div>
+  );
+}
+
+function Rows({ pins, side, partRail, far }: { pins: readonly Pin[]; side: Side; partRail: string; far: boolean }) {
+  return <>{pins.map((p) => (far ? <PinStub key={p.id} pin={p} side={side} partRail={partRail} /> : <PinRow key={p.id} pin={p} side={side} partRail={partRail} />))}</>;
+}
+
+function Head({ id, part, rail, family }: { id: string; part: Part; rail: Rail | undefined; family: string }) {
+  return (
+    <div className="rc-chip-head">
+      <div className="rc-chip-title">
+        <span className="rc-chip-id">{id}</span>
+        <span className="rc-chip-label">{part.label}</span>
+      </div>
+      <div className="rc-chip-sub">
+        <span className="rc-rail-badge" title={`rail ${rail?.label ?? part.rail} (${part.rail})`}>
+          {rail === undefined ? part.rail : formatQuantity(rail.nominal, 'V')}
+        </span>
+        <span className="rc-chip-family">{family}</span>
+      </div>
+    </div>
+  );
+}
+
+function ChipNodeView({ id, selected }: NodeProps<ChipNodeType>) {
+  const { part, rail, family } = useKeyed(useEditorStore(), CHIP_LOOK, id);
+  const far = useFlowStore((s) => s.transform[2] < FAR_ZOOM);
 
   // A part whose pins changed needs its handles measured again; the first measure is React Flow's own.
   const updateNodeInternals = useUpdateNodeInternals();
   const mounted = useRef(false);
+  const pins = part?.pins;
   useEffect(() => {
     if (mounted.current) updateNodeInternals(id);
     mounted.current = true;
-  }, [id, part.pins, updateNodeInternals]);
+  }, [id, pins, updateNodeInternals]);
 
+  if (part === undefined) return null;
+  const layout = pinLayout(part.pins);
+  const rows = Math.max(layout.left.length, layout.right.length);
   return (
-    <div className={`rc-chip${selected ? ' rc-chip--selected' : ''}`} style={railStyle(rail?.colour)} data-part={id}>
+    <div className={`rc-chip${selected ? ' rc-chip--selected' : ''}${far ? ' rc-chip--far' : ''}`} style={railStyle(rail?.colour)} data-part={id}>
       {layout.top.length > 0 && (
-        <div className="rc-strip rc-strip--top">
-          {layout.top.map((p) => <PinRow key={p.id} pin={p} side="top" partRail={part.rail} />)}
-        </div>
+        <div className="rc-strip rc-strip--top"><Rows pins={layout.top} side="top" partRail={part.rail} far={far} /></div>
       )}
-      <div className="rc-chip-head">
-        <div className="rc-chip-title">
-          <span className="rc-chip-id">{id}</span>
-          <span className="rc-chip-label">{part.label}</span>
-        </div>
-        <div className="rc-chip-sub">
-          <span className="rc-rail-badge" title={`rail ${rail?.label ?? part.rail} (${part.rail})`}>
-            {rail === undefined ? part.rail : formatQuantity(rail.nominal, 'V')}
-          </span>
-          <span className="rc-chip-family">{family}</span>
-        </div>
-      </div>
+      {far ? <div className="rc-chip-head"><span className="rc-chip-id">{id}</span></div> : <Head id={id} part={part} rail={rail} family={family} />}
       {rows > 0 && (
         <div className="rc-chip-body">
-          <div className="rc-col rc-col--left">
-            {layout.left.map((p) => <PinRow key={p.id} pin={p} side="left" partRail={part.rail} />)}
-          </div>
-          <div className="rc-col rc-col--right">
-            {layout.right.map((p) => <PinRow key={p.id} pin={p} side="right" partRail={part.rail} />)}
-          </div>
+          <div className="rc-col rc-col--left"><Rows pins={layout.left} side="left" partRail={part.rail} far={far} /></div>
+          <div className="rc-col rc-col--right"><Rows pins={layout.right} side="right" partRail={part.rail} far={far} /></div>
         </div>
       )}
       {layout.bottom.length > 0 && (
-        <div className="rc-strip rc-strip--bottom">
-          {layout.bottom.map((p) => <PinRow key={p.id} pin={p} side="bottom" partRail={part.rail} />)}
-        </div>
+        <div className="rc-strip rc-strip--bottom"><Rows pins={layout.bottom} side="bottom" partRail={part.rail} far={far} /></div>
       )}
     </div>
   );

@@ -1,15 +1,19 @@
 /**
  * A wire: one pin pair of a net, drawn as right-angled segments. Its look comes from its
  * net's worst unwaived severity in the chosen power state, read by net id from the store
- * (not from the edge object, stack.md "React Flow at scale"): red and solid with a casing for
- * an error, amber and dashed for a warning, neutral when clean.
+ * (not from the edge object, stack.md "React Flow at scale"): red, heavy and cased for an
+ * error, an amber double line for a warning, thin and neutral when clean. Not dashed: a dash
+ * pattern along a long wire costs the software rasteriser more than the rest of the canvas.
  */
 import { memo, useState } from 'react';
-import { BaseEdge, EdgeLabelRenderer, getSmoothStepPath, Position, type EdgeProps } from '@xyflow/react';
+import { BaseEdge, EdgeLabelRenderer, getSmoothStepPath, Position, useStore as useFlowStore, type EdgeProps } from '@xyflow/react';
 import { formatQuantity } from '../../rules/levels/units.ts';
-import { useEditor } from '../store/EditorProvider.tsx';
+import { useEditor, useEditorStore } from '../store/EditorProvider.tsx';
+import { parseWireLook, WIRE_LOOK } from '../store/canvasViews.ts';
+import { useKeyed } from '../store/keyedView.ts';
 import type { WireEdge as WireEdgeType } from './deriveFlow.ts';
 import { SeverityGlyph } from './SeverityGlyph.tsx';
+import { FAR_ZOOM } from './farZoom.ts';
 
 function margin(v: number | null | undefined): string {
   return v === null || v === undefined ? 'no pair' : formatQuantity(v, 'V');
@@ -50,19 +54,20 @@ function labelPlace(x: number, y: number, side: Position): { transform: string }
 function WireEdgeView(props: EdgeProps<WireEdgeType>) {
   const { id, data, selected, sourceX, sourceY, targetX, targetY, sourcePosition, targetPosition } = props;
   const net = data?.net ?? '';
-  const severity = useEditor((s) => s.netStatus.get(net)?.severity ?? 'clean');
-  const rule = useEditor((s) => s.netStatus.get(net)?.rule ?? '');
-  const highlighted = useEditor((s) => s.selection.net === net);
+  const { severity, rule, highlighted } = parseWireLook(useKeyed(useEditorStore(), WIRE_LOOK, net));
+  const far = useFlowStore((s) => s.transform[2] < FAR_ZOOM);
   const [hover, setHover] = useState(false);
   const [path, midX, midY] = getSmoothStepPath({ sourceX, sourceY, targetX, targetY, sourcePosition, targetPosition, borderRadius: 3, offset: 14 });
   const name = labelPlace(sourceX, sourceY, sourcePosition);
 
   const classes = ['rc-wire', `rc-wire--${severity}`, selected ? 'rc-wire--selected' : '', highlighted ? 'rc-wire--net' : ''].filter((c) => c !== '').join(' ');
   return (
-    <g className={classes} data-net={net} data-severity={severity} data-rule={rule} onMouseEnter={() => setHover(true)} onMouseLeave={() => setHover(false)}>
-      {(selected || highlighted || severity === 'error') && <path d={path} className="rc-wire-under" fill="none" />}
-      <BaseEdge id={id} path={path} interactionWidth={14} />
-      {(data?.label != null || hover) && (
+    <g className={classes} data-net={net} data-severity={severity} data-rule={rule} onMouseEnter={far ? undefined : () => setHover(true)} onMouseLeave={() => setHover(false)}>
+      {(selected || highlighted) && <path d={path} className="rc-wire-halo" fill="none" />}
+      {(severity === 'error' || severity === 'warning') && <path d={path} className="rc-wire-case" fill="none" />}
+      {/* Far out, a wire is too thin to aim at: no wide invisible twin to catch the pointer. */}
+      <BaseEdge id={id} path={path} interactionWidth={far ? 0 : 14} />
+      {!far && (data?.label != null || hover) && (
         <EdgeLabelRenderer>
           {data?.label != null && (
             <div

@@ -29,17 +29,31 @@ export function pinLayout(pins: readonly Pin[]): PinLayout {
 export const CHIP_WIDTH = 208;
 /** Room around the chip inside its node, where the outer half of each handle sits (styles.css, .rc-chip). */
 export const NODE_MARGIN = 6;
+/** The rail-coloured top border and the header (styles.css: border-top 3px, .rc-chip-head 41px). */
 export const HEADER_HEIGHT = 44;
 export const ROW_HEIGHT = 20;
+/** Padding above and below the pin rows (.rc-chip-body). */
+export const BODY_PADDING = 6;
 export const STRIP_HEIGHT = 30;
+export const BOTTOM_BORDER = 1;
 
-/** The chip's drawn size, for finding a free place before React Flow has measured it. */
+/**
+ * The chip's drawn size, exactly as styles.css draws it: the node is given this size (plus its
+ * margin), so that the browser can contain each chip's layout and paint (`contain: strict`).
+ */
 export function chipSize(part: Part): { width: number; height: number } {
+  const hit = sizes.get(part.pins);
+  if (hit !== undefined) return hit;
   const l = pinLayout(part.pins);
-  const rows = Math.max(l.left.length, l.right.length, 1);
-  const strips = (l.top.length > 0 ? STRIP_HEIGHT + 1 : 0) + (l.bottom.length > 0 ? STRIP_HEIGHT + 1 : 0);
-  return { width: CHIP_WIDTH, height: HEADER_HEIGHT + rows * ROW_HEIGHT + strips + 8 };
+  const rows = Math.max(l.left.length, l.right.length);
+  const body = rows > 0 ? rows * ROW_HEIGHT + BODY_PADDING : 0;
+  const strips = (l.top.length > 0 ? STRIP_HEIGHT : 0) + (l.bottom.length > 0 ? STRIP_HEIGHT : 0);
+  const size = { width: CHIP_WIDTH, height: HEADER_HEIGHT + body + strips + BOTTOM_BORDER };
+  sizes.set(part.pins, size);
+  return size;
 }
+
+const sizes = new WeakMap<readonly Pin[], { width: number; height: number }>();
 
 /**
  * The first place near `at` where a chip of `size` overlaps no part, trying a widening ring

@@ -1,8 +1,10 @@
 /**
  * React Flow nodes and edges derived from the design, cached per record: an edit replaces only
- * the node and edge objects of what it touched, because a changed object makes React Flow
- * re-measure and re-render it (stack.md, "React Flow at scale"). Severity stays out of the
- * edge objects: each wire reads its net's status from the store by id.
+ * the node and edge objects whose drawing it changed, because a changed object makes React Flow
+ * re-run its selectors and re-render (stack.md, "React Flow at scale"). What a chip shows (its
+ * part) and what a wire shows (its net's severity) stay out of the objects: each chip reads its
+ * part and each wire its net's status from the editor's store by id. A node changes only with
+ * its place, size or selection; a net's edges only with its wires, name or selection.
  */
 import type { Edge, Node } from '@xyflow/react';
 import type { Design, Net, Part } from '../../rules/model/schema.ts';
@@ -10,20 +12,20 @@ import { netWires, splitPinKey, wireId } from '../store/commands/index.ts';
 import type { XY } from '../store/editorStore.ts';
 import { chipSize, NODE_MARGIN } from './chipLayout.ts';
 
-export type ChipNode = Node<{ part: Part }, 'chip'>;
+export type ChipNode = Node<{ readonly part: string }, 'chip'>;
 export type WireEdge = Edge<{ net: string; label: string | null }, 'wire'>;
 
 interface NodeEntry {
-  readonly part: Part;
-  readonly selected: boolean;
-  readonly x: number;
-  readonly y: number;
+  readonly key: string;
   readonly node: ChipNode;
 }
 
 interface NetEntry {
   readonly net: Net;
+  readonly ids: readonly string[];
   readonly selectedKey: string;
+  /** Wires, name and selection: what the edge objects hold. */
+  readonly key: string;
   readonly edges: readonly WireEdge[];
 }
 
@@ -38,6 +40,16 @@ export function createFlowDeriver() {
   const netCache = new Map<string, NetEntry>();
   /** Sizes React Flow measured, handed to each new node object so that it is not re-measured from nothing. */
   const measured = new Map<string, Measured>();
+  let lastNodes: ChipNode[] = [];
+  let lastEdges: WireEdge[] = [];
+
+  /**
+   * The previous array when every object in it is the same: a new array, even of the same
+   * objects, makes React Flow adopt its nodes again and run every node's and edge's selectors.
+   */
+  function same<T>(last: T[], next: T[]): T[] {
+    return last.length === next.length && next.every((x, k) => x === last[k]) ? last : next;
+  }
 
   function nodes(parts: readonly Part[], selectedParts: readonly string[], drag: ReadonlyMap<string, XY> | null): ChipNode[] {
     const selected = new Set(selectedParts);
@@ -46,27 +58,30 @@ export function createFlowDeriver() {
       seen.add(part.id);
       const pos = drag?.get(part.id) ?? part.position ?? { x: 0, y: 0 };
       const isSelected = selected.has(part.id);
-      const hit = nodeCache.get(part.id);
-      if (hit !== undefined && hit.part === part && hit.selected === isSelected && hit.x === pos.x && hit.y === pos.y) return hit.node;
-      const size = measured.get(part.id);
-      // The drawn size before React Flow measures it: nodes outside the view are never
-      // rendered (onlyRenderVisibleElements), and the first fitView must still see them.
+      // The drawn size, given rather than measured: nodes outside the view are never rendered
+      // (onlyRenderVisibleElements), yet the first fitView must see them; and a node of known
+      // size lets the browser contain it (styles.css, contain: strict).
       const drawn = chipSize(part);
+      const key = `${pos.x},${pos.y},${drawn.width},${drawn.height},${isSelected ? 1 : 0}`;
+      const hit = nodeCache.get(part.id);
+      if (hit !== undefined && hit.key === key) return hit.node;
+      const size = measured.get(part.id);
       const node: ChipNode = {
         id: part.id,
         type: 'chip',
         position: { x: pos.x, y: pos.y },
-        data: { part },
+        data: { part: part.id },
         selected: isSelected,
-        initialWidth: drawn.width + 2 * NODE_MARGIN,
-        initialHeight: drawn.height + 2 * NODE_MARGIN,
+        width: drawn.width + 2 * NODE_MARGIN,
+        height: drawn.height + 2 * NODE_MARGIN,
         ...(size === undefined ? {} : { measured: { width: size.width, height: size.height } }),
       };
-      nodeCache.set(part.id, { part, selected: isSelected, x: pos.x, y: pos.y, node });
+      nodeCache.set(part.id, { key, node });
       return node;
     });
     for (const id of nodeCache.keys()) if (!seen.has(id)) nodeCache.delete(id);
-    return out;
+    lastNodes = same(lastNodes, out);
+    return lastNodes;
   }
 
   function edges(nets: readonly Net[], selectedWires: readonly string[]): WireEdge[] {
@@ -75,11 +90,21 @@ export function createFlowDeriver() {
     const out: WireEdge[] = [];
     for (const net of nets) {
       seen.add(net.id);
+      const hit = netCache.get(net.id);
+      const mine = selected.size === 0 ? '' : (hit?.ids ?? netWires(net).map(([a, b]) => wireId(net.id, a, b))).filter((id) => selected.has(id)).join('|');
+      // The same net object drawn with the same selection: nothing to look at.
+      if (hit !== undefined && hit.net === net && hit.selectedKey === mine) {
+        out.push(...hit.edges);
+        continue;
+      }
       const wires = netWires(net);
       const ids = wires.map(([a, b]) => wireId(net.id, a, b));
-      const selectedKey = ids.filter((id) => selected.has(id)).join('|');
-      const hit = netCache.get(net.id);
-      if (hit !== undefined && hit.net === net && hit.selectedKey === selectedKey) {
+      const selectedKey = selected.size === 0 ? '' : ids.filter((id) => selected.has(id)).join('|');
+      const label = net.label ?? net.id;
+      const key = `${ids.join('|')}\n${label}\n${selectedKey}`;
+      // A changed net drawn the same (a waiver, a pull, a capacitance): the same edge objects.
+      if (hit !== undefined && hit.key === key) {
+        netCache.set(net.id, { ...hit, net, selectedKey });
         out.push(...hit.edges);
         continue;
       }
@@ -94,15 +119,16 @@ export function createFlowDeriver() {
           target: t.part,
           targetHandle: t.pin,
           // The first wire carries the net's name.
-          data: { net: net.id, label: k === 0 ? (net.label ?? net.id) : null },
+          data: { net: net.id, label: k === 0 ? label : null },
           selected: selected.has(ids[k]!),
         };
       });
-      netCache.set(net.id, { net, selectedKey, edges: made });
+      netCache.set(net.id, { net, ids, selectedKey, key, edges: made });
       out.push(...made);
     }
     for (const id of netCache.keys()) if (!seen.has(id)) netCache.delete(id);
-    return out;
+    lastEdges = same(lastEdges, out);
+    return lastEdges;
   }
 
   return { nodes, edges, measured };

@@ -3,6 +3,7 @@ import { useEditor } from '../store/EditorProvider.tsx';
 import { NetDetails } from './NetDetails.tsx';
 import { PartDetails } from './PartDetails.tsx';
 import { PowerStatesEditor } from './PowerStatesEditor.tsx';
+import { ProfilesEditor } from './ProfilesEditor.tsx';
 import { RailsEditor } from './RailsEditor.tsx';
 
 export function DetailsPanel() {
@@ -11,14 +12,14 @@ export function DetailsPanel() {
   const many = useEditor((s) => s.selection.parts.length + s.selection.wires.length);
   return (
     <section className="rc-details" aria-label="Details">
-      <div className="rc-panel-head">Details</div>
+      <h2 className="rc-panel-head">Details</h2>
       <div className="rc-details-body">
         {part !== undefined ? (
           <PartDetails part={part} />
         ) : net !== undefined ? (
           <NetDetails net={net} />
         ) : (
-          <p className="rc-empty">{many > 1 ? `${many} items selected: Delete removes them.` : 'Select a chip or a wire to edit it.'}</p>
+          <p className="rc-empty">{many > 1 ? `${many} items selected: Delete removes them; Ctrl+C copies the chips, arrow keys move them.` : 'Select a chip or a wire to edit it.'}</p>
         )}
         <details className="rc-fold">
           <summary>Rails</summary>
@@ -27,6 +28,10 @@ export function DetailsPanel() {
         <details className="rc-fold">
           <summary>Power states</summary>
           <PowerStatesEditor />
+        </details>
+        <details className="rc-fold" data-testid="profiles-fold">
+          <summary>Profiles of this design</summary>
+          <ProfilesEditor />
         </details>
       </div>
     </section>

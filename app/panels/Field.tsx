@@ -41,6 +41,10 @@ interface FieldProps {
   testId?: string;
   /** Hide the label visually (it stays the input's accessible name). */
   quiet?: boolean;
+  /** Shown in the empty field: what applies when nothing is typed. */
+  placeholder?: string;
+  /** A longer description for assistive technology and the pointer's tooltip. */
+  title?: string;
 }
 
 function Frame({ label, quiet, error, errorId, children }: { label: string; quiet?: boolean | undefined; error: string | null; errorId: string; children: React.ReactNode }) {
@@ -53,7 +57,7 @@ function Frame({ label, quiet, error, errorId, children }: { label: string; quie
   );
 }
 
-export function TextField({ label, value, onCommit, testId, quiet }: FieldProps & { value: string; onCommit: (text: string) => Outcome }) {
+export function TextField({ label, value, onCommit, testId, quiet, placeholder, title }: FieldProps & { value: string; onCommit: (text: string) => Outcome }) {
   const errorId = useId();
   const f = useEditing(value, (text) => {
     const out = onCommit(text);
@@ -61,7 +65,7 @@ export function TextField({ label, value, onCommit, testId, quiet }: FieldProps 
   });
   return (
     <Frame label={label} quiet={quiet} error={f.error} errorId={errorId}>
-      <input type="text" value={f.value} data-testid={testId} spellCheck={false} aria-invalid={f.error !== null}
+      <input type="text" value={f.value} data-testid={testId} spellCheck={false} aria-invalid={f.error !== null} placeholder={placeholder} title={title}
         aria-describedby={f.error !== null ? errorId : undefined}
         onChange={(e) => f.onChange(e.target.value)} onBlur={f.onBlur} onKeyDown={f.onKeyDown} />
     </Frame>
@@ -92,6 +96,33 @@ export function QuantityField({ label, value, unit, onCommit, format, parse, tes
     <Frame label={label} quiet={quiet} error={f.error} errorId={errorId}>
       <input type="text" inputMode="decimal" value={f.value} data-testid={testId} spellCheck={false} aria-invalid={f.error !== null}
         aria-describedby={f.error !== null ? errorId : undefined}
+        onChange={(e) => f.onChange(e.target.value)} onBlur={f.onBlur} onKeyDown={f.onKeyDown} />
+    </Frame>
+  );
+}
+
+/** A quantity that may be left empty: empty text stores nothing (`undefined`), and the placeholder says what applies then. */
+export function OptionalQuantityField({ label, value, unit, onCommit, testId, quiet, placeholder, title }: FieldProps & {
+  value: number | undefined;
+  unit: Unit;
+  onCommit: (value: number | undefined) => Outcome;
+}) {
+  const errorId = useId();
+  const shown = value === undefined ? '' : formatQuantity(value, unit, 4);
+  const f = useEditing(shown, (text) => {
+    if (text.trim() === '') {
+      const out = onCommit(undefined);
+      return out.ok ? null : out.reason;
+    }
+    const read = parseQuantity(text, unit);
+    if (!read.ok) return read.error;
+    const out = onCommit(read.value);
+    return out.ok ? null : out.reason;
+  });
+  return (
+    <Frame label={label} quiet={quiet} error={f.error} errorId={errorId}>
+      <input type="text" inputMode="decimal" value={f.value} data-testid={testId} spellCheck={false} aria-invalid={f.error !== null}
+        placeholder={placeholder} title={title} aria-describedby={f.error !== null ? errorId : undefined}
         onChange={(e) => f.onChange(e.target.value)} onBlur={f.onBlur} onKeyDown={f.onKeyDown} />
     </Frame>
   );

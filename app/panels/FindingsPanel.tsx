@@ -2,12 +2,13 @@
  * The findings: grouped by severity then rule (in the catalogue's order), filtered by power
  * state, rule and severity. A click selects the finding's net (or part) and brings it into view.
  */
-import { useMemo, useState } from 'react';
+import { useCallback, useMemo, useState } from 'react';
 import type { Finding, Severity } from '../../rules/engine/types.ts';
 import { RULES } from '../../rules/checks/index.ts';
 import { SeverityGlyph } from '../canvas/SeverityGlyph.tsx';
 import { useFocus } from '../canvas/placement.ts';
 import { useEditor, useEditorStore } from '../store/EditorProvider.tsx';
+import { FindingRow } from './FindingRow.tsx';
 
 const SEVERITIES: readonly { key: Severity; title: string }[] = [
   { key: 'error', title: 'Errors' },
@@ -34,7 +35,7 @@ export function FindingsPanel() {
   const focus = useFocus();
   const [stateFilter, setStateFilter] = useState(CANVAS);
   const [ruleFilter, setRuleFilter] = useState(ALL);
-  const [shown, setShown] = useState<Record<Severity | 'waived', boolean>>({ error: true, warning: true, info: false, waived: false });
+  const [shown, setShown] = useState<Record<Severity | 'waived', boolean>>({ error: true, warning: true, info: false, waived: true });
 
   const scenario = stateFilter === CANVAS ? powerState : stateFilter;
   const stateLabel = useMemo(() => new Map(states.map((s) => [s.id, s.label])), [states]);
@@ -54,11 +55,11 @@ export function FindingsPanel() {
     return SEVERITIES.map(({ key, title }) => {
       const rows = visible.filter((f) => f.severity === key);
       const rules = RULES.map((r) => ({ rule: r.id, rows: rows.filter((f) => f.rule === r.id) })).filter((g) => g.rows.length > 0);
-      return { key, title, rules, size: rows.length };
+      return { key, title, rules, size: rows.length, waived: rows.filter((f) => f.waived !== undefined).length };
     }).filter((g) => g.size > 0);
   }, [inState, ruleFilter, shown]);
 
-  const pick = (f: Finding) => {
+  const pick = useCallback((f: Finding) => {
     const s = store.getState();
     if (f.net !== null) {
       s.select({ parts: [], wires: [], net: f.net });
@@ -67,11 +68,11 @@ export function FindingsPanel() {
       s.select({ parts: [f.parts[0]], wires: [], net: null });
       focus({ part: f.parts[0] });
     }
-  };
+  }, [store, focus]);
 
   return (
     <section className="rc-findings" aria-label="Findings">
-      <div className="rc-panel-head">Findings</div>
+      <h2 className="rc-panel-head">Findings</h2>
       <div className="rc-filters">
         <select aria-label="Power state of the findings" value={stateFilter} onChange={(e) => setStateFilter(e.target.value)} data-testid="findings-state">
           <option value={CANVAS}>As on the canvas</option>
@@ -95,26 +96,14 @@ export function FindingsPanel() {
         {groups.length === 0 && <p className="rc-empty">Nothing to show with these filters.</p>}
         {groups.map((g) => (
           <section key={g.key} className={`rc-sev-group rc-sev-group--${g.key}`}>
-            <h3><SeverityGlyph severity={g.key} /> {g.title} <span className="rc-n">{g.size}</span></h3>
+            <h3><SeverityGlyph severity={g.key} /> {g.title} <span className="rc-n">{g.size}{g.waived > 0 && `, ${g.waived} waived`}</span></h3>
             {g.rules.map(({ rule, rows }) => (
               <div key={rule} className="rc-rule-group">
                 <h4>{TITLES.get(rule) ?? rule} <span className="rc-n">{rows.length}</span></h4>
                 <ul>
                   {rows.map((f) => (
-                    <li key={f.id}>
-                      <button type="button" className={`rc-finding${f.waived !== undefined ? ' rc-finding--waived' : ''}`} onClick={() => pick(f)}
-                        data-net={f.net ?? ''} data-severity={f.severity} data-rule={f.rule} data-finding={f.id}>
-                        <span className="rc-finding-top">
-                          <span className="rc-finding-place">{place(f, netLabel)}</span>
-                          <span className="rc-finding-rule">
-                            {TITLES.get(f.rule) ?? f.rule}
-                            {scenario === ALL && ` · ${stateLabel.get(f.scenario) ?? f.scenario}`}
-                          </span>
-                        </span>
-                        <span className="rc-finding-msg">{f.message}</span>
-                        <span className="rc-finding-hint">{f.waived !== undefined ? `Waived: ${f.waived}` : f.hint}</span>
-                      </button>
-                    </li>
+                    <FindingRow key={f.id} finding={f} showState={scenario === ALL} onPick={pick}
+                      text={{ place: place(f, netLabel), rule: TITLES.get(f.rule) ?? f.rule, state: stateLabel.get(f.scenario) ?? f.scenario }} />
                   ))}
                 </ul>
               </div>

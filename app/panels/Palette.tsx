@@ -6,6 +6,7 @@
 import { useMemo, useRef, useState, type DragEvent, type KeyboardEvent } from 'react';
 import { TEMPLATE_MIME, usePlacePart } from '../canvas/placement.ts';
 import { searchTemplates, type Template } from '../store/templates.ts';
+import { useEditorStore } from '../store/EditorProvider.tsx';
 
 function groupByName(list: readonly Template[]): [string, Template[]][] {
   const groups = new Map<string, Template[]>();
@@ -22,6 +23,7 @@ export function Palette() {
   const found = useMemo(() => searchTemplates(query), [query]);
   const groups = useMemo(() => groupByName(found), [found]);
   const place = usePlacePart();
+  const store = useEditorStore();
   const listRef = useRef<HTMLUListElement>(null);
 
   const items = () => [...(listRef.current?.querySelectorAll<HTMLElement>('[data-template]') ?? [])];
@@ -58,10 +60,14 @@ export function Palette() {
 
   return (
     <aside className="rc-palette" aria-label="Parts">
-      <div className="rc-panel-head">Parts</div>
+      <div className="rc-palette-top">
+        <h2 className="rc-panel-head">Parts</h2>
+        <button type="button" className="rc-new-chip" data-testid="new-chip" title="Make a chip of your own from a pin table"
+          onClick={() => store.getState().openDialog({ kind: 'chip', part: null })}>New chip…</button>
+      </div>
       <input className="rc-search" type="search" placeholder="Search name or family" aria-label="Search parts"
         value={query} onChange={(e) => setQuery(e.target.value)} onKeyDown={onSearchKey} data-testid="palette-search" />
-      <ul className="rc-palette-list" ref={listRef}>
+      <ul className="rc-palette-list" ref={listRef} aria-label="Part templates">
         {groups.map(([name, list]) => (
           <li key={name} className="rc-palette-group">
             <div className="rc-palette-name">{name}</div>

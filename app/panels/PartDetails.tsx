@@ -1,21 +1,34 @@
+import { useState } from 'react';
 import type { Part } from '../../rules/model/schema.ts';
-import { BUILTIN_PROFILES } from '../../rules/profiles/index.ts';
+import { resolveProfile } from '../../rules/profiles/index.ts';
 import { glyphKind, GLYPH_TEXT, PinGlyph } from '../canvas/PinGlyph.tsx';
 import { sideOf } from '../canvas/chipLayout.ts';
-import { setPartLabel, setPartProfile, setPartRail } from '../store/commands/index.ts';
+import { renamePart, setPartLabel, setPartProfile, setPartRail } from '../store/commands/index.ts';
 import { useEditor, useEditorStore } from '../store/EditorProvider.tsx';
 import { TextField } from './Field.tsx';
+import { PinEffective } from './PinEffective.tsx';
+import { ProfileOptions } from './ProfileOptions.tsx';
 
-/** A part's label, rail and profile; its pins for reference. */
+/** A part's designator, label, rail and profile (with its source); its pins, each opening onto its effective values. */
 export function PartDetails({ part }: { part: Part }) {
   const store = useEditorStore();
   const rails = useEditor((s) => s.design.rails);
   const local = useEditor((s) => s.design.profiles);
+  const profile = useEditor((s) => resolveProfile(s.design, part.profile));
+  const [openPin, setOpenPin] = useState<string | null>(null);
   const apply = store.getState().apply;
+  const overrides = Object.keys(part.params ?? {}).length;
   return (
     <div className="rc-part-details" data-testid="part-details">
       <h3><span className="rc-chip-id">{part.id}</span> {part.label}</h3>
-      <TextField label="Label" value={part.label} testId="part-label" onCommit={(t) => apply(setPartLabel(part.id, t))} />
+      <div className="rc-two">
+        <TextField label="Designator" value={part.id} testId="part-id" onCommit={(t) => {
+          const out = apply(renamePart(part.id, t));
+          if (out.ok) store.getState().select({ parts: [t.trim()], wires: [], net: null });
+          return out;
+        }} />
+        <TextField label="Label" value={part.label} testId="part-label" onCommit={(t) => apply(setPartLabel(part.id, t))} />
+      </div>
       <label className="rc-field">
         <span className="rc-field-label">Rail</span>
         <select value={part.rail} data-testid="part-rail" onChange={(e) => apply(setPartRail(part.id, e.target.value))}>
@@ -25,25 +38,31 @@ export function PartDetails({ part }: { part: Part }) {
       <label className="rc-field">
         <span className="rc-field-label">Profile</span>
         <select value={part.profile} data-testid="part-profile" onChange={(e) => apply(setPartProfile(part.id, e.target.value))}>
-          {local !== undefined && local.length > 0 && (
-            <optgroup label="This design">
-              {local.map((p) => <option key={p.id} value={p.id}>{p.label}</option>)}
-            </optgroup>
-          )}
-          <optgroup label="Library">
-            {BUILTIN_PROFILES.filter((p) => !local?.some((l) => l.id === p.id)).map((p) => <option key={p.id} value={p.id}>{p.label}</option>)}
-          </optgroup>
+          <ProfileOptions local={local} />
         </select>
       </label>
-      <div className="rc-sub">Pins</div>
+      <p className="rc-profile-source" data-testid="part-profile-source">
+        <span className="rc-muted">Source of the profile's numbers: </span>{profile?.source ?? 'unknown profile'}
+        {local?.some((p) => p.id === part.profile) === true && <span className="rc-muted"> (a profile of this design)</span>}
+      </p>
+      <button type="button" data-testid="part-edit" onClick={() => store.getState().openDialog({ kind: 'chip', part: part.id })}>
+        Edit pins and overrides…
+      </button>
+      {overrides > 0 && <span className="rc-muted"> {overrides} override{overrides === 1 ? '' : 's'} for every pin</span>}
+      <h4 className="rc-sub">Pins</h4>
       <ul className="rc-pin-list">
         {part.pins.map((pin) => {
           const kind = glyphKind(pin);
+          const open = openPin === pin.id;
+          const own = Object.keys(pin.params ?? {}).length;
           return (
-            <li key={pin.id}>
-              <PinGlyph kind={kind} side="right" />
-              <span className="rc-pin-name">{pin.id}</span>
-              <span className="rc-muted">{GLYPH_TEXT[kind]}{pin.rail !== undefined ? `, rail ${pin.rail}` : ''}{pin.profile !== undefined ? `, ${pin.profile}` : ''} · {sideOf(pin)}</span>
+            <li key={pin.id} className="rc-pin-item">
+              <button type="button" className="rc-pin-toggle" aria-expanded={open} data-testid={`pin-toggle-${pin.id}`} onClick={() => setOpenPin(open ? null : pin.id)}>
+                <PinGlyph kind={kind} side="right" />
+                <span className="rc-pin-name">{pin.id}</span>
+                <span className="rc-muted">{GLYPH_TEXT[kind]} · {sideOf(pin)}{own > 0 ? ` · ${own} override${own === 1 ? '' : 's'}` : ''}</span>
+              </button>
+              {open && <PinEffective part={part} pin={pin} />}
             </li>
           );
         })}

@@ -1,6 +1,6 @@
 /** The status line: the last re-check (how many nets, how long), a refusal or an undo, the save state. */
 import { useSyncExternalStore } from 'react';
-import type { Saver, SaveStatus } from '../storage/currentDesign.ts';
+import type { SaveIndicator, SaveStatus } from '../storage/saver.ts';
 import { useEditor, useEditorStore } from '../store/EditorProvider.tsx';
 
 function saveText(s: SaveStatus): string {
@@ -13,7 +13,7 @@ function saveText(s: SaveStatus): string {
   }
 }
 
-export function StatusLine({ saver }: { saver: Saver }) {
+export function StatusLine({ saver }: { saver: SaveIndicator }) {
   const store = useEditorStore();
   const check = useEditor((s) => s.lastCheck);
   const notice = useEditor((s) => s.notice);

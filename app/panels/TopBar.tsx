@@ -8,6 +8,8 @@ import { SeverityGlyph } from '../canvas/SeverityGlyph.tsx';
 import { fitViewOptions } from '../canvas/placement.ts';
 import { exampleDesign } from '../example.ts';
 import { TextField } from './Field.tsx';
+import { ExportMenu } from '../library/ExportMenu.tsx';
+import { LibraryButton } from '../library/LibraryButton.tsx';
 
 function countIn(findings: readonly Finding[], state: string, severity: Severity): number {
   let n = 0;
@@ -43,6 +45,7 @@ export function TopBar() {
         </svg>
         <span>Railcross</span>
       </div>
+      <LibraryButton />
       <div className="rc-title">
         <TextField label="Design title" quiet value={title} testId="design-title" onCommit={(t) => store.getState().apply(setTitle(t))} />
       </div>
@@ -63,6 +66,7 @@ export function TopBar() {
         <button type="button" disabled={redoName === undefined} title={redoName === undefined ? 'Nothing to redo' : `Redo: ${redoName} (Ctrl+Shift+Z)`}
           data-testid="redo" onClick={() => store.getState().redo()}>Redo</button>
       </div>
+      <ExportMenu />
       <div className="rc-docs">
         <button type="button" data-testid="new-design" onClick={() => replace('New design', newDesign())}>New design</button>
         <button type="button" data-testid="open-example" onClick={() => replace('Open the example', exampleDesign())}>Open example</button>

@@ -1,6 +1,6 @@
 /**
  * The editor's store: the document (undoable), the UI state (selection, chosen power state,
- * positions during a drag: never undone) and the findings (derived). Every edit goes through
+ * the open dialog: never undone) and the findings (derived). Every edit goes through
  * `apply(command)`, the one commit path: immer records the patches for undo, the engine
  * re-checks with the previous result, and subscribers (storage) see the new design.
  */
@@ -37,6 +37,9 @@ export interface Notice {
   readonly text: string;
 }
 
+/** An open dialog: the pin table of a new chip (`part` null) or of a part, or the list of shortcuts. */
+export type Dialog = { readonly kind: 'chip'; readonly part: string | null } | { readonly kind: 'keys' };
+
 export interface XY {
   readonly x: number;
   readonly y: number;
@@ -52,18 +55,17 @@ export interface EditorState {
   readonly powerState: string;
   /** Worst severity per net in `powerState`. */
   readonly netStatus: ReadonlyMap<string, NetStatus>;
-  /** Where dragged parts are while the drag lasts; committed as one step when it ends. */
-  readonly dragPositions: ReadonlyMap<string, XY> | null;
   readonly lastCheck: CheckStat;
   readonly notice: Notice | null;
+  readonly dialog: Dialog | null;
 
   apply(command: Command): Outcome;
   undo(): boolean;
   redo(): boolean;
   select(selection: Partial<Selection>): void;
   setPowerState(id: string): void;
-  setDragPositions(positions: ReadonlyMap<string, XY> | null): void;
   notify(notice: Notice | null): void;
+  openDialog(dialog: Dialog | null): void;
 }
 
 export type EditorStore = StoreApi<EditorState>;
@@ -97,9 +99,9 @@ export function createEditorStore(design: Design): EditorStore {
       selection: EMPTY_SELECTION,
       powerState: ALL_ON,
       netStatus: netStatuses(first, ALL_ON),
-      dragPositions: null,
       lastCheck: { action: 'Open', netsChecked: first.stats.netsChecked, ms: first.stats.ms },
       notice: null,
+      dialog: null,
 
       apply(command) {
         const s = get();
@@ -151,12 +153,12 @@ export function createEditorStore(design: Design): EditorStore {
         set({ powerState: id, netStatus: netStatuses(s.result, id, s.netStatus) });
       },
 
-      setDragPositions(positions) {
-        set({ dragPositions: positions });
-      },
-
       notify(notice) {
         set({ notice });
+      },
+
+      openDialog(dialog) {
+        set({ dialog });
       },
     };
   });

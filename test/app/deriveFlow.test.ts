@@ -1,9 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import { readFileSync } from 'node:fs';
 import { createFlowDeriver, deriveOnce } from '../../app/canvas/deriveFlow.ts';
-import { connectPins, setNetLabel, setPartLabel } from '../../app/store/commands/index.ts';
+import { addWaiver, connectPins, editPart, setNetLabel, setPartLabel, setPartProfile } from '../../app/store/commands/index.ts';
+import { chipSize } from '../../app/canvas/chipLayout.ts';
+import type { Pin } from '../../rules/model/schema.ts';
 import { readDesign } from '../../rules/model/reader.ts';
-import { net } from '../support/build.ts';
+import { input, net, output, part } from '../support/build.ts';
 import { bench, harness } from './harness.ts';
 
 const text = readFileSync(new URL('../../rules/examples/greenhouse.json', import.meta.url), 'utf8');
@@ -26,16 +28,26 @@ describe('nodes and edges from the design', () => {
     expect(deriveOnce(d).edges.map((e) => e.id)).toEqual(['A:D.Y1:T.A', 'A:D.Y1:H.A']);
   });
 
-  it('an edit replaces only the node and edge objects it touched', () => {
+  it('an edit replaces only the node and edge objects whose drawing it changed', () => {
     const h = harness(bench({ nets: [net('A', ['D.Y1', 'H.A']), net('B', ['D.Y2', 'T.A'])] }));
     const flow = createFlowDeriver();
     const n0 = flow.nodes(h.design.parts, [], null);
     const e0 = flow.edges(h.design.nets, []);
 
+    // A chip reads its part from the store: a new label or family leaves every node, and the array, alone.
     h.apply(setPartLabel('T', 'Receiver'));
+    h.apply(setPartProfile('T', '74hc'));
+    expect(flow.nodes(h.design.parts, [], null)).toBe(n0);
+    // A pin more makes the chip taller: that node only.
+    const t = h.design.parts[2]!;
+    h.apply(editPart('T', { ...t, pins: [...t.pins, input('C')] }));
     const n1 = flow.nodes(h.design.parts, [], null);
     expect(n1.map((n, k) => n === n0[k])).toEqual([true, true, false, true]);
+    expect(n1[2]!.height).toBeGreaterThan(n0[2]!.height!);
 
+    // A waiver changes the net, not its drawing: the same edges, the same array.
+    h.apply(addWaiver({ net: 'B', rule: 'level-high' }, 'seen'));
+    expect(flow.edges(h.design.nets, [])).toBe(e0);
     h.apply(setNetLabel('B', 'EN'));
     const e1 = flow.edges(h.design.nets, []);
     expect(e1.map((e, k) => e === e0[k])).toEqual([true, false]);
@@ -52,5 +64,16 @@ describe('nodes and edges from the design', () => {
     const n2 = flow.nodes(h.design.parts, [], new Map([['H', { x: 5, y: 6 }]]));
     expect(n2.map((n, k) => n === n1[k])).toEqual([true, false, true, true]);
     expect(n2[1]?.position).toEqual({ x: 5, y: 6 });
+  });
+
+  // Sizes as styles.css draws them (border 3 + header 41, rows of 20 with 6 of padding, strips of 30, border 1).
+  const sizes: { name: string; pins: Pin[]; height: number }[] = [
+    { name: 'one input', pins: [input('A')], height: 44 + 26 + 1 },
+    { name: 'two inputs and an output', pins: [input('A'), input('B'), output('Y')], height: 44 + 46 + 1 },
+    { name: 'a pin on top only', pins: [input('A', { side: 'top' })], height: 44 + 30 + 1 },
+    { name: 'three rows, a top and a bottom strip', pins: [input('A'), input('B'), input('C'), output('T', { side: 'top' }), output('B2', { side: 'bottom' })], height: 44 + 66 + 60 + 1 },
+  ];
+  it.each(sizes)('a chip with $name is $height px tall', ({ pins, height }) => {
+    expect(chipSize(part('X', '5v0', '74hc', pins))).toEqual({ width: 208, height });
   });
 });

@@ -32,3 +32,37 @@ export function setNetPull(id: string, pull: Pull | null): Command {
     },
   };
 }
+
+/** The net's own wiring capacitance (F), or the design's default again (`undefined`). */
+export function setNetWiringCapacitance(id: string, farads: number | undefined): Command {
+  return {
+    name: `Set the wiring capacitance of net ${id}`,
+    recipe(design) {
+      const net = design.nets.find((n) => n.id === id);
+      if (net === undefined) return refuse(`There is no net ${id}.`);
+      if (farads === undefined) {
+        delete net.wiringCapacitance;
+        return;
+      }
+      if (!(Number.isFinite(farads) && farads >= 0)) return refuse('A capacitance is 0 F or more.');
+      net.wiringCapacitance = farads;
+    },
+  };
+}
+
+/** The slowest acceptable rise time (s), or no limit (`undefined`). */
+export function setNetMaxRiseTime(id: string, seconds: number | undefined): Command {
+  return {
+    name: `Set the rise-time limit of net ${id}`,
+    recipe(design) {
+      const net = design.nets.find((n) => n.id === id);
+      if (net === undefined) return refuse(`There is no net ${id}.`);
+      if (seconds === undefined) {
+        delete net.maxRiseTime;
+        return;
+      }
+      if (!(Number.isFinite(seconds) && seconds > 0)) return refuse('A rise-time limit is a time above 0 s.');
+      net.maxRiseTime = seconds;
+    },
+  };
+}

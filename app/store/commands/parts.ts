@@ -1,20 +1,17 @@
 import type { Draft } from 'immer';
 import type { Design, Part } from '../../../rules/model/schema.ts';
 import { resolveProfile } from '../../../rules/profiles/index.ts';
+import { partProblem } from './partEdit.ts';
 import { refuse, type Command } from './command.ts';
 import { netWires } from './netGraph.ts';
 
-const BAD_ID = /[.:>]/;
-
-/** Place a new part (a template made it, with a fresh designator). */
+/** Place a new part (a template or the pin table made it, with a fresh designator). */
 export function addPart(part: Part): Command {
   return {
     name: `Add ${part.id}`,
     recipe(design) {
-      if (part.id === '' || BAD_ID.test(part.id)) return refuse(`"${part.id}" cannot be a designator (no ".", ":" or ">").`);
-      if (design.parts.some((p) => p.id === part.id)) return refuse(`There is already a part ${part.id}.`);
-      if (!design.rails.some((r) => r.id === part.rail)) return refuse(`There is no rail ${part.rail}: add a rail first.`);
-      if (resolveProfile(design, part.profile) === undefined) return refuse(`There is no profile ${part.profile}.`);
+      const problem = partProblem(design as Design, part);
+      if (problem !== undefined) return refuse(problem);
       design.parts.push(structuredClone(part));
     },
   };
@@ -39,6 +36,24 @@ export function moveParts(moves: readonly Move[]): Command {
         if (part.position?.x === x && part.position.y === y) continue;
         part.position = { x, y };
       }
+    },
+  };
+}
+
+/** Move parts by a step (arrow keys): one key press is one undo step. */
+export function nudgeParts(ids: readonly string[], dx: number, dy: number): Command {
+  return {
+    name: ids.length === 1 ? `Nudge ${ids[0]}` : `Nudge ${ids.length} parts`,
+    recipe(design) {
+      const chosen = new Set(ids);
+      let moved = 0;
+      for (const part of design.parts) {
+        if (!chosen.has(part.id)) continue;
+        const at = part.position ?? { x: 0, y: 0 };
+        part.position = { x: Math.round(at.x + dx), y: Math.round(at.y + dy) };
+        moved++;
+      }
+      if (moved === 0) return refuse('Select a part to move it.');
     },
   };
 }

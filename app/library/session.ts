@@ -1,0 +1,383 @@
+/**
+ * The page's session: which design is open, its editor and autosave, the library actions,
+ * and what the user must be told (a conflict with another tab, a failed write, a refused
+ * file). Not React: the components read `state` through narrow selectors.
+ *
+ * Every opened design gets a fresh editor store (its own undo history). Edits reach storage
+ * through the editor's subscription → `Saver` → `Library.save`, which refuses to write over
+ * a revision it did not start from.
+ */
+import { createStore, type StoreApi } from 'zustand/vanilla';
+import { newDesign } from '../../rules/model/newDesign.ts';
+import type { DesignError } from '../../rules/model/paths.ts';
+import type { Design } from '../../rules/model/schema.ts';
+import { replaceDesign, setTitle } from '../store/commands/index.ts';
+import { createEditorStore, type EditorStore } from '../store/editorStore.ts';
+import type { DesignRecord } from '../storage/db.ts';
+import { readDesignFile } from '../storage/designFile.ts';
+import { storageProblem } from '../storage/errors.ts';
+import type { Change, Library } from '../storage/library.ts';
+import type { Saver } from '../storage/saver.ts';
+import { exportDesignFile } from './download.ts';
+import { countsOf, Editing, HELD, type Conflict, type EditingHooks, type Entry } from './editing.ts';
+import type { TabChannel } from './tabs.ts';
+
+export type { Conflict, Entry } from './editing.ts';
+
+export interface OpenDesign {
+  /** The design's id in the library; null when storage is unavailable. */
+  readonly id: string | null;
+  /** Changes whenever the editor store does (the view remounts on it). */
+  readonly serial: number;
+  readonly store: EditorStore;
+  readonly saver: Saver<Entry>;
+}
+
+export interface NoticeAction {
+  readonly label: string;
+  readonly run: () => void;
+}
+
+export interface Notice {
+  /** One notice per key: a newer one replaces it. */
+  readonly key: string;
+  readonly tone: 'error' | 'info';
+  readonly title: string;
+  readonly lines: readonly string[];
+  readonly actions?: readonly NoticeAction[];
+}
+
+export type LibraryView = 'designs' | 'deleted' | 'history';
+
+export interface SessionState {
+  readonly open: OpenDesign;
+  readonly conflict: Conflict | null;
+  readonly notices: readonly Notice[];
+  readonly view: LibraryView | null;
+  /** Why nothing can be stored in this browser, if so. */
+  readonly storageError: string | null;
+  /** A long task in progress ("Making the PDF…"), for the progress indication. */
+  readonly task: string | null;
+}
+
+export function errorLines(errors: readonly DesignError[], max = 6): string[] {
+  const lines = errors.slice(0, max).map((e) => `${e.path}: ${e.message}`);
+  if (errors.length > max) lines.push(`… and ${errors.length - max} more`);
+  return lines;
+}
+
+/** Revisions the reader refused on opening, and which one is open instead. */
+export function refusedRevisionsNotice(title: string, revs: readonly number[], opened: number, errors: readonly DesignError[]): Notice {
+  const which = revs.length === 1 ? `revision ${revs[0]} could not be read` : `revisions ${revs.join(', ')} could not be read`;
+  return {
+    key: 'open', tone: 'error',
+    title: `“${title}”: ${which}; revision ${opened} is open`,
+    lines: [...errorLines(errors, 3), 'The unreadable revisions stay stored; the next save starts from this one.'],
+  };
+}
+
+export class Session {
+  readonly state: StoreApi<SessionState>;
+  private ctx: Editing;
+  private serial = 0;
+  private readonly hooks: EditingHooks = {
+    onConflict: (editing, conflict) => {
+      if (editing === this.ctx) this.state.setState({ conflict });
+    },
+    isHeld: (editing) => editing === this.ctx && this.state.getState().conflict !== null,
+    onStatus: (editing) => this.onSaveStatus(editing),
+    storageError: () => this.state.getState().storageError,
+  };
+
+  constructor(
+    readonly library: Library | null,
+    private readonly channel: TabChannel | null,
+    first: { readonly id: string | null; readonly rev: number; readonly design: Design },
+    storageError: string | null = null,
+  ) {
+    this.ctx = this.editing(first.id, first.rev, first.design);
+    this.state = createStore<SessionState>()(() => ({
+      open: this.openOf(this.ctx), conflict: null, notices: [], view: null, storageError, task: null,
+    }));
+    this.channel?.subscribe((change) => this.onRemoteChange(change));
+    this.settled = this.afterOpen(this.ctx);
+  }
+
+  /** Resolves when the bookkeeping after opening a design (last opened, counts) is stored. */
+  settled: Promise<void>;
+
+  /** The open design's editor. */
+  get editor(): EditorStore {
+    return this.ctx.store;
+  }
+
+  get openId(): string | null {
+    return this.ctx.id;
+  }
+
+  // ---- opening ---------------------------------------------------------------------------
+
+  /** Open a design of the library in place of the current one (whose edits are saved first). */
+  async openDesign(id: string): Promise<boolean> {
+    if (this.library === null || id === this.ctx.id) return id === this.ctx.id;
+    await this.flush();
+    const opened = await this.library.open(id);
+    if (!opened.ok) {
+      this.notify({ key: 'open', tone: 'error', title: 'This design could not be opened', lines: opened.reason === 'missing' ? ['It is no longer in the library.'] : opened.refused.flatMap((r) => errorLines(r.errors, 3)) });
+      return false;
+    }
+    if (opened.refused.length > 0) this.notify(refusedRevisionsNotice(opened.record.title, opened.refused.map((r) => r.rev), opened.rev, opened.refused[0]?.errors ?? []));
+    this.adopt(id, opened.record.rev, opened.design);
+    return true;
+  }
+
+  /** Store `design` as a new design and open it. */
+  async createAndOpen(design: Design): Promise<DesignRecord | null> {
+    if (this.library === null) {
+      this.ctx.store.getState().apply(replaceDesign(design, 'Open a design'));
+      return null;
+    }
+    await this.flush();
+    // The editor's first check gives the counts the list shows.
+    const store = createEditorStore(design);
+    const record = await this.library.create(design, countsOf(store));
+    this.adopt(record.id, record.rev, design, store);
+    return record;
+  }
+
+  async newDesign(): Promise<void> {
+    await this.guard('The new design could not be stored', () => this.createAndOpen(newDesign()));
+  }
+
+  /** Import a design file as a new design; a refused file changes nothing stored. */
+  async importFile(file: File): Promise<boolean> {
+    const read = await readDesignFile(file);
+    if (!read.ok) {
+      this.notify({ key: 'import', tone: 'error', title: `“${file.name}” was not imported: it is not a valid design file`, lines: [...errorLines(read.errors), 'Nothing stored has changed.'] });
+      return false;
+    }
+    const ok = await this.guard(`“${file.name}” could not be stored`, () => this.createAndOpen(read.design));
+    if (ok) this.notify({ key: 'import', tone: 'info', title: `Imported “${read.design.title}” as a new design`, lines: [] });
+    this.setView(null);
+    return ok;
+  }
+
+  // ---- library actions -------------------------------------------------------------------
+
+  async rename(id: string, title: string): Promise<void> {
+    if (id === this.ctx.id) {
+      this.ctx.store.getState().apply(setTitle(title));
+      return;
+    }
+    await this.guard('The design could not be renamed', async () => this.refused('renamed', await this.library?.rename(id, title)));
+  }
+
+  async duplicate(id: string): Promise<void> {
+    if (id === this.ctx.id) await this.flush();
+    await this.guard('The design could not be duplicated', async () => this.refused('duplicated', await this.library?.duplicate(id)));
+  }
+
+  /** A library action that found the design changed, gone or unreadable says so. */
+  private refused(what: string, outcome: object | undefined): void {
+    if (outcome === undefined || !('ok' in outcome) || outcome.ok !== false || !('reason' in outcome)) return;
+    const why = outcome.reason === 'changed' ? 'another tab saved it meanwhile: try again'
+      : outcome.reason === 'unreadable' ? 'its stored revisions could not be read'
+        : 'it is no longer in the library';
+    this.notify({ key: 'storage', tone: 'error', title: `The design could not be ${what}`, lines: [`Why: ${why}.`] });
+  }
+
+  /** Move a design to "recently deleted"; deleting the open one opens the next (or a new one). */
+  async remove(id: string): Promise<void> {
+    const library = this.library;
+    if (library === null) return;
+    const isOpen = id === this.ctx.id;
+    if (isOpen) await this.flush();
+    await this.guard('The design could not be deleted', async () => {
+      await library.remove(id);
+      if (isOpen) {
+        const { designs } = await library.list();
+        const next = designs.find((d) => d.id !== id);
+        if (next === undefined || !(await this.openDesign(next.id))) await this.createAndOpen(newDesign());
+      }
+    });
+  }
+
+  async restore(id: string): Promise<void> {
+    await this.guard('The design could not be restored', async () => this.library?.restore(id));
+  }
+
+  async purge(id: string): Promise<void> {
+    await this.guard('The design could not be deleted', async () => this.library?.purge(id));
+  }
+
+  /** Bring back a revision of the open design: as its current state (undoable), or as a new design. */
+  async restoreRevision(rev: number, asCopy: boolean): Promise<void> {
+    const { library, ctx } = this;
+    if (library === null || ctx.id === null) return;
+    const read = await library.readRevision(ctx.id, rev);
+    if (!read.ok) {
+      this.notify({ key: 'revision', tone: 'error', title: `Revision ${rev} could not be read`, lines: errorLines(read.errors) });
+      return;
+    }
+    this.setView(null);
+    if (asCopy) await this.guard('The copy could not be stored', () => this.createAndOpen({ ...read.design, title: `${read.design.title} (revision ${rev})` }));
+    else ctx.store.getState().apply(replaceDesign(read.design, `Restore revision ${rev}`));
+  }
+
+  // ---- saving and other tabs -------------------------------------------------------------
+
+  /** Write what is pending now (page hidden or closing, another design opening). */
+  flush(): Promise<void> {
+    return this.ctx.saver.flush();
+  }
+
+  /** Settle a conflict: load the stored version, restore the deleted design, or keep this tab's as a copy. */
+  async resolveConflict(choice: 'reload' | 'restore' | 'copy'): Promise<void> {
+    const { library, ctx } = this;
+    if (library === null || ctx.id === null) return;
+    if (choice === 'copy') {
+      const design = ctx.store.getState().design;
+      const title = `${design.title} (copy)`;
+      const ok = await this.guard('The copy could not be stored', async () => {
+        const record = await library.create({ ...design, title }, countsOf(ctx.store));
+        // Keep this editor and its undo history; it now edits the copy.
+        ctx.close(false);
+        this.ctx = this.editing(record.id, record.rev, ctx.store);
+        this.ctx.store.getState().apply(setTitle(title));
+        this.state.setState({ open: this.openOf(this.ctx), conflict: null });
+        this.settled = this.afterOpen(this.ctx);
+        await this.settled;
+      });
+      if (ok) this.notify({ key: 'conflict', tone: 'info', title: `This tab's version is now a new design, “${title}”`, lines: [] });
+      return;
+    }
+    if (choice === 'restore') {
+      await library.restore(ctx.id);
+      this.state.setState({ conflict: null });
+      await this.flush();
+      return;
+    }
+    const opened = await library.open(ctx.id);
+    if (!opened.ok) {
+      this.notify({ key: 'conflict', tone: 'error', title: 'The other version could not be read', lines: opened.reason === 'missing' ? [] : opened.refused.flatMap((r) => errorLines(r.errors, 3)) });
+      return;
+    }
+    this.state.setState({ conflict: null });
+    ctx.takeStored(opened.record.rev, () => ctx.store.getState().apply(replaceDesign(opened.design, "Load the other tab's version")));
+  }
+
+  /** When this tab comes back into view, a change it missed is found by comparing revisions. */
+  async checkStored(): Promise<void> {
+    const { library, ctx } = this;
+    if (library === null || ctx.id === null || this.state.getState().conflict !== null) return;
+    const record = await library.db.designs.get(ctx.id).catch(() => undefined);
+    if (record === undefined) this.onRemoteChange({ id: ctx.id, rev: 0, deleted: true });
+    else this.onRemoteChange({ id: ctx.id, rev: record.rev, deleted: record.deletedAt !== null });
+  }
+
+  private onRemoteChange(change: Change): void {
+    const { ctx } = this;
+    if (change.id !== ctx.id) return;
+    const conflict = this.state.getState().conflict;
+    if (change.deleted) {
+      this.state.setState({ conflict: { kind: 'deleted', restorable: change.rev > 0 } });
+    } else if (change.rev > ctx.baseRev) {
+      this.state.setState({ conflict: { kind: 'changed', rev: change.rev, savedAt: Date.now() } });
+    } else if (conflict?.kind === 'deleted' && change.rev === ctx.baseRev) {
+      // Restored in the other tab, with nothing saved over this tab's revision.
+      this.state.setState({ conflict: null });
+      void this.flush();
+    }
+  }
+
+  // ---- notices and views -----------------------------------------------------------------
+
+  notify(notice: Notice): void {
+    const rest = this.state.getState().notices.filter((n) => n.key !== notice.key);
+    this.state.setState({ notices: [...rest, notice] });
+  }
+
+  dismiss(key: string): void {
+    this.state.setState({ notices: this.state.getState().notices.filter((n) => n.key !== key) });
+  }
+
+  setView(view: LibraryView | null): void {
+    this.state.setState({ view });
+  }
+
+  setTask(task: string | null): void {
+    this.state.setState({ task });
+  }
+
+  /** Run a storage action; a failure becomes a notice (the editor keeps its design). */
+  private async guard(title: string, action: () => Promise<unknown>): Promise<boolean> {
+    try {
+      await action();
+      return true;
+    } catch (error) {
+      this.notify({ key: 'storage', tone: 'error', title, lines: [storageProblem(error)] });
+      return false;
+    }
+  }
+
+  /** Stop listening to other tabs and drop timers (tests; the page never closes its session). */
+  close(): void {
+    this.ctx.close(false);
+    this.channel?.close();
+  }
+
+  // ---- the open design's editor and autosave ---------------------------------------------
+
+  private adopt(id: string | null, rev: number, design: Design, store?: EditorStore): void {
+    // An edit made while the next design was loading is still written to its own design.
+    this.ctx.close(true);
+    this.ctx = this.editing(id, rev, store ?? design);
+    this.state.setState({ open: this.openOf(this.ctx), conflict: null, view: null });
+    this.settled = this.afterOpen(this.ctx);
+  }
+
+  private editing(id: string | null, rev: number, from: Design | EditorStore): Editing {
+    const editing = new Editing(this.library, id, rev, from, this.hooks);
+    // A new store is a new view; the same store under a new id (a copy) keeps its view.
+    if (editing.store !== this.ctx?.store) this.serial++;
+    return editing;
+  }
+
+  private openOf(ctx: Editing): OpenDesign {
+    return { id: ctx.id, serial: this.serial, store: ctx.store, saver: ctx.saver };
+  }
+
+  /** Remember the open design for a reload of this tab and for the next start, and fix its counts. */
+  private async afterOpen(ctx: Editing): Promise<void> {
+    if (this.library === null || ctx.id === null) return;
+    try {
+      sessionStorage.setItem(OPEN_KEY, ctx.id);
+    } catch {
+      // No session storage: the next start opens the last design opened in any tab.
+    }
+    try {
+      await this.library.setLastOpened(ctx.id);
+      await this.library.setCounts(ctx.id, ctx.baseRev, countsOf(ctx.store));
+    } catch {
+      // Not worth a message: the next save writes both again.
+    }
+  }
+
+  private onSaveStatus(ctx: Editing): void {
+    if (ctx !== this.ctx) return;
+    const status = ctx.saver.status;
+    if (status.state === 'saved') this.dismiss('save');
+    if (status.state !== 'failed' || status.error === HELD) return;
+    this.notify({
+      key: 'save', tone: 'error', title: 'Your changes are not saved',
+      lines: [`Why: ${status.error}.`, 'The design stays open in this page. Export it now to keep a copy, or try again.'],
+      actions: [
+        { label: 'Export design file', run: () => exportDesignFile(ctx.store.getState().design) },
+        { label: 'Try again', run: () => void ctx.saver.flush() },
+      ],
+    });
+  }
+}
+
+/** Where a tab remembers its open design across a reload. */
+export const OPEN_KEY = 'railcross.openDesign';

@@ -1,0 +1,11 @@
+/** The open dialog, if any: the pin table of a chip, or the list of shortcuts. */
+import { useEditor } from '../store/EditorProvider.tsx';
+import { ChipDialog } from './chip/ChipDialog.tsx';
+import { ShortcutsDialog } from './ShortcutsDialog.tsx';
+
+export function Dialogs() {
+  const dialog = useEditor((s) => s.dialog);
+  if (dialog === null) return null;
+  if (dialog.kind === 'chip') return <ChipDialog key={dialog.part ?? '(new)'} partId={dialog.part} />;
+  return <ShortcutsDialog />;
+}

@@ -1,0 +1,58 @@
+/**
+ * Design files in and out: an imported file goes through the engine's reader (JSON →
+ * migrate → schema → references) and nothing else; an exported one is the canonical writer's
+ * text. File names are `<slug>.railcross.json`: the slug keeps a file name safe on every
+ * system, and the double extension says what the JSON is while any JSON tool still opens it.
+ */
+import { ROOT_PATH } from '../../rules/model/paths.ts';
+import { readDesign, type ReadResult } from '../../rules/model/reader.ts';
+import type { Design } from '../../rules/model/schema.ts';
+import { writeDesign } from '../../rules/model/writer.ts';
+
+/** The largest design file the editor reads: 20 MB (a 2,000-part design is about 1 MB). */
+export const MAX_DESIGN_FILE_BYTES = 20 * 1024 * 1024;
+
+/** Read a design file (from a picker or a drop). Never throws. */
+export async function readDesignFile(file: Blob): Promise<ReadResult> {
+  if (file.size > MAX_DESIGN_FILE_BYTES) {
+    const mb = (file.size / (1024 * 1024)).toFixed(1);
+    return { ok: false, errors: [{ path: ROOT_PATH, message: `the file is ${mb} MB: expected at most 20 MB for a design file` }] };
+  }
+  let text: string;
+  try {
+    text = await file.text();
+  } catch (error) {
+    return { ok: false, errors: [{ path: ROOT_PATH, message: `the file could not be read (${error instanceof Error ? error.message : String(error)})` }] };
+  }
+  return readDesign(text);
+}
+
+/**
+ * A title as a safe file name stem: lower-case ASCII letters and digits, accents dropped,
+ * anything else between words one `-`, at most 60 characters; `fallback` when nothing is left.
+ */
+export function slugOf(title: string, fallback = 'railcross-design'): string {
+  const slug = title
+    .normalize('NFKD')
+    .replace(/\p{M}+/gu, '')
+    .toLowerCase()
+    .replace(/[^a-z0-9]+/g, '-')
+    .slice(0, 60)
+    .replace(/^-+|-+$/g, '');
+  return slug === '' ? fallback : slug;
+}
+
+/** `greenhouse-irrigation-controller.railcross.json` */
+export function designFileName(title: string): string {
+  return `${slugOf(title)}.railcross.json`;
+}
+
+/** `greenhouse-irrigation-controller-report.json`, beside the PDF's `…-report.pdf`. */
+export function reportJsonFileName(title: string): string {
+  return `${slugOf(title, 'railcross')}-report.json`;
+}
+
+/** The text "Export design" writes: the canonical writer's (stable key order, final newline). */
+export function designFileText(design: Design): string {
+  return writeDesign(design);
+}

@@ -1,0 +1,173 @@
+/**
+ * Fixes with a resistor: a pull-up for an open-drain net (sized the way `pull-range` sizes it),
+ * a pull-up value moved into its range, and a tie for a floating input.
+ */
+import type { Draft } from 'immer';
+import { check } from '../../../../rules/engine/check.ts';
+import type { CheckResult, Finding } from '../../../../rules/engine/types.ts';
+import { E24, largestInRange, seriesValuesBetween } from '../../../../rules/levels/series.ts';
+import { formatQuantity } from '../../../../rules/levels/units.ts';
+import { GROUND } from '../../../../rules/model/references.ts';
+import type { Design, Pull } from '../../../../rules/model/schema.ts';
+import { refuse, type Refusal } from '../command.ts';
+import { findNet, lowestRail, netName, pinAt, railOfPin } from './lookup.ts';
+import { newErrors, tryOn } from './preview.ts';
+import { DEFAULT_PULL_OHMS } from './translator.ts';
+import type { QuickFix } from './types.ts';
+
+const ohms = (r: number) => formatQuantity(r, 'Ω');
+
+/** Tie values tried for a floating net that has drivers, smallest first: the first that loads no driver beyond its rating wins. */
+const TIE_VALUES = [10e3, 22e3, 47e3, 100e3];
+
+/** A tie for an input: 10 kΩ, a usual general-purpose value (common practice). */
+export const TIE_OHMS = 10e3;
+
+function setNetPull(draft: Draft<Design>, netId: string, pull: Pull): Refusal | void {
+  const net = draft.nets.find((n) => n.id === netId);
+  if (net === undefined) return refuse(`There is no net ${netId}.`);
+  net.pull = { to: pull.to, ohms: pull.ohms };
+}
+
+/**
+ * The value `pull-range` allows in every power state: the largest E24 value between the
+ * largest Rmin and the smallest Rmax over the net's `pull-range` findings. Undefined when no
+ * finding gives a range or the ranges leave no value. Without any upper bound (no input
+ * current, no rise-time limit) the usual 10 kΩ, or the first E24 value above Rmin.
+ */
+export function pullValueFrom(findings: readonly Finding[], net: string): { ohms: number; rMin: number; rMax: number | null } | undefined {
+  let lo = 0;
+  let hi = Infinity;
+  let seen = false;
+  for (const f of findings) {
+    if (f.rule !== 'pull-range' || f.net !== net) continue;
+    seen = true;
+    const { rMin, rMax, empty } = f.values;
+    if (empty === true || typeof rMin !== 'number') return undefined;
+    lo = Math.max(lo, rMin);
+    if (typeof rMax === 'number') hi = Math.min(hi, rMax);
+  }
+  if (!seen) return undefined;
+  if (hi === Infinity) {
+    const r = lo <= DEFAULT_PULL_OHMS ? DEFAULT_PULL_OHMS : seriesValuesBetween(E24, lo, lo * 10)[0];
+    return r === undefined ? undefined : { ohms: r, rMin: lo, rMax: null };
+  }
+  const r = largestInRange(E24, lo, hi);
+  return r === null ? undefined : { ohms: r, rMin: lo, rMax: hi };
+}
+
+function rangeText(v: { rMin: number; rMax: number | null }): string {
+  return v.rMax === null ? `${ohms(v.rMin)} and above` : `${ohms(v.rMin)}–${ohms(v.rMax)}`;
+}
+
+/** missing-pull: add the net's pull-up to the lowest rail of its receivers, sized on a trial check. */
+export function addPullFix(design: Design, finding: Finding): QuickFix | undefined {
+  const net = finding.net === null ? undefined : findNet(design, finding.net);
+  if (net === undefined) return undefined;
+  const receiving: string[] = [];
+  const all: string[] = [];
+  for (const key of net.pins) {
+    const at = pinAt(design, key);
+    if (at === undefined) continue;
+    all.push(railOfPin(at));
+    if (at.pin.role !== 'output') receiving.push(railOfPin(at));
+  }
+  const to = lowestRail(design, receiving.length > 0 ? receiving : all);
+  if (to === undefined) return undefined;
+  const trial = tryOn(design, (d) => setNetPull(d, net.id, { to, ohms: DEFAULT_PULL_OHMS }));
+  const value = pullValueFrom(check(trial.design).findings, net.id);
+  if (value === undefined) return undefined;
+  const pull: Pull = { to, ohms: value.ohms };
+  return {
+    id: 'pull-up',
+    finding: finding.id,
+    title: `Pull ${netName(net)} up to ${to} with ${ohms(value.ohms)}`,
+    sentence:
+      `Adds a ${ohms(value.ohms)} pull-up from ${netName(net)} to ${to}, the largest E24 value in the allowed range ` +
+      `${rangeText(value)}, so that the open-drain drivers have a high level to release to.`,
+    apply: (draft) => setNetPull(draft, net.id, pull),
+  };
+}
+
+/** pull-range outside its range: set the pull to the E24 value that every power state allows. */
+export function pullValueFix(design: Design, finding: Finding, result: CheckResult): QuickFix | undefined {
+  const net = finding.net === null ? undefined : findNet(design, finding.net);
+  const pull = net?.pull;
+  if (net === undefined || pull === undefined || pull.to === GROUND) return undefined;
+  const value = pullValueFrom(result.findings, net.id);
+  if (value === undefined || value.ohms === pull.ohms) return undefined;
+  const next: Pull = { to: pull.to, ohms: value.ohms };
+  return {
+    id: 'pull-value',
+    finding: finding.id,
+    title: `Change the pull-up of ${netName(net)} to ${ohms(value.ohms)}`,
+    sentence:
+      `Replaces the ${ohms(pull.ohms)} pull-up to ${pull.to} by ${ohms(value.ohms)}, the largest E24 value inside ` +
+      `${rangeText(value)}, the range its drivers, receivers and rise time allow.`,
+    apply: (draft) => setNetPull(draft, net.id, next),
+  };
+}
+
+/**
+ * floating-input on a net: a pull-up to the receivers' lowest rail, and a pull-down. Where the
+ * net has (three-state) drivers, the smallest of the tie values that overloads none of them.
+ */
+export function tieNetFixes(design: Design, finding: Finding, result: CheckResult): QuickFix[] {
+  const net = finding.net === null ? undefined : findNet(design, finding.net);
+  if (net === undefined) return [];
+  const receiving: string[] = [];
+  let drivers = 0;
+  for (const key of net.pins) {
+    const at = pinAt(design, key);
+    if (at === undefined) continue;
+    if (at.pin.role !== 'output') receiving.push(railOfPin(at));
+    if (at.pin.role !== 'input') drivers++;
+  }
+  const rail = lowestRail(design, receiving);
+  const ends: { id: string; to: string; up: boolean }[] = [
+    ...(rail === undefined ? [] : [{ id: 'pull-up', to: rail, up: true }]),
+    { id: 'pull-down', to: GROUND, up: false },
+  ];
+  const fixes: QuickFix[] = [];
+  for (const end of ends) {
+    const value = drivers === 0 ? TIE_OHMS : TIE_VALUES.find((r) => {
+      const trial = tryOn(design, (d) => setNetPull(d, net.id, { to: end.to, ohms: r }));
+      return newErrors(result.findings, check(trial.design).findings).length === 0;
+    });
+    if (value === undefined) continue;
+    const pull: Pull = { to: end.to, ohms: value };
+    fixes.push({
+      id: end.id,
+      finding: finding.id,
+      title: end.up ? `Pull ${netName(net)} up to ${end.to} with ${ohms(value)}` : `Pull ${netName(net)} down with ${ohms(value)}`,
+      sentence: end.up
+        ? `Adds a ${ohms(value)} pull-up from ${netName(net)} to ${end.to}, so that its inputs read high whenever nothing drives the net.`
+        : `Adds a ${ohms(value)} pull-down from ${netName(net)} to ground, so that its inputs read low whenever nothing drives the net.`,
+      apply: (draft) => setNetPull(draft, net.id, pull),
+    });
+  }
+  return fixes;
+}
+
+/** floating-input on an unused input (on no net): the pin's own pull, to its rail or to ground. */
+export function tiePinFixes(design: Design, finding: Finding): QuickFix[] {
+  const key = finding.pins[0];
+  const at = key === undefined ? undefined : pinAt(design, key);
+  if (key === undefined || at === undefined) return [];
+  const rail = railOfPin(at);
+  return [
+    { id: 'pull-up', to: rail, text: `high to ${rail}` },
+    { id: 'pull-down', to: GROUND, text: 'low to ground' },
+  ].map((end) => ({
+    id: end.id,
+    finding: finding.id,
+    title: `Tie ${key} ${end.text}`,
+    sentence: `Gives the unused input ${key} a ${ohms(TIE_OHMS)} pull ${end.text} (its own pull), so that it never floats.`,
+    apply(draft: Draft<Design>) {
+      const now = pinAt(draft as Design, key);
+      if (now === undefined) return refuse(`There is no pin ${key}.`);
+      const pin = draft.parts.find((p) => p.id === now.part.id)!.pins.find((p) => p.id === now.pin.id)!;
+      pin.pull = { to: end.to, ohms: TIE_OHMS };
+    },
+  }));
+}

@@ -1,0 +1,170 @@
+/**
+ * The editor, part 2: a chip of one's own from the pin table with a VIH override, a waiver
+ * written from a finding's row, copy and paste of two connected chips. Wires and rows are
+ * found by their data attributes (net, severity, rule), never by their look.
+ */
+import { expect, test, type Locator, type Page } from '@playwright/test';
+
+async function centre(locator: Locator): Promise<{ x: number; y: number }> {
+  const box = await locator.boundingBox();
+  if (box === null) throw new Error('not visible');
+  return { x: box.x + box.width / 2, y: box.y + box.height / 2 };
+}
+
+async function wire(page: Page, from: Locator, to: Locator): Promise<void> {
+  const a = await centre(from);
+  const b = await centre(to);
+  await page.mouse.move(a.x, a.y);
+  await page.mouse.down();
+  await page.mouse.move((a.x + b.x) / 2, (a.y + b.y) / 2, { steps: 8 });
+  await page.mouse.move(b.x, b.y, { steps: 8 });
+  await page.mouse.up();
+}
+
+const handle = (page: Page, part: string, pin: string) =>
+  page.locator(`.react-flow__node[data-id="${part}"] .react-flow__handle[data-handleid="${pin}"]`);
+
+const wireOf = (page: Page, net: string) => page.locator(`.rc-wire[data-net="${net}"]`);
+
+/** Press a key with the focus on the canvas, away from any field. */
+async function onCanvas(page: Page, key: string): Promise<void> {
+  await page.locator('.react-flow__pane').click({ position: { x: 12, y: 12 } });
+  await page.keyboard.press(key);
+}
+
+test('a chip from the pin table, with one pin\'s VIH overridden, judged by the override', async ({ page }) => {
+  await page.goto('/');
+  await expect(page.locator('.rc-wire').first()).toBeVisible();
+
+  await page.getByTestId('new-chip').click();
+  const dialog = page.getByTestId('chip-dialog');
+  await expect(dialog).toBeVisible();
+  await dialog.getByTestId('chip-id').fill('X1');
+  await dialog.getByTestId('chip-label').fill('Valve gate of our own');
+  await dialog.getByTestId('chip-rail').selectOption('5v0');
+  await dialog.getByTestId('chip-profile').selectOption('74hc');
+  for (const [k, id, role] of [[0, 'A', 'input'], [1, 'B', 'input'], [2, 'Y', 'output']] as const) {
+    await dialog.getByTestId('pin-add').click();
+    await dialog.getByTestId(`pin-${k}-id`).fill(id);
+    await dialog.getByTestId(`pin-${k}-role`).selectOption(role);
+  }
+  // A TTL-level threshold on A only: VIH 2.0 V (JESD7, 74HCT input levels).
+  await dialog.getByTestId('pin-0-params').click();
+  const vih = dialog.getByTestId('pin-0-param-vih');
+  await expect(vih).toHaveAttribute('placeholder', '0.675*VDD+0.15');
+  await vih.fill('2.0');
+  await vih.press('Enter');
+  await expect(dialog.getByTestId('pin-0-params')).toHaveText('1 override');
+  await dialog.getByTestId('chip-commit').click();
+  await expect(dialog).toHaveCount(0);
+  await expect(page.locator('[data-part="X1"]')).toContainText('Valve gate of our own');
+
+  // A 3.3 V 74LVC gate drives A: 74LVC VOH ≥ VDD − 0.2 V at 100 µA (JESD8C), 2.935 V at 3.135 V, well above 2.0 V.
+  await page.getByTestId('palette-search').fill('single gate 74lvc');
+  await page.getByTestId('palette-search').press('Enter');
+  const lvc = (await page.locator('.react-flow__node').last().getAttribute('data-id')) ?? '';
+  await onCanvas(page, 'f');
+  await page.waitForTimeout(400);
+  await wire(page, handle(page, lvc, 'Y'), handle(page, 'X1', 'A'));
+  const edge = page.locator(`.react-flow__edge[data-id$=":${lvc}.Y:X1.A"] .rc-wire`);
+  await expect(edge).toHaveCount(1);
+  const net = (await edge.getAttribute('data-net')) ?? '';
+  await expect(edge).not.toHaveAttribute('data-severity', /error|warning/);
+  await expect(page.locator(`.rc-finding[data-net="${net}"][data-rule="level-high"]`)).toHaveCount(0);
+
+  // X1.B is on no net: its finding says it cannot be waived (a waiver belongs to a net in version 1).
+  const lone = page.locator('li', { has: page.locator('.rc-finding[data-net=""][data-rule="floating-input"]', { hasText: 'X1.B' }) });
+  await expect(lone).toContainText('cannot be waived');
+  await expect(lone.getByTestId('waive')).toHaveCount(0);
+
+  // The details panel says where A's VIH comes from.
+  await page.locator('[data-part="X1"] .rc-chip-head').click();
+  await page.getByTestId('pin-toggle-A').click();
+  await expect(page.locator('[data-testid="pin-effective-A"] tr[data-param="vih"]')).toHaveAttribute('data-origin', 'pin');
+  await expect(page.getByTestId('part-profile-source')).toContainText('JESD7');
+
+  // Edit the chip: A's VIH at 0.8·VDD is 4.2 V at 5.25 V, above what the gate can give: the high level fails.
+  await page.getByTestId('part-edit').click();
+  await page.getByTestId('pin-0-params').click();
+  await page.getByTestId('pin-0-param-vih').fill('0.8*VDD');
+  await page.getByTestId('pin-0-param-vih').press('Enter');
+  await page.getByTestId('chip-commit').click();
+  await expect(edge).toHaveAttribute('data-severity', 'error');
+  await expect(edge).toHaveAttribute('data-rule', 'level-high');
+  const row = page.locator(`.rc-finding[data-net="${net}"][data-rule="level-high"][data-severity="error"]`);
+  await expect(row).toContainText('4.2 V');
+});
+
+test('a finding accepted with a note: the wire loses its colour, the row keeps the note; undo', async ({ page }) => {
+  await page.goto('/');
+  const valve = wireOf(page, 'VALVE_EN');
+  await expect(valve).toHaveAttribute('data-severity', 'error');
+  const item = page.locator('li', { has: page.locator('.rc-finding[data-net="VALVE_EN"][data-rule="level-high"]') });
+  await item.getByTestId('waive').click();
+  await item.getByTestId('waive-note').fill('Valve board input is 3.3 V tolerant per its bench test');
+  await item.getByTestId('waive-accept').click();
+  await expect(valve).not.toHaveAttribute('data-severity', /error|warning/);
+  const row = page.locator('.rc-finding[data-net="VALVE_EN"][data-rule="level-high"]');
+  await expect(row).toHaveAttribute('data-waived', 'true');
+  await expect(row).toContainText('Valve board input is 3.3 V tolerant per its bench test');
+  // The net's details list the waiver.
+  await row.click();
+  await expect(page.getByTestId('net-waivers')).toContainText('Valve board input is 3.3 V tolerant');
+  await onCanvas(page, 'Control+z');
+  await expect(valve).toHaveAttribute('data-severity', 'error');
+  await expect(row).toHaveAttribute('data-waived', 'false');
+});
+
+test('copy and paste of two connected chips brings the net between them, not the ones outside', async ({ page }) => {
+  await page.goto('/');
+  await expect(page.locator('.rc-wire').first()).toBeVisible();
+  const nodes = page.locator('.react-flow__node');
+  const before = await nodes.count();
+  const wiresBefore = await page.locator('.rc-wire').count();
+  // U3 (valve driver) and U4 (display) share only the BOARD_SLEEP net; U3 also drives U1 and U5.
+  await page.locator('[data-part="U3"] .rc-chip-head').click();
+  await page.locator('[data-part="U4"] .rc-chip-head').click({ modifiers: ['Shift'] });
+  await expect(page.locator('.react-flow__node.selected')).toHaveCount(2);
+  await page.keyboard.press('Control+c');
+  await page.keyboard.press('Control+v');
+  await expect(nodes).toHaveCount(before + 2);
+  await expect(page.locator('[data-part="U8"]')).toContainText('Valve driver board');
+  await expect(page.locator('[data-part="U9"]')).toContainText('Display module');
+  const pasted = page.locator('.react-flow__edge[data-id$=":U8.SLEEP:U9.SLEEP"] .rc-wire');
+  await expect(pasted).toHaveCount(1);
+  await expect(pasted).toHaveAttribute('data-severity', /.+/);
+  await expect(page.locator('.rc-wire')).toHaveCount(wiresBefore + 1);
+  // The pasted chips are the selection: arrow keys move them, one undo step per press.
+  await expect(page.locator('.react-flow__node.selected')).toHaveCount(2);
+  const at = await page.locator('.react-flow__node[data-id="U8"]').boundingBox();
+  await page.keyboard.press('ArrowRight');
+  await expect.poll(async () => (await page.locator('.react-flow__node[data-id="U8"]').boundingBox())?.x ?? 0).toBeGreaterThan((at?.x ?? 0) + 1);
+  await page.keyboard.press('Control+z');
+  await page.keyboard.press('Control+z');
+  await expect(nodes).toHaveCount(before);
+});
+
+test('the shortcut list opens with "?" and says what the keys do', async ({ page }) => {
+  await page.goto('/');
+  await expect(page.locator('.rc-wire').first()).toBeVisible();
+  await onCanvas(page, '?');
+  const list = page.getByTestId('shortcuts');
+  await expect(list).toBeVisible();
+  await expect(list.getByRole('heading', { name: 'Keyboard shortcuts' })).toBeVisible();
+  await expect(list).toContainText('duplicate the selected chips');
+  await page.keyboard.press('Escape');
+  await expect(list).toHaveCount(0);
+});
+
+test('every chip is drawn exactly at the size its node is given (the canvas contains each chip strictly)', async ({ page }) => {
+  await page.goto('/');
+  await expect(page.locator('.rc-wire').first()).toBeVisible();
+  const sizes = await page.locator('.react-flow__node').evaluateAll((nodes) =>
+    nodes.map((n) => {
+      const chip = n.firstElementChild as HTMLElement;
+      // The chip's margin (6 px each side, styles.css) holds the outer half of each handle.
+      return { id: n.getAttribute('data-id'), node: [(n as HTMLElement).offsetWidth, (n as HTMLElement).offsetHeight], chip: [chip.offsetWidth + 12, chip.offsetHeight + 12] };
+    }));
+  expect(sizes.length).toBeGreaterThan(5);
+  for (const s of sizes) expect({ id: s.id, size: s.chip }).toEqual({ id: s.id, size: s.node });
+});
