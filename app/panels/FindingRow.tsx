@@ -8,6 +8,7 @@ import type { Finding } from '../../rules/engine/types.ts';
 import { ALL_ON } from '../../rules/engine/powerStates.ts';
 import { addWaiver, removeWaiverFor } from '../store/commands/index.ts';
 import { useEditorStore } from '../store/EditorProvider.tsx';
+import { FixMenu } from './FixMenu.tsx';
 
 export interface RowText {
   readonly place: string;
@@ -87,6 +88,7 @@ function FindingRowView({ finding: f, text, showState, onPick }: RowProps) {
           <button type="button" className="rc-link" data-testid="waive" aria-label={`Accept with a note: ${text.rule} on ${text.place}`}
             onClick={() => setWaiving(true)}>Accept with a note…</button>
         )}
+        {!waiving && <FixMenu finding={f} />}
       </div>
     </li>
   );

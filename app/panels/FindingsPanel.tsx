@@ -8,6 +8,7 @@ import { RULES } from '../../rules/checks/index.ts';
 import { SeverityGlyph } from '../canvas/SeverityGlyph.tsx';
 import { useFocus } from '../canvas/placement.ts';
 import { useEditor, useEditorStore } from '../store/EditorProvider.tsx';
+import { CrossingsTable } from './CrossingsTable.tsx';
 import { FindingRow } from './FindingRow.tsx';
 
 const SEVERITIES: readonly { key: Severity; title: string }[] = [
@@ -36,6 +37,7 @@ export function FindingsPanel() {
   const [stateFilter, setStateFilter] = useState(CANVAS);
   const [ruleFilter, setRuleFilter] = useState(ALL);
   const [shown, setShown] = useState<Record<Severity | 'waived', boolean>>({ error: true, warning: true, info: false, waived: true });
+  const [view, setView] = useState<'findings' | 'crossings'>('findings');
 
   const scenario = stateFilter === CANVAS ? powerState : stateFilter;
   const stateLabel = useMemo(() => new Map(states.map((s) => [s.id, s.label])), [states]);
@@ -72,7 +74,15 @@ export function FindingsPanel() {
 
   return (
     <section className="rc-findings" aria-label="Findings">
-      <h2 className="rc-panel-head">Findings</h2>
+      <div className="rc-panel-tabs" role="tablist" aria-label="Findings or rail crossings">
+        <h2 className="rc-panel-head">
+          <button type="button" role="tab" aria-selected={view === 'findings'} className={view === 'findings' ? 'rc-tab rc-tab--on' : 'rc-tab'}
+            onClick={() => setView('findings')} data-testid="tab-findings">Findings</button>
+        </h2>
+        <button type="button" role="tab" aria-selected={view === 'crossings'} className={view === 'crossings' ? 'rc-tab rc-tab--on' : 'rc-tab'}
+          onClick={() => setView('crossings')} data-testid="tab-crossings">Rail crossings</button>
+      </div>
+      {view === 'crossings' ? <div className="rc-findings-list"><CrossingsTable /></div> : (<>
       <div className="rc-filters">
         <select aria-label="Power state of the findings" value={stateFilter} onChange={(e) => setStateFilter(e.target.value)} data-testid="findings-state">
           <option value={CANVAS}>As on the canvas</option>
@@ -111,6 +121,7 @@ export function FindingsPanel() {
           </section>
         ))}
       </div>
+      </>)}
     </section>
   );
 }

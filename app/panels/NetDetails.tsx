@@ -5,6 +5,7 @@ import { removeWaiverAt, setNetLabel, setNetMaxRiseTime, setNetPull, setNetWirin
 import { useEditor, useEditorStore } from '../store/EditorProvider.tsx';
 import { OptionalQuantityField, QuantityField, TextField } from './Field.tsx';
 import { NetAnalysis } from './NetAnalysis.tsx';
+import { NetLadder } from './NetLadder.tsx';
 
 /** A pull-up or pull-down a net gets when one is first chosen: a common starting value, there to be edited. */
 const FIRST_PULL_OHMS = 10e3;
@@ -70,6 +71,7 @@ export function NetDetails({ net }: { net: Net }) {
         </ul>
       )}
       <NetAnalysis net={net.id} />
+      <NetLadder net={net.id} />
       <h4 className="rc-sub">Pins</h4>
       <ul className="rc-pin-list">
         {net.pins.map((p) => <li key={p}><span className="rc-pin-name">{p}</span></li>)}

@@ -1,0 +1,54 @@
+/**
+ * Explain and fix: the voltage ladder of a net carries the engine's numbers, the crossings
+ * table opens it, and a quick fix clears its finding in one undoable step.
+ */
+import { readFileSync } from 'node:fs';
+import { expect, test } from '@playwright/test';
+import { check } from '../rules/engine/check.ts';
+import type { Design } from '../rules/model/schema.ts';
+
+const example = JSON.parse(readFileSync(new URL('../rules/examples/greenhouse.json', import.meta.url), 'utf8')) as Design;
+
+test('the ladder of a crossing net shows the engine\'s margins, and a quick fix clears its finding', async ({ page }) => {
+  const problems: string[] = [];
+  page.on('pageerror', (e) => problems.push(e.message));
+  page.on('console', (m) => { if (m.type() === 'error') problems.push(m.text()); });
+  await page.goto('/');
+  await expect(page.locator('.rc-wire[data-net="VALVE_EN"]').first()).toHaveAttribute('data-severity', 'error');
+
+  // The crossings table lists VALVE_EN in all-on with its worst margins; a click opens its ladder.
+  await page.getByTestId('tab-crossings').click();
+  const row = page.locator('[data-testid="crossings"] tr[data-net="VALVE_EN"][data-scenario="all-on"]');
+  await expect(row).toHaveAttribute('data-severity', 'error');
+  await row.click();
+  const ladder = page.getByTestId('net-ladder');
+  await expect(ladder).toBeVisible();
+
+  // Every margin drawn equals the engine's analysis of the net (computed here, in Node).
+  const analysis = check(example).nets.get('all-on')!.get('VALVE_EN')!.view.analysis;
+  for (const pair of analysis.pairs) {
+    for (const [kind, side] of [['nmh', pair.high], ['nml', pair.low]] as const) {
+      if (side === null) continue;
+      const mark = ladder.locator(`[data-kind="${kind}"][data-driver="${pair.driver}"][data-receiver="${pair.receiver}"]`).first();
+      const drawn = Number(await mark.getAttribute('data-margin'));
+      expect(Math.abs(drawn - side.margin)).toBeLessThan(1e-9);
+      await expect(mark).toHaveAttribute('data-status', side.status);
+    }
+  }
+  const voh = ladder.locator('[data-kind="voh"][data-pin="U1.VALVE_EN"]').first();
+  expect(Math.abs(Number(await voh.getAttribute('data-volts')) - analysis.pairs[0]!.high!.out)).toBeLessThan(1e-9);
+
+  // The quick fix: the HC receiver gets TTL-level inputs (HCT); the finding goes; undo brings it back.
+  await page.getByTestId('tab-findings').click();
+  const finding = page.locator('li[data-finding-row="level-high:VALVE_EN:all-on:U1.VALVE_EN>U3.EN"]');
+  await finding.getByTestId('fix-open').click();
+  const fix = finding.locator('[data-fix="ttl-inputs"]');
+  await fix.getByTestId('fix-try').click();
+  await expect(fix.getByTestId('fix-preview')).toContainText('Removes');
+  await fix.getByTestId('fix-apply').click();
+  await expect(page.locator('li[data-finding-row="level-high:VALVE_EN:all-on:U1.VALVE_EN>U3.EN"]')).toHaveCount(0);
+  await expect(page.getByTestId('notice')).toContainText('before');
+  await page.keyboard.press('Control+z');
+  await expect(page.locator('li[data-finding-row="level-high:VALVE_EN:all-on:U1.VALVE_EN>U3.EN"]')).toHaveCount(1);
+  expect(problems).toEqual([]);
+});
