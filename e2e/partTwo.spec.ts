@@ -168,3 +168,26 @@ test('every chip is drawn exactly at the size its node is given (the canvas cont
   expect(sizes.length).toBeGreaterThan(5);
   for (const s of sizes) expect({ id: s.id, size: s.chip }).toEqual({ id: s.id, size: s.node });
 });
+
+test('Shift+drag on the canvas selects the chips inside the box; Delete removes them in one step', async ({ page }) => {
+  await page.goto('/');
+  await expect(page.locator('.rc-wire').first()).toBeVisible();
+  const a = await page.locator('.react-flow__node[data-id="U6"]').boundingBox();
+  const b = await page.locator('.react-flow__node[data-id="U7"]').boundingBox();
+  if (a === null || b === null) throw new Error('U6 or U7 not in view');
+  await page.keyboard.down('Shift');
+  await page.mouse.move(Math.min(a.x, b.x) - 8, Math.min(a.y, b.y) - 8);
+  await page.mouse.down();
+  await page.mouse.move(Math.max(a.x + a.width, b.x + b.width) + 8, Math.max(a.y + a.height, b.y + b.height) + 8, { steps: 10 });
+  await page.mouse.up();
+  await page.keyboard.up('Shift');
+  await expect(page.locator('.react-flow__node.selected')).toHaveCount(2);
+  const ids = await page.locator('.react-flow__node.selected').evaluateAll((ns) => ns.map((n) => n.getAttribute('data-id')).sort());
+  expect(ids).toEqual(['U6', 'U7']);
+  await page.keyboard.press('Delete');
+  await expect(page.locator('.react-flow__node[data-id="U6"]')).toHaveCount(0);
+  await expect(page.locator('.react-flow__node[data-id="U7"]')).toHaveCount(0);
+  await page.keyboard.press('Control+z');
+  await expect(page.locator('.react-flow__node[data-id="U6"]')).toHaveCount(1);
+  await expect(page.locator('.react-flow__node[data-id="U7"]')).toHaveCount(1);
+});

@@ -2,7 +2,9 @@
  * The canvas: React Flow showing nodes and edges derived from the design. It keeps no copy of
  * the design; it turns React Flow's events into commands (connect, move, select).
  */
-import { useCallback, useMemo, useRef, useState, type DragEvent } from 'react';
+import { useCallback, useMemo, useRef, type DragEvent } from 'react';
+import { useStore } from 'zustand';
+import { createStore } from 'zustand/vanilla';
 import {
   Background, BackgroundVariant, ConnectionMode, Controls, Panel, ReactFlow,
   type Connection, type EdgeChange, type FinalConnectionState, type IsValidConnection, type NodeChange,
@@ -33,9 +35,15 @@ export function Canvas() {
   const nets = useEditor((s) => s.design.nets);
   const selectedParts = useEditor((s) => s.selection.parts);
   const selectedWires = useEditor((s) => s.selection.wires);
-  // Where dragged chips are while a drag lasts: the canvas's own state, not the store's, so that
-  // a drag step wakes only the canvas; the end of the drag is the one command.
-  const [drag, setDrag] = useState<ReadonlyMap<string, XY> | null>(null);
+  // Where dragged chips are while a drag lasts: a small store of the canvas's own, not the
+  // editor's, so that a drag step wakes only the canvas (not every chip's and wire's
+  // subscription), yet renders at once, as a store update does (not a frame later, as state
+  // set from a pointer event would). The end of the drag is the one command.
+  const dragStore = useRef(createStore<{ drag: ReadonlyMap<string, XY> | null }>(() => ({ drag: null }))).current;
+  const drag = useStore(dragStore, (s) => s.drag);
+  const setDrag = useCallback((next: (was: ReadonlyMap<string, XY> | null) => ReadonlyMap<string, XY> | null) => {
+    dragStore.setState({ drag: next(dragStore.getState().drag) });
+  }, [dragStore]);
   const deriver = useRef(createFlowDeriver()).current;
   const nodes = useMemo(() => deriver.nodes(parts, selectedParts, drag), [deriver, parts, selectedParts, drag]);
   const edges = useMemo(() => deriver.edges(nets, selectedWires), [deriver, nets, selectedWires]);
@@ -65,10 +73,10 @@ export function Canvas() {
     // The end of a drag is the one step that goes on the undo stack.
     if (moves.length > 0) {
       s.apply(moveParts(moves));
-      setDrag(null);
+      setDrag(() => null);
     }
     if (selected !== undefined) s.select({ parts: [...selected], ...(selected.size > 0 ? { net: null } : {}) });
-  }, [store, deriver]);
+  }, [store, deriver, setDrag]);
 
   const onEdgesChange = useCallback((changes: EdgeChange<WireEdgeType>[]) => {
     const s = store.getState();
@@ -118,7 +126,7 @@ export function Canvas() {
   }, [place]);
 
   return (
-    <div className="rc-canvas" id={CANVAS_ID} onDragOver={onDragOver} onDrop={onDrop}>
+    <div className={`rc-canvas${drag !== null ? ' rc-canvas--dragging' : ''}`} id={CANVAS_ID} onDragOver={onDragOver} onDrop={onDrop}>
       <ReactFlow<ChipNodeType, WireEdgeType>
         nodes={nodes}
         edges={edges}

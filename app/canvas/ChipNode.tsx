@@ -15,7 +15,7 @@ import { useEditor, useEditorStore } from '../store/EditorProvider.tsx';
 import { useKeyed } from '../store/keyedView.ts';
 import { pinLayout, type Side } from './chipLayout.ts';
 import type { ChipNode as ChipNodeType } from './deriveFlow.ts';
-import { FAR_ZOOM } from './farZoom.ts';
+import { zoomTier } from './farZoom.ts';
 import { GLYPH_TEXT, glyphKind, PinGlyph } from './PinGlyph.tsx';
 
 const POSITION: Readonly<Record<Side, Position>> = { left: Position.Left, right: Position.Right, top: Position.Top, bottom: Position.Bottom };
@@ -82,7 +82,8 @@ function Head({ id, part, rail, family }: { id: string; part: Part; rail: Rail |
 
 function ChipNodeView({ id, selected }: NodeProps<ChipNodeType>) {
   const { part, rail, family } = useKeyed(useEditorStore(), CHIP_LOOK, id);
-  const far = useFlowStore((s) => s.transform[2] < FAR_ZOOM);
+  const tier = useFlowStore((s) => zoomTier(s.transform[2]));
+  const far = tier > 0;
 
   // A part whose pins changed needs its handles measured again; the first measure is React Flow's own.
   const updateNodeInternals = useUpdateNodeInternals();
@@ -97,7 +98,7 @@ function ChipNodeView({ id, selected }: NodeProps<ChipNodeType>) {
   const layout = pinLayout(part.pins);
   const rows = Math.max(layout.left.length, layout.right.length);
   return (
-    <div className={`rc-chip${selected ? ' rc-chip--selected' : ''}${far ? ' rc-chip--far' : ''}`} style={railStyle(rail?.colour)} data-part={id}>
+    <div className={`rc-chip${selected ? ' rc-chip--selected' : ''}${far ? ' rc-chip--far' : ''}${tier === 2 ? ' rc-chip--tiny' : ''}`} style={railStyle(rail?.colour)} data-part={id}>
       {layout.top.length > 0 && (
         <div className="rc-strip rc-strip--top"><Rows pins={layout.top} side="top" partRail={part.rail} far={far} /></div>
       )}

@@ -13,7 +13,7 @@ import { parseWireLook, WIRE_LOOK } from '../store/canvasViews.ts';
 import { useKeyed } from '../store/keyedView.ts';
 import type { WireEdge as WireEdgeType } from './deriveFlow.ts';
 import { SeverityGlyph } from './SeverityGlyph.tsx';
-import { FAR_ZOOM } from './farZoom.ts';
+import { zoomTier } from './farZoom.ts';
 
 function margin(v: number | null | undefined): string {
   return v === null || v === undefined ? 'no pair' : formatQuantity(v, 'V');
@@ -55,16 +55,18 @@ function WireEdgeView(props: EdgeProps<WireEdgeType>) {
   const { id, data, selected, sourceX, sourceY, targetX, targetY, sourcePosition, targetPosition } = props;
   const net = data?.net ?? '';
   const { severity, rule, highlighted } = parseWireLook(useKeyed(useEditorStore(), WIRE_LOOK, net));
-  const far = useFlowStore((s) => s.transform[2] < FAR_ZOOM);
+  const tier = useFlowStore((s) => zoomTier(s.transform[2]));
+  const far = tier > 0;
+  const tiny = tier === 2;
   const [hover, setHover] = useState(false);
   const [path, midX, midY] = getSmoothStepPath({ sourceX, sourceY, targetX, targetY, sourcePosition, targetPosition, borderRadius: 3, offset: 14 });
   const name = labelPlace(sourceX, sourceY, sourcePosition);
 
-  const classes = ['rc-wire', `rc-wire--${severity}`, selected ? 'rc-wire--selected' : '', highlighted ? 'rc-wire--net' : ''].filter((c) => c !== '').join(' ');
+  const classes = ['rc-wire', `rc-wire--${severity}`, selected ? 'rc-wire--selected' : '', highlighted ? 'rc-wire--net' : '', tiny ? 'rc-wire--tiny' : ''].filter((c) => c !== '').join(' ');
   return (
     <g className={classes} data-net={net} data-severity={severity} data-rule={rule} onMouseEnter={far ? undefined : () => setHover(true)} onMouseLeave={() => setHover(false)}>
       {(selected || highlighted) && <path d={path} className="rc-wire-halo" fill="none" />}
-      {(severity === 'error' || severity === 'warning') && <path d={path} className="rc-wire-case" fill="none" />}
+      {(severity === 'error' || (severity === 'warning' && !tiny)) && <path d={path} className="rc-wire-case" fill="none" />}
       {/* Far out, a wire is too thin to aim at: no wide invisible twin to catch the pointer. */}
       <BaseEdge id={id} path={path} interactionWidth={far ? 0 : 14} />
       {!far && (data?.label != null || hover) && (

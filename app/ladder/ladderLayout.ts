@@ -4,7 +4,6 @@
  * margins, the receivers.
  */
 import type { Ladder, LadderMargin } from '../../rules/report/ladder.ts';
-import { formatQuantity } from '../../rules/levels/units.ts';
 
 export const AXIS_WIDTH = 64;
 export const DRIVER_WIDTH = 180;
@@ -56,27 +55,5 @@ export function layoutLadder(ladder: Ladder, height: number): LadderLayout {
   return { width, height, y, plotTop, plotBottom, driverX, lanes, receiverX };
 }
 
-/** Text baselines at least `gap` apart, each as close to its wish as that allows, in the order of the wishes. */
-export function separate(wishes: readonly number[], gap = 13): number[] {
-  const order = wishes.map((y, k) => ({ y, k })).sort((a, b) => a.y - b.y);
-  const placed: number[] = new Array<number>(wishes.length);
-  let last = -Infinity;
-  for (const { y, k } of order) {
-    last = Math.max(y, last + gap);
-    placed[k] = last;
-  }
-  return placed;
-}
-
-/** A level as the drawing prints it: engineering notation, four digits (a rail's 3.135 V stays 3.135 V). */
-export function volts(v: number): string {
-  return formatQuantity(v, 'V', 4);
-}
-
-/** A margin as the drawing prints it: three digits are enough for a difference. */
-export function marginVolts(v: number): string {
-  return formatQuantity(v, 'V', 3);
-}
-
-/** Status in words, so that the drawing reads without colour. */
-export const STATUS_TEXT = { pass: 'pass', warning: 'WARN', fail: 'FAIL' } as const;
+// The labels' text and placement are shared with the PDF report's ladders.
+export { marginVolts, separate, STATUS_TEXT, volts } from '../../rules/report/ladderLayout.ts';

@@ -1,13 +1,20 @@
 /** The details of the selection (a part, or a net), then the rails and the power states. */
+import { memo } from 'react';
 import { useEditor } from '../store/EditorProvider.tsx';
+import { partById } from '../store/lookup.ts';
 import { NetDetails } from './NetDetails.tsx';
 import { PartDetails } from './PartDetails.tsx';
-import { PowerStatesEditor } from './PowerStatesEditor.tsx';
-import { ProfilesEditor } from './ProfilesEditor.tsx';
-import { RailsEditor } from './RailsEditor.tsx';
+import { PowerStatesEditor as PowerStatesView } from './PowerStatesEditor.tsx';
+import { ProfilesEditor as ProfilesView } from './ProfilesEditor.tsx';
+import { RailsEditor as RailsView } from './RailsEditor.tsx';
+
+// The folds read their own slices of the store: a change of the selected part need not redraw them.
+const RailsEditor = memo(RailsView);
+const PowerStatesEditor = memo(PowerStatesView);
+const ProfilesEditor = memo(ProfilesView);
 
 export function DetailsPanel() {
-  const part = useEditor((s) => (s.selection.parts.length === 1 ? s.design.parts.find((p) => p.id === s.selection.parts[0]) : undefined));
+  const part = useEditor((s) => (s.selection.parts.length === 1 ? partById(s.design.parts, s.selection.parts[0]!) : undefined));
   const net = useEditor((s) => (s.selection.net === null ? undefined : s.design.nets.find((n) => n.id === s.selection.net)));
   const many = useEditor((s) => s.selection.parts.length + s.selection.wires.length);
   return (

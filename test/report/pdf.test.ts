@@ -15,7 +15,10 @@ import { buildReport } from '../../rules/report/buildReport.ts';
 import { RULES } from '../../rules/checks/index.ts';
 import { reportPdfFileName, writeReportPdf, type Paper } from '../../rules/report/pdf/index.ts';
 import { toBase64 } from '../../rules/report/pdf/fonts.ts';
-import type { Report } from '../../rules/report/reportSchema.ts';
+import type { Crossing, Report } from '../../rules/report/reportSchema.ts';
+import { ladderFor } from '../../rules/report/ladder.ts';
+import { marginVolts } from '../../rules/report/ladderLayout.ts';
+import { ladderRows } from '../../rules/report/pdf/ladders.ts';
 import { design, input, net, output, part, rail, scenario } from '../support/build.ts';
 import { FIXED_TIME, greenhouse, quantitiesIn } from './fixtures.ts';
 
@@ -149,6 +152,31 @@ describe.skipIf(!HAVE_POPPLER)('the example\'s PDF, read back with pdftotext', (
       expect(profiles, p.id).toMatch(new RegExp(`^\\s*${escapeRe(p.id)}\\s`, 'm'));
       expect(wordsInOrder(profiles, p.source), `source of ${p.id}`).toBe(true);
     }
+  });
+
+  it('draws a voltage ladder for every crossing net, headed by its label and power state, with its NMH and NML as the ladder prints them', () => {
+    const ladders = section(text, /^Voltage ladders$/m, /^Method and sources$/m);
+    const result = check(made.design);
+    const { rows } = ladderRows(made.report.crossings);
+    // Every crossing net has a ladder in all-on; SDA and SCL again in standby, where their margins change (the sensor rail is off).
+    expect(new Set(rows.map((r) => r.net))).toEqual(new Set(made.report.crossings.map((c) => c.net)));
+    expect(rows.map((r) => `${r.net}@${r.scenario}`)).toEqual(expect.arrayContaining(['SDA@standby', 'SCL@standby']));
+    for (const row of rows) {
+      const state = made.report.scenarios.find((s) => s.id === row.scenario)!;
+      expect(ladders, `${row.net} in ${row.scenario}`).toMatch(new RegExp(`${escapeRe(row.label)}\\s+· ${escapeRe(state.label)} \\(${escapeRe(row.scenario)}\\)`));
+      const ladder = ladderFor(result.nets.get(row.scenario)!.get(row.net)!.view);
+      for (const m of ladder.margins) expect(ladders, `${m.kind} ${m.driver} → ${m.receiver}`).toContain(`${m.kind.toUpperCase()} ${marginVolts(m.margin)}`);
+    }
+    // The example's planted level-high error: VOH 2.935 V against VIH 3.694 V is NMH -0.759 V, marked FAIL in words.
+    expect(ladders).toContain('NMH -0.759 V');
+    expect(ladders).toMatch(/^.*\bFAIL\b/m);
+    expect(ladders).toContain('VOH ≥ 2.935 V');
+    expect(ladders).toContain('VIH 3.694 V');
+  });
+
+  it('lists the ladders on the cover between the margin table and the method', () => {
+    const contents = section(text, /^\s*Contents$/m, /^\s*Power states checked$/m);
+    expect(contents).toMatch(/Noise margins per net[^\n]*\n\s*Voltage ladders[^\n]*\d+\s*\n\s*Method and sources/);
   });
 
   it('explains the worst-case method', () => {
@@ -307,5 +335,18 @@ describe('toBase64', () => {
 
   it('matches Node\'s encoder on a font file', () => {
     expect(toBase64(fonts.bold)).toBe(Buffer.from(fonts.bold).toString('base64'));
+  });
+});
+
+describe('ladderRows', () => {
+  const row = (net: string, scenario: string, worst: Crossing['worst'], marginHigh: number | null, marginLow: number | null): Crossing =>
+    ({ net, label: net, rails: ['a', 'b'], scenario, marginHigh, marginLow, worst });
+  it.each([
+    ['an unchanged second state is left out', [row('N1', 'all-on', 'ok', 1, 1), row('N1', 'off', 'ok', 1, 1)], 40, ['N1@all-on']],
+    ['a changed second state is kept', [row('N1', 'all-on', 'ok', 1, 1), row('N1', 'off', 'error', null, null)], 40, ['N1@all-on', 'N1@off']],
+    ['over the cap, errors then the smallest margins, in the report\'s order',
+      [row('A', 's', 'ok', 0.1, 0.2), row('B', 's', 'error', 0.5, 0.5), row('C', 's', 'warning', 0.05, 1), row('D', 's', 'ok', 0.01, 1)], 2, ['B@s', 'C@s']],
+  ] as const)('%s', (_name, rows, cap, want) => {
+    expect(ladderRows(rows, cap).rows.map((r) => `${r.net}@${r.scenario}`)).toEqual(want);
   });
 });

@@ -1,6 +1,6 @@
 /**
  * The PDF report (report-format.md: "the PDF report shows the same content for people"):
- * cover, block diagram, findings, rail crossings, margins per net, method and sources,
+ * cover, block diagram, findings, rail crossings, margins per net, voltage ladders, method and sources,
  * cautions. jsPDF runs in Node and in the browser; this module takes the font files as bytes,
  * so that it reads nothing itself. The editor should load it with `import()`: jsPDF is large.
  */
@@ -10,6 +10,7 @@ import type { CheckResult } from '../../engine/types.ts';
 import type { Report } from '../reportSchema.ts';
 import { drawContents, drawCover } from './cover.ts';
 import { drawDiagram } from './diagram.ts';
+import { laddersSection } from './ladders.ts';
 import { registerFonts, type PdfFonts } from './fonts.ts';
 import { drawCautions, drawMethod } from './method.ts';
 import { addPage, drawFurniture, type Ctx } from './page.ts';
@@ -35,7 +36,7 @@ export interface ReportPdfInput {
 }
 
 /** The sections in their order; the cover's contents list keeps a line for each. */
-const SECTION_COUNT = 6;
+const SECTION_COUNT = 7;
 
 /**
  * A stable file identifier from the report's time and title (FNV-1a, 128 bits as four
@@ -81,6 +82,7 @@ export function writeReportPdf(input: ReportPdfInput): Uint8Array {
   y = findingsTable(ctx, y, report);
   y = crossingsTable(ctx, y, report, result);
   y = marginsTable(ctx, y, report, design, result);
+  y = laddersSection(ctx, y, report, result);
   y = drawMethod(ctx, y, report);
   drawCautions(ctx, y, report);
 
