@@ -4,27 +4,8 @@
  * (HCT) clear it; undo brings it back; a reload keeps the design. No console error, no CSP
  * violation on the way.
  */
-import { expect, test, type Locator, type Page } from '@playwright/test';
-
-async function centre(locator: Locator): Promise<{ x: number; y: number }> {
-  const box = await locator.boundingBox();
-  if (box === null) throw new Error('not visible');
-  return { x: box.x + box.width / 2, y: box.y + box.height / 2 };
-}
-
-/** Drag from one pin's handle to another's, as a hand would. */
-async function wire(page: Page, from: Locator, to: Locator): Promise<void> {
-  const a = await centre(from);
-  const b = await centre(to);
-  await page.mouse.move(a.x, a.y);
-  await page.mouse.down();
-  await page.mouse.move((a.x + b.x) / 2, (a.y + b.y) / 2, { steps: 8 });
-  await page.mouse.move(b.x, b.y, { steps: 8 });
-  await page.mouse.up();
-}
-
-const handle = (page: Page, part: string, pin: string) =>
-  page.locator(`.react-flow__node[data-id="${part}"] .react-flow__handle[data-handleid="${pin}"]`);
+import { expect, test } from '@playwright/test';
+import { handle, wire } from './gestures.ts';
 
 test('a newcomer\'s first minutes', async ({ page }) => {
   const problems: string[] = [];

@@ -8,6 +8,9 @@ import { ROOT_PATH } from '../../rules/model/paths.ts';
 import { readDesign, type ReadResult } from '../../rules/model/reader.ts';
 import type { Design } from '../../rules/model/schema.ts';
 import { writeDesign } from '../../rules/model/writer.ts';
+import { slugOf } from '../../rules/report/pdf/fileName.ts';
+
+export { slugOf };
 
 /** The largest design file the editor reads: 20 MB (a 2,000-part design is about 1 MB). */
 export const MAX_DESIGN_FILE_BYTES = 20 * 1024 * 1024;
@@ -25,21 +28,6 @@ export async function readDesignFile(file: Blob): Promise<ReadResult> {
     return { ok: false, errors: [{ path: ROOT_PATH, message: `the file could not be read (${error instanceof Error ? error.message : String(error)})` }] };
   }
   return readDesign(text);
-}
-
-/**
- * A title as a safe file name stem: lower-case ASCII letters and digits, accents dropped,
- * anything else between words one `-`, at most 60 characters; `fallback` when nothing is left.
- */
-export function slugOf(title: string, fallback = 'railcross-design'): string {
-  const slug = title
-    .normalize('NFKD')
-    .replace(/\p{M}+/gu, '')
-    .toLowerCase()
-    .replace(/[^a-z0-9]+/g, '-')
-    .slice(0, 60)
-    .replace(/^-+|-+$/g, '');
-  return slug === '' ? fallback : slug;
 }
 
 /** `greenhouse-irrigation-controller.railcross.json` */

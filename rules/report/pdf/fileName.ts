@@ -8,6 +8,15 @@
  * @example reportPdfFileName('Greenhouse irrigation controller') === 'greenhouse-irrigation-controller-report.pdf'
  */
 export function reportPdfFileName(title: string): string {
+  return `${slugOf(title, 'railcross')}-report.pdf`;
+}
+
+/**
+ * A title as a safe file name stem: lower-case ASCII letters and digits, accents dropped,
+ * anything else between words one `-`, at most 60 characters; `fallback` when nothing is left.
+ * The editor names design files and JSON reports with it too.
+ */
+export function slugOf(title: string, fallback = 'railcross-design'): string {
   const slug = title
     .normalize('NFKD')
     .replace(/\p{M}+/gu, '')
@@ -15,5 +24,5 @@ export function reportPdfFileName(title: string): string {
     .replace(/[^a-z0-9]+/g, '-')
     .slice(0, 60)
     .replace(/^-+|-+$/g, '');
-  return `${slug === '' ? 'railcross' : slug}-report.pdf`;
+  return slug === '' ? fallback : slug;
 }

@@ -7,7 +7,8 @@ import { RULES } from '../../checks/index.ts';
 import { formatQuantity } from '../../levels/units.ts';
 import type { Report } from '../reportSchema.ts';
 import { paragraph, sectionHeading, subHeading, type Ctx } from './page.ts';
-import { HAIRLINE, INK, INK_2, MARGIN, PANEL, SIZE, STATUS_COLOUR, type Rgb } from './theme.ts';
+import { baseTableOptions } from './tables.ts';
+import { INK, INK_2, SIZE, STATUS_COLOUR, type Rgb } from './theme.ts';
 
 const rgb = (c: Rgb): [number, number, number] => [c[0], c[1], c[2]];
 
@@ -36,25 +37,7 @@ export function methodSentences(report: Report): string[] {
 }
 
 function table(ctx: Ctx, y: number, options: UserOptions): number {
-  autoTable(ctx.doc, {
-    startY: y,
-    theme: 'plain',
-    margin: { top: MARGIN.top, bottom: MARGIN.bottom, left: MARGIN.left, right: MARGIN.right },
-    showHead: 'everyPage',
-    rowPageBreak: 'avoid',
-    styles: {
-      font: ctx.fonts.sans,
-      fontSize: SIZE.table,
-      textColor: rgb(INK),
-      cellPadding: { top: 3, bottom: 3, left: 3.5, right: 3.5 },
-      overflow: 'linebreak',
-      valign: 'top',
-      lineColor: rgb(HAIRLINE),
-      lineWidth: { bottom: 0.4 },
-    },
-    headStyles: { fontStyle: 'bold', fillColor: rgb(PANEL), lineColor: rgb(INK_2), lineWidth: { bottom: 0.7 } },
-    ...options,
-  });
+  autoTable(ctx.doc, { ...baseTableOptions(ctx, y), ...options });
   return (ctx.doc as unknown as { lastAutoTable: { finalY: number } }).lastAutoTable.finalY + 8;
 }
 

@@ -18,7 +18,7 @@ import {
 const rgb = (c: Rgb): [number, number, number] => [c[0], c[1], c[2]];
 
 /** The look every table shares: hairlines between rows, a tinted head, text at the top of cells. */
-function base(ctx: Ctx, startY: number): UserOptions {
+export function baseTableOptions(ctx: Ctx, startY: number): UserOptions {
   return {
     startY,
     theme: 'plain',
@@ -91,7 +91,7 @@ export function findingsTable(ctx: Ctx, y: number, report: Report): number {
     f.hint,
   ]);
   return run(ctx, {
-    ...base(ctx, at),
+    ...baseTableOptions(ctx, at),
     head: [['Severity', 'Rule', 'Net', 'Power state', 'Message', 'Hint']],
     body,
     columnStyles: {
@@ -177,7 +177,7 @@ export function crossingsTable(ctx: Ctx, y: number, report: Report, result: Chec
   if (rows.length === 0) return at;
   const worst = (w: 'error' | 'warning' | 'ok'): Status => (w === 'ok' ? 'clean' : w);
   return run(ctx, {
-    ...base(ctx, at),
+    ...baseTableOptions(ctx, at),
     head: [['Net', 'Label', 'Rails', 'Power state', 'Worst NMH', 'Worst NML', 'Worst']],
     body: rows.map((c) => [c.net, c.label, c.rails.join(', '), c.scenario, marginText(c.marginHigh), marginText(c.marginLow), c.worst]),
     columnStyles: {
@@ -248,7 +248,7 @@ export function marginsTable(ctx: Ctx, y: number, report: Report, design: Design
   );
   if (rows.length === 0) return paragraph(ctx, at, 'The design has no nets.');
   return run(ctx, {
-    ...base(ctx, at),
+    ...baseTableOptions(ctx, at),
     head: [['Net', 'Label', 'Power state', 'Pairs', 'Worst NMH', 'Set by', 'Worst NML', 'Set by']],
     body: rows.map((r) => [r.net, r.label, r.state, String(r.pairs), marginText(r.high), r.atHigh, marginText(r.low), r.atLow]),
     columnStyles: {
