@@ -126,11 +126,12 @@ test('the keyboard: Delete a wire, undo, redo; New design is one step too', asyn
   await page.keyboard.press('Control+y');
   await expect(wireOf('VALVE_EN')).toHaveCount(0);
 
+  // A new design opens beside the example: the example stays in the library as it was.
   await page.getByTestId('new-design').click();
   await expect(page.locator('.react-flow__node')).toHaveCount(0);
   await expect(page.getByTestId('design-title')).toHaveValue('Untitled design');
-  await page.getByTestId('undo').click();
-  await expect(page.getByTestId('design-title')).toHaveValue('Greenhouse irrigation controller');
+  await page.getByTestId('open-library').click();
+  await expect(page.locator('[data-testid="library-row"][data-title="Greenhouse irrigation controller"]')).toHaveCount(1);
 });
 
 test('numeric fields take engineering notation and refuse anything else', async ({ page }) => {

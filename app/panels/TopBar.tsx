@@ -1,7 +1,8 @@
 /** The top bar: the design's title, the power state the wires show, the counts, undo/redo, new/example. */
 import { useReactFlow } from '@xyflow/react';
 import type { Finding, Severity } from '../../rules/engine/types.ts';
-import { replaceDesign, setTitle } from '../store/commands/index.ts';
+import { setTitle } from '../store/commands/index.ts';
+import { useSession } from '../library/SessionProvider.tsx';
 import { useEditor, useEditorStore } from '../store/EditorProvider.tsx';
 import { newDesign } from '../../rules/model/newDesign.ts';
 import { SeverityGlyph } from '../canvas/SeverityGlyph.tsx';
@@ -30,11 +31,11 @@ export function TopBar() {
   const redoName = useEditor((s) => s.future[0]?.name);
   const { fitView } = useReactFlow();
 
-  const replace = (name: string, design: ReturnType<typeof newDesign>) => {
-    const s = store.getState();
-    s.apply(replaceDesign(design, name));
-    s.select({ parts: [], wires: [], net: null });
-    requestAnimationFrame(() => void fitView(fitViewOptions));
+  const session = useSession();
+  // A new design or the example opens as a design of its own in the library: the one open now
+  // stays there as it is (without a library, it is replaced in place, one undo step).
+  const open = (design: ReturnType<typeof newDesign>) => {
+    void session.createAndOpen(design).then(() => requestAnimationFrame(() => void fitView(fitViewOptions)));
   };
 
   return (
@@ -68,8 +69,8 @@ export function TopBar() {
       </div>
       <ExportMenu />
       <div className="rc-docs">
-        <button type="button" data-testid="new-design" onClick={() => replace('New design', newDesign())}>New design</button>
-        <button type="button" data-testid="open-example" onClick={() => replace('Open the example', exampleDesign())}>Open example</button>
+        <button type="button" data-testid="new-design" onClick={() => open(newDesign())}>New design</button>
+        <button type="button" data-testid="open-example" onClick={() => open(exampleDesign())}>Open example</button>
       </div>
     </header>
   );
