@@ -14,12 +14,20 @@
  * brought into view with Shift+F, zoom 1.2: what a user edits in) and the whole design in view
  * (F: every chip drawn, in the canvas's far-zoom drawing). The table gives both; `--json` gives
  * the working view.
- * Goals on a 2-core, software-rendered machine: commit ≤ 5 ms, edit and drag ≤ 33 ms, open ≤ 3 s.
+ * Then, in a fresh browser profile, the design library with a generated 2,000-part design:
+ *   saveMs            median of 10 saves as autosave makes them (a rename, then one
+ *                     `Library.save` transaction), from the app's own `railcross:save` measure;
+ *   openFirstPaintMs  median of 5 page loads (no ?bench: the normal page) with that design as the
+ *                     tab's open library design, from navigation start to the first contentful paint;
+ *   openEditorMs      the same loads, to the frame after the first one showing the editor with its chips.
+ * Goals on a 2-core, software-rendered machine: commit ≤ 5 ms, edit and drag ≤ 33 ms, open ≤ 3 s;
+ * a save under 100 ms (autosave's own assumption: a change stored within 500 ms).
  */
 import { spawn, spawnSync } from 'node:child_process';
 import { readFileSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
 import os from 'node:os';
-import { chromium, type Page } from '@playwright/test';
+import { chromium, type Browser, type Page } from '@playwright/test';
 import { createEditorStore } from '../../app/store/editorStore.ts';
 import { setPartProfile } from '../../app/store/commands/index.ts';
 import type { Design } from '../../rules/model/schema.ts';
@@ -29,6 +37,10 @@ const json = process.argv.includes('--json');
 const PARTS = 1000;
 const EDITS = 50;
 const PORT = 4183;
+const STORAGE_PARTS = 2000;
+const SAVES = 10;
+const OPENS = 5;
+const VIEWPORT = { width: 1440, height: 900 };
 const BASE = `http://127.0.0.1:${PORT}`;
 const log = (...args: unknown[]) => (json ? console.error(...args) : console.log(...args));
 
@@ -77,13 +89,50 @@ async function waitForServer(url: string, ms: number): Promise<void> {
   throw new Error(`${url} did not answer`);
 }
 
+/** The value of `expression` in the page once it is not null; polled from here, as waitForFunction would evaluate a string in the page, which the CSP forbids. */
+async function poll<T>(page: Page, expression: string, what: string, ms = 60_000): Promise<T> {
+  const until = Date.now() + ms;
+  for (;;) {
+    const value = await page.evaluate(expression) as T | null;
+    if (value !== null && value !== false) return value;
+    if (Date.now() > until) throw new Error(what);
+    await new Promise((r) => setTimeout(r, 100));
+  }
+}
+
 async function probe(page: Page): Promise<void> {
   await page.evaluate(readFileSync(new URL('./uiProbe.js', import.meta.url), 'utf8'));
-  // Polled from here: waitForFunction would evaluate a string in the page, which the CSP forbids.
-  const until = Date.now() + 60_000;
-  while (!(await page.evaluate('window.__probe.ready()'))) {
-    if (Date.now() > until) throw new Error('the editor did not start with ?bench');
-    await new Promise((r) => setTimeout(r, 100));
+  await poll(page, 'window.__probe.ready()', 'the editor did not start with ?bench');
+}
+
+/** Saves of a 2,000-part design through the library, and page loads opening it; in a profile of its own. */
+async function storageBench(browser: Browser, errors: string[]): Promise<{ saves: number[]; firstPaint: number[]; editor: number[] }> {
+  const design = generateDesign(7, { parts: STORAGE_PARTS });
+  const context = await browser.newContext({ viewport: VIEWPORT });
+  try {
+    await context.addInitScript({ path: fileURLToPath(new URL('./openMarks.js', import.meta.url)) });
+    const page = await context.newPage();
+    page.on('pageerror', (e) => errors.push(e.message));
+    await page.goto(`${BASE}/?bench`);
+    await probe(page);
+    await page.evaluate(`window.__probe.store(${JSON.stringify(design)})`);
+    const saves = await page.evaluate(`window.__probe.saves(${SAVES})`) as number[];
+    const title = `${design.title}, edit ${SAVES}`;
+    const firstPaint: number[] = [];
+    const editor: number[] = [];
+    for (let k = 0; k < OPENS; k++) {
+      // The normal page: the tab's session storage names the design to open, as after a reload.
+      await page.goto(`${BASE}/`);
+      const marks = await poll<Record<string, number>>(page, 'window.__openMarks.editor === undefined ? null : window.__openMarks', 'the stored design never showed');
+      const shown = await page.getByTestId('design-title').inputValue();
+      if (shown !== title) throw new Error(`the page opened “${shown}”, not the stored ${STORAGE_PARTS}-part design`);
+      firstPaint.push(marks['first-contentful-paint'] ?? marks['first-paint'] ?? NaN);
+      editor.push(marks.editor ?? NaN);
+    }
+    if (saves.length !== SAVES) throw new Error(`${saves.length} of ${SAVES} saves were measured`);
+    return { saves, firstPaint, editor };
+  } finally {
+    await context.close();
   }
 }
 
@@ -106,7 +155,7 @@ async function main() {
       executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
       args: ['--no-sandbox', '--headless=new', '--disable-gpu', '--disable-dev-shm-usage'],
     });
-    const page = await browser.newPage({ viewport: { width: 1440, height: 900 } });
+    const page = await browser.newPage({ viewport: VIEWPORT });
     const errors: string[] = [];
     page.on('pageerror', (e) => errors.push(e.message));
 
@@ -138,6 +187,9 @@ async function main() {
     await page.reload();
     await probe(page);
     const reload = await page.evaluate(`window.__probe.reloaded(${PARTS})`) as { ms: number };
+    await page.close();
+    log(`storage: ${STORAGE_PARTS} parts, ${SAVES} saves, ${OPENS} page loads…`);
+    const storage = await storageBench(browser, errors);
     await browser.close();
     if (errors.length > 0) throw new Error(`the page threw: ${errors.join('; ')}`);
 
@@ -146,7 +198,10 @@ async function main() {
       { view: 'working view (chip in focus)', check: m(work, 'check'), commit: m(work, 'commit'), edit: m(work, 'paint'), drag: m(workDrag, 'paint'), missed: (work.missed as number) + (workDrag.missed as number) },
       { view: 'whole design in view', check: m(fitted, 'check'), commit: m(fitted, 'commit'), edit: m(fitted, 'paint'), drag: m(fittedDrag, 'paint'), missed: (fitted.missed as number) + (fittedDrag.missed as number) },
     ];
-    const result = { parts: PARTS, commitMs: rows[0]!.commit, editPaintMs: rows[0]!.edit, dragPaintMs: rows[0]!.drag, openMs: round(open.ms, 0) };
+    const result = {
+      parts: PARTS, commitMs: rows[0]!.commit, editPaintMs: rows[0]!.edit, dragPaintMs: rows[0]!.drag, openMs: round(open.ms, 0),
+      saveMs: round(median(storage.saves), 1), openFirstPaintMs: round(median(storage.firstPaint), 0), openEditorMs: round(median(storage.editor), 0),
+    };
     if (json) {
       console.log(JSON.stringify(result));
       return;
@@ -157,6 +212,13 @@ async function main() {
       view: r.view, 'check ms': r.check, 'commit ms (≤ 5)': r.commit, 'edit → painted ms (≤ 33)': r.edit,
       'drag step → painted ms (≤ 33)': r.drag, 'never painted': r.missed,
     })));
+    const runs = (xs: readonly number[]) => xs.map((x) => round(x, 0)).join(', ');
+    console.log(`\nDesign library: a ${STORAGE_PARTS}-part design, medians`);
+    console.table([
+      { measure: 'save (one Library.save transaction, as autosave)', 'ms (median)': result.saveMs, goal: '≤ 100', runs: runs(storage.saves) },
+      { measure: 'page load → first paint', 'ms (median)': result.openFirstPaintMs, goal: '', runs: runs(storage.firstPaint) },
+      { measure: 'page load → editor shown', 'ms (median)': result.openEditorMs, goal: '', runs: runs(storage.editor) },
+    ]);
     console.log('JSON (--json):', JSON.stringify(result));
   } finally {
     stop();

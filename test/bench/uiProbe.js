@@ -129,6 +129,33 @@ window.__probe = (() => {
       return out;
     },
 
+    /** Store `design` as a new design of the library and open it; resolves once its bookkeeping is stored. */
+    async store(design) {
+      const { session } = bench();
+      await session.createAndOpen(design);
+      await session.settled;
+      await firstFullFrame(design.parts.length);
+      return session.openId;
+    },
+
+    /**
+     * `n` saves of the open design as autosave makes them (a rename, then the saver's write:
+     * one `Library.save` transaction each), timed by the app's own `railcross:save` measure.
+     */
+    async saves(n) {
+      const { session, commands } = bench();
+      const title = session.editor.getState().design.title;
+      performance.clearMeasures('railcross:save');
+      for (let k = 0; k < n; k++) {
+        await sleep(100);
+        session.editor.getState().apply(commands.setTitle(`${title}, edit ${k + 1}`));
+        await session.flush();
+      }
+      const status = session.state.getState().open.saver.status;
+      if (status.state !== 'saved') throw new Error(`autosave ended ${status.state}: ${status.error ?? ''}`);
+      return performance.getEntriesByName('railcross:save').map((e) => e.duration);
+    },
+
     undo: () => bench().session.editor.getState().undo(),
     pastNames: () => bench().session.editor.getState().past.map((s) => s.name),
   };
