@@ -21,10 +21,10 @@ interface PinEntry {
 /** A (rail, profile) group: its pins, and how many of them hold each distinct `vddRange`. */
 export interface PinGroup {
   readonly pins: Set<string>;
-  readonly ranges: Map<string, { range: readonly [number, number]; count: number }>;
+  /** Keyed by the range object itself: pins of one family share their profile's array. */
+  readonly ranges: Map<readonly [number, number], { range: readonly [number, number]; count: number }>;
 }
 
-const rangeKey = (r: readonly [number, number]) => `${r[0]}:${r[1]}`;
 
 function addTo(map: Map<string, Set<string>>, key: string, value: string): void {
   let set = map.get(key);
@@ -98,8 +98,9 @@ export class DesignIndex {
   }
 
   addPin(design: Design, part: Part, pin: Pin): void {
-    const key = `${part.id}.${pin.id}`;
-    const vddRange = resolvePin(design, part, pin).params.vddRange;
+    const resolved = resolvePin(design, part, pin);
+    const key = resolved.key;
+    const vddRange = resolved.params.vddRange;
     const entry: PinEntry = {
       part, pin, rail: pin.rail ?? part.rail, profile: pin.profile ?? part.profile, pullTo: pin.pull?.to, vddRange,
     };
@@ -113,9 +114,8 @@ export class DesignIndex {
     }
     group.pins.add(key);
     if (vddRange !== undefined) {
-      const rk = rangeKey(vddRange);
-      const slot = group.ranges.get(rk);
-      if (slot === undefined) group.ranges.set(rk, { range: vddRange, count: 1 });
+      const slot = group.ranges.get(vddRange);
+      if (slot === undefined) group.ranges.set(vddRange, { range: vddRange, count: 1 });
       else slot.count++;
     }
     addTo(this.groupsOfRail, entry.rail, gk);
@@ -131,9 +131,8 @@ export class DesignIndex {
     if (group !== undefined) {
       group.pins.delete(key);
       if (entry.vddRange !== undefined) {
-        const rk = rangeKey(entry.vddRange);
-        const slot = group.ranges.get(rk);
-        if (slot !== undefined && --slot.count === 0) group.ranges.delete(rk);
+        const slot = group.ranges.get(entry.vddRange);
+        if (slot !== undefined && --slot.count === 0) group.ranges.delete(entry.vddRange);
       }
       if (group.pins.size === 0) {
         this.groups.delete(gk);
