@@ -35,6 +35,9 @@ interface CacheEntry {
   readonly partId: string;
   readonly partRail: string;
   readonly partParams: Params | undefined;
+  readonly profileId: string;
+  /** The design's local profiles when this was resolved: unchanged, the lookup gives the same profile. */
+  readonly localProfiles: readonly Profile[] | undefined;
   readonly profile: Profile | undefined;
   readonly resolved: ResolvedPin;
 }
@@ -102,14 +105,14 @@ function mergeParams(pin: Params | undefined, part: Params | undefined, profile:
 
 function entryOf(design: Design, part: Part, pin: Pin): CacheEntry {
   const profileId = pin.profile ?? part.profile;
-  const profile = lookupProfile(design, profileId);
   const hit = cache.get(pin);
-  if (
-    hit !== undefined && hit.profile === profile && hit.partId === part.id && hit.partRail === part.rail &&
-    hit.partParams === part.params
-  ) {
-    return hit;
+  if (hit !== undefined && hit.partId === part.id && hit.partRail === part.rail && hit.partParams === part.params && hit.profileId === profileId) {
+    // The built-in library never changes: with the same local profiles the lookup is the same.
+    if (hit.localProfiles === design.profiles) return hit;
+    const profile = lookupProfile(design, profileId);
+    if (hit.profile === profile) return hit;
   }
+  const profile = lookupProfile(design, profileId);
 
   let params: Record<string, unknown>;
   let origin: Partial<Record<keyof Params, ParamOrigin>>;
@@ -135,7 +138,10 @@ function entryOf(design: Design, part: Part, pin: Pin): CacheEntry {
     origin,
     pull: pin.pull,
   };
-  const entry: CacheEntry = { views: [undefined, undefined], partId: part.id, partRail: part.rail, partParams: part.params, profile, resolved };
+  const entry: CacheEntry = {
+    views: [undefined, undefined], partId: part.id, partRail: part.rail, partParams: part.params,
+    profileId, localProfiles: design.profiles, profile, resolved,
+  };
   cache.set(pin, entry);
   return entry;
 }
