@@ -14,6 +14,7 @@ import { ALL_ON, effectiveSettings, powerStates, railStates } from './powerState
 import { pinView, prepareNet, type PrepareContext } from './prepare.ts';
 import { completeFinding, restampFinding, sortFindings } from './findings.ts';
 import { DesignIndex, groupKey, splitGroupKey } from './designIndex.ts';
+import { changedById } from './diff.ts';
 import type { CheckResult, CheckStats, Finding, NetResult, PinView, PowerState, RailStates, Summary } from './types.ts';
 
 // The engine runs in Node and the browser alike; both have a monotonic clock here.
@@ -206,49 +207,6 @@ interface Dirty {
   /** (rail, profile) group keys. */
   groups: Set<string>;
   states: Set<string>;
-}
-
-/** Records of two arrays that differ by identity, matched by id. */
-function changedById<T extends { id: string }>(
-  before: readonly T[],
-  after: readonly T[],
-  current: (id: string) => T | undefined,
-  onChange: (old: T | undefined, now: T | undefined) => void,
-): void {
-  if (before === after) return;
-  let kept = 0;
-  for (let k = 0; k < after.length; k++) {
-    const item = after[k]!;
-    if (before[k] === item) { kept++; continue; }
-    const old = current(item.id);
-    if (old !== undefined) kept++;
-    if (old !== item) onChange(old, item);
-  }
-  if (kept < before.length) removedFrom(before, after, (old) => onChange(old, undefined));
-}
-
-/**
- * Calls `onRemoved` for each record of `before` whose id is gone from `after`. The editor
- * appends and deletes without reordering, so a walk in step finds them without hashing every
- * id; a reordered array falls back on a set of ids.
- */
-function removedFrom<T extends { id: string }>(before: readonly T[], after: readonly T[], onRemoved: (old: T) => void): void {
-  const missing: T[] = [];
-  let j = 0;
-  let steps = 0;
-  for (const old of before) {
-    let k = j;
-    while (k < after.length && after[k]!.id !== old.id) k++;
-    steps += k - j + 1;
-    if (steps > 4 * (before.length + after.length)) {
-      const ids = new Set(after.map((x) => x.id));
-      for (const o of before) if (!ids.has(o.id)) onRemoved(o);
-      return;
-    }
-    if (k < after.length) j = k + 1;
-    else missing.push(old);
-  }
-  for (const o of missing) onRemoved(o);
 }
 
 /** True when a part changed only where the rules do not look (position, label). */

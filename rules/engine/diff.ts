@@ -1,0 +1,48 @@
+/**
+ * Finding what an edit changed by identity: immer keeps every object an edit did not touch, so
+ * two arrays of records are compared element by element, and matched by id where they differ.
+ */
+
+/** Records of two arrays that differ by identity, matched by id. */
+export function changedById<T extends { id: string }>(
+  before: readonly T[],
+  after: readonly T[],
+  current: (id: string) => T | undefined,
+  onChange: (old: T | undefined, now: T | undefined) => void,
+): void {
+  if (before === after) return;
+  let kept = 0;
+  for (let k = 0; k < after.length; k++) {
+    const item = after[k]!;
+    if (before[k] === item) { kept++; continue; }
+    const old = current(item.id);
+    if (old !== undefined) kept++;
+    if (old !== item) onChange(old, item);
+  }
+  if (kept < before.length) removedFrom(before, after, (old) => onChange(old, undefined));
+}
+
+/**
+ * Calls `onRemoved` for each record of `before` whose id is gone from `after`. The editor
+ * appends and deletes without reordering, so a walk in step finds them without hashing every
+ * id; a reordered array falls back on a set of ids.
+ */
+function removedFrom<T extends { id: string }>(before: readonly T[], after: readonly T[], onRemoved: (old: T) => void): void {
+  const missing: T[] = [];
+  let j = 0;
+  let steps = 0;
+  for (const old of before) {
+    let k = j;
+    while (k < after.length && after[k]!.id !== old.id) k++;
+    steps += k - j + 1;
+    if (steps > 4 * (before.length + after.length)) {
+      const ids = new Set(after.map((x) => x.id));
+      for (const o of before) if (!ids.has(o.id)) onRemoved(o);
+      return;
+    }
+    if (k < after.length) j = k + 1;
+    else missing.push(old);
+  }
+  for (const o of missing) onRemoved(o);
+}
+
