@@ -3,7 +3,7 @@
  * version: this tab's saves are held until the user chooses.
  */
 import { useEffect, useRef, useState } from 'react';
-import { Modal } from './Modal.tsx';
+import { NativeDialog } from '../panels/NativeDialog.tsx';
 import { shortWhen } from './when.ts';
 import type { Conflict } from './session.ts';
 import { useSession, useSessionState } from './SessionProvider.tsx';
@@ -37,7 +37,7 @@ export function ConflictPrompt() {
     void session.resolveConflict(choice).finally(() => setBusy(false));
   };
   return (
-    <Modal className="rc-conflict" role="alertdialog" labelledBy="rc-conflict-head" describedBy="rc-conflict-body" testId="conflict">
+    <NativeDialog className="rc-conflict" role="alertdialog" labelledBy="rc-conflict-head" describedBy="rc-conflict-body" testId="conflict">
       <h2 id="rc-conflict-head">{head}</h2>
       <p id="rc-conflict-body">{body}</p>
       <div className="rc-dialog-actions">
@@ -56,6 +56,6 @@ export function ConflictPrompt() {
         </button>
       </div>
       {conflict.kind === 'changed' && <p className="rc-dialog-foot">Loading the other version is one step: Undo brings this tab’s version back.</p>}
-    </Modal>
+    </NativeDialog>
   );
 }

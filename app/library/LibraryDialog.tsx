@@ -8,7 +8,7 @@ import { useStore } from 'zustand';
 import { MAX_DESIGN_FILE_BYTES } from '../storage/designFile.ts';
 import { DeletedList } from './DeletedList.tsx';
 import { DesignList } from './DesignList.tsx';
-import { Modal } from './Modal.tsx';
+import { NativeDialog } from '../panels/NativeDialog.tsx';
 import { Notices } from './Notices.tsx';
 import { RevisionList } from './RevisionList.tsx';
 import type { LibraryView } from './session.ts';
@@ -37,7 +37,7 @@ function LibraryBody({ view }: { view: LibraryView }) {
   const deleted = listing.value?.deleted ?? [];
 
   return (
-    <Modal className="rc-library" labelledBy="rc-library-head" testId="library" onClose={() => session.setView(null)}>
+    <NativeDialog className="rc-library" labelledBy="rc-library-head" testId="library" onClose={() => session.setView(null)}>
       <header className="rc-library-top">
         <h2 id="rc-library-head">Designs</h2>
         <div className="rc-library-do">
@@ -75,7 +75,7 @@ function LibraryBody({ view }: { view: LibraryView }) {
       <footer className="rc-library-foot">
         Designs are kept in this browser, each with its last 50 saves. Import reads a design file (.railcross.json or .json, at most {MB} MB); you can also drop one on the canvas. Deleted designs can be restored for 30 days.
       </footer>
-    </Modal>
+    </NativeDialog>
   );
 }
 

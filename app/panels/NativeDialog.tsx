@@ -1,6 +1,6 @@
 import { useEffect, useRef, type ReactNode } from 'react';
 
-interface ModalProps {
+interface NativeDialogProps {
   readonly className: string;
   readonly labelledBy: string;
   readonly describedBy?: string;
@@ -13,13 +13,14 @@ interface ModalProps {
 
 /**
  * A native modal dialog: the browser keeps focus inside it and makes the page behind inert,
- * which a div with aria-modal cannot.
+ * which a div with aria-modal cannot. Every dialog of the editor and the library is one.
  */
-export function Modal({ className, labelledBy, describedBy, role, testId, onClose, children }: ModalProps) {
+export function NativeDialog({ className, labelledBy, describedBy, role, testId, onClose, children }: NativeDialogProps) {
   const ref = useRef<HTMLDialogElement>(null);
   useEffect(() => {
     const dialog = ref.current;
     if (dialog !== null && !dialog.open) dialog.showModal();
+    dialog?.querySelector<HTMLElement>('[data-autofocus]')?.focus();
     return () => dialog?.close();
   }, []);
   return (
