@@ -57,19 +57,27 @@ function Frame({ label, quiet, error, errorId, children }: { label: string; quie
   );
 }
 
-export function TextField({ label, value, onCommit, testId, quiet, placeholder, title }: FieldProps & { value: string; onCommit: (text: string) => Outcome }) {
+/** One edited text input in its frame: shows `shown`, commits through `commit` (null, or why not). */
+function EditedInput({ label, quiet, testId, placeholder, title, shown, commit, decimal }: FieldProps & {
+  shown: string;
+  commit: (text: string) => string | null;
+  decimal?: boolean;
+}) {
   const errorId = useId();
-  const f = useEditing(value, (text) => {
-    const out = onCommit(text);
-    return out.ok ? null : out.reason;
-  });
+  const f = useEditing(shown, commit);
   return (
     <Frame label={label} quiet={quiet} error={f.error} errorId={errorId}>
-      <input type="text" value={f.value} data-testid={testId} spellCheck={false} aria-invalid={f.error !== null} placeholder={placeholder} title={title}
-        aria-describedby={f.error !== null ? errorId : undefined}
+      <input type="text" inputMode={decimal === true ? 'decimal' : undefined} value={f.value} data-testid={testId} spellCheck={false}
+        aria-invalid={f.error !== null} placeholder={placeholder} title={title} aria-describedby={f.error !== null ? errorId : undefined}
         onChange={(e) => f.onChange(e.target.value)} onBlur={f.onBlur} onKeyDown={f.onKeyDown} />
     </Frame>
   );
+}
+
+const reason = (out: Outcome): string | null => (out.ok ? null : out.reason);
+
+export function TextField({ value, onCommit, ...field }: FieldProps & { value: string; onCommit: (text: string) => Outcome }) {
+  return <EditedInput {...field} shown={value} commit={(text) => reason(onCommit(text))} />;
 }
 
 export interface QuantityFieldProps extends FieldProps {
@@ -83,47 +91,27 @@ export interface QuantityFieldProps extends FieldProps {
   parse?: (text: string) => QuantityResult;
 }
 
-export function QuantityField({ label, value, unit, onCommit, format, parse, testId, quiet }: QuantityFieldProps) {
-  const errorId = useId();
+export function QuantityField({ value, unit, onCommit, format, parse, ...field }: QuantityFieldProps) {
   const shown = format !== undefined ? format(value) : formatQuantity(value, unit, 4);
-  const f = useEditing(shown, (text) => {
-    const read = parse !== undefined ? parse(text) : parseQuantity(text, unit);
-    if (!read.ok) return read.error;
-    const out = onCommit(read.value);
-    return out.ok ? null : out.reason;
-  });
   return (
-    <Frame label={label} quiet={quiet} error={f.error} errorId={errorId}>
-      <input type="text" inputMode="decimal" value={f.value} data-testid={testId} spellCheck={false} aria-invalid={f.error !== null}
-        aria-describedby={f.error !== null ? errorId : undefined}
-        onChange={(e) => f.onChange(e.target.value)} onBlur={f.onBlur} onKeyDown={f.onKeyDown} />
-    </Frame>
+    <EditedInput {...field} decimal shown={shown} commit={(text) => {
+      const read = parse !== undefined ? parse(text) : parseQuantity(text, unit);
+      return read.ok ? reason(onCommit(read.value)) : read.error;
+    }} />
   );
 }
 
 /** A quantity that may be left empty: empty text stores nothing (`undefined`), and the placeholder says what applies then. */
-export function OptionalQuantityField({ label, value, unit, onCommit, testId, quiet, placeholder, title }: FieldProps & {
+export function OptionalQuantityField({ value, unit, onCommit, ...field }: FieldProps & {
   value: number | undefined;
   unit: Unit;
   onCommit: (value: number | undefined) => Outcome;
 }) {
-  const errorId = useId();
-  const shown = value === undefined ? '' : formatQuantity(value, unit, 4);
-  const f = useEditing(shown, (text) => {
-    if (text.trim() === '') {
-      const out = onCommit(undefined);
-      return out.ok ? null : out.reason;
-    }
-    const read = parseQuantity(text, unit);
-    if (!read.ok) return read.error;
-    const out = onCommit(read.value);
-    return out.ok ? null : out.reason;
-  });
   return (
-    <Frame label={label} quiet={quiet} error={f.error} errorId={errorId}>
-      <input type="text" inputMode="decimal" value={f.value} data-testid={testId} spellCheck={false} aria-invalid={f.error !== null}
-        placeholder={placeholder} title={title} aria-describedby={f.error !== null ? errorId : undefined}
-        onChange={(e) => f.onChange(e.target.value)} onBlur={f.onBlur} onKeyDown={f.onKeyDown} />
-    </Frame>
+    <EditedInput {...field} decimal shown={value === undefined ? '' : formatQuantity(value, unit, 4)} commit={(text) => {
+      if (text.trim() === '') return reason(onCommit(undefined));
+      const read = parseQuantity(text, unit);
+      return read.ok ? reason(onCommit(read.value)) : read.error;
+    }} />
   );
 }

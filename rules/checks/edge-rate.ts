@@ -9,14 +9,11 @@ import { corners } from '../levels/rails.ts';
 import { sortedPoints } from '../levels/output.ts';
 import { parallelResistance, pullRails, thevenin } from '../engine/netMath.ts';
 import type { NetView, PinView, RailStates } from '../engine/types.ts';
+import { RISE_10_90, RISE_30_70 } from '../levels/rc.ts';
 import { defineRule } from './defineRule.ts';
 import { farads, ohms, rampUnit, seconds, volts } from './format.ts';
 import { partsOf } from './keys.ts';
 
-/** 10–90 % of a single-pole RC edge is ln 9 × RC (≈ 2.197 RC; the 2.2 RC rule of thumb). */
-const LN_9 = Math.log(9);
-/** 30–70 % of a single-pole RC edge is ln(7/3) × RC (≈ 0.8473 RC, the I2C-bus specification's figure). */
-const LN_7_3 = Math.log(7 / 3);
 
 /** What charges the net on a rising edge. */
 interface EdgeSource {
@@ -123,7 +120,7 @@ export default defineRule({
     // A source whose swing is 0 V (every pull rail off) makes no rising edge at all.
     if (source !== undefined && source.swing > 0 && limit !== undefined) {
       const pulled = source.driver === null;
-      const riseTime = (pulled ? LN_7_3 : LN_9) * source.resistance * c;
+      const riseTime = (pulled ? RISE_30_70 : RISE_10_90) * source.resistance * c;
       if (exceeds(riseTime, limit)) {
         // A pulled edge starts when the open-drain drivers release the net.
         const pins = source.driver === null ? view.drivers.map((d) => d.key) : [source.driver];
@@ -146,7 +143,7 @@ export default defineRule({
       if (maxInputRamp === undefined || rx.params.schmitt !== undefined) continue;
       const s = rx.role === 'bidir' ? edgeSource(view, rx.key) : source;
       if (s === undefined || !(s.swing > 0)) continue;
-      const t1090 = LN_9 * s.resistance * c;
+      const t1090 = RISE_10_90 * s.resistance * c;
       const ramp = t1090 / (0.8 * s.swing);
       if (!exceeds(ramp, maxInputRamp)) continue;
       const pins = s.driver === null ? [rx.key] : [rx.key, s.driver];

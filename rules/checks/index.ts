@@ -30,8 +30,3 @@ export const RULES: readonly AnyRule[] = [
   railRange,
   railCrossing,
 ];
-
-/** The rule with an id, if it is built. */
-export function ruleById(id: string): AnyRule | undefined {
-  return RULES.find((r) => r.id === id);
-}

@@ -12,12 +12,11 @@ import { highThreshold } from '../engine/resolve.ts';
 import { worstCorner } from '../engine/netMath.ts';
 import { GROUND } from '../engine/powerStates.ts';
 import type { NetView, PinView } from '../engine/types.ts';
+import { RISE_30_70 } from '../levels/rc.ts';
 import { defineRule } from './defineRule.ts';
 import { ohms as fmtOhms } from './format.ts';
 import { partsOf } from './keys.ts';
 
-/** 30–70 % of a single-pole RC edge, in RC: ln(7/3) ≈ 0.8473, the two-wire bus specification's figure. */
-export const RISE_30_70 = Math.log(7 / 3);
 
 interface Data {
   net: string;

@@ -23,7 +23,7 @@ export interface AnalysisInput {
   readonly settings: EffectiveSettings;
 }
 
-/** Pass, warning or fail for a level `out` against a threshold, `higherIsBetter` for the high side. */
+/** Pass, warning or fail for the level that must be higher (`better`) against the one it must clear. */
 function judge(better: number, worse: number, minMargin: number): PairStatus {
   // Compare the levels themselves, never their difference with 0 (rules-catalogue.md).
   if (below(better, worse)) return 'fail';

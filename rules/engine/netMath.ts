@@ -5,7 +5,7 @@
 import type { Corner, Range } from '../levels/rails.ts';
 import { corners } from '../levels/rails.ts';
 import { levelAt } from '../levels/level.ts';
-import { largestTestCurrent, sortedPoints } from '../levels/output.ts';
+import { sortedPoints } from '../levels/output.ts';
 import type { DriverLoad, PinView, PullSource, RailStates } from './types.ts';
 import { GROUND } from './powerStates.ts';
 
@@ -111,7 +111,6 @@ export function worstCorner<T extends { score: number }>(
   return worst;
 }
 
-export { largestTestCurrent };
 
 /** Something that can put a voltage on a net: a powered driver's rail, or a pull's rail. */
 export interface NetSource {

@@ -38,5 +38,5 @@ export function effectiveSettings(design: Design): EffectiveSettings {
   };
 }
 
-/** Voltage of a pull's far end at a corner: 0 V for ground or an off rail. */
-export const GROUND = 'ground';
+/** The far end of a pull to ground (design-format.md, Pull): one constant with the reader's. */
+export { GROUND } from '../model/references.ts';

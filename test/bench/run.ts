@@ -9,6 +9,7 @@ import { check } from '../../rules/engine/check.ts';
 import type { CheckResult } from '../../rules/engine/types.ts';
 import type { Design } from '../../rules/model/schema.ts';
 import { applyEdit, EDIT_KINDS, generateDesign, rng } from '../support/generator.ts';
+import { median, round as roundTo } from './stats.ts';
 
 const json = process.argv.includes('--json');
 const sizesArg = process.argv.find((a) => a.startsWith('--sizes='));
@@ -16,12 +17,7 @@ const SIZES = sizesArg ? sizesArg.slice(8).split(',').map(Number) : [100, 1000, 
 const EDITS = 200;
 const gc = (globalThis as { gc?: () => void }).gc;
 
-const median = (xs: number[]) => {
-  const s = [...xs].sort((a, b) => a - b);
-  const m = s.length >> 1;
-  return s.length % 2 ? s[m]! : (s[m - 1]! + s[m]!) / 2;
-};
-const round = (x: number, d = 3) => Math.round(x * 10 ** d) / 10 ** d;
+const round = (x: number, d = 3) => roundTo(x, d);
 
 function measure(parts: number) {
   const design = generateDesign(20261202 + parts, { parts });

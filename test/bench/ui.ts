@@ -32,6 +32,7 @@ import { createEditorStore } from '../../app/store/editorStore.ts';
 import { setPartProfile } from '../../app/store/commands/index.ts';
 import type { Design } from '../../rules/model/schema.ts';
 import { generateDesign } from '../support/generator.ts';
+import { median, round as roundTo } from './stats.ts';
 
 const json = process.argv.includes('--json');
 const PARTS = 1000;
@@ -44,12 +45,7 @@ const VIEWPORT = { width: 1440, height: 900 };
 const BASE = `http://127.0.0.1:${PORT}`;
 const log = (...args: unknown[]) => (json ? console.error(...args) : console.log(...args));
 
-const median = (xs: readonly number[]) => {
-  const s = xs.filter((x) => Number.isFinite(x)).sort((a, b) => a - b);
-  const m = s.length >> 1;
-  return s.length === 0 ? NaN : s.length % 2 ? s[m]! : (s[m - 1]! + s[m]!) / 2;
-};
-const round = (x: number, d = 1) => Math.round(x * 10 ** d) / 10 ** d;
+const round = (x: number, d = 1) => roundTo(x, d);
 
 /**
  * A part whose switch between two families turns one of its nets from red to not red: the

@@ -10,8 +10,6 @@ const LN73 = Math.log(7 / 3);
 // Output resistance |Δv| / Δi over the two largest voh rows:
 // 74HC (JESD7 as restated): VDD−0.1 @ 20 µA, VDD−0.66 @ 4 mA.
 const HC_ROUT = (0.66 - 0.1) / (4e-3 - 20e-6);
-// 74AC (from memory): VDD−0.1 @ 50 µA, VDD−0.74 @ 24 mA.
-const AC_ROUT = (0.74 - 0.1) / (24e-3 - 50e-6);
 // Pin capacitances: 74HC 10 pF (JESD7 restated), I2C-bus pin 10 pF (specification, restated).
 const CIN = 10e-12;
 // From memory: a 74HC input accepts edges up to 500 ns long at 4.5 V, i.e. 500 ns / 4.5 V.

@@ -10,6 +10,9 @@ import type { Design } from '../../rules/model/schema.ts';
 import type { Finding, Severity } from '../../rules/engine/types.ts';
 import { check } from '../../rules/engine/check.ts';
 import { validateDesign } from '../../rules/model/reader.ts';
+import { deepFreeze } from '../../rules/profiles/define.ts';
+
+export { deepFreeze };
 
 export interface ValidCase {
   name: string;
@@ -32,14 +35,6 @@ export interface InvalidCase {
   name: string;
   design: Design;
   findings: ExpectedFinding[];
-}
-
-export function deepFreeze<T>(value: T): T {
-  if (value !== null && typeof value === 'object' && !Object.isFrozen(value)) {
-    Object.freeze(value);
-    for (const v of Object.values(value)) deepFreeze(v);
-  }
-  return value;
 }
 
 function expectValue(actual: unknown, expected: unknown, path: string): void {
