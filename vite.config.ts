@@ -10,5 +10,6 @@ export default defineConfig({
     include: ['test/**/*.test.ts', 'test/**/*.test.tsx'],
     exclude: ['e2e/**', 'node_modules/**'],
     environment: 'node',
+    setupFiles: ['test/support/propertySeed.ts'],
   },
 });

@@ -33,7 +33,12 @@ function listIds(ids: Iterable<string>): string {
 
 interface Context {
   errors: LocatedError[];
-  railIds: Set<string>;
+  /**
+   * The design's rail ids; undefined when `rails` is missing or not a list. The schema then
+   * reports that one cause, and every rail reference is left unchecked: otherwise each part
+   * would add an "unknown rail" line and bury the cause under the list's limit.
+   */
+  railIds: Set<string> | undefined;
 }
 
 function fail(ctx: Context, segments: readonly PathSegment[], message: string): void {
@@ -56,7 +61,7 @@ function uniqueIds(ctx: Context, items: readonly unknown[], at: readonly PathSeg
 
 function checkRailRef(ctx: Context, value: unknown, at: readonly PathSegment[]): void {
   const id = asString(value);
-  if (id !== undefined && !ctx.railIds.has(id)) {
+  if (ctx.railIds !== undefined && id !== undefined && !ctx.railIds.has(id)) {
     fail(ctx, at, `unknown rail ${JSON.stringify(id)}: expected a rail id of this design (${listIds(ctx.railIds)})`);
   }
 }
@@ -65,7 +70,7 @@ function checkPull(ctx: Context, pull: unknown, at: readonly PathSegment[]): voi
   const rec = asRecord(pull);
   if (rec === undefined) return;
   const to = asString(own(rec, 'to'));
-  if (to !== undefined && to !== GROUND && !ctx.railIds.has(to)) {
+  if (ctx.railIds !== undefined && to !== undefined && to !== GROUND && !ctx.railIds.has(to)) {
     fail(ctx, [...at, 'to'], `unknown rail ${JSON.stringify(to)}: expected "ground" or a rail id of this design (${listIds(ctx.railIds)})`);
   }
 }
@@ -100,15 +105,15 @@ function checkRails(ctx: Context, rails: readonly unknown[]): void {
   });
 }
 
-function checkProfileRef(ctx: Context, value: unknown, at: readonly PathSegment[], profileIds: ReadonlySet<string>): void {
+function checkProfileRef(ctx: Context, value: unknown, at: readonly PathSegment[], profileIds: ReadonlySet<string> | undefined): void {
   const id = asString(value);
-  if (id !== undefined && !profileIds.has(id)) {
+  if (profileIds !== undefined && id !== undefined && !profileIds.has(id)) {
     fail(ctx, at, `unknown profile ${JSON.stringify(id)}: expected a built-in profile id or one of this design's profiles (${listIds(profileIds)})`);
   }
 }
 
 /** Check the parts; returns each part id's pin ids (first part of each id only). */
-function checkParts(ctx: Context, parts: readonly unknown[], profileIds: ReadonlySet<string>): Map<string, Set<string>> {
+function checkParts(ctx: Context, parts: readonly unknown[], profileIds: ReadonlySet<string> | undefined): Map<string, Set<string>> {
   const pinsOf = new Map<string, Set<string>>();
   parts.forEach((item, i) => {
     const part = asRecord(item);
@@ -131,7 +136,12 @@ function checkParts(ctx: Context, parts: readonly unknown[], profileIds: Readonl
   return pinsOf;
 }
 
-function checkNets(ctx: Context, nets: readonly unknown[], pinsOf: ReadonlyMap<string, ReadonlySet<string>>, scenarioIds: ReadonlySet<string>): void {
+function checkNets(
+  ctx: Context,
+  nets: readonly unknown[],
+  pinsOf: ReadonlyMap<string, ReadonlySet<string>> | undefined,
+  scenarioIds: ReadonlySet<string> | undefined,
+): void {
   const placed = new Map<string, string>();
   nets.forEach((item, i) => {
     const net = asRecord(item);
@@ -153,6 +163,7 @@ function checkNets(ctx: Context, nets: readonly unknown[], pinsOf: ReadonlyMap<s
       }
       const partId = ref.slice(0, dot);
       const pinId = ref.slice(dot + 1);
+      if (pinsOf === undefined) return;
       const pins = pinsOf.get(partId);
       if (pins === undefined) {
         fail(ctx, where, `unknown part ${JSON.stringify(partId)} in ${JSON.stringify(ref)}: expected PART.PIN naming a part of this design (${listIds(pinsOf.keys())})`);
@@ -180,7 +191,7 @@ function checkNets(ctx: Context, nets: readonly unknown[], pinsOf: ReadonlyMap<s
     asList(own(net, 'waivers')).forEach((w, k) => {
       const waiver = asRecord(w);
       const scenario = waiver && asString(own(waiver, 'scenario'));
-      if (scenario !== undefined && !scenarioIds.has(scenario)) {
+      if (scenarioIds !== undefined && scenario !== undefined && !scenarioIds.has(scenario)) {
         fail(ctx, [...at, 'waivers', k, 'scenario'], `unknown scenario ${JSON.stringify(scenario)}: expected "all-on" or a scenario id of this design (${listIds(scenarioIds)})`);
       }
     });
@@ -194,27 +205,39 @@ function checkNets(ctx: Context, nets: readonly unknown[], pinsOf: ReadonlyMap<s
 export function checkReferences(doc: unknown, builtinProfileIds: ReadonlySet<string>): LocatedError[] {
   const root = asRecord(doc);
   if (root === undefined) return [];
-  const rails = asList(own(root, 'rails'));
-  const scenarios = asList(own(root, 'scenarios'));
-  const profiles = asList(own(root, 'profiles'));
-  const parts = asList(own(root, 'parts'));
+  // A list that should be there but is not (or is not a list) is the schema's one error; the
+  // references into it are then not checked, so that the cause is not buried under its echoes.
+  const listOr = (key: string, optional: boolean): readonly unknown[] | undefined => {
+    const value = own(root, key);
+    if (Array.isArray(value)) return value;
+    return optional && value === undefined ? [] : undefined;
+  };
+  const rails = listOr('rails', false);
+  const scenarios = listOr('scenarios', true);
+  const profiles = listOr('profiles', true);
+  const parts = listOr('parts', false);
   const nets = asList(own(root, 'nets'));
-  const ctx: Context = { errors: [], railIds: new Set() };
+  const ctx: Context = { errors: [], railIds: undefined };
 
-  ctx.railIds = new Set(uniqueIds(ctx, rails, ['rails'], 'rail', 'among rails').keys());
-  checkRails(ctx, rails);
+  if (rails !== undefined) {
+    ctx.railIds = new Set(uniqueIds(ctx, rails, ['rails'], 'rail', 'among rails').keys());
+    checkRails(ctx, rails);
+  }
 
-  const scenarioIds = new Set(['all-on', ...uniqueIds(ctx, scenarios, ['scenarios'], 'scenario', 'among scenarios').keys()]);
-  scenarios.forEach((s, i) => {
+  const scenarioIds =
+    scenarios && new Set(['all-on', ...uniqueIds(ctx, scenarios, ['scenarios'], 'scenario', 'among scenarios').keys()]);
+  scenarios?.forEach((s, i) => {
     const rec = asRecord(s);
     if (rec !== undefined) asList(own(rec, 'off')).forEach((r, j) => checkRailRef(ctx, r, ['scenarios', i, 'off', j]));
   });
 
-  const localProfiles = uniqueIds(ctx, profiles, ['profiles'], 'profile', 'among profiles');
-  const profileIds = new Set([...builtinProfileIds, ...localProfiles.keys()]);
+  const profileIds = profiles && new Set([...builtinProfileIds, ...uniqueIds(ctx, profiles, ['profiles'], 'profile', 'among profiles').keys()]);
 
-  uniqueIds(ctx, parts, ['parts'], 'part', 'among parts');
-  const pinsOf = checkParts(ctx, parts, profileIds);
+  let pinsOf: Map<string, Set<string>> | undefined;
+  if (parts !== undefined) {
+    uniqueIds(ctx, parts, ['parts'], 'part', 'among parts');
+    pinsOf = checkParts(ctx, parts, profileIds);
+  }
 
   uniqueIds(ctx, nets, ['nets'], 'net', 'among nets');
   checkNets(ctx, nets, pinsOf, scenarioIds);

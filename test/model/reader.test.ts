@@ -209,6 +209,30 @@ describe('readDesign messages', () => {
     expect(r.errors[0]!.path).toBe('nets[6].pins[0]');
   });
 
+  // A missing or mistyped list is one cause: the references into it are not checked, so that
+  // the cause is not pushed past the limit by one "unknown …" line per part or pin.
+  const buried: { name: string; breakIt: (d: Doc) => void; only: string[] }[] = [
+    { name: 'rails missing', breakIt: (d) => void delete d.rails, only: ['rails'] },
+    { name: 'rails not a list', breakIt: (d) => void (d.rails = { id: '3v3' }), only: ['rails'] },
+    { name: 'parts missing', breakIt: (d) => void delete d.parts, only: ['parts'] },
+    { name: 'profiles not a list', breakIt: (d) => void (d.profiles = 'none'), only: ['profiles'] },
+    { name: 'scenarios not a list', breakIt: (d) => void (d.scenarios = 1), only: ['scenarios'] },
+  ];
+  it.each(buried)('$name among 200 parts: that is the one error listed', ({ breakIt, only }) => {
+    const d = greenhouse() as Doc;
+    const first = d.parts[0];
+    for (let i = 0; i < 200; i++) {
+      const copy = structuredClone(first);
+      copy.id = `X${i}`;
+      d.parts.push(copy);
+      d.nets.push({ id: `XN${i}`, pins: [`X${i}.${copy.pins[0].id}`], waivers: [{ rule: 'level-low', scenario: d.scenarios[0].id, note: 'n' }] });
+    }
+    expect(readDesign(JSON.stringify(d)).ok).toBe(true);
+    breakIt(d);
+    const r = readDesign(JSON.stringify(d));
+    expect(r.ok ? [] : r.errors.map((e) => e.path)).toEqual(only);
+  });
+
   it('names the built-in profile ids it was given, not the default ones', () => {
     const d = greenhouse() as Doc;
     const r = validateDesign(d, { knownProfileIds: ['74lvc', 'lvcmos18', 'i2c-lv', 'off-board'] });
