@@ -72,8 +72,10 @@ export class DesignIndex {
   /** An index of every part and net. */
   static build(design: Design): DesignIndex {
     const index = new DesignIndex();
-    for (const part of design.parts) index.addPart(design, part);
+    // Nets first: a pin added after its net is known is never put among the lone pins only to be
+    // taken out again (on a board nearly every pin is on a net).
     for (const net of design.nets) index.addNet(net);
+    for (const part of design.parts) index.addPart(design, part);
     return index;
   }
 
@@ -111,6 +113,7 @@ export class DesignIndex {
     if (group === undefined) {
       group = { pins: new Set(), ranges: new Map() };
       this.groups.set(gk, group);
+      addTo(this.groupsOfRail, entry.rail, gk);
     }
     group.pins.add(key);
     if (vddRange !== undefined) {
@@ -118,7 +121,6 @@ export class DesignIndex {
       if (slot === undefined) group.ranges.set(vddRange, { range: vddRange, count: 1 });
       else slot.count++;
     }
-    addTo(this.groupsOfRail, entry.rail, gk);
   }
 
   removePin(key: string): void {
