@@ -1,10 +1,21 @@
 /** Gestures the browser tests share: wiring two pins by dragging between their handles. */
 import type { Locator, Page } from '@playwright/test';
 
+/**
+ * The middle of an element once it has stopped moving: a view fitted with an animation moves
+ * every handle for a moment, and a slow machine may still be inside it.
+ */
 export async function centre(locator: Locator): Promise<{ x: number; y: number }> {
-  const box = await locator.boundingBox();
-  if (box === null) throw new Error('not visible');
-  return { x: box.x + box.width / 2, y: box.y + box.height / 2 };
+  let last: string | undefined;
+  for (let tries = 0; tries < 60; tries++) {
+    const box = await locator.boundingBox();
+    if (box === null) throw new Error('not visible');
+    const now = `${box.x},${box.y},${box.width},${box.height}`;
+    if (now === last) return { x: box.x + box.width / 2, y: box.y + box.height / 2 };
+    last = now;
+    await locator.page().waitForTimeout(60);
+  }
+  throw new Error('still moving after 3.6 s');
 }
 
 /** Drag from one pin's handle to another's, as a hand would. */
