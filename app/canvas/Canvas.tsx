@@ -29,6 +29,17 @@ const multiSelectionKeys = ['Shift', 'Meta', 'Control'];
 
 const pinOf = (node: string, handle: string | null | undefined) => `${node}.${handle ?? ''}`;
 
+interface DragState {
+  readonly drag: ReadonlyMap<string, XY> | null;
+  readonly moving: ReadonlySet<string> | null;
+}
+
+function sameKeys(set: ReadonlySet<string> | null, map: ReadonlyMap<string, unknown>): boolean {
+  if (set === null || set.size !== map.size) return false;
+  for (const k of map.keys()) if (!set.has(k)) return false;
+  return true;
+}
+
 export function Canvas() {
   const store = useEditorStore();
   const parts = useEditor((s) => s.design.parts);
@@ -39,14 +50,19 @@ export function Canvas() {
   // editor's, so that a drag step wakes only the canvas (not every chip's and wire's
   // subscription), yet renders at once, as a store update does (not a frame later, as state
   // set from a pointer event would). The end of the drag is the one command.
-  const dragStore = useRef(createStore<{ drag: ReadonlyMap<string, XY> | null }>(() => ({ drag: null }))).current;
+  // `moving`: the dragged chips' ids, one set for the whole drag, so that their wires are marked
+  // once when it starts (deriveFlow.ts, MOVING_WIRE) and not rebuilt on every step.
+  const dragStore = useRef(createStore<DragState>(() => ({ drag: null, moving: null }))).current;
   const drag = useStore(dragStore, (s) => s.drag);
+  const moving = useStore(dragStore, (s) => s.moving);
   const setDrag = useCallback((next: (was: ReadonlyMap<string, XY> | null) => ReadonlyMap<string, XY> | null) => {
-    dragStore.setState({ drag: next(dragStore.getState().drag) });
+    const was = dragStore.getState();
+    const drag = next(was.drag);
+    dragStore.setState({ drag, moving: drag === null ? null : sameKeys(was.moving, drag) ? was.moving : new Set(drag.keys()) });
   }, [dragStore]);
   const deriver = useRef(createFlowDeriver()).current;
   const nodes = useMemo(() => deriver.nodes(parts, selectedParts, drag), [deriver, parts, selectedParts, drag]);
-  const edges = useMemo(() => deriver.edges(nets, selectedWires), [deriver, nets, selectedWires]);
+  const edges = useMemo(() => deriver.edges(nets, selectedWires, moving), [deriver, nets, selectedWires, moving]);
   const place = usePlacePart();
   useCanvasKeys();
 

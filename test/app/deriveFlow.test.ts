@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { readFileSync } from 'node:fs';
-import { createFlowDeriver, deriveOnce } from '../../app/canvas/deriveFlow.ts';
+import { createFlowDeriver, deriveOnce, MOVING_CHIP, MOVING_WIRE } from '../../app/canvas/deriveFlow.ts';
 import { addWaiver, connectPins, editPart, setNetLabel, setPartLabel, setPartProfile } from '../../app/store/commands/index.ts';
 import { chipSize } from '../../app/canvas/chipLayout.ts';
 import type { Pin } from '../../rules/model/schema.ts';
@@ -64,6 +64,29 @@ describe('nodes and edges from the design', () => {
     const n2 = flow.nodes(h.design.parts, [], new Map([['H', { x: 5, y: 6 }]]));
     expect(n2.map((n, k) => n === n1[k])).toEqual([true, false, true, true]);
     expect(n2[1]?.position).toEqual({ x: 5, y: 6 });
+  });
+
+  it('a drag marks the dragged chip and the wires ending on it once, and unmarks them at its end', () => {
+    const h = harness(bench({ nets: [net('A', ['D.Y1', 'H.A', 'T.A']), net('B', ['D.Y2', 'T.B'])] }));
+    const flow = createFlowDeriver();
+    const e0 = flow.edges(h.design.nets, [], null);
+    const moving = new Set(['T']);
+    const e1 = flow.edges(h.design.nets, [], moving);
+    // Net A is drawn as the chain D.Y1–H.A–T.A: its second wire ends on T, its first does not.
+    expect(e1.map((e) => [e.id, e.className])).toEqual([
+      ['A:D.Y1:H.A', undefined],
+      ['A:H.A:T.A', MOVING_WIRE],
+      ['B:D.Y2:T.B', MOVING_WIRE],
+    ]);
+    expect(e1[0]).not.toBe(e0[0]); // its net has a moving wire: the net's edges are made again
+    // Every later step of the same drag hands over the same array.
+    expect(flow.edges(h.design.nets, [], moving)).toBe(e1);
+    const n = flow.nodes(h.design.parts, [], new Map([['T', { x: 40, y: 50 }]]));
+    expect(n.map((node) => [node.id, node.className])).toEqual([['D', undefined], ['H', undefined], ['T', MOVING_CHIP], ['S', undefined]]);
+    // The drag ends: no marks left.
+    const e2 = flow.edges(h.design.nets, [], null);
+    expect(e2.map((e) => e.className)).toEqual([undefined, undefined, undefined]);
+    expect(flow.nodes(h.design.parts, [], null).every((node) => node.className === undefined)).toBe(true);
   });
 
   // Sizes as styles.css draws them (border 3 + header 41, rows of 20 with 6 of padding, strips of 30, border 1).
