@@ -11,7 +11,7 @@ import type { Design, Net, Part, Rail } from '../model/schema.ts';
 import { RULES } from '../checks/index.ts';
 import type { AnyRule } from '../checks/defineRule.ts';
 import { ALL_ON, effectiveSettings, powerStates, railStates } from './powerStates.ts';
-import { pinView, prepareNet, type PrepareContext } from './prepare.ts';
+import { loneRails, pinView, prepareNet, type PrepareContext } from './prepare.ts';
 import { completeFinding, restampFinding, sortFindings } from './findings.ts';
 import { DesignIndex, groupKey, splitGroupKey } from './designIndex.ts';
 import { changedById } from './diff.ts';
@@ -64,7 +64,7 @@ function checkNet(ctx: StateContext, net: Net, allOn?: NetResult): NetResult {
     return {
       net,
       view: { ...allOn.view, state: ctx.state },
-      findings: allOn.findings.map((f) => restampFinding(f, ALL_ON, ctx.state, net)),
+      findings: allOn.findings.map((f) => restampFinding(f, ALL_ON, ctx.state, net.id, net)),
     };
   }
   const view = prepareNet(ctx, net);
@@ -86,7 +86,7 @@ function checkLonePin(ctx: StateContext, pin: PinView): Finding[] {
   const found: Finding[] = [];
   for (const rule of ctx.rules) {
     if (rule.checkPin === undefined) continue;
-    rule.checkPin({ pin, state: ctx.state, settings: ctx.settings, rails: ctx.rails }, (draft) =>
+    rule.checkPin({ pin, state: ctx.state, settings: ctx.settings, rails: loneRails(ctx.rails, pin) }, (draft) =>
       found.push(completeFinding(rule, draft, ctx.state, null)),
     );
   }
@@ -122,9 +122,19 @@ function checkState(ctx: StateContext, index: DesignIndex, t: Tables): void {
   }
   t.nets.set(ctx.state.id, perNet);
   const lone: LoneTable = new Map();
+  // As for nets: a lone pin none of whose rails is off in this state is judged as in all-on.
+  const allOnLone = ctx.state.id === ALL_ON ? undefined : t.lonePins.get(ALL_ON);
+  const off = ctx.state.off;
   for (const key of index.lone) {
     const at = index.pins.get(key)!;
-    const found = checkLonePin(ctx, pinView(ctx.design, at.part, at.pin, ctx.rails));
+    let found: readonly Finding[];
+    if (allOnLone !== undefined && !off.has(at.rail) && (at.pullTo === undefined || !off.has(at.pullTo))) {
+      const was = allOnLone.get(key);
+      if (was === undefined) continue;
+      found = was.map((f) => restampFinding(f, ALL_ON, ctx.state, key, null));
+    } else {
+      found = checkLonePin(ctx, pinView(at, ctx.rails));
+    }
     if (found.length > 0) {
       lone.set(key, found);
       count(t.summary, found, 1);
@@ -348,7 +358,7 @@ function incrementalCheck(design: Design, prev: CheckResult, inner: Internals, s
         if (old !== undefined) { count(t.summary, old, -1); lone.delete(key); }
         const at = index.pins.get(key);
         if (at === undefined || index.netOfPin.has(key)) continue;
-        const found = checkLonePin(ctx, pinView(design, at.part, at.pin, rails));
+        const found = checkLonePin(ctx, pinView(at, rails));
         if (found.length > 0) { lone.set(key, found); count(t.summary, found, 1); }
       }
     }

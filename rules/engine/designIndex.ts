@@ -5,12 +5,14 @@
  * quadratic in the design's size. What only a rail or profile edit needs is scanned then.
  */
 import type { Design, Net, Part, Pin } from '../model/schema.ts';
-import { resolvePin } from './resolve.ts';
+import { resolution, type Resolution } from './resolve.ts';
 
 /** What the index remembers of a pin, to take it out again when the pin changes. */
-interface PinEntry {
+export interface PinEntry {
   readonly part: Part;
   readonly pin: Pin;
+  /** Its effective parameters: re-made whenever the pin, its part or its profile changes. */
+  readonly resolution: Resolution;
   readonly rail: string;
   readonly profile: string;
   readonly pullTo: string | undefined;
@@ -100,11 +102,11 @@ export class DesignIndex {
   }
 
   addPin(design: Design, part: Part, pin: Pin): void {
-    const resolved = resolvePin(design, part, pin);
-    const key = resolved.key;
-    const vddRange = resolved.params.vddRange;
+    const res = resolution(design, part, pin);
+    const key = res.resolved.key;
+    const vddRange = res.resolved.params.vddRange;
     const entry: PinEntry = {
-      part, pin, rail: pin.rail ?? part.rail, profile: pin.profile ?? part.profile, pullTo: pin.pull?.to, vddRange,
+      part, pin, resolution: res, rail: res.resolved.rail, profile: res.resolved.profileId, pullTo: pin.pull?.to, vddRange,
     };
     this.pins.set(key, entry);
     if (!this.netOfPin.has(key)) this.lone.add(key);

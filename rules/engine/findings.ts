@@ -39,13 +39,14 @@ function waiverNote(net: Net, rule: string, state: string): string | undefined {
 }
 
 /**
- * The same finding in another power state: a net none of whose rails is off there is judged
- * exactly as in `all-on`, so its findings are re-stamped rather than computed again.
+ * The same finding in another power state: a net (or a lone pin) none of whose rails is off
+ * there is judged exactly as in `all-on`, so its findings are re-stamped rather than computed
+ * again. `place` is the net's id, or the pin's key for a pin on no net (`net` null: no waivers).
  */
-export function restampFinding(f: Finding, from: string, state: PowerState, net: Net): Finding {
-  const prefix = `${f.rule}:${net.id}:`;
+export function restampFinding(f: Finding, from: string, state: PowerState, place: string, net: Net | null): Finding {
+  const prefix = `${f.rule}:${place}:`;
   const { waived: _old, ...rest } = f;
-  const waived = waiverNote(net, f.rule, state.id);
+  const waived = net === null ? undefined : waiverNote(net, f.rule, state.id);
   return {
     ...rest,
     id: `${prefix}${state.id}${f.id.slice(prefix.length + from.length)}`,

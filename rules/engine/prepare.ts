@@ -2,30 +2,21 @@
  * Preparing a net once per power state: its pins resolved, drivers and receivers by kind, pulls,
  * capacitance, load currents and the level analysis. Every rule reads this one view.
  */
-import type { Design, Net, Part, Pin } from '../model/schema.ts';
+import type { Design, Net } from '../model/schema.ts';
 import { analyseNet } from './analyse.ts';
 import { driverLoad } from './netMath.ts';
 import { GROUND } from './powerStates.ts';
-import { resolvedView } from './resolve.ts';
+import { viewOf } from './resolve.ts';
+import type { PinEntry } from './designIndex.ts';
 import type { Range } from '../levels/rails.ts';
 import type { DriverLoad, EffectiveSettings, NetView, PinView, PowerState, PullSource, RailStates } from './types.ts';
 
-/** Where each `PART.PIN` of the design lives. */
-export type PinIndex = ReadonlyMap<string, { readonly part: Part; readonly pin: Pin }>;
-
-/** The pin index of a design. */
-export function indexPins(design: Design): PinIndex {
-  const index = new Map<string, { part: Part; pin: Pin }>();
-  for (const part of design.parts) {
-    for (const pin of part.pins) index.set(`${part.id}.${pin.id}`, { part, pin });
-  }
-  return index;
-}
+/** Where each `PART.PIN` of the design lives, with its resolution (the engine's index). */
+export type PinIndex = ReadonlyMap<string, PinEntry>;
 
 /** A pin in a power state: powered unless its rail is off (or unknown to the design). */
-export function pinView(design: Design, part: Part, pin: Pin, rails: RailStates): PinView {
-  const rail = pin.rail ?? part.rail;
-  return resolvedView(design, part, pin, !rails.off.has(rail) && rails.ranges.has(rail));
+export function pinView(at: PinEntry, rails: RailStates): PinView {
+  return viewOf(at.resolution, !rails.off.has(at.rail) && rails.ranges.has(at.rail));
 }
 
 export interface PrepareContext {
@@ -38,11 +29,11 @@ export interface PrepareContext {
 
 /** The prepared view of one net in one power state. */
 export function prepareNet(ctx: PrepareContext, net: Net): NetView {
-  const { design, settings } = ctx;
+  const { settings } = ctx;
   const pins: PinView[] = [];
   for (const key of net.pins) {
     const at = ctx.pinIndex.get(key);
-    if (at !== undefined) pins.push(pinView(design, at.part, at.pin, ctx.rails));
+    if (at !== undefined) pins.push(pinView(at, ctx.rails));
   }
   const drivers = pins.filter((p) => p.powered && p.role !== 'input');
   const receivers = pins.filter((p) => p.powered && p.role !== 'output');
@@ -73,6 +64,15 @@ export function prepareNet(ctx: PrepareContext, net: Net): NetView {
 }
 
 /**
+ * The rail states a pin on no net depends on: its own rail and its internal pull's. A lone pin's
+ * rules see nothing else, so that in a power state where neither is off it is judged exactly as
+ * with every rail on (check.ts re-stamps its findings).
+ */
+export function loneRails(all: RailStates, pin: PinView): RailStates {
+  return railsOf(all, pin.pull === undefined || pin.pull.to === GROUND || pin.pull.to === pin.rail ? [pin.rail] : [pin.rail, pin.pull.to]);
+}
+
+/**
  * The rail states a net depends on: its pins' rails and its pulls' rails, nothing else, so that
  * a net's view changes only when something it depends on changes.
  */
@@ -81,6 +81,11 @@ function netRails(all: RailStates, pins: readonly PinView[], pulls: readonly Pul
   const ids: string[] = [];
   for (const p of pins) if (!ids.includes(p.rail)) ids.push(p.rail);
   for (const p of pulls) if (p.to !== GROUND && !ids.includes(p.to)) ids.push(p.to);
+  return railsOf(all, ids);
+}
+
+/** `all` restricted to the rails `ids` (sorted here); one object per set of rails. */
+function railsOf(all: RailStates, ids: string[]): RailStates {
   ids.sort();
   const key = ids.join('\u0000');
   let memo = netRailsMemo.get(all);

@@ -29,9 +29,17 @@ export function lookupProfile(design: Design, id: string): Profile | undefined {
   return builtinProfile(id);
 }
 
-interface CacheEntry {
-  /** The resolved pin as seen powered [1] and unpowered [0], made once each. */
-  views: [PinView | undefined, PinView | undefined];
+/**
+ * A pin's resolution and its views in the two power conditions, made once each. The engine's
+ * index keeps it per pin, so that preparing a net reaches a pin's view without a cache lookup.
+ */
+export interface Resolution {
+  readonly resolved: ResolvedPin;
+  /** The resolved pin as seen powered [1] and unpowered [0], made when first asked for. */
+  readonly views: [PinView | undefined, PinView | undefined];
+}
+
+interface CacheEntry extends Resolution {
   readonly partId: string;
   readonly partRail: string;
   readonly partParams: Params | undefined;
@@ -39,7 +47,6 @@ interface CacheEntry {
   /** The design's local profiles when this was resolved: unchanged, the lookup gives the same profile. */
   readonly localProfiles: readonly Profile[] | undefined;
   readonly profile: Profile | undefined;
-  readonly resolved: ResolvedPin;
 }
 
 const cache = new WeakMap<Pin, CacheEntry>();
@@ -52,9 +59,18 @@ export function resolvePin(design: Design, part: Part, pin: Pin): ResolvedPin {
   return entryOf(design, part, pin).resolved;
 }
 
+/** The pin's resolution, cached as `resolvePin`'s is. */
+export function resolution(design: Design, part: Part, pin: Pin): Resolution {
+  return entryOf(design, part, pin);
+}
+
 /** The pin in a power state, powered or not; the same object while nothing it depends on changes. */
 export function resolvedView(design: Design, part: Part, pin: Pin, powered: boolean): PinView {
-  const entry = entryOf(design, part, pin);
+  return viewOf(entryOf(design, part, pin), powered);
+}
+
+/** A resolution's view, powered or not: made once, then the same object. */
+export function viewOf(entry: Resolution, powered: boolean): PinView {
   const k = powered ? 1 : 0;
   let view = entry.views[k];
   if (view === undefined) {

@@ -101,6 +101,7 @@ export interface LonePinView {
   readonly pin: PinView;
   readonly state: PowerState;
   readonly settings: EffectiveSettings;
+  /** The states of the pin's own rail and of its internal pull's rail: nothing else. */
   readonly rails: RailStates;
 }
 
