@@ -173,3 +173,25 @@ test('Shift+drag on the canvas selects the chips inside the box; Delete removes 
   await expect(page.locator('.react-flow__node[data-id="U6"]')).toHaveCount(1);
   await expect(page.locator('.react-flow__node[data-id="U7"]')).toHaveCount(1);
 });
+
+test('a rule with many findings lists the first 60 and shows the rest on request', async ({ page }) => {
+  // A test bench of our own: 75 spare gates whose enable inputs are left on no net, each one a
+  // floating-input warning (an unused CMOS input floats: common practice).
+  const parts = Array.from({ length: 75 }, (_, k) => ({
+    id: `G${k + 1}`, label: `Spare gate ${k + 1}`, rail: '3v3', profile: '74lvc',
+    position: { x: (k % 15) * 240, y: Math.floor(k / 15) * 140 }, pins: [{ id: 'EN', role: 'input', side: 'left' }],
+  }));
+  const design = { format: 'railcross.design', version: 1, title: 'Spare gate bench', rails: [{ id: '3v3', label: '3.3 V', nominal: 3.3, tolerance: 0.05 }], parts, nets: [] };
+  await page.goto('/');
+  await expect(page.locator('.react-flow__node').first()).toBeVisible();
+  await page.getByTestId('open-library').click();
+  await page.getByTestId('import-file').setInputFiles({ name: 'spare-gates.railcross.json', mimeType: 'application/json', buffer: Buffer.from(JSON.stringify(design)) });
+  await expect(page.getByTestId('design-title')).toHaveValue('Spare gate bench');
+
+  const rows = page.locator('.rc-finding[data-rule="floating-input"]');
+  await expect(page.locator('[data-count="warning"]')).toContainText('75 warnings');
+  await expect(rows).toHaveCount(60);
+  await page.getByTestId('more-floating-input').click();
+  await expect(rows).toHaveCount(75);
+  await expect(page.getByTestId('more-floating-input')).toHaveCount(0);
+});

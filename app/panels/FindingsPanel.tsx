@@ -2,7 +2,7 @@
  * The findings: grouped by severity then rule (in the catalogue's order), filtered by power
  * state, rule and severity. A click selects the finding's net (or part) and brings it into view.
  */
-import { useCallback, useMemo, useState } from 'react';
+import { useCallback, useMemo, useState, type ReactNode } from 'react';
 import type { Finding, Severity } from '../../rules/engine/types.ts';
 import { RULES } from '../../rules/checks/index.ts';
 import { SeverityGlyph } from '../canvas/SeverityGlyph.tsx';
@@ -18,6 +18,12 @@ const SEVERITIES: readonly { key: Severity; title: string }[] = [
 ];
 
 const TITLES = new Map<string, string>(RULES.map((r) => [r.id, r.meta.title]));
+/**
+ * Rows listed per rule before a "show more" button: a large design can have thousands of
+ * findings of one rule, and every listed row is DOM that an edit may have to re-render.
+ */
+export const ROWS_SHOWN = 60;
+const MORE_ROWS = 200;
 const CANVAS = '(canvas)';
 const ALL = '(all)';
 
@@ -25,6 +31,23 @@ function place(f: Finding, netLabel: (id: string) => string): string {
   if (f.net !== null) return netLabel(f.net);
   if (f.pins.length > 0) return f.pins.join(', ');
   return f.id.split(':')[1] ?? '';
+}
+
+/** One rule's findings: the first `ROWS_SHOWN`, then as many more as asked for. */
+function RuleRows({ rule, rows, row }: { rule: string; rows: readonly Finding[]; row: (f: Finding) => ReactNode }) {
+  const [limit, setLimit] = useState(ROWS_SHOWN);
+  const hidden = rows.length - limit;
+  return (
+    <div className="rc-rule-group">
+      <h4>{TITLES.get(rule) ?? rule} <span className="rc-n">{rows.length}</span></h4>
+      <ul>{(hidden > 0 ? rows.slice(0, limit) : rows).map(row)}</ul>
+      {hidden > 0 && (
+        <button type="button" className="rc-more" data-testid={`more-${rule}`} onClick={() => setLimit(limit + MORE_ROWS)}>
+          {hidden <= MORE_ROWS ? `Show the other ${hidden}` : `Show ${MORE_ROWS} more (${hidden} not listed)`}
+        </button>
+      )}
+    </div>
+  );
 }
 
 export function FindingsPanel() {
@@ -108,15 +131,11 @@ export function FindingsPanel() {
           <section key={g.key} className={`rc-sev-group rc-sev-group--${g.key}`}>
             <h3><SeverityGlyph severity={g.key} /> {g.title} <span className="rc-n">{g.size}{g.waived > 0 && `, ${g.waived} waived`}</span></h3>
             {g.rules.map(({ rule, rows }) => (
-              <div key={rule} className="rc-rule-group">
-                <h4>{TITLES.get(rule) ?? rule} <span className="rc-n">{rows.length}</span></h4>
-                <ul>
-                  {rows.map((f) => (
-                    <FindingRow key={f.id} finding={f} showState={scenario === ALL} onPick={pick}
-                      text={{ place: place(f, netLabel), rule: TITLES.get(f.rule) ?? f.rule, state: stateLabel.get(f.scenario) ?? f.scenario }} />
-                  ))}
-                </ul>
-              </div>
+              <RuleRows key={rule} rule={rule} rows={rows}
+                row={(f) => (
+                  <FindingRow key={f.id} finding={f} showState={scenario === ALL} onPick={pick}
+                    text={{ place: place(f, netLabel), rule: TITLES.get(f.rule) ?? f.rule, state: stateLabel.get(f.scenario) ?? f.scenario }} />
+                )} />
             ))}
           </section>
         ))}
