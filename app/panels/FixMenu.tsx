@@ -84,6 +84,9 @@ export function FixMenu({ finding }: { finding: Finding }) {
   }, [open, finding, store]);
   if (finding.waived !== undefined || !MAY_HAVE_FIXES.has(finding.rule)) return null;
   if (finding.rule === 'pull-range' && finding.severity !== 'error') return null;
+  // Contention has a remedy only between three-state drivers (a waiver once the enables are
+  // known to be exclusive); two push-pull outputs on one net need a design change.
+  if (finding.rule === 'contention' && finding.messageId !== 'enablesNeeded') return null;
   if (!open) {
     return (
       <button type="button" className="rc-link" data-testid="fix-open" aria-expanded="false" onClick={() => setOpen(true)}>
