@@ -9,11 +9,13 @@
  */
 import { describe, expect, it } from 'vitest';
 import { exampleDesign } from '../../../app/example.ts';
-import type { Design } from '../../../rules/model/schema.ts';
+import type { Design, Part } from '../../../rules/model/schema.ts';
+import { chipSize } from '../../../app/canvas/chipLayout.ts';
 import { design, input, net, output, part, rail1v8, rail3v3, rail5v0, scenario } from '../../support/build.ts';
 import { applyAndUndo, offered } from './support.ts';
 import { harness } from '../harness.ts';
 import { applyFix, fixesFor } from '../../../app/store/commands/fixes/index.ts';
+import { MAX_CHANNELS } from '../../../app/store/commands/fixes/translator.ts';
 import { deleteSelection } from '../../../app/store/commands/index.ts';
 
 const greenhouse = exampleDesign();
@@ -38,10 +40,17 @@ const cases: Case[] = [
       expect(pinsOf(d, 'VALVE_EN_5v0')).toMatchObject({ label: 'VALVE_EN_5v0', pins: ['U8.B', 'U3.EN'] });
       // The new half comes right after the original, so that the report keeps them together.
       expect(d.nets.map((n) => n.id).indexOf('VALVE_EN_5v0')).toBe(d.nets.map((n) => n.id).indexOf('VALVE_EN') + 1);
+      const box = (p: Part) => ({ ...p.position!, ...chipSize(p) });
+      const t = box(partOf(d, 'U8')!);
+      for (const other of d.parts.filter((p) => p.id !== 'U8').map(box)) {
+        const apart = t.x + t.width <= other.x || other.x + other.width <= t.x || t.y + t.height <= other.y || other.y + other.height <= t.y;
+        expect(apart).toBe(true);
+      }
       expect(partOf(d, 'U8')).toEqual({
         id: 'U8', label: 'Dual-rail translator for VALVE_EN', rail: '3v3', profile: 'xlat-side',
-        // Halfway between U1 (360, 160) and U3 (720, 80).
-        position: { x: 540, y: 120 },
+        // Halfway between U1 (360, 160) and U3 (720, 80) is (540, 120), on top of U1: the nearest
+        // spot clear of every chip by 24 px, searched in rings of 40 px steps, is (460, 40).
+        position: { x: 460, y: 40 },
         pins: [{ id: 'A', role: 'input', side: 'left' }, { id: 'B', role: 'output', rail: '5v0', side: 'right' }],
       });
     },
@@ -149,5 +158,83 @@ describe('insert a translator', () => {
     }), 'level-high:N:all-on:D.Y>R.A'],
   ])('is not offered for %s', (_name, start, finding) => {
     expect(offered(start, finding)).not.toContain('translator');
+  });
+});
+
+/** The greenhouse example after the translator fix on SDA (U8, open-drain, 3v3 ↔ 1v8). */
+function withSdaTranslator(): Design {
+  const { h } = applyAndUndo(greenhouse, 'overvoltage:SDA:all-on:U2.SDA', 'translator');
+  expect(h.redo()).toBe(true);
+  return h.design;
+}
+
+describe('a channel of a translator already there', () => {
+  it('SCL takes channel 2 of the SDA translator: one part, two channels, each side pulled to its rail', () => {
+    const start = withSdaTranslator();
+    expect(offered(start, 'overvoltage:SCL:all-on:U2.SCL')).toEqual(['translator-channel', 'translator', 'mark-tolerant']);
+    applyAndUndo(start, 'overvoltage:SCL:all-on:U2.SCL', 'translator-channel', ({ design: d, fix }) => {
+      expect(fix.title).toBe('Use channel 2 of translator U8 on SCL');
+      expect(d.parts.filter((p) => p.profile === 'xlat-od').map((p) => p.id)).toEqual(['U8']);
+      expect(partOf(d, 'U8')).toMatchObject({
+        label: 'Dual-rail translator for SDA, SCL',
+        // The sensor sits left of the controller: side B faces it, and channel 2 follows channel 1.
+        pins: [
+          { id: 'A', role: 'bidir', drive: 'open-drain', side: 'right' },
+          { id: 'B', role: 'bidir', drive: 'open-drain', rail: '1v8', side: 'left' },
+          { id: 'A2', role: 'bidir', drive: 'open-drain', side: 'right' },
+          { id: 'B2', role: 'bidir', drive: 'open-drain', rail: '1v8', side: 'left' },
+        ],
+      });
+      expect(pinsOf(d, 'SCL')).toMatchObject({ pins: ['U1.SCL', 'U8.A2'], pull: { to: '3v3', ohms: 4700 } });
+      expect(pinsOf(d, 'SCL_1v8')).toMatchObject({ pins: ['U8.B2', 'U2.SCL'], pull: { to: '1v8', ohms: 4700 } });
+    });
+  });
+
+  it('the same in standby: back-power on SCL is answered by channel 2', () => {
+    applyAndUndo(withSdaTranslator(), 'back-power:SCL:standby:U2.SCL', 'translator-channel');
+  });
+
+  it.each([
+    {
+      name: 'a push-pull crossing (VALVE_EN) next to an open-drain translator',
+      start: () => withSdaTranslator(),
+      finding: 'level-high:VALVE_EN:all-on:U1.VALVE_EN>U3.EN',
+    },
+    {
+      name: 'a translator between other rails (DISP_RX, 5v0 → 3v3, beside the 3v3 → 5v0 one on VALVE_EN)',
+      start: () => {
+        const { h } = applyAndUndo(greenhouse, 'level-high:VALVE_EN:all-on:U1.VALVE_EN>U3.EN', 'translator');
+        expect(h.redo()).toBe(true);
+        return h.design;
+      },
+      finding: 'overvoltage:DISP_RX:all-on:U1.DISP_RX',
+    },
+    {
+      name: `a translator with all ${MAX_CHANNELS} channels taken`,
+      start: () => {
+        const d = structuredClone(withSdaTranslator());
+        const u8 = d.parts.find((p) => p.id === 'U8')!;
+        for (let k = 2; k <= MAX_CHANNELS; k++) {
+          u8.pins.push({ id: `A${k}`, role: 'bidir', drive: 'open-drain', side: 'left' }, { id: `B${k}`, role: 'bidir', drive: 'open-drain', rail: '1v8', side: 'right' });
+        }
+        return d;
+      },
+      finding: 'overvoltage:SCL:all-on:U2.SCL',
+    },
+  ])('is not offered for $name', ({ start, finding }) => {
+    const fixes = offered(start(), finding);
+    expect(fixes).toContain('translator');
+    expect(fixes).not.toContain('translator-channel');
+  });
+
+  it('refuses, changing nothing, when the translator is gone by the time it is applied', () => {
+    const h = harness(withSdaTranslator());
+    const { result } = h.store.getState();
+    const f = result.findings.find((x) => x.id === 'overvoltage:SCL:all-on:U2.SCL')!;
+    const fix = fixesFor(f, h.design, result).find((x) => x.id === 'translator-channel')!;
+    h.apply(deleteSelection({ parts: ['U8'], wires: [] }));
+    const before = h.design;
+    expect(h.apply(applyFix(fix))).toEqual({ ok: false, reason: 'Translator U8 has no free channel between 3v3 and 1v8 for this net.' });
+    expect(h.design).toBe(before);
   });
 });

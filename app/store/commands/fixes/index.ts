@@ -11,7 +11,7 @@ import { addWaiver } from '../waivers.ts';
 import { markTolerantFix, markUnpoweredSafeFix, tolerantFamilyFixes, ttlInputsFix } from './family.ts';
 import { driveOfPin, findNet, pinAt, railOfPin } from './lookup.ts';
 import { addPullFix, pullValueFix, tieNetFixes, tiePinFixes } from './pulls.ts';
-import { translatorFix } from './translator.ts';
+import { translatorFixes } from './translator.ts';
 import type { QuickFix } from './types.ts';
 
 export type { QuickFix } from './types.ts';
@@ -30,11 +30,11 @@ function railOf(design: Design, key: unknown): string | undefined {
 }
 
 /** level-high / level-low between pins on different rails: a translator from the driver's rail to the receiver's. */
-function levelTranslator(design: Design, f: Finding): QuickFix | undefined {
+function levelTranslator(design: Design, f: Finding): QuickFix[] {
   const railA = railOf(design, f.values.driver);
   const railB = railOf(design, f.values.receiver);
-  if (f.net === null || railA === undefined || railB === undefined || railA === railB) return undefined;
-  return translatorFix(design, f.id, { net: f.net, railA, railB }, `${String(f.values.receiver)} is driven from its own rail`);
+  if (f.net === null || railA === undefined || railB === undefined || railA === railB) return [];
+  return translatorFixes(design, f.id, { net: f.net, railA, railB }, `${String(f.values.receiver)} is driven from its own rail`);
 }
 
 /**
@@ -42,19 +42,19 @@ function levelTranslator(design: Design, f: Finding): QuickFix | undefined {
  * pin's rail. The source is a driver's pin key, `net` (the net's pull) or the pin key whose
  * internal pull it is.
  */
-function exposureTranslator(design: Design, f: Finding): QuickFix | undefined {
+function exposureTranslator(design: Design, f: Finding): QuickFix[] {
   const pin = f.values.pin;
   const source = f.values.source;
-  if (f.net === null || typeof pin !== 'string' || typeof source !== 'string') return undefined;
+  if (f.net === null || typeof pin !== 'string' || typeof source !== 'string') return [];
   // A pin's own internal pull moves with it: no translator helps there.
-  if (source === pin) return undefined;
+  if (source === pin) return [];
   const railB = railOf(design, pin);
   const railA = source === 'net' ? findNet(design, f.net)?.pull?.to : sourceRail(design, source);
-  if (railA === undefined || railB === undefined || railA === GROUND || railA === railB) return undefined;
+  if (railA === undefined || railB === undefined || railA === GROUND || railA === railB) return [];
   const why = f.rule === 'back-power'
     ? `${pin} is isolated while ${railB} is off`
     : `${pin} only sees its own rail's levels`;
-  return translatorFix(design, f.id, { net: f.net, railA, railB }, why);
+  return translatorFixes(design, f.id, { net: f.net, railA, railB }, why);
 }
 
 function contentionWaiver(f: Finding): QuickFix | undefined {
@@ -92,13 +92,13 @@ export function fixesFor(finding: Finding, design: Design, result: CheckResult):
   if (finding.waived !== undefined) return [];
   switch (finding.rule) {
     case 'level-high':
-      return [ttlInputsFix(design, finding), levelTranslator(design, finding)].filter(present);
+      return [ttlInputsFix(design, finding), ...levelTranslator(design, finding)].filter(present);
     case 'level-low':
-      return [levelTranslator(design, finding)].filter(present);
+      return levelTranslator(design, finding);
     case 'overvoltage':
-      return [...tolerantFamilyFixes(design, finding), exposureTranslator(design, finding), markTolerantFix(design, finding)].filter(present);
+      return [...tolerantFamilyFixes(design, finding), ...exposureTranslator(design, finding), markTolerantFix(design, finding)].filter(present);
     case 'back-power':
-      return [exposureTranslator(design, finding), markUnpoweredSafeFix(design, finding)].filter(present);
+      return [...exposureTranslator(design, finding), markUnpoweredSafeFix(design, finding)].filter(present);
     case 'missing-pull':
       return [addPullFix(design, finding)].filter(present);
     case 'pull-range':

@@ -8,6 +8,7 @@ import type { Design, Net, Part, Pin, Pull } from '../../../../rules/model/schem
 import { GROUND } from '../../../../rules/model/references.ts';
 import { freshId, refuse, splitPinKey, type Refusal } from '../command.ts';
 import { driveOfPin, findNet, netName, pinAt, railOfPin, uniqueId } from './lookup.ts';
+import { chipSize, freePlace } from '../../../canvas/chipLayout.ts';
 import type { QuickFix } from './types.ts';
 
 /** Built-in translator side profiles (rules/profiles/translators.ts). */
@@ -16,6 +17,12 @@ export const TRANSLATOR_OPEN_DRAIN = 'xlat-od';
 
 /** A pull for an open-drain side that had none: a usual general-purpose value (common practice). */
 export const DEFAULT_PULL_OHMS = 10e3;
+
+/**
+ * The most channels a translator part is given by adding channels: eight, as in the octal
+ * parts of the trade (common practice). Channel 1 is pins A and B, channel k is Ak and Bk.
+ */
+export const MAX_CHANNELS = 8;
 
 /** Which way the translator passes the signal. */
 export type Direction = 'a-to-b' | 'b-to-a' | 'both' | 'open-drain';
@@ -35,12 +42,44 @@ export interface TranslatorLayout {
   readonly bPins: readonly string[];
   readonly direction: Direction;
   readonly partId: string;
+  /** The channel's pin ids on the translator: `A`/`B` for a new part, `Ak`/`Bk` for channel k of one already there. */
+  readonly a: string;
+  readonly b: string;
+  /** The channel's number, and whether the part is already in the design. */
+  readonly channel: number;
+  readonly existing: boolean;
   readonly newNetId: string;
   readonly newNetLabel: string;
 }
 
-/** The layout of a translator for `plan`, or why there is none. Reads only: works on a draft too. */
-export function layoutTranslator(design: Design, plan: TranslatorPlan): TranslatorLayout | Refusal {
+const profileFor = (direction: Direction) => (direction === 'open-drain' ? TRANSLATOR_OPEN_DRAIN : TRANSLATOR_PUSH_PULL);
+
+/** How many channels a translator part has: its pins `A`, `A2`, `A3`, … */
+export function channelsOf(part: Part): number {
+  let n = 0;
+  while (part.pins.some((p) => p.id === (n === 0 ? 'A' : `A${n + 1}`))) n++;
+  return n;
+}
+
+/**
+ * A translator part made by this fix that joins the same rails for the same kind of signal and
+ * has room for one more channel: the first such part, in the design's order.
+ */
+export function translatorWithRoom(design: Design, plan: TranslatorPlan, direction: Direction): Part | undefined {
+  return design.parts.find((part) => {
+    if (part.profile !== profileFor(direction) || part.rail !== plan.railA) return false;
+    const b = part.pins.find((p) => p.id === 'B');
+    if (b === undefined || b.rail !== plan.railB) return false;
+    const n = channelsOf(part);
+    return n >= 1 && n < MAX_CHANNELS && !part.pins.some((p) => p.id === `A${n + 1}` || p.id === `B${n + 1}`);
+  });
+}
+
+/**
+ * The layout of a translator for `plan`, or why there is none. With `into`, the signal takes the
+ * next channel of that translator part instead of a new part. Reads only: works on a draft too.
+ */
+export function layoutTranslator(design: Design, plan: TranslatorPlan, into?: string): TranslatorLayout | Refusal {
   const net = findNet(design, plan.net);
   if (net === undefined) return refuse(`There is no net ${plan.net}.`);
   if (plan.railA === plan.railB) return refuse('A translator joins two different rails.');
@@ -65,9 +104,15 @@ export function layoutTranslator(design: Design, plan: TranslatorPlan): Translat
   if (aPins.length === 0 || bPins.length === 0) return refuse(`Net ${plan.net} has no pins on both sides of the crossing.`);
   const direction: Direction =
     drivers > 0 && openDrain === drivers ? 'open-drain' : aDrives && bDrives ? 'both' : bDrives ? 'b-to-a' : 'a-to-b';
-  const partId = freshId('U', design.parts.map((p) => p.id));
   const newNetId = uniqueId(`${net.id}_${plan.railB}`, design.nets.map((n) => n.id));
-  return { net, aPins, bPins, direction, partId, newNetId, newNetLabel: `${netName(net)}_${plan.railB}` };
+  const halves = { net, aPins, bPins, direction, newNetId, newNetLabel: `${netName(net)}_${plan.railB}` };
+  if (into === undefined) {
+    return { ...halves, partId: freshId('U', design.parts.map((p) => p.id)), a: 'A', b: 'B', channel: 1, existing: false };
+  }
+  const host = translatorWithRoom(design, plan, direction);
+  if (host === undefined || host.id !== into) return refuse(`Translator ${into} has no free channel between ${plan.railA} and ${plan.railB} for this net.`);
+  const channel = channelsOf(host) + 1;
+  return { ...halves, partId: host.id, a: `A${channel}`, b: `B${channel}`, channel, existing: true };
 }
 
 function isRefusal(x: TranslatorLayout | Refusal): x is Refusal {
@@ -88,37 +133,58 @@ function centre(design: Design, keys: readonly string[]): { x: number; y: number
   return n === 0 ? { x: 0, y: 0 } : { x: x / n, y: y / n };
 }
 
-/** Halfway between the two sides' parts, moved down clear of any part already sitting exactly there. */
-function placeBetween(design: Design, layout: TranslatorLayout): { position: { x: number; y: number }; bOnRight: boolean } {
+/**
+ * Near the middle between the two sides' parts, on the first spot nearby where the new chip
+ * overlaps none (chipLayout's search, as the palette places chips); B faces the B side's parts.
+ */
+function placeBetween(design: Design, layout: TranslatorLayout, pins: readonly Pin[]): { x: number; y: number } {
   const a = centre(design, layout.aPins);
   const b = centre(design, layout.bPins);
-  const x = Math.round((a.x + b.x) / 2);
-  let y = Math.round((a.y + b.y) / 2);
-  const taken = new Set(design.parts.map((p) => `${p.position?.x ?? 0},${p.position?.y ?? 0}`));
-  while (taken.has(`${x},${y}`)) y += 80;
-  return { position: { x, y }, bOnRight: b.x >= a.x };
+  const middle = { x: Math.round((a.x + b.x) / 2), y: Math.round((a.y + b.y) / 2) };
+  return freePlace(design.parts, middle, chipSize({ id: layout.partId, label: '', rail: '', profile: '', pins: [...pins] }));
 }
 
-function translatorPart(design: Design, plan: TranslatorPlan, layout: TranslatorLayout): Part {
-  const { position, bOnRight } = placeBetween(design, layout);
-  const aSide = bOnRight ? 'left' : 'right';
-  const bSide = bOnRight ? 'right' : 'left';
-  const pin = (id: 'A' | 'B', role: Pin['role'], drive?: Pin['drive']): Pin => ({
-    id, role, ...(drive === undefined ? {} : { drive }), ...(id === 'B' ? { rail: plan.railB } : {}), side: id === 'A' ? aSide : bSide,
+/** Which sides A and B take: B towards the parts it moves to the new net. */
+function facing(design: Design, layout: TranslatorLayout): { aSide: Pin['side']; bSide: Pin['side'] } {
+  const bOnRight = centre(design, layout.bPins).x >= centre(design, layout.aPins).x;
+  return bOnRight ? { aSide: 'left', bSide: 'right' } : { aSide: 'right', bSide: 'left' };
+}
+
+/** The two pins of one channel: A on the part's rail, B on rail B; roles from the direction. */
+function channelPins(layout: TranslatorLayout, railB: string, aSide: Pin['side'], bSide: Pin['side']): [Pin, Pin] {
+  const pin = (id: string, onB: boolean, role: Pin['role'], drive?: Pin['drive']): Pin => ({
+    id, role, ...(drive === undefined ? {} : { drive }), ...(onB ? { rail: railB } : {}), side: onB ? bSide : aSide,
   });
-  const pins: Pin[] =
-    layout.direction === 'open-drain' ? [pin('A', 'bidir', 'open-drain'), pin('B', 'bidir', 'open-drain')]
-    : layout.direction === 'both' ? [pin('A', 'bidir'), pin('B', 'bidir')]
-    : layout.direction === 'b-to-a' ? [pin('A', 'output'), pin('B', 'input')]
-    : [pin('A', 'input'), pin('B', 'output')];
+  const { a, b } = layout;
+  switch (layout.direction) {
+    case 'open-drain': return [pin(a, false, 'bidir', 'open-drain'), pin(b, true, 'bidir', 'open-drain')];
+    case 'both': return [pin(a, false, 'bidir'), pin(b, true, 'bidir')];
+    case 'b-to-a': return [pin(a, false, 'output'), pin(b, true, 'input')];
+    default: return [pin(a, false, 'input'), pin(b, true, 'output')];
+  }
+}
+
+const LABEL_PREFIX = 'Dual-rail translator for ';
+
+function translatorPart(design: Design, plan: TranslatorPlan, layout: TranslatorLayout): Part {
+  const { aSide, bSide } = facing(design, layout);
+  const pins = channelPins(layout, plan.railB, aSide, bSide);
   return {
     id: layout.partId,
-    label: `Dual-rail translator for ${netName(layout.net)}`,
+    label: `${LABEL_PREFIX}${netName(layout.net)}`,
     rail: plan.railA,
-    profile: layout.direction === 'open-drain' ? TRANSLATOR_OPEN_DRAIN : TRANSLATOR_PUSH_PULL,
-    position,
+    profile: profileFor(layout.direction),
+    position: placeBetween(design, layout, pins),
     pins,
   };
+}
+
+/** Adds the layout's channel to a translator part already in the draft, its pins on the sides of channel 1's. */
+function addChannel(part: Draft<Part>, plan: TranslatorPlan, layout: TranslatorLayout): void {
+  const sideOf = (id: string) => part.pins.find((p) => p.id === id)?.side;
+  part.pins.push(...channelPins(layout, plan.railB, sideOf('A') ?? 'left', sideOf('B') ?? 'right'));
+  // A label this fix wrote names the nets it carries; one the user wrote is left alone.
+  if (part.label.startsWith(LABEL_PREFIX)) part.label = `${part.label}, ${netName(layout.net)}`;
 }
 
 /**
@@ -159,14 +225,13 @@ function splitPulls(net: Net, plan: TranslatorPlan, direction: Direction): { a?:
   return pull.to === plan.railB ? { b: pull } : { a: pull };
 }
 
-/** Split the net and insert the translator into a draft. */
-export function insertTranslator(draft: Draft<Design>, plan: TranslatorPlan): Refusal | void {
+/** Split the net and insert the translator (or, with `into`, a new channel of that one) into a draft. */
+export function insertTranslator(draft: Draft<Design>, plan: TranslatorPlan, into?: string): Refusal | void {
   const design = draft as Design;
-  const layout = layoutTranslator(design, plan);
+  const layout = layoutTranslator(design, plan, into);
   if (isRefusal(layout)) return layout;
-  const part = translatorPart(design, plan, layout);
-  const xa = `${part.id}.A`;
-  const xb = `${part.id}.B`;
+  const xa = `${layout.partId}.${layout.a}`;
+  const xb = `${layout.partId}.${layout.b}`;
   const net = draft.nets.find((n) => n.id === plan.net)!;
   const route = splitRoute(net, new Set(layout.bPins), xa, xb);
   const pulls = splitPulls(net, plan, layout.direction);
@@ -179,7 +244,8 @@ export function insertTranslator(draft: Draft<Design>, plan: TranslatorPlan): Re
     ...(net.maxRiseTime === undefined ? {} : { maxRiseTime: net.maxRiseTime }),
     ...(route.b === undefined || route.b.length === 0 ? {} : { route: route.b }),
   };
-  draft.parts.push(part);
+  if (layout.existing) addChannel(draft.parts.find((p) => p.id === layout.partId)!, plan, layout);
+  else draft.parts.push(translatorPart(design, plan, layout));
   net.pins = [...layout.aPins, xa];
   if (pulls.a === undefined) delete net.pull;
   else if (pulls.a !== net.pull) net.pull = { ...pulls.a };
@@ -198,19 +264,38 @@ const DIRECTION_TEXT: Readonly<Record<Direction, string>> = {
   'open-drain': 'bidirectional open-drain',
 };
 
-/** The fix that inserts a translator, or undefined when the net cannot be split that way. */
-export function translatorFix(design: Design, finding: string, plan: TranslatorPlan, why: string): QuickFix | undefined {
+/**
+ * The fixes that put a translator into the net: the next channel of a translator the design
+ * already has between the same rails (first: one part rather than many), and a new translator
+ * part. None when the net cannot be split that way.
+ */
+export function translatorFixes(design: Design, finding: string, plan: TranslatorPlan, why: string): QuickFix[] {
   const layout = layoutTranslator(design, plan);
-  if (isRefusal(layout)) return undefined;
+  if (isRefusal(layout)) return [];
   const pulled = layout.direction === 'open-drain' ? ', each side pulled up to its own rail' : '';
-  return {
+  const moves = `moves ${layout.bPins.join(', ')} to a new net ${layout.newNetLabel}${pulled}, so that ${why}.`;
+  const fixes: QuickFix[] = [];
+  const host = translatorWithRoom(design, plan, layout.direction);
+  const channel = host === undefined ? undefined : layoutTranslator(design, plan, host.id);
+  if (host !== undefined && channel !== undefined && !isRefusal(channel)) {
+    fixes.push({
+      id: 'translator-channel',
+      finding,
+      title: `Use channel ${channel.channel} of translator ${host.id} on ${netName(layout.net)}`,
+      sentence:
+        `Adds channel ${channel.channel} (${channel.a} on ${plan.railA}, ${channel.b} on ${plan.railB}) to ${host.id}, ` +
+        `the ${DIRECTION_TEXT[layout.direction]} translator already between these rails, and ${moves}`,
+      apply: (draft) => insertTranslator(draft, plan, host.id),
+    });
+  }
+  fixes.push({
     id: 'translator',
     finding,
     title: `Insert translator ${layout.partId} on ${netName(layout.net)}`,
     sentence:
       `Inserts ${layout.partId}, a ${DIRECTION_TEXT[layout.direction]} dual-rail translator with side A on ${plan.railA} ` +
-      `and side B on ${plan.railB}, and moves ${layout.bPins.join(', ')} to a new net ${layout.newNetLabel}${pulled}, ` +
-      `so that ${why}.`,
+      `and side B on ${plan.railB}, and ${moves}`,
     apply: (draft) => insertTranslator(draft, plan),
-  };
+  });
+  return fixes;
 }
