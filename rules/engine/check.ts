@@ -127,14 +127,13 @@ function checkState(ctx: StateContext, index: DesignIndex, t: Tables): void {
   const off = ctx.state.off;
   for (const key of index.lone) {
     const at = index.pins.get(key)!;
-    let found: readonly Finding[];
-    if (allOnLone !== undefined && !off.has(at.rail) && (at.pullTo === undefined || !off.has(at.pullTo))) {
-      const was = allOnLone.get(key);
-      if (was === undefined) continue;
-      found = was.map((f) => restampFinding(f, ALL_ON, ctx.state, key, null));
-    } else {
-      found = checkLonePin(ctx, pinView(at, ctx.rails));
-    }
+    const asAllOn = allOnLone !== undefined && !off.has(at.rail) && (at.pullTo === undefined || !off.has(at.pullTo));
+    const was = asAllOn ? allOnLone.get(key) : undefined;
+    if (asAllOn && was === undefined) continue;
+    // Re-stamped when each id is placed at the pin (`rule:PART.PIN:all-on…`), the place re-stamping writes.
+    const found = was !== undefined && was.every((f) => f.id.startsWith(`${f.rule}:${key}:${ALL_ON}`))
+      ? was.map((f) => restampFinding(f, ALL_ON, ctx.state, key, null))
+      : checkLonePin(ctx, pinView(at, ctx.rails));
     if (found.length > 0) {
       lone.set(key, found);
       count(t.summary, found, 1);
