@@ -23,6 +23,13 @@ export type WireEdge = Edge<{ net: string; label: string | null }, 'wire'>;
  */
 export const MOVING_CHIP = 'rc-moving';
 export const MOVING_WIRE = 'rc-wire-moving';
+/**
+ * Above this many chips in one drag the marks are left off: every layer costs the software
+ * compositor a pass over its area on each frame, which outweighs the raster it saves.
+ */
+export const MOVING_LAYERS_MAX = 24;
+
+const layered = (ids: { readonly size: number } | null | undefined) => ids != null && ids.size > 0 && ids.size <= MOVING_LAYERS_MAX;
 
 interface NodeEntry {
   readonly key: string;
@@ -65,11 +72,12 @@ export function createFlowDeriver() {
   function nodes(parts: readonly Part[], selectedParts: readonly string[], drag: ReadonlyMap<string, XY> | null): ChipNode[] {
     const selected = new Set(selectedParts);
     const seen = new Set<string>();
+    const marksChips = layered(drag);
     const out = parts.map((part) => {
       seen.add(part.id);
       const pos = drag?.get(part.id) ?? part.position ?? { x: 0, y: 0 };
       const isSelected = selected.has(part.id);
-      const isMoving = drag?.has(part.id) === true;
+      const isMoving = marksChips && drag!.has(part.id);
       // The drawn size, given rather than measured: nodes outside the view are never rendered
       // (onlyRenderVisibleElements), yet the first fitView must see them; and a node of known
       // size lets the browser contain it (styles.css, contain: strict).
@@ -104,10 +112,11 @@ export function createFlowDeriver() {
     const selected = new Set(selectedWires);
     const seen = new Set<string>();
     const out: WireEdge[] = [];
+    const marked = layered(moving) ? moving : null;
     const movingOf = (net: Net): string => {
-      if (moving === null || moving.size === 0) return '';
+      if (marked === null) return '';
       let key = '';
-      for (const pin of net.pins) if (moving.has(splitPinKey(pin).part)) key += `${pin}|`;
+      for (const pin of net.pins) if (marked.has(splitPinKey(pin).part)) key += `${pin}|`;
       return key;
     };
     for (const net of nets) {
@@ -134,7 +143,7 @@ export function createFlowDeriver() {
       const made = wires.map(([a, b], k): WireEdge => {
         const s = splitPinKey(a);
         const t = splitPinKey(b);
-        const moves = moving !== null && (moving.has(s.part) || moving.has(t.part));
+        const moves = marked !== null && (marked.has(s.part) || marked.has(t.part));
         return {
           id: ids[k]!,
           type: 'wire',

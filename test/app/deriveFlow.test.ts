@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { readFileSync } from 'node:fs';
-import { createFlowDeriver, deriveOnce, MOVING_CHIP, MOVING_WIRE } from '../../app/canvas/deriveFlow.ts';
+import { createFlowDeriver, deriveOnce, MOVING_CHIP, MOVING_LAYERS_MAX, MOVING_WIRE } from '../../app/canvas/deriveFlow.ts';
 import { addWaiver, connectPins, editPart, setNetLabel, setPartLabel, setPartProfile } from '../../app/store/commands/index.ts';
 import { chipSize } from '../../app/canvas/chipLayout.ts';
 import type { Pin } from '../../rules/model/schema.ts';
@@ -87,6 +87,16 @@ describe('nodes and edges from the design', () => {
     const e2 = flow.edges(h.design.nets, [], null);
     expect(e2.map((e) => e.className)).toEqual([undefined, undefined, undefined]);
     expect(flow.nodes(h.design.parts, [], null).every((node) => node.className === undefined)).toBe(true);
+  });
+
+  it(`a drag of more than ${MOVING_LAYERS_MAX} chips marks none (the layers would cost more than they save)`, () => {
+    const many = Array.from({ length: MOVING_LAYERS_MAX + 1 }, (_, k) => part(`P${k}`, '5v0', '74hc', [output('Y')], { position: { x: k * 240, y: 0 } }));
+    const d = bench({ parts: many, nets: [net('A', ['P0.Y', 'P1.Y'])] });
+    const flow = createFlowDeriver();
+    const ids = new Set(many.map((p) => p.id));
+    expect(flow.edges(d.nets, [], ids).every((e) => e.className === undefined)).toBe(true);
+    expect(flow.nodes(d.parts, [], new Map(many.map((p) => [p.id, { x: 1, y: 2 }]))).every((n) => n.className === undefined)).toBe(true);
+    expect(flow.edges(d.nets, [], new Set(['P0'])).map((e) => e.className)).toEqual([MOVING_WIRE]);
   });
 
   // Sizes as styles.css draws them (border 3 + header 41, rows of 20 with 6 of padding, strips of 30, border 1).
