@@ -195,3 +195,21 @@ test('a rule with many findings lists the first 60 and shows the rest on request
   await expect(rows).toHaveCount(75);
   await expect(page.getByTestId('more-floating-input')).toHaveCount(0);
 });
+
+test('the details panel fits its column: rails, power states and a part\'s fields stay inside it', async ({ page }) => {
+  await page.goto('/');
+  await expect(page.locator('.react-flow__node').first()).toBeVisible();
+  const outside = () => page.locator('.rc-details').evaluate((panel) => {
+    const edge = panel.getBoundingClientRect().right + 0.5;
+    return [...panel.querySelectorAll('input, select, button, table')]
+      .filter((e) => e.getBoundingClientRect().width > 0 && e.getBoundingClientRect().right > edge)
+      .map((e) => e.outerHTML.slice(0, 60));
+  });
+  await page.getByText('Rails', { exact: true }).click();
+  await page.getByText('Power states', { exact: true }).click();
+  await expect(page.locator('.rc-rail-row').first()).toBeVisible();
+  expect(await outside()).toEqual([]);
+  await page.locator('.react-flow__node[data-id="U1"] .rc-chip-head').click();
+  await expect(page.locator('.rc-details')).toContainText('Irrigation controller');
+  expect(await outside()).toEqual([]);
+});
