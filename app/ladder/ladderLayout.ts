@@ -4,6 +4,7 @@
  * margins, the receivers.
  */
 import type { Ladder, LadderMargin } from '../../rules/report/ladder.ts';
+import { onAxis } from '../../rules/report/ladderLayout.ts';
 
 export const AXIS_WIDTH = 64;
 export const DRIVER_WIDTH = 180;
@@ -36,7 +37,7 @@ export function layoutLadder(ladder: Ladder, height: number): LadderLayout {
   const plotTop = HEADER;
   const plotBottom = height - FOOTER;
   const span = plotBottom - plotTop;
-  const y = (v: number) => plotTop + ((ladder.top - v) / ladder.top) * span;
+  const y = (v: number) => plotTop + ((ladder.top - onAxis(v, ladder.top)) / ladder.top) * span;
   const driverX = ladder.drivers.map((_, k) => AXIS_WIDTH + k * DRIVER_WIDTH);
   const lanesStart = AXIS_WIDTH + ladder.drivers.length * DRIVER_WIDTH;
   const pairs: { driver: string; receiver: string; margins: LadderMargin[] }[] = [];

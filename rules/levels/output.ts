@@ -36,7 +36,9 @@ export function largestTestCurrent(points: readonly OutputPoint[] | undefined): 
  * `vdd`: the entry with the smallest test current that is at least the load. Above the largest
  * test current there is no guarantee: the straight line through the last two points,
  * extrapolated to the load, never better than the last guaranteed point; with a single point,
- * that point. Undefined for an empty list.
+ * that point. The line stops at the output's own rails, 0 V for a high level and `vdd` for a low
+ * one (an output stage cannot swing beyond its supply: common practice), so that test points
+ * a hair apart never extrapolate to astronomical or infinite volts. Undefined for an empty list.
  */
 export function outputLevel(
   points: readonly OutputPoint[] | undefined,
@@ -56,6 +58,8 @@ export function outputLevel(
   const vPrev = levelAt(prev.v, vdd);
   const di = last.i - prev.i;
   const line = di > 0 ? vLast + ((vLast - vPrev) / di) * (load - last.i) : vLast;
-  const v = sense === 'high' ? Math.min(line, vLast) : Math.max(line, vLast);
+  const v = sense === 'high'
+    ? Math.max(Number.isNaN(line) ? -Infinity : Math.min(line, vLast), Math.min(0, vLast))
+    : Math.min(Number.isNaN(line) ? Infinity : Math.max(line, vLast), Math.max(vdd, vLast));
   return { v, atCurrent: load, estimate: true };
 }

@@ -228,10 +228,23 @@ const MAX_STEPS = 14;
 /** Room above the highest value drawn, as a fraction of it. */
 const HEADROOM = 0.05;
 
+/**
+ * The highest axis drawn, volts. Levels come from the design's numbers, and a VOH extrapolated
+ * from test points of absurd currents can be astronomically large: the axis stops here and
+ * such a level sits at its top (ladderLayout.ts, `onAxis`), its label printing the number.
+ */
+const AXIS_CEILING = 1e6;
+
+/** A 1-2-5 step of the right decade when the fixed ones would need too many marks. */
+function decadeStep(want: number): number {
+  const decade = 10 ** Math.floor(Math.log10(want / MAX_STEPS));
+  return [1, 2, 5, 10].map((m) => m * decade).find((s) => Math.ceil(want / s - 1e-9) <= MAX_STEPS) ?? 10 * decade;
+}
+
 /** The axis' top and marks for values up to `highest`. */
 export function ladderAxis(highest: number): { top: number; ticks: number[] } {
-  const want = Math.max(highest, 0.1) * (1 + HEADROOM);
-  const step = STEPS.find((s) => Math.ceil(want / s - 1e-9) <= MAX_STEPS) ?? STEPS[STEPS.length - 1]!;
+  const want = Math.min(Math.max(Number.isNaN(highest) ? 0 : highest, 0.1), AXIS_CEILING) * (1 + HEADROOM);
+  const step = STEPS.find((s) => Math.ceil(want / s - 1e-9) <= MAX_STEPS) ?? decadeStep(want);
   const n = Math.ceil(want / step - 1e-9);
   // Multiples built from integers, so that 0.1 × 3 prints as 0.3.
   const ticks = Array.from({ length: n + 1 }, (_, k) => Number((k * step).toFixed(2)));

@@ -19,6 +19,16 @@ export function separate(wishes: readonly number[], gap = 13): number[] {
   return placed;
 }
 
+/**
+ * A voltage as a ladder draws it: on its axis, 0 V to `top`. A level beyond (a guaranteed VOH
+ * extrapolated below 0 V from test points of absurdly small currents, say) sits at the axis'
+ * end; its label still prints the number itself.
+ */
+export function onAxis(v: number, top: number): number {
+  if (Number.isNaN(v)) return 0;
+  return Math.min(top, Math.max(0, v));
+}
+
 /** A level as a ladder prints it: engineering notation, four digits (a rail's 3.135 V stays 3.135 V). */
 export function volts(v: number): string {
   return formatQuantity(v, 'V', 4);

@@ -41,6 +41,20 @@ describe('outputLevel', () => {
     expect(r.v).toBe(2.4);
   });
 
+  // An output cannot swing beyond its own supply rails (common practice): the line stops at 0 V
+  // high and at VDD low, also when test points a hair apart would send it to ±Infinity.
+  it.each([
+    ['74HC high far above its rows: 0 V, not below', voh, 1, 4.5, 'high', 0],
+    ['74HC low far above its rows: VDD, not above', vol, 1, 4.5, 'low', 4.5],
+    ['rows 1e-300 A apart, high: 0 V, not -Infinity', [{ v: 3, i: 1e-300 }, { v: 2, i: 2e-300 }], 1e-3, 3.3, 'high', 0],
+    ['rows 1e-300 A apart, low: VDD, not +Infinity', [{ v: 0.2, i: 1e-300 }, { v: 0.4, i: 2e-300 }], 1e-3, 3.3, 'low', 3.3],
+    ['a last row already below 0 V stays as it is (never better)', [{ v: 0.5, i: 1e-3 }, { v: -0.5, i: 2e-3 }], 1, 3.3, 'high', -0.5],
+  ] as const)('%s', (_name, points, load, vdd, sense, v) => {
+    const r = outputLevel(points, load, vdd, sense)!;
+    expect(r.v).toBe(v);
+    expect(r.estimate).toBe(true);
+  });
+
   it('unsorted rows are read in order of current', () => {
     expect(outputLevel([vol[1]!, vol[0]!], 1e-6, 5, 'low')!.v).toBe(0.1);
   });

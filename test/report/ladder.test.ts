@@ -125,6 +125,11 @@ describe('ladderAxis', () => {
     [1.26, 1.4, 0.1],
     [15.75, 18, 2],
     [0, 0.2, 0.1],
+    // Beyond the fixed steps (a level extrapolated from absurd test currents): 1-2-5 steps of the decade.
+    [250, 280, 20],
+    [1e9, 1.1e6, 1e5],
+    [Infinity, 1.1e6, 1e5],
+    [NaN, 0.2, 0.1],
   ])('highest %f V → top %f V in steps of %f V', (highest, top, step) => {
     const axis = ladderAxis(highest);
     expect(axis.top).toBe(top);

@@ -56,6 +56,16 @@ const OUT: Readonly<Record<Side, Point>> = { left: { x: -1, y: 0 }, right: { x: 
 /** The outward direction of a side. */
 export const normalOf = (side: Side): Point => OUT[side];
 
+/**
+ * How far from the origin the diagram places a part: a design may put one anywhere a finite
+ * number allows, but a box at 1e308 would overflow its own far edge to Infinity, and with it the
+ * drawing's scale. Such a part is drawn at this distance instead (a billion canvas units: far
+ * beyond any real drawing, so the placement of every sane design is untouched).
+ */
+export const FARTHEST = 1e9;
+
+const onCanvas = (v: number): number => Math.max(-FARTHEST, Math.min(FARTHEST, v));
+
 /** A part's box and its pin anchors. */
 export function partBox(part: Part): PartBox {
   const by: Record<Side, Pin[]> = { left: [], right: [], top: [], bottom: [] };
@@ -63,7 +73,8 @@ export function partBox(part: Part): PartBox {
   const rows = Math.max(by.left.length, by.right.length, 1);
   const topStrip = by.top.length > 0 ? CHIP.strip : 0;
   const bottomStrip = by.bottom.length > 0 ? CHIP.strip : 0;
-  const { x, y } = part.position ?? { x: 0, y: 0 };
+  const x = onCanvas(part.position?.x ?? 0);
+  const y = onCanvas(part.position?.y ?? 0);
   const width = CHIP.width;
   const height = topStrip + CHIP.header + CHIP.pad + rows * CHIP.row + CHIP.pad + bottomStrip;
   const rowY = (k: number) => y + topStrip + CHIP.header + CHIP.pad + (k + 0.5) * CHIP.row;
@@ -125,27 +136,45 @@ interface Rect {
 const CLEARANCE = 5;
 const CHANNEL = 10;
 const CELL = 240;
-/** Grid cells are keyed by one number; designs reach nowhere near this many cells across. */
+/**
+ * Cells are counted from the origin up to this many either way (±63 million units); a box
+ * beyond shares the outermost cell. A design may place a part anywhere a finite number allows,
+ * and a cell index that large would no longer step by one (x + 1 === x) nor key uniquely.
+ */
+const MAX_CELL = 1 << 18;
+/** Grid cells are keyed by one number, `i * ROW + j`, unique for indices within ±MAX_CELL. */
 const ROW = 1 << 20;
+
+const cellOf = (v: number): number => Math.max(-MAX_CELL, Math.min(MAX_CELL, Math.floor(v / CELL)));
+
+interface Cell {
+  readonly i: number;
+  readonly j: number;
+  readonly rects: Rect[];
+}
 
 /**
  * Part boxes in a coarse grid, so that a wire asks only the boxes near its segments. Queries
  * stamp the boxes they return instead of building sets: routing a thousand-part design asks
- * this some hundred thousand times.
+ * this some hundred thousand times. A query wider than the grid holds cells walks the occupied
+ * cells instead of the rectangle's, so that a wire between two far-apart parts costs no more
+ * than the design has parts.
  */
 export class BoxIndex {
-  private readonly cells = new Map<number, Rect[]>();
+  private readonly cells = new Map<number, Cell>();
   private stamp = 0;
 
   constructor(boxes: readonly PartBox[]) {
     for (const b of boxes) {
       const r: Rect = { x0: b.x - CLEARANCE, y0: b.y - CLEARANCE, x1: b.x + b.width + CLEARANCE, y1: b.y + b.height + CLEARANCE, seen: 0 };
-      for (let i = Math.floor(r.x0 / CELL); i <= Math.floor(r.x1 / CELL); i++) {
-        for (let j = Math.floor(r.y0 / CELL); j <= Math.floor(r.y1 / CELL); j++) {
+      const i1 = cellOf(r.x1);
+      const j1 = cellOf(r.y1);
+      for (let i = cellOf(r.x0); i <= i1; i++) {
+        for (let j = cellOf(r.y0); j <= j1; j++) {
           const key = i * ROW + j;
-          const list = this.cells.get(key);
-          if (list === undefined) this.cells.set(key, [r]);
-          else list.push(r);
+          const cell = this.cells.get(key);
+          if (cell === undefined) this.cells.set(key, { i, j, rects: [r] });
+          else cell.rects.push(r);
         }
       }
     }
@@ -158,19 +187,24 @@ export class BoxIndex {
 
   /** Calls `visit` for each box not yet visited in query `stamp` whose cells meet the rectangle. */
   each(stamp: number, x0: number, y0: number, x1: number, y1: number, visit: (r: Rect) => void): void {
-    const i1 = Math.floor(x1 / CELL);
-    const j0 = Math.floor(y0 / CELL);
-    const j1 = Math.floor(y1 / CELL);
-    for (let i = Math.floor(x0 / CELL); i <= i1; i++) {
-      for (let j = j0; j <= j1; j++) {
-        const list = this.cells.get(i * ROW + j);
-        if (list === undefined) continue;
-        for (const r of list) {
-          if (r.seen === stamp) continue;
-          r.seen = stamp;
-          visit(r);
-        }
+    const i0 = cellOf(x0);
+    const i1 = cellOf(x1);
+    const j0 = cellOf(y0);
+    const j1 = cellOf(y1);
+    const take = (cell: Cell | undefined) => {
+      if (cell === undefined) return;
+      for (const r of cell.rects) {
+        if (r.seen === stamp) continue;
+        r.seen = stamp;
+        visit(r);
       }
+    };
+    if ((i1 - i0 + 1) * (j1 - j0 + 1) > this.cells.size) {
+      for (const cell of this.cells.values()) if (cell.i >= i0 && cell.i <= i1 && cell.j >= j0 && cell.j <= j1) take(cell);
+      return;
+    }
+    for (let i = i0; i <= i1; i++) {
+      for (let j = j0; j <= j1; j++) take(this.cells.get(i * ROW + j));
     }
   }
 }

@@ -8,7 +8,7 @@
 import type { jsPDF } from 'jspdf';
 import type { CheckResult } from '../../engine/types.ts';
 import { ladderFor, type Ladder, type LadderDriver, type LadderMargin, type LadderReceiver } from '../ladder.ts';
-import { marginVolts, separate, STATUS_TEXT, volts } from '../ladderLayout.ts';
+import { marginVolts, onAxis, separate, STATUS_TEXT, volts } from '../ladderLayout.ts';
 import type { Crossing, Report } from '../reportSchema.ts';
 import { addPage, bottomLimit, contentWidth, fitText, paragraph, sectionHeading, type Ctx } from './page.ts';
 import {
@@ -65,6 +65,8 @@ export function ladderRows(rows: readonly Crossing[], cap = LADDER_CAP): { rows:
 
 /** 45° hatching inside a rectangle; `cross` adds the other diagonal. */
 function hatch(doc: jsPDF, x: number, y: number, w: number, h: number, step: number, cross: boolean): void {
+  // Drawn areas are on the page (onAxis); anything else would make this loop run away.
+  if (!(w > 0 && h > 0 && step > 0 && (w + h) / step < 10_000)) return;
   for (let t = -h; t < w; t += step) {
     const lo = Math.max(0, -t);
     const hi = Math.min(h, w - t);
@@ -228,7 +230,7 @@ function drawLadder(ctx: Ctx, ladder: Ladder, row: Crossing, x0: number, y0: num
 
   const plotTop = y0 + 40;
   const plotBottom = y0 + CELL_H - 10 - shown.length * KEY_STEP - 6;
-  const yOf = (v: number) => plotTop + ((ladder.top - v) / ladder.top) * (plotBottom - plotTop);
+  const yOf = (v: number) => plotTop + ((ladder.top - onAxis(v, ladder.top)) / ladder.top) * (plotBottom - plotTop);
 
   // The labels first: their widths set the columns.
   const dLabels = drivers.flatMap((d, k) => driverLabels(d, many.d ? `D${k + 1} ` : '', yOf));
