@@ -64,12 +64,7 @@ export function resolution(design: Design, part: Part, pin: Pin): Resolution {
   return entryOf(design, part, pin);
 }
 
-/** The pin in a power state, powered or not; the same object while nothing it depends on changes. */
-export function resolvedView(design: Design, part: Part, pin: Pin, powered: boolean): PinView {
-  return viewOf(entryOf(design, part, pin), powered);
-}
-
-/** A resolution's view, powered or not: made once, then the same object. */
+/** A resolution's view in a power state, powered or not: made once, then the same object while nothing it depends on changes. */
 export function viewOf(entry: Resolution, powered: boolean): PinView {
   const k = powered ? 1 : 0;
   let view = entry.views[k];

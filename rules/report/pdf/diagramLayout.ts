@@ -62,7 +62,7 @@ export const normalOf = (side: Side): Point => OUT[side];
  * drawing's scale. Such a part is drawn at this distance instead (a billion canvas units: far
  * beyond any real drawing, so the placement of every sane design is untouched).
  */
-export const FARTHEST = 1e9;
+const FARTHEST = 1e9;
 
 const onCanvas = (v: number): number => Math.max(-FARTHEST, Math.min(FARTHEST, v));
 

@@ -12,30 +12,17 @@ import { describe, expect, it } from 'vitest';
 import { exampleDesign } from '../../../app/example.ts';
 import type { Design } from '../../../rules/model/schema.ts';
 import { link, rail, rail3v3, rail5v0, scenario } from '../../support/build.ts';
-import { applyAndUndo, offered } from './support.ts';
+import { applyAndUndo, type FixCase, offered, partOf, pinOf } from './support.ts';
 import { harness } from '../harness.ts';
 import { applyFix, fixesFor } from '../../../app/store/commands/fixes/index.ts';
 import { setPartProfile } from '../../../app/store/commands/index.ts';
 
 const greenhouse = exampleDesign();
-const partOf = (d: Design, id: string) => d.parts.find((p) => p.id === id)!;
-const pinOf = (d: Design, key: string) => {
-  const [p, q] = key.split('.');
-  return partOf(d, p!).pins.find((x) => x.id === q)!;
-};
 
 /** A 5.3 V ± 3 % rail: up to 5.459 V, above a 5 V ± 5 % CMOS input's 4.75 + 0.5 = 5.25 V, below 5.5 V. */
 const rail5v3 = rail('5v3', 5.3, { tolerance: 0.03 });
 
-interface Case {
-  name: string;
-  start: Design;
-  finding: string;
-  fix: string;
-  expect: (d: Design) => void;
-}
-
-const cases: Case[] = [
+const cases: FixCase[] = [
   {
     name: 'greenhouse VALVE_EN: U3 from 74hc to 74hct (2.0 V ≤ 3.135 − 0.2 V)',
     start: greenhouse, finding: 'level-high:VALVE_EN:all-on:U1.VALVE_EN>U3.EN', fix: 'ttl-inputs',

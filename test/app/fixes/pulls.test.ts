@@ -13,14 +13,9 @@ import { exampleDesign } from '../../../app/example.ts';
 import { CONTENTION_NOTE } from '../../../app/store/commands/fixes/index.ts';
 import type { Design } from '../../../rules/model/schema.ts';
 import { design, input, net, output, part, rail3v3, rail5v0 } from '../../support/build.ts';
-import { applyAndUndo, offered } from './support.ts';
+import { applyAndUndo, type FixCase, netOf, offered, pinOf } from './support.ts';
 
 const greenhouse = exampleDesign();
-const netOf = (d: Design, id: string) => d.nets.find((n) => n.id === id)!;
-const pinOf = (d: Design, key: string) => {
-  const [p, q] = key.split('.');
-  return d.parts.find((x) => x.id === p)!.pins.find((x) => x.id === q)!;
-};
 
 /** The largest IEC 60063 E24 value at or below r (E24 mantissas transcribed from IEC 60063). */
 function e24Below(r: number): number {
@@ -57,15 +52,7 @@ const unused = design({
   nets: [net('N', ['D.Y', 'U.A'])],
 });
 
-interface Case {
-  name: string;
-  start: Design;
-  finding: string;
-  fix: string;
-  expect: (d: Design) => void;
-}
-
-const cases: Case[] = [
+const cases: FixCase[] = [
   {
     name: `greenhouse TANK_LOW (missing-pull): ${tankLow} Ω to 3v3`,
     start: greenhouse, finding: 'missing-pull:TANK_LOW:all-on', fix: 'pull-up',

@@ -9,6 +9,23 @@ import { validateDesign } from '../../../rules/model/reader.ts';
 import type { Design } from '../../../rules/model/schema.ts';
 import { harness, type Harness } from '../harness.ts';
 
+/** One row of a fix table: apply `fix` for `finding` on `start`, then look at the design. */
+export interface FixCase {
+  name: string;
+  start: Design;
+  finding: string;
+  fix: string;
+  expect: (d: Design) => void;
+}
+
+/** The part, net or pin of a design by id (`PART.PIN` for a pin); the cases know it is there. */
+export const partOf = (d: Design, id: string) => d.parts.find((p) => p.id === id)!;
+export const netOf = (d: Design, id: string) => d.nets.find((n) => n.id === id)!;
+export const pinOf = (d: Design, key: string) => {
+  const [part, pin] = key.split('.');
+  return partOf(d, part!).pins.find((x) => x.id === pin)!;
+};
+
 export interface Applied {
   readonly h: Harness;
   readonly fix: QuickFix;

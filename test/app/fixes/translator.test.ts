@@ -12,7 +12,7 @@ import { exampleDesign } from '../../../app/example.ts';
 import type { Design, Part } from '../../../rules/model/schema.ts';
 import { chipSize } from '../../../app/canvas/chipLayout.ts';
 import { design, input, net, output, part, rail1v8, rail3v3, rail5v0, scenario } from '../../support/build.ts';
-import { applyAndUndo, offered } from './support.ts';
+import { applyAndUndo, type FixCase, netOf, offered, partOf } from './support.ts';
 import { harness } from '../harness.ts';
 import { applyFix, fixesFor } from '../../../app/store/commands/fixes/index.ts';
 import { MAX_CHANNELS } from '../../../app/store/commands/fixes/translator.ts';
@@ -20,24 +20,15 @@ import { deleteSelection } from '../../../app/store/commands/index.ts';
 
 const greenhouse = exampleDesign();
 
-interface Case {
-  name: string;
-  start: Design;
-  finding: string;
-  expect: (d: Design) => void;
-}
 
-const pinsOf = (d: Design, id: string) => d.nets.find((n) => n.id === id);
-const partOf = (d: Design, id: string) => d.parts.find((p) => p.id === id);
-
-const cases: Case[] = [
+const cases: Omit<FixCase, 'fix'>[] = [
   {
     name: 'greenhouse VALVE_EN (level-high, 3.3 V MCU into 5 V 74HC): one-way, A on 3v3',
     start: greenhouse,
     finding: 'level-high:VALVE_EN:all-on:U1.VALVE_EN>U3.EN',
     expect(d) {
-      expect(pinsOf(d, 'VALVE_EN')?.pins).toEqual(['U1.VALVE_EN', 'U8.A']);
-      expect(pinsOf(d, 'VALVE_EN_5v0')).toMatchObject({ label: 'VALVE_EN_5v0', pins: ['U8.B', 'U3.EN'] });
+      expect(netOf(d, 'VALVE_EN')?.pins).toEqual(['U1.VALVE_EN', 'U8.A']);
+      expect(netOf(d, 'VALVE_EN_5v0')).toMatchObject({ label: 'VALVE_EN_5v0', pins: ['U8.B', 'U3.EN'] });
       // The new half comes right after the original, so that the report keeps them together.
       expect(d.nets.map((n) => n.id).indexOf('VALVE_EN_5v0')).toBe(d.nets.map((n) => n.id).indexOf('VALVE_EN') + 1);
       const box = (p: Part) => ({ ...p.position!, ...chipSize(p) });
@@ -60,8 +51,8 @@ const cases: Case[] = [
     start: greenhouse,
     finding: 'overvoltage:DISP_RX:all-on:U1.DISP_RX',
     expect(d) {
-      expect(pinsOf(d, 'DISP_RX')?.pins).toEqual(['U4.TX', 'U8.A']);
-      expect(pinsOf(d, 'DISP_RX_3v3')?.pins).toEqual(['U8.B', 'U1.DISP_RX']);
+      expect(netOf(d, 'DISP_RX')?.pins).toEqual(['U4.TX', 'U8.A']);
+      expect(netOf(d, 'DISP_RX_3v3')?.pins).toEqual(['U8.B', 'U1.DISP_RX']);
       expect(partOf(d, 'U8')).toMatchObject({ rail: '5v0', profile: 'xlat-side' });
       expect(partOf(d, 'U8')?.pins.map((p) => [p.id, p.role, p.rail])).toEqual([['A', 'input', undefined], ['B', 'output', '3v3']]);
     },
@@ -71,11 +62,11 @@ const cases: Case[] = [
     start: greenhouse,
     finding: 'overvoltage:SDA:all-on:U2.SDA',
     expect(d) {
-      expect(pinsOf(d, 'SDA')).toEqual({
+      expect(netOf(d, 'SDA')).toEqual({
         id: 'SDA', label: 'SDA', pins: ['U1.SDA', 'U8.A'], pull: { to: '3v3', ohms: 4700 },
         wiringCapacitance: 5e-11, maxRiseTime: 1e-6,
       });
-      expect(pinsOf(d, 'SDA_1v8')).toEqual({
+      expect(netOf(d, 'SDA_1v8')).toEqual({
         id: 'SDA_1v8', label: 'SDA_1v8', pins: ['U8.B', 'U2.SDA'], pull: { to: '1v8', ohms: 4700 },
         wiringCapacitance: 5e-11, maxRiseTime: 1e-6,
       });
@@ -88,7 +79,7 @@ const cases: Case[] = [
     start: greenhouse,
     finding: 'back-power:SDA:standby:U2.SDA',
     expect(d) {
-      expect(pinsOf(d, 'SDA_1v8')?.pull).toEqual({ to: '1v8', ohms: 4700 });
+      expect(netOf(d, 'SDA_1v8')?.pull).toEqual({ to: '1v8', ohms: 4700 });
     },
   },
   {
@@ -110,11 +101,11 @@ const cases: Case[] = [
     }),
     finding: 'level-low:N:all-on:D.Y>R.A',
     expect(d) {
-      expect(pinsOf(d, 'N')).toEqual({
+      expect(netOf(d, 'N')).toEqual({
         id: 'N', label: 'CLK', pins: ['D.Y', 'M.A', 'U1.A'], route: [['D.Y', 'U1.A'], ['D.Y', 'M.A']],
         waivers: [{ rule: 'back-power', scenario: 'sleep', note: 'reviewed' }],
       });
-      expect(pinsOf(d, 'N_1v8')).toEqual({ id: 'N_1v8', label: 'CLK_1v8', pins: ['U1.B', 'R.A', 'S.A'], route: [['U1.B', 'R.A'], ['R.A', 'S.A']] });
+      expect(netOf(d, 'N_1v8')).toEqual({ id: 'N_1v8', label: 'CLK_1v8', pins: ['U1.B', 'R.A', 'S.A'], route: [['U1.B', 'R.A'], ['R.A', 'S.A']] });
       // Halfway between D and M (0, 100) and R and S (400, 100).
       expect(partOf(d, 'U1')?.position).toEqual({ x: 200, y: 100 });
     },
@@ -185,8 +176,8 @@ describe('a channel of a translator already there', () => {
           { id: 'B2', role: 'bidir', drive: 'open-drain', rail: '1v8', side: 'left' },
         ],
       });
-      expect(pinsOf(d, 'SCL')).toMatchObject({ pins: ['U1.SCL', 'U8.A2'], pull: { to: '3v3', ohms: 4700 } });
-      expect(pinsOf(d, 'SCL_1v8')).toMatchObject({ pins: ['U8.B2', 'U2.SCL'], pull: { to: '1v8', ohms: 4700 } });
+      expect(netOf(d, 'SCL')).toMatchObject({ pins: ['U1.SCL', 'U8.A2'], pull: { to: '3v3', ohms: 4700 } });
+      expect(netOf(d, 'SCL_1v8')).toMatchObject({ pins: ['U8.B2', 'U2.SCL'], pull: { to: '1v8', ohms: 4700 } });
     });
   });
 

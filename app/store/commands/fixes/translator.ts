@@ -55,7 +55,7 @@ export interface TranslatorLayout {
 const profileFor = (direction: Direction) => (direction === 'open-drain' ? TRANSLATOR_OPEN_DRAIN : TRANSLATOR_PUSH_PULL);
 
 /** How many channels a translator part has: its pins `A`, `A2`, `A3`, … */
-export function channelsOf(part: Part): number {
+function channelsOf(part: Part): number {
   let n = 0;
   while (part.pins.some((p) => p.id === (n === 0 ? 'A' : `A${n + 1}`))) n++;
   return n;
@@ -133,23 +133,6 @@ function centre(design: Design, keys: readonly string[]): { x: number; y: number
   return n === 0 ? { x: 0, y: 0 } : { x: x / n, y: y / n };
 }
 
-/**
- * Near the middle between the two sides' parts, on the first spot nearby where the new chip
- * overlaps none (chipLayout's search, as the palette places chips); B faces the B side's parts.
- */
-function placeBetween(design: Design, layout: TranslatorLayout, pins: readonly Pin[]): { x: number; y: number } {
-  const a = centre(design, layout.aPins);
-  const b = centre(design, layout.bPins);
-  const middle = { x: Math.round((a.x + b.x) / 2), y: Math.round((a.y + b.y) / 2) };
-  return freePlace(design.parts, middle, chipSize({ id: layout.partId, label: '', rail: '', profile: '', pins: [...pins] }));
-}
-
-/** Which sides A and B take: B towards the parts it moves to the new net. */
-function facing(design: Design, layout: TranslatorLayout): { aSide: Pin['side']; bSide: Pin['side'] } {
-  const bOnRight = centre(design, layout.bPins).x >= centre(design, layout.aPins).x;
-  return bOnRight ? { aSide: 'left', bSide: 'right' } : { aSide: 'right', bSide: 'left' };
-}
-
 /** The two pins of one channel: A on the part's rail, B on rail B; roles from the direction. */
 function channelPins(layout: TranslatorLayout, railB: string, aSide: Pin['side'], bSide: Pin['side']): [Pin, Pin] {
   const pin = (id: string, onB: boolean, role: Pin['role'], drive?: Pin['drive']): Pin => ({
@@ -166,15 +149,23 @@ function channelPins(layout: TranslatorLayout, railB: string, aSide: Pin['side']
 
 const LABEL_PREFIX = 'Dual-rail translator for ';
 
+/**
+ * A new translator part: side B faces the parts it moves to the new net; the chip goes near the
+ * middle between the two sides' parts, on the first spot nearby where it overlaps none
+ * (chipLayout's search, as the palette places chips).
+ */
 function translatorPart(design: Design, plan: TranslatorPlan, layout: TranslatorLayout): Part {
-  const { aSide, bSide } = facing(design, layout);
-  const pins = channelPins(layout, plan.railB, aSide, bSide);
+  const a = centre(design, layout.aPins);
+  const b = centre(design, layout.bPins);
+  const bOnRight = b.x >= a.x;
+  const pins = channelPins(layout, plan.railB, bOnRight ? 'left' : 'right', bOnRight ? 'right' : 'left');
+  const middle = { x: Math.round((a.x + b.x) / 2), y: Math.round((a.y + b.y) / 2) };
   return {
     id: layout.partId,
     label: `${LABEL_PREFIX}${netName(layout.net)}`,
     rail: plan.railA,
     profile: profileFor(layout.direction),
-    position: placeBetween(design, layout, pins),
+    position: freePlace(design.parts, middle, chipSize({ id: layout.partId, label: '', rail: '', profile: '', pins })),
     pins,
   };
 }
