@@ -2,6 +2,11 @@ import { fileURLToPath } from 'node:url';
 import { defineConfig, devices } from '@playwright/test';
 
 // Debian's Chromium (stack.md): Playwright cannot download its own browsers here.
+// The suite serves its own build on a port of its own (RAILCROSS_E2E_PORT, 4180 unless set), so
+// that `npm test` runs while `npm start` serves on 4173 and several work trees can test at once.
+const port = Number(process.env.RAILCROSS_E2E_PORT ?? 4180);
+const origin = `http://127.0.0.1:${port}`;
+
 export default defineConfig({
   testDir: '.',
   timeout: 60_000,
@@ -9,7 +14,7 @@ export default defineConfig({
   fullyParallel: false,
   workers: 1,
   retries: 0,
-  use: { baseURL: 'http://127.0.0.1:4173', viewport: { width: 1440, height: 900 }, screenshot: 'only-on-failure' },
+  use: { baseURL: origin, viewport: { width: 1440, height: 900 }, screenshot: 'only-on-failure' },
   projects: [
     {
       name: 'chromium',
@@ -24,11 +29,12 @@ export default defineConfig({
     },
   ],
   webServer: {
-    command: 'npx vite build && npx vite preview --port 4173 --strictPort --host 127.0.0.1',
+    command: `npx vite build && npx vite preview --port ${port} --strictPort --host 127.0.0.1`,
     // The repository's root, where index.html and vite.config.ts are (the default is this folder).
     cwd: fileURLToPath(new URL('..', import.meta.url)),
-    url: 'http://127.0.0.1:4173',
-    reuseExistingServer: !process.env.CI,
+    url: origin,
+    // Never another tree's server: a stale build on the port would be tested instead of this one.
+    reuseExistingServer: false,
     timeout: 120_000,
   },
 });
