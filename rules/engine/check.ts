@@ -2,10 +2,16 @@
  * `check(design, previous?)`: the engine's one entry point (architecture.md, "The engine's
  * contract"). It takes the plain v1 document as the editor holds it and never validates it.
  *
+ * A result is a value: nothing a later `check` does changes it. Its tables are maps made of
+ * shared buckets (chunkedMap.ts): an incremental check copies the few buckets it re-checks and
+ * shares the rest with the result it came from, so keeping both costs little. Measured with
+ * `npm run bench`: the copy is a small part of an edit's time (README, "Performance").
+ *
  * With `previous` (the result for an earlier version of the same document, sharing the objects
- * that did not change, as immer does) it re-checks only the nets, lone pins and rails that a
- * changed part, pin, net, rail, profile or power state touches. The result is the same as a
- * full check; a property test holds the two together.
+ * that did not change, as immer does) it re-checks only what an edit touched, in three stages:
+ * what changed (a diff to a dirty set), re-check the dirty nets, lone pins and rail groups
+ * (`all-on` first, since a scenario re-stamps from it), and keep every clean entry as it was.
+ * The result is the same as a full check; a property test holds the two together.
  */
 import type { Design, Net, Part, Rail } from '../model/schema.ts';
 import { RULES } from '../checks/index.ts';
@@ -15,44 +21,85 @@ import { loneRails, pinView, prepareNet, type PrepareContext } from './prepare.t
 import { completeFinding, restampFinding, sortFindings } from './findings.ts';
 import { DesignIndex, groupKey, splitGroupKey } from './designIndex.ts';
 import { changedById } from './diff.ts';
-import type { CheckResult, CheckStats, Finding, NetResult, PinView, PowerState, RailStates, Summary } from './types.ts';
+import { ChunkedMap, tallyOf } from './chunkedMap.ts';
+import type { CheckResult, CheckStats, Finding, NetResult, PinView, PowerState, Summary } from './types.ts';
 
 // The engine runs in Node and the browser alike; both have a monotonic clock here.
 const clock = (globalThis as { performance?: { now(): number } }).performance;
 const now = (): number => (clock !== undefined ? clock.now() : Date.now());
 
-/** What a result keeps for the next incremental check, outside the result itself. */
+/**
+ * What a result keeps for the next incremental check, outside the result itself. The index is
+ * brought up to date in place by the next check, so it serves one successor: a result handed to
+ * `check` a second time gives a full check (correct, only slower).
+ */
 interface Internals {
   readonly index: DesignIndex;
   readonly rules: readonly AnyRule[];
-  /** A result's tables are handed on to the next result; a consumed result is not reused. */
   consumed: boolean;
 }
 
 const internals = new WeakMap<CheckResult, Internals>();
 
-type NetTable = Map<string, NetResult>;
-type LoneTable = Map<string, readonly Finding[]>;
+type NetTable = ChunkedMap<NetResult>;
+type LoneTable = ChunkedMap<readonly Finding[]>;
 
-/** Mutable tables behind a result. */
+/** A result's tables: values, never changed once made. */
 interface Tables {
-  nets: Map<string, NetTable>;
-  lonePins: Map<string, LoneTable>;
-  railFindings: Map<string, readonly Finding[]>;
-  summary: { error: number; warning: number; info: number; waived: number };
-  netsChecked: number;
+  readonly nets: ReadonlyMap<string, NetTable>;
+  readonly lonePins: ReadonlyMap<string, LoneTable>;
+  readonly railFindings: LoneTable;
 }
 
-function count(summary: Tables['summary'], findings: readonly Finding[], sign: 1 | -1): void {
+// ---------------------------------------------------------------------------------------------
+// The summary, derived from the tables. Each bucket's counts are cached by the bucket's identity,
+// so a result after an edit counts again only the buckets that edit copied.
+
+type Counts = { error: number; warning: number; info: number; waived: number };
+const zero = (): Counts => ({ error: 0, warning: 0, info: 0, waived: 0 });
+const add = (into: Counts, part: Counts): void => {
+  into.error += part.error;
+  into.warning += part.warning;
+  into.info += part.info;
+  into.waived += part.waived;
+};
+function countInto(into: Counts, findings: readonly Finding[]): void {
   for (const f of findings) {
-    if (f.waived !== undefined) summary.waived += sign;
-    else summary[f.severity] += sign;
+    if (f.waived !== undefined) into.waived++;
+    else into[f.severity]++;
   }
 }
+const netCounts = new WeakMap<object, Counts>();
+const listCounts = new WeakMap<object, Counts>();
+const countNets = (bucket: ReadonlyMap<string, NetResult>): Counts => {
+  const c = zero();
+  for (const r of bucket.values()) countInto(c, r.findings);
+  return c;
+};
+const countLists = (bucket: ReadonlyMap<string, readonly Finding[]>): Counts => {
+  const c = zero();
+  for (const f of bucket.values()) countInto(c, f);
+  return c;
+};
+
+export function summarise(t: Tables): Summary {
+  const total = zero();
+  for (const table of t.nets.values()) add(total, tallyOf(table, netCounts, countNets, add, zero));
+  for (const table of t.lonePins.values()) add(total, tallyOf(table, listCounts, countLists, add, zero));
+  add(total, tallyOf(t.railFindings, listCounts, countLists, add, zero));
+  return total;
+}
+
+// ---------------------------------------------------------------------------------------------
+// Judging one net, one lone pin, one (rail, profile) group.
 
 /** The per-state context every preparation needs. */
 interface StateContext extends PrepareContext {
   readonly rules: readonly AnyRule[];
+}
+
+function contextFor(design: Design, state: PowerState, index: DesignIndex, rules: readonly AnyRule[]): StateContext {
+  return { design, state, rails: railStates(design, state), settings: effectiveSettings(design), pinIndex: index.pins, rules };
 }
 
 /**
@@ -64,7 +111,7 @@ function checkNet(ctx: StateContext, net: Net, allOn?: NetResult): NetResult {
     return {
       net,
       view: { ...allOn.view, state: ctx.state },
-      findings: allOn.findings.map((f) => restampFinding(f, ALL_ON, ctx.state, net.id, net)),
+      findings: allOn.findings.map((f) => restampFinding(f, ctx.state, net)),
     };
   }
   const view = prepareNet(ctx, net);
@@ -87,10 +134,23 @@ function checkLonePin(ctx: StateContext, pin: PinView): Finding[] {
   for (const rule of ctx.rules) {
     if (rule.checkPin === undefined) continue;
     rule.checkPin({ pin, state: ctx.state, settings: ctx.settings, rails: loneRails(ctx.rails, pin) }, (draft) =>
-      found.push(completeFinding(rule, draft, ctx.state, null)),
+      found.push(completeFinding(rule, draft, ctx.state, null, pin.key)),
     );
   }
   return found;
+}
+
+/**
+ * A lone pin in one power state. In a scenario, a pin none of whose rails (its own, its pull's)
+ * is off is judged as in `all-on`: its findings there are re-stamped (none there, none here).
+ */
+function judgeLonePin(ctx: StateContext, index: DesignIndex, key: string, allOn: LoneTable | undefined): readonly Finding[] {
+  const at = index.pins.get(key)!;
+  const off = ctx.state.off;
+  if (allOn !== undefined && !off.has(at.rail) && (at.pullTo === undefined || !off.has(at.pullTo))) {
+    return (allOn.get(key) ?? []).map((f) => restampFinding(f, ctx.state, null));
+  }
+  return checkLonePin(ctx, pinView(at, ctx.rails));
 }
 
 /** One (rail, profile) group, judged in `all-on`. */
@@ -110,52 +170,54 @@ function checkGroup(ctx: StateContext, index: DesignIndex, rail: Rail, profile: 
   return found;
 }
 
-/** Every net and lone pin of one power state. */
-function checkState(ctx: StateContext, index: DesignIndex, t: Tables): void {
-  const perNet: NetTable = new Map();
-  const allOn = t.nets.get(ALL_ON);
-  for (const net of ctx.design.nets) {
-    const r = checkNet(ctx, net, allOn?.get(net.id));
-    perNet.set(net.id, r);
-    count(t.summary, r.findings, 1);
-    t.netsChecked++;
-  }
-  t.nets.set(ctx.state.id, perNet);
-  const lone: LoneTable = new Map();
-  // As for nets: a lone pin none of whose rails is off in this state is judged as in all-on.
-  const allOnLone = ctx.state.id === ALL_ON ? undefined : t.lonePins.get(ALL_ON);
-  const off = ctx.state.off;
+// ---------------------------------------------------------------------------------------------
+// A whole power state, and a full check.
+
+interface StateTables {
+  readonly nets: NetTable;
+  readonly lone: LoneTable;
+  readonly checked: number;
+}
+
+/** Every net and lone pin of one power state; `allOn` is that state's tables in a scenario. */
+function checkState(ctx: StateContext, index: DesignIndex, allOn: StateTables | undefined): StateTables {
+  const nets: [string, NetResult][] = [];
+  for (const net of ctx.design.nets) nets.push([net.id, checkNet(ctx, net, allOn?.nets.get(net.id))]);
+  const lone: [string, readonly Finding[]][] = [];
   for (const key of index.lone) {
-    const at = index.pins.get(key)!;
-    const asAllOn = allOnLone !== undefined && !off.has(at.rail) && (at.pullTo === undefined || !off.has(at.pullTo));
-    const was = asAllOn ? allOnLone.get(key) : undefined;
-    if (asAllOn && was === undefined) continue;
-    // Re-stamped when each id is placed at the pin (`rule:PART.PIN:all-on…`), the place re-stamping writes.
-    const found = was !== undefined && was.every((f) => f.id.startsWith(`${f.rule}:${key}:${ALL_ON}`))
-      ? was.map((f) => restampFinding(f, ALL_ON, ctx.state, key, null))
-      : checkLonePin(ctx, pinView(at, ctx.rails));
-    if (found.length > 0) {
-      lone.set(key, found);
-      count(t.summary, found, 1);
-    }
+    const found = judgeLonePin(ctx, index, key, allOn?.lone);
+    if (found.length > 0) lone.push([key, found]);
   }
-  t.lonePins.set(ctx.state.id, lone);
+  return { nets: ChunkedMap.from(nets), lone: ChunkedMap.from(lone), checked: nets.length };
+}
+
+/** Every (rail, profile) group of the design. */
+function checkGroups(ctx: StateContext, index: DesignIndex, keys: Iterable<string>, railFindings: LoneTable): LoneTable {
+  const railById = new Map(ctx.design.rails.map((r) => [r.id, r]));
+  const changes: [string, readonly Finding[] | undefined][] = [];
+  for (const group of keys) {
+    const [railId, profile] = splitGroupKey(group);
+    const rail = railById.get(railId);
+    const found = rail === undefined || !index.groups.has(group) ? [] : checkGroup(ctx, index, rail, profile);
+    changes.push([group, found.length > 0 ? found : undefined]);
+  }
+  return railFindings.with(changes);
 }
 
 function makeResult(design: Design, states: readonly PowerState[], t: Tables, stats: CheckStats): CheckResult {
   let sorted: Finding[] | undefined;
-  const summary: Summary = { ...t.summary };
   const result = {
     design,
     states,
     nets: t.nets,
     lonePins: t.lonePins,
     railFindings: t.railFindings,
-    summary,
+    summary: summarise(t),
     stats,
   } as Omit<CheckResult, 'findings'> as CheckResult;
   // The ordered list is built when first read: an edit changes a few entries of the tables,
   // and the editor reads them per net; re-sorting every finding on every keystroke is waste.
+  // It reads this result's own tables, which nothing changes afterwards.
   Object.defineProperty(result, 'findings', {
     enumerable: true,
     get(): readonly Finding[] {
@@ -178,44 +240,57 @@ function makeResult(design: Design, states: readonly PowerState[], t: Tables, st
   return result;
 }
 
+/** `all-on` (always the first power state) and the scenarios, each named for what it is. */
+function splitStates(states: readonly PowerState[]): { allOn: PowerState; scenarios: readonly PowerState[] } {
+  const allOn = states.find((s) => s.id === ALL_ON);
+  if (allOn === undefined) throw new Error('internal: every design has the all-on power state');
+  return { allOn, scenarios: states.filter((s) => s !== allOn) };
+}
+
 function fullCheck(design: Design, rules: readonly AnyRule[], started: number): CheckResult {
   const states = powerStates(design);
-  const settings = effectiveSettings(design);
   const index = DesignIndex.build(design);
-  const t: Tables = {
-    nets: new Map(), lonePins: new Map(), railFindings: new Map(),
-    summary: { error: 0, warning: 0, info: 0, waived: 0 }, netsChecked: 0,
-  };
-  for (const state of states) {
-    const ctx: StateContext = { design, state, rails: railStates(design, state), settings, pinIndex: index.pins, rules };
-    checkState(ctx, index, t);
-    if (state.id === ALL_ON) {
-      for (const rail of design.rails) {
-        for (const group of index.groupsOfRail.get(rail.id) ?? []) {
-          const found = checkGroup(ctx, index, rail, splitGroupKey(group)[1]);
-          if (found.length > 0) {
-            t.railFindings.set(group, found);
-            count(t.summary, found, 1);
-          }
-        }
-      }
-    }
+  const { allOn, scenarios } = splitStates(states);
+  const allOnCtx = contextFor(design, allOn, index, rules);
+  const base = checkState(allOnCtx, index, undefined);
+  const nets = new Map<string, NetTable>([[ALL_ON, base.nets]]);
+  const lonePins = new Map<string, LoneTable>([[ALL_ON, base.lone]]);
+  let checked = base.checked;
+  for (const state of scenarios) {
+    const s = checkState(contextFor(design, state, index, rules), index, base);
+    nets.set(state.id, s.nets);
+    lonePins.set(state.id, s.lone);
+    checked += s.checked;
   }
-  const result = makeResult(design, states, t, { netsChecked: t.netsChecked, incremental: false, ms: now() - started });
+  const railFindings = checkGroups(allOnCtx, index, index.groups.keys(), ChunkedMap.empty());
+  const result = makeResult(design, states, { nets, lonePins, railFindings }, { netsChecked: checked, incremental: false, ms: now() - started });
   internals.set(result, { index, rules, consumed: false });
   return result;
 }
 
+// ---------------------------------------------------------------------------------------------
+// Stage 1: what changed.
+
 /** What changed between two versions of a design, as the sets of things to re-check. */
 interface Dirty {
-  nets: Set<string>;
+  readonly nets: Set<string>;
   /** Pins whose own data changed (the pin, its part, its profile): nets, groups, lone status. */
-  pins: Set<string>;
+  readonly pins: Set<string>;
   /** Pins whose net or rail state changed: their lone status is judged again. */
-  lone: Set<string>;
+  readonly lone: Set<string>;
   /** (rail, profile) group keys. */
-  groups: Set<string>;
-  states: Set<string>;
+  readonly groups: Set<string>;
+  /** Power states re-checked whole (new or changed scenarios). */
+  readonly states: Set<string>;
+}
+
+interface Change {
+  readonly dirty: Dirty;
+  readonly states: readonly PowerState[];
+  readonly parts: readonly [Part | undefined, Part | undefined][];
+  readonly nets: readonly [Net | undefined, Net | undefined][];
+  /** Pins whose design-local profile changed (their part did not). */
+  readonly profilePins: ReadonlySet<string>;
 }
 
 /** True when a part changed only where the rules do not look (position, label). */
@@ -223,23 +298,16 @@ function movedOnly(old: Part, now: Part): boolean {
   return old.rail === now.rail && old.profile === now.profile && old.params === now.params && old.pins === now.pins;
 }
 
-function markPinsOf(part: Part, dirty: Dirty): void {
-  for (const pin of part.pins) dirty.pins.add(`${part.id}.${pin.id}`);
-}
-
-function incrementalCheck(design: Design, prev: CheckResult, inner: Internals, started: number): CheckResult {
+/** What an edit from `prev.design` to `design` changed, read against the previous index. */
+function whatChanged(design: Design, prev: CheckResult, index: DesignIndex): Change {
   const before = prev.design;
-  const { index, rules } = inner;
   const dirty: Dirty = { nets: new Set(), pins: new Set(), lone: new Set(), groups: new Set(), states: new Set() };
 
   // Power states: a changed scenario is re-checked whole; states come back in the file's order.
   const states = before.scenarios === design.scenarios ? prev.states : powerStates(design);
-  const removedStates: string[] = [];
   if (states !== prev.states) {
     const old = new Map(prev.states.map((s) => [s.id, s]));
-    for (const s of states) if (old.get(s.id)?.scenario !== s.scenario || !old.has(s.id)) dirty.states.add(s.id);
-    const ids = new Set(states.map((s) => s.id));
-    for (const s of prev.states) if (!ids.has(s.id)) removedStates.push(s.id);
+    for (const s of states) if (!old.has(s.id) || old.get(s.id)!.scenario !== s.scenario) dirty.states.add(s.id);
   }
 
   // Rails: everything on a changed rail, or pulled to it.
@@ -265,116 +333,115 @@ function incrementalCheck(design: Design, prev: CheckResult, inner: Internals, s
     }
   }
 
-  // Parts: a part that only moved or was relabelled changes nothing the rules see.
-  const partChanges: [Part | undefined, Part | undefined][] = [];
+  // Parts: a part that only moved or was relabelled changes nothing the rules see; a part whose
+  // pins alone changed dirties those pins; anything else dirties every pin it had or has.
+  const parts: [Part | undefined, Part | undefined][] = [];
   changedById(before.parts, design.parts, (id) => index.parts.get(id), (old, now) => {
-    partChanges.push([old, now]);
+    parts.push([old, now]);
     if (old !== undefined && now !== undefined && old.rail === now.rail && old.profile === now.profile && old.params === now.params) {
-      if (old.pins === now.pins) return; // moved or relabelled
       const oldPins = new Map(old.pins.map((p) => [p.id, p]));
       for (const pin of now.pins) if (oldPins.get(pin.id) !== pin) dirty.pins.add(`${now.id}.${pin.id}`);
       const ids = new Set(now.pins.map((p) => p.id));
       for (const pin of old.pins) if (!ids.has(pin.id)) dirty.pins.add(`${old.id}.${pin.id}`);
       return;
     }
-    if (old !== undefined) markPinsOf(old, dirty);
-    if (now !== undefined) markPinsOf(now, dirty);
+    for (const part of [old, now]) if (part !== undefined) for (const pin of part.pins) dirty.pins.add(`${part.id}.${pin.id}`);
   });
 
   // Nets: changed ones directly, and every pin that joins or leaves one.
-  const netChanges: [Net | undefined, Net | undefined][] = [];
+  const nets: [Net | undefined, Net | undefined][] = [];
   changedById(before.nets, design.nets, (id) => index.nets.get(id), (old, now) => {
-    netChanges.push([old, now]);
+    nets.push([old, now]);
     dirty.nets.add((now ?? old)!.id);
     for (const key of old?.pins ?? []) dirty.lone.add(key);
     for (const key of now?.pins ?? []) dirty.lone.add(key);
   });
 
-  // A changed pin re-checks the net it was on, its (rail, profile) group, and itself if alone.
-  const touch = () => {
-    for (const key of dirty.pins) {
-      const n = index.netOfPin.get(key);
-      if (n !== undefined) dirty.nets.add(n);
-      const at = index.pins.get(key);
-      if (at !== undefined) dirty.groups.add(groupKey(at.rail, at.profile));
-    }
-  };
-  touch();
+  spreadPins(index, dirty);
+  return { dirty, states, parts, nets, profilePins };
+}
 
-  // Bring the index up to date.
-  for (const [old, now] of partChanges) {
+/** A changed pin re-checks the net it is on, its (rail, profile) group, and itself if alone. */
+function spreadPins(index: DesignIndex, dirty: Dirty): void {
+  for (const key of dirty.pins) {
+    dirty.lone.add(key);
+    const n = index.netOfPin.get(key);
+    if (n !== undefined) dirty.nets.add(n);
+    const at = index.pins.get(key);
+    if (at !== undefined) dirty.groups.add(groupKey(at.rail, at.profile));
+  }
+}
+
+/** Brings the index from the old design to the new one; the dirty set then spreads to new places. */
+function advanceIndex(index: DesignIndex, design: Design, change: Change): void {
+  for (const [old, now] of change.parts) {
     if (old !== undefined && now !== undefined && movedOnly(old, now)) index.retargetPart(now);
     else {
       if (old !== undefined) index.removePart(old);
       if (now !== undefined) index.addPart(design, now);
     }
   }
-  // Pins whose design-local profile changed keep their part: refresh what the index holds of them.
-  for (const key of profilePins) index.refreshPin(design, key);
-  for (const [old] of netChanges) if (old !== undefined) index.removeNet(old);
-  for (const [, now] of netChanges) if (now !== undefined) index.addNet(now);
-  touch();
+  for (const key of change.profilePins) index.refreshPin(design, key);
+  for (const [old] of change.nets) if (old !== undefined) index.removeNet(old);
+  for (const [, now] of change.nets) if (now !== undefined) index.addNet(now);
+  spreadPins(index, change.dirty);
+}
 
-  // Re-check, taking over the previous result's tables.
+// ---------------------------------------------------------------------------------------------
+// Stages 2 and 3: re-check what is dirty, keep what is clean.
+
+/** One power state after an edit: its dirty nets and lone pins judged again, the rest kept. */
+function recheckState(
+  ctx: StateContext,
+  index: DesignIndex,
+  dirty: Dirty,
+  was: StateTables,
+  allOn: StateTables | undefined,
+): StateTables {
+  const netChanges: [string, NetResult | undefined][] = [];
+  for (const id of dirty.nets) {
+    const net = index.nets.get(id);
+    netChanges.push([id, net === undefined ? undefined : checkNet(ctx, net, allOn?.nets.get(id))]);
+  }
+  const loneChanges: [string, readonly Finding[] | undefined][] = [];
+  for (const key of dirty.lone) {
+    const alone = index.pins.has(key) && !index.netOfPin.has(key);
+    const found = alone ? judgeLonePin(ctx, index, key, allOn?.lone) : [];
+    loneChanges.push([key, found.length > 0 ? found : undefined]);
+  }
+  return { nets: was.nets.with(netChanges), lone: was.lone.with(loneChanges), checked: netChanges.length };
+}
+
+function incrementalCheck(design: Design, prev: CheckResult, inner: Internals, started: number): CheckResult {
+  const { index, rules } = inner;
   inner.consumed = true;
-  const t: Tables = {
-    nets: prev.nets as Map<string, NetTable>,
-    lonePins: prev.lonePins as Map<string, LoneTable>,
-    railFindings: prev.railFindings as Map<string, readonly Finding[]>,
-    summary: { ...prev.summary },
-    netsChecked: 0,
+  const change = whatChanged(design, prev, index);
+  advanceIndex(index, design, change);
+  const { dirty, states } = change;
+
+  const previous = (id: string): StateTables | undefined => {
+    const nets = prev.nets.get(id) as NetTable | undefined;
+    const lone = prev.lonePins.get(id) as LoneTable | undefined;
+    return nets === undefined || lone === undefined ? undefined : { nets, lone, checked: 0 };
   };
-  for (const id of removedStates) {
-    for (const r of t.nets.get(id)?.values() ?? []) count(t.summary, r.findings, -1);
-    for (const f of t.lonePins.get(id)?.values() ?? []) count(t.summary, f, -1);
-    t.nets.delete(id);
-    t.lonePins.delete(id);
+  const { allOn, scenarios } = splitStates(states);
+  const allOnCtx = contextFor(design, allOn, index, rules);
+  const base = recheckState(allOnCtx, index, dirty, previous(ALL_ON)!, undefined);
+  const nets = new Map<string, NetTable>([[ALL_ON, base.nets]]);
+  const lonePins = new Map<string, LoneTable>([[ALL_ON, base.lone]]);
+  let checked = base.checked;
+  for (const state of scenarios) {
+    const ctx = contextFor(design, state, index, rules);
+    const was = previous(state.id);
+    const s = dirty.states.has(state.id) || was === undefined
+      ? checkState(ctx, index, base)
+      : recheckState(ctx, index, dirty, was, base);
+    nets.set(state.id, s.nets);
+    lonePins.set(state.id, s.lone);
+    checked += s.checked;
   }
-  const settings = effectiveSettings(design);
-  for (const state of states) {
-    const rails: RailStates = railStates(design, state);
-    const ctx: StateContext = { design, state, rails, settings, pinIndex: index.pins, rules };
-    if (dirty.states.has(state.id)) {
-      for (const r of t.nets.get(state.id)?.values() ?? []) count(t.summary, r.findings, -1);
-      for (const f of t.lonePins.get(state.id)?.values() ?? []) count(t.summary, f, -1);
-      checkState(ctx, index, t);
-    } else {
-      const perNet = t.nets.get(state.id)!;
-      for (const id of dirty.nets) {
-        const old = perNet.get(id);
-        if (old !== undefined) count(t.summary, old.findings, -1);
-        const net = index.nets.get(id);
-        if (net === undefined) { perNet.delete(id); continue; }
-        const r = checkNet(ctx, net, t.nets.get(ALL_ON)?.get(id));
-        perNet.set(id, r);
-        count(t.summary, r.findings, 1);
-        t.netsChecked++;
-      }
-      const lone = t.lonePins.get(state.id)!;
-      for (const key of dirty.pins) dirty.lone.add(key);
-      for (const key of dirty.lone) {
-        const old = lone.get(key);
-        if (old !== undefined) { count(t.summary, old, -1); lone.delete(key); }
-        const at = index.pins.get(key);
-        if (at === undefined || index.netOfPin.has(key)) continue;
-        const found = checkLonePin(ctx, pinView(at, rails));
-        if (found.length > 0) { lone.set(key, found); count(t.summary, found, 1); }
-      }
-    }
-    if (state.id === ALL_ON && dirty.groups.size > 0) {
-      const railById = new Map(design.rails.map((r) => [r.id, r]));
-      for (const group of dirty.groups) {
-        const old = t.railFindings.get(group);
-        if (old !== undefined) { count(t.summary, old, -1); t.railFindings.delete(group); }
-        const [railId, profile] = splitGroupKey(group);
-        const rail = railById.get(railId);
-        if (rail === undefined || !index.groups.has(group)) continue;
-        const found = checkGroup(ctx, index, rail, profile);
-        if (found.length > 0) { t.railFindings.set(group, found); count(t.summary, found, 1); }
-      }
-    }
-  }
-  const result = makeResult(design, states, t, { netsChecked: t.netsChecked, incremental: true, ms: now() - started });
+  const railFindings = checkGroups(allOnCtx, index, dirty.groups, prev.railFindings as LoneTable);
+  const result = makeResult(design, states, { nets, lonePins, railFindings }, { netsChecked: checked, incremental: true, ms: now() - started });
   internals.set(result, { index, rules, consumed: false });
   return result;
 }
@@ -382,8 +449,9 @@ function incrementalCheck(design: Design, prev: CheckResult, inner: Internals, s
 /**
  * Checks every rule of the catalogue on every net in every power state.
  *
- * `previous` is handed over: the new result takes over its tables, and `previous` must not be
- * read afterwards (passing a consumed result again simply gives a full check).
+ * `previous` is read, never changed: it stays a valid result of its own design. Its index is
+ * brought forward for the new result, so a result handed to `check` a second time gives a
+ * full check.
  */
 export function check(design: Design, previous?: CheckResult, rules: readonly AnyRule[] = RULES): CheckResult {
   const started = now();
@@ -398,4 +466,3 @@ export function check(design: Design, previous?: CheckResult, rules: readonly An
   }
   return fullCheck(design, rules, started);
 }
-

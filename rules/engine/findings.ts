@@ -4,23 +4,33 @@ import type { Draft, MessageFns, Rule } from '../checks/defineRule.ts';
 import { RULE_IDS } from '../model/ruleIds.ts';
 import type { Finding, PowerState, Summary } from './types.ts';
 
-/** Completes a draft: `rule:NET:SCENARIO[:suffix]` (report-format.md, "Finding"). */
+/** A finding's id, built in one place: `rule:PLACE:SCENARIO[:suffix]` (report-format.md, "Finding"). */
+export function findingId(rule: string, place: string, state: string, suffix: string | undefined): string {
+  return `${rule}:${place}:${state}${suffix === undefined ? '' : `:${suffix}`}`;
+}
+
+/**
+ * Completes a draft. `place` is where the finding sits when the draft names no `subject`: the
+ * net's id, or the pin's key for a pin on no net.
+ */
 export function completeFinding<M extends MessageFns>(
   rule: Rule<M>,
   draft: Draft<M>,
   state: PowerState,
   net: Net | null,
+  place: string = net?.id ?? '',
 ): Finding {
-  const place = net?.id ?? draft.subject ?? '';
-  const id = `${rule.id}:${place}:${state.id}${draft.suffix === undefined ? '' : `:${draft.suffix}`}`;
+  const at = net?.id ?? draft.subject ?? place;
   const message = rule.meta.messages[draft.messageId]!(draft.data);
   const waived = net === null ? undefined : waiverNote(net, rule.id, state.id);
   return {
-    id,
+    id: findingId(rule.id, at, state.id, draft.suffix),
     rule: rule.id,
     severity: draft.severity,
     scenario: state.id,
     net: net?.id ?? null,
+    place: at,
+    ...(draft.suffix === undefined ? {} : { suffix: draft.suffix }),
     pins: draft.pins,
     parts: draft.parts,
     message,
@@ -41,15 +51,15 @@ function waiverNote(net: Net, rule: string, state: string): string | undefined {
 /**
  * The same finding in another power state: a net (or a lone pin) none of whose rails is off
  * there is judged exactly as in `all-on`, so its findings are re-stamped rather than computed
- * again. `place` is the net's id, or the pin's key for a pin on no net (`net` null: no waivers).
+ * again. Its place and suffix are data, so the id is built again, never cut out of the old one;
+ * `net` is the net it is on (null for a lone pin: no waivers).
  */
-export function restampFinding(f: Finding, from: string, state: PowerState, place: string, net: Net | null): Finding {
-  const prefix = `${f.rule}:${place}:`;
+export function restampFinding(f: Finding, state: PowerState, net: Net | null): Finding {
   const { waived: _old, ...rest } = f;
   const waived = net === null ? undefined : waiverNote(net, f.rule, state.id);
   return {
     ...rest,
-    id: `${prefix}${state.id}${f.id.slice(prefix.length + from.length)}`,
+    id: findingId(f.rule, f.place, state.id, f.suffix),
     scenario: state.id,
     ...(waived === undefined ? {} : { waived }),
   };

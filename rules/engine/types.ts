@@ -160,6 +160,10 @@ export interface Finding {
   readonly severity: Severity;
   readonly scenario: string;
   readonly net: string | null;
+  /** Where it sits: the net's id, the pin's key (a pin on no net) or the rail's id. Not reported. */
+  readonly place: string;
+  /** The part of the id after the power state, when a rule reports more than one per place. Not reported. */
+  readonly suffix?: string;
   readonly pins: readonly string[];
   readonly parts: readonly string[];
   readonly message: string;

@@ -17,7 +17,7 @@ function comparable(r: CheckResult) {
     findings: r.findings,
     nets: new Map([...r.nets].map(([s, m]) => [s, new Map([...m].sort(([a], [b]) => (a < b ? -1 : 1)))])),
     lonePins: new Map([...r.lonePins].map(([s, m]) => [s, new Map([...m].sort(([a], [b]) => (a < b ? -1 : 1)))])),
-    railFindings: r.railFindings,
+    railFindings: new Map([...r.railFindings].sort(([a], [b]) => (a < b ? -1 : 1))),
   };
 }
 

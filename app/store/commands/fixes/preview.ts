@@ -48,8 +48,9 @@ export function tryOn(design: Design, recipe: QuickFix['apply']): { design: Desi
 }
 
 /**
- * Re-check the design as `fix` would leave it. `before` is the current result (only its
- * findings are read: it is not handed to the engine, so the store's result stays usable).
+ * Re-check the design as `fix` would leave it. `before` is the current result; only its findings
+ * are read. It is not handed to the engine: a result serves as `previous` once, and the store's
+ * next edit should keep its incremental check.
  */
 export function previewFix(fix: QuickFix, design: Design, before: CheckResult): FixPreview {
   const tried = tryOn(design, fix.apply);
