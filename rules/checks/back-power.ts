@@ -6,9 +6,10 @@
 import { levelAt } from '../levels/level.ts';
 import { exceeds } from '../levels/compare.ts';
 import { netSources, worstExposure, type NetSource } from '../engine/netMath.ts';
+import { pathExposure } from '../engine/paths.ts';
 import type { PinView, RailStates } from '../engine/types.ts';
 import { defineRule } from './defineRule.ts';
-import { volts } from './format.ts';
+import { amps, volts } from './format.ts';
 import { partsOf } from './keys.ts';
 
 /**
@@ -61,7 +62,9 @@ export default defineRule({
       'three-state drivers\' rails, pull resistors\' rails). A pin rated for voltage while unpowered ' +
       'is held to that rating (viMaxOff); a pin declared unpowered-safe without one is held to its ' +
       'powered limit at its rail\'s lowest voltage; any other pin to 0.5 V, where its clamp diode ' +
-      'starts to feed the dead rail and can half-power the chip.',
+      'starts to feed the dead rail and can half-power the chip. A source on another net that reaches the ' +
+      'pin through series resistors is judged at the voltage the network leaves on the pin\'s net, and ' +
+      'the finding gives the current the resistors then let into the dead rail (the clamp held at 0 V).',
     hint:
       'Use a part specified for partial power-down (pins that may carry voltage at VDD = 0), a buffer ' +
       'or switch that isolates the net while the rail is off, a pull-up to the switched rail, or power ' +
@@ -81,10 +84,21 @@ export default defineRule({
       const limit = unpoweredLimit(pin, view.rails);
       if (limit === undefined) continue;
       const sources = netSources(pin, view.drivers, view.pulls);
-      const worst = worstExposure(pin, sources, view.rails, () => limit.v);
+      const direct = worstExposure(pin, sources, view.rails, () => limit.v);
+      let worst: { vNet: number; limit: number; from: string; source: string; current?: number } | undefined =
+        direct === undefined ? undefined : { vNet: direct.vNet, limit: direct.limit, from: sourceText(direct.source), source: direct.source.from };
+      if ((worst === undefined || !exceeds(worst.vNet, worst.limit)) && view.path !== undefined) {
+        const far = pathExposure(view.path, pin, view.rails, () => limit.v, 'high');
+        if (far !== undefined) {
+          worst = {
+            vNet: far.vNet, limit: far.limit, source: far.source, current: far.current,
+            from: `${far.source === 'pulls' ? 'The pull-ups' : far.source} through series resistance (${amps(far.current)} into the dead rail)`,
+          };
+        }
+      }
       if (worst === undefined || !exceeds(worst.vNet, worst.limit)) continue;
       const data: Data = {
-        pin: pin.key, rail: pin.rail, vNet: worst.vNet, viMax: limit.v, from: sourceText(worst.source),
+        pin: pin.key, rail: pin.rail, vNet: worst.vNet, viMax: limit.v, from: worst.from,
         ...(limit.kind === 'viMax' ? { railMin: limit.railMin } : {}),
       };
       report({
@@ -94,7 +108,10 @@ export default defineRule({
         pins: [pin.key],
         parts: partsOf(pin.key),
         suffix: pin.key,
-        values: { vNet: worst.vNet, viMax: limit.v, pin: pin.key, source: worst.source.from, limit: limit.kind },
+        values: {
+          vNet: worst.vNet, viMax: limit.v, pin: pin.key, source: worst.source, limit: limit.kind,
+          ...(worst.current === undefined ? {} : { current: worst.current }),
+        },
       });
     }
   },

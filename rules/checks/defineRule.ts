@@ -4,7 +4,7 @@
  * (ids, power state, net, waivers, order).
  */
 import type { RuleId } from '../model/ruleIds.ts';
-import type { LonePinView, NetView, RailView, Severity } from '../engine/types.ts';
+import type { InjectionView, LonePinView, NetView, RailView, Severity } from '../engine/types.ts';
 
 // eslint-style message functions: each takes the data a finding carries and writes one sentence.
 // eslint-disable-next-line @typescript-eslint/no-explicit-any
@@ -51,6 +51,8 @@ export interface Rule<M extends MessageFns = MessageFns> {
   readonly checkPin?: (pin: LonePinView, report: Reporter<M>) => void;
   /** Judges a rail and the pins on it, once (in `all-on`). */
   readonly checkRail?: (rail: RailView, report: Reporter<M>) => void;
+  /** Judges the clamp currents flowing into one rail, in each power state (version 2). */
+  readonly checkInjection?: (view: InjectionView, report: Reporter<M>) => void;
 }
 
 /** Declares a rule; the identity function, there for the types. */

@@ -23,6 +23,8 @@ interface EdgeSource {
   readonly resistance: number;
   /** V: the lowest level the edge rises to (the driver's rail minimum, or the lowest Vpull). */
   readonly swing: number;
+  /** The edge arrives through series resistors from a driver on another net. */
+  readonly through?: boolean;
 }
 
 /**
@@ -51,6 +53,9 @@ function outputResistance(driver: PinView, rails: RailStates): number | undefine
  * slowest powered driver able to drive high (`except` left out: a receiver is not its own source).
  */
 function edgeSource(view: NetView, except?: string): EdgeSource | undefined {
+  if (view.pathEdge !== undefined && !view.drivers.some((d) => d.drive !== 'open-drain')) {
+    return { driver: view.pathEdge.driver, resistance: view.pathEdge.resistance, swing: view.pathEdge.swing, through: true };
+  }
   if (view.highFromPull) {
     const resistance = parallelResistance(view.pulls)!;
     let swing = Infinity;
@@ -98,7 +103,9 @@ export default defineRule({
       'of the slowest driver, read from the slope between its two largest voh test points, and the rise ' +
       'time is taken from 10 % to 90 % (ln 9·RC). The rise time is compared with the net\'s maxRiseTime, ' +
       'and each non-Schmitt receiver with a maxInputRamp is given the ramp of that 10–90 % edge over 80 % ' +
-      'of the swing, in s/V.',
+      'of the swing, in s/V. A net that a driver reaches only through series resistors is given the 10–90 % ' +
+      'edge ln 9·Rth·C, Rth the resistance seen from the net with the driver\'s net and every rail at 0 V ' +
+      '(a divider\'s R1‖R2), each resistor at its high tolerance end, and C the net\'s own capacitance.',
     hint:
       'Lower the pull-up resistance or use a stronger driver, cut the capacitance (shorter wiring, fewer ' +
       'loads), or split the loads with a buffer.',
@@ -108,6 +115,9 @@ export default defineRule({
       drivenRiseSlow: (d: RiseData) =>
         `${d.driver} (about ${ohms(d.resistance)} output resistance) charges ${farads(d.capacitance)} in ` +
         `${seconds(d.riseTime)} from 10 % to 90 %, ${limitText(d)}.`,
+      pathRiseSlow: (d: RiseData) =>
+        `The edge from ${d.driver} reaches the net through series resistors (${ohms(d.resistance)} seen from the net) and charges ` +
+        `${farads(d.capacitance)} in ${seconds(d.riseTime)} from 10 % to 90 %, ${limitText(d)}.`,
       rampSlow: (d: RampData) =>
         `${d.pin} sees an input ramp of ${rampUnit(d.ramp)} (a ${seconds(d.t1090)} 10–90 % edge over ${volts(d.swing)} ` +
         `from ${d.driver ?? 'the pull-up'}), slower than the ${rampUnit(d.maxInputRamp)} it accepts.`,
@@ -125,7 +135,7 @@ export default defineRule({
         // A pulled edge starts when the open-drain drivers release the net.
         const pins = source.driver === null ? view.drivers.map((d) => d.key) : [source.driver];
         report({
-          messageId: pulled ? 'pulledRiseSlow' : 'drivenRiseSlow',
+          messageId: pulled ? 'pulledRiseSlow' : source.through === true ? 'pathRiseSlow' : 'drivenRiseSlow',
           data: { driver: source.driver, riseTime, resistance: source.resistance, capacitance: c, limit },
           severity: 'warning',
           pins,

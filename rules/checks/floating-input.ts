@@ -27,8 +27,10 @@ export default defineRule({
       'A CMOS input that nothing drives drifts to an undefined level, draws shoot-through current and ' +
       'may oscillate. A net with a powered receiver needs a powered driver or a pull resistor; a net ' +
       'whose only drivers are three-state floats whenever none is enabled, unless a pull holds it. Any ' +
-      'pull counts here, the net\'s own or one inside a pin, even to a rail that is off. An input pin on ' +
-      'no net, on a powered rail and without an internal pull, floats too.',
+      'pull counts here, the net\'s own, one inside a pin or a resistor part tied to a rail or ground, even ' +
+      'to a rail that is off. A driver on another net that reaches this one through a series resistor or a ' +
+      'shifter drives it too, and a powered bus-hold input keeps the net at its last level. An input pin ' +
+      'on no net, on a powered rail and without an internal pull, floats too.',
     hint: 'Add a pull resistor to a defined level, or tie the unused input to ground or its rail.',
     messages: {
       noDriver: (d: NetData) =>
@@ -41,20 +43,22 @@ export default defineRule({
   },
   checkNet(view, report) {
     if (view.receivers.length === 0 || view.pulls.length > 0) return;
-    const allThreeState = view.drivers.length > 0 && view.drivers.every((d) => d.drive === 'three-state');
-    if (view.drivers.length > 0 && !allThreeState) return;
+    if (view.pins.some((p) => p.powered && p.params.busHold !== undefined)) return;
+    const drivers = [...view.drivers, ...view.remoteDrivers];
+    const allThreeState = drivers.length > 0 && drivers.every((d) => d.drive === 'three-state');
+    if (drivers.length > 0 && !allThreeState) return;
     const pins = view.receivers.map((r) => r.key);
-    const drivers = view.drivers.map((d) => d.key);
+    const driverKeys = drivers.map((d) => d.key);
     report({
       messageId: allThreeState ? 'allThreeState' : 'noDriver',
-      data: { net: view.net.label ?? view.net.id, pins, drivers },
+      data: { net: view.net.label ?? view.net.id, pins, drivers: driverKeys },
       severity: allThreeState ? 'warning' : 'error',
       pins,
       parts: partsOf(...pins),
       ...(allThreeState
         ? { hint: 'Add a pull resistor, or make sure one of the outputs is always enabled.' }
         : {}),
-      values: { pins, ...(allThreeState ? { drivers } : {}) },
+      values: { pins, ...(allThreeState ? { drivers: driverKeys } : {}) },
     });
   },
   checkPin({ pin }, report) {

@@ -7,12 +7,18 @@ import levelHigh from './level-high.ts';
 import levelLow from './level-low.ts';
 import overvoltage from './overvoltage.ts';
 import backPower from './back-power.ts';
+import clampCurrent from './clamp-current.ts';
+import railInjection from './rail-injection.ts';
+import undervoltage from './undervoltage.ts';
 import driveLoad from './drive-load.ts';
 import edgeRate from './edge-rate.ts';
 import contention from './contention.ts';
 import floatingInput from './floating-input.ts';
 import missingPull from './missing-pull.ts';
 import pullRange from './pull-range.ts';
+import fetShifter from './fet-shifter.ts';
+import translatorPull from './translator-pull.ts';
+import busHold from './bus-hold.ts';
 import railRange from './rail-range.ts';
 import railCrossing from './rail-crossing.ts';
 
@@ -21,12 +27,18 @@ export const RULES: readonly AnyRule[] = [
   levelLow,
   overvoltage,
   backPower,
+  clampCurrent,
+  railInjection,
+  undervoltage,
   driveLoad,
   edgeRate,
   contention,
   floatingInput,
   missingPull,
   pullRange,
+  fetShifter,
+  translatorPull,
+  busHold,
   railRange,
   railCrossing,
 ];

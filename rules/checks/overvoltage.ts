@@ -5,8 +5,9 @@
 import { levelAt } from '../levels/level.ts';
 import { exceeds } from '../levels/compare.ts';
 import { netSources, worstExposure } from '../engine/netMath.ts';
+import { pathExposure } from '../engine/paths.ts';
 import { defineRule } from './defineRule.ts';
-import { volts } from './format.ts';
+import { amps, volts } from './format.ts';
 import { partsOf } from './keys.ts';
 
 interface Data {
@@ -15,6 +16,10 @@ interface Data {
   viMax: number;
   from: string;
   pinVdd: number;
+}
+
+interface PathData extends Data {
+  current: number;
 }
 
 export default defineRule({
@@ -26,7 +31,11 @@ export default defineRule({
       'Every pin on a powered rail that has a viMax is compared with the highest voltage any other ' +
       'source on its net can apply: each powered push-pull or three-state driver\'s rail, and each ' +
       'pull resistor\'s rail (its own internal pull included), with the source\'s rail at its highest ' +
-      'and the pin\'s at its lowest. Above viMax a CMOS input\'s clamp diode conducts into its rail.',
+      'and the pin\'s at its lowest. Above viMax a CMOS input\'s clamp diode conducts into its rail. ' +
+      'A source on another net that reaches the pin through series resistors is judged at the voltage ' +
+      'the resistor network leaves on the pin\'s net (a divider\'s VDD·R2/(R1+R2) at the worst tolerance ' +
+      'ends, not the source\'s full rail); when that still passes viMax and the pin states an ' +
+      'injection-current limit, the clamp current is clamp-current\'s to judge, else it is an error here.',
     hint:
       'Use a receiver whose inputs tolerate the voltage (a 5 V-tolerant input), a dual-supply ' +
       'translator, or pull the net up to the receiver\'s own rail; a series resistor only limits the ' +
@@ -34,6 +43,9 @@ export default defineRule({
     messages: {
       tooHigh: (d: Data) =>
         `${d.from} can put ${volts(d.vNet)} on ${d.pin}, whose limit is ${volts(d.viMax)} at its supply of ${volts(d.pinVdd)}.`,
+      throughResistance: (d: PathData) =>
+        `${d.from} can put ${volts(d.vNet)} on ${d.pin} through series resistance, above its limit of ${volts(d.viMax)} at its supply of ${volts(d.pinVdd)}: ` +
+        `its clamp diode would carry up to ${amps(d.current)}, and the pin states no injection-current limit.`,
     },
   },
   checkNet(view, report) {
@@ -42,7 +54,26 @@ export default defineRule({
       const viMax = pin.params.viMax;
       if (!pin.powered || viMax === undefined) continue;
       const worst = worstExposure(pin, sourcesOf(pin), view.rails, (vdd) => levelAt(viMax, vdd));
-      if (worst === undefined || !exceeds(worst.vNet, worst.limit)) continue;
+      if (worst === undefined || !exceeds(worst.vNet, worst.limit)) {
+        if (view.path === undefined || pin.params.injectionMax !== undefined) continue;
+        const far = pathExposure(view.path, pin, view.rails, (vdd) => levelAt(viMax, vdd), 'high');
+        if (far === undefined || !exceeds(far.vNet, far.limit)) continue;
+        const from = far.source === 'pulls' ? 'The pull-ups across the series resistors' : far.source;
+        report({
+          messageId: 'throughResistance',
+          data: { pin: pin.key, vNet: far.vNet, viMax: far.limit, from, pinVdd: far.pinVdd, current: far.current },
+          severity: 'error',
+          pins: [pin.key],
+          parts: partsOf(pin.key),
+          suffix: pin.key,
+          hint: 'State the pin\'s injection-current limit (injectionMax) so the series resistor can be judged, raise the series resistance, or use a divider or a tolerant input.',
+          values: {
+            vNet: far.vNet, viMax: far.limit, pin: pin.key, source: far.source, pinVdd: far.pinVdd,
+            current: far.current, resistors: far.resistors,
+          },
+        });
+        continue;
+      }
       const from = worst.source.kind === 'driver' ? worst.source.from
         : worst.source.from === 'net' ? `The net's pull-up to ${worst.source.rail}` : `${worst.source.from}'s internal pull-up`;
       report({

@@ -110,7 +110,8 @@ export default defineRule({
       'the wanted margin against all input currents, yet large enough that each driver, at its largest ' +
       'rated sink current less the other pins\' low-level currents, still pulls the net down to its ' +
       'rated VOL. Each bound is taken at the worst ends of the rails involved. Only the net\'s own ' +
-      'resistor is sized here; internal pulls of pins are not part of the range.',
+      'resistor (its pull, else a resistor part from the net to a rail) is sized here; internal pulls of ' +
+      'pins are not part of the range.',
     hint:
       'Choose a pull-up inside the range; the largest standard value inside draws the least current.',
     messages: {
@@ -129,7 +130,8 @@ export default defineRule({
     },
   },
   checkNet(view, report) {
-    const pull = view.net.pull;
+    // The net's own resistor: its `pull`, else a resistor part from the net to a rail.
+    const pull = view.net.pull ?? view.pulls.find((p) => p.resistor === true && p.to !== GROUND);
     if (pull === undefined || pull.to === GROUND || view.rails.off.has(pull.to) || !view.rails.ranges.has(pull.to)) return;
     const drivers = view.drivers.filter((d) => d.drive === 'open-drain');
     if (drivers.length === 0) return;

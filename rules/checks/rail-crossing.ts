@@ -23,7 +23,8 @@ export default defineRule({
     explanation:
       'Every net whose pins sit on more than one rail is listed in each power state with its worst ' +
       'high and low margins, so that a review sees every crossing, passing or not. A pull ' +
-      'resistor\'s rail does not make a crossing.',
+      'resistor\'s rail does not make a crossing. A net that a driver reaches through a series resistor ' +
+      'or a shifter counts the rails of the pins on every net so joined.',
     hint: 'Review each crossing: margins, over-voltage and the unpowered cases are checked by the other rules.',
     messages: {
       crosses: (d: Data) =>
@@ -31,16 +32,18 @@ export default defineRule({
     },
   },
   checkNet(view, report) {
-    if (view.pinRails.length < 2) return;
+    const rails = view.pinRails.length >= 2 ? view.pinRails
+      : view.pathRails.length >= 2 && view.analysis.pairs.some((p) => p.via !== undefined) ? view.pathRails : undefined;
+    if (rails === undefined) return;
     const { worstHigh, worstLow } = view.analysis;
     const keys = view.pins.map((p) => p.key);
     report({
       messageId: 'crosses',
-      data: { net: view.net.label ?? view.net.id, rails: [...view.pinRails], marginHigh: worstHigh, marginLow: worstLow },
+      data: { net: view.net.label ?? view.net.id, rails: [...rails], marginHigh: worstHigh, marginLow: worstLow },
       severity: 'info',
       pins: keys,
       parts: partsOf(...keys),
-      values: { rails: [...view.pinRails], marginHigh: worstHigh, marginLow: worstLow },
+      values: { rails: [...rails], marginHigh: worstHigh, marginLow: worstLow },
     });
   },
 });

@@ -13,7 +13,7 @@
  * (`all-on` first, since a scenario re-stamps from it), and keep every clean entry as it was.
  * The result is the same as a full check; a property test holds the two together.
  */
-import type { Design, Net, Part, Rail } from '../model/schema.ts';
+import type { Design, Discrete, Net, Part, Rail } from '../model/schema.ts';
 import { RULES } from '../checks/index.ts';
 import type { AnyRule } from '../checks/defineRule.ts';
 import { ALL_ON, effectiveSettings, powerStates, railStates } from './powerStates.ts';
@@ -22,6 +22,7 @@ import { completeFinding, restampFinding, sortFindings } from './findings.ts';
 import { DesignIndex, groupKey, splitGroupKey } from './designIndex.ts';
 import { changedById } from './diff.ts';
 import { ChunkedMap, tallyOf } from './chunkedMap.ts';
+import { injectionsOf } from './injection.ts';
 import type { CheckResult, CheckStats, Finding, NetResult, PinView, PowerState, Summary } from './types.ts';
 
 // The engine runs in Node and the browser alike; both have a monotonic clock here.
@@ -49,6 +50,8 @@ interface Tables {
   readonly nets: ReadonlyMap<string, NetTable>;
   readonly lonePins: ReadonlyMap<string, LoneTable>;
   readonly railFindings: LoneTable;
+  /** Per power state: the findings on clamp current into rails, derived from the net tables. */
+  readonly injection: ReadonlyMap<string, readonly Finding[]>;
 }
 
 // ---------------------------------------------------------------------------------------------
@@ -87,7 +90,54 @@ export function summarise(t: Tables): Summary {
   for (const table of t.nets.values()) add(total, tallyOf(table, netCounts, countNets, add, zero));
   for (const table of t.lonePins.values()) add(total, tallyOf(table, listCounts, countLists, add, zero));
   add(total, tallyOf(t.railFindings, listCounts, countLists, add, zero));
+  for (const f of t.injection.values()) countInto(total, f);
   return total;
+}
+
+// ---------------------------------------------------------------------------------------------
+// Clamp current per rail, derived from the net tables: each bucket's currents are cached by the
+// bucket's identity, so an edit measures again only the buckets it copied.
+
+type Injected = { pin: string; net: string; current: number };
+type InjectionTally = Map<string, Injected[]>;
+const injectionTallies = new WeakMap<object, InjectionTally>();
+const measureInjection = (bucket: ReadonlyMap<string, NetResult>): InjectionTally => {
+  const out: InjectionTally = new Map();
+  for (const r of bucket.values()) {
+    if (r.view.path === undefined) continue;
+    for (const x of injectionsOf(r.view)) {
+      let list = out.get(x.rail);
+      if (list === undefined) out.set(x.rail, (list = []));
+      list.push({ pin: x.pin, net: r.net.id, current: x.current });
+    }
+  }
+  return out;
+};
+const addInjection = (into: InjectionTally, part: InjectionTally): void => {
+  for (const [rail, list] of part) {
+    const have = into.get(rail);
+    if (have === undefined) into.set(rail, [...list]);
+    else have.push(...list);
+  }
+};
+
+/** The findings on clamp current into each rail in one power state. */
+function injectionFindings(ctx: StateContext, index: DesignIndex, nets: NetTable): Finding[] {
+  const rules = ctx.rules.filter((r) => r.checkInjection !== undefined);
+  if (rules.length === 0 || index.discretes.size === 0) return [];
+  const tally = tallyOf(nets, injectionTallies, measureInjection, addInjection, () => new Map());
+  const found: Finding[] = [];
+  for (const rail of ctx.design.rails) {
+    const list = tally.get(rail.id);
+    if (list === undefined || list.length === 0) continue;
+    const injected = [...list].sort((a, b) => (a.pin < b.pin ? -1 : a.pin > b.pin ? 1 : 0));
+    for (const rule of rules) {
+      rule.checkInjection!({ rail, injected, state: ctx.state, settings: ctx.settings }, (draft) =>
+        found.push(completeFinding(rule, draft, ctx.state, null)),
+      );
+    }
+  }
+  return found;
 }
 
 // ---------------------------------------------------------------------------------------------
@@ -99,7 +149,10 @@ interface StateContext extends PrepareContext {
 }
 
 function contextFor(design: Design, state: PowerState, index: DesignIndex, rules: readonly AnyRule[]): StateContext {
-  return { design, state, rails: railStates(design, state), settings: effectiveSettings(design), pinIndex: index.pins, rules };
+  return {
+    design, state, rails: railStates(design, state), settings: effectiveSettings(design), pinIndex: index.pins, rules,
+    ...(index.discretes.size === 0 ? {} : { links: index }),
+  };
 }
 
 /**
@@ -212,6 +265,7 @@ function makeResult(design: Design, states: readonly PowerState[], t: Tables, st
     nets: t.nets,
     lonePins: t.lonePins,
     railFindings: t.railFindings,
+    injectionFindings: t.injection,
     summary: summarise(t),
     stats,
   } as Omit<CheckResult, 'findings'> as CheckResult;
@@ -226,6 +280,7 @@ function makeResult(design: Design, states: readonly PowerState[], t: Tables, st
         for (const s of states) {
           for (const r of t.nets.get(s.id)?.values() ?? []) all.push(...r.findings);
           for (const f of t.lonePins.get(s.id)?.values() ?? []) all.push(...f);
+          all.push(...(t.injection.get(s.id) ?? []));
         }
         for (const f of t.railFindings.values()) all.push(...f);
         sorted = sortFindings(
@@ -255,15 +310,18 @@ function fullCheck(design: Design, rules: readonly AnyRule[], started: number): 
   const base = checkState(allOnCtx, index, undefined);
   const nets = new Map<string, NetTable>([[ALL_ON, base.nets]]);
   const lonePins = new Map<string, LoneTable>([[ALL_ON, base.lone]]);
+  const injection = new Map<string, readonly Finding[]>([[ALL_ON, injectionFindings(allOnCtx, index, base.nets)]]);
   let checked = base.checked;
   for (const state of scenarios) {
-    const s = checkState(contextFor(design, state, index, rules), index, base);
+    const ctx = contextFor(design, state, index, rules);
+    const s = checkState(ctx, index, base);
     nets.set(state.id, s.nets);
     lonePins.set(state.id, s.lone);
+    injection.set(state.id, injectionFindings(ctx, index, s.nets));
     checked += s.checked;
   }
   const railFindings = checkGroups(allOnCtx, index, index.groups.keys(), ChunkedMap.empty());
-  const result = makeResult(design, states, { nets, lonePins, railFindings }, { netsChecked: checked, incremental: false, ms: now() - started });
+  const result = makeResult(design, states, { nets, lonePins, railFindings, injection }, { netsChecked: checked, incremental: false, ms: now() - started });
   internals.set(result, { index, rules, consumed: false });
   return result;
 }
@@ -289,6 +347,10 @@ interface Change {
   readonly states: readonly PowerState[];
   readonly parts: readonly [Part | undefined, Part | undefined][];
   readonly nets: readonly [Net | undefined, Net | undefined][];
+  /** Discretes that changed other than by moving (version 2). */
+  readonly discretes: readonly [Discrete | undefined, Discrete | undefined][];
+  /** Discretes that only moved or were relabelled: the index takes the new object. */
+  readonly movedDiscretes: readonly Discrete[];
   /** Pins whose design-local profile changed (their part did not). */
   readonly profilePins: ReadonlySet<string>;
 }
@@ -357,8 +419,38 @@ function whatChanged(design: Design, prev: CheckResult, index: DesignIndex): Cha
     for (const key of now?.pins ?? []) dirty.lone.add(key);
   });
 
+  // Discretes: a changed one dirties the nets of its pins (and, below, every net joined to them).
+  const discretes: [Discrete | undefined, Discrete | undefined][] = [];
+  const movedDiscretes: Discrete[] = [];
+  changedById(before.discretes ?? NO_DISCRETES, design.discretes ?? NO_DISCRETES, (id) => index.discretes.get(id), (old, now) => {
+    if (old !== undefined && now !== undefined && discreteMovedOnly(old, now)) {
+      movedDiscretes.push(now);
+      return;
+    }
+    discretes.push([old, now]);
+    if (old !== undefined) for (const n of index.netsOfDiscrete(old)) if (n !== undefined) dirty.nets.add(n);
+  });
+
   spreadPins(index, dirty);
-  return { dirty, states, parts, nets, profilePins };
+  spreadPaths(index, dirty);
+  return { dirty, states, parts, nets, discretes, movedDiscretes, profilePins };
+}
+
+const NO_DISCRETES: readonly Discrete[] = [];
+
+/** True when a discrete changed only where the rules do not look (position, label). */
+function discreteMovedOnly(old: Discrete, now: Discrete): boolean {
+  const { position: _p, label: _l, ...a } = old;
+  const { position: _q, label: _m, ...b } = now;
+  return JSON.stringify(a) === JSON.stringify(b);
+}
+
+/** A dirty net re-checks every net that discretes join to it: each sees the others' pins. */
+function spreadPaths(index: DesignIndex, dirty: Dirty): void {
+  if (index.linksOfNet.size === 0) return;
+  const all = new Set<string>();
+  for (const n of dirty.nets) if (index.linksOfNet.has(n)) index.componentOf(n, all);
+  for (const n of all) dirty.nets.add(n);
 }
 
 /** A changed pin re-checks the net it is on, its (rail, profile) group, and itself if alone. */
@@ -374,6 +466,9 @@ function spreadPins(index: DesignIndex, dirty: Dirty): void {
 
 /** Brings the index from the old design to the new one; the dirty set then spreads to new places. */
 function advanceIndex(index: DesignIndex, design: Design, change: Change): void {
+  // Discretes leave while the nets are still the old ones, and come back once the new nets are in.
+  for (const [old] of change.discretes) if (old !== undefined) index.removeDiscrete(old);
+  for (const d of change.movedDiscretes) index.discretes.set(d.id, d);
   for (const [old, now] of change.parts) {
     if (old !== undefined && now !== undefined && movedOnly(old, now)) index.retargetPart(now);
     else {
@@ -384,7 +479,13 @@ function advanceIndex(index: DesignIndex, design: Design, change: Change): void 
   for (const key of change.profilePins) index.refreshPin(design, key);
   for (const [old] of change.nets) if (old !== undefined) index.removeNet(old);
   for (const [, now] of change.nets) if (now !== undefined) index.addNet(now);
+  for (const [, now] of change.discretes) {
+    if (now === undefined) continue;
+    index.addDiscrete(now);
+    for (const n of index.netsOfDiscrete(now)) if (n !== undefined) change.dirty.nets.add(n);
+  }
   spreadPins(index, change.dirty);
+  spreadPaths(index, change.dirty);
 }
 
 // ---------------------------------------------------------------------------------------------
@@ -429,6 +530,7 @@ function incrementalCheck(design: Design, prev: CheckResult, inner: Internals, s
   const base = recheckState(allOnCtx, index, dirty, previous(ALL_ON)!, undefined);
   const nets = new Map<string, NetTable>([[ALL_ON, base.nets]]);
   const lonePins = new Map<string, LoneTable>([[ALL_ON, base.lone]]);
+  const injection = new Map<string, readonly Finding[]>([[ALL_ON, injectionFindings(allOnCtx, index, base.nets)]]);
   let checked = base.checked;
   for (const state of scenarios) {
     const ctx = contextFor(design, state, index, rules);
@@ -438,10 +540,11 @@ function incrementalCheck(design: Design, prev: CheckResult, inner: Internals, s
       : recheckState(ctx, index, dirty, was, base);
     nets.set(state.id, s.nets);
     lonePins.set(state.id, s.lone);
+    injection.set(state.id, injectionFindings(ctx, index, s.nets));
     checked += s.checked;
   }
   const railFindings = checkGroups(allOnCtx, index, dirty.groups, prev.railFindings as LoneTable);
-  const result = makeResult(design, states, { nets, lonePins, railFindings }, { netsChecked: checked, incremental: true, ms: now() - started });
+  const result = makeResult(design, states, { nets, lonePins, railFindings, injection }, { netsChecked: checked, incremental: true, ms: now() - started });
   internals.set(result, { index, rules, consumed: false });
   return result;
 }

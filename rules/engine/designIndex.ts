@@ -4,7 +4,8 @@
  * a full check, then updated by the difference, so that no step of an incremental check is
  * quadratic in the design's size. What only a rail or profile edit needs is scanned then.
  */
-import type { Design, Net, Part, Pin } from '../model/schema.ts';
+import type { Design, Discrete, Net, Part, Pin } from '../model/schema.ts';
+import { DISCRETE_PINS } from '../model/schema.ts';
 import { resolution, type Resolution } from './resolve.ts';
 
 /** What the index remembers of a pin, to take it out again when the pin changes. */
@@ -70,6 +71,10 @@ export class DesignIndex {
   readonly groups = new Map<string, PinGroup>();
   /** Rail id → the (rail, profile) group keys on it. */
   readonly groupsOfRail = new Map<string, Set<string>>();
+  /** Discrete part id → the part (version 2: resistors, FET and diode shifters). */
+  readonly discretes = new Map<string, Discrete>();
+  /** Net id → the ids of the discretes with a pin on it. */
+  readonly linksOfNet = new Map<string, Set<string>>();
 
   /** An index of every part and net. */
   static build(design: Design): DesignIndex {
@@ -78,7 +83,50 @@ export class DesignIndex {
     // taken out again (on a board nearly every pin is on a net).
     for (const net of design.nets) index.addNet(net);
     for (const part of design.parts) index.addPart(design, part);
+    for (const d of design.discretes ?? []) index.addDiscrete(d);
     return index;
+  }
+
+  addDiscrete(d: Discrete): void {
+    this.discretes.set(d.id, d);
+    for (const pin of DISCRETE_PINS[d.kind]) {
+      const n = this.netOfPin.get(`${d.id}.${pin}`);
+      if (n !== undefined) addTo(this.linksOfNet, n, d.id);
+    }
+  }
+
+  removeDiscrete(d: Discrete): void {
+    if (this.discretes.get(d.id) === d) this.discretes.delete(d.id);
+    for (const pin of DISCRETE_PINS[d.kind]) {
+      const n = this.netOfPin.get(`${d.id}.${pin}`);
+      if (n !== undefined) removeFrom(this.linksOfNet, n, d.id);
+    }
+  }
+
+  /** The nets of a discrete's pins, by pin (undefined for a pin on no net). */
+  netsOfDiscrete(d: Discrete): (string | undefined)[] {
+    return DISCRETE_PINS[d.kind].map((pin) => this.netOfPin.get(`${d.id}.${pin}`));
+  }
+
+  /** Every net joined to `netId` through discrete parts, itself included (breadth first). */
+  componentOf(netId: string, into: Set<string> = new Set()): Set<string> {
+    if (into.has(netId)) return into;
+    into.add(netId);
+    const queue = [netId];
+    while (queue.length > 0) {
+      const n = queue.pop()!;
+      for (const id of this.linksOfNet.get(n) ?? []) {
+        const d = this.discretes.get(id);
+        if (d === undefined) continue;
+        for (const other of this.netsOfDiscrete(d)) {
+          if (other !== undefined && !into.has(other)) {
+            into.add(other);
+            queue.push(other);
+          }
+        }
+      }
+    }
+    return into;
   }
 
   addPart(design: Design, part: Part): void {
@@ -160,6 +208,10 @@ export class DesignIndex {
     for (const key of net.pins) {
       this.netOfPin.set(key, net.id);
       this.lone.delete(key);
+      if (this.discretes.size > 0) {
+        const id = key.slice(0, key.indexOf('.'));
+        if (this.discretes.has(id)) addTo(this.linksOfNet, net.id, id);
+      }
     }
   }
 
@@ -170,6 +222,7 @@ export class DesignIndex {
       this.netOfPin.delete(key);
       if (this.pins.has(key)) this.lone.add(key);
     }
+    this.linksOfNet.delete(net.id);
   }
 
   /**
@@ -185,6 +238,12 @@ export class DesignIndex {
       if (n !== undefined) nets.add(n);
     }
     for (const net of this.nets.values()) if (net.pull?.to === rail) nets.add(net.id);
+    // A resistor tied to the rail, a FET shifter's gate on it.
+    for (const d of this.discretes.values()) {
+      const on = d.kind === 'resistor' ? d.tie?.['1'] === rail || d.tie?.['2'] === rail : d.kind === 'fet-shifter' && d.gate === rail;
+      if (!on) continue;
+      for (const n of this.netsOfDiscrete(d)) if (n !== undefined) nets.add(n);
+    }
   }
 
   /** Keys of the pins whose effective profile id is this (scanned: design-local profiles change rarely). */

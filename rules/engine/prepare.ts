@@ -2,8 +2,9 @@
  * Preparing a net once per power state: its pins resolved, drivers and receivers by kind, pulls,
  * capacitance, load currents and the level analysis. Every rule reads this one view.
  */
-import type { Design, Net } from '../model/schema.ts';
+import type { Design, Discrete, Net } from '../model/schema.ts';
 import { analyseNet } from './analyse.ts';
+import { linkedRails, linksOf, nodeOf, pathEdgeOf, pathLoad, remoteDriversOf, remotePairs, shifterLoad, type PathSource } from './paths.ts';
 import { driverLoad } from './netMath.ts';
 import { GROUND } from './powerStates.ts';
 import { viewOf } from './resolve.ts';
@@ -25,16 +26,35 @@ export interface PrepareContext {
   readonly rails: RailStates;
   readonly settings: EffectiveSettings;
   readonly pinIndex: PinIndex;
+  /** The design's discretes and nets, for nets joined by them (version 2). */
+  readonly links?: {
+    readonly discretes: ReadonlyMap<string, Discrete>;
+    readonly linksOfNet: ReadonlyMap<string, ReadonlySet<string>>;
+    readonly netOfPin: ReadonlyMap<string, string>;
+    readonly nets: ReadonlyMap<string, Net>;
+  };
 }
 
-/** The prepared view of one net in one power state. */
-export function prepareNet(ctx: PrepareContext, net: Net): NetView {
-  const { settings } = ctx;
+const NONE: readonly never[] = Object.freeze([]);
+
+/** A shifter's pin on the other side. */
+const OTHER_PIN: Readonly<Record<string, string>> = { S: 'D', D: 'S', K: 'A', A: 'K' };
+
+function pinsOfNet(ctx: PrepareContext, net: Net): PinView[] {
   const pins: PinView[] = [];
   for (const key of net.pins) {
     const at = ctx.pinIndex.get(key);
     if (at !== undefined) pins.push(pinView(at, ctx.rails));
   }
+  return pins;
+}
+
+/** The prepared view of one net in one power state. */
+export function prepareNet(ctx: PrepareContext, net: Net): NetView {
+  const links = ctx.links;
+  if (links !== undefined && links.linksOfNet.has(net.id)) return prepareLinkedNet(ctx, net);
+  const { settings } = ctx;
+  const pins = pinsOfNet(ctx, net);
   const drivers = pins.filter((p) => p.powered && p.role !== 'input');
   const receivers = pins.filter((p) => p.powered && p.role !== 'output');
   const unpowered = pins.filter((p) => !p.powered);
@@ -59,7 +79,87 @@ export function prepareNet(ctx: PrepareContext, net: Net): NetView {
   const analysis = analyseNet({ pins, drivers, receivers, pulls, highFromPull, loads, rails, settings });
   return {
     net, state: ctx.state, settings, rails, pins, drivers, receivers, unpowered, pulls,
+    capacitance, highFromPull, loads, pinRails, analysis, shifters: NONE, remoteDrivers: NONE, pathRails: pinRails,
+  };
+}
+
+/**
+ * A net that discrete parts join to others: its own pulls include the resistors tied to a rail,
+ * its analysis adds the pairs whose driver reaches it through series resistors or a shifter, and
+ * its loads the currents a driver here delivers through them.
+ */
+function prepareLinkedNet(ctx: PrepareContext, net: Net): NetView {
+  const { settings } = ctx;
+  const links = ctx.links!;
+  const src: PathSource = {
+    ...links,
+    pinsOf: (n) => pinsOfNet(ctx, n),
+    wiring: settings.defaultWiringCapacitance,
+  };
+  const self = nodeOf(net, src);
+  const { pins, pulls, capacitance } = self;
+  const { path, shifters } = linksOf(net, self, src);
+  const drivers = pins.filter((p) => p.powered && p.role !== 'input');
+  const receivers = pins.filter((p) => p.powered && p.role !== 'output');
+  const unpowered = pins.filter((p) => !p.powered);
+  const highFromPull =
+    drivers.length > 0 && drivers.every((d) => d.drive === 'open-drain') && pulls.some((p) => p.to !== GROUND);
+
+  const ids: string[] = [];
+  for (const p of pins) if (!ids.includes(p.rail)) ids.push(p.rail);
+  for (const p of pulls) if (p.to !== GROUND && !ids.includes(p.to)) ids.push(p.to);
+  for (const id of linkedRails(path, shifters)) if (!ids.includes(id)) ids.push(id);
+  const rails = railsOf(ctx.rails, ids);
+
+  const loads = new Map<string, DriverLoad>();
+  for (const d of drivers) {
+    const own = driverLoad(d, pins, pulls, rails);
+    const through = path === undefined ? { high: 0, low: 0 } : pathLoad(path, d, rails);
+    let low = own.low + through.low;
+    for (const s of shifters) low += shifterLoad(s, d, rails);
+    loads.set(d.key, { high: own.high + through.high, low });
+  }
+  // Drivers on other nets, each with its load as its own net would give it.
+  const remoteLoad = (d: PinView): DriverLoad => {
+    const node = path?.nodes.find((n) => n.pins.includes(d)) ?? shifters.find((s) => s.other.pins.includes(d))?.other;
+    if (node === undefined) return { high: 0, low: 0 };
+    const own = driverLoad(d, node.pins, node.pulls, rails);
+    let high = own.high;
+    let low = own.low;
+    if (path !== undefined && path.nodes.includes(node)) {
+      const through = pathLoad({ ...path, self: path.nodes.indexOf(node) }, d, rails);
+      high += through.high;
+      low += through.low;
+    }
+    const link = shifters.find((s) => s.other === node);
+    if (link !== undefined) low += shifterLoad({ part: link.part, pin: OTHER_PIN[link.pin]!, other: link.self, self: link.other }, d, rails);
+    return { high, low };
+  };
+
+  const pinRails: string[] = [];
+  for (const p of pins) if (!pinRails.includes(p.rail)) pinRails.push(p.rail);
+  const pathRails = [...pinRails];
+  for (const n of [...(path?.nodes ?? []), ...shifters.map((s) => s.other)]) {
+    for (const p of n.pins) if (!pathRails.includes(p.rail)) pathRails.push(p.rail);
+  }
+
+  const local = analyseNet({ pins, drivers, receivers, pulls, highFromPull, loads, rails, settings });
+  const remote = remotePairs(path, shifters, rails, settings, remoteLoad);
+  let { worstHigh, worstLow } = local;
+  for (const pair of remote) {
+    if (pair.high !== null && (worstHigh === null || pair.high.margin < worstHigh)) worstHigh = pair.high.margin;
+    if (pair.low !== null && (worstLow === null || pair.low.margin < worstLow)) worstLow = pair.low.margin;
+  }
+  const analysis = remote.length === 0 ? local : { pairs: [...local.pairs, ...remote], worstHigh, worstLow };
+  const pathEdge = path === undefined ? undefined : pathEdgeOf(path, rails);
+  return {
+    net, state: ctx.state, settings, rails, pins, drivers, receivers, unpowered, pulls,
     capacitance, highFromPull, loads, pinRails, analysis,
+    ...(path === undefined ? {} : { path }),
+    shifters,
+    remoteDrivers: remoteDriversOf(path, shifters, rails),
+    ...(pathEdge === undefined ? {} : { pathEdge }),
+    pathRails,
   };
 }
 

@@ -2,7 +2,7 @@
  * The engine's prepared views and results. Everything here lives outside the design document:
  * the document stays plain (architecture.md, "The engine's contract").
  */
-import type { Design, Net, Params, Pin, PinDrive, PinRole, Profile, Pull, Rail, Scenario, Waiver } from '../model/schema.ts';
+import type { Design, Discrete, DiodeShifter, FetShifter, Net, Params, Pin, PinDrive, PinRole, Profile, Pull, Rail, Scenario, Waiver } from '../model/schema.ts';
 import type { RuleId } from '../model/ruleIds.ts';
 import type { Range } from '../levels/rails.ts';
 
@@ -46,8 +46,62 @@ export interface PullSource {
   readonly ohms: number;
   /** Rail id, or `ground`. */
   readonly to: string;
-  /** `net` for the net's own pull, else the pin key `PART.PIN` whose internal pull it is. */
+  /**
+   * `net` for the net's own pull, the pin key `PART.PIN` whose internal pull it is, or the id of a
+   * resistor (a discrete part) with one end on the net and the other tied to a rail or ground.
+   */
   readonly origin: string;
+  /** A resistor part's tolerance (fraction); a `pull` field is taken as exact. */
+  readonly tolerance?: number;
+  /** True for a resistor part: an external pull, as the net's own `pull` is. */
+  readonly resistor?: boolean;
+}
+
+/** A net joined to others by discrete parts: one node of a signal path. */
+export interface PathNode {
+  readonly netId: string;
+  readonly pins: readonly PinView[];
+  readonly pulls: readonly PullSource[];
+  /** Σ cin of the net's pins + its wiring capacitance, F. */
+  readonly capacitance: number;
+}
+
+/** A resistor in series between two nodes of a path (indices into `nodes`). */
+export interface SeriesResistor {
+  readonly id: string;
+  readonly a: number;
+  readonly b: number;
+  readonly ohms: number;
+  readonly tolerance: number;
+}
+
+/** The nets joined to a net by series resistors, solved together by nodal analysis. */
+export interface ResistorPath {
+  readonly nodes: readonly PathNode[];
+  readonly resistors: readonly SeriesResistor[];
+  /** The index of the net being judged. */
+  readonly self: number;
+}
+
+/** A FET or diode shifter between the net being judged and another net. */
+export interface ShifterLink {
+  readonly part: FetShifter | DiodeShifter;
+  /** The shifter's pin on the net being judged (`S`, `D`, `K` or `A`). */
+  readonly pin: string;
+  /** The net on its other pin; this net's own node is `self`. */
+  readonly other: PathNode;
+  readonly self: PathNode;
+}
+
+/** The 10–90 % edge at a net reached through series resistors from a driver on another net. */
+export interface PathEdge {
+  readonly driver: string;
+  /** Ω, the Thévenin resistance seen from the net with the driver's node and every rail at 0 V, resistors at their largest. */
+  readonly resistance: number;
+  readonly capacitance: number;
+  readonly riseTime: number;
+  /** V, the driver rail's lowest voltage. */
+  readonly swing: number;
 }
 
 /** Rail ranges in one power state (an off rail is 0 V). */
@@ -89,6 +143,16 @@ export interface NetView {
   readonly pinRails: readonly string[];
   /** The level analysis of every driver/receiver pair. */
   readonly analysis: NetAnalysis;
+  /** The nets joined to this one by series resistors (version 2), when there are any. */
+  readonly path?: ResistorPath;
+  /** FET and diode shifters with a pin on this net (version 2). */
+  readonly shifters: readonly ShifterLink[];
+  /** Powered drivers on other nets that reach this one through resistors or shifters. */
+  readonly remoteDrivers: readonly PinView[];
+  /** The slowest edge arriving through series resistors, when a driver reaches the net only that way. */
+  readonly pathEdge?: PathEdge;
+  /** Distinct rails of the pins on this net and on every net joined to it (for the crossing table). */
+  readonly pathRails: readonly string[];
 }
 
 export interface DriverLoad {
@@ -119,6 +183,15 @@ export interface RailView {
   readonly settings: EffectiveSettings;
 }
 
+/** The clamp currents into one rail in one power state (`rail-injection`). */
+export interface InjectionView {
+  readonly rail: Rail;
+  /** Each input's clamp current, sorted by pin key. */
+  readonly injected: readonly { readonly pin: string; readonly net: string; readonly current: number }[];
+  readonly state: PowerState;
+  readonly settings: EffectiveSettings;
+}
+
 export type PairStatus = 'pass' | 'warning' | 'fail';
 
 /** One side (high or low) of a driver/receiver pair at its worst corner. */
@@ -137,11 +210,15 @@ export interface LevelSide {
   readonly status: PairStatus;
   /** The load current the level was selected for, A. */
   readonly load: number;
+  /** Through a discrete part: the quantities its level came from (resistances, currents, k). */
+  readonly detail?: Readonly<Record<string, number>>;
 }
 
 export interface PairAnalysis {
   readonly driver: string;
   readonly receiver: string;
+  /** How the driver reaches the receiver: on one net, or through a discrete part (its id). */
+  readonly via?: string;
   readonly high: LevelSide | null;
   readonly low: LevelSide | null;
 }
@@ -197,6 +274,8 @@ export interface CheckResult {
   readonly lonePins: ReadonlyMap<string, ReadonlyMap<string, readonly Finding[]>>;
   /** Findings on rails (judged once, in `all-on`), per (rail, profile) group. */
   readonly railFindings: ReadonlyMap<string, readonly Finding[]>;
+  /** Findings on the clamp current into each rail, per power state id (version 2). */
+  readonly injectionFindings: ReadonlyMap<string, readonly Finding[]>;
   /** Every finding, in the report's order (built when first read). */
   readonly findings: readonly Finding[];
   readonly summary: Summary;
@@ -211,4 +290,4 @@ export interface CheckStats {
   readonly ms: number;
 }
 
-export type { Waiver };
+export type { Waiver, Discrete };

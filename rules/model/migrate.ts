@@ -16,8 +16,14 @@ export const CURRENT_VERSION: number = FORMAT_VERSION;
 
 type Step = (doc: Record<string, unknown>) => Record<string, unknown>;
 
-/** `STEPS[n]` turns a version-n document into a version-(n + 1) one. Empty in version 1. */
-const STEPS: Readonly<Record<number, Step>> = {};
+/**
+ * `STEPS[n]` turns a version-n document into a version-(n + 1) one.
+ * 1 → 2: version 2 only adds optional keys (discretes, new pin parameters, a rail's minLoad), and
+ * a v1 `pull` stays a pull (drawn as a resistor to its rail), so the step changes the number.
+ */
+const STEPS: Readonly<Record<number, Step>> = {
+  1: (doc) => ({ ...doc, version: 2 }),
+};
 
 /**
  * Bring a design document up to `CURRENT_VERSION`. A document that is not an object, has no

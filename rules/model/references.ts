@@ -136,11 +136,70 @@ function checkParts(ctx: Context, parts: readonly unknown[], profileIds: Readonl
   return pinsOf;
 }
 
+/** The pins of each discrete kind (schema.ts `DISCRETE_PINS`, repeated to keep this file free of zod). */
+const DISCRETE_PIN_IDS: Readonly<Record<string, readonly string[]>> = {
+  resistor: ['1', '2'],
+  'fet-shifter': ['S', 'D'],
+  'diode-shifter': ['K', 'A'],
+};
+
+/**
+ * Check the discretes (version 2): ids unique among parts and discretes, the rails a resistor's
+ * tie or a FET's gate names. Adds each discrete's pins to `pinsOf`; returns the pins a resistor
+ * ties to a rail (no net may also name them), with their places.
+ */
+function checkDiscretes(
+  ctx: Context,
+  discretes: readonly unknown[],
+  parts: readonly unknown[],
+  pinsOf: Map<string, Set<string>> | undefined,
+): Map<string, string> {
+  const tied = new Map<string, string>();
+  const partIds = new Map<string, number>();
+  parts.forEach((p, i) => {
+    const id = asString(asRecord(p) && own(asRecord(p)!, 'id'));
+    if (id !== undefined && !partIds.has(id)) partIds.set(id, i);
+  });
+  const seen = new Map<string, number>();
+  discretes.forEach((item, i) => {
+    const d = asRecord(item);
+    if (d === undefined) return;
+    const at = ['discretes', i] as const;
+    const id = asString(own(d, 'id'));
+    const kind = asString(own(d, 'kind'));
+    if (id !== undefined) {
+      if (partIds.has(id)) {
+        fail(ctx, [...at, 'id'], `duplicate id ${JSON.stringify(id)} (a part at parts[${partIds.get(id)}]): expected ids unique among parts and discretes`);
+      } else if (seen.has(id)) {
+        fail(ctx, [...at, 'id'], `duplicate id ${JSON.stringify(id)} (first at discretes[${seen.get(id)}]): expected ids unique among parts and discretes`);
+      } else {
+        seen.set(id, i);
+        const pins = kind === undefined ? undefined : DISCRETE_PIN_IDS[kind];
+        if (pins !== undefined && pinsOf !== undefined) pinsOf.set(id, new Set(pins));
+      }
+    }
+    if (kind === 'fet-shifter') checkRailRef(ctx, own(d, 'gate'), [...at, 'gate']);
+    const tie = asRecord(own(d, 'tie'));
+    if (kind === 'resistor' && tie !== undefined) {
+      for (const end of ['1', '2']) {
+        const to = asString(own(tie, end));
+        if (to === undefined) continue;
+        if (ctx.railIds !== undefined && to !== GROUND && !ctx.railIds.has(to)) {
+          fail(ctx, [...at, 'tie', end], `unknown rail ${JSON.stringify(to)}: expected "ground" or a rail id of this design (${listIds(ctx.railIds)})`);
+        }
+        if (id !== undefined) tied.set(`${id}.${end}`, formatPath([...at, 'tie', end]));
+      }
+    }
+  });
+  return tied;
+}
+
 function checkNets(
   ctx: Context,
   nets: readonly unknown[],
   pinsOf: ReadonlyMap<string, ReadonlySet<string>> | undefined,
   scenarioIds: ReadonlySet<string> | undefined,
+  tied: ReadonlyMap<string, string> = new Map(),
 ): void {
   const placed = new Map<string, string>();
   nets.forEach((item, i) => {
@@ -171,6 +230,11 @@ function checkNets(
       }
       if (!pins.has(pinId)) {
         fail(ctx, where, `part ${partId} has no pin ${JSON.stringify(pinId)}: expected one of its pins (${listIds(pins)})`);
+        return;
+      }
+      const tiedAt = tied.get(ref);
+      if (tiedAt !== undefined) {
+        fail(ctx, where, `pin ${ref} is tied at ${tiedAt}: expected a resistor's end on a net or tied, not both`);
         return;
       }
       const prior = placed.get(ref);
@@ -238,8 +302,10 @@ export function checkReferences(doc: unknown, builtinProfileIds: ReadonlySet<str
     uniqueIds(ctx, parts, ['parts'], 'part', 'among parts');
     pinsOf = checkParts(ctx, parts, profileIds);
   }
+  const discretes = listOr('discretes', true);
+  const tied = discretes === undefined ? new Map<string, string>() : checkDiscretes(ctx, discretes, parts ?? [], pinsOf);
 
   uniqueIds(ctx, nets, ['nets'], 'net', 'among nets');
-  checkNets(ctx, nets, pinsOf, scenarioIds);
+  checkNets(ctx, nets, pinsOf, scenarioIds, tied);
   return ctx.errors;
 }

@@ -1,5 +1,6 @@
 /**
- * The twelve rule ids of the catalogue (rules-catalogue.md), in catalogue order. The design
+ * The rule ids of the catalogue (rules-catalogue.md, and version 2's parts between chips), in
+ * catalogue order. The design
  * format needs them (a waiver names one, even of a rule not built yet); the check registry
  * must agree with this list (test/checks/registry.test.ts holds the two together).
  */
@@ -8,12 +9,18 @@ export const RULE_IDS = [
   'level-low',
   'overvoltage',
   'back-power',
+  'clamp-current',
+  'rail-injection',
+  'undervoltage',
   'drive-load',
   'edge-rate',
   'contention',
   'floating-input',
   'missing-pull',
   'pull-range',
+  'fet-shifter',
+  'translator-pull',
+  'bus-hold',
   'rail-range',
   'rail-crossing',
 ] as const;

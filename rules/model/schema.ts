@@ -1,5 +1,5 @@
 /**
- * Design file, version 1 (design-format.md): the one zod schema. The TypeScript types below
+ * Design file, version 2 (docs/design-format.md): the one zod schema. The TypeScript types below
  * and rules/schema/design.schema.json are both derived from it.
  *
  * The schema checks shape and local values; references between records (a net naming a pin,
@@ -15,7 +15,7 @@ import { describeValue } from './schemaIssues.ts';
 z.config({ jitless: true });
 
 export const FORMAT_ID = 'railcross.design';
-export const FORMAT_VERSION = 1;
+export const FORMAT_VERSION = 2;
 
 const nonNegative = (what: string) =>
   z.number().min(0, { message: `expected a ${what} of 0 or more` });
@@ -93,6 +93,16 @@ export const ParamsSchema = z.strictObject({
   ioMax: nonNegative('current (A)').optional(),
   maxInputRamp: nonNegative('ramp (s/V)').optional(),
   vddRange: VddRangeSchema.optional(),
+  // Version 2.
+  viMin: LevelSchema.optional(),
+  injectionMax: nonNegative('current (A)').optional(),
+  busHold: z.strictObject({
+    hold: nonNegative('current (A)'),
+    overdrive: nonNegative('current (A)'),
+  }).optional(),
+  seriesResistance: positive('resistance (Ω)').optional(),
+  minExternalPull: positive('resistance (Ω)').optional(),
+  maxLoadCapacitance: nonNegative('capacitance (F)').optional(),
 }).meta({ id: 'Params', description: 'Electrical parameters of a pin; each key is resolved on its own: pin params, part params, profile' });
 
 export const PullSchema = z.strictObject({
@@ -110,6 +120,7 @@ export const RailSchema = z.strictObject({
   min: z.number().optional(),
   max: z.number().optional(),
   colour: z.string().optional(),
+  minLoad: nonNegative('current (A)').optional(),
 }).meta({ id: 'Rail', description: 'A supply domain; range nominal × (1 ± tolerance), an explicit min or max wins for its end' });
 
 export const ScenarioSchema = z.strictObject({
@@ -149,6 +160,45 @@ export const PartSchema = z.strictObject({
   pins: z.array(PinSchema),
 }).meta({ id: 'Part', description: 'A chip or an off-board connector' });
 
+/** Where a resistor's end may go instead of a net: a rail id or `ground`. */
+const TieSchema = z.string().min(1, { message: 'expected a rail id or "ground"' });
+
+const DiscreteBase = {
+  id: id('part', false),
+  label: z.string().optional(),
+  position: PositionSchema.optional(),
+};
+
+export const ResistorSchema = z.strictObject({
+  ...DiscreteBase,
+  kind: z.literal('resistor'),
+  ohms: positive('resistance (Ω)'),
+  tolerance: nonNegative('tolerance (fraction)').optional(),
+  tie: z.strictObject({ '1': TieSchema.optional(), '2': TieSchema.optional() }).optional(),
+}).meta({ id: 'Resistor', description: 'A resistor with pins 1 and 2; an end in tie goes to a rail or ground instead of a net' });
+
+export const FetShifterSchema = z.strictObject({
+  ...DiscreteBase,
+  kind: z.literal('fet-shifter'),
+  gate: z.string().min(1, { message: 'expected a rail id' }),
+  vgsThMax: positive('threshold voltage (V)'),
+  rdsOnMax: nonNegative('resistance (Ω)'),
+}).meta({ id: 'FetShifter', description: 'A bidirectional N-MOSFET level shifter: pin S on the low side, pin D on the high side, the gate on a rail' });
+
+export const DiodeShifterSchema = z.strictObject({
+  ...DiscreteBase,
+  kind: z.literal('diode-shifter'),
+  vfMax: nonNegative('forward voltage (V)'),
+  leakageMax: nonNegative('current (A)'),
+}).meta({ id: 'DiodeShifter', description: 'A Schottky diode shifter: cathode K on the driver\'s net, anode A on the receiver\'s net, which has its own pull-up' });
+
+export const DiscreteSchema = z.discriminatedUnion('kind', [ResistorSchema, FetShifterSchema, DiodeShifterSchema], {
+  error: (iss) =>
+    iss.input === undefined
+      ? 'missing: expected "resistor", "fet-shifter" or "diode-shifter"'
+      : `expected "resistor", "fet-shifter" or "diode-shifter", found ${describeValue(iss.input)}`,
+}).meta({ id: 'Discrete', description: 'A part between chips: a resistor, a FET shifter or a diode shifter' });
+
 export const WaiverSchema = z.strictObject({
   rule: z.enum(RULE_IDS, { message: `expected a rule id: ${RULE_IDS.join(', ')}` }),
   scenario: z.string().optional(),
@@ -180,6 +230,7 @@ export const DesignSchema = z.strictObject({
   scenarios: z.array(ScenarioSchema).optional(),
   profiles: z.array(ProfileSchema).optional(),
   parts: z.array(PartSchema),
+  discretes: z.array(DiscreteSchema).optional(),
   nets: z.array(NetSchema),
 });
 
@@ -193,6 +244,21 @@ export type Net = z.infer<typeof NetSchema>;
 export type Params = z.infer<typeof ParamsSchema>;
 export type Pull = z.infer<typeof PullSchema>;
 export type Waiver = z.infer<typeof WaiverSchema>;
+export type Discrete = z.infer<typeof DiscreteSchema>;
+export type Resistor = z.infer<typeof ResistorSchema>;
+export type FetShifter = z.infer<typeof FetShifterSchema>;
+export type DiodeShifter = z.infer<typeof DiodeShifterSchema>;
+export type DiscreteKind = Discrete['kind'];
+
+/** The pins of each kind of discrete part, as nets name them (`R1.1`, `Q1.S`, `D1.K`). */
+export const DISCRETE_PINS: Readonly<Record<DiscreteKind, readonly string[]>> = {
+  resistor: ['1', '2'],
+  'fet-shifter': ['S', 'D'],
+  'diode-shifter': ['K', 'A'],
+};
+
+/** A resistor's tolerance when none is given (fraction). */
+export const DEFAULT_RESISTOR_TOLERANCE = 0.05;
 export type OutputPoint = z.infer<typeof OutputPointSchema>;
 export type Settings = z.infer<typeof SettingsSchema>;
 export type PinRole = Pin['role'];

@@ -111,7 +111,7 @@ export function issuesToErrors(root: z.ZodType, issues: readonly Issue[]): Locat
       const keys = allowedKeys(root, segments);
       const expected = keys ? `expected only ${keys.join(', ')}` : 'expected none';
       for (const key of iss.keys) {
-        out.push({ segments: [...segments, key], message: `unknown key ${JSON.stringify(key)} (version 1 has no such key): ${expected}` });
+        out.push({ segments: [...segments, key], message: `unknown key ${JSON.stringify(key)} (the format has no such key): ${expected}` });
       }
       continue;
     }

@@ -16,18 +16,21 @@ const leaf = (...keys: string[]): KeyOrder => ({ keys });
 
 const LEVEL_POINT = leaf('v', 'i');
 const PARAMS: KeyOrder = {
-  keys: ['vih', 'vil', 'schmitt', 'iih', 'iil', 'cin', 'viMax', 'unpoweredSafe', 'viMaxOff', 'voh', 'vol', 'ioMax', 'maxInputRamp', 'vddRange'],
-  children: { schmitt: leaf('vtPlus', 'vtMinus'), voh: LEVEL_POINT, vol: LEVEL_POINT },
+  keys: [
+    'vih', 'vil', 'schmitt', 'iih', 'iil', 'cin', 'viMax', 'unpoweredSafe', 'viMaxOff', 'voh', 'vol', 'ioMax', 'maxInputRamp', 'vddRange',
+    'viMin', 'injectionMax', 'busHold', 'seriesResistance', 'minExternalPull', 'maxLoadCapacitance',
+  ],
+  children: { schmitt: leaf('vtPlus', 'vtMinus'), voh: LEVEL_POINT, vol: LEVEL_POINT, busHold: leaf('hold', 'overdrive') },
 };
 const PULL = leaf('to', 'ohms');
 
 /** Key orders of design-format.md's tables; exported so a test can hold them to the schema. */
 export const KEY_ORDER = {
   design: {
-    keys: ['format', 'version', 'title', 'settings', 'rails', 'scenarios', 'profiles', 'parts', 'nets'],
+    keys: ['format', 'version', 'title', 'settings', 'rails', 'scenarios', 'profiles', 'parts', 'discretes', 'nets'],
     children: {
       settings: leaf('minMargin', 'defaultWiringCapacitance'),
-      rails: leaf('id', 'label', 'nominal', 'tolerance', 'min', 'max', 'colour'),
+      rails: leaf('id', 'label', 'nominal', 'tolerance', 'min', 'max', 'colour', 'minLoad'),
       scenarios: leaf('id', 'label', 'off'),
       profiles: { keys: ['id', 'label', 'source', 'params'], children: { params: PARAMS } },
       parts: {
@@ -40,6 +43,10 @@ export const KEY_ORDER = {
             children: { params: PARAMS, pull: PULL },
           },
         },
+      },
+      discretes: {
+        keys: ['id', 'kind', 'label', 'ohms', 'tolerance', 'tie', 'gate', 'vgsThMax', 'rdsOnMax', 'vfMax', 'leakageMax', 'position'],
+        children: { tie: leaf('1', '2'), position: leaf('x', 'y') },
       },
       nets: {
         keys: ['id', 'label', 'pins', 'pull', 'wiringCapacitance', 'maxRiseTime', 'waivers', 'route'],

@@ -9,7 +9,7 @@ import type { Design } from '../../rules/model/schema.ts';
 export function greenhouse(): Design {
   return {
     format: 'railcross.design',
-    version: 1,
+    version: 2,
     title: 'Greenhouse irrigation controller',
     settings: { minMargin: 0.25, defaultWiringCapacitance: 8e-12 },
     rails: [
@@ -99,6 +99,13 @@ export function greenhouse(): Design {
         pins: [{ id: 'PROBE', role: 'output', params: { voh: [{ v: 2.4, i: 1e-3 }], vol: [{ v: 0.5, i: 1e-3 }] } }],
       },
     ],
+    // Version 2: parts between chips (invented values).
+    discretes: [
+      { id: 'R9', kind: 'resistor', label: 'Probe series resistor', ohms: 1e3, tolerance: 0.01, position: { x: 10, y: 20 } },
+      { id: 'R10', kind: 'resistor', ohms: 47e3, tie: { '2': 'ground' } },
+      { id: 'Q1', kind: 'fet-shifter', gate: '1v8', vgsThMax: 1.0, rdsOnMax: 6 },
+      { id: 'D1', kind: 'diode-shifter', vfMax: 0.45, leakageMax: 5e-6 },
+    ],
     nets: [
       {
         id: 'I2C_SDA',
@@ -122,7 +129,7 @@ export function greenhouse(): Design {
         pull: { to: '3v3', ohms: 10e3 },
         waivers: [{ rule: 'level-high', note: 'reviewed' }, { rule: 'floating-input', scenario: 'all-on', note: 'reviewed' }],
       },
-      { id: 'PROBE', pins: ['J1.PROBE', 'U3.A1'], route: [['J1.PROBE', 'U3.A1']] },
+      { id: 'PROBE', pins: ['J1.PROBE', 'U3.A1', 'R10.1'], route: [['J1.PROBE', 'U3.A1']] },
       { id: 'PROBE_BUF', pins: ['U3.B1', 'U1.PROBE_IN', 'U4.DRDY'], route: [['U3.B1', 'U1.PROBE_IN'], ['U1.PROBE_IN', 'U4.DRDY']] },
     ],
   };

@@ -30,7 +30,7 @@ const partsWithPins = (d: Doc) => (d.parts as Doc[]).map((p, i) => [p, i] as con
 const corruptions: Corruption[] = [
   { name: 'not JSON', apply: (d, n) => { const t = JSON.stringify(d); return { path: '(root)', text: t.slice(0, n % t.length) }; } },
   { name: 'format wrong', apply: (d) => { d.format = 'railcross.report'; return { path: 'format' }; } },
-  { name: 'version wrong', apply: (d, n) => { d.version = [2, '1', null, 1.5][n % 4]; return { path: 'version' }; } },
+  { name: 'version wrong', apply: (d, n) => { d.version = [3, '1', null, 1.5][n % 4]; return { path: 'version' }; } },
   {
     name: 'missing required key',
     apply: (d, n) => {

@@ -17,11 +17,11 @@ describe('committed JSON Schema files', () => {
   it('the design schema names itself, is closed, and defines the records', () => {
     const s = designJsonSchema();
     expect(Object.keys(s).slice(0, 4)).toEqual(['$schema', '$id', 'title', 'description']);
-    expect(s.$id).toBe('urn:railcross:schema:design:1');
+    expect(s.$id).toBe('urn:railcross:schema:design:2');
     expect(s.additionalProperties).toBe(false);
     expect(s.required).toEqual(['format', 'version', 'title', 'rails', 'parts', 'nets']);
     expect(Object.keys(s.$defs as object).sort()).toEqual(
-      ['Level', 'Net', 'OutputPoint', 'Params', 'Part', 'Pin', 'Profile', 'Pull', 'Rail', 'Scenario', 'Waiver'],
+      ['DiodeShifter', 'Discrete', 'FetShifter', 'Level', 'Net', 'OutputPoint', 'Params', 'Part', 'Pin', 'Profile', 'Pull', 'Rail', 'Resistor', 'Scenario', 'Waiver'],
     );
   });
 });

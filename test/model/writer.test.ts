@@ -16,6 +16,9 @@ import {
   ScenarioSchema,
   SettingsSchema,
   WaiverSchema,
+  ResistorSchema,
+  FetShifterSchema,
+  DiodeShifterSchema,
   readDesign,
   writeDesign,
   type Design,
@@ -23,11 +26,11 @@ import {
 import { KEY_ORDER, type KeyOrder } from '../../rules/model/writer.ts';
 import { greenhouse } from './fixtures.ts';
 
-/** design-format.md's tables, in their row order (transcribed). */
+/** docs/design-format.md's tables, in their row order (transcribed; version 2). */
 const TABLE_ORDER: { name: string; order: KeyOrder | undefined; schema: z.ZodObject; keys: string[] }[] = [
-  { name: 'top level', order: KEY_ORDER.design, schema: DesignSchema, keys: ['format', 'version', 'title', 'settings', 'rails', 'scenarios', 'profiles', 'parts', 'nets'] },
+  { name: 'top level', order: KEY_ORDER.design, schema: DesignSchema, keys: ['format', 'version', 'title', 'settings', 'rails', 'scenarios', 'profiles', 'parts', 'discretes', 'nets'] },
   { name: 'settings', order: KEY_ORDER.design.children.settings, schema: SettingsSchema, keys: ['minMargin', 'defaultWiringCapacitance'] },
-  { name: 'rail', order: KEY_ORDER.design.children.rails, schema: RailSchema, keys: ['id', 'label', 'nominal', 'tolerance', 'min', 'max', 'colour'] },
+  { name: 'rail', order: KEY_ORDER.design.children.rails, schema: RailSchema, keys: ['id', 'label', 'nominal', 'tolerance', 'min', 'max', 'colour', 'minLoad'] },
   { name: 'scenario', order: KEY_ORDER.design.children.scenarios, schema: ScenarioSchema, keys: ['id', 'label', 'off'] },
   { name: 'part', order: KEY_ORDER.design.children.parts, schema: PartSchema, keys: ['id', 'label', 'rail', 'profile', 'params', 'position', 'pins'] },
   { name: 'pin', order: KEY_ORDER.design.children.parts.children.pins, schema: PinSchema, keys: ['id', 'role', 'drive', 'rail', 'profile', 'params', 'pull', 'side'] },
@@ -35,13 +38,32 @@ const TABLE_ORDER: { name: string; order: KeyOrder | undefined; schema: z.ZodObj
     name: 'params',
     order: KEY_ORDER.params,
     schema: ParamsSchema,
-    keys: ['vih', 'vil', 'schmitt', 'iih', 'iil', 'cin', 'viMax', 'unpoweredSafe', 'viMaxOff', 'voh', 'vol', 'ioMax', 'maxInputRamp', 'vddRange'],
+    keys: [
+      'vih', 'vil', 'schmitt', 'iih', 'iil', 'cin', 'viMax', 'unpoweredSafe', 'viMaxOff', 'voh', 'vol', 'ioMax', 'maxInputRamp', 'vddRange',
+      'viMin', 'injectionMax', 'busHold', 'seriesResistance', 'minExternalPull', 'maxLoadCapacitance',
+    ],
   },
   { name: 'pull', order: KEY_ORDER.design.children.nets.children.pull, schema: PullSchema, keys: ['to', 'ohms'] },
   { name: 'net', order: KEY_ORDER.design.children.nets, schema: NetSchema, keys: ['id', 'label', 'pins', 'pull', 'wiringCapacitance', 'maxRiseTime', 'waivers', 'route'] },
   { name: 'waiver', order: KEY_ORDER.design.children.nets.children.waivers, schema: WaiverSchema, keys: ['rule', 'scenario', 'note'] },
   { name: 'profile', order: KEY_ORDER.design.children.profiles, schema: ProfileSchema, keys: ['id', 'label', 'source', 'params'] },
 ];
+
+/** The discrete parts share one key order; each kind's schema has a subset of it. */
+const DISCRETE_ORDER = ['id', 'kind', 'label', 'ohms', 'tolerance', 'tie', 'gate', 'vgsThMax', 'rdsOnMax', 'vfMax', 'leakageMax', 'position'];
+
+describe('writeDesign key order of the discretes (version 2)', () => {
+  it('is the table order', () => {
+    expect(KEY_ORDER.design.children.discretes.keys).toEqual(DISCRETE_ORDER);
+  });
+  it.each([
+    { name: 'resistor', schema: ResistorSchema },
+    { name: 'fet-shifter', schema: FetShifterSchema },
+    { name: 'diode-shifter', schema: DiodeShifterSchema },
+  ])('$name: every key of its schema is in the order', ({ schema }) => {
+    for (const key of Object.keys(schema.shape)) expect(DISCRETE_ORDER).toContain(key);
+  });
+});
 
 describe('writeDesign key order', () => {
   it.each(TABLE_ORDER)('$name: the table order, and every key of the schema', ({ order, schema, keys }) => {
@@ -71,7 +93,7 @@ describe('writeDesign layout', () => {
 
   const cases: { name: string; holds: (t: string) => boolean }[] = [
     { name: 'ends with one newline', holds: (t) => t.endsWith('}\n') && !t.endsWith('\n\n') },
-    { name: 'two-space indentation', holds: (t) => t.includes('\n  "version": 1,\n') && t.includes('\n    {\n      "id": "5v0",') },
+    { name: 'two-space indentation', holds: (t) => t.includes('\n  "version": 2,\n') && t.includes('\n    {\n      "id": "5v0",') },
     { name: 'plain arrays on one line', holds: (t) => t.includes('"pins": ["U3.B1", "U1.PROBE_IN", "U4.DRDY"]') && t.includes('"vddRange": [4.5, 5.5]') },
     { name: 'route pairs one per line', holds: (t) => t.includes('"route": [\n        ["U3.B1", "U1.PROBE_IN"],\n        ["U1.PROBE_IN", "U4.DRDY"]\n      ]') },
     { name: 'numbers as JSON numbers (SI, no engineering notation)', holds: (t) => t.includes('"ohms": 4700') && t.includes('"maxRiseTime": 3e-7') },

@@ -238,7 +238,7 @@ export function designArb(options: DesignArbOptions = {}): fc.Arbitrary<Design> 
         return groupsArb.chain((groups) =>
           fc.tuple(...groups.map((pins, i) => netArb(`N${i + 1}`, pins, railIds, scenarioIds))).map((nets): Design => ({
             format: 'railcross.design',
-            version: 1,
+            version: 2,
             title: head.title,
             ...(head.settings === undefined ? {} : { settings: head.settings }),
             rails,

@@ -2,7 +2,7 @@
  * Small builders for test designs. They only fill in what the format requires, so that each
  * table case shows the few values it is about.
  */
-import type { Design, Net, Part, Pin, Rail, Scenario, Profile, Settings } from '../../rules/model/schema.ts';
+import type { Design, Discrete, Net, Part, Pin, Rail, Scenario, Profile, Settings } from '../../rules/model/schema.ts';
 
 /** Rails used across the tests: ±5 % unless a case says otherwise. */
 export const rail5v0: Rail = { id: '5v0', label: '5 V', nominal: 5, tolerance: 0.05 };
@@ -17,6 +17,7 @@ export function rail(id: string, nominal: number, extra: Partial<Rail> = {}): Ra
 export interface DesignSpec {
   rails?: Rail[];
   parts: Part[];
+  discretes?: Discrete[];
   nets?: Net[];
   scenarios?: Scenario[];
   profiles?: Profile[];
@@ -27,13 +28,14 @@ export interface DesignSpec {
 export function design(spec: DesignSpec): Design {
   return {
     format: 'railcross.design',
-    version: 1,
+    version: 2,
     title: spec.title ?? 'test',
     ...(spec.settings === undefined ? {} : { settings: spec.settings }),
     rails: spec.rails ?? [rail5v0, rail3v3, rail1v8],
     ...(spec.scenarios === undefined ? {} : { scenarios: spec.scenarios }),
     ...(spec.profiles === undefined ? {} : { profiles: spec.profiles }),
     parts: spec.parts,
+    ...(spec.discretes === undefined ? {} : { discretes: spec.discretes }),
     nets: spec.nets ?? [],
   };
 }
@@ -70,4 +72,19 @@ export function link(
     ],
     nets: [net('N', ['D.Y', 'R.A', ...extraPins], netExtra)],
   });
+}
+
+/** A resistor part; `tie` sends an end to a rail or ground instead of a net. */
+export function resistor(id: string, ohms: number, extra: Partial<Extract<Discrete, { kind: 'resistor' }>> = {}): Discrete {
+  return { id, kind: 'resistor', ohms, ...extra };
+}
+
+/** A bidirectional N-MOSFET shifter: S on the low side, D on the high side, the gate on `gate`. */
+export function fetShifter(id: string, gate: string, vgsThMax: number, rdsOnMax: number): Discrete {
+  return { id, kind: 'fet-shifter', gate, vgsThMax, rdsOnMax };
+}
+
+/** A Schottky diode shifter: K on the driver's net, A on the receiver's. */
+export function diodeShifter(id: string, vfMax: number, leakageMax: number): Discrete {
+  return { id, kind: 'diode-shifter', vfMax, leakageMax };
 }

@@ -154,7 +154,7 @@ export function generateDesign(seed: number, options: GeneratorOptions): Design 
   const nets = wiring === 'random' ? randomNets(r, pool) : boardNets(r, pool);
   return {
     format: 'railcross.design',
-    version: 1,
+    version: 2,
     title: `Synthetic design, ${options.parts} parts, seed ${seed}`,
     rails: RAILS.map((x) => ({ ...x })),
     scenarios: [{ id: 'standby', label: 'Standby: 1.8 V rail off', off: ['r1v8'] }],
