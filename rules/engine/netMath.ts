@@ -85,11 +85,13 @@ export function driverLoad(
   }
   for (const pull of pulls) {
     const end = pullEndRange(pull, rails);
+    // A resistor part at its low tolerance end draws the most (a `pull` field is exact).
+    const ohms = pull.ohms * (1 - (pull.tolerance ?? 0));
     // A pull whose end can sit below the driver's rail draws current from a high output.
     const below = pull.to === GROUND || rails.off.has(pull.to) || end.min < own.max;
-    if (below && pull.to !== driver.rail) high += (own.max - end.min) / pull.ohms;
+    if (below && pull.to !== driver.rail) high += (own.max - end.min) / ohms;
     // A pull to a powered rail feeds current into a low output.
-    if (pull.to !== GROUND && !rails.off.has(pull.to)) low += (end.max - volAtTop) / pull.ohms;
+    if (pull.to !== GROUND && !rails.off.has(pull.to)) low += (end.max - volAtTop) / ohms;
   }
   return { high, low };
 }

@@ -1,6 +1,7 @@
 import { expect } from 'vitest';
 import rule from '../../rules/checks/edge-rate.ts';
 import { ruleTester } from '../support/ruleTester.ts';
+import { divider } from '../support/paths.ts';
 import { bidir, design, input, link, net, output, part, rail, rail5v0, scenario } from '../support/build.ts';
 
 // Single-pole RC edge (common practice; the I2C-bus specification's 0.8473 for 30–70 %):
@@ -69,6 +70,16 @@ ruleTester(rule, {
     },
   ],
   invalid: [
+    {
+      // The divider edge: ln 9 · (R1‖R2) · C, each resistor at its +1 % end:
+      // 2.222 k‖3.333 k = 1.3332 kΩ, 10 pF: 29.3 ns (29 ns at the nominal 1.32 kΩ).
+      name: 'the edge through a 2.2 kΩ / 3.3 kΩ divider against a 20 ns limit',
+      design: divider({ maxRiseTime: 20e-9 }),
+      findings: [{
+        messageId: 'pathRiseSlow', severity: 'warning', id: 'edge-rate:RX33:all-on',
+        values: { resistance: (2222 * 3333) / 5555, capacitance: 10e-12, riseTime: Math.log(9) * ((2222 * 3333) / 5555) * 10e-12, span: '10-90', driver: 'U1.Y' },
+      }],
+    },
     {
       // I2C-bus specification, standard-mode: tr ≤ 1000 ns at Cb = 400 pF gives Rp(max) = 2950.6 Ω;
       // 3 kΩ is just too slow. C = 380 pF wiring + two 10 pF pins.

@@ -1,6 +1,7 @@
 import rule from '../../rules/checks/floating-input.ts';
 import { ruleTester } from '../support/ruleTester.ts';
-import { bidir, design, input, link, net, output, part, rail, rail3v3, rail5v0, scenario } from '../support/build.ts';
+import { bidir, design, input, link, net, output, part, rail, rail3v3, rail5v0, resistor, scenario } from '../support/build.ts';
+import { seriesClamp } from '../support/paths.ts';
 
 // Common practice: an unused or undriven CMOS input must be tied or pulled to a defined level.
 
@@ -20,6 +21,23 @@ function receiversOnly(extra: Parameters<typeof net>[2] = {}, more: { scenarios?
 ruleTester(rule, {
   valid: [
     { name: 'a driven input', design: link(hc, hc) },
+    { name: 'an input driven through a series resistor from another net', design: seriesClamp() },
+    {
+      name: 'a resistor part tied to ground holds the net',
+      design: design({
+        parts: [part('R', '5v0', '74hc', [input('A')])],
+        discretes: [resistor('R1', 10e3, { tie: { '2': 'ground' } })],
+        nets: [net('N', ['R.A', 'R1.1'])],
+      }),
+    },
+    {
+      // A bus-hold input keeps the net at its last level (datasheet convention, from memory).
+      name: 'a bus-hold input is not floating',
+      design: design({
+        parts: [part('R', '5v0', '74hc', [input('A', { params: { busHold: { hold: 75e-6, overdrive: 500e-6 } } })]), part('S', '5v0', '74hc', [input('A')])],
+        nets: [net('N', ['R.A', 'S.A'])],
+      }),
+    },
     { name: 'receivers held by the net\'s pull resistor', design: receiversOnly({ pull: { to: 'ground', ohms: 10e3 } }) },
     {
       name: 'a pull inside a pin counts as a pull',

@@ -1,6 +1,7 @@
 import rule from '../../rules/checks/overvoltage.ts';
 import { ruleTester } from '../support/ruleTester.ts';
 import { design, link, net, output, input, part, rail, rail3v3, scenario } from '../support/build.ts';
+import { divider, seriesClamp } from '../support/paths.ts';
 
 ruleTester(rule, {
   valid: [
@@ -38,8 +39,26 @@ ruleTester(rule, {
       name: 'a pull to ground never raises the net',
       design: link({ rail: '1v8', profile: 'lvcmos18' }, { rail: '1v8', profile: 'lvcmos18' }, { net: { pull: { to: 'ground', ohms: 10000 } } }),
     },
+    {
+      // The issue's divider: judged at 5.25 × 3.333/(2.178 + 3.333) = 3.175 V, below 3.135 + 0.5 V.
+      name: 'a 2.2 kΩ / 3.3 kΩ divider from 5 V into a 3.3 V input',
+      design: divider(),
+    },
+    {
+      name: 'a series resistor into a pin with an injection limit is clamp-current\'s to judge',
+      design: seriesClamp({ injectionMax: 5e-3 }),
+    },
   ],
   invalid: [
+    {
+      // Through 1 kΩ the open net still reaches 5.25 V; the clamp would carry (5.25 − 3.135)/950.
+      name: 'a series resistor into a pin that states no injection limit',
+      design: seriesClamp(),
+      findings: [{
+        messageId: 'throughResistance', severity: 'error', id: 'overvoltage:RX1:all-on:U2.A1',
+        values: { vNet: 5.25, viMax: 3.635, current: (5.25 - 3.135) / 950, source: 'U1.Y1' },
+      }],
+    },
     {
       // A CMOS input without tolerance: VDD + 0.5 V (the 3.3 V interface standards print this
       // form, restated), at the receiver rail's lowest 3.135 V, against the 5 V rail's 5.25 V.
