@@ -56,7 +56,7 @@ export default defineRule({
       // A source on the pin's own net has no resistance to limit it: overvoltage's to judge.
       const direct = worstExposure(pin, netSources(pin, view.drivers, view.pulls), view.rails, limit);
       if (direct !== undefined && exceeds(direct.vNet, direct.limit)) continue;
-      const far = pathExposure(view.path, pin, view.rails, limit, 'high');
+      const far = pathExposure(view.path, pin, view.rails, limit, 'high', `viMax:${String(viMax)}`);
       if (far === undefined || !exceeds(far.vNet, far.limit)) continue;
       const over = exceeds(far.current, injectionMax);
       const from = far.source === 'pulls' ? 'The pull-ups across the series resistors' : far.source;

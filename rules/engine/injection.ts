@@ -29,7 +29,7 @@ export function injectionsOf(view: NetView): readonly Injection[] {
       const limit = (vdd: number) => levelAt(viMax, vdd);
       const direct = worstExposure(pin, netSources(pin, view.drivers, view.pulls), view.rails, limit);
       if (direct !== undefined && exceeds(direct.vNet, direct.limit)) continue;
-      const far = pathExposure(view.path, pin, view.rails, limit, 'high');
+      const far = pathExposure(view.path, pin, view.rails, limit, 'high', `viMax:${String(viMax)}`);
       if (far !== undefined && exceeds(far.vNet, far.limit) && far.current > 0) out.push({ pin: pin.key, rail: pin.rail, current: far.current });
     }
   }

@@ -131,7 +131,9 @@ export function linksOf(net: Net, self: PathNode, src: PathSource): { path: Resi
     if (d === undefined || d.kind === 'resistor') continue;
     const x = across(d, net.id, src);
     if (x === undefined || !src.nets.has(x.other)) continue;
-    shifters.push({ part: d, pin: x.pin, other: nodeOf(src.nets.get(x.other)!, src), self });
+    // Only what the rules read: a shifter that moved on the canvas leaves its nets' views alone.
+    const { position: _p, label: _l, ...core } = d;
+    shifters.push({ part: core, pin: x.pin, other: nodeOf(src.nets.get(x.other)!, src), self });
   }
   return { path: resistors.length === 0 ? undefined : { nodes, resistors, self: 0 }, shifters };
 }
@@ -270,7 +272,7 @@ export function pathLoad(path: ResistorPath, driver: PinView, rails: RailStates)
   const d = path.self;
   let high = 0;
   let low = 0;
-  const railIds = pathRails(path);
+  const railIds = [driver.rail, ...pathPullRails(path)];
   for (const c of corners(railIds, rails.ranges)) {
     const vdd = c.get(driver.rail) ?? 0;
     for (const ohms of casesOf(path)) {
@@ -364,60 +366,82 @@ function resistorPairs(
 ): void {
   const self = path.nodes[path.self]!;
   const receivers = self.pins.filter((p) => p.powered && p.role !== 'output');
-  const railIds = pathRails(path);
-  const cornerList = corners(railIds, rails.ranges);
+  if (receivers.length === 0) return;
   const cases = casesOf(path);
+  const pullRailIds = pathPullRails(path);
   const hasPullUp = path.nodes.some((n) => n.pulls.some((p) => p.to !== GROUND && !rails.off.has(p.to)));
+  const via = path.resistors.map((r) => r.id).join('+');
   path.nodes.forEach((node, d) => {
     if (d === path.self) return;
     for (const driver of node.pins) {
       if (!driver.powered || driver.role === 'input') continue;
+      const rxs = receivers.filter((rx) => rx.partId !== driver.partId);
+      if (rxs.length === 0) continue;
       const load = loadOf(driver);
-      for (const rx of receivers) {
-        if (rx.partId === driver.partId) continue;
-        const vih = highThreshold(rx);
-        const vil = lowThreshold(rx);
-        let high: Scored | undefined;
-        let low: Scored | undefined;
-        for (const c of cornerList) {
-          const driverVdd = c.get(driver.rail) ?? 0;
-          const receiverVdd = c.get(rx.rail) ?? 0;
-          const vohLevel = driver.drive === 'open-drain' ? undefined : outputLevel(driver.params.voh, load.high, driverVdd, 'high');
-          const volLevel = outputLevel(driver.params.vol, load.low, driverVdd, 'low');
-          for (const ohms of cases) {
-            if (vih !== undefined && (vohLevel !== undefined || (driver.drive === 'open-drain' && hasPullUp))) {
-              const fixed: (number | undefined)[] = path.nodes.map(() => undefined);
-              if (vohLevel !== undefined) fixed[d] = vohLevel.v;
-              const v = solve(network(path, c, ohms, fixed, 'high', driver))[path.self];
-              if (v !== undefined) {
-                const threshold = levelAt(vih, receiverVdd);
-                high = keepWorst(high, {
+      const high: (Scored | undefined)[] = rxs.map(() => undefined);
+      const low: (Scored | undefined)[] = rxs.map(() => undefined);
+      const railIds = [driver.rail, ...rxs.map((rx) => rx.rail), ...pullRailIds];
+      const canHigh = driver.drive === 'open-drain' ? hasPullUp : driver.params.voh !== undefined && driver.params.voh.length > 0;
+      for (const c of corners(railIds, rails.ranges)) {
+        const driverVdd = c.get(driver.rail) ?? 0;
+        const vohLevel = driver.drive === 'open-drain' ? undefined : outputLevel(driver.params.voh, load.high, driverVdd, 'high');
+        const volLevel = outputLevel(driver.params.vol, load.low, driverVdd, 'low');
+        for (const ohms of cases) {
+          // One solve per case serves every receiver on the net: they share its voltage.
+          let vHigh: number | undefined;
+          if (canHigh) {
+            const fixed: (number | undefined)[] = path.nodes.map(() => undefined);
+            if (vohLevel !== undefined) fixed[d] = vohLevel.v;
+            vHigh = solve(network(path, c, ohms, fixed, 'high', driver))[path.self];
+          }
+          let vLow: number | undefined;
+          if (volLevel !== undefined) {
+            const fixed: (number | undefined)[] = path.nodes.map(() => undefined);
+            fixed[d] = volLevel.v;
+            vLow = solve(network(path, c, ohms, fixed, 'low', driver))[path.self];
+          }
+          rxs.forEach((rx, k) => {
+            const receiverVdd = c.get(rx.rail) ?? 0;
+            const vih = highThreshold(rx);
+            const vil = lowThreshold(rx);
+            if (vih !== undefined && vHigh !== undefined) {
+              const v = vHigh;
+              const threshold = levelAt(vih, receiverVdd);
+              if (high[k] === undefined || v - threshold < high[k]!.score) {
+                high[k] = {
                   out: v, threshold, margin: v - threshold, driverVdd: vohLevel === undefined ? null : driverVdd, receiverVdd,
                   estimate: vohLevel?.estimate ?? false, status: judge(v, threshold, settings.minMargin), load: load.high,
                   detail: { vSource: vohLevel?.v ?? 0, ...seriesDetail(path, ohms) }, score: v - threshold,
-                });
+                };
               }
             }
-            if (vil !== undefined && volLevel !== undefined) {
-              const fixed: (number | undefined)[] = path.nodes.map(() => undefined);
-              fixed[d] = volLevel.v;
-              const v = solve(network(path, c, ohms, fixed, 'low', driver))[path.self];
-              if (v !== undefined) {
-                const threshold = levelAt(vil, receiverVdd);
-                low = keepWorst(low, {
+            if (vil !== undefined && vLow !== undefined && volLevel !== undefined) {
+              const v = vLow;
+              const threshold = levelAt(vil, receiverVdd);
+              if (low[k] === undefined || threshold - v < low[k]!.score) {
+                low[k] = {
                   out: v, threshold, margin: threshold - v, driverVdd, receiverVdd, estimate: volLevel.estimate,
                   status: judge(threshold, v, settings.minMargin), load: load.low,
                   detail: { vSource: volLevel.v, ...seriesDetail(path, ohms) }, score: threshold - v,
-                });
+                };
               }
             }
-          }
+          });
         }
-        if (high === undefined && low === undefined) continue;
-        out.push({ driver: driver.key, receiver: rx.key, via: path.resistors.map((r) => r.id).join('+'), high: strip(high), low: strip(low) });
       }
+      rxs.forEach((rx, k) => {
+        if (high[k] === undefined && low[k] === undefined) return;
+        out.push({ driver: driver.key, receiver: rx.key, via, high: strip(high[k]), low: strip(low[k]) });
+      });
     }
   });
+}
+
+/** The rails of a path's pulls. */
+function pathPullRails(path: ResistorPath): string[] {
+  const ids: string[] = [];
+  for (const n of path.nodes) for (const p of n.pulls) if (p.to !== GROUND && !ids.includes(p.to)) ids.push(p.to);
+  return ids;
 }
 
 /** Each series resistor's value in the case, keyed `R:<id>`, Ω. */
@@ -559,7 +583,43 @@ export function pathExposure(
   rails: RailStates,
   limit: (pinVdd: number) => number,
   sense: 'high' | 'low',
+  /** Names the limit, so that rules judging the same limit share one computation. */
+  limitKey?: string,
 ): PathExposure | undefined {
+  if (limitKey === undefined) return exposureOf(path, pin, rails, limit, sense);
+  let memo = exposureMemo.get(path);
+  if (memo === undefined) exposureMemo.set(path, (memo = new Map()));
+  const key = `${pin.key}\u0000${sense}\u0000${limitKey}`;
+  if (memo.has(key)) return memo.get(key);
+  const made = exposureOf(path, pin, rails, limit, sense);
+  memo.set(key, made);
+  return made;
+}
+
+const exposureMemo = new WeakMap<ResistorPath, Map<string, PathExposure | undefined>>();
+
+function exposureOf(
+  path: ResistorPath,
+  pin: PinView,
+  rails: RailStates,
+  limit: (pinVdd: number) => number,
+  sense: 'high' | 'low',
+): PathExposure | undefined {
+  // With no input currents a free node lies between its sources' voltages: when no source can
+  // pass the limit at the pin rail's worst end, nothing needs solving.
+  const pinRange = rails.ranges.get(pin.rail) ?? { min: 0, max: 0 };
+  const limLow = Math.min(limit(pinRange.min), limit(pinRange.max));
+  const limHigh = Math.max(limit(pinRange.min), limit(pinRange.max));
+  let extreme = 0;
+  const see = (r: Range | undefined) => {
+    if (r === undefined) return;
+    extreme = sense === 'high' ? Math.max(extreme, r.max) : Math.min(extreme, r.min);
+  };
+  path.nodes.forEach((n, k) => {
+    for (const p of n.pulls) if (p.to !== GROUND) see(rails.ranges.get(p.to));
+    if (k !== path.self) for (const p of n.pins) if (p.powered && p.role !== 'input' && p.drive !== 'open-drain') see(rails.ranges.get(p.rail));
+  });
+  if (sense === 'high' ? !(extreme > limLow) : !(extreme < limHigh)) return undefined;
   const self = path.self;
   const sources: { key: string; node: number; rail: string | undefined }[] = [];
   path.nodes.forEach((n, k) => {

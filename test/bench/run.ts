@@ -20,7 +20,8 @@ const gc = (globalThis as { gc?: () => void }).gc;
 const round = (x: number, d = 3) => roundTo(x, d);
 
 function measure(parts: number) {
-  const design = generateDesign(20261202 + parts, { parts });
+  // Two nets in a hundred joined by a part between chips (a resistor, a FET or diode shifter).
+  const design = generateDesign(20261202 + parts, { parts, discretes: Number(process.env['BENCH_DISCRETES'] ?? 0.02) });
   const text = JSON.stringify(design);
   const reps = parts >= 10000 ? 7 : parts >= 1000 ? 15 : 41;
 

@@ -18,6 +18,7 @@ function comparable(r: CheckResult) {
     nets: new Map([...r.nets].map(([s, m]) => [s, new Map([...m].sort(([a], [b]) => (a < b ? -1 : 1)))])),
     lonePins: new Map([...r.lonePins].map(([s, m]) => [s, new Map([...m].sort(([a], [b]) => (a < b ? -1 : 1)))])),
     railFindings: new Map([...r.railFindings].sort(([a], [b]) => (a < b ? -1 : 1))),
+    injectionFindings: r.injectionFindings,
   };
 }
 
@@ -29,7 +30,10 @@ describe('incremental check', () => {
         fc.integer({ min: 3, max: 14 }),
         fc.array(fc.tuple(fc.constantFrom(...EDIT_KINDS), fc.integer({ min: 1, max: 2 ** 31 - 1 })), { minLength: 1, maxLength: 12 }),
         (seed, parts, edits) => {
-          let design = generateDesign(seed, { parts, faultRate: 0.3, wiring: seed % 2 === 0 ? 'random' : 'board' });
+          // Half the designs carry parts between chips (version 2), joining neighbouring nets.
+          let design = generateDesign(seed, {
+            parts, faultRate: 0.3, wiring: seed % 2 === 0 ? 'random' : 'board', discretes: seed % 3 === 0 ? 0 : 0.35,
+          });
           let result = check(design);
           for (const [kind, editSeed] of edits) {
             design = applyEdit(design, kind, rng(editSeed));

@@ -7,7 +7,7 @@
  * did not touch keeps its identity: that sharing is what the incremental check relies on.
  */
 import { produce } from 'immer';
-import type { Design, Net, Part, Pin, Rail } from '../../rules/model/schema.ts';
+import type { Design, Discrete, Net, Part, Pin, Rail } from '../../rules/model/schema.ts';
 
 /** mulberry32: a small, fast, seedable generator (public-domain algorithm). */
 export function rng(seed: number): () => number {
@@ -79,6 +79,50 @@ export interface GeneratorOptions {
    * (what the incremental property test wants).
    */
   wiring?: 'board' | 'random';
+  /**
+   * Share of neighbouring nets joined by a part between chips (version 2: a series resistor, a
+   * resistor tied to a rail or ground, a FET or a diode shifter); default 0. With any, a tenth of
+   * the input pins also get a version-2 parameter (injection limit, viMin, bus-hold).
+   */
+  discretes?: number;
+}
+
+let discreteSerial = 0;
+
+/** A random part between chips with its pins on nets `a` and `b` (pushed onto their pin lists). */
+function makeDiscrete(r: Rand, a: Net, b: Net, rails: readonly Rail[], id: string): Discrete {
+  const roll = r();
+  const tolerance = pick(r, [0, 0.01, 0.05]);
+  if (roll < 0.45) {
+    a.pins.push(`${id}.1`);
+    b.pins.push(`${id}.2`);
+    return { id, kind: 'resistor', ohms: pick(r, [100, 1000, 2200, 3300, 10000]), tolerance };
+  }
+  if (roll < 0.65) {
+    a.pins.push(`${id}.1`);
+    return { id, kind: 'resistor', ohms: pick(r, [1000, 4700, 10000]), tolerance, tie: { '2': r() < 0.3 ? 'ground' : pick(r, rails).id } };
+  }
+  if (roll < 0.85) {
+    a.pins.push(`${id}.S`);
+    b.pins.push(`${id}.D`);
+    return { id, kind: 'fet-shifter', gate: pick(r, rails).id, vgsThMax: pick(r, [0.9, 1.5]), rdsOnMax: pick(r, [2, 10]) };
+  }
+  a.pins.push(`${id}.K`);
+  b.pins.push(`${id}.A`);
+  return { id, kind: 'diode-shifter', vfMax: pick(r, [0.3, 0.45]), leakageMax: pick(r, [1e-6, 20e-6]) };
+}
+
+/** Version-2 pin parameters on some inputs. */
+function sprinkleParams(r: Rand, parts: Part[]): void {
+  for (const part of parts) {
+    for (const pin of part.pins) {
+      if (pin.role !== 'input' || r() >= 0.1) continue;
+      const roll = r();
+      pin.params = roll < 0.4 ? { injectionMax: pick(r, [1e-3, 5e-3]) }
+        : roll < 0.7 ? { viMin: -0.5 }
+          : { busHold: { hold: 75e-6, overdrive: 500e-6 } };
+    }
+  }
 }
 
 interface Dealt { key: string; pin: Pin; rail: string }
@@ -152,13 +196,25 @@ export function generateDesign(seed: number, options: GeneratorOptions): Design 
     [pool[k], pool[j]] = [pool[j]!, pool[k]!];
   }
   const nets = wiring === 'random' ? randomNets(r, pool) : boardNets(r, pool);
+  const rate = options.discretes ?? 0;
+  const discretes: Discrete[] = [];
+  const rails = RAILS.map((x) => ({ ...x }));
+  if (rate > 0) {
+    // Only with discretes asked for: the designs without them stay what they were.
+    for (let k = 0; k + 1 < nets.length; k++) {
+      if (r() < rate) discretes.push(makeDiscrete(r, nets[k]!, nets[k + 1]!, RAILS, `Z${discretes.length + 1}`));
+    }
+    sprinkleParams(r, parts);
+    rails[1] = { ...rails[1]!, minLoad: 5e-3 };
+  }
   return {
     format: 'railcross.design',
     version: 2,
     title: `Synthetic design, ${options.parts} parts, seed ${seed}`,
-    rails: RAILS.map((x) => ({ ...x })),
+    rails,
     scenarios: [{ id: 'standby', label: 'Standby: 1.8 V rail off', off: ['r1v8'] }],
     parts,
+    ...(discretes.length > 0 ? { discretes } : {}),
     nets,
   };
 }
@@ -166,6 +222,7 @@ export function generateDesign(seed: number, options: GeneratorOptions): Design 
 export const EDIT_KINDS = [
   'add-part', 'remove-part', 'connect', 'disconnect', 'move-part', 'rail-voltage',
   'switch-profile', 'add-waiver', 'rail-off', 'net-pull',
+  'add-discrete', 'remove-discrete', 'discrete-value', 'move-discrete',
 ] as const;
 export type EditKind = (typeof EDIT_KINDS)[number];
 
@@ -248,6 +305,48 @@ export function applyEdit(design: Design, kind: EditKind, r: Rand): Design {
         if (scenario === undefined) return;
         const rail = pick(r, d.rails).id;
         scenario.off = scenario.off.includes(rail) ? scenario.off.filter((x) => x !== rail) : [...scenario.off, rail];
+        return;
+      }
+      case 'add-discrete': {
+        if (d.nets.length < 2) return;
+        const a = pick(r, d.nets);
+        const b = pick(r, d.nets);
+        if (a === b) return;
+        discreteSerial++;
+        const made = makeDiscrete(r, a, b, d.rails, `W${discreteSerial}_${Math.floor(r() * 1e6)}`);
+        if (d.parts.some((p) => p.id === made.id) || (d.discretes ?? []).some((x) => x.id === made.id)) return;
+        d.discretes = [...(d.discretes ?? []), made];
+        return;
+      }
+      case 'remove-discrete': {
+        const list = d.discretes ?? [];
+        if (list.length === 0) return;
+        const k = Math.floor(r() * list.length);
+        const gone = list[k]!;
+        for (const pin of ['1', '2', 'S', 'D', 'K', 'A']) unplug(d, `${gone.id}.${pin}`);
+        list.splice(k, 1);
+        return;
+      }
+      case 'discrete-value': {
+        const list = d.discretes ?? [];
+        if (list.length === 0) return;
+        const x = pick(r, list);
+        if (x.kind === 'resistor') {
+          x.ohms = pick(r, [470, 1000, 2200, 4700, 47000]);
+          x.tolerance = pick(r, [0, 0.01, 0.05]);
+        } else if (x.kind === 'fet-shifter') {
+          x.vgsThMax = pick(r, [0.8, 1.2, 2]);
+          x.gate = pick(r, d.rails).id;
+        } else {
+          x.vfMax = pick(r, [0.2, 0.5]);
+        }
+        return;
+      }
+      case 'move-discrete': {
+        const list = d.discretes ?? [];
+        if (list.length === 0) return;
+        const x = pick(r, list);
+        x.position = { x: (x.position?.x ?? 0) + 10, y: 0 };
         return;
       }
       case 'net-pull': {
