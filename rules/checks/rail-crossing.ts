@@ -2,6 +2,7 @@
  * rail-crossing: every net that joins pins of different rails, with its worst margins, as one
  * row of the crossing table in each power state (rules-catalogue.md).
  */
+import { crossingRails } from '../engine/paths.ts';
 import { defineRule } from './defineRule.ts';
 import { volts } from './format.ts';
 import { partsOf } from './keys.ts';
@@ -32,8 +33,7 @@ export default defineRule({
     },
   },
   checkNet(view, report) {
-    const rails = view.pinRails.length >= 2 ? view.pinRails
-      : view.pathRails.length >= 2 && view.analysis.pairs.some((p) => p.via !== undefined) ? view.pathRails : undefined;
+    const rails = crossingRails(view);
     if (rails === undefined) return;
     const { worstHigh, worstLow } = view.analysis;
     const keys = view.pins.map((p) => p.key);

@@ -28,7 +28,7 @@ import { currentOut, solve, type Network } from './nodal.ts';
 import { pullEndVoltage } from './netMath.ts';
 import { GROUND } from './powerStates.ts';
 import type {
-  DriverLoad, EffectiveSettings, LevelSide, PairAnalysis, PairStatus, PathEdge, PathNode, PinView, PullSource,
+  DriverLoad, EffectiveSettings, LevelSide, NetView, PairAnalysis, PairStatus, PathEdge, PathNode, PinView, PullSource,
   RailStates, ResistorPath, SeriesResistor, ShifterLink,
 } from './types.ts';
 
@@ -706,6 +706,17 @@ export function pathEdgeOf(path: ResistorPath, rails: RailStates): PathEdge | un
     }
   });
   return slowest;
+}
+
+/**
+ * The rails a net crosses, for the crossing table: its own pins' when they differ, else, when a
+ * driver reaches it through a part between chips, those of every pin so joined; undefined when it
+ * crosses none.
+ */
+export function crossingRails(view: NetView): readonly string[] | undefined {
+  if (view.pinRails.length >= 2) return view.pinRails;
+  if (view.pathRails.length >= 2 && view.analysis.pairs.some((p) => p.via !== undefined)) return view.pathRails;
+  return undefined;
 }
 
 export type { FetShifter, DiodeShifter };

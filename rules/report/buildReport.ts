@@ -3,6 +3,7 @@
  * caller supplies the time, so that a report can be reproduced byte for byte.
  */
 import type { Design } from '../model/schema.ts';
+import { crossingRails } from '../engine/paths.ts';
 import type { CheckResult, Finding, PowerState, Severity } from '../engine/types.ts';
 import { summarize } from '../engine/findings.ts';
 import { lookupProfile } from '../engine/resolve.ts';
@@ -61,11 +62,12 @@ export function crossingRows(result: CheckResult, states: readonly PowerState[] 
       const r = perNet.get(design.id);
       if (r === undefined) continue;
       const { net, view, findings } = r;
-      if (view.pinRails.length < 2) continue;
+      const rails = crossingRails(view);
+      if (rails === undefined) continue;
       rows.push({
         net: net.id,
         label: net.label ?? net.id,
-        rails: [...view.pinRails],
+        rails: [...rails],
         scenario: state.id,
         marginHigh: view.analysis.worstHigh,
         marginLow: view.analysis.worstLow,
