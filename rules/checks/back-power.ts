@@ -54,7 +54,7 @@ export default defineRule({
   id: 'back-power',
   meta: {
     title: 'No current into unpowered chips',
-    severity: 'error',
+    severity: { error: '' },
     explanation:
       'When a rail is off, the chips on it sit at 0 V but their pins stay on the nets. Each such pin ' +
       'is compared with the highest voltage the net\'s live sources can apply (powered push-pull and ' +

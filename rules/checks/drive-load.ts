@@ -51,7 +51,7 @@ export default defineRule({
   id: 'drive-load',
   meta: {
     title: 'Drivers carry no more than their rated load',
-    severity: 'error',
+    severity: { error: '' },
     explanation:
       'Every other pin on a net draws its input current from the driver (iih when high, iil when low), ' +
       'and pull resistors add what flows through them. A driver\'s output levels are guaranteed only up ' +

@@ -90,7 +90,7 @@ export default defineRule({
   id: 'edge-rate',
   meta: {
     title: 'Edges are fast enough',
-    severity: 'warning',
+    severity: { warning: '' },
     explanation:
       'The rising edge is estimated as a single RC charge of the net\'s capacitance (the pins\' cin plus ' +
       'the wiring). On a net pulled high by resistors, R is the pulls\' Thévenin resistance and the rise ' +

@@ -28,7 +28,7 @@ export default defineRule({
   id: 'level-high',
   meta: {
     title: 'High level reaches the receiver',
-    severity: 'error when NMH < 0; warning when NMH < minMargin',
+    severity: { error: 'when NMH < 0', warning: 'when NMH < minMargin' },
     explanation:
       'For every powered driver and receiver on different parts, the lowest guaranteed output-high ' +
       'level (at the load the net puts on the driver, or the pull-up\'s level for an open-drain net) ' +

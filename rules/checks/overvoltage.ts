@@ -21,7 +21,7 @@ export default defineRule({
   id: 'overvoltage',
   meta: {
     title: 'No pin sees more than it may',
-    severity: 'error',
+    severity: { error: '' },
     explanation:
       'Every pin on a powered rail that has a viMax is compared with the highest voltage any other ' +
       'source on its net can apply: each powered push-pull or three-state driver\'s rail, and each ' +

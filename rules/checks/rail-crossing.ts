@@ -19,7 +19,7 @@ export default defineRule({
   id: 'rail-crossing',
   meta: {
     title: 'Nets that cross rails',
-    severity: 'info',
+    severity: { info: '' },
     explanation:
       'Every net whose pins sit on more than one rail is listed in each power state with its worst ' +
       'high and low margins, so that a review sees every crossing, passing or not. A pull ' +

@@ -21,7 +21,7 @@ export default defineRule({
   id: 'rail-range',
   meta: {
     title: 'Rails stay inside the families\' supply ranges',
-    severity: 'warning',
+    severity: { warning: '' },
     explanation:
       'A profile\'s levels hold only over its vddRange. Each rail is compared with the narrowest ' +
       'vddRange of the pins on it that use one profile; outside it, the profile\'s numbers are not ' +

@@ -58,7 +58,7 @@ export function prepareNet(ctx: PrepareContext, net: Net): NetView {
 
   const analysis = analyseNet({ pins, drivers, receivers, pulls, highFromPull, loads, rails, settings });
   return {
-    net, state: ctx.state, settings, rails, pins, drivers, receivers, unpowered, pulls,
+    net, settings, rails, pins, drivers, receivers, unpowered, pulls,
     capacitance, highFromPull, loads, pinRails, analysis,
   };
 }

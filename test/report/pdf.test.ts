@@ -164,7 +164,7 @@ describe.skipIf(!HAVE_POPPLER)('the example\'s PDF, read back with pdftotext', (
     for (const row of rows) {
       const state = made.report.scenarios.find((s) => s.id === row.scenario)!;
       expect(ladders, `${row.net} in ${row.scenario}`).toMatch(new RegExp(`${escapeRe(row.label)}\\s+· ${escapeRe(state.label)} \\(${escapeRe(row.scenario)}\\)`));
-      const ladder = ladderFor(result.nets.get(row.scenario)!.get(row.net)!.view);
+      const ladder = ladderFor(result.nets.get(row.scenario)!.get(row.net)!.view, result.states.find((s) => s.id === row.scenario)!);
       for (const m of ladder.margins) expect(ladders, `${m.kind} ${m.driver} → ${m.receiver}`).toContain(`${m.kind.toUpperCase()} ${marginVolts(m.margin)}`);
     }
     // The example's planted level-high error: VOH 2.935 V against VIH 3.694 V is NMH -0.759 V, marked FAIL in words.
