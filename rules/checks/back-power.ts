@@ -9,7 +9,7 @@ import { netSources, worstExposure, type NetSource } from '../engine/netMath.ts'
 import type { PinView, RailStates } from '../engine/types.ts';
 import { defineRule } from './defineRule.ts';
 import { volts } from './format.ts';
-import { partsOf } from './keys.ts';
+import { partsOfPins as partsOf } from '../model/pinKeys.ts';
 
 /**
  * An unpowered CMOS pin's clamp diode to its own rail starts to conduct around half a volt

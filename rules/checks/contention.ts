@@ -4,7 +4,7 @@
  */
 import type { PinDrive } from '../model/schema.ts';
 import { defineRule } from './defineRule.ts';
-import { partsOf } from './keys.ts';
+import { partsOfPins as partsOf } from '../model/pinKeys.ts';
 
 interface Data {
   drivers: string[];

@@ -7,7 +7,7 @@ import { exceeds } from '../levels/compare.ts';
 import { largestTestCurrent } from '../levels/output.ts';
 import { defineRule } from './defineRule.ts';
 import { amps } from './format.ts';
-import { partsOf } from './keys.ts';
+import { partsOfPins as partsOf } from '../model/pinKeys.ts';
 
 /** One side of a driver that is overloaded: its load and the limit it passes. */
 interface Overload {

@@ -4,7 +4,7 @@
  * on no net without an internal pull (rules-catalogue.md).
  */
 import { defineRule } from './defineRule.ts';
-import { partsOf } from './keys.ts';
+import { partsOfPins as partsOf } from '../model/pinKeys.ts';
 
 interface NetData {
   net: string;

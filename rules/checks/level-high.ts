@@ -4,7 +4,7 @@
  */
 import { defineRule } from './defineRule.ts';
 import { cornerText, volts } from './format.ts';
-import { partsOf } from './keys.ts';
+import { partsOfPins as partsOf } from '../model/pinKeys.ts';
 
 interface Data {
   driver: string;

@@ -5,7 +5,7 @@
  */
 import { GROUND } from '../engine/powerStates.ts';
 import { defineRule } from './defineRule.ts';
-import { partsOf } from './keys.ts';
+import { partsOfPins as partsOf } from '../model/pinKeys.ts';
 
 interface Data {
   net: string;

@@ -7,7 +7,7 @@ import { exceeds } from '../levels/compare.ts';
 import { netSources, worstExposure } from '../engine/netMath.ts';
 import { defineRule } from './defineRule.ts';
 import { volts } from './format.ts';
-import { partsOf } from './keys.ts';
+import { partsOfPins as partsOf } from '../model/pinKeys.ts';
 
 interface Data {
   pin: string;

@@ -15,7 +15,7 @@ import type { NetView, PinView } from '../engine/types.ts';
 import { RISE_30_70 } from '../levels/rc.ts';
 import { defineRule } from './defineRule.ts';
 import { ohms as fmtOhms } from './format.ts';
-import { partsOf } from './keys.ts';
+import { partsOfPins as partsOf } from '../model/pinKeys.ts';
 
 
 interface Data {

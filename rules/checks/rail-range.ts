@@ -5,7 +5,7 @@
 import { below, exceeds } from '../levels/compare.ts';
 import { defineRule } from './defineRule.ts';
 import { volts } from './format.ts';
-import { partsOf } from './keys.ts';
+import { partsOfPins as partsOf } from '../model/pinKeys.ts';
 
 interface Data {
   rail: string;
