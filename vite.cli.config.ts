@@ -1,0 +1,53 @@
+/**
+ * The command line's build: `vite build -c vite.cli.config.ts` bundles rules/cli/bin.ts and
+ * every module it needs (zod, jsPDF and its helpers included) into dist-cli/railcross.mjs for
+ * Node, and copies the PDF report's fonts beside it. The installed package then needs nothing
+ * but Node. The PDF writer stays a chunk of its own, loaded only for --pdf.
+ */
+import { copyFileSync, mkdirSync } from 'node:fs';
+import { createRequire } from 'node:module';
+import { dirname, join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { defineConfig, type Plugin } from 'vite';
+import { BUNDLED_FONT_FILES } from './rules/cli/fontFiles.ts';
+
+const root = dirname(fileURLToPath(import.meta.url));
+const outDir = join(root, 'dist-cli');
+const require = createRequire(import.meta.url);
+
+/** Copies the DejaVu TrueType files the PDF report embeds into dist-cli/fonts/. */
+function copyFonts(): Plugin {
+  return {
+    name: 'railcross-copy-fonts',
+    apply: 'build',
+    writeBundle() {
+      mkdirSync(join(outDir, 'fonts'), { recursive: true });
+      for (const file of BUNDLED_FONT_FILES) copyFileSync(require.resolve(`dejavu-fonts-ttf/ttf/${file}`), join(outDir, 'fonts', file));
+    },
+  };
+}
+
+export default defineConfig({
+  // The editor's plugins and public files play no part in the command.
+  plugins: [copyFonts()],
+  publicDir: false,
+  logLevel: 'warn',
+  ssr: { noExternal: true, target: 'node' },
+  build: {
+    ssr: 'rules/cli/bin.ts',
+    outDir,
+    emptyOutDir: true,
+    target: 'node20',
+    minify: true,
+    sourcemap: false,
+    reportCompressedSize: false,
+    rollupOptions: {
+      output: {
+        format: 'es',
+        entryFileNames: 'railcross.mjs',
+        chunkFileNames: 'chunks/[name]-[hash].mjs',
+        banner: '#!/usr/bin/env node',
+      },
+    },
+  },
+});
