@@ -277,7 +277,7 @@ async function runCheck(args: readonly string[], io: CliIo): Promise<number | Re
   if (options.out !== undefined) {
     const failed = write(io, options.out, json);
     if (failed !== undefined) return failed;
-    notes.push(`railcross: wrote the JSON report to ${options.out} (${sizeText(json.length)})`);
+    notes.push(`railcross: wrote the JSON report to ${options.out} (${sizeText(new TextEncoder().encode(json).length)})`);
   }
   // Written whatever the verdict: a failing design is when the PDF is most wanted.
   if (options.pdf !== undefined) {
