@@ -33,6 +33,9 @@ export default defineConfig({
   publicDir: false,
   logLevel: 'warn',
   ssr: { noExternal: true, target: 'node' },
+  resolve: {
+    alias: Object.fromEntries(['html2canvas', 'canvg', 'dompurify'].map((name) => [name, join(root, 'rules/cli/unavailable.ts')])),
+  },
   build: {
     ssr: 'rules/cli/bin.ts',
     outDir,

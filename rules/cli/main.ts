@@ -181,18 +181,25 @@ interface ReportSettings {
 }
 
 /** Checks a design as `check` does, with a power state and a minimum margin when asked. */
-function reportFor(design: Design, file: string, settings: ReportSettings): { design: Design; result: ReturnType<typeof check>; report: Report } | Refusal {
+function reportFor(
+  design: Design,
+  file: string,
+  settings: ReportSettings,
+  timing?: Timing,
+): { design: Design; result: ReturnType<typeof check>; report: Report } | Refusal {
   const states = [ALL_ON, ...(design.scenarios ?? []).map((s) => s.id)];
   if (settings.scenario !== undefined && !states.includes(settings.scenario)) {
     return refuse(`--scenario "${settings.scenario}" is not a power state of ${file}: expected one of ${states.join(', ')}`);
   }
   const checked = settings.minMargin === undefined ? design : { ...design, settings: { ...design.settings, minMargin: settings.minMargin } };
   const result = check(checked);
+  timing?.mark('check');
   const report = buildReport(checked, result, {
     failOn: settings.failOn,
     generatedAt: settings.generatedAt,
     ...(settings.scenario === undefined ? {} : { scenario: settings.scenario }),
   });
+  timing?.mark('report');
   return { design: checked, result, report };
 }
 
@@ -223,6 +230,25 @@ function loadReport(file: string, io: CliIo, settings: ReportSettings): Report |
 
 const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
 
+/**
+ * With `RAILCROSS_TIMING=1`, the command says on stderr how long each stage took (ms since the
+ * previous mark), so that a benchmark can see each stage as a cold process pays it.
+ */
+class Timing {
+  private last = performance.now();
+  private readonly stages: string[] = [];
+  constructor(private readonly on: boolean) {}
+  mark(stage: string): void {
+    if (!this.on) return;
+    const now = performance.now();
+    this.stages.push(`${stage}=${(now - this.last).toFixed(1)}`);
+    this.last = now;
+  }
+  flush(io: CliIo): void {
+    if (this.on) io.stderr(`railcross: timing ms ${this.stages.join(' ')}\n`);
+  }
+}
+
 /** Writes `data` to `path`, or the refusal that says why it could not. */
 function write(io: CliIo, path: string, data: string | Uint8Array): Refusal | undefined {
   try {
@@ -234,15 +260,17 @@ function write(io: CliIo, path: string, data: string | Uint8Array): Refusal | un
 }
 
 /** The PDF report's bytes; jsPDF is loaded only when a PDF is asked for (it is large, and slow to load). */
-async function pdfBytes(io: CliIo, design: Design, result: ReturnType<typeof check>, report: Report, paper: Paper): Promise<Uint8Array | Refusal> {
+async function pdfBytes(io: CliIo, design: Design, result: ReturnType<typeof check>, report: Report, paper: Paper, timing: Timing): Promise<Uint8Array | Refusal> {
   let fonts: PdfFonts;
   try {
     fonts = io.loadPdfFonts();
   } catch (error) {
     return refuse(`cannot read the PDF report's fonts (the dejavu-fonts-ttf package): ${error instanceof Error ? error.message : String(error)}`);
   }
+  timing.mark('pdf-read-fonts');
   const { writeReportPdf } = await import('../report/pdf/index.ts');
-  return writeReportPdf({ report, design, result, fonts, paper });
+  timing.mark('pdf-load');
+  return writeReportPdf({ report, design, result, fonts, paper, mark: (stage) => timing.mark(`pdf-${stage}`) });
 }
 
 /** `1.2 kB`, `205 kB`: a written file's size for the note that says so. */
@@ -255,10 +283,15 @@ async function runCheck(args: readonly string[], io: CliIo): Promise<number | Re
   if (options instanceof Refusal) return options;
   const time = generatedAt(io.env);
   if (time instanceof Refusal) return time;
-  const design = loadDesign(options.file, io);
+  const timing = new Timing(io.env['RAILCROSS_TIMING'] === '1');
+  const text = readText(options.file, io);
+  if (text instanceof Refusal) return text;
+  timing.mark('read');
+  const design = loadDesign(options.file, io, text);
   if (design instanceof Refusal) return design;
+  timing.mark('validate');
   const settings: ReportSettings = { failOn: options.failOn, generatedAt: time, scenario: options.scenario, minMargin: options.minMargin };
-  const built = reportFor(design, options.file, settings);
+  const built = reportFor(design, options.file, settings, timing);
   if (built instanceof Refusal) return built;
   const { report, result } = built;
 
@@ -273,7 +306,7 @@ async function runCheck(args: readonly string[], io: CliIo): Promise<number | Re
   // What was written is said on stderr, since stdout carries the report; with --quiet, stdout
   // carries only the verdict, and the notes join it there.
   const notes: string[] = [];
-  const json = reportJson(report);
+  const json = options.out !== undefined || options.format === 'json' ? reportJson(report) : '';
   if (options.out !== undefined) {
     const failed = write(io, options.out, json);
     if (failed !== undefined) return failed;
@@ -281,7 +314,7 @@ async function runCheck(args: readonly string[], io: CliIo): Promise<number | Re
   }
   // Written whatever the verdict: a failing design is when the PDF is most wanted.
   if (options.pdf !== undefined) {
-    const bytes = await pdfBytes(io, built.design, result, report, options.paper);
+    const bytes = await pdfBytes(io, built.design, result, report, options.paper, timing);
     if (bytes instanceof Refusal) return bytes;
     const failed = write(io, options.pdf, bytes);
     if (failed !== undefined) return failed;
@@ -290,10 +323,12 @@ async function runCheck(args: readonly string[], io: CliIo): Promise<number | Re
   const note = notes.length === 0 ? '' : `${notes.join('\n')}\n`;
   if (options.quiet) {
     io.stdout(`${judged.line}\n${note}`);
-    return judged.fails ? EXIT_FAIL : EXIT_PASS;
+  } else {
+    if (note !== '') io.stderr(note);
+    io.stdout(options.format === 'json' ? json : render(report, options, judged, baseline, design));
   }
-  if (note !== '') io.stderr(note);
-  io.stdout(render(report, options, judged, baseline, design));
+  timing.mark('render');
+  timing.flush(io);
   return judged.fails ? EXIT_FAIL : EXIT_PASS;
 }
 
