@@ -4,7 +4,7 @@
  * Node, and copies the PDF report's fonts beside it. The installed package then needs nothing
  * but Node. The PDF writer stays a chunk of its own, loaded only for --pdf.
  */
-import { copyFileSync, mkdirSync } from 'node:fs';
+import { chmodSync, copyFileSync, mkdirSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -15,21 +15,30 @@ const root = dirname(fileURLToPath(import.meta.url));
 const outDir = join(root, 'dist-cli');
 const require = createRequire(import.meta.url);
 
-/** Copies the DejaVu TrueType files the PDF report embeds into dist-cli/fonts/. */
-function copyFonts(): Plugin {
+/**
+ * Copies the DejaVu TrueType files the PDF report embeds into dist-cli/fonts/, and makes the
+ * command executable: `npm install` links package.json's "bin" before `prepare` builds it, so
+ * the file it would have marked executable does not exist yet.
+ */
+function finish(): Plugin {
+  let dir = outDir;
   return {
-    name: 'railcross-copy-fonts',
+    name: 'railcross-cli-finish',
     apply: 'build',
+    configResolved(config) {
+      dir = config.build.outDir;
+    },
     writeBundle() {
-      mkdirSync(join(outDir, 'fonts'), { recursive: true });
-      for (const file of BUNDLED_FONT_FILES) copyFileSync(require.resolve(`dejavu-fonts-ttf/ttf/${file}`), join(outDir, 'fonts', file));
+      mkdirSync(join(dir, 'fonts'), { recursive: true });
+      for (const file of BUNDLED_FONT_FILES) copyFileSync(require.resolve(`dejavu-fonts-ttf/ttf/${file}`), join(dir, 'fonts', file));
+      chmodSync(join(dir, 'railcross.mjs'), 0o755);
     },
   };
 }
 
 export default defineConfig({
   // The editor's plugins and public files play no part in the command.
-  plugins: [copyFonts()],
+  plugins: [finish()],
   publicDir: false,
   logLevel: 'warn',
   ssr: { noExternal: true, target: 'node' },
