@@ -20,7 +20,7 @@ import { REPORT_FORMAT_ID, ReportSchema, type FailOn, type Report } from '../rep
 import { renderSarif } from '../report/sarif.ts';
 import type { PdfFonts } from '../report/pdf/fonts.ts';
 import type { Paper } from '../report/pdf/theme.ts';
-import { verdict, type Verdict } from '../report/verdict.ts';
+import { plural, verdict, type Verdict } from '../report/verdict.ts';
 import { TOOL_NAME } from '../report/version.ts';
 import { parseArgs } from './args.ts';
 import { USAGE } from './usage.ts';
@@ -227,8 +227,6 @@ function loadReport(file: string, io: CliIo, settings: ReportSettings): Report |
   const built = reportFor(design, file, settings);
   return built instanceof Refusal ? built : built.report;
 }
-
-const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
 
 /**
  * With `RAILCROSS_TIMING=1`, the command says on stderr how long each stage took (ms since the
