@@ -1,7 +1,7 @@
 /**
  * The command line, callable in-process: `main(argv, io)` returns the exit status, and every
  * effect goes through `io`, so that tests need no child process. rules/cli/node.ts supplies
- * the real io; rules/cli/railcross.mjs is the `bin`.
+ * the real io; rules/cli/bin.ts is the entry of the built `bin` (dist-cli/railcross.mjs).
  */
 import { readDesign } from '../model/reader.ts';
 import type { Design } from '../model/schema.ts';

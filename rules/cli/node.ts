@@ -1,6 +1,6 @@
 /**
  * The command line's real io: files through node:fs, output through process. The only module
- * of the project, with rules/cli/railcross.mjs, that is bound to Node.
+ * of the project, with rules/cli/bin.ts (the built command's entry), that is bound to Node.
  */
 import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
