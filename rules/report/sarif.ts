@@ -40,12 +40,17 @@ function logicalLocations(f: ReportFinding): { name: string; fullyQualifiedName:
   return out;
 }
 
+/** A rule's name as SARIF wants it, an identifier without spaces: `level-high` → `LevelHigh`. */
+export function ruleName(id: string): string {
+  return id.split('-').map((w) => w.charAt(0).toUpperCase() + w.slice(1)).join('');
+}
+
 /** The report as a SARIF log object (serialize it with JSON.stringify). */
 export function toSarif(report: Report, options: SarifOptions): Record<string, unknown> {
   const ruleIndex = new Map<string, number>(RULE_IDS.map((id, k) => [id, k]));
   const rules = RULES.map((rule) => ({
     id: rule.id,
-    name: rule.meta.title,
+    name: ruleName(rule.id),
     shortDescription: { text: rule.meta.title },
     fullDescription: { text: rule.meta.explanation },
     help: { text: `${rule.meta.hint}\n\nSeverity: ${rule.meta.severity}` },

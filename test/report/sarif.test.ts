@@ -12,7 +12,7 @@ import type { Design } from '../../rules/model/schema.ts';
 import { baselineOf } from '../../rules/report/baseline.ts';
 import { buildReport } from '../../rules/report/buildReport.ts';
 import type { Report } from '../../rules/report/reportSchema.ts';
-import { fileUri, renderSarif, toSarif } from '../../rules/report/sarif.ts';
+import { fileUri, renderSarif, ruleName, toSarif } from '../../rules/report/sarif.ts';
 import { FIXED_TIME, greenhouse } from './fixtures.ts';
 
 const NOTE = 'U3 reads EN through a 5 V-tolerant buffer fitted later | rev C';
@@ -134,6 +134,14 @@ describe('SARIF details', () => {
     const log = toSarif(reportOf(greenhouse()), { file: 'a.json' }) as unknown as SarifLog;
     log.runs[0]!.results[0]!.level = 'fatal';
     expect(validate(log)).toBe(false);
+  });
+
+  it.each([
+    ['level-high', 'LevelHigh'],
+    ['floating-input', 'FloatingInput'],
+    ['overvoltage', 'Overvoltage'],
+  ])('ruleName: %s → %s', (id, name) => {
+    expect(ruleName(id)).toBe(name);
   });
 
   it.each([
