@@ -262,7 +262,8 @@ describe.skipIf(!HAVE_POPPLER)('names with markup and unusual characters come ou
   });
 });
 
-describe.skipIf(!HAVE_POPPLER)('page size', () => {
+// Writing the example's PDF takes seconds of CPU on a loaded machine: a generous timeout, never the idle machine's 5 s.
+describe.skipIf(!HAVE_POPPLER)('page size', { timeout: 120_000 }, () => {
   /** Every distinct MediaBox of the file, `w×h` in points to 0.01 pt. */
   const boxes = (bytes: Uint8Array) => [
     ...new Set([...latin1(bytes).matchAll(/\/MediaBox \[0 0 ([\d.]+) ([\d.]+)\]/g)].map((m) => `${Number(Number(m[1]).toFixed(2))}×${Number(Number(m[2]).toFixed(2))}`)),
@@ -286,7 +287,7 @@ describe.skipIf(!HAVE_POPPLER)('page size', () => {
   });
 });
 
-describe('writeReportPdf', () => {
+describe('writeReportPdf', { timeout: 120_000 }, () => {
   it('the same report gives the same bytes (reproducible with SOURCE_DATE_EPOCH)', () => {
     const d = greenhouse();
     const a = make(d).bytes;
