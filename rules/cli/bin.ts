@@ -1,5 +1,5 @@
 /**
- * The entry of the built command (dist-cli/railcross.mjs, package.json "bin"): vite.cli.config.ts
+ * The entry of the built command (dist-cli/railcross.mjs, package.json "bin"): rules/cli/vite.config.ts
  * bundles this file and everything it imports into plain JavaScript, so no transpiler runs when
  * the command does.
  */

@@ -1,5 +1,5 @@
 /**
- * The command line's build: `vite build -c vite.cli.config.ts` bundles rules/cli/bin.ts and
+ * The command line's build: `vite build -c rules/cli/vite.config.ts` bundles rules/cli/bin.ts and
  * every module it needs (zod, jsPDF and its helpers included) into dist-cli/railcross.mjs for
  * Node, and copies the PDF report's fonts beside it. The installed package then needs nothing
  * but Node. The PDF writer stays a chunk of its own, loaded only for --pdf.
@@ -9,9 +9,10 @@ import { createRequire } from 'node:module';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { defineConfig, type Plugin } from 'vite';
-import { BUNDLED_FONT_FILES } from './rules/cli/fontFiles.ts';
+import { BUNDLED_FONT_FILES } from './fontFiles.ts';
 
-const root = dirname(fileURLToPath(import.meta.url));
+// The repository's root: this file sits in rules/cli/.
+const root = join(dirname(fileURLToPath(import.meta.url)), '..', '..');
 const outDir = join(root, 'dist-cli');
 const require = createRequire(import.meta.url);
 
@@ -39,6 +40,7 @@ function finish(): Plugin {
 export default defineConfig({
   // The editor's plugins and public files play no part in the command.
   plugins: [finish()],
+  root,
   publicDir: false,
   logLevel: 'warn',
   ssr: { noExternal: true, target: 'node' },
