@@ -197,6 +197,18 @@ test('Export: the JSON report holds to the report schema and carries the finding
   expect(problems).toEqual([]);
 });
 
+test('Export: the Markdown report, as the command line prints it', async ({ page }) => {
+  const problems = watch(page);
+  await start(page);
+  const download = await exportAs(page, 'export-report-md');
+  expect(download.suggestedFilename()).toBe('greenhouse-irrigation-controller-report.md');
+  const text = (await bytesOf(download)).toString('utf8');
+  expect(text).toMatch(/^# Railcross check: Greenhouse irrigation controller\n/);
+  expect(text).toMatch(/^\*\*FAIL\*\*:/m);
+  expect(text).toMatch(/^\| error \| `level-high` \| `VALVE_EN` \| `all-on` \|/m);
+  expect(problems).toEqual([]);
+});
+
 test('Export: the PDF report shows its progress and holds the findings', async ({ page }) => {
   const problems = watch(page);
   await start(page);

@@ -1,4 +1,5 @@
 /** Placing parts from the palette and bringing things into view: canvas actions other panels call. */
+import { partOfPin } from '../../rules/model/pinKeys.ts';
 import { useCallback } from 'react';
 import { useReactFlow } from '@xyflow/react';
 import type { Part } from '../../rules/model/schema.ts';
@@ -81,7 +82,7 @@ export function useFocus() {
       let ids: string[];
       if ('net' in target) {
         const net = design.nets.find((n) => n.id === target.net);
-        ids = [...new Set((net?.pins ?? []).map((k) => k.slice(0, k.indexOf('.'))))];
+        ids = [...new Set((net?.pins ?? []).map(partOfPin))];
       } else ids = 'part' in target ? [target.part] : [...target.parts];
       if (ids.length === 0) return;
       // includeHiddenNodes: see fitViewOptions.

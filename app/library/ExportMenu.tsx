@@ -1,7 +1,7 @@
-/** The top bar's Export menu: the design file, and the report as JSON or PDF. */
+/** The top bar's Export menu: the design file, and the report as JSON, Markdown or PDF. */
 import { useEffect, useRef, useState } from 'react';
 import { exportDesignFile } from './download.ts';
-import { exportReportJson, exportReportPdf } from './reportExport.ts';
+import { exportReportJson, exportReportMarkdown, exportReportPdf } from './reportExport.ts';
 import { useSession, useSessionState } from './SessionProvider.tsx';
 
 export function ExportMenu() {
@@ -53,6 +53,9 @@ export function ExportMenu() {
           </button>
           <button type="button" role="menuitem" data-testid="export-report-json" onClick={run(() => exportReportJson(session))}>
             Report (JSON) <span className="rc-menu-note">for scripts and reviews</span>
+          </button>
+          <button type="button" role="menuitem" data-testid="export-report-md" onClick={run(() => exportReportMarkdown(session))}>
+            Report (Markdown) <span className="rc-menu-note">for a review or pull request</span>
           </button>
           <button type="button" role="menuitem" data-testid="export-report-pdf" disabled={busy} onClick={run(() => void exportReportPdf(session))}>
             Report (PDF) <span className="rc-menu-note">to print or send</span>

@@ -1,14 +1,16 @@
 /**
  * The editor's report exports (report-format.md): the JSON report of the open design and its
- * check result, held to the report schema before it is written, and the PDF, whose writer
+ * check result, held to the report schema before it is written, the same report as Markdown
+ * (what `railcross check --format md` prints), and the PDF, whose writer
  * (jsPDF and the fonts, about 2 MB) is loaded only when asked for.
  */
 import type { CheckResult } from '../../rules/engine/types.ts';
 import type { Design } from '../../rules/model/schema.ts';
 import { buildReport } from '../../rules/report/buildReport.ts';
 import { reportPdfFileName } from '../../rules/report/pdf/fileName.ts';
+import { renderMarkdown } from '../../rules/report/renderMarkdown.ts';
 import { ReportSchema, type Report } from '../../rules/report/reportSchema.ts';
-import { reportJsonFileName } from '../storage/designFile.ts';
+import { reportJsonFileName, reportMarkdownFileName } from '../storage/designFile.ts';
 import { downloadFile } from './download.ts';
 import type { Session } from './session.ts';
 
@@ -37,6 +39,21 @@ export function exportReportJson(session: Session): void {
   const built = buildEditorReport(design, result);
   if (!built.ok) return refused(session, 'JSON report', built.errors);
   downloadFile(reportJsonFileName(design.title), `${JSON.stringify(built.report, null, 2)}\n`, 'application/json');
+}
+
+/** "Export → Report (Markdown)": the text and file name it writes, or why it could not. */
+export function editorReportMarkdown(design: Design, result: CheckResult, now = new Date()): { ok: true; name: string; text: string } | { ok: false; errors: readonly string[] } {
+  const built = buildEditorReport(design, result, now);
+  if (!built.ok) return built;
+  return { ok: true, name: reportMarkdownFileName(design.title), text: renderMarkdown(built.report) };
+}
+
+/** "Export → Report (Markdown)". */
+export function exportReportMarkdown(session: Session): void {
+  const { design, result } = session.editor.getState();
+  const made = editorReportMarkdown(design, result);
+  if (!made.ok) return refused(session, 'Markdown report', made.errors);
+  downloadFile(made.name, made.text, 'text/markdown');
 }
 
 /** Let the browser paint the progress indication before a long step. */

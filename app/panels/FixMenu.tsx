@@ -7,7 +7,7 @@
 import { useMemo, useState } from 'react';
 import type { Finding, Summary } from '../../rules/engine/types.ts';
 import { SeverityGlyph } from '../canvas/SeverityGlyph.tsx';
-import { applyFix, fixesFor, previewFix, type FixPreview, type QuickFix } from '../store/commands/fixes/index.ts';
+import { applyFix, fixesFor, mayHaveFixes, previewFix, type FixPreview, type QuickFix } from '../store/commands/fixes/index.ts';
 import { useEditorStore } from '../store/EditorProvider.tsx';
 import './explain.css';
 
@@ -69,9 +69,6 @@ function FixOption({ fix, onApplied }: { fix: QuickFix; onApplied: (before: Summ
   );
 }
 
-/** Rules with a mechanical remedy; the others (drive-load, edge-rate, rail-range, …) have none. */
-const MAY_HAVE_FIXES = new Set(['level-high', 'level-low', 'overvoltage', 'back-power', 'missing-pull', 'pull-range', 'floating-input', 'contention']);
-
 /** "Fix…" beside a finding whose rule has a mechanical remedy. */
 export function FixMenu({ finding }: { finding: Finding }) {
   const store = useEditorStore();
@@ -82,11 +79,7 @@ export function FixMenu({ finding }: { finding: Finding }) {
     const s = store.getState();
     return fixesFor(finding, s.design, s.result);
   }, [open, finding, store]);
-  if (finding.waived !== undefined || !MAY_HAVE_FIXES.has(finding.rule)) return null;
-  if (finding.rule === 'pull-range' && finding.severity !== 'error') return null;
-  // Contention has a remedy only between three-state drivers (a waiver once the enables are
-  // known to be exclusive); two push-pull outputs on one net need a design change.
-  if (finding.rule === 'contention' && finding.messageId !== 'enablesNeeded') return null;
+  if (!mayHaveFixes(finding)) return null;
   if (!open) {
     return (
       <button type="button" className="rc-link" data-testid="fix-open" aria-expanded="false" onClick={() => setOpen(true)}>

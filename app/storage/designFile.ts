@@ -40,6 +40,11 @@ export function reportJsonFileName(title: string): string {
   return `${slugOf(title, 'railcross')}-report.json`;
 }
 
+/** `greenhouse-irrigation-controller-report.md`: the Markdown report, for a review or a pull request. */
+export function reportMarkdownFileName(title: string): string {
+  return `${slugOf(title, 'railcross')}-report.md`;
+}
+
 /** The text "Export design" writes: the canonical writer's (stable key order, final newline). */
 export function designFileText(design: Design): string {
   return writeDesign(design);

@@ -10,7 +10,7 @@ import { pathExposure } from '../engine/paths.ts';
 import type { PinView, RailStates } from '../engine/types.ts';
 import { defineRule } from './defineRule.ts';
 import { amps, volts } from './format.ts';
-import { partsOf } from './keys.ts';
+import { partsOfPins as partsOf } from '../model/pinKeys.ts';
 
 /**
  * An unpowered CMOS pin's clamp diode to its own rail starts to conduct around half a volt
@@ -55,7 +55,7 @@ export default defineRule({
   id: 'back-power',
   meta: {
     title: 'No current into unpowered chips',
-    severity: 'error',
+    severity: { error: '' },
     explanation:
       'When a rail is off, the chips on it sit at 0 V but their pins stay on the nets. Each such pin ' +
       'is compared with the highest voltage the net\'s live sources can apply (powered push-pull and ' +

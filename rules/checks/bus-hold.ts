@@ -13,7 +13,7 @@ import { pullEndVoltage } from '../engine/netMath.ts';
 import { GROUND } from '../engine/powerStates.ts';
 import { defineRule } from './defineRule.ts';
 import { amps, ohms } from './format.ts';
-import { partsOf } from './keys.ts';
+import { partsOfPins as partsOf } from '../model/pinKeys.ts';
 
 interface Data {
   net: string;
@@ -28,7 +28,7 @@ export default defineRule({
   id: 'bus-hold',
   meta: {
     title: 'Straps overdrive bus-hold inputs',
-    severity: 'error',
+    severity: { error: '' },
     explanation:
       'A bus-hold input is never floating: a weak latch keeps the net at its last level (so floating-input ' +
       'does not report it). A strap resistor meant to set the level while nothing drives the net must ' +

@@ -9,7 +9,7 @@ import { netSources, worstExposure } from '../engine/netMath.ts';
 import { pathExposure } from '../engine/paths.ts';
 import { defineRule } from './defineRule.ts';
 import { amps, volts } from './format.ts';
-import { partsOf } from './keys.ts';
+import { partsOfPins as partsOf } from '../model/pinKeys.ts';
 
 interface Data {
   pin: string;
@@ -25,7 +25,7 @@ export default defineRule({
   id: 'clamp-current',
   meta: {
     title: 'Clamp currents through series resistors stay within the pin\'s limit',
-    severity: 'error above the pin\'s injection-current limit; info with the current when within it',
+    severity: { error: 'above the pin\'s injection-current limit', info: 'with the current when within it' },
     explanation:
       'When a source on another net reaches a powered input only through resistance and would lift it ' +
       'above its viMax, the input\'s protection diode conducts into its rail. The current is taken with ' +

@@ -4,7 +4,7 @@
  */
 import type { PinDrive } from '../model/schema.ts';
 import { defineRule } from './defineRule.ts';
-import { partsOf } from './keys.ts';
+import { partsOfPins as partsOf } from '../model/pinKeys.ts';
 
 interface Data {
   drivers: string[];
@@ -17,7 +17,10 @@ export default defineRule({
   id: 'contention',
   meta: {
     title: 'No two outputs fight over a net',
-    severity: 'error for a push-pull output sharing a net with any other driver; warning for three-state outputs that need exclusive enables',
+    severity: {
+      error: 'for a push-pull output sharing a net with any other driver',
+      warning: 'for three-state outputs that need exclusive enables',
+    },
     explanation:
       'A push-pull output always drives: on a net with another powered push-pull output, or with a ' +
       'three-state or open-drain one, the two can drive opposite levels and short the supplies through ' +

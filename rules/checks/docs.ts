@@ -4,7 +4,7 @@
  * documented and tested). `npm run docs` writes it; test/checks/registry.test.ts holds the
  * README to it.
  */
-import type { AnyRule } from './defineRule.ts';
+import { severityText, type AnyRule } from './defineRule.ts';
 import { RULES } from './index.ts';
 
 /** The marker lines around the generated section in README.md. */
@@ -21,7 +21,7 @@ function ruleMarkdown(rule: AnyRule): string {
   const { title, severity, explanation, hint } = rule.meta;
   return [
     `### \`${rule.id}\` — ${plain(title)}`,
-    `**Severity:** ${plain(severity)}.`,
+    `**Severity:** ${plain(severityText(severity))}.`,
     plain(explanation),
     `**Usual remedy:** ${plain(hint)}`,
   ].join('\n\n');

@@ -7,7 +7,7 @@ import { exceeds } from '../levels/compare.ts';
 import { largestTestCurrent } from '../levels/output.ts';
 import { defineRule } from './defineRule.ts';
 import { amps } from './format.ts';
-import { partsOf } from './keys.ts';
+import { partsOfPins as partsOf } from '../model/pinKeys.ts';
 
 /** One side of a driver that is overloaded: its load and the limit it passes. */
 interface Overload {
@@ -51,7 +51,7 @@ export default defineRule({
   id: 'drive-load',
   meta: {
     title: 'Drivers carry no more than their rated load',
-    severity: 'error',
+    severity: { error: '' },
     explanation:
       'Every other pin on a net draws its input current from the driver (iih when high, iil when low), ' +
       'and pull resistors add what flows through them. A driver\'s output levels are guaranteed only up ' +

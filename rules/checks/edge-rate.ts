@@ -12,7 +12,7 @@ import type { NetView, PinView, RailStates } from '../engine/types.ts';
 import { RISE_10_90, RISE_30_70 } from '../levels/rc.ts';
 import { defineRule } from './defineRule.ts';
 import { farads, ohms, rampUnit, seconds, volts } from './format.ts';
-import { partsOf } from './keys.ts';
+import { partsOfPins as partsOf } from '../model/pinKeys.ts';
 
 
 /** What charges the net on a rising edge. */
@@ -95,7 +95,7 @@ export default defineRule({
   id: 'edge-rate',
   meta: {
     title: 'Edges are fast enough',
-    severity: 'warning',
+    severity: { warning: '' },
     explanation:
       'The rising edge is estimated as a single RC charge of the net\'s capacitance (the pins\' cin plus ' +
       'the wiring). On a net pulled high by resistors, R is the pulls\' Thévenin resistance and the rise ' +

@@ -15,7 +15,7 @@ import type { FetShifter } from '../model/schema.ts';
 import type { PathNode, PinView } from '../engine/types.ts';
 import { defineRule } from './defineRule.ts';
 import { amps, volts } from './format.ts';
-import { partsOf } from './keys.ts';
+import { partsOfPins as partsOf } from '../model/pinKeys.ts';
 
 interface TurnOn {
   fet: string;
@@ -74,7 +74,7 @@ export default defineRule({
   id: 'fet-shifter',
   meta: {
     title: 'FET level shifters turn on and their drivers carry both pull-ups',
-    severity: 'error',
+    severity: { error: '' },
     explanation:
       'A bidirectional N-MOSFET shifter joins a low-side net (its source) and a high-side net (its drain), ' +
       'each with its own pull-up, the gate on the low side\'s rail. A driver pulling either side low must ' +

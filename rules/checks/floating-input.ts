@@ -4,7 +4,7 @@
  * on no net without an internal pull (rules-catalogue.md).
  */
 import { defineRule } from './defineRule.ts';
-import { partsOf } from './keys.ts';
+import { partsOfPins as partsOf } from '../model/pinKeys.ts';
 
 interface NetData {
   net: string;
@@ -22,7 +22,10 @@ export default defineRule({
   id: 'floating-input',
   meta: {
     title: 'No input is left floating',
-    severity: 'error for a net with no powered driver and no pull; warning for three-state-only nets and unconnected inputs',
+    severity: {
+      error: 'for a net with no powered driver and no pull',
+      warning: 'for three-state-only nets and unconnected inputs',
+    },
     explanation:
       'A CMOS input that nothing drives drifts to an undefined level, draws shoot-through current and ' +
       'may oscillate. A net with a powered receiver needs a powered driver or a pull resistor; a net ' +

@@ -1,8 +1,11 @@
 /**
- * The one registry of rules, in the catalogue's order (rules-catalogue.md); reports sort by it.
- * Adding a rule: its module, its test table, its documentation paragraph, and one line here.
+ * The one registry of rules, keyed by rule id: the compiler checks that every id of the
+ * catalogue (rules/model/ruleIds.ts, which waivers also name) has exactly its rule. The order
+ * of `RULES`, the catalogue's, comes from that list; reports sort by it.
+ * Adding a rule: its module, its test table, its id in ruleIds.ts, and one line here.
  */
-import type { AnyRule } from './defineRule.ts';
+import { RULE_IDS, type RuleId } from '../model/ruleIds.ts';
+import type { AnyRule, RuleOf } from './defineRule.ts';
 import levelHigh from './level-high.ts';
 import levelLow from './level-low.ts';
 import overvoltage from './overvoltage.ts';
@@ -22,23 +25,31 @@ import busHold from './bus-hold.ts';
 import railRange from './rail-range.ts';
 import railCrossing from './rail-crossing.ts';
 
-export const RULES: readonly AnyRule[] = [
-  levelHigh,
-  levelLow,
+const REGISTRY: { readonly [I in RuleId]: RuleOf<I> } = {
+  'level-high': levelHigh,
+  'level-low': levelLow,
   overvoltage,
-  backPower,
-  clampCurrent,
-  railInjection,
+  'back-power': backPower,
+  'clamp-current': clampCurrent,
+  'rail-injection': railInjection,
   undervoltage,
-  driveLoad,
-  edgeRate,
+  'drive-load': driveLoad,
+  'edge-rate': edgeRate,
   contention,
-  floatingInput,
-  missingPull,
-  pullRange,
-  fetShifter,
-  translatorPull,
-  busHold,
-  railRange,
-  railCrossing,
-];
+  'floating-input': floatingInput,
+  'missing-pull': missingPull,
+  'pull-range': pullRange,
+  'fet-shifter': fetShifter,
+  'translator-pull': translatorPull,
+  'bus-hold': busHold,
+  'rail-range': railRange,
+  'rail-crossing': railCrossing,
+};
+
+/** Every rule, in the catalogue's order. */
+export const RULES: readonly AnyRule[] = RULE_IDS.map((id) => REGISTRY[id]);
+
+/** The rule of an id. */
+export function ruleOf<I extends RuleId>(id: I): RuleOf<I> {
+  return REGISTRY[id];
+}

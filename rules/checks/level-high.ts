@@ -4,7 +4,7 @@
  */
 import { defineRule } from './defineRule.ts';
 import { cornerText, volts } from './format.ts';
-import { partsOf } from './keys.ts';
+import { partsOfPins as partsOf } from '../model/pinKeys.ts';
 
 interface Data {
   driver: string;
@@ -28,7 +28,7 @@ export default defineRule({
   id: 'level-high',
   meta: {
     title: 'High level reaches the receiver',
-    severity: 'error when NMH < 0; warning when NMH < minMargin',
+    severity: { error: 'when NMH < 0', warning: 'when NMH < minMargin' },
     explanation:
       'For every powered driver and receiver on different parts, the lowest guaranteed output-high ' +
       'level (at the load the net puts on the driver, or the pull-up\'s level for an open-drain net) ' +

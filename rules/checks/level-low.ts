@@ -4,7 +4,7 @@
  */
 import { defineRule } from './defineRule.ts';
 import { cornerText, volts } from './format.ts';
-import { partsOf } from './keys.ts';
+import { partsOfPins as partsOf } from '../model/pinKeys.ts';
 
 interface Data {
   driver: string;
@@ -24,7 +24,7 @@ export default defineRule({
   id: 'level-low',
   meta: {
     title: 'Low level reaches the receiver',
-    severity: 'error when NML < 0; warning when NML < minMargin',
+    severity: { error: 'when NML < 0', warning: 'when NML < minMargin' },
     explanation:
       'For every powered driver and receiver on different parts, the highest guaranteed output-low ' +
       'level (at the current the net\'s inputs and pull-ups push into the driver) is compared with the ' +

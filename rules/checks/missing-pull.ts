@@ -5,7 +5,7 @@
  */
 import { GROUND } from '../engine/powerStates.ts';
 import { defineRule } from './defineRule.ts';
-import { partsOf } from './keys.ts';
+import { partsOfPins as partsOf } from '../model/pinKeys.ts';
 
 interface Data {
   net: string;
@@ -22,7 +22,7 @@ export default defineRule({
   id: 'missing-pull',
   meta: {
     title: 'Open-drain nets have a pull-up',
-    severity: 'error',
+    severity: { error: '' },
     explanation:
       'An open-drain (or open-collector) output only sinks current; something else must lift the net ' +
       'when every driver lets go. A net with a powered open-drain driver needs a pull resistor to a ' +

@@ -8,7 +8,7 @@ import { netSources, worstExposure } from '../engine/netMath.ts';
 import { pathExposure } from '../engine/paths.ts';
 import { defineRule } from './defineRule.ts';
 import { amps, volts } from './format.ts';
-import { partsOf } from './keys.ts';
+import { partsOfPins as partsOf } from '../model/pinKeys.ts';
 
 interface Data {
   pin: string;
@@ -26,7 +26,7 @@ export default defineRule({
   id: 'overvoltage',
   meta: {
     title: 'No pin sees more than it may',
-    severity: 'error',
+    severity: { error: '' },
     explanation:
       'Every pin on a powered rail that has a viMax is compared with the highest voltage any other ' +
       'source on its net can apply: each powered push-pull or three-state driver\'s rail, and each ' +

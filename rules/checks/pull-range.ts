@@ -15,7 +15,7 @@ import type { NetView, PinView } from '../engine/types.ts';
 import { RISE_30_70 } from '../levels/rc.ts';
 import { defineRule } from './defineRule.ts';
 import { ohms as fmtOhms } from './format.ts';
-import { partsOf } from './keys.ts';
+import { partsOfPins as partsOf } from '../model/pinKeys.ts';
 
 
 interface Data {
@@ -103,7 +103,7 @@ export default defineRule({
   id: 'pull-range',
   meta: {
     title: 'Open-drain pull-ups are sized',
-    severity: 'error when the pull-up is outside its range or no value fits; info with the range when inside',
+    severity: { error: 'when the pull-up is outside its range or no value fits', info: 'with the range when inside' },
     explanation:
       'A pull-up on an open-drain net must be small enough to charge the net\'s capacitance within its ' +
       'maximum rise time (30–70 %, ln(7/3)·RC) and to hold the net above every receiver\'s VIH plus ' +

@@ -5,7 +5,7 @@
 import { crossingRails } from '../engine/paths.ts';
 import { defineRule } from './defineRule.ts';
 import { volts } from './format.ts';
-import { partsOf } from './keys.ts';
+import { partsOfPins as partsOf } from '../model/pinKeys.ts';
 
 interface Data {
   net: string;
@@ -20,7 +20,7 @@ export default defineRule({
   id: 'rail-crossing',
   meta: {
     title: 'Nets that cross rails',
-    severity: 'info',
+    severity: { info: '' },
     explanation:
       'Every net whose pins sit on more than one rail is listed in each power state with its worst ' +
       'high and low margins, so that a review sees every crossing, passing or not. A pull ' +

@@ -6,7 +6,7 @@
 import { exceeds } from '../levels/compare.ts';
 import { defineRule } from './defineRule.ts';
 import { amps } from './format.ts';
-import { partsOf } from './keys.ts';
+import { partsOfPins as partsOf } from '../model/pinKeys.ts';
 
 interface Data {
   rail: string;
@@ -19,7 +19,7 @@ export default defineRule({
   id: 'rail-injection',
   meta: {
     title: 'Rails absorb the clamp currents pushed into them',
-    severity: 'error when the summed clamp current exceeds the rail\'s minLoad or the rail states none; info when within it',
+    severity: { error: 'when the summed clamp current exceeds the rail\'s minLoad or the rail states none', info: 'when within it' },
     explanation:
       'Every clamp current that clamp-current computes (a source driving an input above its viMax through ' +
       'series resistance) flows through the input\'s protection diode into the input\'s rail. In each power ' +

@@ -5,7 +5,7 @@
 import { below, exceeds } from '../levels/compare.ts';
 import { defineRule } from './defineRule.ts';
 import { volts } from './format.ts';
-import { partsOf } from './keys.ts';
+import { partsOfPins as partsOf } from '../model/pinKeys.ts';
 
 interface Data {
   rail: string;
@@ -21,7 +21,7 @@ export default defineRule({
   id: 'rail-range',
   meta: {
     title: 'Rails stay inside the families\' supply ranges',
-    severity: 'warning',
+    severity: { warning: '' },
     explanation:
       'A profile\'s levels hold only over its vddRange. Each rail is compared with the narrowest ' +
       'vddRange of the pins on it that use one profile; outside it, the profile\'s numbers are not ' +

@@ -16,7 +16,7 @@ import { GROUND } from '../engine/powerStates.ts';
 import type { PullSource } from '../engine/types.ts';
 import { defineRule } from './defineRule.ts';
 import { farads, ohms, volts } from './format.ts';
-import { partsOf } from './keys.ts';
+import { partsOfPins as partsOf } from '../model/pinKeys.ts';
 
 interface PullData {
   pin: string;
@@ -50,7 +50,7 @@ export default defineRule({
   id: 'translator-pull',
   meta: {
     title: 'Auto-direction translator pins get the pulls and load they allow',
-    severity: 'error',
+    severity: { error: '' },
     explanation:
       'An auto-direction translator senses the direction from the signal itself, so what hangs on its ' +
       'pins matters. Each external pull on the net (the net\'s own or a resistor part; each at its low ' +

@@ -11,7 +11,7 @@ import { pathExposure } from '../engine/paths.ts';
 import { GROUND } from '../engine/powerStates.ts';
 import { defineRule } from './defineRule.ts';
 import { volts } from './format.ts';
-import { partsOf } from './keys.ts';
+import { partsOfPins as partsOf } from '../model/pinKeys.ts';
 
 interface Data {
   pin: string;
@@ -25,7 +25,7 @@ export default defineRule({
   id: 'undervoltage',
   meta: {
     title: 'No pin is pulled below what it may take',
-    severity: 'error',
+    severity: { error: '' },
     explanation:
       'Every pin on a powered rail that has a viMin is compared with the lowest voltage any other source ' +
       'on its net can apply: each powered push-pull or three-state driver at the lower of 0 V and its ' +

@@ -1,17 +1,25 @@
 /**
  * The command line's real io: files through node:fs, output through process. The only module
- * of the project, with rules/cli/railcross.mjs, that is bound to Node.
+ * of the project, with rules/cli/bin.ts (the built command's entry), that is bound to Node.
  */
-import { readFileSync, writeFileSync } from 'node:fs';
+import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import process from 'node:process';
+import { fileURLToPath } from 'node:url';
 import type { PdfFonts } from '../report/pdf/fonts.ts';
+import { BUNDLED_FONT_FILES } from './fontFiles.ts';
 import { main, EXIT_UNCHECKED, type CliIo } from './main.ts';
 
 const require = createRequire(import.meta.url);
 
-/** A file of the dejavu-fonts-ttf package, found as Node finds the package itself. */
-const dejavu = (file: string): Uint8Array => new Uint8Array(readFileSync(require.resolve(`dejavu-fonts-ttf/ttf/${file}`)));
+/**
+ * The built command (dist-cli/railcross.mjs) carries the fonts beside it in fonts/, so that the
+ * installed package needs no other; run from source, they come from the dejavu-fonts-ttf package.
+ */
+const builtFonts = fileURLToPath(new URL('./fonts/', import.meta.url));
+const fontPath = (file: (typeof BUNDLED_FONT_FILES)[number]): string =>
+  existsSync(builtFonts + file) ? builtFonts + file : require.resolve(`dejavu-fonts-ttf/ttf/${file}`);
+const dejavu = (file: (typeof BUNDLED_FONT_FILES)[number]): Uint8Array => new Uint8Array(readFileSync(fontPath(file)));
 
 /** DejaVu Sans, Sans Bold and Sans Mono: they cover Ω, µ, ≤, – and →, which the PDF's built-in fonts lack. */
 export function loadDejaVuFonts(): PdfFonts {

@@ -163,7 +163,7 @@ function checkNet(ctx: StateContext, net: Net, allOn?: NetResult): NetResult {
   if (allOn !== undefined && allOn.net === net && ctx.state.id !== ALL_ON && !touchesOff(allOn, ctx.state)) {
     return {
       net,
-      view: { ...allOn.view, state: ctx.state },
+      view: allOn.view,
       findings: allOn.findings.map((f) => restampFinding(f, ctx.state, net)),
     };
   }
@@ -186,7 +186,7 @@ function checkLonePin(ctx: StateContext, pin: PinView): Finding[] {
   const found: Finding[] = [];
   for (const rule of ctx.rules) {
     if (rule.checkPin === undefined) continue;
-    rule.checkPin({ pin, state: ctx.state, settings: ctx.settings, rails: loneRails(ctx.rails, pin) }, (draft) =>
+    rule.checkPin({ pin, settings: ctx.settings, rails: loneRails(ctx.rails, pin) }, (draft) =>
       found.push(completeFinding(rule, draft, ctx.state, null, pin.key)),
     );
   }
@@ -216,7 +216,7 @@ function checkGroup(ctx: StateContext, index: DesignIndex, rail: Rail, profile: 
   const found: Finding[] = [];
   for (const rule of ctx.rules) {
     if (rule.checkRail === undefined) continue;
-    rule.checkRail({ rail, range, profile, vddRanges, pinKeys, state: ctx.state, settings: ctx.settings }, (draft) =>
+    rule.checkRail({ rail, range, profile, vddRanges, pinKeys, settings: ctx.settings }, (draft) =>
       found.push(completeFinding(rule, draft, ctx.state, null)),
     );
   }

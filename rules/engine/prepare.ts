@@ -78,7 +78,7 @@ export function prepareNet(ctx: PrepareContext, net: Net): NetView {
 
   const analysis = analyseNet({ pins, drivers, receivers, pulls, highFromPull, loads, rails, settings });
   return {
-    net, state: ctx.state, settings, rails, pins, drivers, receivers, unpowered, pulls,
+    net, settings, rails, pins, drivers, receivers, unpowered, pulls,
     capacitance, highFromPull, loads, pinRails, analysis, shifters: NONE, remoteDrivers: NONE, pathRails: pinRails,
   };
 }
@@ -153,7 +153,7 @@ function prepareLinkedNet(ctx: PrepareContext, net: Net): NetView {
   const analysis = remote.length === 0 ? local : { pairs: [...local.pairs, ...remote], worstHigh, worstLow };
   const pathEdge = path === undefined ? undefined : pathEdgeOf(path, rails);
   return {
-    net, state: ctx.state, settings, rails, pins, drivers, receivers, unpowered, pulls,
+    net, settings, rails, pins, drivers, receivers, unpowered, pulls,
     capacitance, highFromPull, loads, pinRails, analysis,
     ...(path === undefined ? {} : { path }),
     shifters,

@@ -121,7 +121,6 @@ export interface EffectiveSettings {
 /** One net prepared once per power state: what every net rule receives. */
 export interface NetView {
   readonly net: Net;
-  readonly state: PowerState;
   readonly settings: EffectiveSettings;
   readonly rails: RailStates;
   /** Every pin on the net, powered or not, in the net's order. */
@@ -163,7 +162,6 @@ export interface DriverLoad {
 /** A pin on no net, in one power state (`floating-input` judges unused inputs). */
 export interface LonePinView {
   readonly pin: PinView;
-  readonly state: PowerState;
   readonly settings: EffectiveSettings;
   /** The states of the pin's own rail and of its internal pull's rail: nothing else. */
   readonly rails: RailStates;
@@ -179,7 +177,6 @@ export interface RailView {
   readonly vddRanges: readonly (readonly [number, number])[];
   /** The keys of the group's pins that have a `vddRange`, sorted; built only when asked for. */
   readonly pinKeys: () => string[];
-  readonly state: PowerState;
   readonly settings: EffectiveSettings;
 }
 

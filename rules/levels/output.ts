@@ -2,7 +2,11 @@
  * The guaranteed output level of a driver at a load current (rules-catalogue.md, "Guaranteed
  * output levels, not guesses").
  */
-import type { OutputPoint } from '../model/schema.ts';
+/** A guaranteed output level `v` (a Level) at a load current `i` (A): the model's OutputPoint. */
+export interface OutputPoint {
+  readonly v: string | number;
+  readonly i: number;
+}
 import { levelAt } from './level.ts';
 import { exceeds } from './compare.ts';
 

@@ -4,8 +4,21 @@
  * max and shared by every pin on it, so that two pins on one rail are never judged at
  * different supply voltages.
  */
-import type { Rail } from '../model/schema.ts';
-import { DEFAULT_TOLERANCE } from '../model/schema.ts';
+
+/** A rail's tolerance when the file gives none (design-format.md); the schema re-exports it. */
+export const DEFAULT_TOLERANCE = 0.05;
+
+/**
+ * The fields of a rail that set its range. The level math sits below the design model (the
+ * model's schema uses it to parse levels), so it names the fields it reads rather than
+ * importing the model's `Rail`, which has them all.
+ */
+export interface RailFields {
+  readonly nominal: number;
+  readonly tolerance?: number | undefined;
+  readonly min?: number | undefined;
+  readonly max?: number | undefined;
+}
 
 export interface Range {
   readonly min: number;
@@ -13,7 +26,7 @@ export interface Range {
 }
 
 /** The rail's resolved range: nominal × (1 ± tolerance), an explicit `min`/`max` winning for its end. */
-export function railRange(rail: Rail): Range {
+export function railRange(rail: RailFields): Range {
   const tolerance = rail.tolerance ?? DEFAULT_TOLERANCE;
   return {
     min: rail.min ?? rail.nominal * (1 - tolerance),

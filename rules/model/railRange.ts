@@ -21,13 +21,5 @@ export interface RailRange {
  * engine could not use (min > max), on fields alone, without a whole `Rail`.
  */
 export function resolveRailRange(rail: RailRangeInput): RailRange {
-  const { nominal, tolerance, min, max } = rail;
-  return railRange({
-    id: '',
-    label: '',
-    nominal,
-    ...(tolerance === undefined ? {} : { tolerance }),
-    ...(min === undefined ? {} : { min }),
-    ...(max === undefined ? {} : { max }),
-  });
+  return railRange(rail);
 }

@@ -7,7 +7,7 @@
  * list of schema errors) → migrate() → the zod schema and the cross-record checks together,
  * so that one reading lists every problem, in document order, at most `MAX_ERRORS`.
  */
-import { BUILTIN_PROFILE_IDS } from '../profiles/ids.ts';
+import { BUILTIN_PROFILE_IDS } from './profileIds.ts';
 import { CURRENT_VERSION, migrate } from './migrate.ts';
 import { finishErrors, ROOT_PATH, type DesignError } from './paths.ts';
 import { checkReferences } from './references.ts';

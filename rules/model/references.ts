@@ -6,6 +6,7 @@
  * one reading lists every problem. Anything of the wrong shape is skipped here: the schema
  * reports it.
  */
+import { splitPinKey } from './pinKeys.ts';
 import { formatPath, type LocatedError, type PathSegment } from './paths.ts';
 import { resolveRailRange } from './railRange.ts';
 
@@ -215,13 +216,11 @@ function checkNets(
       if (ref === undefined) return;
       names.add(ref);
       const where = [...at, 'pins', j];
-      const dot = ref.indexOf('.');
-      if (dot < 0) {
+      if (!ref.includes('.')) {
         fail(ctx, where, `expected a pin written PART.PIN (e.g. "U3.TX"), found ${JSON.stringify(ref)}`);
         return;
       }
-      const partId = ref.slice(0, dot);
-      const pinId = ref.slice(dot + 1);
+      const { part: partId, pin: pinId } = splitPinKey(ref);
       if (pinsOf === undefined) return;
       const pins = pinsOf.get(partId);
       if (pins === undefined) {

@@ -267,4 +267,4 @@ export type PinDrive = NonNullable<Pin['drive']>;
 /** Defaults of `settings` (design-format.md). */
 export const DEFAULT_MIN_MARGIN = 0.2;
 export const DEFAULT_WIRING_CAPACITANCE = 5e-12;
-export const DEFAULT_TOLERANCE = 0.05;
+export { DEFAULT_TOLERANCE } from '../levels/rails.ts';

@@ -3,7 +3,7 @@
  * source beside it in the family modules; each profile's `source` is printed in reports.
  */
 import type { Profile } from '../model/schema.ts';
-import { BUILTIN_PROFILE_IDS } from './ids.ts';
+import { BUILTIN_PROFILE_IDS } from '../model/profileIds.ts';
 import { BUILTIN_PROFILES } from './library.ts';
 
 export { BUILTIN_PROFILES, BUILTIN_PROFILE_IDS };

@@ -9,7 +9,7 @@ import { outputLevel } from '../levels/output.ts';
 import { corners, type Range } from '../levels/rails.ts';
 import { highThreshold, lowThreshold } from '../engine/resolve.ts';
 import { pullRails, thevenin } from '../engine/netMath.ts';
-import type { LevelSide, NetView, PairAnalysis, PairStatus, PinView } from '../engine/types.ts';
+import type { LevelSide, NetView, PairAnalysis, PairStatus, PinView, PowerState } from '../engine/types.ts';
 import type { PinDrive, PinRole } from '../model/schema.ts';
 
 /** A rail the net touches (its pins' or its pulls'), in this power state. */
@@ -252,7 +252,9 @@ export function ladderAxis(highest: number): { top: number; ticks: number[] } {
 }
 
 /** The voltage ladder of the net of `view`, in its power state. */
-export function ladderFor(view: NetView): Ladder {
+/** The ladder of one net's view in the power state it was prepared for (views carry no state: a
+ * view judged alike in several states is shared by them). */
+export function ladderFor(view: NetView, state: PowerState): Ladder {
   const rails: LadderRail[] = [...view.rails.ranges].map(([id, r]) => ({ id, min: r.min, max: r.max, off: view.rails.off.has(id) }));
   const drivers = view.drivers.map((d) => driverOf(view, d));
   const receivers = view.receivers.map((r) => receiverOf(view, r));
@@ -264,7 +266,7 @@ export function ladderFor(view: NetView): Ladder {
   return {
     net: view.net.id,
     label: view.net.label ?? view.net.id,
-    state: { id: view.state.id, label: view.state.label, off: [...view.state.off] },
+    state: { id: state.id, label: state.label, off: [...state.off] },
     minMargin: view.settings.minMargin,
     top,
     ticks,

@@ -5,7 +5,7 @@
  */
 import { designLine, marginText, settingsLine, severityText, stateText } from './describe.ts';
 import type { Report } from './reportSchema.ts';
-import { verdict } from './verdict.ts';
+import { verdict, type Verdict } from './verdict.ts';
 
 const oneLine = (s: string) => s.replace(/\s*[\r\n]+\s*/g, ' ');
 
@@ -34,9 +34,9 @@ function table(head: readonly string[], rows: readonly (readonly string[])[], al
 }
 
 /** The report as Markdown, ending with a newline. */
-export function renderMarkdown(report: Report): string {
+export function renderMarkdown(report: Report, options: { readonly verdict?: Verdict } = {}): string {
   const out: string[] = [];
-  const v = verdict(report);
+  const v = options.verdict ?? verdict(report);
   out.push(`# Railcross check: ${escapeMarkdown(report.design.title)}`, '');
   out.push(`${escapeMarkdown(report.tool)}, generated ${escapeMarkdown(report.generatedAt)}. ${escapeMarkdown(designLine(report))}; ${escapeMarkdown(settingsLine(report))}.`, '');
   out.push(`Power states: ${report.scenarios.map((s) => escapeMarkdown(stateText(s))).join(', ')}.`, '');

@@ -1,10 +1,22 @@
 /**
- * The report as plain text for a terminal: what `railcross check FILE` prints. Every finding
- * keeps its full message (the numbers are never cut), so nothing is wrapped or truncated.
+ * The report as plain text for a terminal: what `railcross check FILE` prints. Findings are
+ * grouped by severity, then by rule (in the catalogue's order), so that the errors come first
+ * and a rule's usual remedy is said once for its group; info findings are collapsed to a count
+ * unless asked for. Every finding shown keeps its full message (the numbers are never cut).
  */
+import { RULES } from '../checks/index.ts';
 import { designLine, marginText, settingsLine, stateText } from './describe.ts';
 import type { Report, ReportFinding } from './reportSchema.ts';
-import { verdict } from './verdict.ts';
+import { plural, verdict, type Verdict } from './verdict.ts';
+
+export interface TextOptions {
+  /** List info findings one by one too (by default they are a count). */
+  readonly verbose?: boolean;
+  /** The verdict to print, when the caller judges otherwise (a baseline); by default the report's own. */
+  readonly verdict?: Verdict;
+  /** Marks findings the caller calls new (against a baseline) with `NEW`. */
+  readonly isNew?: (f: ReportFinding) => boolean;
+}
 
 /** Left-aligned columns, two spaces apart; numeric columns right-aligned. */
 function table(head: readonly string[], rows: readonly (readonly string[])[], right: ReadonlySet<number> = new Set()): string[] {
@@ -17,16 +29,75 @@ function table(head: readonly string[], rows: readonly (readonly string[])[], ri
   return [line(head), ...rows.map(line)].map((l) => `  ${l}`);
 }
 
-function findingLines(f: ReportFinding): string[] {
-  const severity = f.severity.toUpperCase() + (f.waived === undefined ? '' : ' (waived)');
-  const lines = [`  ${severity}  ${f.rule}  ${f.net === null ? '(no net)' : `net ${f.net}`}  [${f.scenario}]`, `      ${f.message}`];
-  if (f.waived !== undefined) lines.push(`      Waived: ${f.waived}`);
-  lines.push(`      Hint: ${f.hint}`);
-  return lines;
+const TITLES = new Map(RULES.map((r) => [r.id as string, r.meta.title]));
+const RULE_ORDER = new Map(RULES.map((r, k) => [r.id as string, k]));
+
+type Group = 'error' | 'warning' | 'info' | 'waived';
+const GROUPS: readonly [Group, string][] = [
+  ['error', 'Errors'],
+  ['warning', 'Warnings'],
+  ['waived', 'Waived'],
+  ['info', 'Info'],
+];
+const groupOf = (f: ReportFinding): Group => (f.waived === undefined ? f.severity : 'waived');
+
+/** `net SDA [standby]` or `(no net) [all-on]`, with the pins when the rule names some. */
+function where(f: ReportFinding): string {
+  return `${f.net === null ? '(no net)' : `net ${f.net}`} [${f.scenario}]`;
+}
+
+/**
+ * One rule's findings of one group: its title and count, its usual remedy once, then a line per
+ * finding. A finding whose hint differs from the group's shared one keeps its own.
+ */
+function ruleLines(rule: string, findings: readonly ReportFinding[], group: Group, options: TextOptions): string[] {
+  const counts = new Map<string, number>();
+  for (const f of findings) counts.set(f.hint, (counts.get(f.hint) ?? 0) + 1);
+  const shared = [...counts].sort((a, b) => b[1] - a[1])[0]![0];
+  const out = [`  ${rule}: ${TITLES.get(rule) ?? rule} (${findings.length})`, `    Hint: ${shared}`];
+  for (const f of findings) {
+    const mark = options.isNew?.(f) ? 'NEW ' : '';
+    const severity = group === 'waived' ? `${f.severity}, ` : '';
+    out.push(`    ${mark}${severity}${where(f)}: ${f.message}`);
+    if (f.waived !== undefined) out.push(`      Waived: ${f.waived}`);
+    if (f.hint !== shared) out.push(`      Hint: ${f.hint}`);
+  }
+  return out;
+}
+
+function findingLines(report: Report, options: TextOptions): string[] {
+  const out: string[] = [];
+  const byGroup = new Map<Group, ReportFinding[]>();
+  for (const f of report.findings) {
+    const g = groupOf(f);
+    const list = byGroup.get(g);
+    if (list === undefined) byGroup.set(g, [f]);
+    else list.push(f);
+  }
+  if (report.findings.length === 0) return ['', 'Findings: none'];
+  for (const [group, heading] of GROUPS) {
+    const list = byGroup.get(group) ?? [];
+    if (list.length === 0) continue;
+    if (group === 'info' && options.verbose !== true) {
+      out.push('', `Info: ${plural(list.length, 'finding')}, not listed (--verbose lists them)`);
+      continue;
+    }
+    out.push('', `${heading} (${list.length})`);
+    const byRule = new Map<string, ReportFinding[]>();
+    for (const f of list) {
+      const same = byRule.get(f.rule);
+      if (same === undefined) byRule.set(f.rule, [f]);
+      else same.push(f);
+    }
+    // The report's own order within a rule: power state, then net in the file's order.
+    const rules = [...byRule.keys()].sort((a, b) => (RULE_ORDER.get(a) ?? 0) - (RULE_ORDER.get(b) ?? 0));
+    for (const rule of rules) out.push(...ruleLines(rule, byRule.get(rule)!, group, options));
+  }
+  return out;
 }
 
 /** The report as readable text, ending with a newline. */
-export function renderText(report: Report): string {
+export function renderText(report: Report, options: TextOptions = {}): string {
   const out: string[] = [];
   out.push(`Railcross check: ${report.design.title}`);
   out.push(`${report.tool}, ${report.generatedAt}`);
@@ -36,11 +107,9 @@ export function renderText(report: Report): string {
   const s = report.summary;
   out.push(...table(['errors', 'warnings', 'info', 'waived'], [[s.error, s.warning, s.info, s.waived].map(String)], new Set([0, 1, 2, 3])));
   out.push('');
-  out.push(verdict(report).line);
+  out.push((options.verdict ?? verdict(report)).line);
 
-  out.push('', `Findings (${report.findings.length})`);
-  if (report.findings.length === 0) out.push('  none');
-  for (const f of report.findings) out.push(...findingLines(f));
+  out.push(...findingLines(report, options));
 
   out.push('', `Rail crossings (${report.crossings.length})`);
   if (report.crossings.length === 0) out.push('  none: no net joins pins of different rails');

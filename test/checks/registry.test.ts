@@ -6,7 +6,7 @@
 import { existsSync, readdirSync, readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { RULES } from '../../rules/checks/index.ts';
-import type { AnyRule } from '../../rules/checks/defineRule.ts';
+import { declaredSeverities, type AnyRule } from '../../rules/checks/defineRule.ts';
 import { RULE_IDS } from '../../rules/model/ruleIds.ts';
 import {
   readRulesSection, RULES_END, RULES_START, rulesMarkdown, rulesSection, withRulesSection,
@@ -36,16 +36,17 @@ describe('the rule registry', () => {
     expect(module.default).toBe(rule);
   });
 
-  it.each(RULE_IDS.map((id) => [id]))('%s has its test table test/checks/%s.test.ts', (id) => {
+  it.each(RULE_IDS.map((id) => [id, id]))('%s has its test table test/checks/%s.test.ts', (id) => {
     expect(exists(`test/checks/${id}.test.ts`), `test/checks/${id}.test.ts`).toBe(true);
   });
 
   it.each(RULES.map((rule) => [rule.id, rule] as const))('%s documents itself in its meta', (_id, rule) => {
     const { title, severity, explanation, hint, messages } = rule.meta;
     const problems: string[] = [];
-    for (const [key, text] of Object.entries({ title, severity, explanation, hint })) {
+    for (const [key, text] of Object.entries({ title, explanation, hint })) {
       if (typeof text !== 'string' || text.trim() === '') problems.push(`${key} is empty`);
     }
+    if (declaredSeverities(severity).length === 0) problems.push('declares no severity');
     const ids = Object.keys(messages);
     if (ids.length === 0) problems.push('no messages');
     for (const m of ids) if (typeof messages[m] !== 'function') problems.push(`message ${m} is not a function`);
@@ -75,7 +76,7 @@ describe("the README's rules section", () => {
   const fake = [{
     id: 'level-high',
     meta: {
-      title: 'A *starred* title', severity: 'error when x < 0', explanation: 'An <input> with a `tick` and [brackets].',
+      title: 'A *starred* title', severity: { error: 'when x < 0', warning: 'when x < 1' }, explanation: 'An <input> with a `tick` and [brackets].',
       hint: 'Fix it.', messages: { m: () => '' },
     },
   }] as unknown as AnyRule[];
@@ -83,7 +84,7 @@ describe("the README's rules section", () => {
   it.each([
     // Markup characters in the metadata are escaped; a bare "<" before a space is left alone.
     ['title', '### `level-high` — A \\*starred\\* title'],
-    ['severity', '**Severity:** error when x < 0.'],
+    ['severity', '**Severity:** error when x < 0; warning when x < 1.'],
     ['explanation', 'An \\<input> with a \\`tick\\` and \\[brackets\\].'],
     ['remedy', '**Usual remedy:** Fix it.'],
   ])('writes the %s line as Markdown', (_what, line) => {

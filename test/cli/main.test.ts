@@ -22,9 +22,30 @@ const quiet: Design = design({
 
 const invalid = JSON.stringify({ ...quiet, nets: [{ id: 'N', pins: ['A.Y', 'Z.Q'] }] });
 
+/** The example with its FROST pull-up inside the range (47 kΩ < 67.3 kΩ, the report's upper bound). */
+const frost47k = (() => {
+  const d = JSON.parse(GREENHOUSE_TEXT) as Design;
+  return JSON.stringify({ ...d, nets: d.nets.map((n) => (n.id === 'FROST' ? { ...n, pull: { to: '3v3', ohms: 47_000 } } : n)) });
+})();
+
+/** quiet.json asking for 0.8 V of margin: its NMH and NML of 0.7405 V each warn (all-on). */
+const quietTight = JSON.stringify({ ...quiet, settings: { minMargin: 0.8 } });
+
+/** A saved report of the example (as --out writes it), and one whose summary is not a report's. */
+const greenhouseReport = await (async () => {
+  const io = fakeIo({ 'g.json': GREENHOUSE_TEXT }, { SOURCE_DATE_EPOCH: '1767225600' });
+  await main(['check', 'g.json', '--json'], io);
+  return io.out;
+})();
+const badReport = JSON.stringify({ ...(JSON.parse(greenhouseReport) as object), summary: { error: -1 } });
+
 const FILES = {
   'greenhouse.json': GREENHOUSE_TEXT,
+  'greenhouse-report.json': greenhouseReport,
+  'badreport.json': badReport,
+  'frost47k.json': frost47k,
   'quiet.json': JSON.stringify(quiet),
+  'quiet-tight.json': quietTight,
   'invalid.json': invalid,
   'notjson.json': '{"format": "railcross.design",',
   'list.json': '[1, 2]',
@@ -70,7 +91,38 @@ describe('exit status and output', () => {
     ['an option without its value', ['check', 'quiet.json', '--out'], 2, { err: /--out needs a value/, noOut: true }],
     ['a value that is another option', ['check', 'quiet.json', '--out', '--json'], 2, { err: /--out needs a value/, noOut: true }],
     ['a flag with a value', ['check', 'quiet.json', '--json=yes'], 2, { err: /takes no value/, noOut: true }],
-    ['--format xml', ['check', 'quiet.json', '--format', 'xml'], 2, { err: /expected text, json or md/, noOut: true }],
+    ['--format xml', ['check', 'quiet.json', '--format', 'xml'], 2, { err: /expected text, json, md, sarif or junit/, noOut: true }],
+    ['--format sarif', ['check', 'greenhouse.json', '--format', 'sarif'], 1, { out: /^\{\n {2}"\$schema": "https:\/\/json\.schemastore\.org\/sarif-2\.1\.0\.json",\n {2}"version": "2\.1\.0"/, noErr: true }],
+    ['--format junit', ['check', 'greenhouse.json', '--format', 'junit'], 1, { out: /^<\?xml version="1\.0" encoding="UTF-8"\?>\n<testsuites /, noErr: true }],
+    ['--format junit, passing', ['check', 'quiet.json', '--format=junit'], 0, { out: /<testsuites [^>]*tests="2" failures="0"/, noErr: true }],
+    ['--quiet: the verdict alone', ['check', 'greenhouse.json', '--quiet'], 1, { out: /^FAIL: unwaived findings at the fail-on level \(error\): 18 errors\.\n$/, noErr: true }],
+    ['--quiet, passing', ['check', 'quiet.json', '--quiet'], 0, { out: /^PASS: [^\n]*\n$/, noErr: true }],
+    ['--verbose lists info findings', ['check', 'greenhouse.json', '--verbose'], 1, { out: /^Info \(18\)\n {2}pull-range: /m, noErr: true }],
+    ['without --verbose, info is a count', ['check', 'greenhouse.json'], 1, { out: /^Info: 18 findings, not listed \(--verbose lists them\)$/m, noErr: true }],
+    ['--quiet with --verbose', ['check', 'quiet.json', '--quiet', '--verbose'], 2, { err: /--quiet and --verbose contradict/, noOut: true }],
+    ['--quiet with --format json', ['check', 'quiet.json', '--quiet', '--json'], 2, { err: /--quiet shapes the text report: it cannot go with --format json/, noOut: true }],
+    ['--verbose with --format md', ['check', 'quiet.json', '--verbose', '--format', 'md'], 2, { err: /--verbose shapes the text report/, noOut: true }],
+    ['--baseline of itself: passes despite the errors', ['check', 'greenhouse.json', '--baseline', 'greenhouse.json'], 0, { out: /^PASS: no unwaived finding at the fail-on level \(error\) beyond the baseline; 18 findings/m, noErr: true }],
+    ['--baseline, a saved report', ['check', 'greenhouse.json', '--baseline', 'greenhouse-report.json', '--quiet'], 0, { out: /^PASS: .*beyond the baseline/ }],
+    ['--baseline of a passing design: the example\'s errors are new', ['check', 'greenhouse.json', '--baseline', 'quiet.json', '--quiet'], 1, { out: /^FAIL: .* not in the baseline: 18 errors; 0 findings/ }],
+    ['--baseline with --format md: the baseline\'s verdict', ['check', 'greenhouse.json', '--baseline', 'greenhouse.json', '--format', 'md'], 0, { out: /^\*\*PASS\*\*: no unwaived finding at the fail-on level \(error\) beyond the baseline/m, noErr: true }],
+    ['--baseline with --format sarif: every result unchanged', ['check', 'greenhouse.json', '--baseline', 'greenhouse.json', '--format', 'sarif'], 0, { out: /"baselineState": "unchanged"/, noErr: true }],
+    ['--baseline with --format junit: no failure', ['check', 'greenhouse.json', '--baseline', 'greenhouse.json', '--format', 'junit'], 0, { out: /<testsuites [^>]* failures="0"/, noErr: true }],
+    ['--baseline that cannot be read', ['check', 'quiet.json', '--baseline', 'nope.json'], 2, { err: /cannot read nope\.json/, noOut: true }],
+    ['--baseline, a report that is not valid', ['check', 'quiet.json', '--baseline', 'badreport.json'], 2, { err: /^railcross: badreport\.json is not a valid report \(4 problems\):\nsummary\.error: Too small/, noOut: true }],
+    ['--baseline, not JSON', ['check', 'quiet.json', '--baseline', 'notjson.json'], 2, { err: /notjson\.json is not a valid design/, noOut: true }],
+    // diff
+    ['diff of a design with itself', ['diff', 'greenhouse.json', 'greenhouse.json'], 0, { out: /^0 new, 0 gone, 0 changed, 38 unchanged; none fails where it did not/m, noErr: true }],
+    ['diff: the FROST pull-up fixed', ['diff', 'greenhouse.json', 'frost47k.json'], 0, { out: /^0 new, 0 gone, 2 changed,/m, noErr: true }],
+    ['diff: the FROST pull-up broken again', ['diff', 'frost47k.json', 'greenhouse.json'], 1, { out: /2 findings now fail at the fail-on level \(error\)/, noErr: true }],
+    ['diff: a saved report against a design', ['diff', 'greenhouse-report.json', 'frost47k.json', '--format', 'md'], 0, { out: /^## Railcross diff: /, noErr: true }],
+    ['diff --json', ['diff', 'greenhouse.json', 'frost47k.json', '--json'], 0, { out: /^\{\n {2}"format": "railcross.diff",/, noErr: true }],
+    ['diff --fail-on warning', ['diff', 'quiet.json', 'quiet-tight.json', '--fail-on', 'warning'], 1, { out: /^4 new, .*; 4 findings now fail/m }],
+    ['diff --fail-on error: warnings pass', ['diff', 'quiet.json', 'quiet-tight.json'], 0, { out: /^4 new, .*; none fails/m }],
+    ['diff with one file', ['diff', 'quiet.json'], 2, { err: /diff compares two files, found 1/, noOut: true }],
+    ['diff --format sarif', ['diff', 'quiet.json', 'quiet.json', '--format', 'sarif'], 2, { err: /expected text, json or md/, noOut: true }],
+    ['diff with an invalid design', ['diff', 'quiet.json', 'invalid.json'], 2, { err: /invalid\.json is not a valid design/, noOut: true }],
+    ['diff with an unknown option', ['diff', 'quiet.json', 'quiet.json', '--quiet'], 2, { err: /unknown option --quiet for "diff"/, noOut: true }],
     ['--json and --format md', ['check', 'quiet.json', '--json', '--format', 'md'], 2, { err: /contradict/, noOut: true }],
     ['--fail-on info', ['check', 'quiet.json', '--fail-on', 'info'], 2, { err: /expected error or warning/, noOut: true }],
     ['--min-margin not a number', ['check', 'quiet.json', '--min-margin', 'lots'], 2, { err: /--min-margin is "lots"/, noOut: true }],
@@ -81,7 +133,7 @@ describe('exit status and output', () => {
     ['--pdf without its path', ['check', 'quiet.json', '--pdf'], 2, { err: /--pdf needs a value/, noOut: true }],
     ['no file', ['check'], 2, { err: /needs a design file/, noOut: true }],
     ['two files', ['check', 'quiet.json', 'greenhouse.json'], 2, { err: /one design file, found 2/, noOut: true }],
-    ['an unknown command', ['lint', 'quiet.json'], 2, { err: /unknown command "lint"/, noOut: true }],
+    ['an unknown command', ['lint', 'quiet.json'], 2, { err: /unknown command "lint": expected check, diff or profiles/, noOut: true }],
     ['no command: the usage on stderr', [], 2, { err: USAGE, noOut: true }],
     // help, version, profiles
     ['--help', ['--help'], 0, { out: USAGE, noErr: true }],
@@ -133,6 +185,7 @@ describe('--out', () => {
     expect(reportOf(written).findings.length).toBeGreaterThan(0);
     if (format === 'json') expect(io.out).toBe(written);
     else expect(io.out.startsWith('{')).toBe(false);
+    expect(io.err).toBe(`railcross: wrote the JSON report to report.json (${Number((Buffer.byteLength(written) / 1000).toPrecision(3))} kB)\n`);
   });
 
   it('a file that cannot be written: exit 2', async () => {
@@ -148,23 +201,36 @@ describe('--out', () => {
   });
 });
 
-describe('--pdf', () => {
+// Each PDF is a few hundred milliseconds of CPU on an idle machine; on a loaded one many times
+// that, so the block has a generous timeout, and uses the small quiet.json design (2 pages of
+// tables) wherever the example's 10 pages add nothing to what a case checks.
+describe('--pdf', { timeout: 120_000 }, () => {
   const PDF_MAGIC = '%PDF-';
   const head = (bytes: Uint8Array | undefined) => (bytes === undefined ? '' : String.fromCharCode(...bytes.subarray(0, 5)));
+  const WROTE = /^railcross: wrote the PDF report to r\.pdf \(\d+(\.\d+)? kB\)\n$/;
 
   it.each<[string, string[], number]>([
-    ['a failing design: the PDF is written and the exit is still 1', ['check', 'greenhouse.json', '--pdf', 'r.pdf'], 1],
+    ['a failing design: the PDF is written and the exit is still 1', ['check', 'quiet-tight.json', '--fail-on', 'warning', '--pdf', 'r.pdf'], 1],
     ['a passing design: exit 0', ['check', 'quiet.json', '--pdf', 'r.pdf'], 0],
     ['with --paper letter', ['check', 'quiet.json', '--pdf=r.pdf', '--paper=letter'], 0],
-    ['with --scenario and --json', ['check', 'greenhouse.json', '--scenario', 'standby', '--json', '--pdf', 'r.pdf'], 1],
+    ['with --scenario and --json', ['check', 'quiet.json', '--scenario', 'b-off', '--json', '--pdf', 'r.pdf'], 0],
     ['with --fail-on warning', ['check', 'quiet.json', '--min-margin', '0.8', '--fail-on', 'warning', '--pdf', 'r.pdf'], 1],
   ])('%s', async (_name, argv, code) => {
     const { code: actual, io } = await run(argv);
     expect(actual, io.err).toBe(code);
     expect(head(io.binaries.get('r.pdf'))).toBe(PDF_MAGIC);
-    expect(io.err).toBe('');
-    // stdout still carries the report in the asked format
+    // stdout carries the report in the asked format, so the note on what was written goes to stderr
+    expect(io.err).toMatch(WROTE);
     expect(io.out).toMatch(argv.includes('--json') ? /^\{/ : /^Railcross check: /);
+  });
+
+  it('the example (10 pages): written, and the exit follows its errors', async () => {
+    const { code, io } = await run(['check', 'greenhouse.json', '--pdf', 'r.pdf', '--quiet']);
+    expect(code).toBe(1);
+    expect(head(io.binaries.get('r.pdf'))).toBe(PDF_MAGIC);
+    // --quiet: stdout carries the verdict alone, and the note joins it there
+    expect(io.out).toMatch(/^FAIL: [^\n]*\nrailcross: wrote the PDF report to r\.pdf \(\d+(\.\d+)? kB\)\n$/);
+    expect(io.err).toBe('');
   });
 
   it('letter and a4 give different page sizes', async () => {
@@ -176,15 +242,16 @@ describe('--pdf', () => {
   });
 
   it('with SOURCE_DATE_EPOCH two runs write the same bytes', async () => {
-    const a = (await run(['check', 'greenhouse.json', '--pdf', 'r.pdf'])).io.binaries.get('r.pdf')!;
-    const b = (await run(['check', 'greenhouse.json', '--pdf', 'r.pdf'])).io.binaries.get('r.pdf')!;
+    const a = (await run(['check', 'quiet-tight.json', '--pdf', 'r.pdf'])).io.binaries.get('r.pdf')!;
+    const b = (await run(['check', 'quiet-tight.json', '--pdf', 'r.pdf'])).io.binaries.get('r.pdf')!;
     expect(Buffer.from(a).equals(Buffer.from(b))).toBe(true);
   });
 
-  it('writes the JSON report too with --out', async () => {
-    const { io } = await run(['check', 'greenhouse.json', '--out', 'r.json', '--pdf', 'r.pdf']);
+  it('writes the JSON report too with --out, and says so for both', async () => {
+    const { io } = await run(['check', 'quiet-tight.json', '--out', 'r.json', '--pdf', 'r.pdf']);
     expect(reportOf(io.files.get('r.json')!).findings.length).toBeGreaterThan(0);
     expect(head(io.binaries.get('r.pdf'))).toBe(PDF_MAGIC);
+    expect(io.err).toMatch(/^railcross: wrote the JSON report to r\.json \(\d+(\.\d+)? kB\)\nrailcross: wrote the PDF report to r\.pdf /);
   });
 
   it('a PDF that cannot be written: exit 2', async () => {

@@ -8,7 +8,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { ProfileSchema, type Params } from '../../rules/model/schema.ts';
-import { BUILTIN_PROFILE_IDS as IDS_MODULE } from '../../rules/profiles/ids.ts';
+import { BUILTIN_PROFILE_IDS as IDS_MODULE } from '../../rules/model/profileIds.ts';
 import {
   BUILTIN_PROFILE_IDS,
   BUILTIN_PROFILES,

@@ -11,17 +11,17 @@
 import { describe, expect, it } from 'vitest';
 import { exampleDesign } from '../../app/example.ts';
 import { check } from '../../rules/engine/check.ts';
-import type { NetView } from '../../rules/engine/types.ts';
+import type { NetView, PowerState } from '../../rules/engine/types.ts';
 import { ladderAxis, ladderFor, type Ladder } from '../../rules/report/ladder.ts';
 
 const result = check(exampleDesign());
-const views: { state: string; net: string; view: NetView }[] = [];
-for (const [state, nets] of result.nets) for (const [net, r] of nets) views.push({ state, net, view: r.view });
+const views: { state: string; net: string; view: NetView; power: PowerState }[] = [];
+for (const [state, nets] of result.nets) for (const [net, r] of nets) views.push({ state, net, view: r.view, power: result.states.find((s) => s.id === state)! });
 
 const close = (a: number, b: number) => Math.abs(a - b) <= 1e-12 * Math.max(1, Math.abs(a), Math.abs(b));
 
 function ladderOf(state: string, net: string): Ladder {
-  return ladderFor(result.nets.get(state)!.get(net)!.view);
+  return ladderFor(result.nets.get(state)!.get(net)!.view, result.states.find((s) => s.id === state)!);
 }
 
 describe('ladderFor: the same numbers as the analysis, on every net of the example in every power state', () => {
@@ -29,8 +29,8 @@ describe('ladderFor: the same numbers as the analysis, on every net of the examp
     expect(views.length).toBe(26);
   });
 
-  it.each(views)('$state $net', ({ view }) => {
-    const l = ladderFor(view);
+  it.each(views)('$state $net', ({ view, power }) => {
+    const l = ladderFor(view, power);
     // Each pair side is one margin, with the analysis' own numbers.
     const expected = view.analysis.pairs.flatMap((p) => [
       ...(p.high === null ? [] : [{ kind: 'nmh', driver: p.driver, receiver: p.receiver, upper: p.high.out, lower: p.high.threshold, margin: p.high.margin, status: p.high.status }]),

@@ -14,7 +14,7 @@ import type { Design } from '../../rules/model/schema.ts';
 import { buildReport } from '../../rules/report/buildReport.ts';
 import { RULES } from '../../rules/checks/index.ts';
 import { reportPdfFileName, writeReportPdf, type Paper } from '../../rules/report/pdf/index.ts';
-import { toBase64 } from '../../rules/report/pdf/fonts.ts';
+import { toBase64, toBinaryString } from '../../rules/report/pdf/fonts.ts';
 import type { Crossing, Report } from '../../rules/report/reportSchema.ts';
 import { ladderFor } from '../../rules/report/ladder.ts';
 import { marginVolts } from '../../rules/report/ladderLayout.ts';
@@ -164,7 +164,7 @@ describe.skipIf(!HAVE_POPPLER)('the example\'s PDF, read back with pdftotext', (
     for (const row of rows) {
       const state = made.report.scenarios.find((s) => s.id === row.scenario)!;
       expect(ladders, `${row.net} in ${row.scenario}`).toMatch(new RegExp(`${escapeRe(row.label)}\\s+· ${escapeRe(state.label)} \\(${escapeRe(row.scenario)}\\)`));
-      const ladder = ladderFor(result.nets.get(row.scenario)!.get(row.net)!.view);
+      const ladder = ladderFor(result.nets.get(row.scenario)!.get(row.net)!.view, result.states.find((s) => s.id === row.scenario)!);
       for (const m of ladder.margins) expect(ladders, `${m.kind} ${m.driver} → ${m.receiver}`).toContain(`${m.kind.toUpperCase()} ${marginVolts(m.margin)}`);
     }
     // The example's planted level-high error: VOH 2.935 V against VIH 3.694 V is NMH -0.759 V, marked FAIL in words.
@@ -262,7 +262,8 @@ describe.skipIf(!HAVE_POPPLER)('names with markup and unusual characters come ou
   });
 });
 
-describe.skipIf(!HAVE_POPPLER)('page size', () => {
+// Writing the example's PDF takes seconds of CPU on a loaded machine: a generous timeout, never the idle machine's 5 s.
+describe.skipIf(!HAVE_POPPLER)('page size', { timeout: 120_000 }, () => {
   /** Every distinct MediaBox of the file, `w×h` in points to 0.01 pt. */
   const boxes = (bytes: Uint8Array) => [
     ...new Set([...latin1(bytes).matchAll(/\/MediaBox \[0 0 ([\d.]+) ([\d.]+)\]/g)].map((m) => `${Number(Number(m[1]).toFixed(2))}×${Number(Number(m[2]).toFixed(2))}`)),
@@ -286,7 +287,7 @@ describe.skipIf(!HAVE_POPPLER)('page size', () => {
   });
 });
 
-describe('writeReportPdf', () => {
+describe('writeReportPdf', { timeout: 120_000 }, () => {
   it('the same report gives the same bytes (reproducible with SOURCE_DATE_EPOCH)', () => {
     const d = greenhouse();
     const a = make(d).bytes;
@@ -335,6 +336,24 @@ describe('toBase64', () => {
 
   it('matches Node\'s encoder on a font file', () => {
     expect(toBase64(fonts.bold)).toBe(Buffer.from(fonts.bold).toString('base64'));
+  });
+});
+
+describe('toBinaryString', () => {
+  it.each([
+    ['empty', [], ''],
+    ['every byte value keeps its code (0x00, 0x7F, 0x80, 0x9F, 0xFF)', [0, 0x7f, 0x80, 0x9f, 0xff], '\u0000\u007f\u0080\u009f\u00ff'],
+  ])('%s', (_name, bytes, text) => {
+    expect(toBinaryString(new Uint8Array(bytes))).toBe(text);
+  });
+
+  it('matches Node\'s latin1 decoding on a font file longer than one slice', () => {
+    expect(fonts.regular.length).toBeGreaterThan(8192 * 2);
+    expect(toBinaryString(fonts.regular)).toBe(Buffer.from(fonts.regular).toString('latin1'));
+  });
+
+  it('the fonts are TrueType files (sfnt version 0x00010000), which jsPDF takes as binary strings', () => {
+    for (const f of [fonts.regular, fonts.bold, fonts.mono!]) expect([...f.subarray(0, 4)]).toEqual([0, 1, 0, 0]);
   });
 });
 

@@ -34,7 +34,7 @@ describe('the report of any valid design', () => {
         for (const f of report.findings) tally[f.waived !== undefined ? 'waived' : f.severity]++;
         expect(report.summary).toMatchObject(tally);
 
-        const text = renderText(report);
+        const text = renderText(report, { verbose: true });
         const markdown = renderMarkdown(report);
         for (const f of report.findings) expect(text).toContain(f.message);
         expect(markdown.length).toBeGreaterThan(0);

@@ -32,8 +32,9 @@ const reports: [string, Report][] = [
   ['the example', reportOf(greenhouse())],
   ['the example with a scenario, a waiver and pipes', reportOf(variant())],
 ];
+// Text with --verbose: every finding is listed (without it, info findings are a count).
 const renderers: [string, (r: Report) => string][] = [
-  ['text', renderText],
+  ['text', (r) => renderText(r, { verbose: true })],
   ['Markdown', renderMarkdown],
 ];
 
@@ -85,6 +86,52 @@ describe.each(renderers)('%s rendering', (kind, render) => {
   it('says PASS when nothing reaches the fail-on level', () => {
     const d: Design = { ...greenhouse(), nets: [] };
     expect(render(reportOf(d))).toMatch(/PASS/);
+  });
+});
+
+describe('text grouping', () => {
+  const report = reports[1]![1];
+  const text = renderText(report);
+  const lines = text.split('\n');
+  const headings = lines.filter((l) => /^(Errors|Warnings|Waived|Info)\b/.test(l));
+
+  it('groups by severity, errors first, waived after warnings, info last as a count', () => {
+    const s = report.summary;
+    expect(headings).toEqual([`Errors (${s.error})`, `Warnings (${s.warning})`, `Waived (${s.waived})`, `Info: ${s.info} findings, not listed (--verbose lists them)`]);
+    expect(s.error > 0 && s.warning > 0 && s.waived > 0 && s.info > 0).toBe(true);
+  });
+
+  it('lists no info finding unless verbose, and every other finding once', () => {
+    for (const f of report.findings) {
+      const shown = text.split(`[${f.scenario}]: ${f.message}`).length - 1;
+      expect(shown, f.id).toBe(f.severity === 'info' && f.waived === undefined ? 0 : 1);
+    }
+  });
+
+  it('says each rule\'s hint once per group, under the rule\'s heading', () => {
+    const errors = text.slice(text.indexOf('Errors ('), text.indexOf('Warnings ('));
+    for (const rule of new Set(report.findings.filter((f) => f.severity === 'error' && f.waived === undefined).map((f) => f.rule))) {
+      const hints = new Set(report.findings.filter((f) => f.rule === rule && f.severity === 'error' && f.waived === undefined).map((f) => f.hint));
+      for (const hint of hints) expect(errors.split(`Hint: ${hint}`).length - 1, rule).toBe(1);
+    }
+  });
+
+  it('orders rules within a group by the catalogue (level-high before overvoltage before floating-input)', () => {
+    const at = (rule: string) => lines.findIndex((l) => l.startsWith(`  ${rule}: `));
+    expect(at('level-low') < 0 || at('level-high') < at('level-low')).toBe(true);
+    expect(at('overvoltage')).toBeLessThan(at('floating-input'));
+    expect(at('overvoltage')).toBeGreaterThan(0);
+  });
+
+  it('--verbose lists the info findings under their rules', () => {
+    const verbose = renderText(report, { verbose: true });
+    expect(verbose).toContain(`Info (${report.summary.info})`);
+    for (const f of report.findings.filter((x) => x.severity === 'info')) expect(verbose).toContain(f.message);
+  });
+
+  it('prints the verdict it is given (a baseline\'s) instead of the report\'s own', () => {
+    const line = 'PASS: no unwaived finding at the fail-on level (error) beyond the baseline; 3 findings at that level already in the baseline.';
+    expect(renderText(report, { verdict: { fails: false, count: 0, line } }).split('\n')).toContain(line);
   });
 });
 

@@ -9,7 +9,7 @@ import fc from 'fast-check';
 import { RULE_IDS } from '../../rules/model/ruleIds.ts';
 import type { Design, Net, Params, Part, Pin, Profile, Pull, Rail, Scenario, Settings } from '../../rules/model/schema.ts';
 import type { Level } from '../../rules/levels/level.ts';
-import { BUILTIN_PROFILE_IDS } from '../../rules/profiles/ids.ts';
+import { BUILTIN_PROFILE_IDS } from '../../rules/model/profileIds.ts';
 
 /** Options of `designArb`. */
 export interface DesignArbOptions {

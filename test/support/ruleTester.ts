@@ -1,11 +1,13 @@
 /**
  * A strict table tester for rules (house-style.md): every case named, no duplicate names,
  * every invalid case expects at least one finding, every message of the rule is used by some
- * case, and the designs are deep-frozen so that a rule that mutates its input fails.
+ * case, and the designs are deep-frozen so that a rule that mutates its input fails. The views a
+ * rule receives are frozen too (views are shared across power states and read by the editor),
+ * and every severity it reports must be one its meta declares.
  * Each case's design must also be a valid design file.
  */
 import { describe, expect, it } from 'vitest';
-import type { AnyRule } from '../../rules/checks/defineRule.ts';
+import { declaredSeverities, type AnyRule } from '../../rules/checks/defineRule.ts';
 import type { Design } from '../../rules/model/schema.ts';
 import type { Finding, Severity } from '../../rules/engine/types.ts';
 import { check } from '../../rules/engine/check.ts';
@@ -51,9 +53,52 @@ function expectValue(actual: unknown, expected: unknown, path: string): void {
   }
 }
 
-/** Runs only `rule` on the design and returns its findings in the report's order. */
+const refuse = (what: string) => () => {
+  throw new TypeError(`a rule changed a ${what} of its view: views are shared and read-only`);
+};
+
+/**
+ * Deep-freezes a view, Maps and Sets included (Object.freeze alone leaves `set`, `add`, `delete`
+ * and `clear` working on them).
+ */
+export function freezeView<T>(value: T, seen = new Set<unknown>()): T {
+  if (value === null || typeof value !== 'object' || seen.has(value)) return value;
+  seen.add(value);
+  if (value instanceof Map) {
+    for (const [k, v] of value) { freezeView(k, seen); freezeView(v, seen); }
+    if (!Object.isFrozen(value)) for (const m of ['set', 'delete', 'clear']) Object.defineProperty(value, m, { value: refuse('Map') });
+  } else if (value instanceof Set) {
+    for (const v of value) freezeView(v, seen);
+    if (!Object.isFrozen(value)) for (const m of ['add', 'delete', 'clear']) Object.defineProperty(value, m, { value: refuse('Set') });
+  }
+  Object.freeze(value);
+  for (const key of Object.keys(value)) freezeView((value as Record<string, unknown>)[key], seen);
+  return value;
+}
+
+/**
+ * The rule as the tester runs it: each view frozen before the rule sees it, and each draft's
+ * severity held to the severities the rule's meta declares.
+ */
+export function guarded(rule: AnyRule): AnyRule {
+  const declared = new Set(declaredSeverities(rule.meta.severity));
+  const guard = <D extends { severity: Severity }>(report: (d: D) => void) => (draft: D) => {
+    if (!declared.has(draft.severity)) {
+      throw new Error(`${rule.id} reported severity '${draft.severity}', which its meta does not declare (${[...declared].join(', ')})`);
+    }
+    report(draft);
+  };
+  return {
+    ...rule,
+    ...(rule.checkNet === undefined ? {} : { checkNet: (view, report) => rule.checkNet!(freezeView(view), guard(report)) }),
+    ...(rule.checkPin === undefined ? {} : { checkPin: (view, report) => rule.checkPin!(freezeView(view), guard(report)) }),
+    ...(rule.checkRail === undefined ? {} : { checkRail: (view, report) => rule.checkRail!(freezeView(view), guard(report)) }),
+  };
+}
+
+/** Runs only `rule` (guarded) on the design and returns its findings in the report's order. */
 export function findingsOf(rule: AnyRule, design: Design): readonly Finding[] {
-  return check(design, undefined, [rule]).findings;
+  return check(design, undefined, [guarded(rule)]).findings;
 }
 
 export function ruleTester(rule: AnyRule, table: { valid: ValidCase[]; invalid: InvalidCase[] }): void {

@@ -1,5 +1,6 @@
 import type { Draft } from 'immer';
 import type { Design } from '../../../rules/model/schema.ts';
+import { pinKey, splitPinKey } from '../../../rules/model/pinKeys.ts';
 
 /** Why a command was refused; nothing of the design changes. */
 export interface Refusal {
@@ -23,15 +24,7 @@ export function isRefusal(value: unknown): value is Refusal {
   return typeof value === 'object' && value !== null && 'refused' in value;
 }
 
-/** `PART.PIN` split in two; undefined parts when the key has no dot. */
-export function splitPinKey(key: string): { part: string; pin: string } {
-  const dot = key.indexOf('.');
-  return dot < 0 ? { part: key, pin: '' } : { part: key.slice(0, dot), pin: key.slice(dot + 1) };
-}
-
-export function pinKey(part: string, pin: string): string {
-  return `${part}.${pin}`;
-}
+export { pinKey, splitPinKey };
 
 /** True when the design has that part and that pin. */
 export function hasPin(design: Design, key: string): boolean {

@@ -1,3 +1,4 @@
+import { partOfPin } from '../../../rules/model/pinKeys.ts';
 import type { Design } from '../../../rules/model/schema.ts';
 import { refuse, type Command } from './command.ts';
 import { removeParts } from './parts.ts';
@@ -36,7 +37,7 @@ export function deleteSelection(what: Deletion): Command {
       removeParts(design, what.parts);
       const gone = new Set(what.parts);
       for (const [a, b] of what.wires) {
-        if (gone.has(a.slice(0, a.indexOf('.'))) || gone.has(b.slice(0, b.indexOf('.')))) continue;
+        if (gone.has(partOfPin(a)) || gone.has(partOfPin(b))) continue;
         removeWire(design, a, b);
       }
     },

@@ -1,3 +1,4 @@
+import { partOfPin } from '../../../rules/model/pinKeys.ts';
 import type { Draft } from 'immer';
 import type { Design, Part } from '../../../rules/model/schema.ts';
 import { resolveProfile } from '../../../rules/profiles/index.ts';
@@ -104,7 +105,7 @@ export function setPartProfile(id: string, profile: string): Command {
  */
 export function removeParts(design: Draft<Design>, ids: readonly string[]): void {
   const gone = new Set(ids);
-  const isGone = (key: string) => gone.has(key.slice(0, key.indexOf('.')));
+  const isGone = (key: string) => gone.has(partOfPin(key));
   design.parts = design.parts.filter((p) => !gone.has(p.id));
   for (let k = design.nets.length - 1; k >= 0; k--) {
     const net = design.nets[k]!;

@@ -1,3 +1,4 @@
+import { partOfPin } from '../../../rules/model/pinKeys.ts';
 import type { Design, Net, Part } from '../../../rules/model/schema.ts';
 import { GROUND } from '../../../rules/model/references.ts';
 import { refuse, type Command } from './command.ts';
@@ -26,7 +27,7 @@ export function insertParts(parts: readonly Part[], nets: readonly Net[], name =
         if (net.pull !== undefined && net.pull.to !== GROUND && !design.rails.some((r) => r.id === net.pull!.to)) {
           return refuse(`There is no rail ${net.pull.to} for the pull of a pasted net.`);
         }
-        if (!net.pins.every((k) => ids.has(k.slice(0, k.indexOf('.'))))) return refuse(`Net ${net.id} names a pin outside the pasted parts.`);
+        if (!net.pins.every((k) => ids.has(partOfPin(k)))) return refuse(`Net ${net.id} names a pin outside the pasted parts.`);
       }
       design.parts.push(...structuredClone(parts as Part[]));
       design.nets.push(...structuredClone(nets as Net[]));

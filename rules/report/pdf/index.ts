@@ -33,6 +33,8 @@ export interface ReportPdfInput {
   readonly fonts: PdfFonts;
   /** Default `a4`. */
   readonly paper?: Paper;
+  /** Called as each stage ends (`fonts`, `draw`, `output`), for a caller that measures them. */
+  readonly mark?: (stage: 'fonts' | 'draw' | 'output') => void;
 }
 
 /** The sections in their order; the cover's contents list keeps a line for each. */
@@ -62,6 +64,7 @@ export function writeReportPdf(input: ReportPdfInput): Uint8Array {
   const paper = input.paper ?? 'a4';
   const doc = new jsPDF({ unit: 'pt', format: paper, orientation: 'portrait', compress: true, putOnlyUsedFonts: true });
   const fonts = registerFonts(doc, input.fonts);
+  input.mark?.('fonts');
   const ctx: Ctx = { doc, fonts, paper, sections: [] };
   doc.setProperties({
     title: `Railcross report: ${report.design.title}`,
@@ -88,5 +91,8 @@ export function writeReportPdf(input: ReportPdfInput): Uint8Array {
 
   drawContents(ctx, contentsY);
   drawFurniture(ctx, report.design.title, report.tool, report.generatedAt);
-  return new Uint8Array(doc.output('arraybuffer'));
+  input.mark?.('draw');
+  const bytes = new Uint8Array(doc.output('arraybuffer'));
+  input.mark?.('output');
+  return bytes;
 }

@@ -395,8 +395,9 @@ export function laddersSection(ctx: Ctx, y: number, report: Report, result: Chec
     if (column === 0 && k > 0) at += CELL_H + GAP;
     if (column === 0 && at + CELL_H > bottomLimit(doc)) at = addPage(ctx);
     const view = result.nets.get(row.scenario)?.get(row.net)?.view;
-    if (view === undefined) return;
-    drawLadder(ctx, ladderFor(view), row, MARGIN.left + column * (w + GAP), at, w);
+    const state = result.states.find((s) => s.id === row.scenario);
+    if (view === undefined || state === undefined) return;
+    drawLadder(ctx, ladderFor(view, state), row, MARGIN.left + column * (w + GAP), at, w);
   });
   return at + CELL_H + GAP;
 }

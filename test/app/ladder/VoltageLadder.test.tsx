@@ -10,7 +10,7 @@ import { check } from '../../../rules/engine/check.ts';
 import { ladderFor } from '../../../rules/report/ladder.ts';
 
 const result = check(exampleDesign());
-const ladderOf = (state: string, net: string) => ladderFor(result.nets.get(state)!.get(net)!.view);
+const ladderOf = (state: string, net: string) => ladderFor(result.nets.get(state)!.get(net)!.view, result.states.find((s) => s.id === state)!);
 
 /** Each element's attributes, for the elements that have a data-kind. */
 function elements(markup: string): Record<string, string>[] {

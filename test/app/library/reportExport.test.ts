@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { buildEditorReport } from '../../../app/library/reportExport.ts';
+import { buildEditorReport, editorReportMarkdown } from '../../../app/library/reportExport.ts';
+import { renderMarkdown } from '../../../rules/report/renderMarkdown.ts';
 import { exampleDesign } from '../../../app/example.ts';
 import { check } from '../../../rules/engine/check.ts';
 import { newDesign } from '../../../rules/model/newDesign.ts';
@@ -27,5 +28,26 @@ describe('the editor\'s JSON report', () => {
     const built = buildEditorReport({ ...design, title: 42 as unknown as string }, check(design), AT);
     expect(built.ok).toBe(false);
     expect(!built.ok && built.errors[0]).toContain('design.title');
+  });
+});
+
+describe('the editor\'s Markdown report', () => {
+  it('is the command line\'s Markdown of the same report, named after the design', () => {
+    const design = exampleDesign();
+    const made = editorReportMarkdown(design, check(design), AT);
+    const built = buildEditorReport(design, check(design), AT);
+    expect(made.ok && built.ok).toBe(true);
+    if (!made.ok || !built.ok) return;
+    expect(made.name).toBe('greenhouse-irrigation-controller-report.md');
+    expect(made.text).toBe(renderMarkdown(built.report));
+    expect(made.text).toMatch(/^# Railcross check: Greenhouse irrigation controller\n/);
+    expect(made.text).toContain('`level-high`');
+  });
+
+  it('says why when the report cannot be made', () => {
+    const design = exampleDesign();
+    const made = editorReportMarkdown({ ...design, title: 42 as unknown as string }, check(design), AT);
+    expect(made.ok).toBe(false);
+    expect(!made.ok && made.errors[0]).toContain('design.title');
   });
 });

@@ -89,7 +89,7 @@ const present = <T>(x: T | undefined): x is T => x !== undefined;
  * without a mechanical remedy (drive-load, edge-rate, rail-range, a push-pull fight).
  */
 export function fixesFor(finding: Finding, design: Design, result: CheckResult): QuickFix[] {
-  if (finding.waived !== undefined) return [];
+  if (!mayHaveFixes(finding)) return [];
   switch (finding.rule) {
     case 'level-high':
       return [ttlInputsFix(design, finding), ...levelTranslator(design, finding)].filter(present);
@@ -102,13 +102,40 @@ export function fixesFor(finding: Finding, design: Design, result: CheckResult):
     case 'missing-pull':
       return [addPullFix(design, finding)].filter(present);
     case 'pull-range':
-      return finding.severity === 'error' ? [pullValueFix(design, finding, result)].filter(present) : [];
+      return [pullValueFix(design, finding, result)].filter(present);
     case 'floating-input':
       return finding.net === null ? tiePinFixes(design, finding) : tieNetFixes(design, finding, result);
     case 'contention':
       return [contentionWaiver(finding)].filter(present);
     default:
       return [];
+  }
+}
+
+/**
+ * Whether a finding may have a quick fix, decided without working any out (the findings list
+ * asks for every row; `fixesFor` does the work when a menu opens). The one place that says so:
+ * `fixesFor` returns nothing where this says no.
+ */
+export function mayHaveFixes(finding: Finding): boolean {
+  if (finding.waived !== undefined) return false;
+  switch (finding.rule) {
+    case 'level-high':
+    case 'level-low':
+    case 'overvoltage':
+    case 'back-power':
+    case 'missing-pull':
+    case 'floating-input':
+      return true;
+    // Only a pull-up outside its range has a remedy; the in-range info has none.
+    case 'pull-range':
+      return finding.severity === 'error';
+    // Only between three-state drivers (a waiver once the enables are known to be exclusive);
+    // two push-pull outputs on one net need a design change.
+    case 'contention':
+      return finding.messageId === 'enablesNeeded';
+    default:
+      return false;
   }
 }
 

@@ -1,5 +1,6 @@
 /**
- * The built-in profile ids: those of design file version 1 (design-format.md), in its order,
+ * The built-in profile ids (the design format names them, so the model holds the list; the
+ * library in rules/profiles must have exactly these, test/profiles/builtin.test.ts): those of design file version 1 (design-format.md), in its order,
  * then the ids the library added since (`xlat-side`, `xlat-od`: dual-supply translator sides).
  * The library may add ids, never rename these: designs name them. The reader accepts a part's or a pin's
  * `profile` when it is one of these or a design-local profile's id.
