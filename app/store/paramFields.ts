@@ -19,7 +19,8 @@ type Kind =
   | { readonly type: 'points' }
   | { readonly type: 'schmitt' }
   | { readonly type: 'bool' }
-  | { readonly type: 'range' };
+  | { readonly type: 'range' }
+  | { readonly type: 'busHold' };
 
 export interface ParamField {
   readonly key: ParamKey;
@@ -48,6 +49,12 @@ export const PARAM_FIELDS: readonly ParamField[] = [
   { key: 'unpoweredSafe', label: 'Safe off', meaning: 'may carry voltage while its chip is unpowered', example: 'yes or no', kind: { type: 'bool' } },
   { key: 'viMaxOff', label: 'VI max off', meaning: 'highest voltage the pin may see while unpowered', example: '3.6 V', kind: { type: 'volts' } },
   { key: 'vddRange', label: 'VDD range', meaning: 'supply range over which the numbers hold', example: '1.65 … 3.6', kind: { type: 'range' } },
+  { key: 'viMin', label: 'VI min', meaning: 'lowest voltage the pin may see while powered', example: '-0.5', kind: { type: 'level' } },
+  { key: 'injectionMax', label: 'I inj max', meaning: 'largest current its clamp diodes may carry', example: '2 mA', kind: { type: 'quantity', unit: 'A' } },
+  { key: 'busHold', label: 'Bus hold', meaning: 'bus-hold input: hold current / largest overdrive current', example: '75 µA / 500 µA', kind: { type: 'busHold' } },
+  { key: 'seriesResistance', label: 'Rs', meaning: 'series output resistance of a weak push-pull auto-direction translator', example: '4.5 kΩ', kind: { type: 'quantity', unit: 'Ω' } },
+  { key: 'minExternalPull', label: 'R pull min', meaning: 'smallest external pull resistor the pin tolerates', example: '50 kΩ', kind: { type: 'quantity', unit: 'Ω' } },
+  { key: 'maxLoadCapacitance', label: 'C load max', meaning: 'largest capacitance the pin drives reliably', example: '70 pF', kind: { type: 'quantity', unit: 'F' } },
 ];
 
 export const FIELD_BY_KEY: ReadonlyMap<ParamKey, ParamField> = new Map(PARAM_FIELDS.map((f) => [f.key, f]));
@@ -130,6 +137,16 @@ export function parseParam(key: ParamKey, text: string): ParamRead {
     }
     case 'range':
       return parseRange(s);
+    case 'busHold': {
+      const [hold, overdrive, ...rest] = s.split('/');
+      if (overdrive === undefined || rest.length > 0) return { ok: false, error: 'expected "hold / overdrive", e.g. "75 µA / 500 µA"' };
+      const a = parseQuantity(hold ?? '', 'A');
+      const b = parseQuantity(overdrive, 'A');
+      if (!a.ok) return { ok: false, error: `hold: ${a.error}` };
+      if (!b.ok) return { ok: false, error: `overdrive: ${b.error}` };
+      if (a.value < 0 || b.value < 0) return { ok: false, error: 'expected currents of 0 or more' };
+      return { ok: true, value: { hold: a.value, overdrive: b.value } };
+    }
   }
 }
 
@@ -155,6 +172,10 @@ export function formatParam(key: ParamKey, value: unknown): string {
     case 'range': {
       const [lo, hi] = value as [number, number];
       return `${formatQuantity(lo, 'V', 4)} … ${formatQuantity(hi, 'V', 4)}`;
+    }
+    case 'busHold': {
+      const b = value as NonNullable<Params['busHold']>;
+      return `${formatQuantity(b.hold, 'A', 4)} / ${formatQuantity(b.overdrive, 'A', 4)}`;
     }
   }
 }

@@ -29,6 +29,15 @@ const accepted: { key: ParamKey; text: string; value: unknown; shown: string }[]
   // JESD8C LVCMOS 3.3 V normal supply range, 3.0 V to 3.6 V.
   { key: 'vddRange', text: '3 … 3.6', value: [3, 3.6], shown: '3 V … 3.6 V' },
   { key: 'vddRange', text: '3V to 3.6V', value: [3, 3.6], shown: '3 V … 3.6 V' },
+  // Version 2. −0.5 V: a clamped CMOS input's lowest (common practice).
+  { key: 'viMin', text: '-0.5', value: -0.5, shown: '-0.5 V' },
+  // A few mA of injection current, as datasheets give it (from memory).
+  { key: 'injectionMax', text: '2m', value: 2e-3, shown: '2 mA' },
+  // Bus-hold: 75 µA hold, 500 µA overdrive (datasheet convention, from memory).
+  { key: 'busHold', text: '75u / 500u', value: { hold: 75e-6, overdrive: 500e-6 }, shown: '75 µA / 500 µA' },
+  { key: 'seriesResistance', text: '4k5', value: 4500, shown: '4.5 kΩ' },
+  { key: 'minExternalPull', text: '50k', value: 50e3, shown: '50 kΩ' },
+  { key: 'maxLoadCapacitance', text: '70p', value: 70e-12, shown: '70 pF' },
 ];
 
 const refused: { key: ParamKey; text: string; error: RegExp }[] = [
@@ -42,6 +51,8 @@ const refused: { key: ParamKey; text: string; error: RegExp }[] = [
   { key: 'schmitt', text: '0.7*VDD', error: /VT\+ \/ VT−/ },
   { key: 'unpoweredSafe', text: 'maybe', error: /yes or no/ },
   { key: 'vddRange', text: '3.6 … 3', error: /minimum is above the maximum/ },
+  { key: 'busHold', text: '75u', error: /hold \/ overdrive/ },
+  { key: 'busHold', text: '75u / 5 V', error: /overdrive:/ },
 ];
 
 describe('parameter fields', () => {

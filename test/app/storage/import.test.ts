@@ -69,7 +69,7 @@ describe('file names and the exported text', () => {
 
   it('exports the canonical text, which reads back to the same design', () => {
     const text = designFileText(good);
-    expect(text.startsWith('{\n  "format": "railcross.design",\n  "version": 1,\n  "title": ')).toBe(true);
+    expect(text.startsWith('{\n  "format": "railcross.design",\n  "version": 2,\n  "title": ')).toBe(true);
     const read = readDesign(text);
     expect(read.ok && read.design).toEqual(good);
   });
