@@ -13,14 +13,16 @@ import { connectPins, moveParts, parseWireId, type Move } from '../store/command
 import { useEditor, useEditorStore } from '../store/EditorProvider.tsx';
 import type { XY } from '../store/editorStore.ts';
 import { ChipNode } from './ChipNode.tsx';
-import { createFlowDeriver, type ChipNode as ChipNodeType, type WireEdge as WireEdgeType } from './deriveFlow.ts';
+import { createFlowDeriver, type ChipNode as ChipNodeType, type DiscreteNode as DiscreteNodeType, type WireEdge as WireEdgeType } from './deriveFlow.ts';
+import { DiscreteNode } from './DiscreteNode.tsx';
 import { Legend } from './Legend.tsx';
 import { CANVAS_ID, fitViewOptions, TEMPLATE_MIME, usePlacePart } from './placement.ts';
 import { WireEdge } from './WireEdge.tsx';
 import { useCanvasKeys } from './useCanvasKeys.ts';
 import { Dialogs } from '../panels/Dialogs.tsx';
 
-const nodeTypes = { chip: ChipNode };
+const nodeTypes = { chip: ChipNode, discrete: DiscreteNode };
+type AnyNode = ChipNodeType | DiscreteNodeType;
 const edgeTypes = { wire: WireEdge };
 const proOptions = { hideAttribution: true };
 const snapGrid: [number, number] = [10, 10];
@@ -43,6 +45,7 @@ function sameKeys(set: ReadonlySet<string> | null, map: ReadonlyMap<string, unkn
 export function Canvas() {
   const store = useEditorStore();
   const parts = useEditor((s) => s.design.parts);
+  const discreteParts = useEditor((s) => s.design.discretes);
   const nets = useEditor((s) => s.design.nets);
   const selectedParts = useEditor((s) => s.selection.parts);
   const selectedWires = useEditor((s) => s.selection.wires);
@@ -61,12 +64,15 @@ export function Canvas() {
     dragStore.setState({ drag, moving: drag === null ? null : sameKeys(was.moving, drag) ? was.moving : new Set(drag.keys()) });
   }, [dragStore]);
   const deriver = useRef(createFlowDeriver()).current;
-  const nodes = useMemo(() => deriver.nodes(parts, selectedParts, drag), [deriver, parts, selectedParts, drag]);
+  const chipNodes = useMemo(() => deriver.nodes(parts, selectedParts, drag), [deriver, parts, selectedParts, drag]);
+  const discreteNodes = useMemo(() => deriver.discretes(discreteParts, selectedParts, drag), [deriver, discreteParts, selectedParts, drag]);
+  // Most designs have no parts between chips: then the chips' own array, unchanged.
+  const nodes = useMemo<AnyNode[]>(() => (discreteNodes.length === 0 ? chipNodes : [...chipNodes, ...discreteNodes]), [chipNodes, discreteNodes]);
   const edges = useMemo(() => deriver.edges(nets, selectedWires, moving), [deriver, nets, selectedWires, moving]);
   const place = usePlacePart();
   useCanvasKeys();
 
-  const onNodesChange = useCallback((changes: NodeChange<ChipNodeType>[]) => {
+  const onNodesChange = useCallback((changes: NodeChange<AnyNode>[]) => {
     const s = store.getState();
     let dragging: Map<string, XY> | undefined;
     const moves: Move[] = [];
@@ -143,7 +149,7 @@ export function Canvas() {
 
   return (
     <div className={`rc-canvas${drag !== null ? ' rc-canvas--dragging' : ''}`} id={CANVAS_ID} onDragOver={onDragOver} onDrop={onDrop}>
-      <ReactFlow<ChipNodeType, WireEdgeType>
+      <ReactFlow<AnyNode, WireEdgeType>
         nodes={nodes}
         edges={edges}
         nodeTypes={nodeTypes}

@@ -7,13 +7,18 @@
  * its place, size or selection; a net's edges only with its wires, name or selection.
  */
 import type { Edge, Node } from '@xyflow/react';
-import type { Design, Net, Part } from '../../rules/model/schema.ts';
+import type { Design, Discrete, Net, Part } from '../../rules/model/schema.ts';
 import { netWires, splitPinKey, wireId } from '../store/commands/index.ts';
 import type { XY } from '../store/editorStore.ts';
 import { chipSize, NODE_MARGIN } from './chipLayout.ts';
 
 export type ChipNode = Node<{ readonly part: string }, 'chip'>;
 export type WireEdge = Edge<{ net: string; label: string | null }, 'wire'>;
+/** A part between chips (version 2) as a node. */
+export type DiscreteNode = Node<{ readonly discrete: string }, 'discrete'>;
+
+/** The drawn size of a part between chips: its symbol, designator and value. */
+export const DISCRETE_SIZE = { width: 120, height: 64 } as const;
 
 /**
  * Class names of a chip being dragged and of the wires that end on it. styles.css gives those
@@ -165,13 +170,38 @@ export function createFlowDeriver() {
     return lastEdges;
   }
 
-  return { nodes, edges, measured };
+  const discreteCache = new Map<string, { key: string; node: DiscreteNode }>();
+  let lastDiscretes: DiscreteNode[] = [];
+
+  /** The parts between chips as nodes, cached as chips are. */
+  function discretes(list: readonly Discrete[] | undefined, selectedParts: readonly string[], drag: ReadonlyMap<string, XY> | null): DiscreteNode[] {
+    const selected = new Set(selectedParts);
+    const out = (list ?? []).map((d) => {
+      const pos = drag?.get(d.id) ?? d.position ?? { x: 0, y: 0 };
+      const isSelected = selected.has(d.id);
+      const key = `${pos.x},${pos.y},${isSelected ? 1 : 0}`;
+      const hit = discreteCache.get(d.id);
+      if (hit !== undefined && hit.key === key) return hit.node;
+      const node: DiscreteNode = {
+        id: d.id, type: 'discrete', position: { x: pos.x, y: pos.y }, data: { discrete: d.id }, selected: isSelected,
+        width: DISCRETE_SIZE.width + 2 * NODE_MARGIN, height: DISCRETE_SIZE.height + 2 * NODE_MARGIN,
+      };
+      discreteCache.set(d.id, { key, node });
+      return node;
+    });
+    const ids = new Set((list ?? []).map((d) => d.id));
+    for (const id of discreteCache.keys()) if (!ids.has(id)) discreteCache.delete(id);
+    lastDiscretes = same(lastDiscretes, out);
+    return lastDiscretes;
+  }
+
+  return { nodes, edges, discretes, measured };
 }
 
 export type FlowDeriver = ReturnType<typeof createFlowDeriver>;
 
 /** Parts and nets of a design as React Flow would get them, without caching (tests, one-off uses). */
-export function deriveOnce(design: Design): { nodes: ChipNode[]; edges: WireEdge[] } {
+export function deriveOnce(design: Design): { nodes: ChipNode[]; edges: WireEdge[]; discretes: DiscreteNode[] } {
   const d = createFlowDeriver();
-  return { nodes: d.nodes(design.parts, [], null), edges: d.edges(design.nets, []) };
+  return { nodes: d.nodes(design.parts, [], null), edges: d.edges(design.nets, []), discretes: d.discretes(design.discretes, [], null) };
 }

@@ -2,8 +2,9 @@
 import { partOfPin } from '../../rules/model/pinKeys.ts';
 import { useCallback } from 'react';
 import { useReactFlow } from '@xyflow/react';
-import type { Part } from '../../rules/model/schema.ts';
-import { addPart } from '../store/commands/index.ts';
+import type { DiscreteKind, Part } from '../../rules/model/schema.ts';
+import { addDiscrete, addPart, newDiscrete } from '../store/commands/index.ts';
+import { DISCRETE_SIZE } from './deriveFlow.ts';
 import type { EditorStore, Outcome } from '../store/editorStore.ts';
 import { useEditorStore } from '../store/EditorProvider.tsx';
 import { templateById } from '../store/templates.ts';
@@ -90,4 +91,20 @@ export function useFocus() {
     },
     [store, fitView],
   );
+}
+
+/**
+ * Place a part between chips (a resistor, a FET or diode shifter) near the middle of the view,
+ * with its starting values, and select it.
+ */
+export function usePlaceDiscrete(): (kind: DiscreteKind) => void {
+  const store = useEditorStore();
+  const viewCentre = useViewCentre();
+  return useCallback((kind) => {
+    const s = store.getState();
+    const c = viewCentre();
+    const part = newDiscrete(s.design, kind, { x: c.x - DISCRETE_SIZE.width / 2, y: c.y - DISCRETE_SIZE.height / 2 });
+    const out = s.apply(addDiscrete(part));
+    if (out.ok) s.select({ parts: [part.id], wires: [], net: null });
+  }, [store, viewCentre]);
 }

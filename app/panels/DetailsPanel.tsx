@@ -4,6 +4,7 @@ import { useEditor } from '../store/EditorProvider.tsx';
 import { partById } from '../store/lookup.ts';
 import { NetDetails } from './NetDetails.tsx';
 import { PartDetails } from './PartDetails.tsx';
+import { DiscreteDetails } from './DiscreteDetails.tsx';
 import { PowerStatesEditor as PowerStatesView } from './PowerStatesEditor.tsx';
 import { ProfilesEditor as ProfilesView } from './ProfilesEditor.tsx';
 import { RailsEditor as RailsView } from './RailsEditor.tsx';
@@ -15,6 +16,7 @@ const ProfilesEditor = memo(ProfilesView);
 
 export function DetailsPanel() {
   const part = useEditor((s) => (s.selection.parts.length === 1 ? partById(s.design.parts, s.selection.parts[0]!) : undefined));
+  const discrete = useEditor((s) => (s.selection.parts.length === 1 ? s.design.discretes?.find((d) => d.id === s.selection.parts[0]) : undefined));
   const net = useEditor((s) => (s.selection.net === null ? undefined : s.design.nets.find((n) => n.id === s.selection.net)));
   const many = useEditor((s) => s.selection.parts.length + s.selection.wires.length);
   return (
@@ -23,6 +25,8 @@ export function DetailsPanel() {
       <div className="rc-details-body">
         {part !== undefined ? (
           <PartDetails part={part} />
+        ) : discrete !== undefined ? (
+          <DiscreteDetails part={discrete} />
         ) : net !== undefined ? (
           <NetDetails net={net} />
         ) : (

@@ -7,6 +7,15 @@ import { useMemo, useRef, useState, type DragEvent, type KeyboardEvent } from 'r
 import { TEMPLATE_MIME, usePlacePart } from '../canvas/placement.ts';
 import { searchTemplates, type Template } from '../store/templates.ts';
 import { useEditorStore } from '../store/EditorProvider.tsx';
+import { usePlaceDiscrete } from '../canvas/placement.ts';
+import type { DiscreteKind } from '../../rules/model/schema.ts';
+
+/** The parts between chips, in the trade's words. */
+const BETWEEN: readonly { kind: DiscreteKind; name: string; title: string }[] = [
+  { kind: 'resistor', name: 'Resistor', title: 'A resistor: in series, or tied to a rail or ground as a pull' },
+  { kind: 'fet-shifter', name: 'FET shifter', title: 'A bidirectional N-MOSFET level shifter for open-drain lines: S on the low side, D on the high side' },
+  { kind: 'diode-shifter', name: 'Diode shifter', title: 'A Schottky diode shifter: K on the driver\'s net, A on the receiver\'s (with its own pull-up)' },
+];
 
 function groupByName(list: readonly Template[]): [string, Template[]][] {
   const groups = new Map<string, Template[]>();
@@ -23,6 +32,7 @@ export function Palette() {
   const found = useMemo(() => searchTemplates(query), [query]);
   const groups = useMemo(() => groupByName(found), [found]);
   const place = usePlacePart();
+  const placeDiscrete = usePlaceDiscrete();
   const store = useEditorStore();
   const listRef = useRef<HTMLUListElement>(null);
 
@@ -83,6 +93,12 @@ export function Palette() {
         ))}
         {found.length === 0 && <li className="rc-empty">No part matches “{query}”.</li>}
       </ul>
+      <div className="rc-palette-between" role="group" aria-label="Between chips">
+        <h3>Between chips</h3>
+        {BETWEEN.map((b) => (
+          <button key={b.kind} type="button" className="rc-new-chip" data-testid={`place-${b.kind}`} title={b.title} onClick={() => placeDiscrete(b.kind)}>{b.name}</button>
+        ))}
+      </div>
       <div className="rc-palette-foot">Drag a part onto the canvas, or select it and press Enter.</div>
     </aside>
   );

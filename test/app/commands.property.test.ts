@@ -11,7 +11,7 @@ import { exampleDesign } from '../../app/example.ts';
 import {
   addPowerState, addProfile, addRail, addWaiver, connectPins, deletePowerState, deleteProfile, deleteRail, deleteSelection,
   disconnectWire, moveParts, netWires, renamePart, setNetPull, setPartProfile, setPartRail, setProfileParam, setRailOff,
-  setRailTolerance, setRailVoltage, type Command,
+  setRailTolerance, setRailVoltage, addDiscrete, newDiscrete, setDiscrete, removeDiscrete, type Command,
 } from '../../app/store/commands/index.ts';
 import { applyFix, fixesFor } from '../../app/store/commands/fixes/index.ts';
 import { check } from '../../rules/engine/check.ts';
@@ -25,7 +25,12 @@ const FAMILIES = ['ttl', '74hc', '74hct', '74lvc', 'lvcmos33', 'lvcmos18', 'cmos
 
 /** Picks the `n`-th (modulo) of a list, or undefined from an empty one. */
 const nth = <T>(list: readonly T[], n: number): T | undefined => (list.length === 0 ? undefined : list[n % list.length]);
-const pinsOf = (d: Design) => d.parts.flatMap((p) => p.pins.map((pin) => `${p.id}.${pin.id}`));
+const DISCRETE_PIN_IDS = { resistor: ['1', '2'], 'fet-shifter': ['S', 'D'], 'diode-shifter': ['K', 'A'] } as const;
+const pinsOf = (d: Design) => [
+  ...d.parts.flatMap((p) => p.pins.map((pin) => `${p.id}.${pin.id}`)),
+  ...(d.discretes ?? []).flatMap((x) => DISCRETE_PIN_IDS[x.kind].map((pin) => `${x.id}.${pin}`)),
+];
+const KINDS = ['resistor', 'fet-shifter', 'diode-shifter'] as const;
 
 type Step = (h: Harness, n: number, m: number) => Command | 'undo' | 'redo' | undefined;
 
@@ -67,6 +72,18 @@ const STEPS: readonly [string, Step][] = [
     const fix = f && nth(fixesFor(f, design, result), m);
     return fix ? applyFix(fix) : undefined;
   }],
+  ['add discrete', (h, n, m) => addDiscrete(newDiscrete(h.design, KINDS[n % 3]!, { x: m, y: n }, nth(h.design.rails, m)?.id))],
+  ['discrete value', (h, n, m) => {
+    const d = nth(h.design.discretes ?? [], n);
+    if (d === undefined) return undefined;
+    if (d.kind === 'resistor') {
+      // Sometimes a tie: refused while that end is on a net.
+      return m % 3 === 0 ? setDiscrete(d.id, { tie: { '2': m % 2 === 0 ? 'ground' : (nth(h.design.rails, m)?.id ?? 'ground') } }) : setDiscrete(d.id, { ohms: [1e3, 4.7e3, 47e3][m % 3]!, tolerance: 0.01 });
+    }
+    return d.kind === 'fet-shifter' ? setDiscrete(d.id, { vgsThMax: [0.8, 1.5][m % 2]!, gate: nth(h.design.rails, m)?.id ?? d.gate }) : setDiscrete(d.id, { vfMax: 0.3 });
+  }],
+  ['remove discrete', (h, n) => { const d = nth(h.design.discretes ?? [], n); return d ? removeDiscrete(d.id) : undefined; }],
+  ['move discrete', (h, n, m) => { const d = nth(h.design.discretes ?? [], n); return d ? moveParts([{ id: d.id, x: m, y: n }]) : undefined; }],
   ['undo', () => 'undo'],
   ['redo', (h) => { h.undo(); return 'redo'; }],
 ];

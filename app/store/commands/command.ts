@@ -1,5 +1,5 @@
 import type { Draft } from 'immer';
-import type { Design } from '../../../rules/model/schema.ts';
+import { DISCRETE_PINS, type Design } from '../../../rules/model/schema.ts';
 import { pinKey, splitPinKey } from '../../../rules/model/pinKeys.ts';
 
 /** Why a command was refused; nothing of the design changes. */
@@ -29,7 +29,11 @@ export { pinKey, splitPinKey };
 /** True when the design has that part and that pin. */
 export function hasPin(design: Design, key: string): boolean {
   const { part, pin } = splitPinKey(key);
-  return design.parts.some((p) => p.id === part && p.pins.some((q) => q.id === pin));
+  if (design.parts.some((p) => p.id === part && p.pins.some((q) => q.id === pin))) return true;
+  // A part between chips (version 2): its pins by kind; a resistor's tied end is not on a net.
+  const d = design.discretes?.find((x) => x.id === part);
+  if (d === undefined || !DISCRETE_PINS[d.kind].includes(pin)) return false;
+  return !(d.kind === 'resistor' && d.tie?.[pin as '1' | '2'] !== undefined);
 }
 
 /** The smallest `${prefix}${k}` (k ≥ 1) not among `taken`. */

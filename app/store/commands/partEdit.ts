@@ -35,6 +35,7 @@ export function partProblem(design: Design, part: Part, replacing?: string): str
   const bad = designatorProblem(part.id);
   if (bad !== undefined) return bad;
   if (part.id !== replacing && design.parts.some((p) => p.id === part.id)) return `There is already a part ${part.id}.`;
+  if ((design.discretes ?? []).some((d) => d.id === part.id)) return `There is already a part ${part.id} (between chips).`;
   const read = PartSchema.safeParse(part);
   if (!read.success) {
     const issue = read.error.issues[0]!;

@@ -30,7 +30,8 @@ export function moveParts(moves: readonly Move[]): Command {
     name: moves.length === 1 ? `Move ${moves[0]!.id}` : `Move ${moves.length} parts`,
     recipe(design) {
       for (const m of moves) {
-        const part = design.parts.find((p) => p.id === m.id);
+        // A part between chips moves as a chip does.
+        const part = design.parts.find((p) => p.id === m.id) ?? design.discretes?.find((d) => d.id === m.id);
         if (part === undefined || !Number.isFinite(m.x) || !Number.isFinite(m.y)) continue;
         const x = Math.round(m.x);
         const y = Math.round(m.y);
@@ -107,6 +108,11 @@ export function removeParts(design: Draft<Design>, ids: readonly string[]): void
   const gone = new Set(ids);
   const isGone = (key: string) => gone.has(partOfPin(key));
   design.parts = design.parts.filter((p) => !gone.has(p.id));
+  // Parts between chips go the same way.
+  if (design.discretes !== undefined && design.discretes.some((d) => gone.has(d.id))) {
+    design.discretes = design.discretes.filter((d) => !gone.has(d.id));
+    if (design.discretes.length === 0) delete design.discretes;
+  }
   for (let k = design.nets.length - 1; k >= 0; k--) {
     const net = design.nets[k]!;
     if (!net.pins.some(isGone)) continue;
