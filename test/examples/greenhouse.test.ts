@@ -86,6 +86,21 @@ const plantedErrors: Planted[] = [
       suggested: 62e3,
     },
   },
+  // Planted in version 2: SCL2's 3.3 V-side pull-up through the FET shifter Q2 is 1 kΩ (−1 %),
+  // and the 1.8 V leaf sensor must sink it with its own 4.7 kΩ (−1 %): the I2C-bus
+  // specification's sink current per side at VOL = 0.2·VDD (i2c-lv, the specification
+  // restated), 1.71 V rail: (1.71 − 0.342)/4653 + (3.465 − 0.342)/990 = 3.45 mA > 3 mA.
+  {
+    id: 'fet-shifter:SCL2_L:all-on:Q2:U20.SCL:sink',
+    values: { driver: 'U20.SCL', iLow: (V18.min - 0.2 * V18.min) / 4653, iHigh: (V33.max - 0.2 * V18.min) / 990, rated: 3e-3 },
+  },
+  // The same sensor's low load as drive-load bounds it (catalogue: bounds at the rails' ends):
+  // its own pull-up at 1.89 V less VOL 0.378 V, the far pull-up at 3.465 V less the lowest VOL
+  // 0.342 V, and the controller's 1 µA input current (the example's own).
+  {
+    id: 'drive-load:SCL2_L:all-on:U20.SCL',
+    values: { driver: 'U20.SCL', loadLow: (1.8 * 1.05 - 0.2 * 1.8 * 1.05) / 4653 + (V33.max - 0.2 * V18.min) / 990 + U1_I, ratedLow: 3e-3 },
+  },
   // Standby: the 1.8 V rail is off, the 3.3 V pull-ups stay: 3.465 V on an unpowered pin whose
   // clamp diode conducts above 0.5 V (common practice).
   { id: 'back-power:SDA:standby:U2.SDA', values: { vNet: V33.max, viMax: CLAMP, limit: 'clamp', source: 'net' } },
@@ -93,6 +108,13 @@ const plantedErrors: Planted[] = [
 ];
 
 const plantedWarnings: Planted[] = [
+  // The planted SCL2 pull-up also costs the low margin at the sensor: the controller's 0.4 V row
+  // (the example's own, at 8 mA) plus the far side's current through RDS(on) 5 Ω, against
+  // VIL = 0.3 × 1.71 V (I2C-bus specification, restated): 0.4 + 5 × (1.31/4653 + 10 µA).
+  {
+    id: 'level-low:SCL2_L:all-on:U1.SCL2>U20.SCL',
+    values: { vol: 0.4 + 5 * ((V18.min - 0.4) / 4653 + 10e-6), vil: 0.3 * V18.min, driverVdd: V33.min, receiverVdd: V18.min },
+  },
   // 15 m of cable to the flow meter (1.5 nF, the example's own) on the controller's internal
   // 40 kΩ pull-up: ln(7/3) × 40 kΩ × 1.505 nF ≈ 51 µs, against the 10 µs the pulse counter needs.
   {
@@ -173,6 +195,26 @@ describe('greenhouse irrigation controller example', () => {
       'standby back-power:SCL:standby:U2.SCL',
       'standby back-power:SDA:standby:U2.SDA',
     ]);
+  });
+
+  it('shows a FET-shifted two-wire bus, a divider and a series resistor, each correct', () => {
+    const live = (net: string) => result.findings.filter((f) => f.net === net && f.waived === undefined && f.severity !== 'info');
+    for (const net of ['SDA2_H', 'SDA2_L', 'BUSY', 'BUSY_DIV', 'LEAK', 'LEAK_IN']) expect(live(net), net).toEqual([]);
+    expect((design.discretes ?? []).map((d) => d.kind).sort()).toEqual(['fet-shifter', 'fet-shifter', ...Array(7).fill('resistor')]);
+    // The divider R5 1.8 kΩ / R6 3.3 kΩ ±1 % from the display's 74HCT output (JESD7 restated:
+    // VDD − 0.66 V at 4 mA) at 4.75 V, less the controller's 1 µA through R5‖R6, against
+    // VIH = 0.7 × 3.465 V (the mcu-gpio starting point, common practice).
+    const pair = result.nets.get('all-on')!.get('BUSY_DIV')!.view.analysis.pairs[0]!;
+    const r5 = 1818;
+    const r6 = 3267;
+    expectClose(pair.high!.out, 4.09 * r6 / (r5 + r6) - (r5 * r6 / (r5 + r6)) * U1_I, 'divider high');
+    expectClose(pair.high!.threshold, MCU_VIH * V33.max, 'divider VIH');
+    // The series resistor R7 10 kΩ −5 % into the controller's leak input (1 mA limit, the
+    // example's own): (5.25 − 3.135)/9500 = 223 µA, absorbed by the 3.3 V rail's 20 mA minimum load.
+    const clamp = result.findings.find((f) => f.id === 'clamp-current:LEAK_IN:all-on:U1.LEAK')!;
+    expect(clamp.severity).toBe('info');
+    expectClose(clamp.values['current'] as number, (V50.max - V33.min) / 9500, 'clamp current');
+    expect(result.findings.find((f) => f.id === 'rail-injection:3v3:all-on')?.severity).toBe('info');
   });
 
   // The editor draws a part as a box about 200 wide and 40 + 22 per pin tall, on a canvas of

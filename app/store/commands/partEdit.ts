@@ -138,7 +138,7 @@ export function renamePart(id: string, to: string): Command {
       if (target === id) return;
       const bad = designatorProblem(target);
       if (bad !== undefined) return refuse(bad);
-      if (design.parts.some((p) => p.id === target)) return refuse(`There is already a part ${target}.`);
+      if (design.parts.some((p) => p.id === target) || (design.discretes ?? []).some((d) => d.id === target)) return refuse(`There is already a part ${target}.`);
       part.id = target;
       rewirePart(design, id, target, (pin) => pin);
     },
