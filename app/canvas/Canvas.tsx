@@ -66,8 +66,9 @@ export function Canvas() {
   const deriver = useRef(createFlowDeriver()).current;
   const chipNodes = useMemo(() => deriver.nodes(parts, selectedParts, drag), [deriver, parts, selectedParts, drag]);
   const discreteNodes = useMemo(() => deriver.discretes(discreteParts, selectedParts, drag), [deriver, discreteParts, selectedParts, drag]);
-  // Most designs have no parts between chips: then the chips' own array, unchanged.
-  const nodes = useMemo<AnyNode[]>(() => (discreteNodes.length === 0 ? chipNodes : [...chipNodes, ...discreteNodes]), [chipNodes, discreteNodes]);
+  // Most designs have no parts between chips: then the chips' own array, unchanged. Parts
+  // between chips come first (drawn beneath), so that the chips keep their order, the newest last.
+  const nodes = useMemo<AnyNode[]>(() => (discreteNodes.length === 0 ? chipNodes : [...discreteNodes, ...chipNodes]), [chipNodes, discreteNodes]);
   const edges = useMemo(() => deriver.edges(nets, selectedWires, moving), [deriver, nets, selectedWires, moving]);
   const place = usePlacePart();
   useCanvasKeys();
