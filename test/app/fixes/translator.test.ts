@@ -162,7 +162,7 @@ function withSdaTranslator(): Design {
 describe('a channel of a translator already there', () => {
   it('SCL takes channel 2 of the SDA translator: one part, two channels, each side pulled to its rail', () => {
     const start = withSdaTranslator();
-    expect(offered(start, 'overvoltage:SCL:all-on:U2.SCL')).toEqual(['translator-channel', 'translator', 'mark-tolerant']);
+    expect(offered(start, 'overvoltage:SCL:all-on:U2.SCL')).toEqual(['translator-channel', 'translator', 'fet-shifter', 'mark-tolerant']);
     applyAndUndo(start, 'overvoltage:SCL:all-on:U2.SCL', 'translator-channel', ({ design: d, fix }) => {
       expect(fix.title).toBe('Use channel 2 of translator U8 on SCL');
       expect(d.parts.filter((p) => p.profile === 'xlat-od').map((p) => p.id)).toEqual(['U8']);

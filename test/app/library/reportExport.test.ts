@@ -10,7 +10,7 @@ const AT = new Date(Date.UTC(2026, 11, 1, 12, 0, 0));
 
 describe('the editor\'s JSON report', () => {
   it.each([
-    { name: 'the example, with its planted faults', design: exampleDesign(), finding: 'level-high:VALVE_EN:all-on:U1.VALVE_EN>U3.EN', parts: 11 },
+    { name: 'the example, with its planted faults', design: exampleDesign(), finding: 'level-high:VALVE_EN:all-on:U1.VALVE_EN>U3.EN', parts: 12 },
     { name: 'an empty design', design: newDesign('Empty board'), finding: undefined, parts: 0 },
   ])('$name: holds to the report schema', ({ design, finding, parts }) => {
     const built = buildEditorReport(design, check(design), AT);

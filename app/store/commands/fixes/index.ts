@@ -12,6 +12,7 @@ import { markTolerantFix, markUnpoweredSafeFix, tolerantFamilyFixes, ttlInputsFi
 import { driveOfPin, findNet, pinAt, railOfPin } from './lookup.ts';
 import { addPullFix, pullValueFix, tieNetFixes, tiePinFixes } from './pulls.ts';
 import { translatorFixes } from './translator.ts';
+import { fetShifterFix } from './shifter.ts';
 import type { QuickFix } from './types.ts';
 
 export type { QuickFix } from './types.ts';
@@ -96,9 +97,9 @@ export function fixesFor(finding: Finding, design: Design, result: CheckResult):
     case 'level-low':
       return levelTranslator(design, finding);
     case 'overvoltage':
-      return [...tolerantFamilyFixes(design, finding), ...exposureTranslator(design, finding), markTolerantFix(design, finding)].filter(present);
+      return [...tolerantFamilyFixes(design, finding), ...exposureTranslator(design, finding), fetShifterFix(design, finding), markTolerantFix(design, finding)].filter(present);
     case 'back-power':
-      return [...exposureTranslator(design, finding), markUnpoweredSafeFix(design, finding)].filter(present);
+      return [...exposureTranslator(design, finding), fetShifterFix(design, finding), markUnpoweredSafeFix(design, finding)].filter(present);
     case 'missing-pull':
       return [addPullFix(design, finding)].filter(present);
     case 'pull-range':
