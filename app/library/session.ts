@@ -18,6 +18,8 @@ import { readDesignFile } from '../storage/designFile.ts';
 import { storageProblem } from '../storage/errors.ts';
 import type { Change, Library } from '../storage/library.ts';
 import type { Saver } from '../storage/saver.ts';
+import { fingerprint, stage, unstage, type KeyValueStore } from '../storage/staging.ts';
+import { commitDrafts, hasDrafts } from '../panels/drafts.ts';
 import { exportDesignFile } from './download.ts';
 import { countsOf, Editing, HELD, type Conflict, type EditingHooks, type Entry } from './editing.ts';
 import type { TabChannel } from './tabs.ts';
@@ -76,8 +78,23 @@ export function refusedRevisionsNotice(title: string, revs: readonly number[], o
   };
 }
 
+/** The page's localStorage, or null where there is none (or it may not be used). */
+export function pageStore(): KeyValueStore | null {
+  try {
+    return typeof localStorage === 'undefined' ? null : localStorage;
+  } catch {
+    return null;
+  }
+}
+
 export class Session {
   readonly state: StoreApi<SessionState>;
+  /** This tab's name: its staged entry and its lock carry it. */
+  readonly tab: string;
+  /** Where page-hide stages unsaved edits (see storage/staging.ts). */
+  staging: KeyValueStore | null = pageStore();
+  /** True while this tab's entry is staged and not yet known to be stored. */
+  private staged = false;
   private ctx: Editing;
   private serial = 0;
   private readonly hooks: EditingHooks = {
@@ -95,6 +112,7 @@ export class Session {
     first: { readonly id: string | null; readonly rev: number; readonly design: Design },
     storageError: string | null = null,
   ) {
+    this.tab = channel?.tab ?? crypto.randomUUID();
     this.ctx = this.editing(first.id, first.rev, first.design);
     this.state = createStore<SessionState>()(() => ({
       open: this.openOf(this.ctx), conflict: null, notices: [], view: null, storageError, task: null,
@@ -229,6 +247,37 @@ export class Session {
   /** Write what is pending now (page hidden or closing, another design opening). */
   flush(): Promise<void> {
     return this.ctx.saver.flush();
+  }
+
+  /** True while an edit, or text typed in a field, is not yet stored. */
+  hasUnsaved(): boolean {
+    const { saver } = this.ctx;
+    return hasDrafts() || saver.unstored !== undefined || saver.status.state === 'failed';
+  }
+
+  /**
+   * The page is being hidden or closed: commit the fields' typed text, stage the newest
+   * unsaved state synchronously, and start its save (which may not finish). Returns whether
+   * something is staged.
+   */
+  leave(): boolean {
+    commitDrafts();
+    const staged = this.stage();
+    void this.flush();
+    return staged;
+  }
+
+  /** Write the open design's newest unsaved state to the staging store, synchronously. */
+  stage(): boolean {
+    const { ctx } = this;
+    const entry = ctx.saver.unstored;
+    if (this.library === null || ctx.id === null || entry === undefined) return false;
+    const inFlight = ctx.saver.inFlight;
+    this.staged = stage(this.staging, {
+      tab: this.tab, id: ctx.id, baseRev: ctx.baseRev, inFlight: inFlight === undefined || inFlight === entry ? null : fingerprint(inFlight.design),
+      design: entry.design, errors: entry.errors, warnings: entry.warnings, at: Date.now(),
+    });
+    return this.staged;
   }
 
   /** Settle a conflict: load the stored version, restore the deleted design, or keep this tab's as a copy. */
@@ -366,6 +415,15 @@ export class Session {
   private onSaveStatus(ctx: Editing): void {
     if (ctx !== this.ctx) return;
     const status = ctx.saver.status;
+    if (this.staged) {
+      // Once everything is stored the staged entry is stale; until then it follows the newest state.
+      if (ctx.saver.unstored === undefined && status.state === 'saved') {
+        unstage(this.staging, this.tab);
+        this.staged = false;
+      } else if (status.state === 'saving') {
+        this.stage();
+      }
+    }
     if (status.state === 'saved') this.dismiss('save');
     if (status.state !== 'failed' || status.error === HELD) return;
     this.notify({

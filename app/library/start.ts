@@ -10,7 +10,8 @@ import { exampleDesign } from '../example.ts';
 import { RailcrossDb } from '../storage/db.ts';
 import { storageProblem } from '../storage/errors.ts';
 import { Library } from '../storage/library.ts';
-import { errorLines, OPEN_KEY, refusedRevisionsNotice, Session, type Notice } from './session.ts';
+import { replayStaged, type KeyValueStore, type Replayed } from '../storage/staging.ts';
+import { errorLines, OPEN_KEY, pageStore, refusedRevisionsNotice, Session, type Notice } from './session.ts';
 import { exportDesignFile } from './download.ts';
 import { TabChannel } from './tabs.ts';
 
@@ -83,16 +84,19 @@ async function chooseFirst(library: Library, notices: Notice[]): Promise<First> 
 }
 
 /** Open storage and the first design; never throws (a storage failure gives an unsaved session). */
-export async function startSession(dbName?: string): Promise<Session> {
+export async function startSession(dbName?: string, staging: KeyValueStore | null = pageStore()): Promise<Session> {
   const start = performance.now();
   const channel = new TabChannel();
   let library: Library;
   const notices: Notice[] = [];
   let first: First;
+  let recovered: Replayed[] = [];
   try {
     const db = await openDb(dbName);
     library = new Library(db, (change) => channel.post(change));
+    holdTabLock(channel.tab);
     await library.purgeExpired();
+    recovered = await replayStaged(library, staging, tabAlive);
     first = await chooseFirst(library, notices);
   } catch (error) {
     const why = storageProblem(error);
@@ -107,21 +111,71 @@ export async function startSession(dbName?: string): Promise<Session> {
   }
   performance.measure('railcross:open', { start });
   const session = new Session(library, channel, first);
+  session.staging = staging;
   for (const n of notices) session.notify(n);
+  for (const n of replayNotices(recovered, session)) session.notify(n);
   await session.settled;
   return session;
 }
 
-/** Save when the page is hidden or closed; look for another tab's changes when it comes back. */
+const LOCK_PREFIX = 'railcross-tab-';
+
+/** Hold a lock named after this tab for as long as the page lives: its staged entry is its own while it does. */
+const locks = (): LockManager | undefined => (typeof navigator === 'undefined' ? undefined : navigator.locks);
+
+function holdTabLock(tab: string): void {
+  void locks()?.request(LOCK_PREFIX + tab, () => new Promise<void>(() => {})).catch(() => {});
+}
+
+/** Whether the tab that staged an entry is still open (where the browser can tell). */
+async function tabAlive(tab: string): Promise<boolean> {
+  const manager = locks();
+  if (manager === undefined) return false;
+  try {
+    const { held = [] } = await manager.query();
+    return held.some((l) => l.name === LOCK_PREFIX + tab);
+  } catch {
+    return false;
+  }
+}
+
+/** What start-up carried over from a page that went before its last edits were stored. */
+function replayNotices(replayed: readonly Replayed[], session: Session): Notice[] {
+  const notices: Notice[] = [];
+  const recovered = replayed.filter((r) => r.outcome === 'recovered');
+  for (const r of recovered) {
+    notices.push({
+      key: `recovered-${r.copy}`, tone: 'info',
+      title: `Edits made just before a page closed are kept as a new design, “${r.title}”`,
+      lines: ['Another tab saved the design meanwhile (or deleted it), so they were not written over its newer version.'],
+      actions: [{ label: 'Open it', run: () => void session.openDesign(r.copy) }],
+    });
+  }
+  const unreadable = replayed.filter((r) => r.outcome === 'unreadable');
+  if (unreadable.length > 0) {
+    notices.push({
+      key: 'staged-unreadable', tone: 'error', title: 'Edits left by a closed page could not be read and were dropped',
+      lines: unreadable.slice(0, 3).map((r) => `${r.key}: ${r.why}`),
+    });
+  }
+  return notices;
+}
+
+/**
+ * Keep every edit when the page is hidden, reloaded or closed: commit typed text, stage the
+ * newest unsaved state synchronously (see storage/staging.ts) and start its save; ask before
+ * leaving while anything is unsaved; look for another tab's changes when the page comes back.
+ */
 export function attachPageEvents(session: Session): () => void {
-  const onHide = () => void session.flush();
+  const onHide = () => void session.leave();
   const onVisibility = () => {
-    if (document.visibilityState === 'hidden') void session.flush();
+    if (document.visibilityState === 'hidden') session.leave();
     else void session.checkStored();
   };
   const onBeforeUnload = (e: BeforeUnloadEvent) => {
-    // A design that could not be stored would be lost: let the browser ask.
-    if (session.state.getState().open.saver.status.state === 'failed') e.preventDefault();
+    // What is staged on page-hide is replayed at the next start; the browser still asks, as
+    // the page cannot tell whether there will be a next start in this browser.
+    if (session.hasUnsaved()) e.preventDefault();
   };
   addEventListener('pagehide', onHide);
   document.addEventListener('visibilitychange', onVisibility);

@@ -4,9 +4,10 @@
  * parser or the command refuses stays in the field with the reason beside it; nothing is
  * stored.
  */
-import { useId, useState, type KeyboardEvent } from 'react';
+import { useId, useLayoutEffect, useRef, useState, type KeyboardEvent } from 'react';
 import { formatQuantity, parseQuantity, type QuantityResult, type Unit } from '../../rules/levels/units.ts';
 import type { Outcome } from '../store/editorStore.ts';
+import { holdDraft } from './drafts.ts';
 
 interface Editing {
   draft: string | null;
@@ -23,6 +24,11 @@ function useEditing(shown: string, commit: (text: string) => string | null) {
     const error = commit(state.draft);
     setState(error === null ? { draft: null, error: null } : { draft: state.draft, error });
   };
+  // A draft that differs from the stored value is committed if the page goes before Enter or blur.
+  const latest = useRef(finish);
+  latest.current = finish;
+  const dirty = state.draft !== null && state.draft !== shown;
+  useLayoutEffect(() => (dirty ? holdDraft(() => latest.current()) : undefined), [dirty]);
   const onKeyDown = (e: KeyboardEvent<HTMLInputElement>) => {
     if (e.key === 'Enter') finish();
     if (e.key === 'Escape') setState({ draft: null, error: null });
