@@ -141,6 +141,7 @@ export function Canvas() {
     place(id, { x: e.clientX, y: e.clientY });
   }, [place]);
 
+  const readOnly = useEditor((s) => s.readOnly);
   return (
     <div className={`rc-canvas${drag !== null ? ' rc-canvas--dragging' : ''}`} id={CANVAS_ID} onDragOver={onDragOver} onDrop={onDrop}>
       <ReactFlow<ChipNodeType, WireEdgeType>
@@ -155,6 +156,8 @@ export function Canvas() {
         onPaneClick={onPaneClick}
         isValidConnection={isValidConnection}
         connectionMode={ConnectionMode.Loose}
+        nodesDraggable={!readOnly}
+        nodesConnectable={!readOnly}
         deleteKeyCode={null}
         multiSelectionKeyCode={multiSelectionKeys}
         onlyRenderVisibleElements

@@ -14,6 +14,8 @@ import { replayStaged, type KeyValueStore, type Replayed } from '../storage/stag
 import { errorLines, OPEN_KEY, pageStore, refusedRevisionsNotice, Session, type Notice } from './session.ts';
 import { exportDesignFile } from './download.ts';
 import { TabChannel } from './tabs.ts';
+import { LARGE_DESIGN_PARTS } from '../check/jobs.ts';
+import { createEditorStore } from '../store/editorStore.ts';
 
 function rememberedId(): string | null {
   try {
@@ -50,8 +52,13 @@ interface First {
   readonly design: Design;
 }
 
+/** The design to open first holds too many parts to open before the user says how. */
+interface LargeFirst {
+  readonly large: { readonly id: string; readonly title: string; readonly parts: number; readonly errors: number; readonly warnings: number };
+}
+
 /** The design to open first, and what the user should hear about the others. */
-async function chooseFirst(library: Library, notices: Notice[]): Promise<First> {
+async function chooseFirst(library: Library, notices: Notice[]): Promise<First | LargeFirst> {
   const listing = await library.list();
   if (listing.skipped.length > 0) {
     const n = listing.skipped.length;
@@ -67,8 +74,12 @@ async function chooseFirst(library: Library, notices: Notice[]): Promise<First> 
   for (const id of wanted) {
     if (id === null || id === undefined || !known.has(id) || tried.has(id)) continue;
     tried.add(id);
+    const listed = listing.designs.find((d) => d.id === id);
+    const title = listed?.title ?? id;
+    // Read (and check) nothing of a design this large before the user chooses: that froze the page.
+    const parts = await library.partCount(id);
+    if (parts > LARGE_DESIGN_PARTS) return { large: { id, title, parts, errors: listed?.errors ?? 0, warnings: listed?.warnings ?? 0 } };
     const opened = await library.open(id);
-    const title = listing.designs.find((d) => d.id === id)?.title ?? id;
     if (opened.ok) {
       if (opened.refused.length > 0) {
         notices.push(refusedRevisionsNotice(title, opened.refused.map((r) => r.rev), opened.rev, opened.refused[0]?.errors ?? []));
@@ -89,7 +100,7 @@ export async function startSession(dbName?: string, staging: KeyValueStore | nul
   const channel = new TabChannel();
   let library: Library;
   const notices: Notice[] = [];
-  let first: First;
+  let first: First | LargeFirst;
   let recovered: Replayed[] = [];
   try {
     const db = await openDb(dbName);
@@ -110,7 +121,14 @@ export async function startSession(dbName?: string, staging: KeyValueStore | nul
     return session;
   }
   performance.measure('railcross:open', { start });
-  const session = new Session(library, channel, first);
+  const session = 'large' in first
+    // Nothing opens behind the choice: an empty, read-only page that stores nothing.
+    ? new Session(library, channel, { id: null, rev: 0, design: createEditorStore(newDesign(first.large.title), { readOnly: true }) })
+    : new Session(library, channel, first);
+  if ('large' in first) {
+    const { id, title, parts, errors, warnings } = first.large;
+    session.offerLarge({ id, title, parts, counts: { errors, warnings }, source: 'start', key: null });
+  }
   session.staging = staging;
   for (const n of notices) session.notify(n);
   for (const n of replayNotices(recovered, session)) session.notify(n);

@@ -124,6 +124,26 @@ export class Library {
   }
 
   /**
+   * How many parts the newest revision of a design holds, read without the reader (so that a
+   * design too large to open at once is known before it is opened); 0 when it cannot tell.
+   */
+  async partCount(id: string): Promise<number> {
+    const record = await this.db.designs.get(id);
+    if (record === undefined) return 0;
+    const stored = await this.db.documents.get([id, record.rev]);
+    const doc = stored?.doc;
+    const parts = typeof doc === 'object' && doc !== null ? (doc as { parts?: unknown }).parts : undefined;
+    return Array.isArray(parts) ? parts.length : 0;
+  }
+
+  /** The newest revision's document as stored (unread). */
+  async newestDocument(id: string): Promise<unknown> {
+    const record = await this.db.designs.get(id);
+    if (record === undefined) return undefined;
+    return (await this.db.documents.get([id, record.rev]))?.doc;
+  }
+
+  /**
    * Save `design` as the next revision of `id`, provided its newest revision is still
    * `baseRev`; drop revisions beyond the last `KEPT_REVISIONS`. One transaction.
    */
