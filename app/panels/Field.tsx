@@ -8,6 +8,7 @@ import { useId, useLayoutEffect, useRef, useState, type KeyboardEvent } from 're
 import { formatQuantity, parseQuantity, type QuantityResult, type Unit } from '../../rules/levels/units.ts';
 import type { Outcome } from '../store/editorStore.ts';
 import { holdDraft } from './drafts.ts';
+import { useEditor } from '../store/EditorProvider.tsx';
 
 interface Editing {
   draft: string | null;
@@ -71,9 +72,11 @@ function EditedInput({ label, quiet, testId, placeholder, title, shown, commit, 
 }) {
   const errorId = useId();
   const f = useEditing(shown, commit);
+  // A design opened read-only takes no typing: nothing would be stored.
+  const readOnly = useEditor((s) => s.readOnly);
   return (
     <Frame label={label} quiet={quiet} error={f.error} errorId={errorId}>
-      <input type="text" inputMode={decimal === true ? 'decimal' : undefined} value={f.value} data-testid={testId} spellCheck={false}
+      <input type="text" inputMode={decimal === true ? 'decimal' : undefined} value={f.value} data-testid={testId} spellCheck={false} readOnly={readOnly}
         aria-invalid={f.error !== null} placeholder={placeholder} title={title} aria-describedby={f.error !== null ? errorId : undefined}
         onChange={(e) => f.onChange(e.target.value)} onBlur={f.onBlur} onKeyDown={f.onKeyDown} />
     </Frame>
