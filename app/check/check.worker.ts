@@ -5,19 +5,21 @@
  */
 import type { CheckResult } from '../../rules/engine/types.ts';
 import type { Design } from '../../rules/model/schema.ts';
-import { readJob, reportJob, type Stage } from './jobs.ts';
+import { readJob, reportJob, storeIfLarge, type Stage } from './jobs.ts';
 import type { Request, Response } from './protocol.ts';
 
 let last: { key: number; design: Design; result: CheckResult } | null = null;
 const post = (message: Response) => postMessage(message);
 
-addEventListener('message', (event: MessageEvent<Request>) => {
-  const request = event.data;
+addEventListener('message', (event: MessageEvent<Request>) => void answer(event.data));
+
+async function answer(request: Request): Promise<void> {
   const progress = (stage: Stage) => post({ id: request.id, kind: 'progress', stage });
   try {
     if (request.kind === 'read') {
-      const { reply, result } = readJob(request.text, progress);
-      last = reply.ok && result !== null ? { key: request.id, design: reply.design, result } : null;
+      const read = readJob(request.text, progress);
+      last = read.reply.ok && read.result !== null && read.reply.design !== null ? { key: request.id, design: read.reply.design, result: read.result } : null;
+      const { reply } = await storeIfLarge(read, request.store, progress);
       post({ id: request.id, kind: 'read', reply });
     } else {
       const cached = request.key !== undefined && last?.key === request.key ? last : null;
@@ -27,4 +29,4 @@ addEventListener('message', (event: MessageEvent<Request>) => {
   } catch (error) {
     post({ id: request.id, kind: 'failed', error: error instanceof Error ? error.message : String(error) });
   }
-});
+}

@@ -5,7 +5,7 @@
  */
 import type { CheckResult } from '../../rules/engine/types.ts';
 import type { Design } from '../../rules/model/schema.ts';
-import { readJob, reportJob, type ReadReply, type ReportReply, type Stage } from './jobs.ts';
+import { readJob, reportJob, storeIfLarge, type ReadReply, type ReportReply, type Stage, type StoreLarge } from './jobs.ts';
 import type { Request, Response } from './protocol.ts';
 
 export type OnStage = (stage: Stage) => void;
@@ -17,7 +17,8 @@ export interface ReadOutcome {
 }
 
 export interface Checker {
-  read(text: string, onStage: OnStage): Promise<ReadOutcome>;
+  /** Read and check a design file; with `store`, a design above its limit is stored where it is read. */
+  read(text: string, onStage: OnStage, store?: StoreLarge): Promise<ReadOutcome>;
   /** The report of an earlier read (`key`) or of a stored document. */
   report(source: { readonly key: number } | { readonly doc: unknown }, onStage: OnStage): Promise<ReportReply>;
 }
@@ -59,8 +60,8 @@ class WorkerChecker implements Checker {
     return worker;
   }
 
-  async read(text: string, onStage: OnStage): Promise<ReadOutcome> {
-    const r = await this.send({ kind: 'read', text }, onStage);
+  async read(text: string, onStage: OnStage, store?: StoreLarge): Promise<ReadOutcome> {
+    const r = await this.send(store === undefined ? { kind: 'read', text } : { kind: 'read', text, store }, onStage);
     if (r.kind === 'failed') throw new Error(r.error);
     if (r.kind !== 'read') throw new Error(`the checking worker answered ${r.kind} to a read`);
     return { reply: r.reply, key: r.id };
@@ -79,10 +80,11 @@ export class InlineChecker implements Checker {
   private last: { key: number; design: Design; result: CheckResult } | null = null;
   private next = 1;
 
-  async read(text: string, onStage: OnStage): Promise<ReadOutcome> {
+  async read(text: string, onStage: OnStage, store?: StoreLarge): Promise<ReadOutcome> {
     const key = this.next++;
-    const { reply, result } = readJob(text, onStage);
-    this.last = reply.ok && result !== null ? { key, design: reply.design, result } : null;
+    const read = readJob(text, onStage);
+    this.last = read.reply.ok && read.result !== null && read.reply.design !== null ? { key, design: read.reply.design, result: read.result } : null;
+    const { reply } = await storeIfLarge(read, store, onStage);
     return { reply, key };
   }
 

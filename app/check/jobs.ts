@@ -11,7 +11,8 @@ import { readDesign } from '../../rules/model/reader.ts';
 import type { Design } from '../../rules/model/schema.ts';
 import type { Report } from '../../rules/report/reportSchema.ts';
 import { buildEditorReport } from '../library/reportExport.ts';
-import { readDocument } from '../storage/library.ts';
+import { RailcrossDb } from '../storage/db.ts';
+import { Library, readDocument } from '../storage/library.ts';
 
 /**
  * Above this many parts a design opens with a choice (open anyway, read-only, report only)
@@ -24,7 +25,7 @@ export const LARGE_DESIGN_PARTS = 2000;
 /** Files larger than this are read in the worker (about 450 parts; a 1,000-part file is 0.56 MB). */
 export const WORKER_FILE_BYTES = 256 * 1024;
 
-export type Stage = 'reading' | 'checking' | 'reporting';
+export type Stage = 'reading' | 'checking' | 'storing' | 'reporting';
 
 export interface Counts {
   readonly errors: number;
@@ -32,7 +33,16 @@ export interface Counts {
 }
 
 export type ReadReply =
-  | { readonly ok: true; readonly design: Design; readonly parts: number; readonly counts: Counts; readonly checkMs: number }
+  | {
+    readonly ok: true;
+    /** The design, unless it was stored where it was read (`stored`): a large design never crosses to the page. */
+    readonly design: Design | null;
+    readonly stored: { readonly id: string; readonly rev: number } | null;
+    readonly title: string;
+    readonly parts: number;
+    readonly counts: Counts;
+    readonly checkMs: number;
+  }
   | { readonly ok: false; readonly errors: readonly DesignError[] };
 
 export type ReportReply =
@@ -52,7 +62,30 @@ export function readJob(text: string, progress: (stage: Stage) => void): { reply
   const start = performance.now();
   const result = check(read.design);
   const checkMs = performance.now() - start;
-  return { reply: { ok: true, design: read.design, parts: read.design.parts.length, counts: countsOf(result), checkMs }, result };
+  return { reply: { ok: true, design: read.design, stored: null, title: read.design.title, parts: read.design.parts.length, counts: countsOf(result), checkMs }, result };
+}
+
+/** Where a read stores a design of more than `aboveParts` parts itself, as a new design of the library. */
+export interface StoreLarge {
+  readonly dbName: string;
+  readonly aboveParts: number;
+}
+
+/**
+ * After `readJob`, a design above the limit is stored in the library from here (its own
+ * connection to the database), so that the page never copies it in or out.
+ */
+export async function storeIfLarge(read: { reply: ReadReply; result: CheckResult | null }, store: StoreLarge | undefined, progress: (stage: Stage) => void): Promise<{ reply: ReadReply; result: CheckResult | null }> {
+  const { reply } = read;
+  if (!reply.ok || store === undefined || reply.parts <= store.aboveParts || reply.design === null) return read;
+  progress('storing');
+  const db = new RailcrossDb(store.dbName);
+  try {
+    const record = await new Library(db).create(reply.design, reply.counts);
+    return { reply: { ...reply, design: null, stored: { id: record.id, rev: record.rev } }, result: read.result };
+  } finally {
+    db.close();
+  }
 }
 
 /** The JSON report of a stored document (read and checked here) or of a design just checked. */

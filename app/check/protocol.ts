@@ -1,8 +1,8 @@
 /** Messages between the page and the checking worker. */
-import type { ReadReply, ReportReply, Stage } from './jobs.ts';
+import type { ReadReply, ReportReply, Stage, StoreLarge } from './jobs.ts';
 
 export type Request =
-  | { readonly id: number; readonly kind: 'read'; readonly text: string }
+  | { readonly id: number; readonly kind: 'read'; readonly text: string; readonly store?: StoreLarge }
   /** `key`: the id of an earlier read whose design to report on; else `doc`, a stored document. */
   | { readonly id: number; readonly kind: 'report'; readonly key?: number; readonly doc?: unknown };
 

@@ -317,13 +317,15 @@ export class Session {
   private async importInWorker(file: File): Promise<boolean> {
     this.setView(null);
     this.setTask(stageText('reading', file.name, null));
+    const library = this.library;
     let outcome;
     try {
       const text = await file.text();
-      outcome = await this.checker.read(text, (stage) => this.setTask(stageText(stage, file.name, null)));
+      const store = library === null ? undefined : { dbName: library.db.name, aboveParts: LARGE_DESIGN_PARTS };
+      outcome = await this.checker.read(text, (stage) => this.setTask(stageText(stage, file.name, null)), store);
     } catch (error) {
       this.setTask(null);
-      this.notify({ key: 'import', tone: 'error', title: `“${file.name}” was not imported`, lines: [`${ROOT_PATH}: ${error instanceof Error ? error.message : String(error)}`, 'Nothing stored has changed.'] });
+      this.notify({ key: 'import', tone: 'error', title: `“${file.name}” was not imported`, lines: [`${ROOT_PATH}: ${storageProblem(error)}`, 'Nothing stored has changed.'] });
       return false;
     }
     const { reply, key } = outcome;
@@ -332,25 +334,26 @@ export class Session {
       this.notify({ key: 'import', tone: 'error', title: `“${file.name}” was not imported: it is not a valid design file`, lines: [...errorLines(reply.errors), 'Nothing stored has changed.'] });
       return false;
     }
-    const { design } = reply;
-    if (reply.parts <= LARGE_DESIGN_PARTS || this.library === null) {
-      this.setTask(`Opening “${design.title}”…`);
-      await painted();
-      const ok = await this.guard(`“${file.name}” could not be stored`, () => this.createAndOpen(design));
+    const imported: Notice = { key: 'import', tone: 'info', title: `Imported “${reply.title}” as a new design`, lines: [] };
+    if (reply.stored !== null) {
+      // Stored by the worker: tell other tabs, and offer the choice.
       this.setTask(null);
-      if (ok) this.notify({ key: 'import', tone: 'info', title: `Imported “${design.title}” as a new design`, lines: [] });
-      return ok;
+      this.channel?.post({ id: reply.stored.id, rev: reply.stored.rev, deleted: false });
+      this.notify(imported);
+      this.offerLarge({ id: reply.stored.id, title: reply.title, parts: reply.parts, counts: reply.counts, source: 'import', key });
+      return true;
     }
-    const library = this.library;
-    let id = '';
-    const ok = await this.guard(`“${file.name}” could not be stored`, async () => {
-      id = (await library.create(design, reply.counts)).id;
-    });
+    const design = reply.design;
+    if (design === null) {
+      this.setTask(null);
+      return false;
+    }
+    this.setTask(`Opening “${design.title}”…`);
+    await painted();
+    const ok = await this.guard(`“${file.name}” could not be stored`, () => this.createAndOpen(design));
     this.setTask(null);
-    if (!ok) return false;
-    this.notify({ key: 'import', tone: 'info', title: `Imported “${design.title}” as a new design`, lines: [] });
-    this.offerLarge({ id, title: design.title, parts: reply.parts, counts: reply.counts, source: 'import', key });
-    return true;
+    if (ok) this.notify(imported);
+    return ok;
   }
 
   // ---- library actions -------------------------------------------------------------------

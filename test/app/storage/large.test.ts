@@ -62,6 +62,15 @@ describe('a design too large to edit comfortably opens with a choice', () => {
     const stored = await a.library!.list();
     expect(stored.designs.map((d) => [d.title, d.errors, d.warnings])).toContainEqual([large.title, counts.errors, counts.warnings]);
 
+    // The record keeps the part count, so that the next start need not read the document to know it.
+    const id = offered!.id;
+    expect((await a.library!.db.designs.get(id))?.parts).toBe(LARGE_DESIGN_PARTS + 1);
+    expect(await a.library!.partCount(id)).toBe(LARGE_DESIGN_PARTS + 1);
+    // A record written before the count was kept: the document is counted instead.
+    const { parts: _kept, ...older } = (await a.library!.db.designs.get(id))!;
+    await a.library!.db.designs.put(older);
+    expect(await a.library!.partCount(id)).toBe(LARGE_DESIGN_PARTS + 1);
+
     await a.chooseLarge('report');
     const report = a.state.getState().large?.report;
     expect(report?.counts).toEqual(counts);
