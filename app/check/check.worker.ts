@@ -17,7 +17,8 @@ async function answer(request: Request): Promise<void> {
   const progress = (stage: Stage) => post({ id: request.id, kind: 'progress', stage });
   try {
     if (request.kind === 'read') {
-      const read = readJob(request.text, progress);
+      progress('reading');
+      const read = readJob(await request.file.text(), progress);
       last = read.reply.ok && read.result !== null && read.reply.design !== null ? { key: request.id, design: read.reply.design, result: read.result } : null;
       const { reply } = await storeIfLarge(read, request.store, progress);
       post({ id: request.id, kind: 'read', reply });

@@ -18,7 +18,7 @@ export interface ReadOutcome {
 
 export interface Checker {
   /** Read and check a design file; with `store`, a design above its limit is stored where it is read. */
-  read(text: string, onStage: OnStage, store?: StoreLarge): Promise<ReadOutcome>;
+  read(file: Blob, onStage: OnStage, store?: StoreLarge): Promise<ReadOutcome>;
   /** The report of an earlier read (`key`) or of a stored document. */
   report(source: { readonly key: number } | { readonly doc: unknown }, onStage: OnStage): Promise<ReportReply>;
 }
@@ -60,8 +60,9 @@ class WorkerChecker implements Checker {
     return worker;
   }
 
-  async read(text: string, onStage: OnStage, store?: StoreLarge): Promise<ReadOutcome> {
-    const r = await this.send(store === undefined ? { kind: 'read', text } : { kind: 'read', text, store }, onStage);
+  async read(file: Blob, onStage: OnStage, store?: StoreLarge): Promise<ReadOutcome> {
+    // The file itself crosses (a reference): its text is decoded in the worker, not here.
+    const r = await this.send(store === undefined ? { kind: 'read', file } : { kind: 'read', file, store }, onStage);
     if (r.kind === 'failed') throw new Error(r.error);
     if (r.kind !== 'read') throw new Error(`the checking worker answered ${r.kind} to a read`);
     return { reply: r.reply, key: r.id };
@@ -80,9 +81,9 @@ export class InlineChecker implements Checker {
   private last: { key: number; design: Design; result: CheckResult } | null = null;
   private next = 1;
 
-  async read(text: string, onStage: OnStage, store?: StoreLarge): Promise<ReadOutcome> {
+  async read(file: Blob, onStage: OnStage, store?: StoreLarge): Promise<ReadOutcome> {
     const key = this.next++;
-    const read = readJob(text, onStage);
+    const read = readJob(await file.text(), onStage);
     this.last = read.reply.ok && read.result !== null && read.reply.design !== null ? { key, design: read.reply.design, result: read.result } : null;
     const { reply } = await storeIfLarge(read, store, onStage);
     return { reply, key };

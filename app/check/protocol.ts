@@ -2,7 +2,7 @@
 import type { ReadReply, ReportReply, Stage, StoreLarge } from './jobs.ts';
 
 export type Request =
-  | { readonly id: number; readonly kind: 'read'; readonly text: string; readonly store?: StoreLarge }
+  | { readonly id: number; readonly kind: 'read'; readonly file: Blob; readonly store?: StoreLarge }
   /** `key`: the id of an earlier read whose design to report on; else `doc`, a stored document. */
   | { readonly id: number; readonly kind: 'report'; readonly key?: number; readonly doc?: unknown };
 

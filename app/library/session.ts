@@ -320,9 +320,8 @@ export class Session {
     const library = this.library;
     let outcome;
     try {
-      const text = await file.text();
       const store = library === null ? undefined : { dbName: library.db.name, aboveParts: LARGE_DESIGN_PARTS };
-      outcome = await this.checker.read(text, (stage) => this.setTask(stageText(stage, file.name, null)), store);
+      outcome = await this.checker.read(file, (stage) => this.setTask(stageText(stage, file.name, null)), store);
     } catch (error) {
       this.setTask(null);
       this.notify({ key: 'import', tone: 'error', title: `“${file.name}” was not imported`, lines: [`${ROOT_PATH}: ${storageProblem(error)}`, 'Nothing stored has changed.'] });
