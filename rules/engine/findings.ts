@@ -3,8 +3,13 @@ import type { Net } from '../model/schema.ts';
 import type { Draft, MessageFns, Rule } from '../checks/defineRule.ts';
 import { RULE_IDS } from '../model/ruleIds.ts';
 import type { Finding, PowerState, Summary } from './types.ts';
+import { finiteOrNull, UNDECIDABLE, UNDECIDABLE_HINT, undecidableMessage, undecidablePaths } from './undecidable.ts';
 
-/** Completes a draft: `rule:NET:SCENARIO[:suffix]` (report-format.md, "Finding"). */
+/**
+ * Completes a draft: `rule:NET:SCENARIO[:suffix]` (report-format.md, "Finding"). A draft that
+ * carries a number that is not finite becomes an unwaivable "cannot be guaranteed" error
+ * (undecidable.ts), whatever the rule said.
+ */
 export function completeFinding<M extends MessageFns>(
   rule: Rule<M>,
   draft: Draft<M>,
@@ -13,6 +18,23 @@ export function completeFinding<M extends MessageFns>(
 ): Finding {
   const place = net?.id ?? draft.subject ?? '';
   const id = `${rule.id}:${place}:${state.id}${draft.suffix === undefined ? '' : `:${draft.suffix}`}`;
+  const bad = undecidablePaths(draft.values, draft.data);
+  if (bad.length > 0) {
+    const subject = draft.suffix ?? (net === null ? (draft.subject ?? '') : `net ${net.id}`);
+    return {
+      id,
+      rule: rule.id,
+      severity: 'error',
+      scenario: state.id,
+      net: net?.id ?? null,
+      pins: draft.pins,
+      parts: draft.parts,
+      message: undecidableMessage(rule.meta.title, subject, bad, draft.values, draft.data),
+      messageId: UNDECIDABLE,
+      values: { ...finiteOrNull(draft.values), undecidable: bad },
+      hint: UNDECIDABLE_HINT,
+    };
+  }
   const message = rule.meta.messages[draft.messageId]!(draft.data);
   const waived = net === null ? undefined : waiverNote(net, rule.id, state.id);
   return {
@@ -46,7 +68,8 @@ function waiverNote(net: Net, rule: string, state: string): string | undefined {
 export function restampFinding(f: Finding, from: string, state: PowerState, place: string, net: Net | null): Finding {
   const prefix = `${f.rule}:${place}:`;
   const { waived: _old, ...rest } = f;
-  const waived = net === null ? undefined : waiverNote(net, f.rule, state.id);
+  // A finding that could not be decided is never waived: a waiver accepts a known risk.
+  const waived = net === null || f.messageId === UNDECIDABLE ? undefined : waiverNote(net, f.rule, state.id);
   return {
     ...rest,
     id: `${prefix}${state.id}${f.id.slice(prefix.length + from.length)}`,
