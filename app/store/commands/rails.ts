@@ -1,9 +1,9 @@
 import type { Draft } from 'immer';
 import type { Design, Rail } from '../../../rules/model/schema.ts';
 import { railRange } from '../../../rules/levels/rails.ts';
+import { isRailColour } from '../../../rules/model/colour.ts';
 import { freshId, refuse, type Command } from './command.ts';
 
-const HEX_COLOUR = /^#[0-9a-fA-F]{6}$/;
 
 function findRail(design: Draft<Design>, id: string) {
   return design.rails.find((r) => r.id === id);
@@ -73,7 +73,7 @@ export function setRailColour(id: string, colour: string): Command {
     recipe(design) {
       const rail = findRail(design, id);
       if (rail === undefined) return refuse(`There is no rail ${id}.`);
-      if (!HEX_COLOUR.test(colour)) return refuse(`"${colour}" is not a colour such as #2f8f6b.`);
+      if (!isRailColour(colour)) return refuse(`"${colour}" is not a colour such as #2f8f6b or #2f8 (only hexadecimal colours are allowed).`);
       rail.colour = colour;
     },
   };
