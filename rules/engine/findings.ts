@@ -20,7 +20,8 @@ export function completeFinding<M extends MessageFns>(
   const id = `${rule.id}:${place}:${state.id}${draft.suffix === undefined ? '' : `:${draft.suffix}`}`;
   const bad = undecidablePaths(draft.values, draft.data);
   if (bad.length > 0) {
-    const subject = draft.suffix ?? (net === null ? (draft.subject ?? '') : `net ${net.id}`);
+    const where = net === null ? [draft.subject, draft.suffix] : [draft.suffix ?? `net ${net.id}`];
+    const subject = [...new Set(where.filter((w): w is string => w !== undefined && w !== ''))].join(', ');
     return {
       id,
       rule: rule.id,

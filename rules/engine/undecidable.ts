@@ -62,7 +62,7 @@ export function undecidableMessage(title: string, subject: string, paths: readon
   const names = paths.map((p) => named(p, values, data));
   return (
     `${title}: cannot be guaranteed${subject === '' ? '' : ` for ${subject}`}, ` +
-    `because ${names.join(', ')} ${names.length === 1 ? 'is' : 'are'} not a finite number; ` +
+    `because ${names.join(', ')} ${names.length === 1 ? 'is not a finite number' : 'are not finite numbers'}; ` +
     'the check could not decide and counts as failed.'
   );
 }
