@@ -43,4 +43,13 @@ describe('a design with a non-finite intermediate, past the reader', () => {
     expect(report.crossings).toHaveLength(1);
     expect(report.crossings[0]).toMatchObject({ worst: 'error', marginHigh: null, marginLow: null });
   });
+
+  it('writes its PDF report', { timeout: 60_000 }, async () => {
+    const io = fakeIo({ [FILE]: TEXT }, { SOURCE_DATE_EPOCH: '1767225600' });
+    const status = await main(['check', FILE, '--pdf', 'report.pdf'], io);
+    expect(status, io.err).toBe(1);
+    const bytes = io.binaries.get('report.pdf');
+    expect(bytes, io.err).toBeDefined();
+    expect(Buffer.from(bytes!.slice(0, 5)).toString('latin1')).toBe('%PDF-');
+  });
 });
