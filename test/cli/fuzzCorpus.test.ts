@@ -44,7 +44,8 @@ function expectSound(report: Report): void {
   expect(parsed.success, parsed.success ? '' : JSON.stringify(parsed.error.issues.slice(0, 3))).toBe(true);
   const json = JSON.parse(JSON.stringify(report)) as unknown;
   expect(validateJson(json), JSON.stringify(validateJson.errors?.slice(0, 3))).toBe(true);
-  const text = renderText(report);
+  // Verbose: the plain text lists info findings only when asked (otherwise a count).
+  const text = renderText(report, { verbose: true });
   const markdown = renderMarkdown(report);
   for (const f of report.findings) expect(text).toContain(f.message);
   expect(markdown.startsWith('# Railcross check: ')).toBe(true);
