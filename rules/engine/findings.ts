@@ -1,8 +1,9 @@
 /** Turning rule drafts into findings: ids, waivers, and the report's order. */
 import type { Net } from '../model/schema.ts';
 import type { Draft, MessageFns, Rule } from '../checks/defineRule.ts';
-import { RULE_IDS } from '../model/ruleIds.ts';
-import type { Finding, PowerState, Summary } from './types.ts';
+import { RULE_IDS, type RuleId } from '../model/ruleIds.ts';
+import type { Finding, FindingOf, PowerState, Summary } from './types.ts';
+import type { FindingValues } from './values.ts';
 import { finiteOrNull, UNDECIDABLE, UNDECIDABLE_HINT, undecidableMessage, undecidablePaths } from './undecidable.ts';
 
 /** A finding's id, built in one place: `rule:PLACE:SCENARIO[:suffix]` (report-format.md, "Finding"). */
@@ -42,10 +43,12 @@ export function completeFinding<M extends MessageFns>(
       messageId: UNDECIDABLE,
       values: { ...finiteOrNull(draft.values), undecidable: bad },
       hint: UNDECIDABLE_HINT,
-    };
+    } as Finding; // the one place a finding is made: rule and values come from one typed rule
   }
   const message = rule.meta.messages[draft.messageId]!(draft.data);
   const waived = net === null ? undefined : waiverNote(net, rule.id, state.id);
+  // The one place a finding is made: its rule and values come from one typed rule, which the
+  // union of findings by rule cannot see through a generic rule.
   return {
     id,
     rule: rule.id,
@@ -61,7 +64,18 @@ export function completeFinding<M extends MessageFns>(
     values: draft.values,
     hint: draft.hint ?? rule.meta.hint,
     ...(waived === undefined ? {} : { waived }),
-  };
+  } as Finding;
+}
+
+/** Whether a finding is of `rule`: narrows it, and so its values, to that rule's. */
+export function isOfRule<I extends RuleId>(f: Finding, rule: I): f is Extract<Finding, FindingOf<I>> {
+  return f.rule === rule;
+}
+
+/** A finding's values as its rule's type, for a reader that found it by other means; throws on another rule's. */
+export function valuesOf<I extends RuleId>(f: Finding, rule: I): FindingValues<I> {
+  if (!isOfRule(f, rule)) throw new Error(`expected a ${rule} finding, found ${f.rule} (${f.id})`);
+  return f.values as FindingValues<I>;
 }
 
 /** The note of the first waiver of the net that names this rule in this power state. */

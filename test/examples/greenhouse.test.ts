@@ -153,7 +153,7 @@ describe('greenhouse irrigation controller example', () => {
   it.each([...plantedErrors, ...plantedWarnings])('$id carries its numbers and corner', ({ id, values }) => {
     const f = result.findings.find((x) => x.id === id);
     expect(f, id).toBeDefined();
-    for (const [k, v] of Object.entries(values)) expectClose(f!.values[k], v, `${id} ${k}`);
+    for (const [k, v] of Object.entries(values)) expectClose((f!.values as Readonly<Record<string, unknown>>)[k], v, `${id} ${k}`);
     expect(f!.message).toMatch(/\d/);
   });
 
