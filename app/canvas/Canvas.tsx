@@ -2,7 +2,7 @@
  * The canvas: React Flow showing nodes and edges derived from the design. It keeps no copy of
  * the design; it turns React Flow's events into commands (connect, move, select).
  */
-import { useCallback, useMemo, useRef, type DragEvent } from 'react';
+import { useCallback, useMemo, useRef, useState, type DragEvent } from 'react';
 import { useStore } from 'zustand';
 import { createStore } from 'zustand/vanilla';
 import {
@@ -16,6 +16,7 @@ import { ChipNode } from './ChipNode.tsx';
 import { createFlowDeriver, type ChipNode as ChipNodeType, type DiscreteNode as DiscreteNodeType, type WireEdge as WireEdgeType } from './deriveFlow.ts';
 import { DiscreteNode } from './DiscreteNode.tsx';
 import { Legend } from './Legend.tsx';
+import { LARGE_DESIGN_PARTS } from '../check/limits.ts';
 import { CANVAS_ID, fitViewOptions, TEMPLATE_MIME, usePlacePart } from './placement.ts';
 import { WireEdge } from './WireEdge.tsx';
 import { useCanvasKeys } from './useCanvasKeys.ts';
@@ -40,6 +41,17 @@ function sameKeys(set: ReadonlySet<string> | null, map: ReadonlyMap<string, unkn
   if (set === null || set.size !== map.size) return false;
   for (const k of map.keys()) if (!set.has(k)) return false;
   return true;
+}
+
+/** Where a large design's view starts: at its top-left chip, at a readable size. */
+function largeViewport(parts: readonly { readonly position?: { readonly x: number; readonly y: number } | undefined }[]): { x: number; y: number; zoom: number } {
+  const zoom = 0.8;
+  let corner: { x: number; y: number } | undefined;
+  for (const p of parts) {
+    const at = p.position;
+    if (at !== undefined && Number.isFinite(at.x) && Number.isFinite(at.y) && (corner === undefined || at.x + at.y < corner.x + corner.y)) corner = at;
+  }
+  return { x: 24 - (corner?.x ?? 0) * zoom, y: 24 - (corner?.y ?? 0) * zoom, zoom };
 }
 
 export function Canvas() {
@@ -148,6 +160,12 @@ export function Canvas() {
     place(id, { x: e.clientX, y: e.clientY });
   }, [place]);
 
+  const readOnly = useEditor((s) => s.readOnly);
+  // Decided once per editor (a design that grows past the limit keeps its view).
+  const [large] = useState(() => {
+    const { parts: all } = store.getState().design;
+    return all.length > LARGE_DESIGN_PARTS ? largeViewport(all) : null;
+  });
   return (
     <div className={`rc-canvas${drag !== null ? ' rc-canvas--dragging' : ''}`} id={CANVAS_ID} onDragOver={onDragOver} onDrop={onDrop}>
       <ReactFlow<AnyNode, WireEdgeType>
@@ -162,12 +180,17 @@ export function Canvas() {
         onPaneClick={onPaneClick}
         isValidConnection={isValidConnection}
         connectionMode={ConnectionMode.Loose}
+        nodesDraggable={!readOnly}
+        nodesConnectable={!readOnly}
         deleteKeyCode={null}
         multiSelectionKeyCode={multiSelectionKeys}
         onlyRenderVisibleElements
         snapToGrid
         snapGrid={snapGrid}
-        fitView
+        // A large design opens on its first chips, not fitted whole: every chip in view at once
+        // is what the page waits on (press F to fit it all).
+        fitView={large === null}
+        defaultViewport={large ?? undefined}
         fitViewOptions={fitViewOptions}
         minZoom={0.05}
         proOptions={proOptions}

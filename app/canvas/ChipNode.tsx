@@ -6,7 +6,7 @@
  * it draws only its outline, header and handles, at exactly the same size, so that wires keep
  * their ends and the browser has a fraction of the elements to paint.
  */
-import { memo, useEffect, useRef, type CSSProperties } from 'react';
+import { memo, useEffect, useRef } from 'react';
 import { Handle, Position, useStore as useFlowStore, useUpdateNodeInternals, type NodeProps } from '@xyflow/react';
 import type { Part, Pin, Rail } from '../../rules/model/schema.ts';
 import { formatQuantity } from '../../rules/levels/units.ts';
@@ -16,13 +16,10 @@ import { useKeyed } from '../store/keyedView.ts';
 import { pinLayout, type Side } from './chipLayout.ts';
 import type { ChipNode as ChipNodeType } from './deriveFlow.ts';
 import { zoomTier } from './farZoom.ts';
+import { railStyle } from './railStyle.ts';
 import { GLYPH_TEXT, glyphKind, PinGlyph } from './PinGlyph.tsx';
 
 const POSITION: Readonly<Record<Side, Position>> = { left: Position.Left, right: Position.Right, top: Position.Top, bottom: Position.Bottom };
-
-function railStyle(colour: string | undefined): CSSProperties {
-  return { '--rail': colour ?? 'var(--rail-default)' } as CSSProperties;
-}
 
 /** The swatch of a pin on a rail other than its part's: only such pins read the rails. */
 function OwnRail({ id }: { id: string }) {

@@ -6,6 +6,7 @@ import { useEffect } from 'react';
 import { useStore } from 'zustand';
 import { App } from '../App.tsx';
 import { ConflictPrompt } from './ConflictPrompt.tsx';
+import { LargePrompt } from './LargePrompt.tsx';
 import { LibraryDialog } from './LibraryDialog.tsx';
 import './library.css';
 import { Notices } from './Notices.tsx';
@@ -17,7 +18,7 @@ import { useFileDrop } from './useFileDrop.ts';
 export function Root({ session }: { session: Session }) {
   const open = useStore(session.state, (s) => s.open);
   // A modal dialog makes the page behind it inert: notices then show inside the library.
-  const modal = useStore(session.state, (s) => s.view !== null);
+  const modal = useStore(session.state, (s) => s.view !== null || s.large !== null);
   useEffect(() => attachPageEvents(session), [session]);
   useFileDrop(session);
   return (
@@ -26,6 +27,7 @@ export function Root({ session }: { session: Session }) {
       {!modal && <Notices />}
       <LibraryDialog />
       <ConflictPrompt />
+      <LargePrompt />
     </SessionProvider>
   );
 }

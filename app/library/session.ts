@@ -14,10 +14,15 @@ import type { Design } from '../../rules/model/schema.ts';
 import { replaceDesign, setTitle } from '../store/commands/index.ts';
 import { createEditorStore, type EditorStore } from '../store/editorStore.ts';
 import type { DesignRecord } from '../storage/db.ts';
-import { readDesignFile } from '../storage/designFile.ts';
+import { MAX_DESIGN_FILE_BYTES, readDesignFile, reportJsonFileName } from '../storage/designFile.ts';
+import { makeChecker, type Checker } from '../check/checker.ts';
+import { LARGE_DESIGN_PARTS, WORKER_FILE_BYTES, type Counts, type Stage } from '../check/jobs.ts';
+import { ROOT_PATH } from '../../rules/model/paths.ts';
 import { storageProblem } from '../storage/errors.ts';
 import type { Change, Library } from '../storage/library.ts';
 import type { Saver } from '../storage/saver.ts';
+import { fingerprint, stage, unstage, type KeyValueStore } from '../storage/staging.ts';
+import { commitDrafts, hasDrafts } from '../panels/drafts.ts';
 import { exportDesignFile } from './download.ts';
 import { countsOf, Editing, HELD, type Conflict, type EditingHooks, type Entry } from './editing.ts';
 import type { TabChannel } from './tabs.ts';
@@ -49,6 +54,36 @@ export interface Notice {
 
 export type LibraryView = 'designs' | 'deleted' | 'history';
 
+/** A design too large to open at once, waiting for the user's choice (see check/jobs.ts). */
+export interface LargeChoice {
+  readonly id: string;
+  readonly title: string;
+  readonly parts: number;
+  /** Its unwaived errors and warnings, when already checked (an import). */
+  readonly counts: Counts | null;
+  /** Imported just now, the design the page opens at start, or one picked in the library. */
+  readonly source: 'import' | 'start' | 'library';
+  /** The checker's key for the read that checked it, reused by "report only". */
+  readonly key: number | null;
+  /** What is being done for it now ("Checking…"). */
+  readonly busy: string | null;
+  readonly report: { readonly counts: Counts; readonly findings: number; readonly text: string; readonly fileName: string } | null;
+  readonly error: string | null;
+}
+
+export type LargeAction = 'open' | 'read-only' | 'report' | 'cancel';
+
+function stageText(stage: Stage, title: string, parts: number | null): string {
+  if (stage === 'reading') return `Reading “${title}”…`;
+  if (stage === 'checking') return `Checking “${title}”${parts === null ? '' : ` (${parts.toLocaleString('en')} parts)`}…`;
+  return `Writing the report of “${title}”…`;
+}
+
+/** Let the browser paint (a progress text, a dialog) before a long step on this thread. */
+const painted = () => new Promise<void>((resolve) => {
+  if (typeof requestAnimationFrame === 'function') requestAnimationFrame(() => setTimeout(resolve, 0));
+  else setTimeout(resolve, 0);
+});
 export interface SessionState {
   readonly open: OpenDesign;
   readonly conflict: Conflict | null;
@@ -58,6 +93,8 @@ export interface SessionState {
   readonly storageError: string | null;
   /** A long task in progress ("Making the PDF…"), for the progress indication. */
   readonly task: string | null;
+  /** A large design waiting for the choice of how to open it. */
+  readonly large: LargeChoice | null;
 }
 
 export function errorLines(errors: readonly DesignError[], max = 6): string[] {
@@ -76,8 +113,23 @@ export function refusedRevisionsNotice(title: string, revs: readonly number[], o
   };
 }
 
+/** The page's localStorage, or null where there is none (or it may not be used). */
+export function pageStore(): KeyValueStore | null {
+  try {
+    return typeof localStorage === 'undefined' ? null : localStorage;
+  } catch {
+    return null;
+  }
+}
+
 export class Session {
   readonly state: StoreApi<SessionState>;
+  /** This tab's name: its staged entry and its lock carry it. */
+  readonly tab: string;
+  /** Where page-hide stages unsaved edits (see storage/staging.ts). */
+  staging: KeyValueStore | null = pageStore();
+  /** True while this tab's entry is staged and not yet known to be stored. */
+  private staged = false;
   private ctx: Editing;
   private serial = 0;
   private readonly hooks: EditingHooks = {
@@ -92,12 +144,13 @@ export class Session {
   constructor(
     readonly library: Library | null,
     private readonly channel: TabChannel | null,
-    first: { readonly id: string | null; readonly rev: number; readonly design: Design },
+    first: { readonly id: string | null; readonly rev: number; readonly design: Design | EditorStore },
     storageError: string | null = null,
   ) {
+    this.tab = channel?.tab ?? crypto.randomUUID();
     this.ctx = this.editing(first.id, first.rev, first.design);
     this.state = createStore<SessionState>()(() => ({
-      open: this.openOf(this.ctx), conflict: null, notices: [], view: null, storageError, task: null,
+      open: this.openOf(this.ctx), conflict: null, notices: [], view: null, storageError, task: null, large: null,
     }));
     this.channel?.subscribe((change) => this.onRemoteChange(change));
     this.settled = this.afterOpen(this.ctx);
@@ -117,9 +170,26 @@ export class Session {
 
   // ---- opening ---------------------------------------------------------------------------
 
-  /** Open a design of the library in place of the current one (whose edits are saved first). */
-  async openDesign(id: string): Promise<boolean> {
-    if (this.library === null || id === this.ctx.id) return id === this.ctx.id;
+  /** Reads, checks and reports large designs off the main thread (created when first needed). */
+  private checkerInstance: Checker | null = null;
+  get checker(): Checker {
+    return this.checkerInstance ??= makeChecker();
+  }
+
+  /**
+   * Open a design of the library in place of the current one (whose edits are saved first).
+   * A design of more than `LARGE_DESIGN_PARTS` parts waits for the user's choice unless `force`.
+   */
+  async openDesign(id: string, options: { readonly force?: boolean; readonly readOnly?: boolean } = {}): Promise<boolean> {
+    if (this.library === null || (id === this.ctx.id && options.force !== true)) return id === this.ctx.id;
+    if (options.force !== true) {
+      const parts = await this.library.partCount(id);
+      if (parts > LARGE_DESIGN_PARTS) {
+        const record = await this.library.db.designs.get(id);
+        this.offerLarge({ id, title: record?.title ?? id, parts, counts: record === undefined ? null : { errors: record.errors, warnings: record.warnings }, source: 'library', key: null });
+        return false;
+      }
+    }
     await this.flush();
     const opened = await this.library.open(id);
     if (!opened.ok) {
@@ -127,8 +197,85 @@ export class Session {
       return false;
     }
     if (opened.refused.length > 0) this.notify(refusedRevisionsNotice(opened.record.title, opened.refused.map((r) => r.rev), opened.rev, opened.refused[0]?.errors ?? []));
-    this.adopt(id, opened.record.rev, opened.design);
+    this.adopt(id, opened.record.rev, opened.design, options.readOnly === true ? createEditorStore(opened.design, { readOnly: true }) : undefined);
     return true;
+  }
+
+  // ---- large designs ---------------------------------------------------------------------
+
+  /** Ask how to open a large design. */
+  offerLarge(choice: Omit<LargeChoice, 'busy' | 'report' | 'error'>): void {
+    this.state.setState({ large: { ...choice, busy: null, report: null, error: null }, view: null });
+  }
+
+  /** The user's choice for the large design on offer. */
+  async chooseLarge(action: LargeAction): Promise<void> {
+    const large = this.state.getState().large;
+    if (large === null || large.busy !== null) return;
+    const setLarge = (patch: Partial<LargeChoice>) => {
+      const now = this.state.getState().large;
+      if (now !== null && now.id === large.id) this.state.setState({ large: { ...now, ...patch } });
+    };
+    if (action === 'report') {
+      if (this.library === null) return;
+      setLarge({ busy: 'Checking…', error: null });
+      const onStage = (stage: Stage) => setLarge({ busy: stageText(stage, large.title, large.parts) });
+      try {
+        const reply = await this.checker.report(large.key !== null ? { key: large.key } : { doc: await this.library.newestDocument(large.id) }, onStage);
+        if (!reply.ok) setLarge({ busy: null, error: reply.errors.join('; ') });
+        else {
+          setLarge({
+            busy: null, counts: reply.counts,
+            report: { counts: reply.counts, findings: reply.findings, text: `${JSON.stringify(reply.report, null, 2)}\n`, fileName: reportJsonFileName(large.title) },
+          });
+        }
+      } catch (error) {
+        setLarge({ busy: null, error: storageProblem(error) });
+      }
+      return;
+    }
+    if (action === 'cancel') {
+      this.state.setState({ large: null });
+      // At start nothing else is open yet: open the most recent other design, or a new one.
+      if (this.ctx.id === null && this.library !== null) await this.openOther(large.id);
+      return;
+    }
+    setLarge({ busy: `Opening “${large.title}”…` });
+    this.setTask(`Opening “${large.title}” (${large.parts.toLocaleString('en')} parts)…`);
+    await painted();
+    try {
+      const ok = await this.openDesign(large.id, { force: true, readOnly: action === 'read-only' });
+      this.state.setState({ large: null });
+      if (!ok && this.ctx.id === null && this.library !== null) await this.openOther(large.id);
+    } finally {
+      this.setTask(null);
+    }
+  }
+
+  /** Open the editor of the open design for editing (it was opened read-only). */
+  async editAnyway(): Promise<void> {
+    const id = this.ctx.id;
+    if (id === null || !this.ctx.store.getState().readOnly) return;
+    this.setTask('Opening the design for editing…');
+    await painted();
+    try {
+      await this.openDesign(id, { force: true });
+    } finally {
+      this.setTask(null);
+    }
+  }
+
+  private async openOther(except: string): Promise<void> {
+    const library = this.library;
+    if (library === null) return;
+    await this.guard('No design could be opened', async () => {
+      const { designs } = await library.list();
+      for (const d of designs) {
+        if (d.id === except || (await library.partCount(d.id)) > LARGE_DESIGN_PARTS) continue;
+        if (await this.openDesign(d.id)) return;
+      }
+      await this.createAndOpen(newDesign());
+    });
   }
 
   /** Store `design` as a new design and open it. */
@@ -149,8 +296,13 @@ export class Session {
     await this.guard('The new design could not be stored', () => this.createAndOpen(newDesign()));
   }
 
-  /** Import a design file as a new design; a refused file changes nothing stored. */
+  /**
+   * Import a design file as a new design; a refused file changes nothing stored. A file of more
+   * than `WORKER_FILE_BYTES` is read and checked in the worker, so that the page keeps answering;
+   * a design of more than `LARGE_DESIGN_PARTS` parts is stored and offered with a choice.
+   */
   async importFile(file: File): Promise<boolean> {
+    if (file.size > WORKER_FILE_BYTES && file.size <= MAX_DESIGN_FILE_BYTES) return this.importInWorker(file);
     const read = await readDesignFile(file);
     if (!read.ok) {
       this.notify({ key: 'import', tone: 'error', title: `“${file.name}” was not imported: it is not a valid design file`, lines: [...errorLines(read.errors), 'Nothing stored has changed.'] });
@@ -159,6 +311,47 @@ export class Session {
     const ok = await this.guard(`“${file.name}” could not be stored`, () => this.createAndOpen(read.design));
     if (ok) this.notify({ key: 'import', tone: 'info', title: `Imported “${read.design.title}” as a new design`, lines: [] });
     this.setView(null);
+    return ok;
+  }
+
+  private async importInWorker(file: File): Promise<boolean> {
+    this.setView(null);
+    this.setTask(stageText('reading', file.name, null));
+    const library = this.library;
+    let outcome;
+    try {
+      const store = library === null ? undefined : { dbName: library.db.name, aboveParts: LARGE_DESIGN_PARTS };
+      outcome = await this.checker.read(file, (stage) => this.setTask(stageText(stage, file.name, null)), store);
+    } catch (error) {
+      this.setTask(null);
+      this.notify({ key: 'import', tone: 'error', title: `“${file.name}” was not imported`, lines: [`${ROOT_PATH}: ${storageProblem(error)}`, 'Nothing stored has changed.'] });
+      return false;
+    }
+    const { reply, key } = outcome;
+    if (!reply.ok) {
+      this.setTask(null);
+      this.notify({ key: 'import', tone: 'error', title: `“${file.name}” was not imported: it is not a valid design file`, lines: [...errorLines(reply.errors), 'Nothing stored has changed.'] });
+      return false;
+    }
+    const imported: Notice = { key: 'import', tone: 'info', title: `Imported “${reply.title}” as a new design`, lines: [] };
+    if (reply.stored !== null) {
+      // Stored by the worker: tell other tabs, and offer the choice.
+      this.setTask(null);
+      this.channel?.post({ id: reply.stored.id, rev: reply.stored.rev, deleted: false });
+      this.notify(imported);
+      this.offerLarge({ id: reply.stored.id, title: reply.title, parts: reply.parts, counts: reply.counts, source: 'import', key });
+      return true;
+    }
+    const design = reply.design;
+    if (design === null) {
+      this.setTask(null);
+      return false;
+    }
+    this.setTask(`Opening “${design.title}”…`);
+    await painted();
+    const ok = await this.guard(`“${file.name}” could not be stored`, () => this.createAndOpen(design));
+    this.setTask(null);
+    if (ok) this.notify(imported);
     return ok;
   }
 
@@ -229,6 +422,37 @@ export class Session {
   /** Write what is pending now (page hidden or closing, another design opening). */
   flush(): Promise<void> {
     return this.ctx.saver.flush();
+  }
+
+  /** True while an edit, or text typed in a field, is not yet stored. */
+  hasUnsaved(): boolean {
+    const { saver } = this.ctx;
+    return hasDrafts() || saver.unstored !== undefined || saver.status.state === 'failed';
+  }
+
+  /**
+   * The page is being hidden or closed: commit the fields' typed text, stage the newest
+   * unsaved state synchronously, and start its save (which may not finish). Returns whether
+   * something is staged.
+   */
+  leave(): boolean {
+    commitDrafts();
+    const staged = this.stage();
+    void this.flush();
+    return staged;
+  }
+
+  /** Write the open design's newest unsaved state to the staging store, synchronously. */
+  stage(): boolean {
+    const { ctx } = this;
+    const entry = ctx.saver.unstored;
+    if (this.library === null || ctx.id === null || entry === undefined) return false;
+    const inFlight = ctx.saver.inFlight;
+    this.staged = stage(this.staging, {
+      tab: this.tab, id: ctx.id, baseRev: ctx.baseRev, inFlight: inFlight === undefined || inFlight === entry ? null : fingerprint(inFlight.design),
+      design: entry.design, errors: entry.errors, warnings: entry.warnings, at: Date.now(),
+    });
+    return this.staged;
   }
 
   /** Settle a conflict: load the stored version, restore the deleted design, or keep this tab's as a copy. */
@@ -329,6 +553,7 @@ export class Session {
   // ---- the open design's editor and autosave ---------------------------------------------
 
   private adopt(id: string | null, rev: number, design: Design, store?: EditorStore): void {
+    if (this.state.getState().large?.id === id) this.state.setState({ large: null });
     // An edit made while the next design was loading is still written to its own design.
     this.ctx.close(true);
     this.ctx = this.editing(id, rev, store ?? design);
@@ -366,6 +591,15 @@ export class Session {
   private onSaveStatus(ctx: Editing): void {
     if (ctx !== this.ctx) return;
     const status = ctx.saver.status;
+    if (this.staged) {
+      // Once everything is stored the staged entry is stale; until then it follows the newest state.
+      if (ctx.saver.unstored === undefined && status.state === 'saved') {
+        unstage(this.staging, this.tab);
+        this.staged = false;
+      } else if (status.state === 'saving') {
+        this.stage();
+      }
+    }
     if (status.state === 'saved') this.dismiss('save');
     if (status.state !== 'failed' || status.error === HELD) return;
     this.notify({

@@ -10,9 +10,12 @@ import { exampleDesign } from '../example.ts';
 import { RailcrossDb } from '../storage/db.ts';
 import { storageProblem } from '../storage/errors.ts';
 import { Library } from '../storage/library.ts';
-import { errorLines, OPEN_KEY, refusedRevisionsNotice, Session, type Notice } from './session.ts';
+import { replayStaged, type KeyValueStore, type Replayed } from '../storage/staging.ts';
+import { errorLines, OPEN_KEY, pageStore, refusedRevisionsNotice, Session, type Notice } from './session.ts';
 import { exportDesignFile } from './download.ts';
 import { TabChannel } from './tabs.ts';
+import { LARGE_DESIGN_PARTS } from '../check/jobs.ts';
+import { createEditorStore } from '../store/editorStore.ts';
 
 function rememberedId(): string | null {
   try {
@@ -49,8 +52,13 @@ interface First {
   readonly design: Design;
 }
 
+/** The design to open first holds too many parts to open before the user says how. */
+interface LargeFirst {
+  readonly large: { readonly id: string; readonly title: string; readonly parts: number; readonly errors: number; readonly warnings: number };
+}
+
 /** The design to open first, and what the user should hear about the others. */
-async function chooseFirst(library: Library, notices: Notice[]): Promise<First> {
+async function chooseFirst(library: Library, notices: Notice[]): Promise<First | LargeFirst> {
   const listing = await library.list();
   if (listing.skipped.length > 0) {
     const n = listing.skipped.length;
@@ -66,8 +74,12 @@ async function chooseFirst(library: Library, notices: Notice[]): Promise<First> 
   for (const id of wanted) {
     if (id === null || id === undefined || !known.has(id) || tried.has(id)) continue;
     tried.add(id);
+    const listed = listing.designs.find((d) => d.id === id);
+    const title = listed?.title ?? id;
+    // Read (and check) nothing of a design this large before the user chooses: that froze the page.
+    const parts = await library.partCount(id);
+    if (parts > LARGE_DESIGN_PARTS) return { large: { id, title, parts, errors: listed?.errors ?? 0, warnings: listed?.warnings ?? 0 } };
     const opened = await library.open(id);
-    const title = listing.designs.find((d) => d.id === id)?.title ?? id;
     if (opened.ok) {
       if (opened.refused.length > 0) {
         notices.push(refusedRevisionsNotice(title, opened.refused.map((r) => r.rev), opened.rev, opened.refused[0]?.errors ?? []));
@@ -83,16 +95,19 @@ async function chooseFirst(library: Library, notices: Notice[]): Promise<First> 
 }
 
 /** Open storage and the first design; never throws (a storage failure gives an unsaved session). */
-export async function startSession(dbName?: string): Promise<Session> {
+export async function startSession(dbName?: string, staging: KeyValueStore | null = pageStore()): Promise<Session> {
   const start = performance.now();
   const channel = new TabChannel();
   let library: Library;
   const notices: Notice[] = [];
-  let first: First;
+  let first: First | LargeFirst;
+  let recovered: Replayed[] = [];
   try {
     const db = await openDb(dbName);
     library = new Library(db, (change) => channel.post(change));
+    holdTabLock(channel.tab);
     await library.purgeExpired();
+    recovered = await replayStaged(library, staging, tabAlive);
     first = await chooseFirst(library, notices);
   } catch (error) {
     const why = storageProblem(error);
@@ -106,22 +121,79 @@ export async function startSession(dbName?: string): Promise<Session> {
     return session;
   }
   performance.measure('railcross:open', { start });
-  const session = new Session(library, channel, first);
+  const session = 'large' in first
+    // Nothing opens behind the choice: an empty, read-only page that stores nothing.
+    ? new Session(library, channel, { id: null, rev: 0, design: createEditorStore(newDesign(first.large.title), { readOnly: true }) })
+    : new Session(library, channel, first);
+  if ('large' in first) {
+    const { id, title, parts, errors, warnings } = first.large;
+    session.offerLarge({ id, title, parts, counts: { errors, warnings }, source: 'start', key: null });
+  }
+  session.staging = staging;
   for (const n of notices) session.notify(n);
+  for (const n of replayNotices(recovered, session)) session.notify(n);
   await session.settled;
   return session;
 }
 
-/** Save when the page is hidden or closed; look for another tab's changes when it comes back. */
+const LOCK_PREFIX = 'railcross-tab-';
+
+/** Hold a lock named after this tab for as long as the page lives: its staged entry is its own while it does. */
+const locks = (): LockManager | undefined => (typeof navigator === 'undefined' ? undefined : navigator.locks);
+
+function holdTabLock(tab: string): void {
+  void locks()?.request(LOCK_PREFIX + tab, () => new Promise<void>(() => {})).catch(() => {});
+}
+
+/** Whether the tab that staged an entry is still open (where the browser can tell). */
+async function tabAlive(tab: string): Promise<boolean> {
+  const manager = locks();
+  if (manager === undefined) return false;
+  try {
+    const { held = [] } = await manager.query();
+    return held.some((l) => l.name === LOCK_PREFIX + tab);
+  } catch {
+    return false;
+  }
+}
+
+/** What start-up carried over from a page that went before its last edits were stored. */
+function replayNotices(replayed: readonly Replayed[], session: Session): Notice[] {
+  const notices: Notice[] = [];
+  const recovered = replayed.filter((r) => r.outcome === 'recovered');
+  for (const r of recovered) {
+    notices.push({
+      key: `recovered-${r.copy}`, tone: 'info',
+      title: `Edits made just before a page closed are kept as a new design, “${r.title}”`,
+      lines: ['Another tab saved the design meanwhile (or deleted it), so they were not written over its newer version.'],
+      actions: [{ label: 'Open it', run: () => void session.openDesign(r.copy) }],
+    });
+  }
+  const unreadable = replayed.filter((r) => r.outcome === 'unreadable');
+  if (unreadable.length > 0) {
+    notices.push({
+      key: 'staged-unreadable', tone: 'error', title: 'Edits left by a closed page could not be read and were dropped',
+      lines: unreadable.slice(0, 3).map((r) => `${r.key}: ${r.why}`),
+    });
+  }
+  return notices;
+}
+
+/**
+ * Keep every edit when the page is hidden, reloaded or closed: commit typed text, stage the
+ * newest unsaved state synchronously (see storage/staging.ts) and start its save; ask before
+ * leaving while anything is unsaved; look for another tab's changes when the page comes back.
+ */
 export function attachPageEvents(session: Session): () => void {
-  const onHide = () => void session.flush();
+  const onHide = () => void session.leave();
   const onVisibility = () => {
-    if (document.visibilityState === 'hidden') void session.flush();
+    if (document.visibilityState === 'hidden') session.leave();
     else void session.checkStored();
   };
   const onBeforeUnload = (e: BeforeUnloadEvent) => {
-    // A design that could not be stored would be lost: let the browser ask.
-    if (session.state.getState().open.saver.status.state === 'failed') e.preventDefault();
+    // What is staged on page-hide is replayed at the next start; the browser still asks, as
+    // the page cannot tell whether there will be a next start in this browser.
+    if (session.hasUnsaved()) e.preventDefault();
   };
   addEventListener('pagehide', onHide);
   document.addEventListener('visibilitychange', onVisibility);

@@ -4,9 +4,11 @@
  * parser or the command refuses stays in the field with the reason beside it; nothing is
  * stored.
  */
-import { useId, useState, type KeyboardEvent } from 'react';
+import { useId, useLayoutEffect, useRef, useState, type KeyboardEvent } from 'react';
 import { formatQuantity, parseQuantity, type QuantityResult, type Unit } from '../../rules/levels/units.ts';
 import type { Outcome } from '../store/editorStore.ts';
+import { holdDraft } from './drafts.ts';
+import { useEditor } from '../store/EditorProvider.tsx';
 
 interface Editing {
   draft: string | null;
@@ -23,6 +25,11 @@ function useEditing(shown: string, commit: (text: string) => string | null) {
     const error = commit(state.draft);
     setState(error === null ? { draft: null, error: null } : { draft: state.draft, error });
   };
+  // A draft that differs from the stored value is committed if the page goes before Enter or blur.
+  const latest = useRef(finish);
+  latest.current = finish;
+  const dirty = state.draft !== null && state.draft !== shown;
+  useLayoutEffect(() => (dirty ? holdDraft(() => latest.current()) : undefined), [dirty]);
   const onKeyDown = (e: KeyboardEvent<HTMLInputElement>) => {
     if (e.key === 'Enter') finish();
     if (e.key === 'Escape') setState({ draft: null, error: null });
@@ -65,9 +72,11 @@ function EditedInput({ label, quiet, testId, placeholder, title, shown, commit, 
 }) {
   const errorId = useId();
   const f = useEditing(shown, commit);
+  // A design opened read-only takes no typing: nothing would be stored.
+  const readOnly = useEditor((s) => s.readOnly);
   return (
     <Frame label={label} quiet={quiet} error={f.error} errorId={errorId}>
-      <input type="text" inputMode={decimal === true ? 'decimal' : undefined} value={f.value} data-testid={testId} spellCheck={false}
+      <input type="text" inputMode={decimal === true ? 'decimal' : undefined} value={f.value} data-testid={testId} spellCheck={false} readOnly={readOnly}
         aria-invalid={f.error !== null} placeholder={placeholder} title={title} aria-describedby={f.error !== null ? errorId : undefined}
         onChange={(e) => f.onChange(e.target.value)} onBlur={f.onBlur} onKeyDown={f.onKeyDown} />
     </Frame>

@@ -1,10 +1,10 @@
 import { addRail, deleteRail, setRailColour, setRailLabel, setRailTolerance, setRailVoltage } from '../store/commands/index.ts';
 import { useEditor, useEditorStore } from '../store/EditorProvider.tsx';
 import { DEFAULT_TOLERANCE } from '../../rules/model/schema.ts';
+import { longRailColour } from '../../rules/model/colour.ts';
 import { QuantityField, TextField } from './Field.tsx';
 import { formatPercent, parsePercent } from './percent.ts';
 
-const HEX = /^#[0-9a-fA-F]{6}$/;
 
 /** Each rail's label, nominal voltage, tolerance and colour. */
 export function RailsEditor() {
@@ -16,7 +16,7 @@ export function RailsEditor() {
       {rails.map((r) => (
         <div key={r.id} className="rc-rail-row" data-rail={r.id}>
           <div className="rc-rail-top">
-            <input type="color" aria-label={`Colour of rail ${r.label}`} value={r.colour !== undefined && HEX.test(r.colour) ? r.colour : '#888888'}
+            <input type="color" aria-label={`Colour of rail ${r.label}`} value={longRailColour(r.colour) ?? '#888888'}
               onChange={(e) => apply(setRailColour(r.id, e.target.value))} />
             <TextField label={`Label of rail ${r.id}`} quiet value={r.label} testId={`rail-label-${r.id}`} onCommit={(t) => apply(setRailLabel(r.id, t))} />
             <button type="button" className="rc-icon-btn" aria-label={`Delete rail ${r.label}`} title="Delete this rail (only when nothing uses it)"

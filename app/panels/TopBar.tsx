@@ -30,6 +30,7 @@ export function TopBar() {
   const undoName = useEditor((s) => s.past[s.past.length - 1]?.name);
   const redoName = useEditor((s) => s.future[0]?.name);
   const { fitView } = useReactFlow();
+  const readOnly = useEditor((s) => s.readOnly);
 
   const session = useSession();
   // A new design or the example opens as a design of its own in the library: the one open now
@@ -50,6 +51,12 @@ export function TopBar() {
       <div className="rc-title">
         <TextField label="Design title" quiet value={title} testId="design-title" onCommit={(t) => store.getState().apply(setTitle(t))} />
       </div>
+      {readOnly && session.openId !== null && (
+        <span className="rc-read-only" data-testid="read-only">
+          <span className="rc-read-only-badge">Read-only</span>
+          <button type="button" data-testid="edit-anyway" title="Open this design for editing (each change waits for its check)" onClick={() => void session.editAnyway()}>Edit</button>
+        </span>
+      )}
       <label className="rc-state-pick">
         <span>Power state</span>
         <select value={powerState} data-testid="power-state" onChange={(e) => store.getState().setPowerState(e.target.value)}>

@@ -30,6 +30,8 @@ export interface DesignRecord {
   /** Unwaived errors and warnings of all power states at the newest revision. */
   readonly errors: number;
   readonly warnings: number;
+  /** Parts at the newest revision (absent in records written before it was kept). */
+  readonly parts?: number;
 }
 
 /** One saved state of a design, without its document. */

@@ -96,7 +96,7 @@ export class Library {
   async create(design: Design, counts: Counts = { errors: 0, warnings: 0 }): Promise<DesignRecord> {
     const at = this.now();
     const record: DesignRecord = {
-      id: newDesignId(), title: design.title, rev: 1, createdAt: at, updatedAt: at, deletedAt: null, ...pick(counts),
+      id: newDesignId(), title: design.title, rev: 1, createdAt: at, updatedAt: at, deletedAt: null, ...pick(counts), parts: design.parts.length,
     };
     await this.db.transaction('rw', this.db.designs, this.db.revisions, this.db.documents, async () => {
       await this.db.designs.add(record);
@@ -124,6 +124,28 @@ export class Library {
   }
 
   /**
+   * How many parts the newest revision of a design holds, read without the reader (so that a
+   * design too large to open at once is known before it is opened); 0 when it cannot tell.
+   */
+  async partCount(id: string): Promise<number> {
+    const record = await this.db.designs.get(id);
+    if (record === undefined) return 0;
+    // Kept in the record since issue 14: a large document is then never read to count its parts.
+    if (Number.isInteger(record.parts) && (record.parts ?? -1) >= 0) return record.parts ?? 0;
+    const stored = await this.db.documents.get([id, record.rev]);
+    const doc = stored?.doc;
+    const parts = typeof doc === 'object' && doc !== null ? (doc as { parts?: unknown }).parts : undefined;
+    return Array.isArray(parts) ? parts.length : 0;
+  }
+
+  /** The newest revision's document as stored (unread). */
+  async newestDocument(id: string): Promise<unknown> {
+    const record = await this.db.designs.get(id);
+    if (record === undefined) return undefined;
+    return (await this.db.documents.get([id, record.rev]))?.doc;
+  }
+
+  /**
    * Save `design` as the next revision of `id`, provided its newest revision is still
    * `baseRev`; drop revisions beyond the last `KEPT_REVISIONS`. One transaction.
    */
@@ -137,7 +159,7 @@ export class Library {
       const rev = baseRev + 1;
       const at = this.now();
       await this.writeRevision(id, rev, at, design, counts);
-      await designs.put({ ...current, title: design.title, rev, updatedAt: at, ...pick(counts) });
+      await designs.put({ ...current, title: design.title, rev, updatedAt: at, ...pick(counts), parts: design.parts.length });
       if (rev > KEPT_REVISIONS) {
         const [from] = range(id);
         await revisions.where('[designId+rev]').between(from, [id, rev - KEPT_REVISIONS], true, true).delete();

@@ -30,6 +30,8 @@ export class Saver<T> {
   private readonly now: () => number;
   private timer: ReturnType<typeof setTimeout> | undefined;
   private pending: { value: T } | undefined;
+  /** The value being written now, until its write ends. */
+  private current: { value: T } | undefined;
   private firstPendingAt: number | undefined;
   private writing: Promise<void> = Promise.resolve();
   private readonly listeners = new Set<() => void>();
@@ -75,6 +77,16 @@ export class Saver<T> {
     return this.pending !== undefined;
   }
 
+  /** The newest value not known to be stored: the pending one, else the one being written. */
+  get unstored(): T | undefined {
+    return (this.pending ?? this.current)?.value;
+  }
+
+  /** The value whose write has started and not yet ended. */
+  get inFlight(): T | undefined {
+    return this.current?.value;
+  }
+
   subscribe(listener: () => void): () => void {
     this.listeners.add(listener);
     return () => this.listeners.delete(listener);
@@ -90,12 +102,15 @@ export class Saver<T> {
     if (taken === undefined) return;
     this.pending = undefined;
     this.firstPendingAt = undefined;
+    this.current = taken;
     this.setStatus({ state: 'saving' });
     try {
       await this.write(taken.value);
       this.writes++;
+      this.current = undefined;
       this.setStatus({ state: this.pending === undefined ? 'saved' : 'pending' });
     } catch (error) {
+      this.current = undefined;
       // Keep it for the next attempt unless a newer value came meanwhile.
       this.pending ??= taken;
       this.setStatus({ state: 'failed', error: error instanceof Error ? error.message : String(error) });

@@ -58,6 +58,8 @@ export interface EditorState {
   readonly lastCheck: CheckStat;
   readonly notice: Notice | null;
   readonly dialog: Dialog | null;
+  /** Opened read-only (a design too large to edit comfortably): every command is refused. */
+  readonly readOnly: boolean;
 
   apply(command: Command): Outcome;
   undo(): boolean;
@@ -70,8 +72,12 @@ export interface EditorState {
 
 export type EditorStore = StoreApi<EditorState>;
 
+/** Why an edit is refused in a read-only editor. */
+export const READ_ONLY = 'This design is open read-only: choose "Edit" beside the title to change it.';
+
 /** Create an editor holding `design` (already validated) and its first full check. */
-export function createEditorStore(design: Design): EditorStore {
+export function createEditorStore(design: Design, options: { readonly readOnly?: boolean } = {}): EditorStore {
+  const readOnly = options.readOnly === true;
   return createStore<EditorState>()((set, get) => {
     /** Take a new design: re-check against the previous result and keep the UI state consistent. */
     function adopt(next: Design, action: string, history: Pick<EditorState, 'past' | 'future'>, notice: Notice | null): void {
@@ -102,9 +108,14 @@ export function createEditorStore(design: Design): EditorStore {
       lastCheck: { action: 'Open', netsChecked: first.stats.netsChecked, ms: first.stats.ms },
       notice: null,
       dialog: null,
+      readOnly,
 
       apply(command) {
         const s = get();
+        if (readOnly) {
+          set({ notice: { kind: 'refused', text: READ_ONLY } });
+          return { ok: false, reason: READ_ONLY };
+        }
         let refusal: string | undefined;
         const [next, patches, inverse] = produceWithPatches(s.design, (draft) => {
           const out = command.recipe(draft);
@@ -125,6 +136,7 @@ export function createEditorStore(design: Design): EditorStore {
       },
 
       undo() {
+        if (readOnly) return false;
         const s = get();
         const step = s.past[s.past.length - 1];
         if (step === undefined) return false;
@@ -134,6 +146,7 @@ export function createEditorStore(design: Design): EditorStore {
       },
 
       redo() {
+        if (readOnly) return false;
         const s = get();
         const step = s.future[0];
         if (step === undefined) return false;

@@ -5,6 +5,7 @@
  */
 import type { RuleId } from '../model/ruleIds.ts';
 import type { InjectionView, LonePinView, NetView, RailView, Severity } from '../engine/types.ts';
+import type { RuleValues } from '../engine/values.ts';
 
 // eslint-style message functions: each takes the data a finding carries and writes one sentence.
 // eslint-disable-next-line @typescript-eslint/no-explicit-any
@@ -43,14 +44,15 @@ export interface RuleMeta<M extends MessageFns, S extends Severity = Severity> {
 }
 
 /** What a rule reports; the engine completes it into a Finding. */
-export type Draft<M extends MessageFns, S extends Severity = Severity> = {
+export type Draft<M extends MessageFns, S extends Severity = Severity, I extends RuleId = RuleId> = {
   [K in keyof M & string]: {
     readonly messageId: K;
     readonly data: Parameters<M[K]>[0];
     readonly severity: S;
     readonly pins: readonly string[];
     readonly parts: readonly string[];
-    readonly values: Readonly<Record<string, unknown>>;
+    /** The numbers used, as the report's values table lists them for this rule. */
+    readonly values: RuleValues[I];
     /** Appended to the finding id (`:DRIVER>RECEIVER`, `:PART.PIN`, `:PROFILE`). */
     readonly suffix?: string;
     /** For findings with no net: what stands in the net's place in the id (`PART.PIN`, a rail id). */
@@ -60,19 +62,19 @@ export type Draft<M extends MessageFns, S extends Severity = Severity> = {
   };
 }[keyof M & string];
 
-export type Reporter<M extends MessageFns, S extends Severity = Severity> = (draft: Draft<M, S>) => void;
+export type Reporter<M extends MessageFns, S extends Severity = Severity, I extends RuleId = RuleId> = (draft: Draft<M, S, I>) => void;
 
 export interface Rule<M extends MessageFns = MessageFns, S extends Severity = Severity, I extends RuleId = RuleId> {
   readonly id: I;
   readonly meta: RuleMeta<M, S>;
   /** Judges one prepared net in one power state. */
-  readonly checkNet?: (net: NetView, report: Reporter<M, S>) => void;
+  readonly checkNet?: (net: NetView, report: Reporter<M, S, I>) => void;
   /** Judges a pin that is on no net, in one power state. */
-  readonly checkPin?: (pin: LonePinView, report: Reporter<M, S>) => void;
+  readonly checkPin?: (pin: LonePinView, report: Reporter<M, S, I>) => void;
   /** Judges a rail and the pins on it, once (in `all-on`). */
-  readonly checkRail?: (rail: RailView, report: Reporter<M, S>) => void;
+  readonly checkRail?: (rail: RailView, report: Reporter<M, S, I>) => void;
   /** Judges the clamp currents flowing into one rail, in each power state (version 2). */
-  readonly checkInjection?: (view: InjectionView, report: Reporter<M, S>) => void;
+  readonly checkInjection?: (view: InjectionView, report: Reporter<M, S, I>) => void;
 }
 
 /** Declares a rule; the identity function, there for the types. */

@@ -3,7 +3,7 @@
  * its `maxInputRamp` (rules-catalogue.md). Both are single-pole RC estimates with C the net's
  * capacitance and R the pulls' Thévenin resistance or the slowest driver's output resistance.
  */
-import { exceeds } from '../levels/compare.ts';
+import { exceeds, higherScore } from '../levels/compare.ts';
 import { levelAt } from '../levels/level.ts';
 import { corners } from '../levels/rails.ts';
 import { sortedPoints } from '../levels/output.ts';
@@ -43,7 +43,7 @@ function outputResistance(driver: PinView, rails: RailStates): number | undefine
   for (const c of corners([driver.rail], rails.ranges)) {
     const vdd = c.get(driver.rail) ?? 0;
     const r = Math.abs(levelAt(a.v, vdd) - levelAt(b.v, vdd)) / di;
-    if (worst === undefined || r > worst) worst = r;
+    if (worst === undefined || higherScore(r, worst)) worst = r;
   }
   return worst;
 }
@@ -66,7 +66,7 @@ function edgeSource(view: NetView, except?: string): EdgeSource | undefined {
   for (const d of view.drivers) {
     if (d.drive === 'open-drain' || d.key === except) continue;
     const r = outputResistance(d, view.rails);
-    if (r === undefined || (slowest !== undefined && r <= slowest.resistance)) continue;
+    if (r === undefined || (slowest !== undefined && !higherScore(r, slowest.resistance))) continue;
     slowest = { driver: d.key, resistance: r, swing: view.rails.ranges.get(d.rail)?.min ?? 0 };
   }
   return slowest;
@@ -127,8 +127,9 @@ export default defineRule({
     const c = view.capacitance;
     const source = edgeSource(view);
     const limit = view.net.maxRiseTime;
-    // A source whose swing is 0 V (every pull rail off) makes no rising edge at all.
-    if (source !== undefined && source.swing > 0 && limit !== undefined) {
+    // A source whose swing is 0 V (every pull rail off) makes no rising edge at all; a swing
+    // that is not a number is judged (and fails), never skipped.
+    if (source !== undefined && !(source.swing <= 0) && limit !== undefined) {
       const pulled = source.driver === null;
       const riseTime = (pulled ? RISE_30_70 : RISE_10_90) * source.resistance * c;
       if (exceeds(riseTime, limit)) {
@@ -152,7 +153,7 @@ export default defineRule({
       const maxInputRamp = rx.params.maxInputRamp;
       if (maxInputRamp === undefined || rx.params.schmitt !== undefined) continue;
       const s = rx.role === 'bidir' ? edgeSource(view, rx.key) : source;
-      if (s === undefined || !(s.swing > 0)) continue;
+      if (s === undefined || s.swing <= 0) continue;
       const t1090 = RISE_10_90 * s.resistance * c;
       const ramp = t1090 / (0.8 * s.swing);
       if (!exceeds(ramp, maxInputRamp)) continue;

@@ -5,7 +5,7 @@
  */
 import { sortedPoints } from '../levels/output.ts';
 import { levelAt } from '../levels/level.ts';
-import { below, exceeds } from '../levels/compare.ts';
+import { below, exceeds, higherScore } from '../levels/compare.ts';
 import { E24, largestInRange } from '../levels/series.ts';
 import type { Corner } from '../levels/rails.ts';
 import { highThreshold } from '../engine/resolve.ts';
@@ -62,7 +62,7 @@ function minimum(view: NetView, drivers: readonly PinView[], pullRail: string) {
       const r = ((c.get(pullRail) ?? 0) - levelAt(top.v, c.get(d.rail) ?? 0)) / current;
       return { score: -r, r, corner: cornerRecord(c) };
     });
-    if (worst !== undefined && (best === undefined || worst.r > best.r)) best = { r: worst.r, corner: worst.corner, driver: d.key };
+    if (worst !== undefined && (best === undefined || higherScore(worst.r, best.r))) best = { r: worst.r, corner: worst.corner, driver: d.key };
   }
   return { best, weak };
 }
@@ -76,7 +76,7 @@ function levelMaximum(view: NetView, pullRail: string): Bound | undefined {
   let sumIih = 0;
   for (const p of view.pins) sumIih += p.params.iih ?? 0;
   const judged = view.receivers.filter((r) => highThreshold(r) !== undefined);
-  if (!(sumIih > 0) || judged.length === 0) return undefined;
+  if (sumIih <= 0 || judged.length === 0) return undefined;
   const railIds = [pullRail, ...judged.map((r) => r.rail)];
   return worstCorner(railIds, view.rails, (c) => {
     let vih = -Infinity;
@@ -141,8 +141,9 @@ export default defineRule({
     const rMin = weak.length > 0 ? null : Math.max(0, best?.r ?? 0);
     const level = levelMaximum(view, pull.to);
     const maxRise = view.net.maxRiseTime;
-    const rise = maxRise === undefined || !(view.capacitance > 0) ? undefined : maxRise / (RISE_30_70 * view.capacitance);
-    const byLevel = level !== undefined && (rise === undefined || level.r < rise);
+    const rise = maxRise === undefined || view.capacitance <= 0 ? undefined : maxRise / (RISE_30_70 * view.capacitance);
+    // A bound that is not a number is kept (and fails the check) rather than losing to the other.
+    const byLevel = level !== undefined && (rise === undefined || !higherScore(level.r, rise));
     const rMaxRaw = byLevel ? level!.r : rise;
     const rMax = rMaxRaw === undefined ? null : Math.max(0, rMaxRaw);
     const empty = rMin === null || (rMax !== null && (!exceeds(rMax, 0) || exceeds(rMin, rMax)));

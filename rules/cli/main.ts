@@ -4,6 +4,7 @@
  * the real io; rules/cli/bin.ts is the entry of the built `bin` (dist-cli/railcross.mjs).
  */
 import { readDesign } from '../model/reader.ts';
+import { MAX_VOLTS } from '../model/limits.ts';
 import type { Design } from '../model/schema.ts';
 import { check } from '../engine/check.ts';
 import { ALL_ON } from '../engine/powerStates.ts';
@@ -127,6 +128,7 @@ function checkOptions(args: readonly string[]): CheckOptions | Refusal {
     const q = parseQuantity(margin, 'V');
     if (!q.ok) return refuse(`--min-margin is "${margin}": ${q.error} (e.g. 0.3, 300m or "300 mV")`);
     if (q.value < 0) return refuse(`--min-margin is "${margin}": expected a margin of 0 V or more`);
+    if (!(q.value <= MAX_VOLTS)) return refuse(`--min-margin is "${margin}": expected a margin of at most ${MAX_VOLTS / 1000} kV`);
     minMargin = q.value;
   }
 

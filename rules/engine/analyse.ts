@@ -5,7 +5,7 @@
  */
 import { levelAt } from '../levels/level.ts';
 import { outputLevel } from '../levels/output.ts';
-import { below } from '../levels/compare.ts';
+import { below, lowerScore } from '../levels/compare.ts';
 import { highThreshold, lowThreshold } from './resolve.ts';
 import { pullRails, thevenin, worstCorner } from './netMath.ts';
 import type {
@@ -23,7 +23,10 @@ export interface AnalysisInput {
   readonly settings: EffectiveSettings;
 }
 
-/** Pass, warning or fail for the level that must be higher (`better`) against the one it must clear. */
+/**
+ * Pass, warning or fail for the level that must be higher (`better`) against the one it must
+ * clear; `below` answers true for a value that is not finite, so such a pair fails.
+ */
 function judge(better: number, worse: number, minMargin: number): PairStatus {
   // Compare the levels themselves, never their difference with 0 (rules-catalogue.md).
   if (below(better, worse)) return 'fail';
@@ -105,8 +108,8 @@ export function analyseNet(input: AnalysisInput): NetAnalysis {
       const high = highSide(input, driver, receiver, sumIih);
       const low = lowSide(input, driver, receiver);
       if (high === null && low === null) continue;
-      if (high !== null && (worstHigh === null || high.margin < worstHigh)) worstHigh = high.margin;
-      if (low !== null && (worstLow === null || low.margin < worstLow)) worstLow = low.margin;
+      if (high !== null && (worstHigh === null || lowerScore(high.margin, worstHigh))) worstHigh = high.margin;
+      if (low !== null && (worstLow === null || lowerScore(low.margin, worstLow))) worstLow = low.margin;
       pairs.push({ driver: driver.key, receiver: receiver.key, high, low });
     }
   }

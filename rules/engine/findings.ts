@@ -1,8 +1,10 @@
 /** Turning rule drafts into findings: ids, waivers, and the report's order. */
 import type { Net } from '../model/schema.ts';
 import type { Draft, MessageFns, Rule } from '../checks/defineRule.ts';
-import { RULE_IDS } from '../model/ruleIds.ts';
-import type { Finding, PowerState, Summary } from './types.ts';
+import { RULE_IDS, type RuleId } from '../model/ruleIds.ts';
+import type { Finding, FindingOf, PowerState, Summary } from './types.ts';
+import type { FindingValues } from './values.ts';
+import { finiteOrNull, UNDECIDABLE, UNDECIDABLE_HINT, undecidableMessage, undecidablePaths } from './undecidable.ts';
 
 /** A finding's id, built in one place: `rule:PLACE:SCENARIO[:suffix]` (report-format.md, "Finding"). */
 export function findingId(rule: string, place: string, state: string, suffix: string | undefined): string {
@@ -11,7 +13,8 @@ export function findingId(rule: string, place: string, state: string, suffix: st
 
 /**
  * Completes a draft. `place` is where the finding sits when the draft names no `subject`: the
- * net's id, or the pin's key for a pin on no net.
+ * net's id, or the pin's key for a pin on no net. A draft that carries a number that is not
+ * finite becomes an unwaivable "cannot be guaranteed" error (undecidable.ts), whatever the rule said.
  */
 export function completeFinding<M extends MessageFns>(
   rule: Rule<M>,
@@ -21,10 +24,33 @@ export function completeFinding<M extends MessageFns>(
   place: string = net?.id ?? '',
 ): Finding {
   const at = net?.id ?? draft.subject ?? place;
+  const id = findingId(rule.id, at, state.id, draft.suffix);
+  const bad = undecidablePaths(draft.values, draft.data);
+  if (bad.length > 0) {
+    const where = net === null ? [draft.subject, draft.suffix] : [draft.suffix ?? `net ${net.id}`];
+    const subject = [...new Set(where.filter((w): w is string => w !== undefined && w !== ''))].join(', ');
+    return {
+      id,
+      rule: rule.id,
+      severity: 'error',
+      scenario: state.id,
+      net: net?.id ?? null,
+      place: at,
+      ...(draft.suffix === undefined ? {} : { suffix: draft.suffix }),
+      pins: draft.pins,
+      parts: draft.parts,
+      message: undecidableMessage(rule.meta.title, subject, bad, draft.values, draft.data),
+      messageId: UNDECIDABLE,
+      values: { ...finiteOrNull(draft.values), undecidable: bad },
+      hint: UNDECIDABLE_HINT,
+    } as Finding; // the one place a finding is made: rule and values come from one typed rule
+  }
   const message = rule.meta.messages[draft.messageId]!(draft.data);
   const waived = net === null ? undefined : waiverNote(net, rule.id, state.id);
+  // The one place a finding is made: its rule and values come from one typed rule, which the
+  // union of findings by rule cannot see through a generic rule.
   return {
-    id: findingId(rule.id, at, state.id, draft.suffix),
+    id,
     rule: rule.id,
     severity: draft.severity,
     scenario: state.id,
@@ -38,7 +64,18 @@ export function completeFinding<M extends MessageFns>(
     values: draft.values,
     hint: draft.hint ?? rule.meta.hint,
     ...(waived === undefined ? {} : { waived }),
-  };
+  } as Finding;
+}
+
+/** Whether a finding is of `rule`: narrows it, and so its values, to that rule's. */
+export function isOfRule<I extends RuleId>(f: Finding, rule: I): f is Extract<Finding, FindingOf<I>> {
+  return f.rule === rule;
+}
+
+/** A finding's values as its rule's type, for a reader that found it by other means; throws on another rule's. */
+export function valuesOf<I extends RuleId>(f: Finding, rule: I): FindingValues<I> {
+  if (!isOfRule(f, rule)) throw new Error(`expected a ${rule} finding, found ${f.rule} (${f.id})`);
+  return f.values as FindingValues<I>;
 }
 
 /** The note of the first waiver of the net that names this rule in this power state. */
@@ -56,7 +93,8 @@ function waiverNote(net: Net, rule: string, state: string): string | undefined {
  */
 export function restampFinding(f: Finding, state: PowerState, net: Net | null): Finding {
   const { waived: _old, ...rest } = f;
-  const waived = net === null ? undefined : waiverNote(net, f.rule, state.id);
+  // A finding that could not be decided is never waived: a waiver accepts a known risk.
+  const waived = net === null || f.messageId === UNDECIDABLE ? undefined : waiverNote(net, f.rule, state.id);
   return {
     ...rest,
     id: findingId(f.rule, f.place, state.id, f.suffix),

@@ -6,6 +6,7 @@ import type { Corner, Range } from '../levels/rails.ts';
 import { corners } from '../levels/rails.ts';
 import { levelAt } from '../levels/level.ts';
 import { sortedPoints } from '../levels/output.ts';
+import { higherScore, lowerScore } from '../levels/compare.ts';
 import type { DriverLoad, PinView, PullSource, RailStates } from './types.ts';
 import { GROUND } from './powerStates.ts';
 
@@ -98,7 +99,9 @@ export function driverLoad(
 
 /**
  * The worst of a function over every corner of the given rails: the corner whose score is
- * lowest (for a margin) is kept. Returns undefined when `score` gives undefined everywhere.
+ * lowest (for a margin) is kept; a corner whose score is not finite is the worst of all
+ * (lowerScore), so that a failed computation is never hidden by a finite corner. Returns
+ * undefined when `score` gives undefined everywhere.
  */
 export function worstCorner<T extends { score: number }>(
   railIds: Iterable<string>,
@@ -108,7 +111,7 @@ export function worstCorner<T extends { score: number }>(
   let worst: T | undefined;
   for (const c of corners(railIds, rails.ranges)) {
     const r = evaluate(c);
-    if (r !== undefined && (worst === undefined || r.score < worst.score)) worst = r;
+    if (r !== undefined && (worst === undefined || lowerScore(r.score, worst.score))) worst = r;
   }
   return worst;
 }
@@ -157,7 +160,7 @@ export interface Exposure {
 /**
  * The worst exposure of a pin to the net's sources: over every source and every corner of the
  * source's rail and the pin's rail (shared when they are the same rail), the largest excess of
- * the source's voltage over `limit(pinVdd)`.
+ * the source's voltage over `limit(pinVdd)`; an excess that is not finite is the worst.
  */
 export function worstExposure(
   pin: PinView,
@@ -172,7 +175,7 @@ export function worstExposure(
       const pinVdd = c.get(pin.rail) ?? 0;
       const lim = limit(pinVdd);
       const excess = vNet - lim;
-      if (worst === undefined || excess > worst.excess) worst = { vNet, limit: lim, source, pinVdd, excess };
+      if (worst === undefined || higherScore(excess, worst.excess)) worst = { vNet, limit: lim, source, pinVdd, excess };
     }
   }
   if (worst === undefined) return undefined;

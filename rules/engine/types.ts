@@ -5,6 +5,7 @@
 import type { Design, Discrete, DiodeShifter, FetShifter, Net, Params, Pin, PinDrive, PinRole, Profile, Pull, Rail, Scenario, Waiver } from '../model/schema.ts';
 import type { RuleId } from '../model/ruleIds.ts';
 import type { Range } from '../levels/rails.ts';
+import type { FindingValues } from './values.ts';
 
 export type Severity = 'error' | 'warning' | 'info';
 
@@ -227,10 +228,9 @@ export interface NetAnalysis {
   readonly worstLow: number | null;
 }
 
-/** A finding (report-format.md, "Finding"); `messageId` names the rule's message. */
-export interface Finding {
+/** What every finding has, whatever its rule (report-format.md, "Finding"). */
+interface FindingBase {
   readonly id: string;
-  readonly rule: RuleId;
   readonly severity: Severity;
   readonly scenario: string;
   readonly net: string | null;
@@ -241,11 +241,17 @@ export interface Finding {
   readonly pins: readonly string[];
   readonly parts: readonly string[];
   readonly message: string;
+  /** The rule's message, or `undecidable` when a number met on the way was not finite. */
   readonly messageId: string;
-  readonly values: Readonly<Record<string, unknown>>;
   readonly hint: string;
   readonly waived?: string;
 }
+
+/** A finding of one rule, with that rule's values (rules/engine/values.ts). */
+export type FindingOf<I extends RuleId> = FindingBase & { readonly rule: I; readonly values: FindingValues<I> };
+
+/** A finding: a union discriminated by `rule`, so that reading `values` narrows by rule. */
+export type Finding = { [I in RuleId]: FindingOf<I> }[RuleId];
 
 /** Results of one net in one power state. */
 export interface NetResult {

@@ -42,7 +42,8 @@ export function largestTestCurrent(points: readonly OutputPoint[] | undefined): 
  * extrapolated to the load, never better than the last guaranteed point; with a single point,
  * that point. The line stops at the output's own rails, 0 V for a high level and `vdd` for a low
  * one (an output stage cannot swing beyond its supply: common practice), so that test points
- * a hair apart never extrapolate to astronomical or infinite volts. Undefined for an empty list.
+ * a hair apart never extrapolate to astronomical or infinite volts. A load or supply that is
+ * not finite gives NaN (no guarantee), never a clamped level. Undefined for an empty list.
  */
 export function outputLevel(
   points: readonly OutputPoint[] | undefined,
@@ -51,6 +52,9 @@ export function outputLevel(
   sense: 'high' | 'low',
 ): OutputLevel | undefined {
   if (points === undefined || points.length === 0) return undefined;
+  // A load or supply that is not a finite number guarantees nothing: NaN, which every
+  // comparison of the rules (rules/levels/compare.ts) judges as a failure.
+  if (!Number.isFinite(load) || !Number.isFinite(vdd)) return { v: Number.NaN, atCurrent: load, estimate: true };
   const sorted = sortedPoints(points);
   for (const p of sorted) {
     if (!exceeds(load, p.i)) return { v: levelAt(p.v, vdd), atCurrent: p.i, estimate: false };

@@ -10,6 +10,11 @@ import { z } from 'zod';
 import { parseLevel } from '../levels/level.ts';
 import { RULE_IDS } from './ruleIds.ts';
 import { describeValue } from './schemaIssues.ts';
+import { RAIL_COLOUR_PATTERN } from './colour.ts';
+import {
+  MAX_AMPS, MAX_FARADS, MAX_OHMS, MAX_RAMP, MAX_SECONDS, MAX_TOLERANCE, MAX_VDD_FACTOR, MAX_VOLTS,
+  MIN_AMPS, MIN_FARADS, MIN_OHMS, MIN_RAMP, MIN_SECONDS, limitText, rangeText,
+} from './limits.ts';
 
 // zod would otherwise compile validators with `new Function`, which a strict CSP forbids.
 z.config({ jitless: true });
@@ -17,10 +22,43 @@ z.config({ jitless: true });
 export const FORMAT_ID = 'railcross.design';
 export const FORMAT_VERSION = 2;
 
-const nonNegative = (what: string) =>
-  z.number().min(0, { message: `expected a ${what} of 0 or more` });
-const positive = (what: string) =>
-  z.number().gt(0, { message: `expected a positive ${what}` });
+/**
+ * A magnitude in `unit`: 0, or between `floor` and `max` (limits.ts says why each). The JSON
+ * Schema carries 0 … max; the floor, which keeps denormal numbers out, is in its description.
+ */
+const magnitude = (what: string, unit: string, floor: number, max: number) =>
+  z
+    .number()
+    .min(0, { message: `expected a ${what} (${unit}) of 0 or more` })
+    .max(max, { message: `expected a ${what} (${unit}) of at most ${limitText(max, unit)}` })
+    .refine((v) => v === 0 || v >= floor, {
+      message: `expected a ${what} (${unit}) of 0 or ${rangeText(floor, max, unit)}`,
+    })
+    .meta({ description: `${what} (${unit}): 0, or ${rangeText(floor, max, unit)}` });
+
+const current = () => magnitude('current', 'A', MIN_AMPS, MAX_AMPS);
+const capacitance = () => magnitude('capacitance', 'F', MIN_FARADS, MAX_FARADS);
+
+/** Volts, anywhere in the file: within ±MAX_VOLTS. */
+const volts = (what = 'voltage') =>
+  z
+    .number()
+    .min(-MAX_VOLTS, { message: `expected a ${what} (V) of at least ${-MAX_VOLTS / 1000} kV` })
+    .max(MAX_VOLTS, { message: `expected a ${what} (V) of at most ${MAX_VOLTS / 1000} kV` });
+
+/** A resistance in Ω within the reader's limits (a resistor part's value, a translator's Rs). */
+const resistance = () =>
+  z
+    .number()
+    .min(MIN_OHMS, { message: `expected a resistance (Ω) ${rangeText(MIN_OHMS, MAX_OHMS, 'Ω')}` })
+    .max(MAX_OHMS, { message: `expected a resistance (Ω) ${rangeText(MIN_OHMS, MAX_OHMS, 'Ω')}` });
+
+/** A fraction of a value, 0 or more and below 1 (0.05 for ±5 %). */
+const fraction = () =>
+  z
+    .number()
+    .min(0, { message: 'expected a tolerance (a fraction of nominal) of 0 or more' })
+    .lt(MAX_TOLERANCE, { message: 'expected a tolerance (a fraction of nominal, 0.05 for ±5 %) below 1' });
 
 /** A record id. Finding ids are built as `rule:NET:SCENARIO:PART.PIN`, hence the forbidden characters. */
 const id = (kind: string, allowDot: boolean) =>
@@ -46,7 +84,7 @@ export const LEVEL_PATTERN = `^ *${TERM}(?: *[-+] *${TERM})* *$`;
 export const LevelSchema = z
   .union(
     [
-      z.number(),
+      volts('Level'),
       z
         .string()
         .superRefine((s, ctx) => {
@@ -55,6 +93,11 @@ export const LevelSchema = z
             ctx.addIssue({
               code: 'custom',
               message: `expected a Level such as "2.0", "0.7*VDD" or "VDD-0.45": ${r.error} at character ${r.at + 1} of "${s}"`,
+            });
+          } else if (Math.abs(r.level.a) > MAX_VOLTS || Math.abs(r.level.b) > MAX_VDD_FACTOR) {
+            ctx.addIssue({
+              code: 'custom',
+              message: `expected a Level whose volts lie within ±${MAX_VOLTS / 1000} kV and whose factor of VDD within ±${MAX_VDD_FACTOR}, found "${s}"`,
             });
           }
         })
@@ -71,43 +114,43 @@ export const LevelSchema = z
 
 const OutputPointSchema = z.strictObject({
   v: LevelSchema,
-  i: nonNegative('current (A)'),
+  i: current(),
 }).meta({ id: 'OutputPoint', description: 'A guaranteed output level v (Level) at a load current i (A, magnitude)' });
 
 const VddRangeSchema = z
-  .tuple([z.number(), z.number()])
+  .tuple([volts(), volts()])
   .refine(([lo, hi]) => lo <= hi, { message: 'expected vddRange [min, max] with min ≤ max' });
 
 export const ParamsSchema = z.strictObject({
   vih: LevelSchema.optional(),
   vil: LevelSchema.optional(),
   schmitt: z.strictObject({ vtPlus: LevelSchema, vtMinus: LevelSchema }).optional(),
-  iih: nonNegative('current (A)').optional(),
-  iil: nonNegative('current (A)').optional(),
-  cin: nonNegative('capacitance (F)').optional(),
+  iih: current().optional(),
+  iil: current().optional(),
+  cin: capacitance().optional(),
   viMax: LevelSchema.optional(),
   unpoweredSafe: z.boolean().optional(),
-  viMaxOff: z.number().optional(),
+  viMaxOff: volts().optional(),
   voh: z.array(OutputPointSchema).optional(),
   vol: z.array(OutputPointSchema).optional(),
-  ioMax: nonNegative('current (A)').optional(),
-  maxInputRamp: nonNegative('ramp (s/V)').optional(),
+  ioMax: current().optional(),
+  maxInputRamp: magnitude('ramp', 's/V', MIN_RAMP, MAX_RAMP).optional(),
   vddRange: VddRangeSchema.optional(),
   // Version 2.
   viMin: LevelSchema.optional(),
-  injectionMax: nonNegative('current (A)').optional(),
-  busHold: z.strictObject({
-    hold: nonNegative('current (A)'),
-    overdrive: nonNegative('current (A)'),
-  }).optional(),
-  seriesResistance: positive('resistance (Ω)').optional(),
-  minExternalPull: positive('resistance (Ω)').optional(),
-  maxLoadCapacitance: nonNegative('capacitance (F)').optional(),
+  injectionMax: current().optional(),
+  busHold: z.strictObject({ hold: current(), overdrive: current() }).optional(),
+  seriesResistance: resistance().optional(),
+  minExternalPull: resistance().optional(),
+  maxLoadCapacitance: capacitance().optional(),
 }).meta({ id: 'Params', description: 'Electrical parameters of a pin; each key is resolved on its own: pin params, part params, profile' });
 
 export const PullSchema = z.strictObject({
   to: z.string().min(1, { message: 'expected a rail id or "ground"' }),
-  ohms: positive('resistance (Ω)'),
+  ohms: z
+    .number()
+    .min(MIN_OHMS, { message: `expected a resistance (Ω) ${rangeText(MIN_OHMS, MAX_OHMS, 'Ω')}` })
+    .max(MAX_OHMS, { message: `expected a resistance (Ω) ${rangeText(MIN_OHMS, MAX_OHMS, 'Ω')}` }),
 }).meta({ id: 'Pull', description: 'A pull resistor to a rail or to ground' });
 
 const PositionSchema = z.strictObject({ x: z.number(), y: z.number() });
@@ -115,12 +158,19 @@ const PositionSchema = z.strictObject({ x: z.number(), y: z.number() });
 export const RailSchema = z.strictObject({
   id: id('rail', true),
   label: z.string(),
-  nominal: z.number(),
-  tolerance: nonNegative('tolerance (fraction)').optional(),
-  min: z.number().optional(),
-  max: z.number().optional(),
-  colour: z.string().optional(),
-  minLoad: nonNegative('current (A)').optional(),
+  nominal: volts(),
+  tolerance: z
+    .number()
+    .min(0, { message: 'expected a tolerance (a fraction of nominal) of 0 or more' })
+    .lt(MAX_TOLERANCE, { message: 'expected a tolerance (a fraction of nominal, 0.05 for ±5 %) below 1' })
+    .optional(),
+  min: volts().optional(),
+  max: volts().optional(),
+  colour: z
+    .string()
+    .regex(new RegExp(RAIL_COLOUR_PATTERN), { message: 'expected a colour "#rgb" or "#rrggbb" (hexadecimal digits)' })
+    .optional(),
+  minLoad: current().optional(),
 }).meta({ id: 'Rail', description: 'A supply domain; range nominal × (1 ± tolerance), an explicit min or max wins for its end' });
 
 export const ScenarioSchema = z.strictObject({
@@ -172,8 +222,8 @@ const DiscreteBase = {
 export const ResistorSchema = z.strictObject({
   ...DiscreteBase,
   kind: z.literal('resistor'),
-  ohms: positive('resistance (Ω)'),
-  tolerance: nonNegative('tolerance (fraction)').optional(),
+  ohms: resistance(),
+  tolerance: fraction().optional(),
   tie: z.strictObject({ '1': TieSchema.optional(), '2': TieSchema.optional() }).optional(),
 }).meta({ id: 'Resistor', description: 'A resistor with pins 1 and 2; an end in tie goes to a rail or ground instead of a net' });
 
@@ -181,15 +231,15 @@ export const FetShifterSchema = z.strictObject({
   ...DiscreteBase,
   kind: z.literal('fet-shifter'),
   gate: z.string().min(1, { message: 'expected a rail id' }),
-  vgsThMax: positive('threshold voltage (V)'),
-  rdsOnMax: nonNegative('resistance (Ω)'),
+  vgsThMax: volts('threshold voltage').gt(0, { message: 'expected a positive threshold voltage (V)' }),
+  rdsOnMax: z.number().min(0, { message: 'expected a resistance (Ω) of 0 or more' }).max(MAX_OHMS, { message: `expected a resistance (Ω) of at most ${limitText(MAX_OHMS, 'Ω')}` }),
 }).meta({ id: 'FetShifter', description: 'A bidirectional N-MOSFET level shifter: pin S on the low side, pin D on the high side, the gate on a rail' });
 
 export const DiodeShifterSchema = z.strictObject({
   ...DiscreteBase,
   kind: z.literal('diode-shifter'),
-  vfMax: nonNegative('forward voltage (V)'),
-  leakageMax: nonNegative('current (A)'),
+  vfMax: volts('forward voltage').min(0, { message: 'expected a forward voltage (V) of 0 or more' }),
+  leakageMax: current(),
 }).meta({ id: 'DiodeShifter', description: 'A Schottky diode shifter: cathode K on the driver\'s net, anode A on the receiver\'s net, which has its own pull-up' });
 
 export const DiscreteSchema = z.discriminatedUnion('kind', [ResistorSchema, FetShifterSchema, DiodeShifterSchema], {
@@ -210,15 +260,15 @@ export const NetSchema = z.strictObject({
   label: z.string().optional(),
   pins: z.array(z.string()),
   pull: PullSchema.optional(),
-  wiringCapacitance: nonNegative('capacitance (F)').optional(),
-  maxRiseTime: nonNegative('time (s)').optional(),
+  wiringCapacitance: capacitance().optional(),
+  maxRiseTime: magnitude('time', 's', MIN_SECONDS, MAX_SECONDS).optional(),
   waivers: z.array(WaiverSchema).optional(),
   route: z.array(z.tuple([z.string(), z.string()])).optional(),
 }).meta({ id: 'Net', description: 'An electrical connection between pins' });
 
 export const SettingsSchema = z.strictObject({
-  minMargin: z.number().optional(),
-  defaultWiringCapacitance: nonNegative('capacitance (F)').optional(),
+  minMargin: volts('margin').optional(),
+  defaultWiringCapacitance: capacitance().optional(),
 });
 
 export const DesignSchema = z.strictObject({

@@ -64,14 +64,18 @@ export function crossingRows(result: CheckResult, states: readonly PowerState[] 
       const { net, view, findings } = r;
       const rails = crossingRails(view);
       if (rails === undefined) continue;
+      const { worstHigh, worstLow } = view.analysis;
+      // A margin that is not a finite number is written null (JSON has no NaN or ∞) and the row
+      // is an error whatever the findings say: the net could not be judged.
+      const undecided = (worstHigh !== null && !Number.isFinite(worstHigh)) || (worstLow !== null && !Number.isFinite(worstLow));
       rows.push({
         net: net.id,
         label: net.label ?? net.id,
         rails: [...rails],
         scenario: state.id,
-        marginHigh: view.analysis.worstHigh,
-        marginLow: view.analysis.worstLow,
-        worst: worstOf(findings),
+        marginHigh: worstHigh !== null && Number.isFinite(worstHigh) ? worstHigh : null,
+        marginLow: worstLow !== null && Number.isFinite(worstLow) ? worstLow : null,
+        worst: undecided ? 'error' : worstOf(findings),
       });
     }
   }

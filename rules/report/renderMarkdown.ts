@@ -7,7 +7,48 @@ import { designLine, marginText, settingsLine, severityText, stateText } from '.
 import type { Report } from './reportSchema.ts';
 import { verdict, type Verdict } from './verdict.ts';
 
-const oneLine = (s: string) => s.replace(/\s*[\r\n]+\s*/g, ' ');
+const SPACE = /\s/;
+const isSpace = (c: string) => SPACE.test(c);
+const isBreak = (c: string) => c === '\n' || c === '\r';
+
+/**
+ * Every line break, with the white space around it, as one space. A scan rather than the
+ * regular expression `\s*[\r\n]+\s*`, which backtracks over every position of a long run of
+ * spaces without a break (quadratic: a 200,000-space title took a minute). Each character is
+ * looked at a bounded number of times: linear in the text.
+ */
+export function oneLine(s: string): string {
+  if (!s.includes('\n') && !s.includes('\r')) return s;
+  const parts: string[] = [];
+  let start = 0;
+  let i = 0;
+  while (i < s.length) {
+    if (!isBreak(s[i]!)) {
+      i++;
+      continue;
+    }
+    let from = i;
+    while (from > start && isSpace(s[from - 1]!)) from--;
+    let to = i;
+    while (to < s.length && isSpace(s[to]!)) to++;
+    parts.push(s.slice(start, from), ' ');
+    start = to;
+    i = to;
+  }
+  parts.push(s.slice(start));
+  return parts.join('');
+}
+
+/** The length of the longest run of backticks (a loop: `Math.max(...runs)` overflows the stack). */
+function longestBacktickRun(s: string): number {
+  let longest = 0;
+  let run = 0;
+  for (let i = 0; i < s.length; i++) {
+    run = s.charCodeAt(i) === 96 ? run + 1 : 0;
+    if (run > longest) longest = run;
+  }
+  return longest;
+}
 
 /** Prose in a heading, paragraph or table cell. */
 export function escapeMarkdown(s: string): string {
@@ -20,8 +61,7 @@ export function escapeMarkdown(s: string): string {
 /** An id or other literal in a code span; `|` still needs its escape inside a table. */
 export function codeSpan(s: string): string {
   const text = oneLine(s).replace(/\|/g, '\\|');
-  const longest = Math.max(0, ...(text.match(/`+/g) ?? []).map((run) => run.length));
-  const fence = '`'.repeat(longest + 1);
+  const fence = '`'.repeat(longestBacktickRun(text) + 1);
   // A space keeps a backtick at either end apart from the fence; CommonMark strips one each side.
   const pad = text.startsWith('`') || text.endsWith('`') ? ' ' : '';
   return `${fence}${pad}${text}${pad}${fence}`;

@@ -18,9 +18,18 @@ export interface TextOptions {
   readonly isNew?: (f: ReportFinding) => boolean;
 }
 
+/**
+ * The widest a column is padded to. A longer cell is printed whole and pushes the rest of its
+ * own row along, rather than widening every row of the table: one 10,000-character label must
+ * not pad a thousand rows to its width (output growing as rows × longest cell).
+ */
+const MAX_COLUMN = 40;
+
 /** Left-aligned columns, two spaces apart; numeric columns right-aligned. */
 function table(head: readonly string[], rows: readonly (readonly string[])[], right: ReadonlySet<number> = new Set()): string[] {
-  const width = head.map((h, k) => Math.max(h.length, ...rows.map((r) => (r[k] ?? '').length)));
+  // A loop, not `Math.max(...rows)`: spreading thousands of rows overflows the stack.
+  const width = head.map((h) => h.length);
+  for (const r of rows) head.forEach((_, k) => { width[k] = Math.min(MAX_COLUMN, Math.max(width[k]!, (r[k] ?? '').length)); });
   const line = (cells: readonly string[]) =>
     cells
       .map((c, k) => (right.has(k) ? c.padStart(width[k]!) : c.padEnd(width[k]!)))

@@ -42,8 +42,8 @@ export const CrossingSchema = z
     label: z.string(),
     rails: z.array(z.string()).min(2).meta({ description: 'Distinct rails of the net\'s pins (pull resistors\' rails excluded)' }),
     scenario: z.string(),
-    marginHigh: z.number().nullable().meta({ description: 'Worst NMH over the net\'s driver/receiver pairs, V; null when there is no pair' }),
-    marginLow: z.number().nullable().meta({ description: 'Worst NML over the net\'s driver/receiver pairs, V; null when there is no pair' }),
+    marginHigh: z.number().nullable().meta({ description: 'Worst NMH over the net\'s driver/receiver pairs, V; null when there is no pair, or when it could not be computed (worst is then error)' }),
+    marginLow: z.number().nullable().meta({ description: 'Worst NML over the net\'s driver/receiver pairs, V; null when there is no pair, or when it could not be computed (worst is then error)' }),
     worst: z.enum(['error', 'warning', 'ok']).meta({ description: 'The most severe unwaived finding of any rule on the net in this power state; info counts as ok' }),
   })
   .meta({ id: 'Crossing', description: 'A net that joins pins of different rails, in one power state' });

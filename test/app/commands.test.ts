@@ -4,7 +4,8 @@
  */
 import { describe, expect, it } from 'vitest';
 import {
-  addPart, addPowerState, addRail, deletePowerState, deleteRail, moveParts, replaceDesign, setNetLabel, setNetPull,
+  addPart, addPowerState, addRail, deletePowerState, deleteRail, moveParts, replaceDesign, setNetLabel, setNetMaxRiseTime, setNetPull,
+  setNetWiringCapacitance,
   setPartLabel, setPartProfile, setPartRail, setPowerStateLabel, setRailColour, setRailLabel, setRailOff,
   setRailTolerance, setRailVoltage, setTitle, type Command,
 } from '../../app/store/commands/index.ts';
@@ -68,6 +69,12 @@ const refusals: { name: string; command: Command; reason: RegExp }[] = [
   { name: 'setRailVoltage of NaN', command: setRailVoltage('3v3', Number.NaN), reason: /above 0 V/ },
   { name: 'setRailVoltage of 0 V', command: setRailVoltage('3v3', 0), reason: /above 0 V/ },
   { name: 'setRailTolerance of 100 %', command: setRailTolerance('3v3', 1), reason: /between 0 % and 100 %/ },
+  // The limits of the format (rules/model/limits.ts): the editor makes no design the reader would refuse.
+  { name: 'setNetPull of 5e-324 Ω', command: setNetPull('A', { to: '5v0', ohms: 5e-324 }), reason: /from 1 mΩ to 1 TΩ/ },
+  { name: 'setNetPull of 2 TΩ', command: setNetPull('A', { to: '5v0', ohms: 2e12 }), reason: /from 1 mΩ to 1 TΩ/ },
+  { name: 'setNetWiringCapacitance of 5e-324 F', command: setNetWiringCapacitance('A', 5e-324), reason: /from 1 aF to 1 F/ },
+  { name: 'setNetMaxRiseTime of an hour', command: setNetMaxRiseTime('A', 3600), reason: /from 1 fs to 1 s/ },
+  { name: 'setRailVoltage of 1e307 V', command: setRailVoltage('3v3', 1e307), reason: /up to 10 kV/ },
   { name: 'setRailColour of markup', command: setRailColour('3v3', 'red;background:url(x)'), reason: /not a colour/ },
   { name: 'deleteRail of a rail in use', command: deleteRail('5v0'), reason: /still used by H/ },
   { name: 'setRailOff in an unknown state', command: setRailOff('S7', '5v0', true), reason: /no power state S7/ },

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { connectPins, moveParts, setPartLabel, setPartProfile, setTitle } from '../../app/store/commands/index.ts';
 import { net } from '../support/build.ts';
+import { valuesOf } from '../../rules/engine/findings.ts';
 import { bench, harness } from './harness.ts';
 
 describe('undo and redo', () => {
@@ -83,7 +84,7 @@ describe('the re-check after each command', () => {
     expect(s.result.design).toBe(s.design);
     const f = s.result.findings.find((x) => x.rule === 'level-high' && x.net === 'N1');
     expect(f?.severity).toBe('error');
-    expect(f?.values['margin']).toBeCloseTo(nmhHc, 9);
+    expect(valuesOf(f!, 'level-high').margin).toBeCloseTo(nmhHc, 9);
     expect(h.severity('N1')).toBe('error');
     expect(s.netStatus.get('N1')?.rule).toBe('level-high');
     expect(s.result.nets.get('all-on')?.get('N1')?.view.analysis.worstHigh).toBeCloseTo(nmhHc, 9);

@@ -7,6 +7,8 @@ import { describe, expect, it } from 'vitest';
 import driveLoad from '../../rules/checks/drive-load.ts';
 import edgeRate from '../../rules/checks/edge-rate.ts';
 import type { Design } from '../../rules/model/schema.ts';
+import { valuesOf } from '../../rules/engine/findings.ts';
+import type { FindingValues } from '../../rules/engine/values.ts';
 import { findingsOf } from '../support/ruleTester.ts';
 import { design, input, link, net, output, part, rail5v0 } from '../support/build.ts';
 
@@ -35,10 +37,11 @@ describe('drive-load: handbook fan-outs, exactly at the limit', () => {
     if (fails) {
       const f = found[0]!;
       expect(f.messageId).toBe('bothOverload');
-      expect(f.values.loadLow as number).toBeCloseTo(loads * iil, 12);
-      expect(f.values.loadHigh as number).toBeCloseTo(loads * iih, 12);
-      expect(f.values.ratedLow).toBe(iol);
-      expect(f.values.ratedHigh).toBe(ioh);
+      const v = valuesOf(f, 'drive-load');
+      expect(v.loadLow).toBeCloseTo(loads * iil, 12);
+      expect(v.loadHigh).toBeCloseTo(loads * iih, 12);
+      expect(v.ratedLow).toBe(iol);
+      expect(v.ratedHigh).toBe(ioh);
     }
   });
 });
@@ -74,14 +77,19 @@ describe('edge-rate: single-pole RC constants', () => {
   const driven = findingsOf(edgeRate, link(
     { rail: '5v0', profile: '74hc' }, { rail: '5v0', profile: '74hc' }, { net: { wiringCapacitance: 1e-9, maxRiseTime: 1e-9 } },
   ))[0]!;
-  const ratio = (f: typeof pulled) => (f.values.riseTime as number) / ((f.values.resistance as number) * (f.values.capacitance as number));
+  const rise = (f: typeof pulled) => valuesOf(f, 'edge-rate') as FindingValues<'edge-rate'> & { riseTime: number; span: string };
+  const ratio = (f: typeof pulled) => {
+    const v = valuesOf(f, 'edge-rate');
+    if (!('riseTime' in v)) throw new Error(`${f.id} is not a rise time`);
+    return v.riseTime! / (v.resistance! * v.capacitance!);
+  };
 
   it.each([
     { span: '30-70', finding: () => pulled, constant: 0.8473, digits: 4 },
     { span: '10-90', finding: () => driven, constant: 2.197, digits: 3 },
   ])('$span: rise time / RC ≈ $constant', ({ span, finding, constant, digits }) => {
     const f = finding();
-    expect(f.values.span).toBe(span);
+    expect(rise(f).span).toBe(span);
     expect(ratio(f)).toBeCloseTo(constant, digits);
   });
 

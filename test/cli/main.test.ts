@@ -128,6 +128,8 @@ describe('exit status and output', () => {
     ['--min-margin not a number', ['check', 'quiet.json', '--min-margin', 'lots'], 2, { err: /--min-margin is "lots"/, noOut: true }],
     ['--min-margin in amperes', ['check', 'quiet.json', '--min-margin', '3 mA'], 2, { err: /found a value in A/, noOut: true }],
     ['--min-margin negative', ['check', 'quiet.json', '--min-margin', '-0.1'], 2, { err: /0 V or more/, noOut: true }],
+    ['--min-margin beyond a double', ['check', 'quiet.json', '--min-margin', '1e400'], 2, { err: /too large/, noOut: true }],
+    ['--min-margin of 20 kV', ['check', 'quiet.json', '--min-margin', '20 kV'], 2, { err: /at most 10 kV/, noOut: true }],
     ['--paper without --pdf', ['check', 'quiet.json', '--paper', 'letter'], 2, { err: /--paper sets the PDF report's page size: give --pdf PATH/, noOut: true }],
     ['--paper a3', ['check', 'quiet.json', '--pdf', 'r.pdf', '--paper', 'a3'], 2, { err: /--paper is "a3": expected a4 or letter/, noOut: true }],
     ['--pdf without its path', ['check', 'quiet.json', '--pdf'], 2, { err: /--pdf needs a value/, noOut: true }],

@@ -8,6 +8,7 @@ import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { readDesign } from '../../rules/model/reader.ts';
 import { check } from '../../rules/engine/check.ts';
+import { valuesOf } from '../../rules/engine/findings.ts';
 
 const text = readFileSync(new URL('../../rules/examples/greenhouse.json', import.meta.url), 'utf8');
 
@@ -175,7 +176,7 @@ describe('greenhouse irrigation controller example', () => {
   it.each([...plantedErrors, ...plantedWarnings])('$id carries its numbers and corner', ({ id, values }) => {
     const f = result.findings.find((x) => x.id === id);
     expect(f, id).toBeDefined();
-    for (const [k, v] of Object.entries(values)) expectClose(f!.values[k], v, `${id} ${k}`);
+    for (const [k, v] of Object.entries(values)) expectClose((f!.values as Readonly<Record<string, unknown>>)[k], v, `${id} ${k}`);
     expect(f!.message).toMatch(/\d/);
   });
 
@@ -213,7 +214,7 @@ describe('greenhouse irrigation controller example', () => {
     // example's own): (5.25 − 3.135)/9500 = 223 µA, absorbed by the 3.3 V rail's 20 mA minimum load.
     const clamp = result.findings.find((f) => f.id === 'clamp-current:LEAK_IN:all-on:U1.LEAK')!;
     expect(clamp.severity).toBe('info');
-    expectClose(clamp.values['current'] as number, (V50.max - V33.min) / 9500, 'clamp current');
+    expectClose(valuesOf(clamp, 'clamp-current').current, (V50.max - V33.min) / 9500, 'clamp current');
     expect(result.findings.find((f) => f.id === 'rail-injection:3v3:all-on')?.severity).toBe('info');
   });
 

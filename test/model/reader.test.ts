@@ -109,8 +109,8 @@ const refusals: Refusal[] = [
   { name: 'Level in an output point', breakIt: (d) => void (d.parts[4].pins[0].params.voh[0].v = '2.4V'), path: 'parts[4].pins[0].params.voh[0].v', says: 'expected a Level' },
   { name: 'Level ending in an operator', breakIt: (d) => void (d.parts[0].pins[3].params.viMax = 'VDD+'), path: 'parts[0].pins[3].params.viMax', says: 'at the end' },
   // resistance not positive
-  { name: 'pull of 0 Ω', breakIt: (d) => void (d.nets[0].pull.ohms = 0), path: 'nets[0].pull.ohms', says: 'positive resistance' },
-  { name: 'pull of negative ohms', breakIt: (d) => void (d.parts[3].pins[2].pull.ohms = -100e3), path: 'parts[3].pins[2].pull.ohms', says: 'positive resistance' },
+  { name: 'pull of 0 Ω', breakIt: (d) => void (d.nets[0].pull.ohms = 0), path: 'nets[0].pull.ohms', says: 'resistance (Ω) from 1 mΩ to 1 TΩ' },
+  { name: 'pull of negative ohms', breakIt: (d) => void (d.parts[3].pins[2].pull.ohms = -100e3), path: 'parts[3].pins[2].pull.ohms', says: 'resistance (Ω) from 1 mΩ to 1 TΩ' },
   // negative capacitance, current, time, ramp or tolerance
   { name: 'negative input capacitance', breakIt: (d) => void (d.profiles[0].params.cin = -5e-12), path: 'profiles[0].params.cin', says: 'capacitance' },
   { name: 'negative wiring capacitance', breakIt: (d) => void (d.nets[1].wiringCapacitance = -1e-12), path: 'nets[1].wiringCapacitance', says: 'capacitance' },

@@ -37,7 +37,11 @@ export const levelArb: fc.Arbitrary<Level> = fc.oneof(
   fc.tuple(decimal, fc.constantFrom('+', '-'), decimal).map(([b, op, a]) => `${b}*VDD${op}${a}`),
 );
 
-const magnitude = (max: number) => fc.double({ min: 0, max, noNaN: true });
+/**
+ * A non-negative quantity up to `max`; values below 1e-15 become 0, since the format refuses
+ * denormal and other vanishing magnitudes (rules/model/limits.ts: 1 fA, 1 aF, 1 fs floors).
+ */
+const magnitude = (max: number) => fc.double({ min: 0, max, noNaN: true }).map((v) => (v < 1e-15 ? 0 : v));
 const outputPointArb = fc.record({ v: levelArb, i: magnitude(0.05) }, { noNullPrototype: true });
 
 /** Params with any subset of keys, every value valid. */
@@ -79,7 +83,7 @@ const railArb = (base: (typeof RAIL_POOL)[number]): fc.Arbitrary<Rail> =>
         tolerance: fc.integer({ min: 0, max: 10 }).map((n) => n / 100),
         widenMin: fc.integer({ min: 0, max: 20 }).map((n) => n / 100),
         widenMax: fc.integer({ min: 0, max: 20 }).map((n) => n / 100),
-        colour: fc.constantFrom('#c0562b', '#2f8f6b', 'teal', 'rgb(10, 20, 30)'),
+        colour: fc.constantFrom('#c0562b', '#2f8f6b', '#abc', '#ABCDEF'),
       },
       { requiredKeys: ['label'], noNullPrototype: true },
     )

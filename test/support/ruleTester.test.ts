@@ -21,7 +21,7 @@ function planted(body: (view: never) => void, severity: Severity = 'warning'): A
     meta: { title: 'planted', severity: { warning: '' }, explanation: 'x', hint: 'x', messages: { m: () => 'm' } },
     checkNet(view, report) {
       body(view as never);
-      report({ messageId: 'm', data: undefined, severity: severity as 'warning', pins: [], parts: [], values: {} });
+      report({ messageId: 'm', data: undefined, severity: severity as 'warning', pins: [], parts: [], values: { riseTime: 1e-9, span: '10-90', capacitance: 1e-12, resistance: 1e3, limit: 1e-6, driver: null } });
     },
   });
 }

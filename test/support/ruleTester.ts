@@ -140,7 +140,7 @@ export function ruleTester(rule: AnyRule, table: { valid: ValidCase[]; invalid: 
           if (e.id !== undefined) expect(f.id).toBe(e.id);
           if (e.pins !== undefined) expect(f.pins).toEqual(e.pins);
           if (e.waived !== undefined) expect(f.waived).toBe(e.waived);
-          for (const [key, v] of Object.entries(e.values ?? {})) expectValue(f.values[key], v, `${f.id} values.${key}`);
+          for (const [key, v] of Object.entries(e.values ?? {})) expectValue((f.values as Readonly<Record<string, unknown>>)[key], v, `${f.id} values.${key}`);
         });
       });
     }

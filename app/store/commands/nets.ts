@@ -1,5 +1,6 @@
 import type { Pull } from '../../../rules/model/schema.ts';
 import { GROUND } from '../../../rules/model/references.ts';
+import { MAX_FARADS, MAX_OHMS, MAX_SECONDS, MIN_FARADS, MIN_OHMS, MIN_SECONDS } from '../../../rules/model/limits.ts';
 import { refuse, type Command } from './command.ts';
 
 export function setNetLabel(id: string, label: string): Command {
@@ -26,7 +27,7 @@ export function setNetPull(id: string, pull: Pull | null): Command {
         delete net.pull;
         return;
       }
-      if (!(Number.isFinite(pull.ohms) && pull.ohms > 0)) return refuse('A pull resistor needs a positive value in Ω.');
+      if (!(pull.ohms >= MIN_OHMS && pull.ohms <= MAX_OHMS)) return refuse('A pull resistor needs a positive value in Ω, from 1 mΩ to 1 TΩ.');
       if (pull.to !== GROUND && !design.rails.some((r) => r.id === pull.to)) return refuse(`There is no rail ${pull.to}.`);
       net.pull = { to: pull.to, ohms: pull.ohms };
     },
@@ -44,7 +45,7 @@ export function setNetWiringCapacitance(id: string, farads: number | undefined):
         delete net.wiringCapacitance;
         return;
       }
-      if (!(Number.isFinite(farads) && farads >= 0)) return refuse('A capacitance is 0 F or more.');
+      if (!(farads === 0 || (farads >= MIN_FARADS && farads <= MAX_FARADS))) return refuse('A capacitance is 0 F or more: 0, or from 1 aF to 1 F.');
       net.wiringCapacitance = farads;
     },
   };
@@ -61,7 +62,7 @@ export function setNetMaxRiseTime(id: string, seconds: number | undefined): Comm
         delete net.maxRiseTime;
         return;
       }
-      if (!(Number.isFinite(seconds) && seconds > 0)) return refuse('A rise-time limit is a time above 0 s.');
+      if (!(seconds >= MIN_SECONDS && seconds <= MAX_SECONDS)) return refuse('A rise-time limit is a time above 0 s, from 1 fs to 1 s.');
       net.maxRiseTime = seconds;
     },
   };

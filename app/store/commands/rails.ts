@@ -1,9 +1,10 @@
 import type { Draft } from 'immer';
 import type { Design, Rail } from '../../../rules/model/schema.ts';
 import { railRange } from '../../../rules/levels/rails.ts';
+import { isRailColour } from '../../../rules/model/colour.ts';
+import { MAX_VOLTS } from '../../../rules/model/limits.ts';
 import { freshId, refuse, type Command } from './command.ts';
 
-const HEX_COLOUR = /^#[0-9a-fA-F]{6}$/;
 
 function findRail(design: Draft<Design>, id: string) {
   return design.rails.find((r) => r.id === id);
@@ -40,7 +41,7 @@ export function setRailVoltage(id: string, nominal: number): Command {
     recipe(design) {
       const rail = findRail(design, id);
       if (rail === undefined) return refuse(`There is no rail ${id}.`);
-      if (!(Number.isFinite(nominal) && nominal > 0)) return refuse('A rail needs a nominal voltage above 0 V.');
+      if (!(nominal > 0 && nominal <= MAX_VOLTS)) return refuse('A rail needs a nominal voltage above 0 V, up to 10 kV.');
       const range = railRange({ ...rail, nominal });
       if (range.min > range.max) {
         return refuse(`With an explicit ${rail.min !== undefined ? 'minimum' : 'maximum'} of ${rail.min ?? rail.max} V, rail ${id} cannot be ${nominal} V.`);
@@ -73,7 +74,7 @@ export function setRailColour(id: string, colour: string): Command {
     recipe(design) {
       const rail = findRail(design, id);
       if (rail === undefined) return refuse(`There is no rail ${id}.`);
-      if (!HEX_COLOUR.test(colour)) return refuse(`"${colour}" is not a colour such as #2f8f6b.`);
+      if (!isRailColour(colour)) return refuse(`"${colour}" is not a colour such as #2f8f6b or #2f8 (only hexadecimal colours are allowed).`);
       rail.colour = colour;
     },
   };

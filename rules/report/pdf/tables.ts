@@ -42,6 +42,20 @@ export function baseTableOptions(ctx: Ctx, startY: number): UserOptions {
 
 const finalY = (doc: jsPDF): number => (doc as unknown as { lastAutoTable: { finalY: number } }).lastAutoTable.finalY;
 
+/**
+ * The index in `body` of the row a hook is called for. A row taller than the space left on a
+ * page is split by autotable into pieces, and a continuation piece carries index -1 but the
+ * same raw row: look it up by that, so that a 5,000-character note or a 3,000-character name
+ * continues on the next page instead of failing the whole report.
+ */
+function rowIndexer(body: readonly RowInput[]): (data: CellHookData) => number {
+  const index = new Map<unknown, number>(body.map((r, k) => [r, k]));
+  return (data) => (data.row.index >= 0 ? data.row.index : (index.get(data.row.raw) ?? -1));
+}
+
+/** True for the second and later pieces of a row split across pages. */
+const continued = (data: CellHookData): boolean => data.row.index < 0;
+
 /** The y below the table just drawn. */
 function run(ctx: Ctx, options: UserOptions): number {
   autoTable(ctx.doc, options);
@@ -58,6 +72,9 @@ function baseline(cell: CellHookData['cell']): { x: number; y: number; step: num
 const TITLES: ReadonlyMap<string, string> = new Map(RULES.map((r) => [r.id, r.meta.title]));
 
 const mono = (ctx: Ctx): Partial<Styles> => ({ font: ctx.fonts.mono });
+
+/** The mark of a row that goes on from the previous page. */
+export const CONTINUED = '(continued from the previous page)';
 
 /** Room at the left of a status cell for its mark. */
 const MARK_ROOM = 11;
@@ -90,6 +107,7 @@ export function findingsTable(ctx: Ctx, y: number, report: Report): number {
     f.waived === undefined ? f.message : `${f.message}\nWaived: ${f.waived}`,
     f.hint,
   ]);
+  const rowOf = rowIndexer(body);
   return run(ctx, {
     ...baseTableOptions(ctx, at),
     head: [['Severity', 'Rule', 'Net', 'Power state', 'Message', 'Hint']],
@@ -117,14 +135,16 @@ export function findingsTable(ctx: Ctx, y: number, report: Report): number {
     },
     didDrawCell: (data) => {
       if (data.section !== 'body') return;
-      const f: ReportFinding = findings[data.row.index]!;
+      const f: ReportFinding | undefined = findings[rowOf(data)];
+      if (f === undefined) return;
       if (data.column.index === 0) markCell(data, f.waived === undefined ? f.severity : 'info');
-      if (data.column.index === 1) drawRuleCell(ctx, data, f.rule);
+      if (data.column.index === 1) drawRuleCell(ctx, data, f.rule, continued(data));
     },
   });
 }
 
-function drawRuleCell(ctx: Ctx, data: CellHookData, rule: string): void {
+/** The rule cell: its id, and its title under it; on a continued row, "(continued)" instead. */
+function drawRuleCell(ctx: Ctx, data: CellHookData, rule: string, isContinued: boolean): void {
   const doc = data.doc as jsPDF;
   const { x, y, step } = baseline(data.cell);
   const width = data.cell.width - data.cell.padding('horizontal');
@@ -134,7 +154,7 @@ function drawRuleCell(ctx: Ctx, data: CellHookData, rule: string): void {
   doc.text(rule, x, y);
   doc.setFont(ctx.fonts.sans, 'normal');
   setText(doc, MUTED);
-  const title = doc.splitTextToSize(TITLES.get(rule) ?? '', width) as string[];
+  const title = doc.splitTextToSize(isContinued ? CONTINUED : (TITLES.get(rule) ?? ''), width) as string[];
   title.forEach((line, k) => doc.text(line, x, y + step * (k + 1)));
 }
 
@@ -176,10 +196,12 @@ export function crossingsTable(ctx: Ctx, y: number, report: Report, result: Chec
   );
   if (rows.length === 0) return at;
   const worst = (w: 'error' | 'warning' | 'ok'): Status => (w === 'ok' ? 'clean' : w);
+  const body: RowInput[] = rows.map((c) => [c.net, c.label, c.rails.join(', '), c.scenario, marginText(c.marginHigh), marginText(c.marginLow), c.worst]);
+  const rowOf = rowIndexer(body);
   return run(ctx, {
     ...baseTableOptions(ctx, at),
     head: [['Net', 'Label', 'Rails', 'Power state', 'Worst NMH', 'Worst NML', 'Worst']],
-    body: rows.map((c) => [c.net, c.label, c.rails.join(', '), c.scenario, marginText(c.marginHigh), marginText(c.marginLow), c.worst]),
+    body,
     columnStyles: {
       0: { cellWidth: 70, ...mono(ctx) },
       1: { cellWidth: 'auto' },
@@ -200,7 +222,8 @@ export function crossingsTable(ctx: Ctx, y: number, report: Report, result: Chec
       }
     },
     didDrawCell: (data) => {
-      if (data.section === 'body' && data.column.index === 6) markCell(data, worst(rows[data.row.index]!.worst));
+      const c = rows[rowOf(data)];
+      if (data.section === 'body' && data.column.index === 6 && c !== undefined) markCell(data, worst(c.worst));
     },
   });
 }

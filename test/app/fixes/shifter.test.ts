@@ -7,6 +7,7 @@ import { describe, expect, it } from 'vitest';
 import { fixesFor } from '../../../app/store/commands/fixes/index.ts';
 import { tryOn } from '../../../app/store/commands/fixes/preview.ts';
 import { check } from '../../../rules/engine/check.ts';
+import { valuesOf } from '../../../rules/engine/findings.ts';
 import { validateDesign } from '../../../rules/model/reader.ts';
 import type { Design } from '../../../rules/model/schema.ts';
 import { fetBus } from '../../support/paths.ts';
@@ -24,7 +25,7 @@ describe('FET shifter fix', () => {
     const d = JSON.parse(JSON.stringify(oneNet())) as Design;
     const before = check(d);
     const over = before.findings.find((f) => f.id === 'overvoltage:SDA:all-on:U2.SDA');
-    expect(over?.values['vNet']).toBeCloseTo(3.465, 9);
+    expect(valuesOf(over!, 'overvoltage').vNet).toBeCloseTo(3.465, 9);
     const fix = fixesFor(over!, d, before).find((f) => f.id === 'fet-shifter');
     expect(fix?.title).toBe('Insert FET shifter Q1 on SDA');
     const after = tryOn(d, fix!.apply);

@@ -92,4 +92,25 @@ describe('autosave timing', () => {
     await saver.flush();
     expect(started).toEqual(['slow', 'next']);
   });
+
+  it('tells what is not yet stored: the pending value, else the one being written (what page-hide stages)', async () => {
+    let release: () => void = () => {};
+    let fail = false;
+    const saver = new Saver<string>({ write: () => new Promise<void>((resolve, reject) => (release = () => (fail ? reject(new Error('disk full')) : resolve()))) });
+    expect([saver.unstored, saver.inFlight]).toEqual([undefined, undefined]);
+    saver.save('a');
+    expect([saver.unstored, saver.inFlight]).toEqual(['a', undefined]);
+    await vi.advanceTimersByTimeAsync(SAVE_DELAY_MS);
+    expect([saver.unstored, saver.inFlight]).toEqual(['a', 'a']);
+    saver.save('b');
+    expect([saver.unstored, saver.inFlight]).toEqual(['b', 'a']);
+    release();
+    await vi.advanceTimersByTimeAsync(SAVE_DELAY_MS);
+    expect([saver.unstored, saver.inFlight]).toEqual(['b', 'b']);
+    fail = true;
+    release();
+    await vi.advanceTimersByTimeAsync(0);
+    // A failed write leaves its value pending, never forgotten.
+    expect([saver.unstored, saver.inFlight, saver.status.state]).toEqual(['b', undefined, 'failed']);
+  });
 });

@@ -3,6 +3,7 @@ import { Dexie } from 'dexie';
 import { afterEach } from 'vitest';
 import type { Session } from '../../../app/library/session.ts';
 import { startSession } from '../../../app/library/start.ts';
+import type { KeyValueStore } from '../../../app/storage/staging.ts';
 
 let n = 0;
 const sessions: Session[] = [];
@@ -15,8 +16,8 @@ export function dbName(): string {
 }
 
 /** Start a session (a tab) on the database `name`. */
-export async function tab(name: string): Promise<Session> {
-  const session = await startSession(name);
+export async function tab(name: string, staging: KeyValueStore | null = null): Promise<Session> {
+  const session = await startSession(name, staging);
   sessions.push(session);
   return session;
 }
@@ -29,3 +30,26 @@ afterEach(async () => {
   for (const name of names) await Dexie.delete(name);
   names.clear();
 });
+
+/** localStorage as a map: what a browser keeps across a reload of the page. */
+export class MemoryStore implements KeyValueStore {
+  readonly map = new Map<string, string>();
+  /** Refuse writes, as a full store does. */
+  full = false;
+  get length(): number {
+    return this.map.size;
+  }
+  key(index: number): string | null {
+    return [...this.map.keys()][index] ?? null;
+  }
+  getItem(key: string): string | null {
+    return this.map.get(key) ?? null;
+  }
+  setItem(key: string, value: string): void {
+    if (this.full) throw new Error('QuotaExceededError');
+    this.map.set(key, value);
+  }
+  removeItem(key: string): void {
+    this.map.delete(key);
+  }
+}

@@ -10,7 +10,7 @@ import { levelAt, type Level } from '../../../../rules/levels/level.ts';
 import { below } from '../../../../rules/levels/compare.ts';
 import { formatQuantity } from '../../../../rules/levels/units.ts';
 import { lookupProfile } from '../../../../rules/engine/resolve.ts';
-import type { Finding, ResolvedPin } from '../../../../rules/engine/types.ts';
+import type { FindingOf, ResolvedPin } from '../../../../rules/engine/types.ts';
 import { refuse, type Refusal } from '../command.ts';
 import { pinAt, rangeOfRail, resolvedPin } from './lookup.ts';
 import type { QuickFix } from './types.ts';
@@ -63,11 +63,10 @@ function railFits(design: Design, rail: string, vddRange: readonly [number, numb
  * level-high into a CMOS-input receiver (74HC, 74AC, 74AHC): the same family with TTL-level
  * inputs, when the driver's worst VOH clears that family's VIH.
  */
-export function ttlInputsFix(design: Design, finding: Finding): QuickFix | undefined {
-  const key = finding.values.receiver;
-  const voh = finding.values.voh;
-  const receiverVdd = finding.values.receiverVdd;
-  if (typeof key !== 'string' || typeof voh !== 'number' || typeof receiverVdd !== 'number') return undefined;
+export function ttlInputsFix(design: Design, finding: FindingOf<'level-high'>): QuickFix | undefined {
+  const { receiver: key, voh, receiverVdd } = finding.values;
+  // A level that could not be decided (null) offers no family change.
+  if (voh === null || receiverVdd === null) return undefined;
   const r = resolvedPin(design, key);
   if (r === undefined || r.params.schmitt !== undefined || r.origin.vih !== 'profile') return undefined;
   const to = TTL_INPUT_VARIANT[r.profileId];
@@ -85,7 +84,7 @@ export function ttlInputsFix(design: Design, finding: Finding): QuickFix | undef
     title: `Use ${to} for ${what}`,
     sentence:
       `Changes ${what} from ${r.profileId} to ${to}, the same family with TTL-level inputs: its VIH of ` +
-      `${volts(newVih)} is below the ${volts(voh)} that ${String(finding.values.driver)} guarantees.`,
+      `${volts(newVih)} is below the ${volts(voh)} that ${finding.values.driver} guarantees.`,
     apply: (draft) => switchProfile(draft, key, target, r.profileId, to),
   };
 }
@@ -98,10 +97,9 @@ function fixedThreshold(level: Level | undefined): boolean {
  * overvoltage on a library-family input: each family whose inputs tolerate the net's highest
  * voltage at this rail, those with the same kind of thresholds (fixed or scaled) first.
  */
-export function tolerantFamilyFixes(design: Design, finding: Finding): QuickFix[] {
-  const key = finding.values.pin;
-  const vNet = finding.values.vNet;
-  if (typeof key !== 'string' || typeof vNet !== 'number') return [];
+export function tolerantFamilyFixes(design: Design, finding: FindingOf<'overvoltage'>): QuickFix[] {
+  const { pin: key, vNet } = finding.values;
+  if (vNet === null) return [];
   const r = resolvedPin(design, key);
   if (r === undefined || r.role === 'output' || !FAMILIES.has(r.profileId) || r.origin.viMax !== 'profile') return [];
   const range = rangeOfRail(design, r.rail);
@@ -130,10 +128,9 @@ export function tolerantFamilyFixes(design: Design, finding: Finding): QuickFix[
  * signal, a design-local profile): record the input tolerance its datasheet may give, the
  * smallest common one that covers the voltage. Needs the user's confirmation.
  */
-export function markTolerantFix(design: Design, finding: Finding): QuickFix | undefined {
-  const key = finding.values.pin;
-  const vNet = finding.values.vNet;
-  if (typeof key !== 'string' || typeof vNet !== 'number') return undefined;
+export function markTolerantFix(design: Design, finding: FindingOf<'overvoltage'>): QuickFix | undefined {
+  const { pin: key, vNet } = finding.values;
+  if (vNet === null) return undefined;
   const r = resolvedPin(design, key);
   if (r === undefined || r.role === 'output' || FAMILIES.has(r.profileId)) return undefined;
   const limit = COMMON_TOLERANCES.find((v) => !below(v, vNet));
@@ -160,10 +157,9 @@ export function markTolerantFix(design: Design, finding: Finding): QuickFix | un
  * enough: no `viMaxOff` (which would win) and a powered limit at the rail's lowest voltage that
  * covers the voltage. Needs the user's confirmation from the datasheet.
  */
-export function markUnpoweredSafeFix(design: Design, finding: Finding): QuickFix | undefined {
-  const key = finding.values.pin;
-  const vNet = finding.values.vNet;
-  if (typeof key !== 'string' || typeof vNet !== 'number') return undefined;
+export function markUnpoweredSafeFix(design: Design, finding: FindingOf<'back-power'>): QuickFix | undefined {
+  const { pin: key, vNet } = finding.values;
+  if (vNet === null) return undefined;
   const r = resolvedPin(design, key);
   if (r === undefined || r.params.viMaxOff !== undefined || r.params.unpoweredSafe === true || r.params.viMax === undefined) return undefined;
   const range = rangeOfRail(design, r.rail);

@@ -3,7 +3,7 @@
  * pure recipe that the store applies as one undoable command (`applyFix`). `previewFix`
  * re-checks a copy so that the panel can show what a fix removes and what it brings.
  */
-import type { CheckResult, Finding } from '../../../../rules/engine/types.ts';
+import type { CheckResult, Finding, FindingOf } from '../../../../rules/engine/types.ts';
 import type { Design } from '../../../../rules/model/schema.ts';
 import { GROUND } from '../../../../rules/model/references.ts';
 import type { Command } from '../command.ts';
@@ -24,18 +24,17 @@ export { pullValueFrom } from './pulls.ts';
 export const CONTENTION_NOTE = 'enables are mutually exclusive: <complete>';
 
 /** The rail of a pin key in the design, if the pin exists. */
-function railOf(design: Design, key: unknown): string | undefined {
-  if (typeof key !== 'string') return undefined;
+function railOf(design: Design, key: string): string | undefined {
   const at = pinAt(design, key);
   return at === undefined ? undefined : railOfPin(at);
 }
 
 /** level-high / level-low between pins on different rails: a translator from the driver's rail to the receiver's. */
-function levelTranslator(design: Design, f: Finding): QuickFix[] {
+function levelTranslator(design: Design, f: FindingOf<'level-high'> | FindingOf<'level-low'>): QuickFix[] {
   const railA = railOf(design, f.values.driver);
   const railB = railOf(design, f.values.receiver);
   if (f.net === null || railA === undefined || railB === undefined || railA === railB) return [];
-  return translatorFixes(design, f.id, { net: f.net, railA, railB }, `${String(f.values.receiver)} is driven from its own rail`);
+  return translatorFixes(design, f.id, { net: f.net, railA, railB }, `${f.values.receiver} is driven from its own rail`);
 }
 
 /**
@@ -43,10 +42,9 @@ function levelTranslator(design: Design, f: Finding): QuickFix[] {
  * pin's rail. The source is a driver's pin key, `net` (the net's pull) or the pin key whose
  * internal pull it is.
  */
-function exposureTranslator(design: Design, f: Finding): QuickFix[] {
-  const pin = f.values.pin;
-  const source = f.values.source;
-  if (f.net === null || typeof pin !== 'string' || typeof source !== 'string') return [];
+function exposureTranslator(design: Design, f: FindingOf<'overvoltage'> | FindingOf<'back-power'>): QuickFix[] {
+  const { pin, source } = f.values;
+  if (f.net === null) return [];
   // A pin's own internal pull moves with it: no translator helps there.
   if (source === pin) return [];
   const railB = railOf(design, pin);
@@ -58,7 +56,7 @@ function exposureTranslator(design: Design, f: Finding): QuickFix[] {
   return translatorFixes(design, f.id, { net: f.net, railA, railB }, why);
 }
 
-function contentionWaiver(f: Finding): QuickFix | undefined {
+function contentionWaiver(f: FindingOf<'contention'>): QuickFix | undefined {
   if (f.net === null || f.messageId !== 'enablesNeeded') return undefined;
   const net = f.net;
   const command = addWaiver({ net, rule: 'contention' }, CONTENTION_NOTE);
@@ -68,7 +66,7 @@ function contentionWaiver(f: Finding): QuickFix | undefined {
     title: `Waive the shared enables on ${net}`,
     sentence:
       `Adds a waiver of contention on ${net} with a note to complete, for when the design guarantees that ` +
-      `at most one of ${(f.values.drivers as string[] | undefined)?.join(', ') ?? 'its drivers'} is enabled at a time.`,
+      `at most one of ${f.values.drivers.join(', ')} is enabled at a time.`,
     followUp: { kind: 'complete-waiver-note', net, rule: 'contention' },
     apply: (draft) => command.recipe(draft) as ReturnType<QuickFix['apply']>,
   };

@@ -1,0 +1,131 @@
+/**
+ * Fail safe on numbers (issue 14): every rule that judges a number judges one that is not
+ * finite (NaN, ±∞) as a failure, never as a pass. The designs here bypass the reader (its
+ * limits would refuse them), as a bug or a future import path might: each carries one
+ * non-finite or overflowing number, and the rule must raise an unwaivable "cannot be
+ * guaranteed" error whose values hold null in place of the number (JSON has no NaN or ∞).
+ * The rules that judge no number (contention, floating-input, missing-pull) are held to give
+ * exactly the findings they give without the bad number.
+ */
+import { describe, expect, it } from 'vitest';
+import type { AnyRule } from '../../rules/checks/defineRule.ts';
+import { RULES } from '../../rules/checks/index.ts';
+import { check } from '../../rules/engine/check.ts';
+import { nonFinitePaths } from '../../rules/engine/undecidable.ts';
+import type { Design } from '../../rules/model/schema.ts';
+import { bidir, design, input, net, output, part, rail, rail3v3, rail5v0, scenario } from '../support/build.ts';
+import { findingsOf } from '../support/ruleTester.ts';
+
+const rule = (id: string): AnyRule => RULES.find((r) => r.id === id)!;
+
+/** A 74HC output on 5 V into a 74HC input on 5 V: a clean net, unless a number is broken. */
+function driven(over: { driverRail?: number; tolerance?: number; viMax?: number; ohms?: number; wiring?: number } = {}): Design {
+  const r5 = over.driverRail === undefined && over.tolerance === undefined
+    ? rail5v0
+    : rail('5v0', over.driverRail ?? 5, { tolerance: over.tolerance ?? 0.05 });
+  return design({
+    rails: [r5, rail3v3],
+    parts: [
+      part('D', '5v0', '74hc', [output('Y')]),
+      part('R', '5v0', '74hc', [input('A', over.viMax === undefined ? {} : { params: { viMax: over.viMax } })]),
+    ],
+    nets: [net('N', ['D.Y', 'R.A'], {
+      ...(over.ohms === undefined ? {} : { pull: { to: '5v0', ohms: over.ohms } }),
+      ...(over.wiring === undefined ? {} : { wiringCapacitance: over.wiring, maxRiseTime: 1e-6 }),
+    })],
+  });
+}
+
+/** A two-wire bus on 3.3 V, pulled up: an open-drain net for pull-range and edge-rate. */
+function bus(over: { ohms?: number; wiring?: number } = {}): Design {
+  return design({
+    rails: [rail5v0, rail3v3],
+    parts: [
+      part('M', '3v3', 'i2c', [bidir('SDA', { drive: 'open-drain' })]),
+      part('S', '3v3', 'i2c', [bidir('SDA', { drive: 'open-drain' })]),
+    ],
+    nets: [net('SDA', ['M.SDA', 'S.SDA'], {
+      pull: { to: '3v3', ohms: over.ohms ?? 4700 },
+      maxRiseTime: 300e-9,
+      ...(over.wiring === undefined ? {} : { wiringCapacitance: over.wiring }),
+    })],
+  });
+}
+
+/** A 5 V output into a 3.3 V input, the 3.3 V rail off in a scenario: back-power, crossing. */
+function crossing(over: { driverRail?: number; tolerance?: number } = {}): Design {
+  return design({
+    rails: [rail('5v0', over.driverRail ?? 5, { tolerance: over.tolerance ?? 0.05 }), rail3v3],
+    scenarios: [scenario('S', ['3v3'])],
+    parts: [part('D', '5v0', '74hc', [output('Y')]), part('R', '3v3', 'lvcmos33', [input('A')])],
+    nets: [net('N', ['D.Y', 'R.A'])],
+  });
+}
+
+interface Case {
+  name: string;
+  rule: string;
+  design: Design;
+}
+
+const cases: Case[] = [
+  { name: 'driver rail NaN V', rule: 'level-high', design: driven({ driverRail: Number.NaN }) },
+  { name: 'tolerance 3.6e307 (rail range ±∞)', rule: 'level-high', design: driven({ tolerance: 3.6e307 }) },
+  { name: 'driver rail NaN V', rule: 'level-low', design: driven({ driverRail: Number.NaN }) },
+  { name: 'tolerance 3.6e307 (rail range ±∞)', rule: 'level-low', design: driven({ tolerance: 3.6e307 }) },
+  { name: 'a pull of 5e-324 Ω (infinite load)', rule: 'drive-load', design: driven({ ohms: 5e-324 }) },
+  { name: 'a pull of NaN Ω', rule: 'drive-load', design: driven({ ohms: Number.NaN }) },
+  { name: 'infinite wiring capacitance', rule: 'edge-rate', design: bus({ wiring: Number.POSITIVE_INFINITY }) },
+  { name: 'NaN wiring capacitance', rule: 'edge-rate', design: bus({ wiring: Number.NaN }) },
+  { name: 'a pull of NaN Ω', rule: 'pull-range', design: bus({ ohms: Number.NaN }) },
+  { name: 'infinite wiring capacitance', rule: 'pull-range', design: bus({ wiring: Number.POSITIVE_INFINITY }) },
+  { name: 'viMax NaN V', rule: 'overvoltage', design: driven({ viMax: Number.NaN }) },
+  { name: 'source rail +∞ V', rule: 'overvoltage', design: driven({ driverRail: Number.POSITIVE_INFINITY }) },
+  { name: 'source rail NaN V while the pin\'s rail is off', rule: 'back-power', design: crossing({ driverRail: Number.NaN }) },
+  { name: 'tolerance 3.6e307 while the pin\'s rail is off', rule: 'back-power', design: crossing({ tolerance: 3.6e307 }) },
+  { name: 'margins of a crossing NaN', rule: 'rail-crossing', design: crossing({ driverRail: Number.NaN }) },
+  { name: 'margins of a crossing −∞', rule: 'rail-crossing', design: crossing({ tolerance: 3.6e307 }) },
+  { name: 'rail NaN V', rule: 'rail-range', design: driven({ driverRail: Number.NaN }) },
+  { name: 'rail range ±∞', rule: 'rail-range', design: driven({ tolerance: 3.6e307 }) },
+];
+
+/** The rules that judge numbers, each with at least one case above. */
+const NUMERIC = ['level-high', 'level-low', 'drive-load', 'edge-rate', 'pull-range', 'overvoltage', 'back-power', 'rail-crossing', 'rail-range'];
+/** The rules that judge only how pins are connected. */
+const STRUCTURAL = ['contention', 'floating-input', 'missing-pull'];
+
+describe('a non-finite number is an error, never silence', () => {
+  it('every rule is in one of the two lists, and every numeric rule has a case', () => {
+    expect([...NUMERIC, ...STRUCTURAL].sort()).toEqual(RULES.map((r) => r.id).sort());
+    for (const id of NUMERIC) expect(cases.some((c) => c.rule === id), id).toBe(true);
+  });
+
+  it.each(cases)('$rule: $name', (c) => {
+    const found = findingsOf(rule(c.rule), c.design);
+    const undecided = found.filter((f) => f.messageId === 'undecidable');
+    expect(undecided.length, found.map((f) => `${f.severity} ${f.message}`).join('\n')).toBeGreaterThan(0);
+    for (const f of undecided) {
+      expect(f.severity).toBe('error');
+      expect(f.message).toContain('cannot be guaranteed');
+      expect(f.message).toMatch(/(is not a finite number|are not finite numbers); the check could not decide/);
+      expect(f.waived).toBeUndefined();
+      expect((f.values['undecidable'] as string[]).length).toBeGreaterThan(0);
+    }
+    for (const f of found) expect(nonFinitePaths(f), f.message).toEqual([]);
+  });
+
+  it.each(cases)('$rule: $name, with a waiver of the rule on the net, still counts', (c) => {
+    const waived = { ...c.design, nets: c.design.nets.map((n) => ({ ...n, waivers: [{ rule: c.rule as never, note: 'accepted' }] })) };
+    const result = check(waived);
+    expect(result.summary.error).toBeGreaterThan(0);
+  });
+});
+
+describe('rules that judge no number are not thrown by one', () => {
+  const broken = [driven({ driverRail: Number.NaN }), driven({ ohms: 5e-324 }), crossing({ tolerance: 3.6e307 }), bus({ ohms: Number.NaN })];
+  const clean = [driven(), driven({ ohms: 4700 }), crossing(), bus()];
+  it.each(STRUCTURAL.flatMap((id) => broken.map((d, k) => [id, k] as const)))('%s, design %i', (id, k) => {
+    const strip = (d: Design) => findingsOf(rule(id), d).map((f) => `${f.id} ${f.severity}`);
+    expect(strip(broken[k]!)).toEqual(strip(clean[k]!));
+  });
+});
