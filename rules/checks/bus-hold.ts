@@ -48,7 +48,7 @@ export default defineRule({
     if (view.drivers.some((d) => d.drive === 'push-pull') || view.remoteDrivers.some((d) => d.drive === 'push-pull')) return;
     let overdrive = 0;
     for (const h of holders) overdrive += h.params.busHold!.overdrive;
-    if (!(overdrive > 0)) return;
+    if (overdrive === 0) return;
     for (const p of view.pulls) {
       const up = p.to !== GROUND;
       const railIds = [...(up ? [p.to] : []), ...holders.map((h) => h.rail)];
@@ -59,12 +59,13 @@ export default defineRule({
           if (th === undefined) continue;
           const t = levelAt(th, c.get(h.rail) ?? 0);
           const r = up ? (pullEndVoltage(p, c) - t) / overdrive : t / overdrive;
-          rMax = Math.min(rMax, r);
+          rMax = Number.isNaN(r) || Number.isNaN(rMax) ? Number.NaN : Math.min(rMax, r);
         }
       }
-      if (!Number.isFinite(rMax)) continue;
+      // No threshold at all: nothing to overdrive against (rMax stays +∞); NaN is undecided.
+      if (rMax === Infinity) continue;
       const high = p.ohms * (1 + (p.tolerance ?? 0));
-      if (!exceeds(high, rMax)) continue;
+      if (Number.isFinite(rMax) && Number.isFinite(high) && !exceeds(high, rMax)) continue;
       const pull = p.origin === 'net' ? `the net's pull to ${p.to}` : p.resistor === true ? p.origin : `${p.origin}'s internal pull`;
       const keys = holders.map((h) => h.key);
       report({

@@ -10,6 +10,7 @@ import { pathExposure } from '../engine/paths.ts';
 import { defineRule } from './defineRule.ts';
 import { amps, volts } from './format.ts';
 import { partsOfPins as partsOf } from '../model/pinKeys.ts';
+import { allFinite } from './finite.ts';
 
 interface Data {
   pin: string;
@@ -57,8 +58,10 @@ export default defineRule({
       const direct = worstExposure(pin, netSources(pin, view.drivers, view.pulls), view.rails, limit);
       if (direct !== undefined && exceeds(direct.vNet, direct.limit)) continue;
       const far = pathExposure(view.path, pin, view.rails, limit, 'high', `viMax:${String(viMax)}`);
-      if (far === undefined || !exceeds(far.vNet, far.limit)) continue;
-      const over = exceeds(far.current, injectionMax);
+      if (far === undefined) continue;
+      const decided = allFinite(far.vNet, far.limit, far.current, injectionMax);
+      if (decided && !exceeds(far.vNet, far.limit)) continue;
+      const over = !decided || exceeds(far.current, injectionMax);
       const from = far.source === 'pulls' ? 'The pull-ups across the series resistors' : far.source;
       report({
         messageId: over ? 'overLimit' : 'withinLimit',

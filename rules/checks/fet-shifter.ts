@@ -135,9 +135,9 @@ export default defineRule({
             const vgate = c.get(fet.gate) ?? 0;
             const vol = top.v(c.get(d.rail) ?? 0);
             const vgs = vgate - vol;
-            if (turn === undefined || vgs < turn.vgs) turn = { fet: fet.id, driver: d.key, vgate, vol, vgs, vgsTh: fet.vgsThMax };
+            if (turn === undefined || vgs < turn.vgs || !Number.isFinite(vgs)) turn = { fet: fet.id, driver: d.key, vgate, vol, vgs, vgsTh: fet.vgsThMax };
           }
-          if (turn !== undefined && below(turn.vgs, fet.vgsThMax)) {
+          if (turn !== undefined && (!Number.isFinite(turn.vgs) || !Number.isFinite(fet.vgsThMax) || below(turn.vgs, fet.vgsThMax))) {
             report({
               messageId: 'mayNotTurnOn', data: turn, severity: 'error', pins: [d.key, ...keys], parts: partsOf(d.key, fet.id),
               suffix: `${fet.id}:${d.key}`, values: { ...turn },
@@ -150,9 +150,9 @@ export default defineRule({
             const iLow = pullUpCurrent(node === low ? node : other, c, vol);
             const iHigh = pullUpCurrent(node === low ? other : node, c, vol);
             const total = iLow + iHigh;
-            if (sink === undefined || total > sink.total) sink = { fet: fet.id, driver: d.key, iLow, iHigh, total, rated: top.i };
+            if (sink === undefined || total > sink.total || !Number.isFinite(total)) sink = { fet: fet.id, driver: d.key, iLow, iHigh, total, rated: top.i };
           }
-          if (sink !== undefined && exceeds(sink.total, sink.rated)) {
+          if (sink !== undefined && (!Number.isFinite(sink.total) || !Number.isFinite(sink.rated) || exceeds(sink.total, sink.rated))) {
             report({
               messageId: 'sinksBoth', data: sink, severity: 'error', pins: [d.key, ...keys], parts: partsOf(d.key, fet.id),
               suffix: `${fet.id}:${d.key}:sink`, values: { ...sink },

@@ -57,7 +57,7 @@ export default defineRule({
       if (worst === undefined || !exceeds(worst.vNet, worst.limit)) {
         if (view.path === undefined || pin.params.injectionMax !== undefined) continue;
         const far = pathExposure(view.path, pin, view.rails, (vdd) => levelAt(viMax, vdd), 'high', `viMax:${String(viMax)}`);
-        if (far === undefined || !exceeds(far.vNet, far.limit)) continue;
+        if (far === undefined || (Number.isFinite(far.vNet) && Number.isFinite(far.limit) && !exceeds(far.vNet, far.limit))) continue;
         const from = far.source === 'pulls' ? 'The pull-ups across the series resistors' : far.source;
         report({
           messageId: 'throughResistance',

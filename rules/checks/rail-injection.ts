@@ -40,10 +40,10 @@ export default defineRule({
     const { rail, injected } = view;
     let total = 0;
     for (const x of injected) total += x.current;
-    if (!(total > 0)) return;
+    if (total === 0) return;
     const pins = injected.map((x) => x.pin);
     const minLoad = rail.minLoad;
-    const messageId = minLoad === undefined ? 'noMinLoad' : exceeds(total, minLoad) ? 'exceedsMinLoad' : 'absorbed';
+    const messageId = minLoad === undefined ? 'noMinLoad' : !Number.isFinite(total) || exceeds(total, minLoad) ? 'exceedsMinLoad' : 'absorbed';
     report({
       messageId,
       data: { rail: rail.id, total, count: pins.length, ...(minLoad === undefined ? {} : { minLoad }) },

@@ -81,7 +81,7 @@ export default defineRule({
       const pulls = view.pulls.filter(external);
       if (minExternalPull !== undefined) {
         for (const p of pulls) {
-          if (!below(lowEnd(p), minExternalPull)) continue;
+          if (Number.isFinite(lowEnd(p)) && Number.isFinite(minExternalPull) && !below(lowEnd(p), minExternalPull)) continue;
           report({
             messageId: 'pullTooStrong',
             data: { pin: pin.key, pull: pullName(p), ohms: lowEnd(p), minExternalPull },
@@ -110,10 +110,10 @@ export default defineRule({
             const vlow = (vpull * rs) / (rpu + rs);
             const th = levelAt(vil, c.get(rx.rail) ?? 0);
             const score = th - vlow;
-            if (worst === undefined || score < worst.score) worst = { pin: pin.key, receiver: rx.key, vlow, vil: th, rs, rpu, vpull, score };
+            if (worst === undefined || score < worst.score || !Number.isFinite(score)) worst = { pin: pin.key, receiver: rx.key, vlow, vil: th, rs, rpu, vpull, score };
           }
         }
-        if (worst !== undefined && exceeds(worst.vlow, worst.vil)) {
+        if (worst !== undefined && (!Number.isFinite(worst.vlow) || !Number.isFinite(worst.vil) || exceeds(worst.vlow, worst.vil))) {
           const { score: _s, ...data } = worst;
           report({
             messageId: 'lowLevelLost', data, severity: 'error', pins: [pin.key, data.receiver], parts: partsOf(pin.key, data.receiver),
@@ -121,7 +121,7 @@ export default defineRule({
           });
         }
       }
-      if (maxLoadCapacitance !== undefined && exceeds(view.capacitance, maxLoadCapacitance)) {
+      if (maxLoadCapacitance !== undefined && (!Number.isFinite(view.capacitance) || !Number.isFinite(maxLoadCapacitance) || exceeds(view.capacitance, maxLoadCapacitance))) {
         report({
           messageId: 'loadTooLarge', data: { pin: pin.key, capacitance: view.capacitance, maxLoadCapacitance },
           severity: 'error', pins: [pin.key], parts: partsOf(pin.key), suffix: `${pin.key}:load`,

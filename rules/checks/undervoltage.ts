@@ -47,7 +47,10 @@ export default defineRule({
       const consider = (v: number, pinVdd: number, from: string) => {
         const limit = levelAt(viMin, pinVdd);
         const excess = limit - v;
-        if (worst === undefined || excess > worst.excess) worst = { v, limit, from, pinVdd, excess };
+        // A number that is not finite wins: it must be reported, not lost in a comparison.
+        if (worst === undefined || excess > worst.excess || !Number.isFinite(excess)) {
+          if (worst === undefined || Number.isFinite(worst.excess)) worst = { v, limit, from, pinVdd, excess };
+        }
       };
       for (const d of view.drivers) {
         if (d.key === pin.key || d.drive === 'open-drain') continue;
@@ -63,7 +66,7 @@ export default defineRule({
         if (far !== undefined) consider(far.vNet, far.pinVdd, far.source === 'pulls' ? 'The pulls across the series resistors' : far.source);
       }
       const w = worst as { v: number; limit: number; from: string; pinVdd: number } | undefined;
-      if (w === undefined || !below(w.v, w.limit)) continue;
+      if (w === undefined || (Number.isFinite(w.v) && Number.isFinite(w.limit) && !below(w.v, w.limit))) continue;
       report({
         messageId: 'tooLow',
         data: { pin: pin.key, vNet: w.v, viMin: w.limit, from: w.from, pinVdd: w.pinVdd },

@@ -30,7 +30,8 @@ export function injectionsOf(view: NetView): readonly Injection[] {
       const direct = worstExposure(pin, netSources(pin, view.drivers, view.pulls), view.rails, limit);
       if (direct !== undefined && exceeds(direct.vNet, direct.limit)) continue;
       const far = pathExposure(view.path, pin, view.rails, limit, 'high', `viMax:${String(viMax)}`);
-      if (far !== undefined && exceeds(far.vNet, far.limit) && far.current > 0) out.push({ pin: pin.key, rail: pin.rail, current: far.current });
+      const undecided = far !== undefined && (!Number.isFinite(far.vNet) || !Number.isFinite(far.current));
+      if (far !== undefined && (undecided || (exceeds(far.vNet, far.limit) && far.current > 0))) out.push({ pin: pin.key, rail: pin.rail, current: far.current });
     }
   }
   hit = out;

@@ -24,6 +24,12 @@ export interface Network {
  */
 export function solve(net: Network): (number | undefined)[] {
   const { n, fixed, links, ties, inject } = net;
+  // A number that is not finite (a resistance of NaN Ω, an infinite rail) decides nothing: every
+  // node comes out NaN, so that the rules report the path as undecidable rather than skip it.
+  const bad = (x: number | undefined) => x !== undefined && !Number.isFinite(x);
+  if (links.some((l) => bad(l.g)) || ties.some((t) => bad(t.g) || bad(t.v)) || fixed.some(bad) || inject.some(bad)) {
+    return new Array<number>(n).fill(Number.NaN);
+  }
   // Which free nodes are anchored: reached from a fixed node or a tie through conductances.
   const anchored = new Array<boolean>(n).fill(false);
   const adjacent: number[][] = Array.from({ length: n }, () => []);

@@ -619,7 +619,9 @@ function exposureOf(
     for (const p of n.pulls) if (p.to !== GROUND) see(rails.ranges.get(p.to));
     if (k !== path.self) for (const p of n.pins) if (p.powered && p.role !== 'input' && p.drive !== 'open-drain') see(rails.ranges.get(p.rail));
   });
-  if (sense === 'high' ? !(extreme > limLow) : !(extreme < limHigh)) return undefined;
+  // A number that is not finite is never short-cut: it must come out as undecidable.
+  const finite = Number.isFinite(extreme) && Number.isFinite(limLow) && Number.isFinite(limHigh);
+  if (finite && (sense === 'high' ? !(extreme > limLow) : !(extreme < limHigh))) return undefined;
   const self = path.self;
   const sources: { key: string; node: number; rail: string | undefined }[] = [];
   path.nodes.forEach((n, k) => {
@@ -644,7 +646,7 @@ function exposureOf(
         const v = solve(network(path, c, ohms, fixed, 'none'))[self];
         if (v === undefined) continue;
         const excess = sense === 'high' ? v - lim : lim - v;
-        if (worst === undefined || excess > worst.excess) {
+        if (worst === undefined || excess > worst.excess || !Number.isFinite(excess)) {
           worst = {
             vNet: v, limit: lim, source: s.key, pinVdd, current: 0, resistors: seriesDetail(path, ohms), excess,
             sourceNode: s.node, sourceRail: s.rail,
@@ -655,7 +657,7 @@ function exposureOf(
   }
   if (worst === undefined) return undefined;
   let current = 0;
-  if (worst.excess > 0 && sense === 'high') {
+  if ((worst.excess > 0 || !Number.isFinite(worst.excess)) && sense === 'high') {
     // The clamp holds the pin at its supply (Vf = 0): the current the path then pushes into it.
     for (const c of corners(railIds, rails.ranges)) {
       for (const ohms of casesOf(path)) {

@@ -15,6 +15,7 @@ import { nonFinitePaths } from '../../rules/engine/undecidable.ts';
 import type { Design } from '../../rules/model/schema.ts';
 import { bidir, design, input, net, output, part, rail, rail3v3, rail5v0, scenario } from '../support/build.ts';
 import { findingsOf } from '../support/ruleTester.ts';
+import { fetBus, seriesClamp } from '../support/paths.ts';
 
 const rule = (id: string): AnyRule => RULES.find((r) => r.id === id)!;
 
@@ -86,11 +87,33 @@ const cases: Case[] = [
   { name: 'margins of a crossing NaN', rule: 'rail-crossing', design: crossing({ driverRail: Number.NaN }) },
   { name: 'margins of a crossing −∞', rule: 'rail-crossing', design: crossing({ tolerance: 3.6e307 }) },
   { name: 'rail NaN V', rule: 'rail-range', design: driven({ driverRail: Number.NaN }) },
+  // Version 2: the rules of the parts between chips.
+  { name: 'a series resistor of NaN Ω', rule: 'clamp-current', design: seriesClamp({ ohms: Number.NaN, injectionMax: 5e-3 }) },
+  { name: 'a series resistor of NaN Ω into a rail with a minimum load', rule: 'rail-injection', design: seriesClamp({ ohms: Number.NaN, injectionMax: 5e-3, minLoad: 10e-3 }) },
+  { name: 'a −12 V line whose rail minimum is NaN', rule: 'undervoltage', design: design({
+    rails: [rail3v3, rail('n12', -12, { min: Number.NaN, max: -11.4 })],
+    parts: [part('J1', 'n12', 'off-board', [output('TXD', { params: { vol: [{ v: -11.4, i: 1e-3 }] } })]), part('R', '3v3', 'lvcmos33', [input('A', { params: { viMin: -0.5 } })])],
+    nets: [net('N', ['J1.TXD', 'R.A'])],
+  }) },
+  { name: 'a FET threshold of NaN V', rule: 'fet-shifter', design: fetBus({ vgsThMax: Number.NaN }) },
+  { name: 'a translator Rs of NaN Ω', rule: 'translator-pull', design: design({
+    rails: [rail3v3],
+    parts: [part('U5', '3v3', 'lvcmos33', [output('B1', { params: { seriesResistance: Number.NaN } })]), part('U6', '3v3', 'lvcmos33', [input('A')])],
+    nets: [net('N', ['U5.B1', 'U6.A'], { pull: { to: '3v3', ohms: 4700 } })],
+  }) },
+  { name: 'a bus-hold strap of NaN Ω', rule: 'bus-hold', design: design({
+    rails: [rail3v3],
+    parts: [part('U7', '3v3', 'lvcmos33', [input('D0', { params: { busHold: { hold: 75e-6, overdrive: Number.NaN } } })])],
+    nets: [net('BUS0', ['U7.D0'], { pull: { to: '3v3', ohms: 4700 } })],
+  }) },
   { name: 'rail range ±∞', rule: 'rail-range', design: driven({ tolerance: 3.6e307 }) },
 ];
 
 /** The rules that judge numbers, each with at least one case above. */
-const NUMERIC = ['level-high', 'level-low', 'drive-load', 'edge-rate', 'pull-range', 'overvoltage', 'back-power', 'rail-crossing', 'rail-range'];
+const NUMERIC = [
+  'level-high', 'level-low', 'drive-load', 'edge-rate', 'pull-range', 'overvoltage', 'back-power', 'rail-crossing', 'rail-range',
+  'clamp-current', 'rail-injection', 'undervoltage', 'fet-shifter', 'translator-pull', 'bus-hold',
+];
 /** The rules that judge only how pins are connected. */
 const STRUCTURAL = ['contention', 'floating-input', 'missing-pull'];
 

@@ -48,6 +48,11 @@ describe('nodal solver', () => {
       expect: [3.75],
     },
   ];
+  it('a resistance that is not a number decides nothing: every node is NaN, never a skipped link', () => {
+    const got = solve({ n: 2, fixed: [5, undefined], links: [{ a: 0, b: 1, g: 1 / Number.NaN }], ties: [], inject: [0, 0] });
+    expect(got.every((v) => Number.isNaN(v))).toBe(true);
+  });
+
   it.each(cases)('$name', ({ net, expect: want }) => {
     const got = solve(net);
     want.forEach((w, k) => (w === undefined ? expect(got[k]).toBeUndefined() : close(got[k]!, w)));
