@@ -52,7 +52,7 @@ const refusals: Refusal[] = [
   // version 2: the parts between chips
   { name: 'discrete of an unknown kind', breakIt: (d) => void (d.discretes[0].kind = 'capacitor'), path: 'discretes[0].kind', says: '"resistor", "fet-shifter" or "diode-shifter"' },
   { name: 'resistor without a value', breakIt: (d) => void delete d.discretes[0].ohms, path: 'discretes[0].ohms', says: 'missing' },
-  { name: 'resistor of zero ohms', breakIt: (d) => void (d.discretes[1].ohms = 0), path: 'discretes[1].ohms', says: 'positive resistance' },
+  { name: 'resistor of zero ohms', breakIt: (d) => void (d.discretes[1].ohms = 0), path: 'discretes[1].ohms', says: 'resistance (Ω) from 1 mΩ' },
   { name: 'negative resistor tolerance', breakIt: (d) => void (d.discretes[0].tolerance = -0.01), path: 'discretes[0].tolerance', says: '0 or more' },
   { name: 'resistor tied to an unknown rail', breakIt: (d) => void (d.discretes[1].tie['2'] = 'vbat'), path: 'discretes[1].tie["2"]', says: '"ground" or a rail id' },
   { name: 'FET gate on an unknown rail', breakIt: (d) => void (d.discretes[2].gate = '1v2'), path: 'discretes[2].gate', says: 'unknown rail' },
