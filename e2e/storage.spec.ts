@@ -173,7 +173,7 @@ test('a deleted design is restored from Recently deleted', async ({ page }) => {
   await expect(page.locator('.rc-wire[data-net="VALVE_EN"]')).toHaveAttribute('data-severity', 'error');
 });
 
-test('Export: the design file is the canonical v1 text', async ({ page }) => {
+test('Export: the design file is the canonical (version 2) text', async ({ page }) => {
   await start(page);
   const download = await exportAs(page, 'export-design');
   expect(download.suggestedFilename()).toBe('greenhouse-irrigation-controller.railcross.json');
