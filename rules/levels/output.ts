@@ -36,7 +36,9 @@ export function largestTestCurrent(points: readonly OutputPoint[] | undefined): 
  * `vdd`: the entry with the smallest test current that is at least the load. Above the largest
  * test current there is no guarantee: the straight line through the last two points,
  * extrapolated to the load, never better than the last guaranteed point; with a single point,
- * that point. The line stops at the output's own rails, 0 V for a high level and `vdd` for a low
+ * the resistive line through the origin, as if the output were a resistor from its own rail
+ * (VOL · I/I_row for a low level, VDD − (VDD − VOH) · I/I_row for a high one), or that point's
+ * level when its test current is 0 A (no line can be drawn). The line stops at the output's own rails, 0 V for a high level and `vdd` for a low
  * one (an output stage cannot swing beyond its supply: common practice), so that test points
  * a hair apart never extrapolate to astronomical or infinite volts. Undefined for an empty list.
  */
@@ -53,13 +55,22 @@ export function outputLevel(
   }
   const last = sorted[sorted.length - 1]!;
   const vLast = levelAt(last.v, vdd);
-  if (sorted.length === 1) return { v: vLast, atCurrent: load, estimate: true };
+  if (sorted.length === 1) {
+    if (!(last.i > 0)) return { v: vLast, atCurrent: load, estimate: true };
+    const scale = load / last.i;
+    const line = sense === 'high' ? vdd - (vdd - vLast) * scale : vLast * scale;
+    return { v: bounded(line, vLast, vdd, sense), atCurrent: load, estimate: true };
+  }
   const prev = sorted[sorted.length - 2]!;
   const vPrev = levelAt(prev.v, vdd);
   const di = last.i - prev.i;
   const line = di > 0 ? vLast + ((vLast - vPrev) / di) * (load - last.i) : vLast;
-  const v = sense === 'high'
+  return { v: bounded(line, vLast, vdd, sense), atCurrent: load, estimate: true };
+}
+
+/** An extrapolated level: never better than the last guaranteed one, never past the output's own rails. */
+function bounded(line: number, vLast: number, vdd: number, sense: 'high' | 'low'): number {
+  return sense === 'high'
     ? Math.max(Number.isNaN(line) ? -Infinity : Math.min(line, vLast), Math.min(0, vLast))
     : Math.min(Number.isNaN(line) ? Infinity : Math.max(line, vLast), Math.max(vdd, vLast));
-  return { v, atCurrent: load, estimate: true };
 }
