@@ -52,7 +52,8 @@ function outputResistance(driver: PinView, rails: RailStates): number | undefine
  */
 function edgeSource(view: NetView, except?: string): EdgeSource | undefined {
   if (view.highFromPull) {
-    const resistance = parallelResistance(view.pulls)!;
+    // The pulls at the top of their ranges: the slowest edge.
+    const resistance = parallelResistance(view.pulls, 'max')!;
     let swing = Infinity;
     for (const c of corners(pullRails(view.pulls), view.rails.ranges)) swing = Math.min(swing, thevenin(view.pulls, c)!.v);
     return { driver: null, resistance, swing };

@@ -2,7 +2,8 @@
  * Preparing a net once per power state: its pins resolved, drivers and receivers by kind, pulls,
  * capacitance, load currents and the level analysis. Every rule reads this one view.
  */
-import type { Design, Net } from '../model/schema.ts';
+import type { Design, Net, Pull } from '../model/schema.ts';
+import { pullEnds } from '../model/pullRange.ts';
 import { analyseNet } from './analyse.ts';
 import { driverLoad } from './netMath.ts';
 import { GROUND } from './powerStates.ts';
@@ -27,6 +28,11 @@ export interface PrepareContext {
   readonly pinIndex: PinIndex;
 }
 
+function pullSource(pull: Pull, origin: string): PullSource {
+  const ends = pullEnds(pull);
+  return { ohms: pull.ohms, min: ends.min, max: ends.max, to: pull.to, origin };
+}
+
 /** The prepared view of one net in one power state. */
 export function prepareNet(ctx: PrepareContext, net: Net): NetView {
   const { settings } = ctx;
@@ -40,8 +46,8 @@ export function prepareNet(ctx: PrepareContext, net: Net): NetView {
   const unpowered = pins.filter((p) => !p.powered);
 
   const pulls: PullSource[] = [];
-  if (net.pull !== undefined) pulls.push({ ohms: net.pull.ohms, to: net.pull.to, origin: 'net' });
-  for (const p of pins) if (p.pull !== undefined) pulls.push({ ohms: p.pull.ohms, to: p.pull.to, origin: p.key });
+  if (net.pull !== undefined) pulls.push(pullSource(net.pull, 'net'));
+  for (const p of pins) if (p.pull !== undefined) pulls.push(pullSource(p.pull, p.key));
 
   let capacitance = net.wiringCapacitance ?? settings.defaultWiringCapacitance;
   for (const p of pins) capacitance += p.params.cin ?? 0;

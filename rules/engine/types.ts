@@ -44,6 +44,9 @@ export interface PinView extends ResolvedPin {
 /** A pull resistor of a net: the net's own, or a pin's internal one. */
 export interface PullSource {
   readonly ohms: number;
+  /** The ends of its range, Ω (both `ohms` unless the pull gives a tolerance or min/max). */
+  readonly min: number;
+  readonly max: number;
   /** Rail id, or `ground`. */
   readonly to: string;
   /** `net` for the net's own pull, else the pin key `PART.PIN` whose internal pull it is. */

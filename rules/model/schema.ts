@@ -98,7 +98,15 @@ export const ParamsSchema = z.strictObject({
 export const PullSchema = z.strictObject({
   to: z.string().min(1, { message: 'expected a rail id or "ground"' }),
   ohms: positive('resistance (Ω)'),
-}).meta({ id: 'Pull', description: 'A pull resistor to a rail or to ground' });
+  tolerance: nonNegative('tolerance (fraction)').lt(1, { message: 'expected a tolerance (fraction) below 1' }).optional(),
+  min: positive('resistance (Ω)').optional(),
+  max: positive('resistance (Ω)').optional(),
+}).refine((p) => !(p.min !== undefined && p.min > p.ohms) && !(p.max !== undefined && p.max < p.ohms), {
+  message: 'expected min ≤ ohms ≤ max',
+}).meta({
+  id: 'Pull',
+  description: 'A pull resistor to a rail or to ground; its range ohms × (1 ± tolerance), exact unless given, an explicit min or max winning for its end',
+});
 
 const PositionSchema = z.strictObject({ x: z.number(), y: z.number() });
 

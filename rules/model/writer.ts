@@ -19,7 +19,7 @@ const PARAMS: KeyOrder = {
   keys: ['vih', 'vil', 'schmitt', 'iih', 'iil', 'cin', 'viMax', 'unpoweredSafe', 'viMaxOff', 'voh', 'vol', 'ioMax', 'maxInputRamp', 'vddRange'],
   children: { schmitt: leaf('vtPlus', 'vtMinus'), voh: LEVEL_POINT, vol: LEVEL_POINT },
 };
-const PULL = leaf('to', 'ohms');
+const PULL = leaf('to', 'ohms', 'tolerance', 'min', 'max');
 
 /** Key orders of design-format.md's tables; exported so a test can hold them to the schema. */
 export const KEY_ORDER = {

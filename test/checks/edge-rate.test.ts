@@ -71,6 +71,14 @@ ruleTester(rule, {
   invalid: [
     {
       // I2C-bus specification, standard-mode: tr ≤ 1000 ns at Cb = 400 pF gives Rp(max) = 2950.6 Ω;
+      // The pull exactly at the limit above, given ± 1 %: its largest end, 4747 Ω, is too slow.
+      name: 'a pull\'s tolerance: its largest end sets the rise time',
+      design: link(i2cDriver, { rail: '3v3', profile: 'i2c' }, {
+        net: { pull: { to: '3v3', ohms: 4700, tolerance: 0.01 }, wiringCapacitance: 100e-12, maxRiseTime: LN73 * 4700 * (100e-12 + 2 * CIN) },
+      }),
+      findings: [{ messageId: 'pulledRiseSlow', severity: 'warning', values: { resistance: near(4747), riseTime: near(LN73 * 4747 * (100e-12 + 2 * CIN)) } }],
+    },
+    {
       // 3 kΩ is just too slow. C = 380 pF wiring + two 10 pF pins.
       name: 'a pulled bus too slow for its maxRiseTime (30-70)',
       design: link(i2cDriver, { rail: '3v3', profile: 'i2c' }, {

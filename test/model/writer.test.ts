@@ -37,7 +37,7 @@ const TABLE_ORDER: { name: string; order: KeyOrder | undefined; schema: z.ZodObj
     schema: ParamsSchema,
     keys: ['vih', 'vil', 'schmitt', 'iih', 'iil', 'cin', 'viMax', 'unpoweredSafe', 'viMaxOff', 'voh', 'vol', 'ioMax', 'maxInputRamp', 'vddRange'],
   },
-  { name: 'pull', order: KEY_ORDER.design.children.nets.children.pull, schema: PullSchema, keys: ['to', 'ohms'] },
+  { name: 'pull', order: KEY_ORDER.design.children.nets.children.pull, schema: PullSchema, keys: ['to', 'ohms', 'tolerance', 'min', 'max'] },
   { name: 'net', order: KEY_ORDER.design.children.nets, schema: NetSchema, keys: ['id', 'label', 'pins', 'pull', 'wiringCapacitance', 'maxRiseTime', 'waivers', 'route'] },
   { name: 'waiver', order: KEY_ORDER.design.children.nets.children.waivers, schema: WaiverSchema, keys: ['rule', 'scenario', 'note'] },
   { name: 'profile', order: KEY_ORDER.design.children.profiles, schema: ProfileSchema, keys: ['id', 'label', 'source', 'params'] },

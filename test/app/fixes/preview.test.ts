@@ -10,10 +10,11 @@ import { harness } from '../harness.ts';
 describe('previewFix', () => {
   it.each([
     {
-      name: 'a pull-up moved into its range: the error goes, an info takes its id in each power state',
-      finding: 'pull-range:FROST:all-on', fix: 'pull-value',
-      gone: ['pull-range:FROST:all-on', 'pull-range:FROST:standby'],
-      added: ['pull-range:FROST:all-on/info', 'pull-range:FROST:standby/info'],
+      // FLOW's pull-up fixes the slow edge too: edge-rate goes with the pull-range error.
+      name: 'a pull-up added into its range: the error goes, an info takes its id in each power state',
+      finding: 'pull-range:FLOW:all-on', fix: 'pull-value',
+      gone: ['pull-range:FLOW:all-on', 'pull-range:FLOW:standby', 'edge-rate:FLOW:all-on', 'edge-rate:FLOW:standby'],
+      added: ['pull-range:FLOW:all-on/info', 'pull-range:FLOW:standby/info'],
     },
     {
       name: 'a translator on VALVE_EN: the level error and the crossing go in both power states',
