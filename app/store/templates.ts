@@ -128,8 +128,9 @@ function mcu(n: 8 | 16): Template {
       ...range('OUT', io, (id) => output(id)),
       ...(n === 16
         ? [
-            { id: 'SDA', role: 'bidir', drive: 'open-drain', side: 'left' } satisfies Pin,
-            { id: 'SCL', role: 'bidir', drive: 'open-drain', side: 'left' } satisfies Pin,
+            // The two-wire pins are bus pins: the I2C-bus specification's levels, not the GPIO rows.
+            { id: 'SDA', role: 'bidir', drive: 'open-drain', profile: 'i2c', side: 'left' } satisfies Pin,
+            { id: 'SCL', role: 'bidir', drive: 'open-drain', profile: 'i2c', side: 'left' } satisfies Pin,
             output('TX'), input('RX'),
           ]
         : []),

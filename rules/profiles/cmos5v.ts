@@ -13,7 +13,8 @@ export const hc = defineProfile({
   label: '74HC CMOS (JESD7)',
   source:
     "JESD7 as restated in parts' DC tables; thresholds as the conservative lines 0.675·VDD+0.15 / 0.325·VDD−0.15; " +
-    '4 mA rows at 4.5 V (−40…85 °C) carried up as VDD−0.66 / 0.33 V; clamp diodes: VDD+0.5 (common practice)',
+    '4 mA rows at 4.5 V (−40…85 °C) carried up as VDD−0.66 / 0.33 V; clamp diodes: VDD+0.5 (common practice); ' +
+    'all rows −40…85 °C',
   params: {
     vddRange: [4.5, 6], // 4.5 V: the lowest supply of the 4 mA rows (JESD7, restated); 6 V: family maximum (restated)
     // JESD7 restated: 1.5 V @ 2 V, 3.15 @ 4.5, 3.85 @ 5.5, 4.2 @ 6. The line is exact at 2 and 6 V and above the table between.
@@ -40,7 +41,8 @@ export const hct = defineProfile({
   id: '74hct',
   label: '74HCT CMOS, TTL inputs (JESD7)',
   source:
-    "JESD7 as restated in parts' DC tables; outputs as 74HC (4 mA rows at 4.5 V); clamp diodes: VDD+0.5 (common practice)",
+    "JESD7 as restated in parts' DC tables; outputs as 74HC (4 mA rows at 4.5 V); clamp diodes: VDD+0.5 (common practice); " +
+    'all rows −40…85 °C',
   params: {
     vddRange: [4.5, 5.5], // JESD7 restated
     vih: 2, // JESD7 restated
@@ -64,7 +66,8 @@ export const hct = defineProfile({
 export const ac = defineProfile({
   id: '74ac',
   label: '74AC advanced CMOS',
-  source: 'from memory (24 mA rows at 4.5 V carried up as VDD−0.74 / 0.44 V); VDD+0.5 common practice',
+  source:
+    'from memory (24 mA rows at 4.5 V, −40…85 °C, carried up as VDD−0.74 / 0.44 V; 10 pF input); VDD+0.5 common practice',
   params: {
     vddRange: [4.5, 6], // 4.5 V: the 24 mA rows (from memory); 6 V family maximum (from memory)
     vih: '0.7*VDD', // from memory
@@ -79,6 +82,7 @@ export const ac = defineProfile({
     ],
     iih: 1e-6, // from memory: ±1 µA
     iil: 1e-6, // from memory: ±1 µA
+    cin: 10e-12, // from memory: 10 pF, the usual maximum of the family's tables
     viMax: 'VDD+0.5', // common practice: clamp diode to VCC
   },
 });
@@ -87,7 +91,8 @@ export const ac = defineProfile({
 export const act = defineProfile({
   id: '74act',
   label: '74ACT advanced CMOS, TTL inputs',
-  source: 'from memory (24 mA rows at 4.5 V carried up as VDD−0.74 / 0.44 V); VDD+0.5 common practice',
+  source:
+    'from memory (24 mA rows at 4.5 V, −40…85 °C, carried up as VDD−0.74 / 0.44 V; 10 pF input); VDD+0.5 common practice',
   params: {
     vddRange: [4.5, 5.5], // from memory
     vih: 2, // from memory
@@ -102,6 +107,7 @@ export const act = defineProfile({
     ],
     iih: 1e-6, // from memory: ±1 µA
     iil: 1e-6, // from memory: ±1 µA
+    cin: 10e-12, // from memory: 10 pF, the usual maximum of the family's tables
     viMax: 'VDD+0.5', // common practice: clamp diode to VCC
   },
 });
@@ -114,15 +120,17 @@ export const ahc = defineProfile({
   id: '74ahc',
   label: '74AHC CMOS, 5.5 V-tolerant inputs',
   source:
-    "input tolerance (5.5 V whatever VDD) as restated in parts' DC tables; levels from memory " +
-    '(8 mA rows at 4.5 V carried up as VDD−0.56 / 0.44 V)',
+    "input tolerance (5.5 V whatever VDD) as restated in parts' DC tables; levels from a family datasheet's DC table " +
+    '(−40…85 °C, from the review; 8 mA rows at 4.5 V, 3.8 V / 0.44 V, carried up as VDD−0.70 / 0.44 V; 10 pF input, from memory)',
   params: {
     vddRange: [4.5, 5.5], // 4.5 V: the 8 mA rows (from memory); 5.5 V family maximum (from memory)
     vih: '0.7*VDD', // from memory
     vil: '0.3*VDD', // from memory
     voh: [
       { v: 'VDD-0.1', i: 50e-6 }, // from memory
-      { v: 'VDD-0.56', i: 8e-3 }, // from memory: 3.94 V @ 8 mA at 4.5 V
+      // a family datasheet's DC table, −40…85 °C (from the review): 3.8 V @ 8 mA at 4.5 V; the
+      // 3.94 V printed beside it is the 25 °C figure
+      { v: 'VDD-0.7', i: 8e-3 },
     ],
     vol: [
       { v: 0.1, i: 50e-6 }, // from memory
@@ -130,6 +138,7 @@ export const ahc = defineProfile({
     ],
     iih: 1e-6, // from memory: ±1 µA
     iil: 1e-6, // from memory: ±1 µA
+    cin: 10e-12, // from memory: 10 pF, the usual maximum of the family's tables
     viMax: 5.5, // restated in parts' DC tables: inputs tolerate 5.5 V whatever VDD
   },
 });
@@ -139,15 +148,17 @@ export const ahct = defineProfile({
   id: '74ahct',
   label: '74AHCT CMOS, TTL inputs, 5.5 V-tolerant',
   source:
-    "input tolerance (5.5 V whatever VDD) as restated in parts' DC tables; levels from memory " +
-    '(8 mA rows at 4.5 V carried up as VDD−0.56 / 0.44 V)',
+    "input tolerance (5.5 V whatever VDD) as restated in parts' DC tables; levels from a family datasheet's DC table " +
+    '(−40…85 °C, from the review; 8 mA rows at 4.5 V, 3.8 V / 0.44 V, carried up as VDD−0.70 / 0.44 V; 10 pF input, from memory)',
   params: {
     vddRange: [4.5, 5.5], // from memory
     vih: 2, // from memory
     vil: 0.8, // from memory
     voh: [
       { v: 'VDD-0.1', i: 50e-6 }, // from memory
-      { v: 'VDD-0.56', i: 8e-3 }, // from memory: 3.94 V @ 8 mA at 4.5 V
+      // a family datasheet's DC table, −40…85 °C (from the review): 3.8 V @ 8 mA at 4.5 V; the
+      // 3.94 V printed beside it is the 25 °C figure
+      { v: 'VDD-0.7', i: 8e-3 },
     ],
     vol: [
       { v: 0.1, i: 50e-6 }, // from memory
@@ -155,6 +166,7 @@ export const ahct = defineProfile({
     ],
     iih: 1e-6, // from memory: ±1 µA
     iil: 1e-6, // from memory: ±1 µA
+    cin: 10e-12, // from memory: 10 pF, the usual maximum of the family's tables
     viMax: 5.5, // restated in parts' DC tables: inputs tolerate 5.5 V whatever VDD
   },
 });

@@ -37,6 +37,13 @@ describe('parts palette', () => {
     expect(valid.ok ? [] : valid.errors).toEqual([]);
   });
 
+  it('the 16-pin microcontroller\'s two-wire pins use the two-wire bus profile, its GPIO pins the GPIO one', () => {
+    const part = templateById('mcu:16')!.build(newDesign(), { x: 0, y: 0 });
+    if ('refused' in part) throw new Error(part.refused);
+    const profileOf = (id: string) => part.pins.find((p) => p.id === id)!.profile ?? part.profile;
+    expect([profileOf('SDA'), profileOf('SCL'), profileOf('OUT1'), profileOf('IN1')]).toEqual(['i2c', 'i2c', 'mcu-gpio', 'mcu-gpio']);
+  });
+
   it('a translator puts side A on its own rail and family', () => {
     const part = templateById('translator:lvcmos18:lvcmos33')!.build(newDesign(), { x: 0, y: 0 });
     if ('refused' in part) throw new Error(part.refused);

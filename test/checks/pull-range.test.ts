@@ -306,9 +306,9 @@ ruleTester(rule, {
     },
     {
       // Three rails: VOL 0.2·VDD (i2c-lv) is largest at 1v8's lowest end while Vpull is at 3v3's
-      // highest: Rmin = (3.465 − 0.2 × 1.71) / (3 mA − 0) (lvcmos33 gives no iil). Rmax: the
-      // largest VIH of the receivers, LVCMOS 2.0 V beats 0.65 × 1.89 = 1.2285 V (JESD8-7), against
-      // Vpull at 3.135 V, over Σiih = 10 µA (the driver's own).
+      // highest: Rmin = (3.465 − 0.2 × 1.71) / (3 mA − 2 × 5 µA) (LVCMOS ±5 µA, from memory). Rmax:
+      // the largest VIH of the receivers, LVCMOS 2.0 V beats 0.65 × 1.89 = 1.2285 V (JESD8-7),
+      // against Vpull at 3.135 V, over Σiih = 10 µA (the driver's own) + 2 × 5 µA.
       name: 'corners across the pull, driver and receiver rails',
       design: design({
         parts: [
@@ -321,15 +321,16 @@ ruleTester(rule, {
       findings: [{
         messageId: 'inRange', severity: 'info',
         values: {
-          rMin: (3.465 - 0.2 * 1.71) / 3e-3, rMinCorner: { '3v3': 3.465, '1v8': 1.71 }, rMinDriver: 'D.Y',
-          // Advice [1095.8, 89048] capped at 47 kΩ: √ = 7177 Ω, E12 6.8 kΩ; largest E24 inside 82 kΩ.
-          rMax: (3.135 - 2.0 - 0.2) / 10e-6, adviceCap: 47000, suggested: 6800, lowestPower: 82000,
+          rMin: (3.465 - 0.2 * 1.71) / (3e-3 - 10e-6), rMinCorner: { '3v3': 3.465, '1v8': 1.71 }, rMinDriver: 'D.Y',
+          // Advice [1099.5, 44524] (the 47 kΩ cap lies above): √ = 6997 Ω, E12 6.8 kΩ; largest E24 inside 43 kΩ.
+          rMax: (3.135 - 2.0 - 0.2) / 20e-6, adviceCap: null, suggested: 6800, lowestPower: 43000,
         },
       }],
     },
     {
-      // A Schmitt receiver is judged by vtPlus: 2.8 V here, so (3.135 − 2.8 − 0.2) / 10 µA = 13.5 kΩ
-      // (with its vih of 2.0 V it would be 93.5 kΩ and 15 kΩ would pass).
+      // A Schmitt receiver is judged by vtPlus: 2.8 V here, so (3.135 − 2.8 − 0.2) / 15 µA = 9 kΩ
+      // (10 µA from the bus pin, 5 µA LVCMOS from memory; with its vih of 2.0 V it would be 62.3 kΩ
+      // and 15 kΩ would pass).
       name: 'a Schmitt receiver\'s vtPlus is its VIH',
       design: design({
         parts: [
@@ -338,7 +339,7 @@ ruleTester(rule, {
         ],
         nets: [net('N', ['D.Y', 'R.A'], { pull: { to: '3v3', ohms: 15000 } })],
       }),
-      findings: [{ messageId: 'tooLarge', severity: 'error', values: { rMax: (3.135 - 2.8 - 0.2) / 10e-6 } }],
+      findings: [{ messageId: 'tooLarge', severity: 'error', values: { rMax: (3.135 - 2.8 - 0.2) / 15e-6 } }],
     },
     {
       // In `io-off` the 1v8 driver is unpowered: it no longer sets Rmin, but its iil (10 µA)
