@@ -4,7 +4,7 @@
  * of the net together (its own, the pins' internal ones) lies inside it, each at the worst end
  * of its range; and the value to fit as the net's own pull-up (README, "Pull-up advice").
  */
-import { outputLevel, sortedPoints } from '../levels/output.ts';
+import { outputLevel, rowsAt } from '../levels/output.ts';
 import { levelAt } from '../levels/level.ts';
 import { below, exceeds } from '../levels/compare.ts';
 import { corners, type Corner } from '../levels/rails.ts';
@@ -63,8 +63,9 @@ function minimum(view: NetView, drivers: readonly PinView[], ups: readonly PullS
   const weak: string[] = [];
   for (const d of drivers) {
     const points = d.params.vol;
-    if (points === undefined || points.length === 0) continue;
-    const top = sortedPoints(points)[points.length - 1]!;
+    const rows = points === undefined ? [] : rowsAt(points, view.rails.ranges.get(d.rail)?.min ?? 0);
+    if (points === undefined || rows.length === 0) continue;
+    const top = rows[rows.length - 1]!;
     const sumIil = otherIil(view, d);
     if (!exceeds(top.i, sumIil)) {
       weak.push(d.key);
@@ -138,8 +139,9 @@ function outcome(view: NetView, drivers: readonly PinView[], ups: readonly PullS
   let sink: number | null = null;
   for (const d of drivers) {
     const points = d.params.vol;
-    if (points === undefined || points.length === 0) continue;
-    const top = sortedPoints(points)[points.length - 1]!;
+    const rows = points === undefined ? [] : rowsAt(points, view.rails.ranges.get(d.rail)?.min ?? 0);
+    if (points === undefined || rows.length === 0) continue;
+    const top = rows[rows.length - 1]!;
     for (const c of corners([...pullRails(ups), d.rail], view.rails.ranges)) {
       const vdd = c.get(d.rail) ?? 0;
       const th = thevenin(ups, c, 'min')!;

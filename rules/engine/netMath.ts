@@ -5,7 +5,7 @@
 import type { Corner, Range } from '../levels/rails.ts';
 import { corners } from '../levels/rails.ts';
 import { levelAt } from '../levels/level.ts';
-import { sortedPoints } from '../levels/output.ts';
+import { rowsAt } from '../levels/output.ts';
 import type { DriverLoad, PinView, PullSource, RailStates } from './types.ts';
 import { GROUND } from './powerStates.ts';
 
@@ -87,8 +87,8 @@ export function driverLoad(
   const volPoints = driver.params.vol;
   let volAtTop = 0;
   if (volPoints !== undefined && volPoints.length > 0) {
-    const sorted = sortedPoints(volPoints);
-    volAtTop = levelAt(sorted[sorted.length - 1]!.v, own.max);
+    const sorted = rowsAt(volPoints, own.min);
+    if (sorted.length > 0) volAtTop = levelAt(sorted[sorted.length - 1]!.v, own.max);
   }
   for (const pull of pulls) {
     const end = pullEndRange(pull, rails);

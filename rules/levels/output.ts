@@ -23,11 +23,26 @@ export function sortedPoints(points: readonly OutputPoint[]): readonly OutputPoi
   return points;
 }
 
-/** The largest test current of a list, or undefined for an empty or missing list. */
-export function largestTestCurrent(points: readonly OutputPoint[] | undefined): number | undefined {
+/**
+ * The rows guaranteed at supply `vdd`, sorted by test current: a row with a `vddMin` (a
+ * datasheet's column tabulated from that supply up) counts only from there (1e-9 relative slack).
+ */
+export function rowsAt(points: readonly OutputPoint[], vdd: number): readonly OutputPoint[] {
+  const sorted = sortedPoints(points);
+  if (!sorted.some((p) => p.vddMin !== undefined)) return sorted;
+  return sorted.filter((p) => p.vddMin === undefined || !exceeds(p.vddMin, vdd));
+}
+
+/**
+ * The largest test current of a list, or undefined for an empty or missing list; with `vdd`,
+ * of the rows guaranteed at that supply (a driver's is taken at its rail's lowest voltage).
+ */
+export function largestTestCurrent(points: readonly OutputPoint[] | undefined, vdd?: number): number | undefined {
   if (points === undefined || points.length === 0) return undefined;
-  let m = points[0]!.i;
-  for (const p of points) if (p.i > m) m = p.i;
+  const rows = vdd === undefined ? points : rowsAt(points, vdd);
+  if (rows.length === 0) return undefined;
+  let m = rows[0]!.i;
+  for (const p of rows) if (p.i > m) m = p.i;
   return m;
 }
 
@@ -40,7 +55,9 @@ export function largestTestCurrent(points: readonly OutputPoint[] | undefined): 
  * (VOL · I/I_row for a low level, VDD − (VDD − VOH) · I/I_row for a high one), or that point's
  * level when its test current is 0 A (no line can be drawn). The line stops at the output's own rails, 0 V for a high level and `vdd` for a low
  * one (an output stage cannot swing beyond its supply: common practice), so that test points
- * a hair apart never extrapolate to astronomical or infinite volts. Undefined for an empty list.
+ * a hair apart never extrapolate to astronomical or infinite volts. Rows with a `vddMin` above
+ * `vdd` do not count; when none counts, all are read and the level is an estimate. Undefined for
+ * an empty list.
  */
 export function outputLevel(
   points: readonly OutputPoint[] | undefined,
@@ -49,9 +66,11 @@ export function outputLevel(
   sense: 'high' | 'low',
 ): OutputLevel | undefined {
   if (points === undefined || points.length === 0) return undefined;
-  const sorted = sortedPoints(points);
+  const guaranteed = rowsAt(points, vdd);
+  // No row holds at this supply: the rows are read all the same, and every level is an estimate.
+  const sorted = guaranteed.length > 0 ? guaranteed : sortedPoints(points);
   for (const p of sorted) {
-    if (!exceeds(load, p.i)) return { v: levelAt(p.v, vdd), atCurrent: p.i, estimate: false };
+    if (!exceeds(load, p.i)) return { v: levelAt(p.v, vdd), atCurrent: p.i, estimate: guaranteed.length === 0 };
   }
   const last = sorted[sorted.length - 1]!;
   const vLast = levelAt(last.v, vdd);

@@ -72,7 +72,11 @@ export const LevelSchema = z
 const OutputPointSchema = z.strictObject({
   v: LevelSchema,
   i: nonNegative('current (A)'),
-}).meta({ id: 'OutputPoint', description: 'A guaranteed output level v (Level) at a load current i (A, magnitude)' });
+  vddMin: z.number().optional(),
+}).meta({
+  id: 'OutputPoint',
+  description: 'A guaranteed output level v (Level) at a load current i (A, magnitude), from the supply vddMin (V) up when given',
+});
 
 const VddRangeSchema = z
   .tuple([z.number(), z.number()])

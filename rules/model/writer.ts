@@ -14,7 +14,7 @@ export interface KeyOrder {
 
 const leaf = (...keys: string[]): KeyOrder => ({ keys });
 
-const LEVEL_POINT = leaf('v', 'i');
+const LEVEL_POINT = leaf('v', 'i', 'vddMin');
 const PARAMS: KeyOrder = {
   keys: ['vih', 'vil', 'schmitt', 'iih', 'iil', 'cin', 'viMax', 'unpoweredSafe', 'viMaxOff', 'voh', 'vol', 'ioMax', 'maxInputRamp', 'vddRange'],
   children: { schmitt: leaf('vtPlus', 'vtMinus'), voh: LEVEL_POINT, vol: LEVEL_POINT },

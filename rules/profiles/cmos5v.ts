@@ -2,32 +2,40 @@
  * 5 V CMOS logic: 74HC/HCT, 74AC/ACT, 74AHC/AHCT.
  *
  * Output rows tabulated at 4.5 V only are carried up the supply as `VDD-(4.5-v)` for VOH and
- * `v` for VOL: conservative above 4.5 V, because outputs get stronger with supply. Hence each
- * `vddRange` starts at 4.5 V; a part run lower gets a rail-range warning.
+ * `v` for VOL: conservative above 4.5 V, because outputs get stronger with supply. 74HC covers
+ * its whole 2–6 V with rows that hold from a supply up (`vddMin`); the others' `vddRange`
+ * starts at 4.5 V, and a part run lower gets a rail-range warning.
  */
 import { defineProfile } from './define.ts';
 
-/** 74HC: CMOS inputs, JESD7. */
+/**
+ * 74HC: CMOS inputs, JESD7, over the family's whole 2–6 V. The datasheet's test points: 20 µA
+ * rows at 2, 4.5 and 6 V; the 4 mA rows from 4.5 V and the 5.2 mA rows at 6 V only (`vddMin`),
+ * so that a 74HC on 3.3 V is judged by what is guaranteed there, the 20 µA rows.
+ */
 export const hc = defineProfile({
   id: '74hc',
-  label: '74HC CMOS (JESD7)',
+  label: '74HC CMOS (JESD7), 2–6 V',
   source:
-    "JESD7 as restated in parts' DC tables; thresholds as the conservative lines 0.675·VDD+0.15 / 0.325·VDD−0.15; " +
-    '4 mA rows at 4.5 V (−40…85 °C) carried up as VDD−0.66 / 0.33 V; clamp diodes: VDD+0.5 (common practice); ' +
-    'all rows −40…85 °C',
+    "JESD7 (JESD7A test points) as restated in parts' DC tables, 2–6 V; thresholds as the conservative lines " +
+    '0.675·VDD+0.15 / 0.325·VDD−0.15 (exact at 2 and 6 V); 20 µA rows VDD−0.1 / 0.1 V at every supply; 4 mA rows ' +
+    'from 4.5 V (3.84 V / 0.33 V at 4.5 V, carried up as VDD−0.66 / 0.33 V) and 5.2 mA rows at 6 V (5.34 V / ' +
+    '0.33 V); clamp diodes: VDD+0.5 (common practice); all rows −40…85 °C',
   params: {
-    vddRange: [4.5, 6], // 4.5 V: the lowest supply of the 4 mA rows (JESD7, restated); 6 V: family maximum (restated)
+    vddRange: [2, 6], // JESD7 restated: the family's supply range, with test points at 2, 4.5 and 6 V
     // JESD7 restated: 1.5 V @ 2 V, 3.15 @ 4.5, 3.85 @ 5.5, 4.2 @ 6. The line is exact at 2 and 6 V and above the table between.
     vih: '0.675*VDD+0.15',
     // JESD7 restated: 0.5 V @ 2 V, 1.35 @ 4.5, 1.8 @ 6. The line is exact at 2 and 6 V and below the table between.
     vil: '0.325*VDD-0.15',
     voh: [
-      { v: 'VDD-0.1', i: 20e-6 }, // JESD7 restated
-      { v: 'VDD-0.66', i: 4e-3 }, // JESD7 restated: 3.84 V @ 4 mA at 4.5 V, −40…85 °C
+      { v: 'VDD-0.1', i: 20e-6 }, // JESD7 restated: 1.9 / 4.4 / 5.9 V at 2 / 4.5 / 6 V
+      { v: 'VDD-0.66', i: 4e-3, vddMin: 4.5 }, // JESD7 restated: 3.84 V @ 4 mA at 4.5 V, −40…85 °C
+      { v: 'VDD-0.66', i: 5.2e-3, vddMin: 6 }, // JESD7 restated: 5.34 V @ 5.2 mA at 6 V, −40…85 °C
     ],
     vol: [
-      { v: 0.1, i: 20e-6 }, // JESD7 restated
-      { v: 0.33, i: 4e-3 }, // JESD7 restated: 4 mA at 4.5 V, −40…85 °C
+      { v: 0.1, i: 20e-6 }, // JESD7 restated: at 2, 4.5 and 6 V
+      { v: 0.33, i: 4e-3, vddMin: 4.5 }, // JESD7 restated: 4 mA at 4.5 V, −40…85 °C
+      { v: 0.33, i: 5.2e-3, vddMin: 6 }, // JESD7 restated: 5.2 mA at 6 V, −40…85 °C
     ],
     iih: 1e-6, // JESD7 restated: ±1 µA
     iil: 1e-6, // JESD7 restated: ±1 µA

@@ -49,9 +49,10 @@ const TABLE: Record<string, Params> = {
     vddRange: [4.75, 5.25], vol: [{ v: 0.5, i: 8 * mA }], iih: 100 * µA, viMax: 5.5,
   },
   '74hc': {
-    vddRange: [4.5, 6], vih: '0.675*VDD+0.15', vil: '0.325*VDD-0.15',
-    voh: [{ v: 'VDD-0.1', i: 20 * µA }, { v: 'VDD-0.66', i: 4 * mA }],
-    vol: [{ v: 0.1, i: 20 * µA }, { v: 0.33, i: 4 * mA }],
+    // issue 16: the whole 2–6 V of JESD7 (as restated), each heavier row from the supply it is tabulated at
+    vddRange: [2, 6], vih: '0.675*VDD+0.15', vil: '0.325*VDD-0.15',
+    voh: [{ v: 'VDD-0.1', i: 20 * µA }, { v: 'VDD-0.66', i: 4 * mA, vddMin: 4.5 }, { v: 'VDD-0.66', i: 5.2 * mA, vddMin: 6 }],
+    vol: [{ v: 0.1, i: 20 * µA }, { v: 0.33, i: 4 * mA, vddMin: 4.5 }, { v: 0.33, i: 5.2 * mA, vddMin: 6 }],
     iih: 1 * µA, iil: 1 * µA, cin: 10e-12, viMax: 'VDD+0.5',
   },
   '74hct': {

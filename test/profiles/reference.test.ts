@@ -6,6 +6,7 @@
 import { describe, expect, it } from 'vitest';
 import type { OutputPoint, Profile } from '../../rules/model/schema.ts';
 import { levelAt, type Level } from '../../rules/levels/level.ts';
+import { largestTestCurrent, outputLevel } from '../../rules/levels/output.ts';
 import { BUILTIN_PROFILES, builtinProfile } from '../../rules/profiles/index.ts';
 
 const TOL = 1e-9;
@@ -358,5 +359,39 @@ describe('issue 16: the profiles\' added rows and families', () => {
   ] as const)('the translator profile %s says which class it models', (id, pattern) => {
     expect(profile(id).source).toMatch(pattern);
     expect(profile(id).label).toMatch(pattern);
+  });
+});
+
+describe('74HC over its whole 2–6 V: JESD7 (JESD7A test points), as restated in parts\' DC tables', () => {
+  const hc = () => profile('74hc').params;
+  it.each([
+    // [supply, load, sense, level, guaranteed]
+    [2.0, 20 * µA, 'high', 1.9, true], // 1.9 V @ 20 µA at 2 V
+    [2.0, 20 * µA, 'low', 0.1, true],
+    [3.3, 20 * µA, 'high', 3.2, true], // the 20 µA row holds at every supply
+    [4.5, 4 * mA, 'high', 3.84, true], // 3.84 V @ 4 mA at 4.5 V, −40…85 °C
+    [4.5, 4 * mA, 'low', 0.33, true],
+    [6.0, 5.2 * mA, 'high', 5.34, true], // 5.34 V @ 5.2 mA at 6 V, −40…85 °C
+    [6.0, 5.2 * mA, 'low', 0.33, true],
+  ] as const)('at %s V, %s A %s: %s V', (vdd, load, sense, level, guaranteed) => {
+    const r = outputLevel(sense === 'high' ? hc().voh : hc().vol, load, vdd, sense)!;
+    expect(Math.abs(r.v - level)).toBeLessThanOrEqual(TOL);
+    expect(r.estimate).toBe(!guaranteed);
+  });
+
+  it('at 3.3 V a 1 mA load is beyond what is tabulated there (the 4 mA row starts at 4.5 V)', () => {
+    expect(largestTestCurrent(hc().voh, 3.3)).toBeCloseTo(20 * µA, 12);
+    expect(largestTestCurrent(hc().vol, 3.3)).toBeCloseTo(20 * µA, 12);
+    expect(outputLevel(hc().vol, 1 * mA, 3.3, 'low')!.estimate).toBe(true);
+    expect(largestTestCurrent(hc().vol, 5.0)).toBeCloseTo(4 * mA, 12);
+  });
+
+  it.each([[2, 1.5, 0.5], [6, 4.2, 1.8]])('at %s V the threshold lines are exact: VIH %s V, VIL %s V', (vdd, vih, vil) => {
+    expect(Math.abs(input('74hc', 'vih', vdd) - vih)).toBeLessThanOrEqual(TOL);
+    expect(Math.abs(input('74hc', 'vil', vdd) - vil)).toBeLessThanOrEqual(TOL);
+  });
+
+  it('covers 2–6 V', () => {
+    expect(hc().vddRange).toEqual([2, 6]);
   });
 });

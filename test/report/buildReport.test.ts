@@ -42,7 +42,7 @@ function crossingDesign(extra: { downWaivers?: Waiver[]; minMargin?: number } = 
       part('M', '3v3', 'mcu-gpio', [output('OUT'), input('IN'), output('S'), output('P'), input('I2')]),
       part('H', '5v0', '74hct', [input('A'), output('Y'), input('B')]),
       part('L', '3v3', 'mcu-gpio', [input('B'), input('C')]),
-      part('Q', '3v3', '74hc', [input('D')]),
+      part('Q', '3v3', '74hct', [input('D')]), // 74HCT: 4.5–5.5 V (JESD7), so rail-range warns
     ],
     nets,
   });
