@@ -15,6 +15,7 @@ import missingPull from './missing-pull.ts';
 import pullRange from './pull-range.ts';
 import railRange from './rail-range.ts';
 import railCrossing from './rail-crossing.ts';
+import interfacePower from './interface-power.ts';
 
 export const RULES: readonly AnyRule[] = [
   levelHigh,
@@ -29,4 +30,5 @@ export const RULES: readonly AnyRule[] = [
   pullRange,
   railRange,
   railCrossing,
+  interfacePower,
 ];

@@ -97,6 +97,8 @@ export const ParamsSchema = z.strictObject({
   ioMax: nonNegative('current (A)').optional(),
   maxInputRamp: nonNegative('ramp (s/V)').optional(),
   vddRange: VddRangeSchema.optional(),
+  deltaIcc: nonNegative('current (A)').optional(),
+  deltaIccDrop: nonNegative('voltage (V)').optional(),
 }).meta({ id: 'Params', description: 'Electrical parameters of a pin; each key is resolved on its own: pin params, part params, profile' });
 
 export const PullSchema = z.strictObject({

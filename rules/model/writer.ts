@@ -16,7 +16,7 @@ const leaf = (...keys: string[]): KeyOrder => ({ keys });
 
 const LEVEL_POINT = leaf('v', 'i', 'vddMin');
 const PARAMS: KeyOrder = {
-  keys: ['vih', 'vil', 'schmitt', 'iih', 'iil', 'cin', 'viMax', 'unpoweredSafe', 'viMaxOff', 'voh', 'vol', 'ioMax', 'maxInputRamp', 'vddRange'],
+  keys: ['vih', 'vil', 'schmitt', 'iih', 'iil', 'cin', 'viMax', 'unpoweredSafe', 'viMaxOff', 'voh', 'vol', 'ioMax', 'maxInputRamp', 'vddRange', 'deltaIcc', 'deltaIccDrop'],
   children: { schmitt: leaf('vtPlus', 'vtMinus'), voh: LEVEL_POINT, vol: LEVEL_POINT },
 };
 const PULL = leaf('to', 'ohms', 'tolerance', 'min', 'max');

@@ -50,7 +50,7 @@ export const hct = defineProfile({
   label: '74HCT CMOS, TTL inputs (JESD7)',
   source:
     "JESD7 as restated in parts' DC tables; outputs as 74HC (4 mA rows at 4.5 V); clamp diodes: VDD+0.5 (common practice); " +
-    'all rows −40…85 °C',
+    'ΔICC 0.5 mA per input at VCC − 2.1 V from memory; all rows −40…85 °C',
   params: {
     vddRange: [4.5, 5.5], // JESD7 restated
     vih: 2, // JESD7 restated
@@ -66,6 +66,8 @@ export const hct = defineProfile({
     iih: 1e-6, // JESD7 restated: ±1 µA
     iil: 1e-6, // JESD7 restated: ±1 µA
     cin: 10e-12, // JESD7 restated: 10 pF
+    deltaIcc: 0.5e-3, // from memory: ΔICC per input about 0.5 mA (−40…85 °C)
+    deltaIccDrop: 2.1, // from memory: ΔICC is tabulated with the input at VCC − 2.1 V
     viMax: 'VDD+0.5', // common practice: clamp diode to VCC
   },
 });
@@ -116,6 +118,8 @@ export const act = defineProfile({
     iih: 1e-6, // from memory: ±1 µA
     iil: 1e-6, // from memory: ±1 µA
     cin: 10e-12, // from memory: 10 pF, the usual maximum of the family's tables
+    deltaIcc: 1.5e-3, // from memory: ΔICC per input 1.5 mA (−40…85 °C)
+    deltaIccDrop: 2.1, // from memory: ΔICC is tabulated with the input at VCC − 2.1 V
     viMax: 'VDD+0.5', // common practice: clamp diode to VCC
   },
 });
@@ -175,6 +179,8 @@ export const ahct = defineProfile({
     iih: 1e-6, // from memory: ±1 µA
     iil: 1e-6, // from memory: ±1 µA
     cin: 10e-12, // from memory: 10 pF, the usual maximum of the family's tables
+    deltaIcc: 1.5e-3, // from memory: ΔICC per input 1.35–1.5 mA, 1.5 mA taken (−40…85 °C)
+    deltaIccDrop: 2.1, // from memory: ΔICC is tabulated with the input at VCC − 2.1 V
     viMax: 5.5, // restated in parts' DC tables: inputs tolerate 5.5 V whatever VDD
   },
 });

@@ -35,7 +35,7 @@ const TABLE_ORDER: { name: string; order: KeyOrder | undefined; schema: z.ZodObj
     name: 'params',
     order: KEY_ORDER.params,
     schema: ParamsSchema,
-    keys: ['vih', 'vil', 'schmitt', 'iih', 'iil', 'cin', 'viMax', 'unpoweredSafe', 'viMaxOff', 'voh', 'vol', 'ioMax', 'maxInputRamp', 'vddRange'],
+    keys: ['vih', 'vil', 'schmitt', 'iih', 'iil', 'cin', 'viMax', 'unpoweredSafe', 'viMaxOff', 'voh', 'vol', 'ioMax', 'maxInputRamp', 'vddRange', 'deltaIcc', 'deltaIccDrop'],
   },
   { name: 'pull', order: KEY_ORDER.design.children.nets.children.pull, schema: PullSchema, keys: ['to', 'ohms', 'tolerance', 'min', 'max'] },
   { name: 'net', order: KEY_ORDER.design.children.nets, schema: NetSchema, keys: ['id', 'label', 'pins', 'pull', 'wiringCapacitance', 'maxRiseTime', 'waivers', 'route'] },

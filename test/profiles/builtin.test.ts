@@ -59,7 +59,7 @@ const TABLE: Record<string, Params> = {
     vddRange: [4.5, 5.5], vih: 2, vil: 0.8,
     voh: [{ v: 'VDD-0.1', i: 20 * µA }, { v: 'VDD-0.66', i: 4 * mA }],
     vol: [{ v: 0.1, i: 20 * µA }, { v: 0.33, i: 4 * mA }],
-    iih: 1 * µA, iil: 1 * µA, cin: 10e-12, viMax: 'VDD+0.5',
+    iih: 1 * µA, iil: 1 * µA, cin: 10e-12, deltaIcc: 0.5 * mA, deltaIccDrop: 2.1, viMax: 'VDD+0.5',
   },
   '74ac': {
     vddRange: [4.5, 6], vih: '0.7*VDD', vil: '0.3*VDD',
@@ -71,7 +71,7 @@ const TABLE: Record<string, Params> = {
     vddRange: [4.5, 5.5], vih: 2, vil: 0.8,
     voh: [{ v: 'VDD-0.1', i: 50 * µA }, { v: 'VDD-0.74', i: 24 * mA }],
     vol: [{ v: 0.1, i: 50 * µA }, { v: 0.44, i: 24 * mA }],
-    iih: 1 * µA, iil: 1 * µA, cin: 10e-12, viMax: 'VDD+0.5', // cin from memory (issue 16)
+    iih: 1 * µA, iil: 1 * µA, cin: 10e-12, deltaIcc: 1.5 * mA, deltaIccDrop: 2.1, viMax: 'VDD+0.5', // cin from memory (issue 16)
   },
   '74ahc': {
     vddRange: [4.5, 5.5], vih: '0.7*VDD', vil: '0.3*VDD',
@@ -85,7 +85,7 @@ const TABLE: Record<string, Params> = {
     // VOH at 8 mA: VDD − 0.70, the −40…85 °C figure of a family datasheet's DC table (issue 16's review)
     voh: [{ v: 'VDD-0.1', i: 50 * µA }, { v: 'VDD-0.7', i: 8 * mA }],
     vol: [{ v: 0.1, i: 50 * µA }, { v: 0.44, i: 8 * mA }],
-    iih: 1 * µA, iil: 1 * µA, cin: 10e-12, viMax: 5.5, // cin from memory
+    iih: 1 * µA, iil: 1 * µA, cin: 10e-12, deltaIcc: 1.5 * mA, deltaIccDrop: 2.1, viMax: 5.5, // cin from memory
   },
   '74lvc': {
     vddRange: [2.7, 3.6], vih: 2, vil: 0.8,
