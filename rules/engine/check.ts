@@ -60,7 +60,7 @@ interface StateContext extends PrepareContext {
  * is off sees exactly what it sees in `all-on`: its result there is re-stamped for this state.
  */
 function checkNet(ctx: StateContext, net: Net, allOn?: NetResult): NetResult {
-  if (allOn !== undefined && allOn.net === net && ctx.state.id !== ALL_ON && !touchesOff(allOn, ctx.state)) {
+  if (allOn !== undefined && allOn.net === net && ctx.state.id !== ALL_ON && !touchesOff(allOn, ctx.state) && !setsPins(net, ctx.state)) {
     return {
       net,
       view: { ...allOn.view, state: ctx.state },
@@ -74,6 +74,13 @@ function checkNet(ctx: StateContext, net: Net, allOn?: NetResult): NetResult {
     rule.checkNet(view, (draft) => findings.push(completeFinding(rule, draft, ctx.state, net)));
   }
   return { net, view, findings };
+}
+
+/** Whether the state gives a pin of the net another role, drive or pull. */
+function setsPins(net: Net, state: PowerState): boolean {
+  if (state.pins.size === 0) return false;
+  for (const key of net.pins) if (state.pins.has(key)) return true;
+  return false;
 }
 
 function touchesOff(r: NetResult, state: PowerState): boolean {
@@ -127,13 +134,13 @@ function checkState(ctx: StateContext, index: DesignIndex, t: Tables): void {
   const off = ctx.state.off;
   for (const key of index.lone) {
     const at = index.pins.get(key)!;
-    const asAllOn = allOnLone !== undefined && !off.has(at.rail) && (at.pullTo === undefined || !off.has(at.pullTo));
+    const asAllOn = allOnLone !== undefined && !off.has(at.rail) && (at.pullTo === undefined || !off.has(at.pullTo)) && !ctx.state.pins.has(key);
     const was = asAllOn ? allOnLone.get(key) : undefined;
     if (asAllOn && was === undefined) continue;
     // Re-stamped when each id is placed at the pin (`rule:PART.PIN:all-on…`), the place re-stamping writes.
     const found = was !== undefined && was.every((f) => f.id.startsWith(`${f.rule}:${key}:${ALL_ON}`))
       ? was.map((f) => restampFinding(f, ALL_ON, ctx.state, key, null))
-      : checkLonePin(ctx, pinView(at, ctx.rails));
+      : checkLonePin(ctx, pinView(at, ctx.rails, ctx.state));
     if (found.length > 0) {
       lone.set(key, found);
       count(t.summary, found, 1);
@@ -249,6 +256,8 @@ function incrementalCheck(design: Design, prev: CheckResult, inner: Internals, s
     const id = (now ?? old)!.id;
     for (const g of index.groupsOfRail.get(id) ?? []) dirty.groups.add(g);
     index.touchingRail(id, dirty.nets, dirty.lone);
+    // A pin that a power state pulls to this rail depends on it too.
+    for (const sc of design.scenarios ?? []) for (const p of sc.pins ?? []) if (p.pull?.to === id) dirty.pins.add(p.pin);
   });
 
   // Design-local profiles: every pin that uses a changed id.
@@ -357,7 +366,7 @@ function incrementalCheck(design: Design, prev: CheckResult, inner: Internals, s
         if (old !== undefined) { count(t.summary, old, -1); lone.delete(key); }
         const at = index.pins.get(key);
         if (at === undefined || index.netOfPin.has(key)) continue;
-        const found = checkLonePin(ctx, pinView(at, rails));
+        const found = checkLonePin(ctx, pinView(at, rails, state));
         if (found.length > 0) { lone.set(key, found); count(t.summary, found, 1); }
       }
     }

@@ -2,7 +2,7 @@
  * Preparing a net once per power state: its pins resolved, drivers and receivers by kind, pulls,
  * capacitance, load currents and the level analysis. Every rule reads this one view.
  */
-import type { Design, Net, Pull } from '../model/schema.ts';
+import type { Design, Net, PinState, Pull } from '../model/schema.ts';
 import { pullEnds } from '../model/pullRange.ts';
 import { analyseNet } from './analyse.ts';
 import { driverLoad } from './netMath.ts';
@@ -15,9 +15,21 @@ import type { DriverLoad, EffectiveSettings, NetView, PinView, PowerState, PullS
 /** Where each `PART.PIN` of the design lives, with its resolution (the engine's index). */
 export type PinIndex = ReadonlyMap<string, PinEntry>;
 
-/** A pin in a power state: powered unless its rail is off (or unknown to the design). */
-export function pinView(at: PinEntry, rails: RailStates): PinView {
-  return viewOf(at.resolution, !rails.off.has(at.rail) && rails.ranges.has(at.rail));
+/**
+ * A pin in a power state: powered unless its rail is off (or unknown to the design), with the
+ * role, drive and internal pull the state gives it (a controller's pins at reset).
+ */
+export function pinView(at: PinEntry, rails: RailStates, state?: PowerState): PinView {
+  const view = viewOf(at.resolution, !rails.off.has(at.rail) && rails.ranges.has(at.rail));
+  const set = state?.pins.get(view.key);
+  return set === undefined ? view : withState(view, set);
+}
+
+function withState(view: PinView, set: PinState): PinView {
+  const role = set.role ?? view.role;
+  const drive = role === 'input' ? undefined : set.drive ?? (set.role === undefined ? view.drive : view.pin.drive ?? (role === 'output' ? 'push-pull' : 'three-state'));
+  const pull = set.pull === undefined ? view.pull : set.pull === null ? undefined : set.pull;
+  return { ...view, role, drive, pull };
 }
 
 export interface PrepareContext {
@@ -39,7 +51,7 @@ export function prepareNet(ctx: PrepareContext, net: Net): NetView {
   const pins: PinView[] = [];
   for (const key of net.pins) {
     const at = ctx.pinIndex.get(key);
-    if (at !== undefined) pins.push(pinView(at, ctx.rails));
+    if (at !== undefined) pins.push(pinView(at, ctx.rails, ctx.state));
   }
   const drivers = pins.filter((p) => p.powered && p.role !== 'input');
   const receivers = pins.filter((p) => p.powered && p.role !== 'output');

@@ -2,7 +2,7 @@
  * The engine's prepared views and results. Everything here lives outside the design document:
  * the document stays plain (architecture.md, "The engine's contract").
  */
-import type { Design, Net, Params, Pin, PinDrive, PinRole, Profile, Pull, Rail, Scenario, Waiver } from '../model/schema.ts';
+import type { Design, Net, Params, Pin, PinDrive, PinRole, PinState, Profile, Pull, Rail, Scenario, Waiver } from '../model/schema.ts';
 import type { RuleId } from '../model/ruleIds.ts';
 import type { Range } from '../levels/rails.ts';
 
@@ -33,6 +33,8 @@ export interface PowerState {
   readonly id: string;
   readonly label: string;
   readonly off: ReadonlySet<string>;
+  /** Pins whose role, drive or internal pull differ in this state, by `PART.PIN`. */
+  readonly pins: ReadonlyMap<string, PinState>;
   readonly scenario: Scenario | undefined;
 }
 

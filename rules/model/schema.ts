@@ -126,13 +126,25 @@ export const RailSchema = z.strictObject({
   colour: z.string().optional(),
 }).meta({ id: 'Rail', description: 'A supply domain; range nominal × (1 ± tolerance), an explicit min or max wins for its end' });
 
+/**
+ * A pin's state in a power state before firmware runs: its role, drive and internal pull there
+ * (`pull: null` for none), each key given replacing the pin's own.
+ */
+export const PinStateSchema = z.strictObject({
+  pin: z.string().min(1, { message: 'expected a pin written PART.PIN' }),
+  role: z.enum(['input', 'output', 'bidir']).optional(),
+  drive: z.enum(['push-pull', 'three-state', 'open-drain']).optional(),
+  pull: PullSchema.nullable().optional(),
+}).meta({ id: 'PinState', description: 'A pin\'s role, drive and internal pull in one power state (e.g. GPIO pins as inputs at reset)' });
+
 export const ScenarioSchema = z.strictObject({
   id: id('scenario', true).refine((s) => s !== 'all-on', {
     message: 'expected a scenario id other than "all-on" (reserved for the state with every rail on)',
   }),
   label: z.string(),
   off: z.array(z.string()),
-}).meta({ id: 'Scenario', description: 'A power state: the rails listed in off are at 0 V' });
+  pins: z.array(PinStateSchema).optional(),
+}).meta({ id: 'Scenario', description: 'A power state: the rails listed in off are at 0 V; pins may take another role, drive or pull there' });
 
 export const ProfileSchema = z.strictObject({
   id: id('profile', true),
@@ -207,6 +219,7 @@ export type Net = z.infer<typeof NetSchema>;
 export type Params = z.infer<typeof ParamsSchema>;
 export type Pull = z.infer<typeof PullSchema>;
 export type Waiver = z.infer<typeof WaiverSchema>;
+export type PinState = z.infer<typeof PinStateSchema>;
 export type OutputPoint = z.infer<typeof OutputPointSchema>;
 export type Settings = z.infer<typeof SettingsSchema>;
 export type PinRole = Pin['role'];

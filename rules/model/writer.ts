@@ -28,7 +28,7 @@ export const KEY_ORDER = {
     children: {
       settings: leaf('minMargin', 'defaultWiringCapacitance'),
       rails: leaf('id', 'label', 'nominal', 'tolerance', 'min', 'max', 'colour'),
-      scenarios: leaf('id', 'label', 'off'),
+      scenarios: { keys: ['id', 'label', 'off', 'pins'], children: { pins: { keys: ['pin', 'role', 'drive', 'pull'], children: { pull: PULL } } } },
       profiles: { keys: ['id', 'label', 'source', 'params'], children: { params: PARAMS } },
       parts: {
         keys: ['id', 'label', 'rail', 'profile', 'params', 'position', 'pins'],

@@ -28,7 +28,7 @@ const TABLE_ORDER: { name: string; order: KeyOrder | undefined; schema: z.ZodObj
   { name: 'top level', order: KEY_ORDER.design, schema: DesignSchema, keys: ['format', 'version', 'title', 'settings', 'rails', 'scenarios', 'profiles', 'parts', 'nets'] },
   { name: 'settings', order: KEY_ORDER.design.children.settings, schema: SettingsSchema, keys: ['minMargin', 'defaultWiringCapacitance'] },
   { name: 'rail', order: KEY_ORDER.design.children.rails, schema: RailSchema, keys: ['id', 'label', 'nominal', 'tolerance', 'min', 'max', 'colour'] },
-  { name: 'scenario', order: KEY_ORDER.design.children.scenarios, schema: ScenarioSchema, keys: ['id', 'label', 'off'] },
+  { name: 'scenario', order: KEY_ORDER.design.children.scenarios, schema: ScenarioSchema, keys: ['id', 'label', 'off', 'pins'] },
   { name: 'part', order: KEY_ORDER.design.children.parts, schema: PartSchema, keys: ['id', 'label', 'rail', 'profile', 'params', 'position', 'pins'] },
   { name: 'pin', order: KEY_ORDER.design.children.parts.children.pins, schema: PinSchema, keys: ['id', 'role', 'drive', 'rail', 'profile', 'params', 'pull', 'side'] },
   {
