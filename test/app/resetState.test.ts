@@ -16,12 +16,15 @@ describe('reset state of a part', () => {
     const reset = h.design.scenarios?.find((s) => s.id === 'reset');
     expect(reset?.off).toEqual([]);
     const outputs = start.parts.find((p) => p.id === 'U1')!.pins.filter((p) => p.role !== 'input').map((p) => `U1.${p.id}`);
-    expect(reset?.pins?.map((p) => p.pin)).toEqual(outputs);
+    // The example's reset state already sets VALVE_EN and PUMP_EN (the latter with its 40 kΩ
+    // pull-down): they stay as they are, the controller's other outputs join them.
+    expect(new Set(reset?.pins?.map((p) => p.pin))).toEqual(new Set(outputs));
     expect(reset?.pins?.every((p) => p.role === 'input')).toBe(true);
+    expect(reset?.pins?.find((p) => p.pin === 'U1.PUMP_EN')?.pull).toEqual({ to: 'ground', ohms: 40e3 });
     const valid = validateDesign(h.design);
     expect(valid.ok ? [] : valid.errors).toEqual([]);
-    // The valve driver's enable (VALVE_EN) floats while the controller boots: an error there only.
-    const floating = h.store.getState().result.findings.filter((f) => f.rule === 'floating-input' && f.net === 'VALVE_EN');
+    // The display's receive line floats while the controller boots: an error there only.
+    const floating = h.store.getState().result.findings.filter((f) => f.rule === 'floating-input' && f.net === 'DISP_TX');
     expect(floating.map((f) => `${f.scenario}/${f.severity}`)).toContain('reset/error');
     expect(floating.some((f) => f.scenario === 'all-on')).toBe(false);
     // A second click adds nothing.

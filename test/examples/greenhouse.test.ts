@@ -70,6 +70,9 @@ const plantedErrors: Planted[] = [
   },
   // The two boards' sleep inputs are joined, but no output was ever put on the line.
   { id: 'floating-input:SLEEP:all-on', values: { pins: ['U3.SLEEP', 'U4.SLEEP'] } },
+  // At reset the controller's VALVE_EN pin is an input until firmware runs: nothing drives the
+  // valve driver's enable and nothing pulls it, so it floats exactly while the board boots.
+  { id: 'floating-input:VALVE_EN:reset', values: { pins: ['U1.VALVE_EN', 'U3.EN'] } },
   // The tank float switch only pulls low and nothing pulls the line up.
   { id: 'missing-pull:TANK_LOW:all-on', values: { drivers: ['J3.SW'] } },
   // The flow meter's line has only the controller's internal 40 kΩ pull-up, far above what its
@@ -127,6 +130,21 @@ const errorsAgainInStandby: readonly string[] = [
 const warningsAgainInStandby: readonly string[] = ['edge-rate:FLOW:all-on'];
 const inStandby = (id: string) => id.replace(':all-on', ':standby');
 
+/**
+ * Reset (every rail on, the controller's VALVE_EN and PUMP_EN pins inputs until firmware runs):
+ * every all-on fault is found again with the same numbers, except the two those pins caused as
+ * outputs: no level-high on VALVE_EN (nothing drives it) and no contention on PUMP_EN (only the
+ * override panel drives it, against the controller's 40 kΩ pull-down).
+ */
+const notAtReset = new Set(['level-high:VALVE_EN:all-on:U1.VALVE_EN>U3.EN', 'contention:PUMP_EN:all-on']);
+const errorsAgainAtReset: readonly string[] = [
+  ...errorsAgainInStandby.filter((id) => !notAtReset.has(id)),
+  'overvoltage:SDA:all-on:U2.SDA',
+  'overvoltage:SCL:all-on:U2.SCL',
+];
+const warningsAgainAtReset: readonly string[] = ['edge-rate:FLOW:all-on'];
+const atReset = (id: string) => id.replace(':all-on', ':reset');
+
 function expectClose(actual: unknown, expected: Expected, label: string): void {
   if (typeof expected !== 'number') {
     expect(actual, label).toEqual(expected);
@@ -147,12 +165,12 @@ describe('greenhouse irrigation controller example', () => {
   const ids = (severity: string) =>
     result.findings.filter((f) => f.severity === severity && f.waived === undefined).map((f) => f.id).sort();
   it('has exactly the planted faults at error level', () => {
-    const expected = [...plantedErrors.map((p) => p.id), ...errorsAgainInStandby.map(inStandby)];
+    const expected = [...plantedErrors.map((p) => p.id), ...errorsAgainInStandby.map(inStandby), ...errorsAgainAtReset.map(atReset)];
     expect(ids('error')).toEqual(expected.sort());
   });
 
   it('has exactly the planted warnings', () => {
-    const expected = [...plantedWarnings.map((p) => p.id), ...warningsAgainInStandby.map(inStandby)];
+    const expected = [...plantedWarnings.map((p) => p.id), ...warningsAgainInStandby.map(inStandby), ...warningsAgainAtReset.map(atReset)];
     expect(ids('warning')).toEqual(expected.sort());
   });
 
@@ -161,6 +179,14 @@ describe('greenhouse irrigation controller example', () => {
     expect(f, id).toBeDefined();
     for (const [k, v] of Object.entries(values)) expectClose(f!.values[k], v, `${id} ${k}`);
     expect(f!.message).toMatch(/\d/);
+  });
+
+  it.each([...errorsAgainAtReset, ...warningsAgainAtReset])('%s is found again at reset with the same numbers', (id) => {
+    const allOn = result.findings.find((f) => f.id === id);
+    const reset = result.findings.find((f) => f.id === atReset(id));
+    expect(reset, atReset(id)).toBeDefined();
+    expect(reset!.severity).toBe(allOn!.severity);
+    expect(reset!.values).toEqual(allOn!.values);
   });
 
   it.each([...errorsAgainInStandby, ...warningsAgainInStandby])('%s is found again in standby with the same numbers', (id) => {
@@ -202,8 +228,9 @@ describe('greenhouse irrigation controller example', () => {
     for (const [k, v] of Object.entries(values)) expectClose(f!.values[k], v as Expected, `${netId} ${k}`);
   });
 
-  it('has the standby scenario, and back-power finds the sensor fed through its bus pins there only', () => {
-    expect(design.scenarios).toEqual([{ id: 'standby', label: 'Standby: sensor rail off', off: ['1v8'] }]);
+  it('has the standby and reset scenarios, and back-power finds the sensor fed through its bus pins there only', () => {
+    expect(design.scenarios?.map((sc) => sc.id)).toEqual(['standby', 'reset']);
+    expect(design.scenarios?.[0]).toEqual({ id: 'standby', label: 'Standby: sensor rail off', off: ['1v8'] });
     const backPower = result.findings.filter((f) => f.rule === 'back-power');
     expect(backPower.map((f) => `${f.scenario} ${f.id}`).sort()).toEqual([
       'standby back-power:SCL:standby:U2.SCL',

@@ -49,6 +49,7 @@ describe('interface power per rail', () => {
     expect(report.interfacePower).toEqual([
       { scenario: 'all-on', rail: '5v0', current: 0.5e-3, pins: ['U4.RX'] },
       { scenario: 'standby', rail: '5v0', current: 0.5e-3, pins: ['U4.RX'] },
+      { scenario: 'reset', rail: '5v0', current: 0.5e-3, pins: ['U4.RX'] },
     ]);
     expect(renderText(report)).toMatch(/all-on\s+5v0\s+500 µA\s+U4\.RX/);
   });
