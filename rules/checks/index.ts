@@ -18,6 +18,7 @@ import missingPull from './missing-pull.ts';
 import pullRange from './pull-range.ts';
 import railRange from './rail-range.ts';
 import railCrossing from './rail-crossing.ts';
+import interfacePower from './interface-power.ts';
 
 const REGISTRY: { readonly [I in RuleId]: RuleOf<I> } = {
   'level-high': levelHigh,
@@ -32,6 +33,7 @@ const REGISTRY: { readonly [I in RuleId]: RuleOf<I> } = {
   'pull-range': pullRange,
   'rail-range': railRange,
   'rail-crossing': railCrossing,
+  'interface-power': interfacePower,
 };
 
 /** Every rule, in the catalogue's order. */

@@ -1,5 +1,5 @@
 /**
- * The twelve rule ids of the catalogue (rules-catalogue.md), in catalogue order. The design
+ * The rule ids of the catalogue (rules-catalogue.md, then `interface-power`), in catalogue order. The design
  * format needs them (a waiver names one, even of a rule not built yet); the check registry
  * must agree with this list (test/checks/registry.test.ts holds the two together).
  */
@@ -16,6 +16,7 @@ export const RULE_IDS = [
   'pull-range',
   'rail-range',
   'rail-crossing',
+  'interface-power',
 ] as const;
 
 export type RuleId = (typeof RULE_IDS)[number];

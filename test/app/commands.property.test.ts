@@ -11,7 +11,7 @@ import { exampleDesign } from '../../app/example.ts';
 import {
   addPowerState, addProfile, addRail, addWaiver, connectPins, deletePowerState, deleteProfile, deleteRail, deleteSelection,
   disconnectWire, moveParts, netWires, renamePart, setNetPull, setPartProfile, setPartRail, setProfileParam, setRailOff,
-  setRailTolerance, setRailVoltage, type Command,
+  setRailTolerance, setRailVoltage, setResetState, type Command,
 } from '../../app/store/commands/index.ts';
 import { applyFix, fixesFor } from '../../app/store/commands/fixes/index.ts';
 import { check } from '../../rules/engine/check.ts';
@@ -50,6 +50,7 @@ const STEPS: readonly [string, Step][] = [
   }],
   ['add power state', () => addPowerState()],
   ['rail off', (h, n, m) => { const s = nth(h.design.scenarios ?? [], n); const r = nth(h.design.rails, m); return s && r ? setRailOff(s.id, r.id, m % 3 !== 0) : undefined; }],
+  ['reset state', (h, n) => { const p = nth(h.design.parts, n); return p ? setResetState(p.id) : undefined; }],
   ['delete power state', (h, n) => { const s = nth(h.design.scenarios ?? [], n); return s ? deletePowerState(s.id) : undefined; }],
   ['net pull', (h, n, m) => {
     const net = nth(h.design.nets, n);

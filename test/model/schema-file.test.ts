@@ -21,7 +21,7 @@ describe('committed JSON Schema files', () => {
     expect(s.additionalProperties).toBe(false);
     expect(s.required).toEqual(['format', 'version', 'title', 'rails', 'parts', 'nets']);
     expect(Object.keys(s.$defs as object).sort()).toEqual(
-      ['Level', 'Net', 'OutputPoint', 'Params', 'Part', 'Pin', 'Profile', 'Pull', 'Rail', 'Scenario', 'Waiver'],
+      ['Level', 'Net', 'OutputPoint', 'Params', 'Part', 'Pin', 'PinState', 'Profile', 'Pull', 'Rail', 'Scenario', 'Waiver'],
     );
   });
 });

@@ -165,7 +165,7 @@ export function generateDesign(seed: number, options: GeneratorOptions): Design 
 
 export const EDIT_KINDS = [
   'add-part', 'remove-part', 'connect', 'disconnect', 'move-part', 'rail-voltage',
-  'switch-profile', 'add-waiver', 'rail-off', 'net-pull',
+  'switch-profile', 'add-waiver', 'rail-off', 'net-pull', 'pin-state',
 ] as const;
 export type EditKind = (typeof EDIT_KINDS)[number];
 
@@ -200,6 +200,7 @@ export function applyEdit(design: Design, kind: EditKind, r: Rand): Design {
         const k = Math.floor(r() * d.parts.length);
         const part = d.parts[k]!;
         for (const pin of part.pins) unplug(d, `${part.id}.${pin.id}`);
+        for (const sc of d.scenarios ?? []) if (sc.pins !== undefined) sc.pins = sc.pins.filter((p) => !p.pin.startsWith(`${part.id}.`));
         d.parts.splice(k, 1);
         return;
       }
@@ -248,6 +249,19 @@ export function applyEdit(design: Design, kind: EditKind, r: Rand): Design {
         if (scenario === undefined) return;
         const rail = pick(r, d.rails).id;
         scenario.off = scenario.off.includes(rail) ? scenario.off.filter((x) => x !== rail) : [...scenario.off, rail];
+        return;
+      }
+      case 'pin-state': {
+        // A pin made an input at reset, with or without a weak pull-down, or given back its own state.
+        const scenario = d.scenarios?.[0];
+        if (scenario === undefined || d.parts.length === 0) return;
+        const part = pick(r, d.parts);
+        if (part.pins.length === 0) return;
+        const key = `${part.id}.${pick(r, part.pins).id}`;
+        const pins = scenario.pins ?? [];
+        scenario.pins = pins.some((p) => p.pin === key)
+          ? pins.filter((p) => p.pin !== key)
+          : [...pins, r() < 0.5 ? { pin: key, role: 'input' } : { pin: key, role: 'input', pull: { to: 'ground', ohms: 40e3 } }];
         return;
       }
       case 'net-pull': {

@@ -107,6 +107,11 @@ export function removeParts(design: Draft<Design>, ids: readonly string[]): void
   const gone = new Set(ids);
   const isGone = (key: string) => gone.has(partOfPin(key));
   design.parts = design.parts.filter((p) => !gone.has(p.id));
+  for (const s of design.scenarios ?? []) {
+    if (s.pins === undefined || !s.pins.some((p) => isGone(p.pin))) continue;
+    s.pins = s.pins.filter((p) => !isGone(p.pin));
+    if (s.pins.length === 0) delete s.pins;
+  }
   for (let k = design.nets.length - 1; k >= 0; k--) {
     const net = design.nets[k]!;
     if (!net.pins.some(isGone)) continue;
