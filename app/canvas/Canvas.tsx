@@ -2,7 +2,7 @@
  * The canvas: React Flow showing nodes and edges derived from the design. It keeps no copy of
  * the design; it turns React Flow's events into commands (connect, move, select).
  */
-import { useCallback, useMemo, useRef, type DragEvent } from 'react';
+import { useCallback, useLayoutEffect, useMemo, useRef, type DragEvent } from 'react';
 import { useStore } from 'zustand';
 import { createStore } from 'zustand/vanilla';
 import {
@@ -17,6 +17,8 @@ import { createFlowDeriver, type ChipNode as ChipNodeType, type WireEdge as Wire
 import { Legend } from './Legend.tsx';
 import { CANVAS_ID, fitViewOptions, TEMPLATE_MIME, usePlacePart } from './placement.ts';
 import { WireEdge } from './WireEdge.tsx';
+import { createRouteKeeper } from './routes.ts';
+import { RouteContext } from './routeContext.ts';
 import { useCanvasKeys } from './useCanvasKeys.ts';
 import { Dialogs } from '../panels/Dialogs.tsx';
 
@@ -63,6 +65,9 @@ export function Canvas() {
   const deriver = useRef(createFlowDeriver()).current;
   const nodes = useMemo(() => deriver.nodes(parts, selectedParts, drag), [deriver, parts, selectedParts, drag]);
   const edges = useMemo(() => deriver.edges(nets, selectedWires, moving), [deriver, nets, selectedWires, moving]);
+  // Wires routed around chips from the design (not from a drag); each wire reads its own route.
+  const routes = useRef(createRouteKeeper()).current;
+  useLayoutEffect(() => routes.update(parts, nets), [routes, parts, nets]);
   const place = usePlacePart();
   useCanvasKeys();
 
@@ -142,6 +147,7 @@ export function Canvas() {
   }, [place]);
 
   return (
+    <RouteContext.Provider value={routes.store}>
     <div className={`rc-canvas${drag !== null ? ' rc-canvas--dragging' : ''}`} id={CANVAS_ID} onDragOver={onDragOver} onDrop={onDrop}>
       <ReactFlow<ChipNodeType, WireEdgeType>
         nodes={nodes}
@@ -178,5 +184,6 @@ export function Canvas() {
       </ReactFlow>
       <Dialogs />
     </div>
+    </RouteContext.Provider>
   );
 }

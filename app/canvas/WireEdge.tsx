@@ -5,7 +5,10 @@
  * error, an amber double line for a warning, thin and neutral when clean. Not dashed: a dash
  * pattern along a long wire costs the software rasteriser more than the rest of the canvas.
  */
-import { memo, useState } from 'react';
+import { memo, useContext, useMemo, useState } from 'react';
+import { useStore } from 'zustand';
+import { hopsOf, svgPath, type Point } from '../../rules/routing/index.ts';
+import { RouteContext } from './routeContext.ts';
 import { BaseEdge, EdgeLabelRenderer, getSmoothStepPath, Position, useStore as useFlowStore, type EdgeProps } from '@xyflow/react';
 import { formatQuantity } from '../../rules/levels/units.ts';
 import { useEditor, useEditorStore } from '../store/EditorProvider.tsx';
@@ -51,6 +54,34 @@ function labelPlace(x: number, y: number, side: Position): { transform: string }
   }
 }
 
+/** How far a route's end may lie from the drawn pin and still be drawn (a top or bottom pin's handle sits where its strip's text puts it). */
+const SNAP = 24;
+
+/**
+ * The route with its ends on the pins as React Flow has them; null when a pin is farther off
+ * than a handle's placement explains (its chip is being dragged: the route is stale).
+ */
+function fitEnds(points: readonly Point[], sx: number, sy: number, tx: number, ty: number): Point[] | null {
+  const n = points.length;
+  if (n < 2) return null;
+  const a = points[0]!;
+  const b = points[n - 1]!;
+  if (Math.abs(a.x - sx) > SNAP || Math.abs(a.y - sy) > SNAP || Math.abs(b.x - tx) > SNAP || Math.abs(b.y - ty) > SNAP) return null;
+  if (a.x === sx && a.y === sy && b.x === tx && b.y === ty) return points as Point[];
+  const out = points.map((p) => ({ x: p.x, y: p.y }));
+  // Move each end and the corner after it along the end's run, so that every run stays straight.
+  const shift = (end: number, next: number, x: number, y: number) => {
+    const e = out[end]!;
+    const c = out[next]!;
+    if (n > 2 && e.x === c.x) c.x = x;
+    if (n > 2 && e.y === c.y) c.y = y;
+    out[end] = { x, y };
+  };
+  shift(0, 1, sx, sy);
+  shift(n - 1, n - 2, tx, ty);
+  return out;
+}
+
 function WireEdgeView(props: EdgeProps<WireEdgeType>) {
   const { id, data, selected, sourceX, sourceY, targetX, targetY, sourcePosition, targetPosition } = props;
   const net = data?.net ?? '';
@@ -59,16 +90,35 @@ function WireEdgeView(props: EdgeProps<WireEdgeType>) {
   const far = tier > 0;
   const tiny = tier === 2;
   const [hover, setHover] = useState(false);
-  const [path, midX, midY] = getSmoothStepPath({ sourceX, sourceY, targetX, targetY, sourcePosition, targetPosition, borderRadius: 3, offset: 14 });
+  const routes = useContext(RouteContext);
+  const route = useStore(routes, (s) => s.routes.get(id));
+  const crossings = useStore(routes, (s) => s.crossings);
+  // Hops only where they can be seen: zoomed out, a crossing is a pixel either way.
+  const hops = useMemo(() => (route === undefined || far ? undefined : hopsOf(route, crossings)), [route, crossings, far]);
+  // The net's branch points, drawn once, by the wire that carries its name.
+  const dots = useStore(routes, (s) => (data?.label != null ? s.junctions.get(net) : undefined));
+  const fitted = route === undefined ? null : fitEnds(route.points, sourceX, sourceY, targetX, targetY);
+  let path: string;
+  let midX: number;
+  let midY: number;
+  if (fitted !== null) {
+    path = svgPath(fitted, hops);
+    const mid = fitted[Math.floor(fitted.length / 2)]!;
+    [midX, midY] = [mid.x, mid.y];
+  } else {
+    // Not routed yet, or its chip is being dragged: straight runs from pin to pin until routed.
+    [path, midX, midY] = getSmoothStepPath({ sourceX, sourceY, targetX, targetY, sourcePosition, targetPosition, borderRadius: 3, offset: 14 });
+  }
   const name = labelPlace(sourceX, sourceY, sourcePosition);
 
   const classes = ['rc-wire', `rc-wire--${severity}`, selected ? 'rc-wire--selected' : '', highlighted ? 'rc-wire--net' : '', tiny ? 'rc-wire--tiny' : ''].filter((c) => c !== '').join(' ');
   return (
-    <g className={classes} data-net={net} data-severity={severity} data-rule={rule} onMouseEnter={far ? undefined : () => setHover(true)} onMouseLeave={() => setHover(false)}>
+    <g className={classes} data-net={net} data-severity={severity} data-rule={rule} data-routed={fitted !== null ? 'yes' : 'no'} onMouseEnter={far ? undefined : () => setHover(true)} onMouseLeave={() => setHover(false)}>
       {(selected || highlighted) && <path d={path} className="rc-wire-halo" fill="none" />}
       {(severity === 'error' || (severity === 'warning' && !tiny)) && <path d={path} className="rc-wire-case" fill="none" />}
       {/* Far out, a wire is too thin to aim at: no wide invisible twin to catch the pointer. */}
       <BaseEdge id={id} path={path} interactionWidth={far ? 0 : 14} />
+      {dots?.map((p) => <circle key={`${p.x},${p.y}`} className="rc-junction" cx={p.x} cy={p.y} r={tiny ? 5 : 3.2} data-junction={net} />)}
       {!far && (data?.label != null || hover) && (
         <EdgeLabelRenderer>
           {data?.label != null && (

@@ -64,14 +64,19 @@ function drawWires(doc: jsPDF, v: View, layout: DiagramLayout, status: ReadonlyM
       setDraw(doc, ERROR_SOFT);
       doc.setLineWidth(p.casing);
       doc.setLineDashPattern([], 0);
-      for (const w of wires) polyline(doc, v, w.points);
+      for (const w of wires) polyline(doc, v, w.drawn);
     }
     setDraw(doc, STATUS_COLOUR[level]);
     doc.setLineWidth(p.width);
     doc.setLineDashPattern(p.dash, 0);
-    for (const w of wires) polyline(doc, v, w.points);
+    for (const w of wires) polyline(doc, v, w.drawn);
   }
   doc.setLineDashPattern([], 0);
+  // A dot where a net branches, in its wires' colour, so that a branch is never taken for a crossing.
+  for (const j of layout.junctions) {
+    setFill(doc, STATUS_COLOUR[status.get(j.net.id) ?? 'clean']);
+    doc.circle(v.x(j.at.x), v.y(j.at.y), clamp(2.6 * v.s, 0.5, 2.2), 'F');
+  }
 }
 
 type MarkKind = 'output' | 'input' | 'bidir';
