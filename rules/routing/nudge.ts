@@ -95,7 +95,7 @@ function pass(wires: Point[][], nets: readonly string[], horizontal: boolean, in
         const from = horizontal ? pin.y : pin.x;
         if (at === from) continue;
         limit = at > from ? [from + 2, Infinity] : [-Infinity, from - 2];
-      } else if (k === 1 || k + 1 === n - 2) continue;
+      }
       segs.push({ wire: w, k, net: nets[w]!, at: horizontal ? a.y : a.x, lo: horizontal ? Math.min(a.x, b.x) : Math.min(a.y, b.y), hi: horizontal ? Math.max(a.x, b.x) : Math.max(a.y, b.y), ...(limit === undefined ? {} : { limit }) });
     }
   });
@@ -132,9 +132,12 @@ function pass(wires: Point[][], nets: readonly string[], horizontal: boolean, in
     const order = tracks.map((_, t) => t).sort((u, v) => tracks[u]!.sum / tracks[u]!.count - tracks[v]!.sum / tracks[v]!.count);
     const rank = new Map(order.map((t, r) => [t, r]));
     const centre = cluster.reduce((sum, s) => sum + s.at, 0) / cluster.length;
-    // Centred on the old lines, else all to one side or the other: the first that enters no
-    // body (the run itself or the runs either side of it, which stretch to follow).
-    const starts = [Math.round(centre - ((n - 1) / 2) * spacing), cluster[0]!.at, cluster[cluster.length - 1]!.at - (n - 1) * spacing];
+    // Centred on the old lines, else slid along: the first that enters no body (the run itself
+    // or the runs either side of it, which stretch to follow).
+    const centred = Math.round(centre - ((n - 1) / 2) * spacing);
+    const starts = [centred];
+    // Then slid either way, half a track at a time, nearest first.
+    for (let k = 1; k <= 2 * n + 2; k++) starts.push(centred + (k * spacing) / 2, centred - (k * spacing) / 2);
     let best: number | null = null;
     for (const start of starts) {
       let bad = false;
