@@ -2,7 +2,7 @@
  * The canvas: React Flow showing nodes and edges derived from the design. It keeps no copy of
  * the design; it turns React Flow's events into commands (connect, move, select).
  */
-import { useCallback, useLayoutEffect, useMemo, useRef, type DragEvent } from 'react';
+import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, type DragEvent } from 'react';
 import { useStore } from 'zustand';
 import { createStore } from 'zustand/vanilla';
 import {
@@ -17,7 +17,7 @@ import { createFlowDeriver, type ChipNode as ChipNodeType, type WireEdge as Wire
 import { Legend } from './Legend.tsx';
 import { CANVAS_ID, fitViewOptions, TEMPLATE_MIME, usePlacePart } from './placement.ts';
 import { WireEdge } from './WireEdge.tsx';
-import { createRouteKeeper } from './routes.ts';
+import { createRouteKeeper, type RouteKeeper } from './routes.ts';
 import { RouteContext } from './routeContext.ts';
 import { useCanvasKeys } from './useCanvasKeys.ts';
 import { Dialogs } from '../panels/Dialogs.tsx';
@@ -66,8 +66,11 @@ export function Canvas() {
   const nodes = useMemo(() => deriver.nodes(parts, selectedParts, drag), [deriver, parts, selectedParts, drag]);
   const edges = useMemo(() => deriver.edges(nets, selectedWires, moving), [deriver, nets, selectedWires, moving]);
   // Wires routed around chips from the design (not from a drag); each wire reads its own route.
-  const routes = useRef(createRouteKeeper()).current;
+  const keeper = useRef<RouteKeeper | null>(null);
+  keeper.current ??= createRouteKeeper();
+  const routes = keeper.current;
   useLayoutEffect(() => routes.update(parts, nets), [routes, parts, nets]);
+  useEffect(() => () => routes.dispose(), [routes]);
   const place = usePlacePart();
   useCanvasKeys();
 

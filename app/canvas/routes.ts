@@ -1,13 +1,15 @@
 /**
  * The canvas's wire routes: chip bodies and pin anchors measured as styles.css draws them,
- * routed by the router the PDF diagram uses (rules/routing), kept in a small store of their
- * own so that each wire reads its route by id and only the wires whose route changed draw
- * again. Routes follow the design, not a drag: while a drag lasts, the wires on the dragged
- * chips are drawn straight from pin to pin (WireEdge) and routed when the drag ends.
+ * routed by the router the PDF diagram uses (rules/routing) in a worker of their own (a large
+ * design takes longer than a frame), and kept in a small store so that each wire reads its
+ * route by id and only the wires whose route changed draw again. Routes follow the design, not
+ * a drag: while a drag lasts, the wires on the dragged chips are drawn straight from pin to pin
+ * (WireEdge), and until a route arrives a wire is drawn that way too.
  */
 import { createStore } from 'zustand/vanilla';
 import type { Net, Part } from '../../rules/model/schema.ts';
-import { crossIndex, junctionsOf, WireRouter, type Anchor, type Box, type CrossIndex, type Point, type Route, type WireSpec } from '../../rules/routing/index.ts';
+import { WireRouter, type Anchor, type Box, type CrossIndex, type Point, type Route, type WireSpec } from '../../rules/routing/index.ts';
+import { solve, type RouteJob, type RouteReply } from './routeJob.ts';
 import { netWires, wireId } from '../store/commands/index.ts';
 import { BODY_PADDING, CHIP_WIDTH, chipSize, HEADER_HEIGHT, NODE_MARGIN, pinLayout, ROW_HEIGHT, STRIP_HEIGHT } from './chipLayout.ts';
 
@@ -64,13 +66,61 @@ function sameList<T>(a: readonly T[], b: readonly T[]): boolean {
   return a.length === b.length && a.every((x, k) => x === b[k]);
 }
 
-/** One per canvas: the router, its last inputs and the store the wires read. */
+/** One per canvas: the routing worker, the last inputs and the store the wires read. */
 export function createRouteKeeper() {
-  const router = new WireRouter();
   const store = createStore<RouteState>(() => EMPTY);
   let lastBoxes: Box[] = [];
   let lastNets: readonly Net[] | null = null;
   const wiresOf = new WeakMap<Net, WireSpec[]>();
+  // Made on the first job (and again after `dispose`); without workers (a test's DOM), the same job runs here.
+  let worker: Worker | null = null;
+  const local = typeof Worker === 'undefined' ? new WireRouter() : null;
+  let seq = 0;
+  let busy = false;
+  /** The newest job waiting while the worker is busy; older ones are dropped unrouted. */
+  let queued: RouteJob | null = null;
+
+  function apply(reply: RouteReply): void {
+    const was = store.getState();
+    const fresh = new Map(reply.changed.map((r) => [r.id, r]));
+    const routes = new Map<string, Route>();
+    for (const id of reply.ids) {
+      const r = fresh.get(id) ?? was.routes.get(id);
+      if (r !== undefined) routes.set(id, r);
+    }
+    // Dots kept by identity where they did not change, so that their wires stay as drawn.
+    const junctions = new Map<string, readonly Point[]>();
+    for (const [net, list] of reply.junctions) {
+      const old = was.junctions.get(net);
+      junctions.set(net, old !== undefined && old.length === list.length && old.every((p, k) => p.x === list[k]!.x && p.y === list[k]!.y) ? old : list);
+    }
+    store.setState({ routes, crossings: reply.crossings, junctions }, true);
+  }
+
+  function send(job: RouteJob): void {
+    if (local !== null) {
+      apply(solve(local, job));
+      return;
+    }
+    if (worker === null) {
+      worker = new Worker(new URL('./routeWorker.ts', import.meta.url), { type: 'module' });
+      worker.onmessage = (e: MessageEvent<RouteReply>) => {
+        busy = false;
+        apply(e.data);
+        if (queued !== null) {
+          const next = queued;
+          queued = null;
+          send(next);
+        }
+      };
+    }
+    if (busy) {
+      queued = job;
+      return;
+    }
+    busy = true;
+    worker.postMessage(job);
+  }
 
   /** Routes the design's wires again where its geometry or nets changed. */
   function update(parts: readonly Part[], nets: readonly Net[]): void {
@@ -88,25 +138,20 @@ export function createRouteKeeper() {
       }
       wires.push(...list);
     }
-    const { routes, changed } = router.update(boxes, wires);
-    const was = store.getState();
-    if (changed.size === 0 && routes.size === was.routes.size) return;
-    const junctions = new Map<string, Point[]>();
-    for (const j of junctionsOf(routes.values())) {
-      const list = junctions.get(j.net);
-      if (list === undefined) junctions.set(j.net, [j.at]);
-      else list.push(j.at);
-    }
-    // Dots kept by identity where they did not change, so that their wires stay as drawn.
-    const dots = new Map<string, readonly Point[]>();
-    for (const [net, list] of junctions) {
-      const old = was.junctions.get(net);
-      dots.set(net, old !== undefined && old.length === list.length && old.every((p, k) => p.x === list[k]!.x && p.y === list[k]!.y) ? old : list);
-    }
-    store.setState({ routes, crossings: crossIndex(routes.values()), junctions: dots }, true);
+    send({ seq: ++seq, boxes, wires });
   }
 
-  return { store, update };
+  /** Ends the worker; the next update starts a new one and routes everything. */
+  function dispose(): void {
+    worker?.terminate();
+    worker = null;
+    busy = false;
+    queued = null;
+    lastBoxes = [];
+    lastNets = null;
+  }
+
+  return { store, update, dispose };
 }
 
 export type RouteKeeper = ReturnType<typeof createRouteKeeper>;

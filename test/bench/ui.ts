@@ -37,7 +37,8 @@ import { median, round as roundTo } from './stats.ts';
 const json = process.argv.includes('--json');
 const PARTS = 1000;
 const EDITS = 50;
-const PORT = 4183;
+// A port of its own (RAILCROSS_BENCH_PORT), so that work trees can measure side by side.
+const PORT = Number(process.env.RAILCROSS_BENCH_PORT ?? 4183);
 const STORAGE_PARTS = 2000;
 const SAVES = 10;
 const OPENS = 5;
