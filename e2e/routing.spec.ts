@@ -77,3 +77,20 @@ test('a generated 200-part board: no shared track, no wire through a chip', asyn
   expect(shared, 'runs of different nets on one track').toEqual([]);
   expect(through, 'runs through a chip').toEqual([]);
 });
+
+test('Tidy layout arranges the example by signal flow, routes it clean, and is one undo step', async ({ page }) => {
+  await page.goto('/');
+  await expect(page.locator('.rc-wire[data-net="VALVE_EN"]').first()).toBeVisible();
+  const where = () => page.evaluate(() => [...document.querySelectorAll<HTMLElement>('.react-flow__node')].map((n) => `${n.dataset.id}@${n.style.transform}`).sort());
+  const before = await where();
+  await page.getByTestId('tidy-layout').click();
+  await expect.poll(where).not.toEqual(before);
+  const d = await drawing(page);
+  const { shared, through } = judge(d);
+  expect(shared, 'runs of different nets on one track').toEqual([]);
+  expect(through, 'runs through a chip').toEqual([]);
+  await page.waitForTimeout(400);
+  await page.screenshot({ path: 'e2e/screenshots/routing-tidy.png' });
+  await page.getByRole('button', { name: 'Undo' }).click();
+  await expect.poll(where).toEqual(before);
+});

@@ -6,10 +6,10 @@ import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, type DragEven
 import { useStore } from 'zustand';
 import { createStore } from 'zustand/vanilla';
 import {
-  Background, BackgroundVariant, ConnectionMode, Controls, Panel, ReactFlow,
+  Background, BackgroundVariant, ConnectionMode, Controls, Panel, ReactFlow, useReactFlow,
   type Connection, type EdgeChange, type FinalConnectionState, type IsValidConnection, type NodeChange,
 } from '@xyflow/react';
-import { connectPins, moveParts, parseWireId, type Move } from '../store/commands/index.ts';
+import { connectPins, moveParts, parseWireId, tidyLayout, type Move } from '../store/commands/index.ts';
 import { useEditor, useEditorStore } from '../store/EditorProvider.tsx';
 import type { XY } from '../store/editorStore.ts';
 import { ChipNode } from './ChipNode.tsx';
@@ -40,6 +40,19 @@ function sameKeys(set: ReadonlySet<string> | null, map: ReadonlyMap<string, unkn
   if (set === null || set.size !== map.size) return false;
   for (const k of map.keys()) if (!set.has(k)) return false;
   return true;
+}
+
+/** Tidy layout: the chips arranged by signal flow (one undo step), then the whole design fitted in view. */
+function TidyButton() {
+  const store = useEditorStore();
+  const flow = useReactFlow();
+  const empty = useEditor((s) => s.design.parts.length === 0);
+  return (
+    <button type="button" className="rc-tidy-btn" disabled={empty} data-testid="tidy-layout" title="Arrange the chips by signal flow, left to right (one undo step)"
+      onClick={() => {
+        if (store.getState().apply(tidyLayout()).ok) requestAnimationFrame(() => void flow.fitView(fitViewOptions));
+      }}>Tidy layout</button>
+  );
 }
 
 export function Canvas() {
@@ -181,6 +194,7 @@ export function Canvas() {
           <Legend />
         </Panel>
         <Panel position="top-right">
+          <TidyButton />
           <button type="button" className="rc-keys-btn" aria-label="Keyboard shortcuts" title="Keyboard shortcuts (?)" data-testid="shortcuts-button"
             onClick={() => store.getState().openDialog({ kind: 'keys' })}>?</button>
         </Panel>

@@ -5,9 +5,9 @@
  * error, an amber double line for a warning, thin and neutral when clean. Not dashed: a dash
  * pattern along a long wire costs the software rasteriser more than the rest of the canvas.
  */
-import { memo, useContext, useMemo, useState } from 'react';
+import { memo, useContext, useState } from 'react';
 import { useStore } from 'zustand';
-import { hopsOf, svgPath, type Point } from '../../rules/routing/index.ts';
+import { svgPath, type Point } from '../../rules/routing/index.ts';
 import { RouteContext } from './routeContext.ts';
 import { BaseEdge, EdgeLabelRenderer, getSmoothStepPath, Position, useStore as useFlowStore, type EdgeProps } from '@xyflow/react';
 import { formatQuantity } from '../../rules/levels/units.ts';
@@ -92,9 +92,8 @@ function WireEdgeView(props: EdgeProps<WireEdgeType>) {
   const [hover, setHover] = useState(false);
   const routes = useContext(RouteContext);
   const route = useStore(routes, (s) => s.routes.get(id));
-  const crossings = useStore(routes, (s) => s.crossings);
   // Hops only where they can be seen: zoomed out, a crossing is a pixel either way.
-  const hops = useMemo(() => (route === undefined || far ? undefined : hopsOf(route, crossings)), [route, crossings, far]);
+  const hops = useStore(routes, (s) => (far ? undefined : s.hops.get(id)));
   // The net's branch points, drawn once, by the wire that carries its name.
   const dots = useStore(routes, (s) => (data?.label != null ? s.junctions.get(net) : undefined));
   const fitted = route === undefined ? null : fitEnds(route.points, sourceX, sourceY, targetX, targetY);

@@ -4,10 +4,11 @@
  * chip re-routes only its neighbourhood.
  */
 import { WireRouter } from '../../rules/routing/index.ts';
-import { solve, type RouteJob } from './routeJob.ts';
+import { solve, type HopMemory, type RouteJob } from './routeJob.ts';
 
 const router = new WireRouter();
+const memory: HopMemory = new Map();
 
 self.onmessage = (e: MessageEvent<RouteJob>) => {
-  self.postMessage(solve(router, e.data));
+  self.postMessage(solve(router, e.data, memory));
 };

@@ -8,20 +8,20 @@
  */
 import { createStore } from 'zustand/vanilla';
 import type { Net, Part } from '../../rules/model/schema.ts';
-import { WireRouter, type Anchor, type Box, type CrossIndex, type Point, type Route, type WireSpec } from '../../rules/routing/index.ts';
-import { solve, type RouteJob, type RouteReply } from './routeJob.ts';
+import { WireRouter, type Anchor, type Box, type Hop, type Point, type Route, type WireSpec } from '../../rules/routing/index.ts';
+import { solve, unpackHops, type HopMemory, type RouteJob, type RouteReply } from './routeJob.ts';
 import { netWires, wireId } from '../store/commands/index.ts';
 import { BODY_PADDING, CHIP_WIDTH, chipSize, HEADER_HEIGHT, NODE_MARGIN, pinLayout, ROW_HEIGHT, STRIP_HEIGHT } from './chipLayout.ts';
 
 export interface RouteState {
   readonly routes: ReadonlyMap<string, Route>;
-  /** What a wire asks for its hops (hopsOf), worked out by the wires drawn near enough to show them. */
-  readonly crossings: CrossIndex;
+  /** Each wire's hops over the wires of other nets it crosses (none: not in the map). */
+  readonly hops: ReadonlyMap<string, readonly Hop[]>;
   /** Branch points by net id. */
   readonly junctions: ReadonlyMap<string, readonly Point[]>;
 }
 
-const EMPTY: RouteState = { routes: new Map(), crossings: { vertical: [] }, junctions: new Map() };
+const EMPTY: RouteState = { routes: new Map(), hops: new Map(), junctions: new Map() };
 
 /** The border above the header (styles.css: border-top 3px), inside HEADER_HEIGHT. */
 const TOP_BORDER = 3;
@@ -75,6 +75,7 @@ export function createRouteKeeper() {
   // Made on the first job (and again after `dispose`); without workers (a test's DOM), the same job runs here.
   let worker: Worker | null = null;
   const local = typeof Worker === 'undefined' ? new WireRouter() : null;
+  const localMemory: HopMemory = new Map();
   let seq = 0;
   let busy = false;
   /** The newest job waiting while the worker is busy; older ones are dropped unrouted. */
@@ -94,12 +95,23 @@ export function createRouteKeeper() {
       const old = was.junctions.get(net);
       junctions.set(net, old !== undefined && old.length === list.length && old.every((p, k) => p.x === list[k]!.x && p.y === list[k]!.y) ? old : list);
     }
-    store.setState({ routes, crossings: reply.crossings, junctions }, true);
+    // Hops arrive only for the wires whose hops changed; the rest keep theirs (and their drawing).
+    let hops = was.hops;
+    if (reply.hops.length > 0 || was.routes.size !== routes.size) {
+      const next = new Map<string, readonly Hop[]>();
+      for (const [id, list] of was.hops) if (routes.has(id)) next.set(id, list);
+      for (const [id, flat] of reply.hops) {
+        if (flat.length === 0) next.delete(id);
+        else next.set(id, unpackHops(id, flat));
+      }
+      hops = next;
+    }
+    store.setState({ routes, hops, junctions }, true);
   }
 
   function send(job: RouteJob): void {
     if (local !== null) {
-      apply(solve(local, job));
+      apply(solve(local, job, localMemory));
       return;
     }
     if (worker === null) {
