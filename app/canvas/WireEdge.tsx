@@ -11,6 +11,8 @@ import { svgPath, type Point } from '../../rules/routing/index.ts';
 import { RouteContext } from './routeContext.ts';
 import { BaseEdge, EdgeLabelRenderer, getSmoothStepPath, Position, useStore as useFlowStore, type EdgeProps } from '@xyflow/react';
 import { formatQuantity } from '../../rules/levels/units.ts';
+import type { Pull } from '../../rules/model/schema.ts';
+import { pullLabel, pullWords } from '../../rules/report/pullLabel.ts';
 import { useEditor, useEditorStore } from '../store/EditorProvider.tsx';
 import { parseWireLook, WIRE_LOOK } from '../store/canvasViews.ts';
 import { useKeyed } from '../store/keyedView.ts';
@@ -35,6 +37,12 @@ function WireTip({ net, x, y }: { net: string; x: number; y: number }) {
       <div className="rc-wire-tip-foot">{count === 0 ? 'no findings' : `${count} finding${count === 1 ? '' : 's'}`} · {state}</div>
     </div>
   );
+}
+
+/** A net's pull resistor beside its name: value and where it goes (`↑4K7 3.3 V`). */
+function PullTag({ pull }: { pull: Pull }) {
+  const rails = useEditor((s) => s.design.rails);
+  return <span className="rc-net-pull" data-pull title={pullWords(pull, rails)}>{pullLabel(pull, rails)}</span>;
 }
 
 /**
@@ -128,6 +136,7 @@ function WireEdgeView(props: EdgeProps<WireEdgeType>) {
             >
               <SeverityGlyph severity={severity} size={11} />
               <span>{data.label}</span>
+              {data.pull != null && <PullTag pull={data.pull} />}
             </div>
           )}
           {hover && <WireTip net={net} x={midX} y={midY} />}
