@@ -5,7 +5,7 @@
  * (a large design crosses itself hundreds of thousands of times: worked out here, off the
  * painting thread, and handed over only where they changed).
  */
-import { crossIndex, hopsOf, junctionsOf, type Box, type Hop, type Point, type Route, type WireRouter, type WireSpec } from '../../rules/routing/index.ts';
+import { crossIndex, hopsOf, junctionsOf, MAX_HOPS, type Box, type Hop, type Point, type Route, type WireRouter, type WireSpec } from '../../rules/routing/index.ts';
 
 export interface RouteJob {
   readonly seq: number;
@@ -45,7 +45,9 @@ export function solve(router: WireRouter, job: RouteJob, memory: HopMemory): Rou
   const hops: [string, number[]][] = [];
   for (const r of routes.values()) {
     const flat: number[] = [];
-    for (const h of hopsOf(r, index)) flat.push(h.segment, h.x);
+    const list = hopsOf(r, index);
+    // A wire crossing dozens of others is drawn without hops (marks.ts, MAX_HOPS).
+    if (list.length <= MAX_HOPS) for (const h of list) flat.push(h.segment, h.x);
     const key = flat.join(',');
     if ((memory.get(r.id) ?? '') !== key) hops.push([r.id, flat]);
     if (key === '') memory.delete(r.id);

@@ -5,7 +5,7 @@
  * IEC 60617 and IEEE Std 315, from memory).
  */
 import { describe, expect, it } from 'vitest';
-import { crossIndex, hopPolyline, hopsOf, HOP, junctionsOf, markRoutes, pathPoints, svgPath, type Route } from '../../rules/routing/index.ts';
+import { crossIndex, hopPolyline, hopsOf, HOP, junctionsOf, markRoutes, MAX_HOPS, pathPoints, svgPath, type Route } from '../../rules/routing/index.ts';
 
 const route = (id: string, net: string, ...xy: number[]): Route => {
   const points = [];
@@ -56,5 +56,16 @@ describe('hops', () => {
       const poly = hopPolyline(wire.points, hops.get(wire.id));
       expect(Math.min(...poly.map((p) => p.y))).toBeCloseTo(10 - HOP, 6);
     }
+  });
+});
+
+describe('a wire crossing many others', () => {
+  it.each([
+    [MAX_HOPS, MAX_HOPS],
+    [MAX_HOPS + 1, 0],
+  ])('crossing %d wires of other nets: %d hops drawn', (n, drawn) => {
+    const long = route('h', 'A', 0, 10, 1000, 10);
+    const others = Array.from({ length: n }, (_, k) => route(`v${k}`, `B${k}`, 40 + k * 20, 0, 40 + k * 20, 30));
+    expect(markRoutes([long, ...others]).hops.get('h')?.length ?? 0).toBe(drawn);
   });
 });
