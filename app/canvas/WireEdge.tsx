@@ -12,6 +12,8 @@ import { RouteContext } from './routeContext.ts';
 import { BaseEdge, EdgeLabelRenderer, getSmoothStepPath, Position, useStore as useFlowStore, type EdgeProps } from '@xyflow/react';
 import { formatQuantity } from '../../rules/levels/units.ts';
 import type { Pull } from '../../rules/model/schema.ts';
+import type { Finding, Severity } from '../../rules/engine/types.ts';
+import { RULES } from '../../rules/checks/index.ts';
 import { pullLabel, pullWords } from '../../rules/report/pullLabel.ts';
 import { useEditor, useEditorStore } from '../store/EditorProvider.tsx';
 import { parseWireLook, WIRE_LOOK } from '../store/canvasViews.ts';
@@ -24,14 +26,32 @@ function margin(v: number | null | undefined): string {
   return v === null || v === undefined ? 'no pair' : formatQuantity(v, 'V');
 }
 
-/** What hovering a wire shows: the net's worst margins in the chosen power state. */
+const RANK: Readonly<Record<Severity, number>> = { error: 3, warning: 2, info: 1 };
+const RULE_TITLE = new Map(RULES.map((r) => [r.id, r.meta.title]));
+
+/** The net's worst unwaived finding: the first of the highest severity, as the findings list orders them. */
+function worstFinding(findings: readonly Finding[]): Finding | undefined {
+  let best: Finding | undefined;
+  for (const f of findings) if (f.waived === undefined && (best === undefined || RANK[f.severity] > RANK[best.severity])) best = f;
+  return best;
+}
+
+/** What hovering a wire shows: the net's worst finding in words and its worst margins in the chosen power state. */
 function WireTip({ net, x, y }: { net: string; x: number; y: number }) {
   const high = useEditor((s) => s.result.nets.get(s.powerState)?.get(net)?.view.analysis.worstHigh);
   const low = useEditor((s) => s.result.nets.get(s.powerState)?.get(net)?.view.analysis.worstLow);
   const count = useEditor((s) => s.result.nets.get(s.powerState)?.get(net)?.findings.filter((f) => f.waived === undefined).length ?? 0);
+  // Why the wire has its colour: its worst unwaived finding, in the rule's own words.
+  const worst = useEditor((s) => worstFinding(s.result.nets.get(s.powerState)?.get(net)?.findings ?? []));
   const state = useEditor((s) => s.result.states.find((st) => st.id === s.powerState)?.label ?? s.powerState);
   return (
     <div className="rc-wire-tip" style={{ transform: `translate(-50%, calc(-100% - 14px)) translate(${x}px, ${y}px)` }} role="tooltip">
+      {worst !== undefined && (
+        <div className={`rc-wire-tip-worst rc-wire-tip-worst--${worst.severity}`} data-worst={worst.rule}>
+          <b>{RULE_TITLE.get(worst.rule) ?? worst.rule}</b>
+          <span>{worst.message}</span>
+        </div>
+      )}
       <div className="rc-wire-tip-row"><span>worst high margin</span><b data-margin="high">{margin(high)}</b></div>
       <div className="rc-wire-tip-row"><span>worst low margin</span><b data-margin="low">{margin(low)}</b></div>
       <div className="rc-wire-tip-foot">{count === 0 ? 'no findings' : `${count} finding${count === 1 ? '' : 's'}`} · {state}</div>
