@@ -72,3 +72,25 @@ test('hovering a red wire says why it is red: its worst finding in words', async
   await expect(worst).toContainText('No pin sees more than it may');
   await expect(worst).toContainText('DISP_RX');
 });
+
+test('at the default width, the crossings table scrolls inside its frame rather than running out of the panel', async ({ page }) => {
+  await page.goto('/');
+  await page.getByTestId('tab-crossings').click();
+  const table = page.getByTestId('crossings');
+  await expect(table).toBeVisible();
+  const m = await table.evaluate((t) => {
+    const frame = t.closest('.rc-findings-list') as HTMLElement;
+    const side = t.closest('.rc-side') as HTMLElement;
+    const f = frame.getBoundingClientRect();
+    const s = side.getBoundingClientRect();
+    return { frameRight: f.right, sideRight: s.right, frameLeft: f.left, sideLeft: s.left, scroll: frame.scrollWidth, client: frame.clientWidth, table: t.getBoundingClientRect().width, overflowX: getComputedStyle(frame).overflowX };
+  });
+  // The frame stays inside the panel; a table wider than the frame scrolls within it.
+  expect(m.frameLeft).toBeGreaterThanOrEqual(m.sideLeft - 1);
+  expect(m.frameRight).toBeLessThanOrEqual(m.sideRight + 1);
+  if (m.table > m.client) {
+    expect(['auto', 'scroll']).toContain(m.overflowX);
+    expect(m.scroll).toBeGreaterThan(m.client);
+  }
+  await page.screenshot({ path: 'e2e/screenshots/panel-crossings-default.png' });
+});
