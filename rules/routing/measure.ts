@@ -98,12 +98,13 @@ export function bodyCrossings(wires: readonly DrawnWire[], rects: readonly Rect[
 }
 
 /**
- * The points of an SVG path drawn by `svgPath` (M, L, H, V and the A of a hop, which ends on
- * the line it leaves), absolute commands only.
+ * The points of an SVG path: M, L, H, V, the A of a hop (which ends on the line it leaves), and
+ * the end point of a Q or C corner (a rounded corner, as React Flow's own step paths draw),
+ * absolute commands only.
  */
 export function pathPoints(d: string): Point[] {
   const out: Point[] = [];
-  const re = /([MLHVA])([^MLHVA]*)/g;
+  const re = /([MLHVAQC])([^MLHVAQC]*)/g;
   let m: RegExpExecArray | null;
   let x = 0;
   let y = 0;
@@ -113,6 +114,8 @@ export function pathPoints(d: string): Point[] {
       case 'H': x = nums[0]!; break;
       case 'V': y = nums[0]!; break;
       case 'A': x = nums[5]!; y = nums[6]!; break;
+      case 'Q': x = nums[2]!; y = nums[3]!; break;
+      case 'C': x = nums[4]!; y = nums[5]!; break;
       default: x = nums[0]!; y = nums[1]!;
     }
     out.push({ x, y });

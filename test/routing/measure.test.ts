@@ -50,6 +50,7 @@ describe('path points', () => {
     ['M and L', 'M0,0L10,0L10,20', [[0, 0], [10, 0], [10, 20]]],
     ['a hop arc ends on its line', 'M0,0L36,0A4,4 0 0 1 44,0L100,0', [[0, 0], [36, 0], [44, 0], [100, 0]]],
     ['React Flow\'s own step path (H and V)', 'M 5 5 H 20 V 40', [[5, 5], [20, 5], [20, 40]]],
+    ['a rounded corner (Q) ends where its run goes on', 'M0 0L17 0Q20 0 20 3L20 40', [[0, 0], [17, 0], [20, 3], [20, 40]]],
   ])('%s', (_name, d, xy) => {
     expect(pathPoints(d).map((p) => [p.x, p.y])).toEqual(xy);
   });
