@@ -12,3 +12,4 @@ export { addRail, setRailLabel, setRailVoltage, setRailTolerance, setRailColour,
 export { addPowerState, setPowerStateLabel, setRailOff, deletePowerState, setResetState, RESET_STATE_ID } from './powerStates.ts';
 export { setTitle, replaceDesign, deleteSelection, type Deletion } from './design.ts';
 export { netWires, wireGroups, wireId, parseWireId, type Pair } from './netGraph.ts';
+export { tidyLayout, tidyPositions, TIDY_GAP } from './tidyLayout.ts';
