@@ -59,7 +59,8 @@ export default defineRule({
     for (const p of view.pins) sumIih += p.params.iih ?? 0;
     for (const receiver of view.receivers) {
       const { deltaIcc, deltaIccDrop } = receiver.params;
-      if (deltaIcc === undefined || deltaIccDrop === undefined || !(deltaIcc > 0)) continue;
+      // Only a ΔICC that is 0 (or none) means no extra current; one that is not a number goes on and fails.
+      if (deltaIcc === undefined || deltaIccDrop === undefined || deltaIcc <= 0) continue;
       let worst: { driver: string; high: number; threshold: number; score: number; corner: Record<string, number> } | undefined;
       for (const driver of view.drivers) {
         if (driver.partId === receiver.partId) continue;
