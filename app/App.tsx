@@ -8,6 +8,8 @@ import { FindingsPanel } from './panels/FindingsPanel.tsx';
 import { Palette } from './panels/Palette.tsx';
 import { StatusLine } from './panels/StatusLine.tsx';
 import { TopBar } from './panels/TopBar.tsx';
+import { SideResizer, useSideWidth } from './panels/SideResizer.tsx';
+import type { CSSProperties } from 'react';
 import type { SaveIndicator } from './storage/saver.ts';
 import { EditorProvider } from './store/EditorProvider.tsx';
 import type { EditorStore } from './store/editorStore.ts';
@@ -15,14 +17,16 @@ import { useShortcuts } from './useShortcuts.ts';
 
 export function App({ store, saver }: { store: EditorStore; saver: SaveIndicator }) {
   useShortcuts(store);
+  const [sideWidth, setSideWidth] = useSideWidth();
   return (
     <EditorProvider store={store}>
       <ReactFlowProvider>
-        <div className="rc-app">
+        <div className="rc-app" style={{ '--side-width': `${sideWidth}px` } as CSSProperties}>
           <TopBar />
           <Palette />
           <Canvas />
           <div className="rc-side">
+            <SideResizer width={sideWidth} onWidth={setSideWidth} />
             <FindingsPanel />
             <DetailsPanel />
           </div>

@@ -5,8 +5,8 @@
  */
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
-import { Root } from './library/Root.tsx';
-import { startSession } from './library/start.ts';
+import { Root } from './session/Root.tsx';
+import { startSession } from './session/start.ts';
 
 const element = document.getElementById('root');
 if (element === null) throw new Error('index.html has no #root element');

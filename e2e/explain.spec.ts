@@ -69,7 +69,7 @@ test('every quick fix offered on the example works from its row: the finding goe
   await page.goto('/');
   await expect(page.locator('.react-flow__node').first()).toBeVisible();
   let tried = 0;
-  for (const state of ['all-on', 'standby']) {
+  for (const state of ['all-on', 'standby', 'reset']) {
     await page.getByTestId('power-state').selectOption(state);
     const rows = await page.locator('li[data-finding-row]').evaluateAll((els) =>
       els.filter((e) => e.querySelector('[data-testid="fix-open"]') !== null).map((e) => e.getAttribute('data-finding-row') ?? ''),

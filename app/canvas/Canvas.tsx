@@ -2,14 +2,14 @@
  * The canvas: React Flow showing nodes and edges derived from the design. It keeps no copy of
  * the design; it turns React Flow's events into commands (connect, move, select).
  */
-import { useCallback, useMemo, useRef, useState, type DragEvent } from 'react';
+import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState, type DragEvent } from 'react';
 import { useStore } from 'zustand';
 import { createStore } from 'zustand/vanilla';
 import {
-  Background, BackgroundVariant, ConnectionMode, Controls, Panel, ReactFlow,
+  Background, BackgroundVariant, ConnectionMode, Controls, Panel, ReactFlow, useReactFlow,
   type Connection, type EdgeChange, type FinalConnectionState, type IsValidConnection, type NodeChange,
 } from '@xyflow/react';
-import { connectPins, moveParts, parseWireId, type Move } from '../store/commands/index.ts';
+import { connectPins, moveParts, parseWireId, tidyLayout, type Move } from '../store/commands/index.ts';
 import { useEditor, useEditorStore } from '../store/EditorProvider.tsx';
 import type { XY } from '../store/editorStore.ts';
 import { ChipNode } from './ChipNode.tsx';
@@ -19,6 +19,8 @@ import { Legend } from './Legend.tsx';
 import { LARGE_DESIGN_PARTS } from '../check/limits.ts';
 import { CANVAS_ID, fitViewOptions, TEMPLATE_MIME, usePlacePart } from './placement.ts';
 import { WireEdge } from './WireEdge.tsx';
+import { createRouteKeeper, type RouteKeeper } from './routes.ts';
+import { RouteContext } from './routeContext.ts';
 import { useCanvasKeys } from './useCanvasKeys.ts';
 import { Dialogs } from '../panels/Dialogs.tsx';
 
@@ -54,6 +56,19 @@ function largeViewport(parts: readonly { readonly position?: { readonly x: numbe
   return { x: 24 - (corner?.x ?? 0) * zoom, y: 24 - (corner?.y ?? 0) * zoom, zoom };
 }
 
+/** Tidy layout: the chips arranged by signal flow (one undo step), then the whole design fitted in view. */
+function TidyButton() {
+  const store = useEditorStore();
+  const flow = useReactFlow();
+  const empty = useEditor((s) => s.design.parts.length === 0);
+  return (
+    <button type="button" className="rc-tidy-btn" disabled={empty} data-testid="tidy-layout" title="Arrange the chips by signal flow, left to right (one undo step)"
+      onClick={() => {
+        if (store.getState().apply(tidyLayout()).ok) requestAnimationFrame(() => void flow.fitView(fitViewOptions));
+      }}>Tidy layout</button>
+  );
+}
+
 export function Canvas() {
   const store = useEditorStore();
   const parts = useEditor((s) => s.design.parts);
@@ -82,6 +97,12 @@ export function Canvas() {
   // between chips come first (drawn beneath), so that the chips keep their order, the newest last.
   const nodes = useMemo<AnyNode[]>(() => (discreteNodes.length === 0 ? chipNodes : [...discreteNodes, ...chipNodes]), [chipNodes, discreteNodes]);
   const edges = useMemo(() => deriver.edges(nets, selectedWires, moving), [deriver, nets, selectedWires, moving]);
+  // Wires routed around chips from the design (not from a drag); each wire reads its own route.
+  const keeper = useRef<RouteKeeper | null>(null);
+  keeper.current ??= createRouteKeeper();
+  const routes = keeper.current;
+  useLayoutEffect(() => routes.update(parts, nets), [routes, parts, nets]);
+  useEffect(() => () => routes.dispose(), [routes]);
   const place = usePlacePart();
   useCanvasKeys();
 
@@ -167,6 +188,7 @@ export function Canvas() {
     return all.length > LARGE_DESIGN_PARTS ? largeViewport(all) : null;
   });
   return (
+    <RouteContext.Provider value={routes.store}>
     <div className={`rc-canvas${drag !== null ? ' rc-canvas--dragging' : ''}`} id={CANVAS_ID} onDragOver={onDragOver} onDrop={onDrop}>
       <ReactFlow<AnyNode, WireEdgeType>
         nodes={nodes}
@@ -202,11 +224,13 @@ export function Canvas() {
           <Legend />
         </Panel>
         <Panel position="top-right">
+          <TidyButton />
           <button type="button" className="rc-keys-btn" aria-label="Keyboard shortcuts" title="Keyboard shortcuts (?)" data-testid="shortcuts-button"
             onClick={() => store.getState().openDialog({ kind: 'keys' })}>?</button>
         </Panel>
       </ReactFlow>
       <Dialogs />
     </div>
+    </RouteContext.Provider>
   );
 }

@@ -10,6 +10,7 @@ import { memo, useEffect, useRef } from 'react';
 import { Handle, Position, useStore as useFlowStore, useUpdateNodeInternals, type NodeProps } from '@xyflow/react';
 import type { Part, Pin, Rail } from '../../rules/model/schema.ts';
 import { formatQuantity } from '../../rules/levels/units.ts';
+import { pullLabel, pullWords } from '../../rules/report/pullLabel.ts';
 import { CHIP_LOOK } from '../store/canvasViews.ts';
 import { useEditor, useEditorStore } from '../store/EditorProvider.tsx';
 import { useKeyed } from '../store/keyedView.ts';
@@ -27,15 +28,31 @@ function OwnRail({ id }: { id: string }) {
   return <span className="rc-pin-rail" style={railStyle(rail?.colour)} aria-label={`rail ${rail?.label ?? id}`} title={`on rail ${rail?.label ?? id}`} />;
 }
 
-const PinRow = memo(function PinRow({ pin, side, partRail }: { pin: Pin; side: Side; partRail: string }) {
+/**
+ * What a pin's tooltip says: its kind, its pull (an internal one is easily forgotten), the rail
+ * it runs on and the profile that sets its levels, by label with the id a person edits.
+ */
+export function pinTip(pin: Pin, partRail: string, partProfile: string, rails: readonly Rail[]): string {
+  const railId = pin.rail ?? partRail;
+  const rail = rails.find((r) => r.id === railId);
+  return [
+    `${pin.id}: ${GLYPH_TEXT[glyphKind(pin)]}`,
+    pin.pull === undefined ? 'no pull of its own' : `internal ${pullWords(pin.pull, rails)}`,
+    `rail ${rail === undefined ? railId : `${rail.label} (${rail.id})`}${pin.rail !== undefined && pin.rail !== partRail ? ', not its part\'s' : ''}`,
+    `profile ${pin.profile ?? partProfile}${pin.profile !== undefined ? ' (its own)' : ''}`,
+  ].join('\n');
+}
+
+const PinRow = memo(function PinRow({ pin, side, partRail, partProfile }: { pin: Pin; side: Side; partRail: string; partProfile: string }) {
   const kind = glyphKind(pin);
+  const rails = useEditor((s) => s.design.rails);
   const ownRail = pin.rail !== undefined && pin.rail !== partRail ? pin.rail : undefined;
-  const detail = [GLYPH_TEXT[kind], ownRail === undefined ? '' : `on rail ${ownRail}`, pin.profile === undefined ? '' : `profile ${pin.profile}`];
   return (
-    <div className={`rc-pin rc-pin--${side}`} data-pin={pin.id} title={`${pin.id}: ${detail.filter((t) => t !== '').join(', ')}`}>
+    <div className={`rc-pin rc-pin--${side}`} data-pin={pin.id} title={pinTip(pin, partRail, partProfile, rails)}>
       <Handle type="source" position={POSITION[side]} id={pin.id} className="rc-handle" />
       <PinGlyph kind={kind} side={side} />
       <span className="rc-pin-name">{pin.id}</span>
+      {pin.pull !== undefined && <span className="rc-pin-pull" data-pin-pull>{pullLabel(pin.pull, rails).split(' ')[0]}</span>}
       {ownRail !== undefined && <OwnRail id={ownRail} />}
     </div>
   );
@@ -56,8 +73,8 @@ function PinStub({ pin, side, partRail }: { pin: Pin; side: Side; partRail: stri
   );
 }
 
-function Rows({ pins, side, partRail, far }: { pins: readonly Pin[]; side: Side; partRail: string; far: boolean }) {
-  return <>{pins.map((p) => (far ? <PinStub key={p.id} pin={p} side={side} partRail={partRail} /> : <PinRow key={p.id} pin={p} side={side} partRail={partRail} />))}</>;
+function Rows({ pins, side, partRail, partProfile, far }: { pins: readonly Pin[]; side: Side; partRail: string; partProfile: string; far: boolean }) {
+  return <>{pins.map((p) => (far ? <PinStub key={p.id} pin={p} side={side} partRail={partRail} /> : <PinRow key={p.id} pin={p} side={side} partRail={partRail} partProfile={partProfile} />))}</>;
 }
 
 function Head({ id, part, rail, family }: { id: string; part: Part; rail: Rail | undefined; family: string }) {
@@ -97,17 +114,17 @@ function ChipNodeView({ id, selected }: NodeProps<ChipNodeType>) {
   return (
     <div className={`rc-chip${selected ? ' rc-chip--selected' : ''}${far ? ' rc-chip--far' : ''}${tier === 2 ? ' rc-chip--tiny' : ''}`} style={railStyle(rail?.colour)} data-part={id}>
       {layout.top.length > 0 && (
-        <div className="rc-strip rc-strip--top"><Rows pins={layout.top} side="top" partRail={part.rail} far={far} /></div>
+        <div className="rc-strip rc-strip--top"><Rows pins={layout.top} side="top" partRail={part.rail} partProfile={part.profile} far={far} /></div>
       )}
       {far ? <div className="rc-chip-head"><span className="rc-chip-id">{id}</span></div> : <Head id={id} part={part} rail={rail} family={family} />}
       {rows > 0 && (
         <div className="rc-chip-body">
-          <div className="rc-col rc-col--left"><Rows pins={layout.left} side="left" partRail={part.rail} far={far} /></div>
-          <div className="rc-col rc-col--right"><Rows pins={layout.right} side="right" partRail={part.rail} far={far} /></div>
+          <div className="rc-col rc-col--left"><Rows pins={layout.left} side="left" partRail={part.rail} partProfile={part.profile} far={far} /></div>
+          <div className="rc-col rc-col--right"><Rows pins={layout.right} side="right" partRail={part.rail} partProfile={part.profile} far={far} /></div>
         </div>
       )}
       {layout.bottom.length > 0 && (
-        <div className="rc-strip rc-strip--bottom"><Rows pins={layout.bottom} side="bottom" partRail={part.rail} far={far} /></div>
+        <div className="rc-strip rc-strip--bottom"><Rows pins={layout.bottom} side="bottom" partRail={part.rail} partProfile={part.profile} far={far} /></div>
       )}
     </div>
   );

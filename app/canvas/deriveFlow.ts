@@ -13,7 +13,7 @@ import type { XY } from '../store/editorStore.ts';
 import { chipSize, NODE_MARGIN } from './chipLayout.ts';
 
 export type ChipNode = Node<{ readonly part: string }, 'chip'>;
-export type WireEdge = Edge<{ net: string; label: string | null }, 'wire'>;
+export type WireEdge = Edge<{ net: string; label: string | null; pull: Net['pull'] | null }, 'wire'>;
 /** A part between chips (version 2) as a node. */
 export type DiscreteNode = Node<{ readonly discrete: string }, 'discrete'>;
 
@@ -138,7 +138,8 @@ export function createFlowDeriver() {
       const ids = wires.map(([a, b]) => wireId(net.id, a, b));
       const selectedKey = selected.size === 0 ? '' : ids.filter((id) => selected.has(id)).join('|');
       const label = net.label ?? net.id;
-      const key = `${ids.join('|')}\n${label}\n${selectedKey}\n${movingKey}`;
+      const pull = net.pull === undefined ? '' : `${net.pull.to}/${net.pull.ohms}`;
+      const key = `${ids.join('|')}\n${label}\n${pull}\n${selectedKey}\n${movingKey}`;
       // A changed net drawn the same (a waiver, a pull, a capacitance): the same edge objects.
       if (hit !== undefined && hit.key === key) {
         netCache.set(net.id, { ...hit, net, selectedKey });
@@ -156,8 +157,8 @@ export function createFlowDeriver() {
           sourceHandle: s.pin,
           target: t.part,
           targetHandle: t.pin,
-          // The first wire carries the net's name.
-          data: { net: net.id, label: k === 0 ? label : null },
+          // The first wire carries the net's name and its pull.
+          data: { net: net.id, label: k === 0 ? label : null, pull: k === 0 ? (net.pull ?? null) : null },
           selected: selected.has(ids[k]!),
           ...(moves ? { className: MOVING_WIRE } : {}),
         };

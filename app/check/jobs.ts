@@ -10,7 +10,7 @@ import type { DesignError } from '../../rules/model/paths.ts';
 import { readDesign } from '../../rules/model/reader.ts';
 import type { Design } from '../../rules/model/schema.ts';
 import type { Report } from '../../rules/report/reportSchema.ts';
-import { buildEditorReport } from '../library/reportExport.ts';
+import { buildEditorReport } from '../session/reportExport.ts';
 import { RailcrossDb } from '../storage/db.ts';
 import { Library, readDocument } from '../storage/library.ts';
 

@@ -3,7 +3,7 @@ import type { Part } from '../../rules/model/schema.ts';
 import { resolveProfile } from '../../rules/profiles/index.ts';
 import { glyphKind, GLYPH_TEXT, PinGlyph } from '../canvas/PinGlyph.tsx';
 import { sideOf } from '../canvas/chipLayout.ts';
-import { renamePart, setPartLabel, setPartProfile, setPartRail } from '../store/commands/index.ts';
+import { renamePart, setPartLabel, setPartProfile, setPartRail, setResetState } from '../store/commands/index.ts';
 import { useEditor, useEditorStore } from '../store/EditorProvider.tsx';
 import { TextField } from './Field.tsx';
 import { PinEffective } from './PinEffective.tsx';
@@ -49,6 +49,15 @@ export function PartDetails({ part }: { part: Part }) {
         Edit pins and overrides…
       </button>
       {overrides > 0 && <span className="rc-muted"> {overrides} override{overrides === 1 ? '' : 's'} for every pin</span>}
+      {part.pins.some((p) => p.role !== 'input') && (
+        <p>
+          <button type="button" data-testid="part-reset-state" onClick={() => apply(setResetState(part.id))}
+            title="In the power state “reset”, its outputs and bidir pins become inputs, as a controller's pins are before firmware runs">
+            Reset state
+          </button>
+          <span className="rc-muted"> its outputs as inputs before firmware runs</span>
+        </p>
+      )}
       <h4 className="rc-sub">Pins</h4>
       <ul className="rc-pin-list">
         {part.pins.map((pin) => {

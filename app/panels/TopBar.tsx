@@ -2,15 +2,15 @@
 import { useReactFlow } from '@xyflow/react';
 import type { Finding, Severity } from '../../rules/engine/types.ts';
 import { setTitle } from '../store/commands/index.ts';
-import { useSession } from '../library/SessionProvider.tsx';
+import { useSession } from '../session/SessionProvider.tsx';
 import { useEditor, useEditorStore } from '../store/EditorProvider.tsx';
 import { newDesign } from '../../rules/model/newDesign.ts';
 import { SeverityGlyph } from '../canvas/SeverityGlyph.tsx';
 import { fitViewOptions } from '../canvas/placement.ts';
 import { exampleDesign } from '../example.ts';
 import { TextField } from './Field.tsx';
-import { ExportMenu } from '../library/ExportMenu.tsx';
-import { LibraryButton } from '../library/LibraryButton.tsx';
+import { ExportMenu } from '../session/ExportMenu.tsx';
+import { LibraryButton } from '../session/LibraryButton.tsx';
 
 function countIn(findings: readonly Finding[], state: string, severity: Severity): number {
   let n = 0;

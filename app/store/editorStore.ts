@@ -32,7 +32,8 @@ export interface CheckStat {
   readonly ms: number;
 }
 
-export interface Notice {
+/** What the status line says after a command: refused with why, or done. (The library's notices are `StatusNote`.) */
+export interface StatusNote {
   readonly kind: 'refused' | 'done';
   readonly text: string;
 }
@@ -56,7 +57,7 @@ export interface EditorState {
   /** Worst severity per net in `powerState`. */
   readonly netStatus: ReadonlyMap<string, NetStatus>;
   readonly lastCheck: CheckStat;
-  readonly notice: Notice | null;
+  readonly notice: StatusNote | null;
   readonly dialog: Dialog | null;
   /** Opened read-only (a design too large to edit comfortably): every command is refused. */
   readonly readOnly: boolean;
@@ -66,7 +67,7 @@ export interface EditorState {
   redo(): boolean;
   select(selection: Partial<Selection>): void;
   setPowerState(id: string): void;
-  notify(notice: Notice | null): void;
+  notify(notice: StatusNote | null): void;
   openDialog(dialog: Dialog | null): void;
 }
 
@@ -80,7 +81,7 @@ export function createEditorStore(design: Design, options: { readonly readOnly?:
   const readOnly = options.readOnly === true;
   return createStore<EditorState>()((set, get) => {
     /** Take a new design: re-check against the previous result and keep the UI state consistent. */
-    function adopt(next: Design, action: string, history: Pick<EditorState, 'past' | 'future'>, notice: Notice | null): void {
+    function adopt(next: Design, action: string, history: Pick<EditorState, 'past' | 'future'>, notice: StatusNote | null): void {
       const s = get();
       const result = check(next, s.result);
       const powerState = result.states.some((st) => st.id === s.powerState) ? s.powerState : ALL_ON;

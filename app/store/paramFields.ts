@@ -48,6 +48,8 @@ export const PARAM_FIELDS: readonly ParamField[] = [
   { key: 'maxInputRamp', label: 'Ramp max', meaning: 'slowest input edge accepted', example: '10 ns/V', kind: { type: 'quantity', unit: 's/V' } },
   { key: 'unpoweredSafe', label: 'Safe off', meaning: 'may carry voltage while its chip is unpowered', example: 'yes or no', kind: { type: 'bool' } },
   { key: 'viMaxOff', label: 'VI max off', meaning: 'highest voltage the pin may see while unpowered', example: '3.6 V', kind: { type: 'volts' } },
+  { key: 'deltaIcc', label: 'ΔICC', meaning: 'extra supply current per input held high below its supply', example: '0.5 mA', kind: { type: 'quantity', unit: 'A' } },
+  { key: 'deltaIccDrop', label: 'ΔICC at', meaning: 'how far below its supply the input is held for ΔICC', example: '2.1 V', kind: { type: 'volts' } },
   { key: 'vddRange', label: 'VDD range', meaning: 'supply range over which the numbers hold', example: '1.65 … 3.6', kind: { type: 'range' } },
   { key: 'viMin', label: 'VI min', meaning: 'lowest voltage the pin may see while powered', example: '-0.5', kind: { type: 'level' } },
   { key: 'injectionMax', label: 'I inj max', meaning: 'largest current its clamp diodes may carry', example: '2 mA', kind: { type: 'quantity', unit: 'A' } },

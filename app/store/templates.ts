@@ -85,16 +85,23 @@ function template(spec: Spec): Template {
   };
 }
 
+/**
+ * The usual supply of a family whose range is wide enough that its middle misleads: 74HC spans
+ * 2–6 V but is mostly run at 5 V (common practice).
+ */
+const USUAL_SUPPLY: Readonly<Record<string, number>> = { '74hc': 5 };
+const usual = (family: string) => (USUAL_SUPPLY[family] === undefined ? {} : { preferred: USUAL_SUPPLY[family] });
+
 function gate(family: string): Template {
   return template({
-    id: `gate:${family}`, name: 'Single gate', profiles: [family], prefix: 'U',
+    id: `gate:${family}`, name: 'Single gate', profiles: [family], prefix: 'U', ...usual(family),
     pins: () => [input('A'), input('B'), output('Y')],
   });
 }
 
 function buffer(family: string): Template {
   return template({
-    id: `buffer:${family}`, name: 'Octal buffer', profiles: [family], prefix: 'U',
+    id: `buffer:${family}`, name: 'Octal buffer', profiles: [family], prefix: 'U', ...usual(family),
     pins: () => [
       input('OE_N'),
       ...Array.from({ length: 8 }, (_, k) => input(`A${k + 1}`)),
@@ -128,8 +135,9 @@ function mcu(n: 8 | 16): Template {
       ...range('OUT', io, (id) => output(id)),
       ...(n === 16
         ? [
-            { id: 'SDA', role: 'bidir', drive: 'open-drain', side: 'left' } satisfies Pin,
-            { id: 'SCL', role: 'bidir', drive: 'open-drain', side: 'left' } satisfies Pin,
+            // The two-wire pins are bus pins: the I2C-bus specification's levels, not the GPIO rows.
+            { id: 'SDA', role: 'bidir', drive: 'open-drain', profile: 'i2c', side: 'left' } satisfies Pin,
+            { id: 'SCL', role: 'bidir', drive: 'open-drain', profile: 'i2c', side: 'left' } satisfies Pin,
             output('TX'), input('RX'),
           ]
         : []),

@@ -64,7 +64,7 @@ export default defineRule({
       }
       // No threshold at all: nothing to overdrive against (rMax stays +∞); NaN is undecided.
       if (rMax === Infinity) continue;
-      const high = p.ohms * (1 + (p.tolerance ?? 0));
+      const high = p.max;
       if (Number.isFinite(rMax) && Number.isFinite(high) && !exceeds(high, rMax)) continue;
       const pull = p.origin === 'net' ? `the net's pull to ${p.to}` : p.resistor === true ? p.origin : `${p.origin}'s internal pull`;
       const keys = holders.map((h) => h.key);

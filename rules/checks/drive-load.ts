@@ -75,8 +75,10 @@ export default defineRule({
       if (load === undefined) continue;
       const { ioMax } = driver.params;
       const canDriveHigh = driver.drive !== 'open-drain';
-      const ratedHigh = canDriveHigh ? (largestTestCurrent(driver.params.voh) ?? null) : null;
-      const ratedLow = largestTestCurrent(driver.params.vol) ?? null;
+      // Rows tabulated from some supply up count only when the rail's lowest voltage reaches it.
+      const vddLow = view.rails.ranges.get(driver.rail)?.min ?? 0;
+      const ratedHigh = canDriveHigh ? (largestTestCurrent(driver.params.voh, vddLow) ?? null) : null;
+      const ratedLow = largestTestCurrent(driver.params.vol, vddLow) ?? null;
       const high = canDriveHigh ? judge(load.high, ratedHigh ?? undefined, ioMax) : undefined;
       const low = judge(load.low, ratedLow ?? undefined, ioMax);
       if (high === undefined && low === undefined) continue;

@@ -6,7 +6,7 @@
 import { exceeds, higherScore } from '../levels/compare.ts';
 import { levelAt } from '../levels/level.ts';
 import { corners } from '../levels/rails.ts';
-import { sortedPoints } from '../levels/output.ts';
+import { rowsAt } from '../levels/output.ts';
 import { parallelResistance, pullRails, thevenin } from '../engine/netMath.ts';
 import type { NetView, PinView, RailStates } from '../engine/types.ts';
 import { RISE_10_90, RISE_30_70 } from '../levels/rc.ts';
@@ -34,7 +34,8 @@ interface EdgeSource {
 function outputResistance(driver: PinView, rails: RailStates): number | undefined {
   const voh = driver.params.voh;
   if (voh === undefined || voh.length < 2) return undefined;
-  const sorted = sortedPoints(voh);
+  const sorted = rowsAt(voh, rails.ranges.get(driver.rail)?.min ?? 0);
+  if (sorted.length < 2) return undefined;
   const a = sorted[sorted.length - 2]!;
   const b = sorted[sorted.length - 1]!;
   const di = b.i - a.i;
@@ -57,7 +58,8 @@ function edgeSource(view: NetView, except?: string): EdgeSource | undefined {
     return { driver: view.pathEdge.driver, resistance: view.pathEdge.resistance, swing: view.pathEdge.swing, through: true };
   }
   if (view.highFromPull) {
-    const resistance = parallelResistance(view.pulls)!;
+    // The pulls at the top of their ranges: the slowest edge.
+    const resistance = parallelResistance(view.pulls, 'max')!;
     let swing = Infinity;
     for (const c of corners(pullRails(view.pulls), view.rails.ranges)) swing = Math.min(swing, thevenin(view.pulls, c)!.v);
     return { driver: null, resistance, swing };

@@ -63,7 +63,7 @@ function pullUpCurrent(node: PathNode, corner: ReadonlyMap<string, number>, vol:
   for (const p of node.pulls) {
     if (p.to === GROUND) continue;
     const end = pullEndVoltage(p, corner);
-    if (end > vol) i += (end - vol) / (p.ohms * (1 - (p.tolerance ?? 0)));
+    if (end > vol) i += (end - vol) / p.min;
   }
   return i;
 }

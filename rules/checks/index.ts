@@ -24,6 +24,7 @@ import translatorPull from './translator-pull.ts';
 import busHold from './bus-hold.ts';
 import railRange from './rail-range.ts';
 import railCrossing from './rail-crossing.ts';
+import interfacePower from './interface-power.ts';
 
 const REGISTRY: { readonly [I in RuleId]: RuleOf<I> } = {
   'level-high': levelHigh,
@@ -44,6 +45,7 @@ const REGISTRY: { readonly [I in RuleId]: RuleOf<I> } = {
   'bus-hold': busHold,
   'rail-range': railRange,
   'rail-crossing': railCrossing,
+  'interface-power': interfacePower,
 };
 
 /** Every rule, in the catalogue's order. */

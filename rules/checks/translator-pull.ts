@@ -43,7 +43,7 @@ interface CapData {
 
 /** External pulls: the net's own and resistor parts, not pins' internal ones. */
 const external = (p: PullSource) => p.origin === 'net' || p.resistor === true;
-const lowEnd = (p: PullSource) => p.ohms * (1 - (p.tolerance ?? 0));
+const lowEnd = (p: PullSource) => p.min;
 const pullName = (p: PullSource) => (p.origin === 'net' ? `the net's pull to ${p.to}` : `${p.origin} to ${p.to}`);
 
 export default defineRule({

@@ -44,7 +44,8 @@ function highSide(input: AnalysisInput, driver: PinView, receiver: PinView, sumI
     if (!input.highFromPull) return null;
     const railIds = [...pullRails(input.pulls), receiver.rail];
     const worst = worstCorner<Scored>(railIds, rails, (c) => {
-      const th = thevenin(input.pulls, c)!;
+      // The pulls at the top of their ranges: the weakest pull-up gives the lowest high level.
+      const th = thevenin(input.pulls, c, 'max')!;
       const out = th.v - th.r * sumIih;
       const receiverVdd = c.get(receiver.rail) ?? 0;
       const threshold = levelAt(vih, receiverVdd);

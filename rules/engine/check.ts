@@ -160,7 +160,7 @@ function contextFor(design: Design, state: PowerState, index: DesignIndex, rules
  * is off sees exactly what it sees in `all-on`: its result there is re-stamped for this state.
  */
 function checkNet(ctx: StateContext, net: Net, allOn?: NetResult): NetResult {
-  if (allOn !== undefined && allOn.net === net && ctx.state.id !== ALL_ON && !touchesOff(allOn, ctx.state)) {
+  if (allOn !== undefined && allOn.net === net && ctx.state.id !== ALL_ON && !touchesOff(allOn, ctx.state) && !setsPins(net, ctx.state)) {
     return {
       net,
       view: allOn.view,
@@ -174,6 +174,13 @@ function checkNet(ctx: StateContext, net: Net, allOn?: NetResult): NetResult {
     rule.checkNet(view, (draft) => findings.push(completeFinding(rule, draft, ctx.state, net)));
   }
   return { net, view, findings };
+}
+
+/** Whether the state gives a pin of the net another role, drive or pull. */
+function setsPins(net: Net, state: PowerState): boolean {
+  if (state.pins.size === 0) return false;
+  for (const key of net.pins) if (state.pins.has(key)) return true;
+  return false;
 }
 
 function touchesOff(r: NetResult, state: PowerState): boolean {
@@ -195,15 +202,16 @@ function checkLonePin(ctx: StateContext, pin: PinView): Finding[] {
 
 /**
  * A lone pin in one power state. In a scenario, a pin none of whose rails (its own, its pull's)
- * is off is judged as in `all-on`: its findings there are re-stamped (none there, none here).
+ * is off, and whose role, drive and pull the state leaves alone, is judged as in `all-on`: its
+ * findings there are re-stamped (none there, none here).
  */
 function judgeLonePin(ctx: StateContext, index: DesignIndex, key: string, allOn: LoneTable | undefined): readonly Finding[] {
   const at = index.pins.get(key)!;
   const off = ctx.state.off;
-  if (allOn !== undefined && !off.has(at.rail) && (at.pullTo === undefined || !off.has(at.pullTo))) {
+  if (allOn !== undefined && !off.has(at.rail) && (at.pullTo === undefined || !off.has(at.pullTo)) && !ctx.state.pins.has(key)) {
     return (allOn.get(key) ?? []).map((f) => restampFinding(f, ctx.state, null));
   }
-  return checkLonePin(ctx, pinView(at, ctx.rails));
+  return checkLonePin(ctx, pinView(at, ctx.rails, ctx.state));
 }
 
 /** One (rail, profile) group, judged in `all-on`. */
@@ -379,6 +387,8 @@ function whatChanged(design: Design, prev: CheckResult, index: DesignIndex): Cha
     const id = (now ?? old)!.id;
     for (const g of index.groupsOfRail.get(id) ?? []) dirty.groups.add(g);
     index.touchingRail(id, dirty.nets, dirty.lone);
+    // A pin that a power state pulls to this rail depends on it too.
+    for (const sc of design.scenarios ?? []) for (const p of sc.pins ?? []) if (p.pull?.to === id) dirty.pins.add(p.pin);
   });
 
   // Design-local profiles: every pin that uses a changed id.

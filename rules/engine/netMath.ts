@@ -5,7 +5,7 @@
 import type { Corner, Range } from '../levels/rails.ts';
 import { corners } from '../levels/rails.ts';
 import { levelAt } from '../levels/level.ts';
-import { sortedPoints } from '../levels/output.ts';
+import { rowsAt } from '../levels/output.ts';
 import { higherScore, lowerScore } from '../levels/compare.ts';
 import type { DriverLoad, PinView, PullSource, RailStates } from './types.ts';
 import { GROUND } from './powerStates.ts';
@@ -30,8 +30,15 @@ export interface Thevenin {
   readonly v: number;
 }
 
-/** `R = 1/Σ(1/Rk)`, `Vpull = R × Σ(Vk/Rk)`, each Vk at the corner. Undefined without pulls. */
-export function thevenin(pulls: readonly PullSource[], corner: Corner): Thevenin | undefined {
+/** Which value of each pull's range: as given, or the end that is worst for the check at hand. */
+export type PullEnd = 'ohms' | 'min' | 'max';
+
+/**
+ * `R = 1/Σ(1/Rk)`, `Vpull = R × Σ(Vk/Rk)`, each Vk at the corner. `R` is taken at the pulls'
+ * `end` (the largest for a high level or a rise time); `Vpull` at their given values, since a
+ * spread of the resistors hardly moves it. Undefined without pulls.
+ */
+export function thevenin(pulls: readonly PullSource[], corner: Corner, end: PullEnd = 'ohms'): Thevenin | undefined {
   if (pulls.length === 0) return undefined;
   let g = 0;
   let i = 0;
@@ -40,14 +47,14 @@ export function thevenin(pulls: readonly PullSource[], corner: Corner): Thevenin
     i += pullEndVoltage(p, corner) / p.ohms;
   }
   const r = 1 / g;
-  return { r, v: r * i };
+  return { r: end === 'ohms' ? r : parallelResistance(pulls, end)!, v: r * i };
 }
 
-/** The parallel resistance of the pulls, Ω (undefined without pulls). */
-export function parallelResistance(pulls: readonly PullSource[]): number | undefined {
+/** The parallel resistance of the pulls at the given end of their ranges, Ω (undefined without pulls). */
+export function parallelResistance(pulls: readonly PullSource[], end: PullEnd = 'ohms'): number | undefined {
   if (pulls.length === 0) return undefined;
   let g = 0;
-  for (const p of pulls) g += 1 / p.ohms;
+  for (const p of pulls) g += 1 / p[end];
   return 1 / g;
 }
 
@@ -81,18 +88,17 @@ export function driverLoad(
   const volPoints = driver.params.vol;
   let volAtTop = 0;
   if (volPoints !== undefined && volPoints.length > 0) {
-    const sorted = sortedPoints(volPoints);
-    volAtTop = levelAt(sorted[sorted.length - 1]!.v, own.max);
+    const sorted = rowsAt(volPoints, own.min);
+    if (sorted.length > 0) volAtTop = levelAt(sorted[sorted.length - 1]!.v, own.max);
   }
   for (const pull of pulls) {
     const end = pullEndRange(pull, rails);
-    // A resistor part at its low tolerance end draws the most (a `pull` field is exact).
-    const ohms = pull.ohms * (1 - (pull.tolerance ?? 0));
     // A pull whose end can sit below the driver's rail draws current from a high output.
     const below = pull.to === GROUND || rails.off.has(pull.to) || end.min < own.max;
-    if (below && pull.to !== driver.rail) high += (own.max - end.min) / ohms;
+    // Currents are bounds: each pull at the low end of its range.
+    if (below && pull.to !== driver.rail) high += (own.max - end.min) / pull.min;
     // A pull to a powered rail feeds current into a low output.
-    if (pull.to !== GROUND && !rails.off.has(pull.to)) low += (end.max - volAtTop) / ohms;
+    if (pull.to !== GROUND && !rails.off.has(pull.to)) low += (end.max - volAtTop) / pull.min;
   }
   return { high, low };
 }

@@ -15,7 +15,8 @@
  *
  * A path's pairs are reported on the receiver's net, so that each net keeps its own findings.
  */
-import type { Net } from '../model/schema.ts';
+import type { Net, Pull } from '../model/schema.ts';
+import { pullEnds } from '../model/pullRange.ts';
 import { DEFAULT_RESISTOR_TOLERANCE, type DiodeShifter, type Discrete, type FetShifter } from '../model/schema.ts';
 import type { Corner, Range } from '../levels/rails.ts';
 import { corners } from '../levels/rails.ts';
@@ -55,7 +56,14 @@ function tiedPull(d: Discrete, end: '1' | '2', netId: string, src: PathSource): 
   const other = end === '1' ? '2' : '1';
   const to = d.tie?.[other];
   if (to === undefined || src.netOfPin.get(`${d.id}.${end}`) !== netId) return undefined;
-  return { ohms: d.ohms, to, origin: d.id, tolerance: d.tolerance ?? DEFAULT_RESISTOR_TOLERANCE, resistor: true };
+  const tolerance = d.tolerance ?? DEFAULT_RESISTOR_TOLERANCE;
+  return { ohms: d.ohms, min: d.ohms * (1 - tolerance), max: d.ohms * (1 + tolerance), to, origin: d.id, tolerance, resistor: true };
+}
+
+/** A `pull` field as the engine sees it (prepare.ts `pullSource`, repeated: prepare imports this module). */
+function fieldPull(pull: Pull, origin: string): PullSource {
+  const ends = pullEnds(pull);
+  return { ohms: pull.ohms, min: ends.min, max: ends.max, to: pull.to, origin };
 }
 
 /** The pulls that resistor parts put on a net (empty for a net without discretes). */
@@ -76,8 +84,8 @@ export function resistorPulls(netId: string, src: PathSource): PullSource[] {
 export function nodeOf(net: Net, src: PathSource): PathNode {
   const pins = src.pinsOf(net);
   const pulls: PullSource[] = [];
-  if (net.pull !== undefined) pulls.push({ ohms: net.pull.ohms, to: net.pull.to, origin: 'net' });
-  for (const p of pins) if (p.pull !== undefined) pulls.push({ ohms: p.pull.ohms, to: p.pull.to, origin: p.key });
+  if (net.pull !== undefined) pulls.push(fieldPull(net.pull, 'net'));
+  for (const p of pins) if (p.pull !== undefined) pulls.push(fieldPull(p.pull, p.key));
   pulls.push(...resistorPulls(net.id, src));
   let capacitance = net.wiringCapacitance ?? src.wiring;
   for (const p of pins) capacitance += p.params.cin ?? 0;
@@ -157,8 +165,8 @@ export function linkedRails(path: ResistorPath | undefined, shifters: readonly S
 // Cases: rail corners × tolerance ends.
 
 interface Tolerant {
-  readonly ohms: number;
-  readonly tolerance: number;
+  readonly lo: number;
+  readonly hi: number;
 }
 
 /** The resistances of one case: series resistors, then each node's pulls in order. */
@@ -174,9 +182,9 @@ interface CaseOhms {
  */
 function toleranceCases(path: ResistorPath, only?: 'min' | 'max'): CaseOhms[] {
   const items: Tolerant[] = [];
-  for (const r of path.resistors) items.push(r);
-  for (const n of path.nodes) for (const p of n.pulls) items.push({ ohms: p.ohms, tolerance: p.tolerance ?? 0 });
-  const varying = items.map((t, k) => (t.tolerance > 0 ? k : -1)).filter((k) => k >= 0);
+  for (const r of path.resistors) items.push({ lo: r.ohms * (1 - r.tolerance), hi: r.ohms * (1 + r.tolerance) });
+  for (const n of path.nodes) for (const p of n.pulls) items.push({ lo: p.min, hi: p.max });
+  const varying = items.map((t, k) => (t.hi !== t.lo ? k : -1)).filter((k) => k >= 0);
   const split = (ohms: number[]): CaseOhms => {
     let at = path.resistors.length;
     const series = ohms.slice(0, at);
@@ -187,15 +195,15 @@ function toleranceCases(path: ResistorPath, only?: 'min' | 'max'): CaseOhms[] {
     });
     return { series, pulls };
   };
-  const allAt = (up: boolean) => split(items.map((t) => t.ohms * (up ? 1 + t.tolerance : 1 - t.tolerance)));
+  const allAt = (up: boolean) => split(items.map((t) => (up ? t.hi : t.lo)));
   if (only !== undefined) return [allAt(only === 'max')];
   if (varying.length > MAX_TOLERANT) return [allAt(false), allAt(true)];
   const out: CaseOhms[] = [];
   for (let mask = 0; mask < 1 << varying.length; mask++) {
-    const ohms = items.map((t) => t.ohms);
+    const ohms = items.map((t) => t.lo);
     varying.forEach((k, j) => {
       const t = items[k]!;
-      ohms[k] = t.ohms * (((mask >> j) & 1) === 1 ? 1 + t.tolerance : 1 - t.tolerance);
+      ohms[k] = ((mask >> j) & 1) === 1 ? t.hi : t.lo;
     });
     out.push(split(ohms));
   }
@@ -298,7 +306,7 @@ function pullCurrentAt(node: PathNode, corner: Corner, v: number): number {
   let i = 0;
   for (const p of node.pulls) {
     const end = pullEndVoltage(p, corner);
-    if (end > v) i += (end - v) / (p.ohms * (1 - (p.tolerance ?? 0)));
+    if (end > v) i += (end - v) / p.min;
   }
   for (const p of node.pins) i += p.params.iil ?? 0;
   return i;
@@ -460,7 +468,7 @@ function pulledHigh(node: PathNode, corner: Corner, extraCurrent: number): { v: 
   let g = 0;
   let i = 0;
   for (const p of node.pulls) {
-    const r = p.ohms * (1 + (p.tolerance ?? 0));
+    const r = p.max;
     g += 1 / r;
     i += pullEndVoltage(p, corner) / r;
   }

@@ -1,5 +1,5 @@
 /** Power states and the rail ranges that hold in each. */
-import type { Design } from '../model/schema.ts';
+import type { Design, PinState } from '../model/schema.ts';
 import { DEFAULT_MIN_MARGIN, DEFAULT_WIRING_CAPACITANCE } from '../model/schema.ts';
 import { railRange, type Range } from '../levels/rails.ts';
 import type { EffectiveSettings, PowerState, RailStates } from './types.ts';
@@ -7,11 +7,14 @@ import type { EffectiveSettings, PowerState, RailStates } from './types.ts';
 export const ALL_ON = 'all-on';
 export const ALL_ON_LABEL = 'All rails on';
 
+const NO_PINS: ReadonlyMap<string, PinState> = new Map();
+
 /** `all-on` first, then the design's scenarios in the file's order. */
 export function powerStates(design: Design): PowerState[] {
-  const states: PowerState[] = [{ id: ALL_ON, label: ALL_ON_LABEL, off: new Set(), scenario: undefined }];
+  const states: PowerState[] = [{ id: ALL_ON, label: ALL_ON_LABEL, off: new Set(), pins: NO_PINS, scenario: undefined }];
   for (const s of design.scenarios ?? []) {
-    states.push({ id: s.id, label: s.label, off: new Set(s.off), scenario: s });
+    const pins = s.pins === undefined || s.pins.length === 0 ? NO_PINS : new Map(s.pins.map((p) => [p.pin, p]));
+    states.push({ id: s.id, label: s.label, off: new Set(s.off), pins, scenario: s });
   }
   return states;
 }

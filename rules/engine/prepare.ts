@@ -2,7 +2,8 @@
  * Preparing a net once per power state: its pins resolved, drivers and receivers by kind, pulls,
  * capacitance, load currents and the level analysis. Every rule reads this one view.
  */
-import type { Design, Discrete, Net } from '../model/schema.ts';
+import type { Design, Discrete, Net, PinState, Pull } from '../model/schema.ts';
+import { pullEnds } from '../model/pullRange.ts';
 import { analyseNet } from './analyse.ts';
 import { linkedRails, linksOf, nodeOf, pathEdgeOf, pathLoad, remoteDriversOf, remotePairs, shifterLoad, type PathSource } from './paths.ts';
 import { driverLoad } from './netMath.ts';
@@ -15,9 +16,21 @@ import type { DriverLoad, EffectiveSettings, NetView, PinView, PowerState, PullS
 /** Where each `PART.PIN` of the design lives, with its resolution (the engine's index). */
 export type PinIndex = ReadonlyMap<string, PinEntry>;
 
-/** A pin in a power state: powered unless its rail is off (or unknown to the design). */
-export function pinView(at: PinEntry, rails: RailStates): PinView {
-  return viewOf(at.resolution, !rails.off.has(at.rail) && rails.ranges.has(at.rail));
+/**
+ * A pin in a power state: powered unless its rail is off (or unknown to the design), with the
+ * role, drive and internal pull the state gives it (a controller's pins at reset).
+ */
+export function pinView(at: PinEntry, rails: RailStates, state?: PowerState): PinView {
+  const view = viewOf(at.resolution, !rails.off.has(at.rail) && rails.ranges.has(at.rail));
+  const set = state?.pins.get(view.key);
+  return set === undefined ? view : withState(view, set);
+}
+
+function withState(view: PinView, set: PinState): PinView {
+  const role = set.role ?? view.role;
+  const drive = role === 'input' ? undefined : set.drive ?? (set.role === undefined ? view.drive : view.pin.drive ?? (role === 'output' ? 'push-pull' : 'three-state'));
+  const pull = set.pull === undefined ? view.pull : set.pull === null ? undefined : set.pull;
+  return { ...view, role, drive, pull };
 }
 
 export interface PrepareContext {
@@ -35,6 +48,12 @@ export interface PrepareContext {
   };
 }
 
+/** A pull as the engine sees it: its value and the ends of its range. */
+export function pullSource(pull: Pull, origin: string): PullSource {
+  const ends = pullEnds(pull);
+  return { ohms: pull.ohms, min: ends.min, max: ends.max, to: pull.to, origin };
+}
+
 const NONE: readonly never[] = Object.freeze([]);
 
 /** A shifter's pin on the other side. */
@@ -44,7 +63,7 @@ function pinsOfNet(ctx: PrepareContext, net: Net): PinView[] {
   const pins: PinView[] = [];
   for (const key of net.pins) {
     const at = ctx.pinIndex.get(key);
-    if (at !== undefined) pins.push(pinView(at, ctx.rails));
+    if (at !== undefined) pins.push(pinView(at, ctx.rails, ctx.state));
   }
   return pins;
 }
@@ -60,8 +79,8 @@ export function prepareNet(ctx: PrepareContext, net: Net): NetView {
   const unpowered = pins.filter((p) => !p.powered);
 
   const pulls: PullSource[] = [];
-  if (net.pull !== undefined) pulls.push({ ohms: net.pull.ohms, to: net.pull.to, origin: 'net' });
-  for (const p of pins) if (p.pull !== undefined) pulls.push({ ohms: p.pull.ohms, to: p.pull.to, origin: p.key });
+  if (net.pull !== undefined) pulls.push(pullSource(net.pull, 'net'));
+  for (const p of pins) if (p.pull !== undefined) pulls.push(pullSource(p.pull, p.key));
 
   let capacitance = net.wiringCapacitance ?? settings.defaultWiringCapacitance;
   for (const p of pins) capacitance += p.params.cin ?? 0;

@@ -9,7 +9,7 @@ import type { ParamOrigin, PinView, ResolvedPin } from './types.ts';
 
 const PARAM_KEYS: readonly (keyof Params)[] = [
   'vih', 'vil', 'schmitt', 'iih', 'iil', 'cin', 'viMax', 'unpoweredSafe', 'viMaxOff',
-  'voh', 'vol', 'ioMax', 'maxInputRamp', 'vddRange',
+  'voh', 'vol', 'ioMax', 'maxInputRamp', 'vddRange', 'deltaIcc', 'deltaIccDrop',
   'viMin', 'injectionMax', 'busHold', 'seriesResistance', 'minExternalPull', 'maxLoadCapacitance',
 ];
 

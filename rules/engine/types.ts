@@ -2,7 +2,7 @@
  * The engine's prepared views and results. Everything here lives outside the design document:
  * the document stays plain (architecture.md, "The engine's contract").
  */
-import type { Design, Discrete, DiodeShifter, FetShifter, Net, Params, Pin, PinDrive, PinRole, Profile, Pull, Rail, Scenario, Waiver } from '../model/schema.ts';
+import type { Design, Discrete, DiodeShifter, FetShifter, Net, Params, Pin, PinDrive, PinRole, PinState, Profile, Pull, Rail, Scenario, Waiver } from '../model/schema.ts';
 import type { RuleId } from '../model/ruleIds.ts';
 import type { Range } from '../levels/rails.ts';
 import type { FindingValues } from './values.ts';
@@ -34,6 +34,8 @@ export interface PowerState {
   readonly id: string;
   readonly label: string;
   readonly off: ReadonlySet<string>;
+  /** Pins whose role, drive or internal pull differ in this state, by `PART.PIN`. */
+  readonly pins: ReadonlyMap<string, PinState>;
   readonly scenario: Scenario | undefined;
 }
 
@@ -45,6 +47,9 @@ export interface PinView extends ResolvedPin {
 /** A pull resistor of a net: the net's own, or a pin's internal one. */
 export interface PullSource {
   readonly ohms: number;
+  /** The ends of its range, Ω (both `ohms` unless the pull gives a tolerance or min/max). */
+  readonly min: number;
+  readonly max: number;
   /** Rail id, or `ground`. */
   readonly to: string;
   /**

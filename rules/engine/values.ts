@@ -102,14 +102,37 @@ export interface MissingPullValues {
   readonly drivers: readonly string[];
 }
 
-export interface PullRangeValues {
+/** The advice for the net's own pull-up (README, "Pull-up advice"). */
+export interface PullAdviceValues {
+  readonly suggested: number | null;
+  readonly suggestedSeries: string | null;
+  /** The largest value inside the range (lowest power), offered beside the suggestion. */
+  readonly lowestPower: number | null;
+  readonly adviceTo: string;
+  readonly adviceMin: number | null;
+  readonly adviceMax: number | null;
+  readonly adviceTolerance: number;
+  readonly adviceCap: number | null;
+  readonly riseGuard: number | null;
+  readonly othersOhms: number | null;
+  readonly suggestedRise: number | null;
+  readonly suggestedHigh: number | null;
+  readonly suggestedLow: number | null;
+  readonly suggestedSink: number | null;
+}
+
+export interface PullRangeValues extends Partial<PullAdviceValues> {
+  /** Every pull-up to a powered rail together (parallel), nominal; and at the strong and weak ends. */
   readonly ohms: number;
+  readonly ohmsMin: number;
+  readonly ohmsMax: number;
   /** Null when the drivers cannot sink the loads at all. */
   readonly rMin: number | null;
   /** Null when nothing bounds it from above. */
   readonly rMax: number | null;
   readonly empty: boolean;
   readonly suggested: number | null;
+  readonly lowestPower: number | null;
   readonly rMinDriver: string | null;
   readonly rMinCorner: CornerValues | null;
   readonly rMaxBy: 'level' | 'rise-time' | null;
@@ -222,6 +245,19 @@ export interface BusHoldValues {
   readonly toward: 'high' | 'low';
 }
 
+export interface InterfacePowerValues {
+  readonly pin: string;
+  readonly driver: string;
+  readonly rail: string;
+  /** ΔICC, the extra supply current of the input, A. */
+  readonly current: number;
+  /** How far below its supply the input must be held for ΔICC to flow, V. */
+  readonly drop: number;
+  readonly high: number;
+  readonly threshold: number;
+  readonly corner: CornerValues;
+}
+
 /** Every rule's values, by rule id: the compiler holds this table complete. */
 export interface RuleValues {
   readonly 'level-high': LevelHighValues;
@@ -242,6 +278,7 @@ export interface RuleValues {
   readonly 'bus-hold': BusHoldValues;
   readonly 'rail-range': RailRangeValues;
   readonly 'rail-crossing': RailCrossingValues;
+  readonly 'interface-power': InterfacePowerValues;
 }
 
 // A new rule id without its values type fails here.

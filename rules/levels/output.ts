@@ -5,6 +5,8 @@
 /** A guaranteed output level `v` (a Level) at a load current `i` (A): the model's OutputPoint. */
 export interface OutputPoint {
   readonly v: string | number;
+  /** The lowest supply the row holds at, V (from it up); every supply when absent. */
+  readonly vddMin?: number | undefined;
   readonly i: number;
 }
 import { levelAt } from './level.ts';
@@ -27,11 +29,26 @@ export function sortedPoints(points: readonly OutputPoint[]): readonly OutputPoi
   return points;
 }
 
-/** The largest test current of a list, or undefined for an empty or missing list. */
-export function largestTestCurrent(points: readonly OutputPoint[] | undefined): number | undefined {
+/**
+ * The rows guaranteed at supply `vdd`, sorted by test current: a row with a `vddMin` (a
+ * datasheet's column tabulated from that supply up) counts only from there (1e-9 relative slack).
+ */
+export function rowsAt(points: readonly OutputPoint[], vdd: number): readonly OutputPoint[] {
+  const sorted = sortedPoints(points);
+  if (!sorted.some((p) => p.vddMin !== undefined)) return sorted;
+  return sorted.filter((p) => p.vddMin === undefined || !exceeds(p.vddMin, vdd));
+}
+
+/**
+ * The largest test current of a list, or undefined for an empty or missing list; with `vdd`,
+ * of the rows guaranteed at that supply (a driver's is taken at its rail's lowest voltage).
+ */
+export function largestTestCurrent(points: readonly OutputPoint[] | undefined, vdd?: number): number | undefined {
   if (points === undefined || points.length === 0) return undefined;
-  let m = points[0]!.i;
-  for (const p of points) if (p.i > m) m = p.i;
+  const rows = vdd === undefined ? points : rowsAt(points, vdd);
+  if (rows.length === 0) return undefined;
+  let m = rows[0]!.i;
+  for (const p of rows) if (p.i > m) m = p.i;
   return m;
 }
 
@@ -40,10 +57,14 @@ export function largestTestCurrent(points: readonly OutputPoint[] | undefined): 
  * `vdd`: the entry with the smallest test current that is at least the load. Above the largest
  * test current there is no guarantee: the straight line through the last two points,
  * extrapolated to the load, never better than the last guaranteed point; with a single point,
- * that point. The line stops at the output's own rails, 0 V for a high level and `vdd` for a low
+ * the resistive line through the origin, as if the output were a resistor from its own rail
+ * (VOL · I/I_row for a low level, VDD − (VDD − VOH) · I/I_row for a high one), or that point's
+ * level when its test current is 0 A (no line can be drawn). The line stops at the output's own rails, 0 V for a high level and `vdd` for a low
  * one (an output stage cannot swing beyond its supply: common practice), so that test points
- * a hair apart never extrapolate to astronomical or infinite volts. A load or supply that is
- * not finite gives NaN (no guarantee), never a clamped level. Undefined for an empty list.
+   * a hair apart never extrapolate to astronomical or infinite volts. A load or supply that is
+   * not finite gives NaN (no guarantee), never a clamped level. Rows with a `vddMin` above `vdd`
+   * do not count; when none counts, all are read and the level is an estimate. Undefined for an
+   * empty list.
  */
 export function outputLevel(
   points: readonly OutputPoint[] | undefined,
@@ -55,19 +76,30 @@ export function outputLevel(
   // A load or supply that is not a finite number guarantees nothing: NaN, which every
   // comparison of the rules (rules/levels/compare.ts) judges as a failure.
   if (!Number.isFinite(load) || !Number.isFinite(vdd)) return { v: Number.NaN, atCurrent: load, estimate: true };
-  const sorted = sortedPoints(points);
+  const guaranteed = rowsAt(points, vdd);
+  // No row holds at this supply: the rows are read all the same, and every level is an estimate.
+  const sorted = guaranteed.length > 0 ? guaranteed : sortedPoints(points);
   for (const p of sorted) {
-    if (!exceeds(load, p.i)) return { v: levelAt(p.v, vdd), atCurrent: p.i, estimate: false };
+    if (!exceeds(load, p.i)) return { v: levelAt(p.v, vdd), atCurrent: p.i, estimate: guaranteed.length === 0 };
   }
   const last = sorted[sorted.length - 1]!;
   const vLast = levelAt(last.v, vdd);
-  if (sorted.length === 1) return { v: vLast, atCurrent: load, estimate: true };
+  if (sorted.length === 1) {
+    if (!(last.i > 0)) return { v: vLast, atCurrent: load, estimate: true };
+    const scale = load / last.i;
+    const line = sense === 'high' ? vdd - (vdd - vLast) * scale : vLast * scale;
+    return { v: bounded(line, vLast, vdd, sense), atCurrent: load, estimate: true };
+  }
   const prev = sorted[sorted.length - 2]!;
   const vPrev = levelAt(prev.v, vdd);
   const di = last.i - prev.i;
   const line = di > 0 ? vLast + ((vLast - vPrev) / di) * (load - last.i) : vLast;
-  const v = sense === 'high'
+  return { v: bounded(line, vLast, vdd, sense), atCurrent: load, estimate: true };
+}
+
+/** An extrapolated level: never better than the last guaranteed one, never past the output's own rails. */
+function bounded(line: number, vLast: number, vdd: number, sense: 'high' | 'low'): number {
+  return sense === 'high'
     ? Math.max(Number.isNaN(line) ? -Infinity : Math.min(line, vLast), Math.min(0, vLast))
     : Math.min(Number.isNaN(line) ? Infinity : Math.max(line, vLast), Math.max(vdd, vLast));
-  return { v, atCurrent: load, estimate: true };
 }

@@ -303,6 +303,27 @@ export function checkReferences(doc: unknown, builtinProfileIds: ReadonlySet<str
   }
   const discretes = listOr('discretes', true);
   const tied = discretes === undefined ? new Map<string, string>() : checkDiscretes(ctx, discretes, parts ?? [], pinsOf);
+  scenarios?.forEach((s, i) => {
+    const rec = asRecord(s);
+    if (rec === undefined) return;
+    const named = new Set<string>();
+    asList(own(rec, 'pins')).forEach((p, j) => {
+      const state = asRecord(p);
+      if (state === undefined) return;
+      const at = ['scenarios', i, 'pins', j] as const;
+      checkPull(ctx, own(state, 'pull'), [...at, 'pull']);
+      const ref = asString(own(state, 'pin'));
+      if (ref === undefined) return;
+      const dot = ref.indexOf('.');
+      const pins = dot < 0 ? undefined : pinsOf?.get(ref.slice(0, dot));
+      if (pinsOf !== undefined && (pins === undefined || !pins.has(ref.slice(dot + 1)))) {
+        fail(ctx, [...at, 'pin'], `unknown pin ${JSON.stringify(ref)}: expected PART.PIN naming a pin of this design`);
+      } else if (named.has(ref)) {
+        fail(ctx, [...at, 'pin'], `pin ${ref} is named twice in this power state: expected one state per pin`);
+      }
+      named.add(ref);
+    });
+  });
 
   uniqueIds(ctx, nets, ['nets'], 'net', 'among nets');
   checkNets(ctx, nets, pinsOf, scenarioIds, tied);

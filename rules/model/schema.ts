@@ -37,6 +37,11 @@ const magnitude = (what: string, unit: string, floor: number, max: number) =>
     .meta({ description: `${what} (${unit}): 0, or ${rangeText(floor, max, unit)}` });
 
 const current = () => magnitude('current', 'A', MIN_AMPS, MAX_AMPS);
+const resistance = () =>
+  z
+    .number()
+    .min(MIN_OHMS, { message: `expected a resistance (Ω) ${rangeText(MIN_OHMS, MAX_OHMS, 'Ω')}` })
+    .max(MAX_OHMS, { message: `expected a resistance (Ω) ${rangeText(MIN_OHMS, MAX_OHMS, 'Ω')}` });
 const capacitance = () => magnitude('capacitance', 'F', MIN_FARADS, MAX_FARADS);
 
 /** Volts, anywhere in the file: within ±MAX_VOLTS. */
@@ -45,13 +50,6 @@ const volts = (what = 'voltage') =>
     .number()
     .min(-MAX_VOLTS, { message: `expected a ${what} (V) of at least ${-MAX_VOLTS / 1000} kV` })
     .max(MAX_VOLTS, { message: `expected a ${what} (V) of at most ${MAX_VOLTS / 1000} kV` });
-
-/** A resistance in Ω within the reader's limits (a resistor part's value, a translator's Rs). */
-const resistance = () =>
-  z
-    .number()
-    .min(MIN_OHMS, { message: `expected a resistance (Ω) ${rangeText(MIN_OHMS, MAX_OHMS, 'Ω')}` })
-    .max(MAX_OHMS, { message: `expected a resistance (Ω) ${rangeText(MIN_OHMS, MAX_OHMS, 'Ω')}` });
 
 /** A fraction of a value, 0 or more and below 1 (0.05 for ±5 %). */
 const fraction = () =>
@@ -115,7 +113,11 @@ export const LevelSchema = z
 const OutputPointSchema = z.strictObject({
   v: LevelSchema,
   i: current(),
-}).meta({ id: 'OutputPoint', description: 'A guaranteed output level v (Level) at a load current i (A, magnitude)' });
+  vddMin: volts('supply').optional(),
+}).meta({
+  id: 'OutputPoint',
+  description: 'A guaranteed output level v (Level) at a load current i (A, magnitude), from the supply vddMin (V) up when given',
+});
 
 const VddRangeSchema = z
   .tuple([volts(), volts()])
@@ -136,6 +138,8 @@ export const ParamsSchema = z.strictObject({
   ioMax: current().optional(),
   maxInputRamp: magnitude('ramp', 's/V', MIN_RAMP, MAX_RAMP).optional(),
   vddRange: VddRangeSchema.optional(),
+  deltaIcc: current().optional(),
+  deltaIccDrop: volts().optional(),
   // Version 2.
   viMin: LevelSchema.optional(),
   injectionMax: current().optional(),
@@ -147,11 +151,20 @@ export const ParamsSchema = z.strictObject({
 
 export const PullSchema = z.strictObject({
   to: z.string().min(1, { message: 'expected a rail id or "ground"' }),
-  ohms: z
+  ohms: resistance(),
+  tolerance: z
     .number()
-    .min(MIN_OHMS, { message: `expected a resistance (Ω) ${rangeText(MIN_OHMS, MAX_OHMS, 'Ω')}` })
-    .max(MAX_OHMS, { message: `expected a resistance (Ω) ${rangeText(MIN_OHMS, MAX_OHMS, 'Ω')}` }),
-}).meta({ id: 'Pull', description: 'A pull resistor to a rail or to ground' });
+    .min(0, { message: 'expected a tolerance (a fraction of the value) of 0 or more' })
+    .lt(MAX_TOLERANCE, { message: 'expected a tolerance (a fraction of the value, 0.05 for ±5 %) below 1' })
+    .optional(),
+  min: resistance().optional(),
+  max: resistance().optional(),
+}).refine((p) => !(p.min !== undefined && p.min > p.ohms) && !(p.max !== undefined && p.max < p.ohms), {
+  message: 'expected min ≤ ohms ≤ max',
+}).meta({
+  id: 'Pull',
+  description: 'A pull resistor to a rail or to ground; its range ohms × (1 ± tolerance), exact unless given, an explicit min or max winning for its end',
+});
 
 const PositionSchema = z.strictObject({ x: z.number(), y: z.number() });
 
@@ -173,13 +186,25 @@ export const RailSchema = z.strictObject({
   minLoad: current().optional(),
 }).meta({ id: 'Rail', description: 'A supply domain; range nominal × (1 ± tolerance), an explicit min or max wins for its end' });
 
+/**
+ * A pin's state in a power state before firmware runs: its role, drive and internal pull there
+ * (`pull: null` for none), each key given replacing the pin's own.
+ */
+export const PinStateSchema = z.strictObject({
+  pin: z.string().min(1, { message: 'expected a pin written PART.PIN' }),
+  role: z.enum(['input', 'output', 'bidir']).optional(),
+  drive: z.enum(['push-pull', 'three-state', 'open-drain']).optional(),
+  pull: PullSchema.nullable().optional(),
+}).meta({ id: 'PinState', description: 'A pin\'s role, drive and internal pull in one power state (e.g. GPIO pins as inputs at reset)' });
+
 export const ScenarioSchema = z.strictObject({
   id: id('scenario', true).refine((s) => s !== 'all-on', {
     message: 'expected a scenario id other than "all-on" (reserved for the state with every rail on)',
   }),
   label: z.string(),
   off: z.array(z.string()),
-}).meta({ id: 'Scenario', description: 'A power state: the rails listed in off are at 0 V' });
+  pins: z.array(PinStateSchema).optional(),
+}).meta({ id: 'Scenario', description: 'A power state: the rails listed in off are at 0 V; pins may take another role, drive or pull there' });
 
 export const ProfileSchema = z.strictObject({
   id: id('profile', true),
@@ -294,6 +319,7 @@ export type Net = z.infer<typeof NetSchema>;
 export type Params = z.infer<typeof ParamsSchema>;
 export type Pull = z.infer<typeof PullSchema>;
 export type Waiver = z.infer<typeof WaiverSchema>;
+export type PinState = z.infer<typeof PinStateSchema>;
 export type Discrete = z.infer<typeof DiscreteSchema>;
 export type Resistor = z.infer<typeof ResistorSchema>;
 export type FetShifter = z.infer<typeof FetShifterSchema>;

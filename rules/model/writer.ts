@@ -14,15 +14,15 @@ export interface KeyOrder {
 
 const leaf = (...keys: string[]): KeyOrder => ({ keys });
 
-const LEVEL_POINT = leaf('v', 'i');
+const LEVEL_POINT = leaf('v', 'i', 'vddMin');
 const PARAMS: KeyOrder = {
   keys: [
-    'vih', 'vil', 'schmitt', 'iih', 'iil', 'cin', 'viMax', 'unpoweredSafe', 'viMaxOff', 'voh', 'vol', 'ioMax', 'maxInputRamp', 'vddRange',
+    'vih', 'vil', 'schmitt', 'iih', 'iil', 'cin', 'viMax', 'unpoweredSafe', 'viMaxOff', 'voh', 'vol', 'ioMax', 'maxInputRamp', 'vddRange', 'deltaIcc', 'deltaIccDrop',
     'viMin', 'injectionMax', 'busHold', 'seriesResistance', 'minExternalPull', 'maxLoadCapacitance',
   ],
   children: { schmitt: leaf('vtPlus', 'vtMinus'), voh: LEVEL_POINT, vol: LEVEL_POINT, busHold: leaf('hold', 'overdrive') },
 };
-const PULL = leaf('to', 'ohms');
+const PULL = leaf('to', 'ohms', 'tolerance', 'min', 'max');
 
 /** Key orders of design-format.md's tables; exported so a test can hold them to the schema. */
 export const KEY_ORDER = {
@@ -31,7 +31,7 @@ export const KEY_ORDER = {
     children: {
       settings: leaf('minMargin', 'defaultWiringCapacitance'),
       rails: leaf('id', 'label', 'nominal', 'tolerance', 'min', 'max', 'colour', 'minLoad'),
-      scenarios: leaf('id', 'label', 'off'),
+      scenarios: { keys: ['id', 'label', 'off', 'pins'], children: { pins: { keys: ['pin', 'role', 'drive', 'pull'], children: { pull: PULL } } } },
       profiles: { keys: ['id', 'label', 'source', 'params'], children: { params: PARAMS } },
       parts: {
         keys: ['id', 'label', 'rail', 'profile', 'params', 'position', 'pins'],

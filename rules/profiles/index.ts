@@ -4,7 +4,7 @@
  */
 import type { Profile } from '../model/schema.ts';
 import { BUILTIN_PROFILE_IDS } from '../model/profileIds.ts';
-import { BUILTIN_PROFILES } from './library.ts';
+import { BUILTIN_PROFILES } from './builtins.ts';
 
 export { BUILTIN_PROFILES, BUILTIN_PROFILE_IDS };
 

@@ -17,11 +17,13 @@ const SOURCE =
  */
 export const translatorSide = defineProfile({
   id: 'xlat-side',
-  label: 'Dual-rail translator, push-pull side',
+  label: 'Dual-rail translator, direction-controlled push-pull side',
   source:
-    `${SOURCE} Each side relative to its own supply: inputs 0.65·VDD / 0.35·VDD; outputs VDD−0.2 / 0.2 V ` +
+    `${SOURCE} Models the direction-controlled (or one-direction) push-pull class, not the auto-direction ` +
+    'push-pull one (whose weak static drive these rows overstate). ' +
+    'Each side relative to its own supply: inputs 0.65·VDD / 0.35·VDD; outputs VDD−0.2 / 0.2 V ' +
     'at 100 µA and VDD−0.45 / 0.45 V at 2 mA (the 1.8 V interface rows, carried up the supply); ' +
-    'partial power-down: pins may carry 5.5 V on an unpowered side.',
+    'partial power-down: pins may carry 5.5 V on an unpowered side; −40…85 °C.',
   params: {
     // From memory: either supply of such parts commonly spans 1.65–5.5 V.
     vddRange: [1.65, 5.5],
@@ -52,11 +54,12 @@ export const translatorSide = defineProfile({
  */
 export const translatorOpenDrain = defineProfile({
   id: 'xlat-od',
-  label: 'Dual-rail translator, bidirectional open-drain side',
+  label: 'Dual-rail translator, auto-direction open-drain side',
   source:
-    `${SOURCE} Each side relative to its own supply: inputs 0.65·VDD / 0.35·VDD; open-drain sink 0.15 V at 1 mA ` +
+    `${SOURCE} Models the auto-direction open-drain class (a pass switch with each side pulled up). ` +
+    'Each side relative to its own supply: inputs 0.65·VDD / 0.35·VDD; open-drain sink 0.15 V at 1 mA ' +
     'and 0.3 V at 3 mA (inside the two-wire bus limit of 0.2·VDD at 3 mA even at 1.65 V); partial power-down: ' +
-    'pins may carry 5.5 V on an unpowered side.',
+    'pins may carry 5.5 V on an unpowered side; −40…85 °C.',
   params: {
     vddRange: [1.65, 5.5], // from memory: the usual span of either supply
     vih: '0.65*VDD', // from memory: a fraction of the side's own supply

@@ -8,7 +8,7 @@ import { defineProfile } from './define.ts';
 export const ttl = defineProfile({
   id: 'ttl',
   label: 'Standard TTL (5 V)',
-  source: 'handbook table (bipolar TTL, 5 V ± 5 %); input limit 5.5 V from memory',
+  source: 'handbook table (bipolar TTL, 5 V ± 5 %, commercial 0…70 °C); input limit 5.5 V and 5 pF input from memory',
   params: {
     vddRange: [4.75, 5.25], // handbook: 5 V ± 5 %
     vih: 2, // handbook
@@ -17,6 +17,7 @@ export const ttl = defineProfile({
     vol: [{ v: 0.4, i: 16e-3 }], // handbook: 0.4 V @ 16 mA
     iih: 40e-6, // handbook: 40 µA
     iil: 1.6e-3, // handbook: 1.6 mA, out of the input
+    cin: 5e-12, // from memory: a few pF (5 pF taken) for a bipolar input
     viMax: 5.5, // from memory
   },
 });
@@ -25,7 +26,7 @@ export const ttl = defineProfile({
 export const ls = defineProfile({
   id: '74ls',
   label: '74LS low-power Schottky TTL',
-  source: 'handbook table (bipolar TTL, 5 V ± 5 %); input limit 7 V from memory',
+  source: 'handbook table (bipolar TTL, 5 V ± 5 %, commercial 0…70 °C); input limit 7 V and 5 pF input from memory',
   params: {
     vddRange: [4.75, 5.25], // handbook: 5 V ± 5 %
     vih: 2, // handbook
@@ -37,6 +38,7 @@ export const ls = defineProfile({
     ],
     iih: 20e-6, // handbook: 20 µA
     iil: 400e-6, // handbook: 0.4 mA, out of the input
+    cin: 5e-12, // from memory: a few pF (5 pF taken) for a bipolar input
     viMax: 7, // from memory
   },
 });
@@ -48,7 +50,7 @@ export const ls = defineProfile({
 export const lsOpenCollector = defineProfile({
   id: '74ls-oc',
   label: '74LS open-collector output',
-  source: 'handbook (74LS open-collector data pages): off leakage ≤ 0.1 mA at 5.5 V, VOL 0.5 V @ 8 mA',
+  source: 'handbook (74LS open-collector data pages, commercial 0…70 °C): off leakage ≤ 0.1 mA at 5.5 V, VOL 0.5 V @ 8 mA',
   params: {
     vddRange: [4.75, 5.25], // handbook: 5 V ± 5 %
     vol: [{ v: 0.5, i: 8e-3 }], // handbook: 0.5 V @ 8 mA

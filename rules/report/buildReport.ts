@@ -2,6 +2,7 @@
  * The report object (report-format.md) built from a design and the engine's result. Pure: the
  * caller supplies the time, so that a report can be reproduced byte for byte.
  */
+import { interfacePowerRows } from './interfacePower.ts';
 import type { Design } from '../model/schema.ts';
 import { crossingRails } from '../engine/paths.ts';
 import type { CheckResult, Finding, PowerState, Severity } from '../engine/types.ts';
@@ -135,6 +136,7 @@ export function buildReport(design: Design, result: CheckResult, options: Report
     summary: summarize(findings),
     findings: findings.map(reportFinding),
     crossings: crossingRows(result, states),
+    interfacePower: interfacePowerRows(findings).map((r) => ({ ...r, pins: [...r.pins] })),
     profiles: usedProfiles(design),
     cautions: [...CAUTIONS],
   };

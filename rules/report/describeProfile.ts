@@ -31,6 +31,7 @@ export function describeParams(params: Params): [string, string][] {
   add('VI max unpowered', p.viMaxOff === undefined ? undefined : formatQuantity(p.viMaxOff, 'V'));
   add('safe unpowered', p.unpoweredSafe === undefined ? undefined : p.unpoweredSafe ? 'yes' : 'no');
   add('max input ramp', p.maxInputRamp === undefined ? undefined : formatQuantity(p.maxInputRamp, 's/V'));
+  add('ΔICC per input', p.deltaIcc === undefined ? undefined : `${formatQuantity(p.deltaIcc, 'A')}${p.deltaIccDrop === undefined ? '' : ` at VDD − ${formatQuantity(p.deltaIccDrop, 'V')}`}`);
   return rows;
 }
 

@@ -117,7 +117,19 @@ const UNITS: Readonly<Record<string, string>> = {
   vNet: 'V', viMax: 'V', railMin: 'V', railMax: 'V', profileMin: 'V', profileMax: 'V',
   loadHigh: 'A', loadLow: 'A', ratedHigh: 'A', ratedLow: 'A',
   riseTime: 's', limit: 's', capacitance: 'F', resistance: 'Ω', ohms: 'Ω', rMin: 'Ω', rMax: 'Ω', suggested: 'Ω', ramp: 's/V', maxInputRamp: 's/V',
+  pinVdd: 'V', ioMax: 'A', t1090: 's', swing: 'V',
+  ohmsMin: 'Ω', ohmsMax: 'Ω', lowestPower: 'Ω', adviceMin: 'Ω', adviceMax: 'Ω', adviceCap: 'Ω', othersOhms: 'Ω',
+  suggestedRise: 's', suggestedHigh: 'V', suggestedLow: 'V', suggestedSink: 'A',
+  current: 'A', drop: 'V', high: 'V', threshold: 'V',
 };
+
+/** Value keys that are plain numbers (fractions, factors): printed as they are. */
+export const UNITLESS_VALUE_KEYS: ReadonlySet<string> = new Set(['adviceTolerance', 'riseGuard']);
+
+/** The unit of a values key, if it has one. */
+export function unitOfValue(key: string): string | undefined {
+  return UNITS[key];
+}
 
 function valueText(key: string, value: unknown): string {
   if (value === null || value === undefined) return '—';

@@ -3,6 +3,7 @@
  * spans; prose is escaped, so that a `|` or a `*` in a title or a note cannot break a table
  * or start emphasis.
  */
+import { formatQuantity } from '../levels/units.ts';
 import { designLine, marginText, settingsLine, severityText, stateText } from './describe.ts';
 import type { Report } from './reportSchema.ts';
 import { verdict, type Verdict } from './verdict.ts';
@@ -126,6 +127,18 @@ export function renderMarkdown(report: Report, options: { readonly verdict?: Ver
     );
   }
   out.push('');
+
+  if (report.interfacePower.length > 0) {
+    out.push('## Extra supply current of inputs held high below their supply', '');
+    out.push(
+      ...table(
+        ['Power state', 'Rail', 'Current', 'Inputs'],
+        report.interfacePower.map((r) => [codeSpan(r.scenario), codeSpan(r.rail), formatQuantity(r.current, 'A'), r.pins.map(codeSpan).join(', ')]),
+        ['l', 'l', 'r', 'l'],
+      ),
+    );
+    out.push('');
+  }
 
   out.push('## Profiles used', '');
   if (report.profiles.length === 0) out.push('None.');

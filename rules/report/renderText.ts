@@ -5,6 +5,7 @@
  * unless asked for. Every finding shown keeps its full message (the numbers are never cut).
  */
 import { RULES } from '../checks/index.ts';
+import { formatQuantity } from '../levels/units.ts';
 import { designLine, marginText, settingsLine, stateText } from './describe.ts';
 import type { Report, ReportFinding } from './reportSchema.ts';
 import { plural, verdict, type Verdict } from './verdict.ts';
@@ -128,6 +129,17 @@ export function renderText(report: Report, options: TextOptions = {}): string {
         ['net', 'label', 'rails', 'state', 'worst NMH', 'worst NML', 'worst'],
         report.crossings.map((c) => [c.net, c.label, c.rails.join(', '), c.scenario, marginText(c.marginHigh), marginText(c.marginLow), c.worst]),
         new Set([4, 5]),
+      ),
+    );
+  }
+
+  if (report.interfacePower.length > 0) {
+    out.push('', 'Extra supply current of inputs held high below their supply (interface-power)');
+    out.push(
+      ...table(
+        ['state', 'rail', 'current', 'inputs'],
+        report.interfacePower.map((r) => [r.scenario, r.rail, formatQuantity(r.current, 'A'), r.pins.join(', ')]),
+        new Set([2]),
       ),
     );
   }

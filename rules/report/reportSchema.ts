@@ -48,6 +48,15 @@ export const CrossingSchema = z
   })
   .meta({ id: 'Crossing', description: 'A net that joins pins of different rails, in one power state' });
 
+export const InterfacePowerSchema = z
+  .strictObject({
+    scenario: z.string(),
+    rail: z.string(),
+    current: z.number().min(0).meta({ description: 'Σ ΔICC of the rail\'s inputs held high below their supply, A' }),
+    pins: z.array(z.string()).min(1),
+  })
+  .meta({ id: 'InterfacePower', description: 'The extra supply current of one rail in one power state (interface-power findings summed)' });
+
 export const ReportSchema = z.strictObject({
   format: z.literal(REPORT_FORMAT_ID),
   version: z.literal(REPORT_FORMAT_VERSION),
@@ -67,6 +76,7 @@ export const ReportSchema = z.strictObject({
     .meta({ description: 'Unwaived findings by severity over all power states reported; waived counts the waived ones' }),
   findings: z.array(ReportFindingSchema),
   crossings: z.array(CrossingSchema),
+  interfacePower: z.array(InterfacePowerSchema),
   profiles: z
     .array(z.strictObject({ id: z.string(), label: z.string(), source: z.string() }))
     .meta({ description: 'The profiles the design uses (built-in or design-local) and where their numbers come from' }),
@@ -76,4 +86,5 @@ export const ReportSchema = z.strictObject({
 export type Report = z.infer<typeof ReportSchema>;
 export type ReportFinding = z.infer<typeof ReportFindingSchema>;
 export type Crossing = z.infer<typeof CrossingSchema>;
+export type InterfacePower = z.infer<typeof InterfacePowerSchema>;
 export type FailOn = z.infer<typeof FailOnSchema>;

@@ -11,7 +11,7 @@ import { exampleDesign } from '../../app/example.ts';
 import {
   addPowerState, addProfile, addRail, addWaiver, connectPins, deletePowerState, deleteProfile, deleteRail, deleteSelection,
   disconnectWire, moveParts, netWires, renamePart, setNetPull, setPartProfile, setPartRail, setProfileParam, setRailOff,
-  setRailTolerance, setRailVoltage, addDiscrete, newDiscrete, setDiscrete, removeDiscrete, type Command,
+  setRailTolerance, setRailVoltage, setResetState, tidyLayout, addDiscrete, newDiscrete, setDiscrete, removeDiscrete, type Command,
 } from '../../app/store/commands/index.ts';
 import { applyFix, fixesFor } from '../../app/store/commands/fixes/index.ts';
 import { check } from '../../rules/engine/check.ts';
@@ -42,6 +42,7 @@ const STEPS: readonly [string, Step][] = [
   ['delete wire', (h, n, m) => { const net = nth(h.design.nets, n); const wire = net && nth(netWires(net), m); return wire ? deleteSelection({ parts: [], wires: [wire] }) : undefined; }],
   ['family', (h, n, m) => { const p = nth(h.design.parts, n); return p ? setPartProfile(p.id, FAMILIES[m % FAMILIES.length]!) : undefined; }],
   ['part rail', (h, n, m) => { const p = nth(h.design.parts, n); const r = nth(h.design.rails, m); return p && r ? setPartRail(p.id, r.id) : undefined; }],
+  ['tidy layout', () => tidyLayout()],
   ['move', (h, n, m) => { const p = nth(h.design.parts, n); return p ? moveParts([{ id: p.id, x: (m % 50) * 20, y: (n % 30) * 20 }]) : undefined; }],
   ['rail voltage', (h, n, m) => { const r = nth(h.design.rails, n); return r ? setRailVoltage(r.id, [1.2, 1.8, 2.5, 3.3, 5][m % 5]!) : undefined; }],
   ['rail tolerance', (h, n, m) => { const r = nth(h.design.rails, n); return r ? setRailTolerance(r.id, (m % 11) / 100) : undefined; }],
@@ -55,6 +56,7 @@ const STEPS: readonly [string, Step][] = [
   }],
   ['add power state', () => addPowerState()],
   ['rail off', (h, n, m) => { const s = nth(h.design.scenarios ?? [], n); const r = nth(h.design.rails, m); return s && r ? setRailOff(s.id, r.id, m % 3 !== 0) : undefined; }],
+  ['reset state', (h, n) => { const p = nth(h.design.parts, n); return p ? setResetState(p.id) : undefined; }],
   ['delete power state', (h, n) => { const s = nth(h.design.scenarios ?? [], n); return s ? deletePowerState(s.id) : undefined; }],
   ['net pull', (h, n, m) => {
     const net = nth(h.design.nets, n);

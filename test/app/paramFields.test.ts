@@ -19,6 +19,9 @@ const accepted: { key: ParamKey; text: string; value: unknown; shown: string }[]
   { key: 'cin', text: '5pF', value: 5e-12, shown: '5 pF' },
   { key: 'ioMax', text: '25 mA', value: 25e-3, shown: '25 mA' },
   { key: 'maxInputRamp', text: '10 ns/V', value: 10e-9, shown: '10 ns/V' },
+  // ΔICC of a TTL-input CMOS part, about 0.5 mA per input at VCC − 2.1 V (from memory).
+  { key: 'deltaIcc', text: '0.5 mA', value: 0.5e-3, shown: '500 µA' },
+  { key: 'deltaIccDrop', text: '2.1', value: 2.1, shown: '2.1 V' },
   { key: 'viMaxOff', text: '3.6', value: 3.6, shown: '3.6 V' },
   { key: 'unpoweredSafe', text: 'Yes', value: true, shown: 'yes' },
   { key: 'unpoweredSafe', text: 'no', value: false, shown: 'no' },

@@ -7,10 +7,9 @@ import { validateDesign } from '../../rules/model/reader.ts';
 import { harness } from './harness.ts';
 
 // newDesign() has rails 5 V, 3.3 V, 1.8 V. Supply ranges (restated in the profile library):
-// 74HC 4.5–6 V and 74HCT 4.5–5.5 V (JESD7), LVCMOS 3.3 V 3.0–3.6 V (JESD8C), 1.8 V 1.65–1.95 V
+// 74HC 2–6 V and 74HCT 4.5–5.5 V (JESD7), LVCMOS 3.3 V 3.0–3.6 V (JESD8C), 1.8 V 1.65–1.95 V
 // (JESD8-7), 4000B 5–15 V (JESD13, tabulated supplies); the GPIO starting point has none.
 const railCases = [
-  { profile: '74hc', rail: '5v0' },
   { profile: '74hct', rail: '5v0' },
   { profile: 'lvcmos33', rail: '3v3' },
   { profile: 'lvcmos18', rail: '1v8' },
@@ -24,6 +23,13 @@ describe('parts palette', () => {
     expect(pickRail(newDesign().rails, builtinProfile(profile)!)?.id).toBe(rail);
   });
 
+  it('a 74HC gate goes on 5 V, its usual supply (common practice), though 3.3 V lies inside its 2–6 V (JESD7)', () => {
+    const part = templateById('gate:74hc')!.build(newDesign(), { x: 0, y: 0 });
+    if ('refused' in part) throw new Error(part.refused);
+    expect(part.rail).toBe('5v0');
+    expect(pickRail(newDesign().rails, builtinProfile('74hc')!)?.id).toBe('3v3');
+  });
+
   it('every template makes a part the reader accepts, with a fresh designator', () => {
     const h = harness(newDesign());
     for (const t of TEMPLATES) {
@@ -35,6 +41,13 @@ describe('parts palette', () => {
     expect(new Set(ids).size).toBe(TEMPLATES.length);
     const valid = validateDesign(h.design);
     expect(valid.ok ? [] : valid.errors).toEqual([]);
+  });
+
+  it('the 16-pin microcontroller\'s two-wire pins use the two-wire bus profile, its GPIO pins the GPIO one', () => {
+    const part = templateById('mcu:16')!.build(newDesign(), { x: 0, y: 0 });
+    if ('refused' in part) throw new Error(part.refused);
+    const profileOf = (id: string) => part.pins.find((p) => p.id === id)!.profile ?? part.profile;
+    expect([profileOf('SDA'), profileOf('SCL'), profileOf('OUT1'), profileOf('IN1')]).toEqual(['i2c', 'i2c', 'mcu-gpio', 'mcu-gpio']);
   });
 
   it('a translator puts side A on its own rail and family', () => {

@@ -145,6 +145,17 @@ ruleTester(rule, {
       }],
     },
     {
+      // The pull-down at exactly ioMax above, given ± 10 %: its smallest end, 900 Ω, draws
+      // 5.25 V / 900 Ω + 1 µA, beyond the ioMax set for 1 kΩ.
+      name: 'a pull\'s tolerance: its smallest end sets the load',
+      design: link(
+        { rail: '5v0', profile: '74ac', part: { params: { ioMax: 5.25 / 1000 + HC_I_IN } } },
+        { rail: '5v0', profile: '74ac' },
+        { net: { pull: { to: 'ground', ohms: 1000, tolerance: 0.1 } } },
+      ),
+      findings: [{ messageId: 'highOverload', severity: 'error', values: { loadHigh: 5.25 / 900 + HC_I_IN, ioMax: 5.25 / 1000 + HC_I_IN } }],
+    },
+    {
       // Handbook: 11 standard TTL loads, 17.6 mA > 16 mA and 0.44 mA > 0.4 mA. With the driver's rail
       // off it is no driver; with the receivers' rail off they still load it (rules-catalogue.md).
       name: 'a driver on an off rail is not judged; unpowered receivers still load',

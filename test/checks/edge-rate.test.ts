@@ -82,6 +82,14 @@ ruleTester(rule, {
     },
     {
       // I2C-bus specification, standard-mode: tr ≤ 1000 ns at Cb = 400 pF gives Rp(max) = 2950.6 Ω;
+      // The pull exactly at the limit above, given ± 1 %: its largest end, 4747 Ω, is too slow.
+      name: 'a pull\'s tolerance: its largest end sets the rise time',
+      design: link(i2cDriver, { rail: '3v3', profile: 'i2c' }, {
+        net: { pull: { to: '3v3', ohms: 4700, tolerance: 0.01 }, wiringCapacitance: 100e-12, maxRiseTime: LN73 * 4700 * (100e-12 + 2 * CIN) },
+      }),
+      findings: [{ messageId: 'pulledRiseSlow', severity: 'warning', values: { resistance: near(4747), riseTime: near(LN73 * 4747 * (100e-12 + 2 * CIN)) } }],
+    },
+    {
       // 3 kΩ is just too slow. C = 380 pF wiring + two 10 pF pins.
       name: 'a pulled bus too slow for its maxRiseTime (30-70)',
       design: link(i2cDriver, { rail: '3v3', profile: 'i2c' }, {
@@ -120,8 +128,9 @@ ruleTester(rule, {
       }],
     },
     {
-      // 74HC (140.7 Ω) and 74AC (26.7 Ω) three-state outputs: 315 ns and 60 ns into 1.02 nF. The
-      // 74HC is judged; with its rail off only the 74AC counts, and it is fast enough.
+      // 74HC (140.7 Ω) and 74AC (26.7 Ω) three-state outputs into 1 nF + 2 × 10 pF (JESD7) + 10 pF
+      // (74AC, from memory). The 74HC is judged; with its rail off only the 74AC counts, and it is
+      // fast enough.
       name: 'the slowest powered driver is judged; one on an off rail does not count',
       design: design({
         rails: [rail5v0, rail('aux', 5, { tolerance: 0.05 })],
@@ -135,7 +144,7 @@ ruleTester(rule, {
       }),
       findings: [{
         messageId: 'drivenRiseSlow', severity: 'warning', scenario: 'all-on', pins: ['S.Y'],
-        values: { driver: 'S.Y', resistance: near(HC_ROUT), riseTime: near(LN9 * HC_ROUT * 1.02e-9) },
+        values: { driver: 'S.Y', resistance: near(HC_ROUT), riseTime: near(LN9 * HC_ROUT * 1.03e-9) },
       }],
     },
     {
@@ -165,8 +174,8 @@ ruleTester(rule, {
     },
     {
       // A pulled net: R and Vswing are the pulls' Thévenin values, 4.7 kΩ to 3.3 V and 47 kΩ to
-      // ground; the lowest Vpull is 3.135 V × 47k / 51.7k. C = 200 pF + one 10 pF bus pin
-      // (mcu-gpio gives no cin). The 10 ns/V limit is from memory (a 3.3 V CMOS input's usual figure).
+      // ground; the lowest Vpull is 3.135 V × 47k / 51.7k. C = 200 pF + one 10 pF bus pin + the
+      // GPIO's 5 pF (from memory). The 10 ns/V limit is from memory (a 3.3 V CMOS input's usual figure).
       name: 'a slow ramp on a pulled net uses the Thévenin resistance and voltage',
       design: link(i2cDriver, { rail: '3v3', profile: 'mcu-gpio', pin: { params: { maxInputRamp: 10e-9 } } }, {
         net: { pull: { to: '3v3', ohms: 4700 }, wiringCapacitance: 200e-12 },
@@ -177,13 +186,14 @@ ruleTester(rule, {
         messageId: 'rampSlow', severity: 'warning', pins: ['R.A'],
         values: {
           driver: null, swing: near((3.135 * 47e3) / 51.7e3),
-          ramp: near((LN9 * (1 / (1 / 4700 + 1 / 47e3)) * 210e-12) / (0.8 * ((3.135 * 47e3) / 51.7e3))),
+          ramp: near((LN9 * (1 / (1 / 4700 + 1 / 47e3)) * 215e-12) / (0.8 * ((3.135 * 47e3) / 51.7e3))),
         },
       }],
     },
     {
       // Two bidir three-state pins: each is judged against the other as the source of its edge.
-      // A.IO (74HC) sees the 74AC edge, 15.6 ns/V; B.IO sees the 74HC edge, 82 ns/V. C = 1 nF + 10 pF.
+      // A.IO (74HC) sees the 74AC edge, 15.6 ns/V; B.IO sees the 74HC edge, 82 ns/V. C = 1 nF + 10 pF
+      // (74HC, JESD7) + 10 pF (74AC, from memory).
       name: 'a bidir receiver is not the source of its own edge',
       design: design({
         rails: [rail5v0],
@@ -195,7 +205,7 @@ ruleTester(rule, {
       }),
       findings: [{
         messageId: 'rampSlow', severity: 'warning', id: 'edge-rate:N:all-on:B.IO',
-        values: { driver: 'A.IO', ramp: near((LN9 * HC_ROUT * 1.01e-9) / (0.8 * 4.75)) },
+        values: { driver: 'A.IO', ramp: near((LN9 * HC_ROUT * 1.02e-9) / (0.8 * 4.75)) },
       }],
     },
     {

@@ -106,6 +106,16 @@ ruleTester(rule, {
       }],
     },
     {
+      // The same pull given as 4.7 kΩ, at most 5 kΩ: the high level takes its largest end.
+      name: 'a pull\'s range: its largest end sets the high level',
+      design: link(
+        { rail: '3v3', profile: 'i2c', pin: { drive: 'open-drain' } },
+        { rail: '5v0', profile: '74hc' },
+        { net: { pull: { to: '3v3', ohms: 4700, max: 5000 } } },
+      ),
+      findings: [{ messageId: 'highFails', severity: 'error', values: { voh: 3.135 - 5000 * 11e-6, vpull: 3.135 } }],
+    },
+    {
       name: 'a Schmitt input is judged by vtPlus, not vih',
       design: link(
         { rail: '3v3', profile: 'lvcmos33' },

@@ -56,9 +56,10 @@ ruleTester(rule, {
       findings: [{ messageId: 'lowMarginLow', severity: 'warning', values: { margin: 0 } }],
     },
     {
-      // A 470 Ω pull-up to 3.3 V pushes (3.465 − 0.2·1.89) / 470 ≈ 6.6 mA into a 1.8 V two-wire
+      // A 470 Ω pull-up to 3.3 V pushes (3.465 − 0.2·1.89) / 470 ≈ 6.568 mA into a 1.8 V two-wire
       // driver rated at 3 mA (I2C-bus specification, VOL 0.2·VDD for VDD ≤ 2 V): with one point,
-      // that point's level is the estimate, 0.378 V at 1.89 V, against a receiver's 0.3 V.
+      // the resistive line through the origin is the estimate, 0.378 V × 6.568 / 3 ≈ 0.828 V at
+      // 1.89 V, against a receiver's 0.3 V.
       name: 'a pull-up stronger than the driver is rated for',
       design: link(
         { rail: '1v8', profile: 'i2c-lv', pin: { drive: 'open-drain' } },
@@ -67,7 +68,25 @@ ruleTester(rule, {
       ),
       findings: [{
         messageId: 'lowFails', severity: 'error',
-        values: { vol: 0.2 * 1.89, vil: 0.3, margin: 0.3 - 0.2 * 1.89, estimate: true, driverVdd: 1.89, receiverVdd: 1.89 },
+        values: {
+          vol: 0.2 * 1.89 * ((3.465 - 0.2 * 1.89) / 470) / 3e-3, vil: 0.3,
+          margin: 0.3 - 0.2 * 1.89 * ((3.465 - 0.2 * 1.89) / 470) / 3e-3, estimate: true, driverVdd: 1.89, receiverVdd: 1.89,
+        },
+      }],
+    },
+    {
+      // A 1.8 V two-wire bus at 1.71 V: VOL 0.2·VDD = 0.342 V @ 3 mA, VIL 0.3·VDD = 0.513 V
+      // (I2C-bus specification, VDD ≤ 2 V). 4.59 mA of low-level current: 0.342 × 4.59 / 3 =
+      // 0.52326 V, 10.3 mV above VIL: an error (judged at the row's own 0.342 V it was a warning).
+      name: 'a single row overloaded: the resistive line turns a warning into an error',
+      design: link(
+        { rail: 'x', profile: 'off-board', pin: { params: { vol: [{ v: '0.2*VDD', i: 3e-3 }] } } },
+        { rail: 'x', profile: 'i2c-lv', pin: { params: { iil: 4.59e-3 } } },
+        { rails: [rail('x', 1.71, { tolerance: 0 })] },
+      ),
+      findings: [{
+        messageId: 'lowFails', severity: 'error',
+        values: { vol: 0.342 * 4.59 / 3, vil: 0.513, margin: 0.513 - 0.342 * 4.59 / 3, estimate: true },
       }],
     },
     {

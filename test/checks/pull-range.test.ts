@@ -26,6 +26,16 @@ const busRMin = (3.465 - 0.4) / (3e-3 - 10e-6);
 // VIH = 0.7·VDD on the pull's own rail: (0.3·VDD − 0.2) / 20 µA is smallest at 3.135 V.
 const busRMaxLevel = (0.3 * 3.135 - 0.2) / 20e-6;
 
+// The advice (README, "Pull-up advice"): the range shrunk by a 5 % resistor tolerance (IEC 60062
+// code J, common practice) to [Rmin/0.95, Rmax/1.05], the rise-time bound at 0.7 × maxRiseTime;
+// the IEC 60063 E12 value nearest √(lo·hi) on a log scale, else E24; capped at 47 kΩ on board or
+// 10 kΩ with an off-board pin where only leakage bounds it (common practice).
+const T = 0.05;
+/** The nominal range of the advice from the bounds of the pulls together (no other pulls). */
+const shrunk = (lo: number, hi: number) => ({ adviceMin: lo / (1 - T), adviceMax: hi / (1 + T) });
+/** 1/(1/bound − g): the net's own pull that gives `bound` beside the pins' conductance g. */
+const beside = (bound: number, g: number) => 1 / (1 / bound - g);
+
 /** Open-drain output D.Y (off-board, typed-in values) into input R.A, both on `r`, pulled to `r`. */
 function typed(r: Rail, driver: Pin['params'], receiver: Pin['params'], netExtra: Partial<Net>) {
   return design({
@@ -38,14 +48,25 @@ function typed(r: Rail, driver: Pin['params'], receiver: Pin['params'], netExtra
   });
 }
 const exact5 = rail('p5', 5, { tolerance: 0 });
+
+/** D.Y as in `typed` into R.A, whose internal pull is `pull`; the net has none of its own. */
+function rangedPull(pull: NonNullable<Pin['pull']>) {
+  return design({
+    rails: [exact5],
+    parts: [
+      part('D', 'p5', 'off-board', [output('Y', { ...od, params: edgeDriver })]),
+      part('R', 'p5', 'off-board', [input('A', { pull })]),
+    ],
+    nets: [net('N', ['D.Y', 'R.A'], edgeNet)],
+  });
+}
 // Rmin = 4.5 V / 9 mA = 500 Ω; Rmax from the rise time is 10 kΩ at 100 pF when tr = 1e4·ln(7/3)·100 pF.
 const edgeDriver = { vol: [{ v: 0.5, i: 9e-3 }] };
 const edgeNet = { wiringCapacitance: 100e-12, maxRiseTime: 1e4 * K * 100e-12 };
 
 ruleTester(rule, {
   valid: [
-    { name: 'no pull of its own: internal pulls are not sized', design: bus({}, { pinPull: { to: '3v3', ohms: 4700 } }) },
-    { name: 'a pull to ground is not sized', design: bus({ pull: { to: 'ground', ohms: 4700 } }) },
+    { name: 'a pull to ground is not a pull-up', design: bus({ pull: { to: 'ground', ohms: 4700 } }) },
     {
       name: 'push-pull drivers have no pull-up range',
       design: design({
@@ -56,28 +77,53 @@ ruleTester(rule, {
   ],
   invalid: [
     {
+      // Bounds as before; advice [1079.0 Ω, 35.26 kΩ], √(lo·hi) = 6168 Ω: E12 5.6 kΩ (ratio 1.1015)
+      // beats 6.8 kΩ (1.1024); 47 kΩ lies above, no cap. Largest E24 inside: 33 kΩ. For 5.6 kΩ
+      // ± 5 %: rise ln(7/3) × 5.88 kΩ × 25 pF; high 3.135 − 5.88 kΩ × 20 µA; sink (3.465 − 0.4) /
+      // 5.32 kΩ + the other pin's 10 µA, inside the 3 mA row, so low 0.4 V.
       name: 'bus pull-up inside its range (level bound)',
       design: bus({ pull: { to: '3v3', ohms: 4700 } }),
       findings: [{
         messageId: 'inRange', severity: 'info', id: 'pull-range:SDA:all-on', pins: ['M.SDA', 'S.SDA'],
-        // IEC 60063 E24: 3.6 is the largest mantissa with 36 kΩ ≤ 37.025 kΩ.
-        values: { ohms: 4700, rMin: busRMin, rMax: busRMaxLevel, empty: false, suggested: 36000, rMaxBy: 'level', rMaxCorner: { '3v3': 3.135 } },
+        values: {
+          ohms: 4700, rMin: busRMin, rMax: busRMaxLevel, empty: false, rMaxBy: 'level', rMaxCorner: { '3v3': 3.135 },
+          ...shrunk(busRMin, busRMaxLevel), adviceCap: null, riseGuard: null, suggested: 5600, suggestedSeries: 'E12',
+          lowestPower: 33000, suggestedRise: K * 5880 * 25e-12, suggestedHigh: 3.135 - 5880 * 20e-6,
+          suggestedSink: (3.465 - 0.4) / 5320 + 10e-6, suggestedLow: 0.4,
+        },
       }],
     },
     {
       // C = 2 × 10 pF + 200 pF wiring; 1 µs / (ln(7/3) × 220 pF) = 5364.6 Ω binds before the level.
+      // Advice: 0.7 × 5364.6 / 1.05 = 3576.4 Ω from 1079.0 Ω; √ = 1964 Ω: E12 1.8 kΩ (1.091)
+      // beats 2.2 kΩ (1.120). Largest E24 inside: 3.3 kΩ.
       name: 'bus pull-up inside its range (rise-time bound)',
       design: bus({ pull: { to: '3v3', ohms: 4700 }, wiringCapacitance: 200e-12, maxRiseTime: 1e-6 }),
       findings: [{
         messageId: 'inRange', severity: 'info',
-        // IEC 60063 E24: 5.1 kΩ ≤ 5364.6 Ω < 5.6 kΩ.
-        values: { rMin: busRMin, rMax: 1e-6 / (K * 220e-12), suggested: 5100, rMaxBy: 'rise-time', capacitance: 220e-12 },
+        values: {
+          rMin: busRMin, rMax: 1e-6 / (K * 220e-12), rMaxBy: 'rise-time', capacitance: 220e-12,
+          ...shrunk(busRMin, 0.7 * 1e-6 / (K * 220e-12)), riseGuard: 0.7, adviceCap: null, suggested: 1800, lowestPower: 3300,
+        },
+      }],
+    },
+    {
+      // The issue's fast-mode bus: 300 ns (I2C-bus specification, fast-mode tr) at 200 pF, range
+      // 1.03–1.77 kΩ; the advice 1079–1180 Ω holds no E12 value, and E24 1.1 kΩ only.
+      name: 'a fast-mode bus of 200 pF gets 1.1 kΩ, not 1.6 kΩ',
+      design: bus({ pull: { to: '3v3', ohms: 1500 }, wiringCapacitance: 180e-12, maxRiseTime: 300e-9 }),
+      findings: [{
+        messageId: 'inRange', severity: 'info',
+        values: {
+          rMin: busRMin, rMax: 300e-9 / (K * 200e-12), ...shrunk(busRMin, 0.7 * 300e-9 / (K * 200e-12)),
+          suggested: 1100, suggestedSeries: 'E24', lowestPower: 1100,
+        },
       }],
     },
     {
       name: 'bus pull-up too small for the drivers',
       design: bus({ pull: { to: '3v3', ohms: 1000 } }),
-      findings: [{ messageId: 'tooSmall', severity: 'error', values: { ohms: 1000, rMin: busRMin, empty: false, suggested: 36000 } }],
+      findings: [{ messageId: 'tooSmall', severity: 'error', values: { ohms: 1000, rMin: busRMin, empty: false, suggested: 5600 } }],
     },
     {
       name: 'bus pull-up too large for the input-high level',
@@ -85,15 +131,97 @@ ruleTester(rule, {
       findings: [{ messageId: 'tooLarge', severity: 'error', values: { ohms: 47000, rMax: busRMaxLevel } }],
     },
     {
-      // Internal pulls are not part of the range: the same numbers as without M's 10 kΩ.
-      name: 'several pulls: only the net\'s own is sized',
-      design: bus({ pull: { to: '3v3', ohms: 4700 } }, { pinPull: { to: '3v3', ohms: 10000 } }),
-      findings: [{ messageId: 'inRange', severity: 'info', values: { ohms: 4700, rMin: busRMin, rMax: busRMaxLevel } }],
+      // An internal pull alone: 4.7 kΩ inside M. Advice for a pull of the net's own beside it:
+      // from 1/(1/1025.1 − 1/4700) = 1311.0 Ω; M's pull alone meets the level bound, so only the
+      // 47 kΩ cap (on board) bounds it: [1380.0, 47000], √ = 8054 Ω, E12 8.2 kΩ.
+      name: 'an internal pull alone is judged',
+      design: bus({}, { pinPull: { to: '3v3', ohms: 4700 } }),
+      findings: [{
+        messageId: 'inRange', severity: 'info',
+        values: {
+          ohms: 4700, rMin: busRMin, rMax: busRMaxLevel, adviceMin: beside(busRMin, 1 / 4700) / (1 - T), adviceMax: 47000,
+          adviceCap: 47000, othersOhms: 4700, suggested: 8200, lowestPower: null,
+        },
+      }],
     },
     {
+      // The net's 4.7 kΩ and M's 10 kΩ: 3197 Ω together, inside. The net's own from
+      // 1/(1/1025.1 − 1/10 k) = 1142.2 Ω; M's 10 kΩ alone meets the level bound: capped at 47 kΩ.
+      // [1202.3, 47000]: √ = 7517 Ω, E12 8.2 kΩ (1.091) beats 6.8 kΩ (1.105).
+      name: 'every pull counts: the net\'s own and a pin\'s internal one in parallel',
+      design: bus({ pull: { to: '3v3', ohms: 4700 } }, { pinPull: { to: '3v3', ohms: 10000 } }),
+      findings: [{
+        messageId: 'inRange', severity: 'info',
+        values: {
+          ohms: 1 / (1 / 4700 + 1 / 10000), rMin: busRMin, rMax: busRMaxLevel,
+          adviceMin: beside(busRMin, 1 / 10000) / (1 - T), adviceMax: 47000, suggested: 8200,
+        },
+      }],
+    },
+    {
+      // The review's bus: 4.7 kΩ and two 2.2 kΩ module pull-ups, 891 Ω together; four i2c pins, so
+      // Rmin = (3.465 − 0.4) / (3 mA − 30 µA) = 1032.0 Ω. Too strong; the net's own must be at
+      // least 1/(1/1032.0 − 2/2.2 k) = 16.69 kΩ; [17.57 k, 47 k] (cap): √ = 28.74 kΩ, E12 27 kΩ.
+      name: 'module pull-ups make the pulls together too strong',
+      design: design({
+        parts: [
+          part('M', '3v3', 'i2c', [bidir('SDA', od)]),
+          part('S', '3v3', 'i2c', [bidir('SDA', od)]),
+          part('A', '3v3', 'i2c', [input('SDA', { pull: { to: '3v3', ohms: 2200 } })]),
+          part('B', '3v3', 'i2c', [input('SDA', { pull: { to: '3v3', ohms: 2200 } })]),
+        ],
+        nets: [net('SDA', ['M.SDA', 'S.SDA', 'A.SDA', 'B.SDA'], { pull: { to: '3v3', ohms: 4700 } })],
+      }),
+      findings: [{
+        messageId: 'tooSmall', severity: 'error',
+        values: {
+          ohms: 1 / (1 / 4700 + 2 / 2200), rMin: (3.465 - 0.4) / (3e-3 - 30e-6), othersOhms: 1100,
+          adviceMin: beside((3.465 - 0.4) / (3e-3 - 30e-6), 2 / 2200) / (1 - T), adviceMax: 47000, suggested: 27000,
+        },
+      }],
+    },
+    {
+      // Three 2.2 kΩ module pull-ups (733 Ω) are already below Rmin = (3.465 − 0.4) / (3 mA −
+      // 30 µA): no pull of the net's own can help.
+      name: 'the pins\' own pulls alone are too strong',
+      design: design({
+        parts: [
+          part('M', '3v3', 'i2c', [bidir('SDA', od)]),
+          part('A', '3v3', 'i2c', [input('SDA', { pull: { to: '3v3', ohms: 2200 } })]),
+          part('B', '3v3', 'i2c', [input('SDA', { pull: { to: '3v3', ohms: 2200 } })]),
+          part('C', '3v3', 'i2c', [input('SDA', { pull: { to: '3v3', ohms: 2200 } })]),
+        ],
+        nets: [net('SDA', ['M.SDA', 'A.SDA', 'B.SDA', 'C.SDA'])],
+      }),
+      findings: [{ messageId: 'tooSmall', severity: 'error', values: { ohms: 2200 / 3, suggested: null, othersOhms: 2200 / 3 } }],
+    },
+    {
+      // An internal pull given as a datasheet's range (invented: 600 Ω, 450–800 Ω): the sink
+      // check takes its smallest end, 450 Ω, below Rmin = 4.5 V / 9 mA = 500 Ω.
+      name: 'a pull\'s range: its smallest end judges the sink current',
+      design: rangedPull({ to: 'p5', ohms: 600, min: 450, max: 800 }),
+      findings: [{ messageId: 'tooSmall', severity: 'error', values: { ohms: 600, ohmsMin: 450, ohmsMax: 800, rMin: 500 } }],
+    },
+    {
+      // A net pull of 9.8 kΩ ± 5 %: its largest end, 10.29 kΩ, is above the 10 kΩ the rise time allows.
+      name: 'a pull\'s tolerance: its largest end judges the rise time',
+      design: typed(exact5, edgeDriver, {}, { ...edgeNet, pull: { to: 'p5', ohms: 9800, tolerance: 0.05 } }),
+      findings: [{ messageId: 'tooLarge', severity: 'error', values: { ohms: 9800, ohmsMax: 9800 * 1.05, rMax: 10000 } }],
+    },
+    {
+      // The net's own 2.2 kΩ ± 1 % is shrunk by its own tolerance: [500/0.99, 7000/1.01].
+      name: 'the advice shrinks by the pull\'s own tolerance',
+      design: typed(exact5, edgeDriver, {}, { ...edgeNet, pull: { to: 'p5', ohms: 2200, tolerance: 0.01 } }),
+      findings: [{ messageId: 'inRange', severity: 'info', values: { adviceMin: 500 / 0.99, adviceMax: 7000 / 1.01, adviceTolerance: 0.01 } }],
+    },
+    {
+      // Advice [526.3, 6666.7] (0.7 × 10 kΩ / 1.05): √ = 1873 Ω, E12 1.8 kΩ; largest E24 inside 6.2 kΩ.
       name: 'exactly at Rmin is inside',
       design: typed(exact5, edgeDriver, {}, { ...edgeNet, pull: { to: 'p5', ohms: 500 } }),
-      findings: [{ messageId: 'inRange', severity: 'info', values: { ohms: 500, rMin: 500, rMax: 10000, suggested: 10000 } }],
+      findings: [{
+        messageId: 'inRange', severity: 'info',
+        values: { ohms: 500, rMin: 500, rMax: 10000, ...shrunk(500, 7000), suggested: 1800, lowestPower: 6200 },
+      }],
     },
     {
       name: 'exactly at Rmax is inside',
@@ -111,10 +239,28 @@ ruleTester(rule, {
       findings: [{ messageId: 'tooSmall', severity: 'error', values: { ohms: 499, rMin: 500 } }],
     },
     {
-      // No rise-time limit and no input current: no upper bound, so no value to suggest.
-      name: 'unbounded above',
+      // No rise-time limit and no input current: no upper bound; off-board pins cap the advice
+      // at 10 kΩ: [526.3, 10000], √ = 2294 Ω, E12 2.2 kΩ; no largest value in an open range.
+      name: 'unbounded above: capped at 10 kΩ with off-board pins',
       design: typed(exact5, edgeDriver, { vih: 2 }, { pull: { to: 'p5', ohms: 100000 } }),
-      findings: [{ messageId: 'inRange', severity: 'info', values: { rMin: 500, rMax: null, empty: false, suggested: null } }],
+      findings: [{
+        messageId: 'inRange', severity: 'info',
+        values: { rMin: 500, rMax: null, empty: false, adviceCap: 10000, adviceMax: 10000, suggested: 2200, lowestPower: null },
+      }],
+    },
+    {
+      // The issue's off-board switch: only leakage bounds it. 5 V exact, VOL 0.4 V @ 1 mA, VIH
+      // 3.5 V (5 V CMOS, common practice), 10 µA: range 4.6–130 kΩ; the advice [4842, 123810]
+      // capped at 10 kΩ: √ = 6959 Ω, E12 6.8 kΩ (not 120 kΩ, the largest E24 inside).
+      name: 'an off-board switch bounded only by leakage gets a practical value',
+      design: typed(exact5, { vol: [{ v: 0.4, i: 1e-3 }] }, { vih: 3.5, iih: 10e-6 }, { pull: { to: 'p5', ohms: 100000 } }),
+      findings: [{
+        messageId: 'inRange', severity: 'info',
+        values: {
+          rMin: 4600, rMax: (5 - 3.5 - 0.2) / 10e-6, adviceMin: 4600 / (1 - T), adviceCap: 10000, suggested: 6800,
+          lowestPower: 120000,
+        },
+      }],
     },
     {
       // Rmin = 5 V / 20 mA = 250 Ω; Rmax = 260 Ω by the rise time: IEC 60063 E24 has 240 and 270 only.
@@ -160,9 +306,9 @@ ruleTester(rule, {
     },
     {
       // Three rails: VOL 0.2·VDD (i2c-lv) is largest at 1v8's lowest end while Vpull is at 3v3's
-      // highest: Rmin = (3.465 − 0.2 × 1.71) / (3 mA − 0) (lvcmos33 gives no iil). Rmax: the
-      // largest VIH of the receivers, LVCMOS 2.0 V beats 0.65 × 1.89 = 1.2285 V (JESD8-7), against
-      // Vpull at 3.135 V, over Σiih = 10 µA (the driver's own).
+      // highest: Rmin = (3.465 − 0.2 × 1.71) / (3 mA − 2 × 5 µA) (LVCMOS ±5 µA, from memory). Rmax:
+      // the largest VIH of the receivers, LVCMOS 2.0 V beats 0.65 × 1.89 = 1.2285 V (JESD8-7),
+      // against Vpull at 3.135 V, over Σiih = 10 µA (the driver's own) + 2 × 5 µA.
       name: 'corners across the pull, driver and receiver rails',
       design: design({
         parts: [
@@ -175,14 +321,16 @@ ruleTester(rule, {
       findings: [{
         messageId: 'inRange', severity: 'info',
         values: {
-          rMin: (3.465 - 0.2 * 1.71) / 3e-3, rMinCorner: { '3v3': 3.465, '1v8': 1.71 }, rMinDriver: 'D.Y',
-          rMax: (3.135 - 2.0 - 0.2) / 10e-6, suggested: 91000,
+          rMin: (3.465 - 0.2 * 1.71) / (3e-3 - 10e-6), rMinCorner: { '3v3': 3.465, '1v8': 1.71 }, rMinDriver: 'D.Y',
+          // Advice [1099.5, 44524] (the 47 kΩ cap lies above): √ = 6997 Ω, E12 6.8 kΩ; largest E24 inside 43 kΩ.
+          rMax: (3.135 - 2.0 - 0.2) / 20e-6, adviceCap: null, suggested: 6800, lowestPower: 43000,
         },
       }],
     },
     {
-      // A Schmitt receiver is judged by vtPlus: 2.8 V here, so (3.135 − 2.8 − 0.2) / 10 µA = 13.5 kΩ
-      // (with its vih of 2.0 V it would be 93.5 kΩ and 15 kΩ would pass).
+      // A Schmitt receiver is judged by vtPlus: 2.8 V here, so (3.135 − 2.8 − 0.2) / 15 µA = 9 kΩ
+      // (10 µA from the bus pin, 5 µA LVCMOS from memory; with its vih of 2.0 V it would be 62.3 kΩ
+      // and 15 kΩ would pass).
       name: 'a Schmitt receiver\'s vtPlus is its VIH',
       design: design({
         parts: [
@@ -191,7 +339,7 @@ ruleTester(rule, {
         ],
         nets: [net('N', ['D.Y', 'R.A'], { pull: { to: '3v3', ohms: 15000 } })],
       }),
-      findings: [{ messageId: 'tooLarge', severity: 'error', values: { rMax: (3.135 - 2.8 - 0.2) / 10e-6 } }],
+      findings: [{ messageId: 'tooLarge', severity: 'error', values: { rMax: (3.135 - 2.8 - 0.2) / 15e-6 } }],
     },
     {
       // In `io-off` the 1v8 driver is unpowered: it no longer sets Rmin, but its iil (10 µA)

@@ -63,6 +63,21 @@ function crossing(over: { driverRail?: number; tolerance?: number } = {}): Desig
   });
 }
 
+/**
+ * A 3.3 V LVCMOS output into a 74HCT input on 5 V: interface-power's input held high below its
+ * supply less the ΔICC offset (2.93 V < 5.25 V − 2.1 V), an info finding unless a number is broken.
+ */
+function held(over: { driverRail?: number; tolerance?: number } = {}): Design {
+  return design({
+    rails: [
+      over.tolerance === undefined ? rail5v0 : rail('5v0', 5, { tolerance: over.tolerance }),
+      over.driverRail === undefined ? rail3v3 : rail('3v3', over.driverRail, { tolerance: 0.05 }),
+    ],
+    parts: [part('D', '3v3', 'lvcmos33', [output('Y')]), part('R', '5v0', '74hct', [input('A')])],
+    nets: [net('N', ['D.Y', 'R.A'])],
+  });
+}
+
 interface Case {
   name: string;
   rule: string;
@@ -107,11 +122,13 @@ const cases: Case[] = [
     nets: [net('BUS0', ['U7.D0'], { pull: { to: '3v3', ohms: 4700 } })],
   }) },
   { name: 'rail range ±∞', rule: 'rail-range', design: driven({ tolerance: 3.6e307 }) },
+  { name: 'driver rail NaN V', rule: 'interface-power', design: held({ driverRail: Number.NaN }) },
+  { name: 'receiver tolerance 3.6e307 (rail range ±∞)', rule: 'interface-power', design: held({ tolerance: 3.6e307 }) },
 ];
 
 /** The rules that judge numbers, each with at least one case above. */
 const NUMERIC = [
-  'level-high', 'level-low', 'drive-load', 'edge-rate', 'pull-range', 'overvoltage', 'back-power', 'rail-crossing', 'rail-range',
+  'level-high', 'level-low', 'drive-load', 'edge-rate', 'pull-range', 'overvoltage', 'back-power', 'rail-crossing', 'rail-range', 'interface-power',
   'clamp-current', 'rail-injection', 'undervoltage', 'fet-shifter', 'translator-pull', 'bus-hold',
 ];
 /** The rules that judge only how pins are connected. */

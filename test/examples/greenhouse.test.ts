@@ -40,6 +40,8 @@ const RISE_30_70 = Math.log(7 / 3);
 const MIN_MARGIN = 0.2; // the example's settings.minMargin
 const U1_I = 1e-6; // the controller's iih and iil, the example's own datasheet value
 const U1_CIN = 5e-12; // the controller's cin, the example's own
+const FLOW_RMIN = (V33.max - 0.4) / (1e-3 - U1_I);
+const FLOW_RMAX = 10e-6 / (RISE_30_70 * (1.5e-9 + U1_CIN));
 
 const plantedErrors: Planted[] = [
   // The 3.3 V bus pull-ups reach the 1.8 V sensor's pins: 3.465 V against VDD + 0.5 at 1.71 V.
@@ -69,22 +71,29 @@ const plantedErrors: Planted[] = [
   },
   // The two boards' sleep inputs are joined, but no output was ever put on the line.
   { id: 'floating-input:SLEEP:all-on', values: { pins: ['U3.SLEEP', 'U4.SLEEP'] } },
+  // At reset the controller's VALVE_EN pin is an input until firmware runs: nothing drives the
+  // valve driver's enable and nothing pulls it, so it floats exactly while the board boots.
+  { id: 'floating-input:VALVE_EN:reset', values: { pins: ['U1.VALVE_EN', 'U3.EN'] } },
   // The tank float switch only pulls low and nothing pulls the line up.
   { id: 'missing-pull:TANK_LOW:all-on', values: { drivers: ['J3.SW'] } },
-  // The frost alarm's 100 kΩ pull-up is too weak for the thermostat's 10 µA leakage (the
-  // example's own) plus the controller's 1 µA: Rmax = (VDD − 0.7·VDD − minMargin) / Σiih at
-  // VDD's low end; the line reads high only thanks to the controller's internal pull-up,
-  // which is not part of the range. Rmin = (VDD,max − VOL) / (IOL − the controller's iil), the
-  // thermostat's own 0.4 V @ 1 mA row. Largest E24 value inside (IEC 60063): 62 kΩ (68 k is above).
+  // The flow meter's line has only the controller's internal 40 kΩ pull-up, far above what its
+  // 10 µs rise limit allows over 15 m of cable: Rmax = 10 µs / (ln(7/3) × 1.505 nF). Rmin =
+  // (VDD,max − VOL) / (IOL − the controller's iil), the meter's own 0.4 V @ 1 mA row. The advice
+  // for a pull of the net's own beside the 40 kΩ: from 1/(1/Rmin − 1/40 k) = 3322.9 Ω to
+  // 1/(1/(0.7 × Rmax) − 1/40 k) = 6363.0 Ω, shrunk by 5 % to [3497.8, 6060.0] Ω: √ = 4604 Ω,
+  // E12 4.7 kΩ (IEC 60063); largest E24 inside 5.6 kΩ.
   {
-    id: 'pull-range:FROST:all-on',
+    id: 'pull-range:FLOW:all-on',
     values: {
-      ohms: 100e3,
-      rMin: (V33.max - 0.4) / (1e-3 - U1_I),
-      rMax: ((1 - MCU_VIH) * V33.min - MIN_MARGIN) / (10e-6 + U1_I),
-      rMaxBy: 'level',
+      ohms: 40e3,
+      rMin: FLOW_RMIN,
+      rMax: FLOW_RMAX,
+      rMaxBy: 'rise-time',
       empty: false,
-      suggested: 62e3,
+      adviceMin: 1 / (1 / FLOW_RMIN - 1 / 40e3) / 0.95,
+      adviceMax: 1 / (1 / (0.7 * FLOW_RMAX) - 1 / 40e3) / 1.05,
+      suggested: 4.7e3,
+      lowestPower: 5.6e3,
     },
   },
   // Planted in version 2: SCL2's 3.3 V-side pull-up through the FET shifter Q2 is 1 kΩ (−1 %),
@@ -139,10 +148,25 @@ const errorsAgainInStandby: readonly string[] = [
   'contention:PUMP_EN:all-on',
   'floating-input:SLEEP:all-on',
   'missing-pull:TANK_LOW:all-on',
-  'pull-range:FROST:all-on',
+  'pull-range:FLOW:all-on',
 ];
 const warningsAgainInStandby: readonly string[] = ['edge-rate:FLOW:all-on'];
 const inStandby = (id: string) => id.replace(':all-on', ':standby');
+
+/**
+ * Reset (every rail on, the controller's VALVE_EN and PUMP_EN pins inputs until firmware runs):
+ * every all-on fault is found again with the same numbers, except the two those pins caused as
+ * outputs: no level-high on VALVE_EN (nothing drives it) and no contention on PUMP_EN (only the
+ * override panel drives it, against the controller's 40 kΩ pull-down).
+ */
+const notAtReset = new Set(['level-high:VALVE_EN:all-on:U1.VALVE_EN>U3.EN', 'contention:PUMP_EN:all-on']);
+const errorsAgainAtReset: readonly string[] = [
+  ...errorsAgainInStandby.filter((id) => !notAtReset.has(id)),
+  'overvoltage:SDA:all-on:U2.SDA',
+  'overvoltage:SCL:all-on:U2.SCL',
+];
+const warningsAgainAtReset: readonly string[] = ['edge-rate:FLOW:all-on'];
+const atReset = (id: string) => id.replace(':all-on', ':reset');
 
 function expectClose(actual: unknown, expected: Expected, label: string): void {
   if (typeof expected !== 'number') {
@@ -164,12 +188,12 @@ describe('greenhouse irrigation controller example', () => {
   const ids = (severity: string) =>
     result.findings.filter((f) => f.severity === severity && f.waived === undefined).map((f) => f.id).sort();
   it('has exactly the planted faults at error level', () => {
-    const expected = [...plantedErrors.map((p) => p.id), ...errorsAgainInStandby.map(inStandby)];
+    const expected = [...plantedErrors.map((p) => p.id), ...errorsAgainInStandby.map(inStandby), ...errorsAgainAtReset.map(atReset)];
     expect(ids('error')).toEqual(expected.sort());
   });
 
   it('has exactly the planted warnings', () => {
-    const expected = [...plantedWarnings.map((p) => p.id), ...warningsAgainInStandby.map(inStandby)];
+    const expected = [...plantedWarnings.map((p) => p.id), ...warningsAgainInStandby.map(inStandby), ...warningsAgainAtReset.map(atReset)];
     expect(ids('warning')).toEqual(expected.sort());
   });
 
@@ -178,6 +202,14 @@ describe('greenhouse irrigation controller example', () => {
     expect(f, id).toBeDefined();
     for (const [k, v] of Object.entries(values)) expectClose((f!.values as Readonly<Record<string, unknown>>)[k], v, `${id} ${k}`);
     expect(f!.message).toMatch(/\d/);
+  });
+
+  it.each([...errorsAgainAtReset, ...warningsAgainAtReset])('%s is found again at reset with the same numbers', (id) => {
+    const allOn = result.findings.find((f) => f.id === id);
+    const reset = result.findings.find((f) => f.id === atReset(id));
+    expect(reset, atReset(id)).toBeDefined();
+    expect(reset!.severity).toBe(allOn!.severity);
+    expect(reset!.values).toEqual(allOn!.values);
   });
 
   it.each([...errorsAgainInStandby, ...warningsAgainInStandby])('%s is found again in standby with the same numbers', (id) => {
@@ -189,8 +221,39 @@ describe('greenhouse irrigation controller example', () => {
     expect(standby!.values).toEqual(allOn!.values);
   });
 
-  it('has the standby scenario, and back-power finds the sensor fed through its bus pins there only', () => {
-    expect(design.scenarios).toEqual([{ id: 'standby', label: 'Standby: sensor rail off', off: ['1v8'] }]);
+  // The pull-up advice (README, "Pull-up advice"), worked by hand: the range of the pulls
+  // together, the net's own pull-up beside the pins' internal ones, the rise-time bound at
+  // 0.7 × maxRiseTime, shrunk by 5 % tolerance to [lo/0.95, hi/1.05], capped at 10 kΩ with an
+  // off-board pin or 47 kΩ on board where only leakage bounds it; the IEC 60063 E12 value nearest
+  // √(lo·hi) on a log scale; the largest E24 value inside as the alternative.
+  const SDA_RMIN = (V33.max - 0.2 * V18.min) / (3e-3 - U1_I); // the sensor's 0.2·VDD @ 3 mA (I2C-bus specification, VDD ≤ 2 V)
+  const SDA_RMAX = 1e-6 / (RISE_30_70 * (50e-12 + U1_CIN + 10e-12)); // standard-mode 1 µs; 50 pF wiring + 5 pF + 10 pF (I2C-bus spec. pin)
+  const FAULT_RMIN = (V33.max - 0.33) / (4e-3 - U1_I); // 74HC 0.33 V @ 4 mA (JESD7 as restated)
+  const FAULT_RMAX = ((1 - MCU_VIH) * V33.min - MIN_MARGIN) / (1e-6 + U1_I); // 74HC iih 1 µA (JESD7) + the controller's
+  const FROST_RMIN = (V33.max - 0.4) / (1e-3 - U1_I);
+  const RAIN_RMIN = (V33.max - 0.1) / (1e-3 - U1_I); // the gauge's own 0.1 V @ 1 mA
+  it.each([
+    // 1.04–18.2 kΩ: [1096.1, 12104.8] Ω, √ = 3643 Ω: 3.9 kΩ (ratio 1.071; 3.3 kΩ is 1.104), not 18 kΩ.
+    ['SDA', { rMin: SDA_RMIN, rMax: SDA_RMAX, adviceMin: SDA_RMIN / 0.95, adviceMax: 0.7 * SDA_RMAX / 1.05, adviceCap: null, suggested: 3.9e3, lowestPower: 12e3 }],
+    ['SCL', { rMin: SDA_RMIN, rMax: SDA_RMAX, suggested: 3.9e3 }],
+    // The fault line, leakage only, on board: [825.3 Ω, 47 kΩ], √ = 6228 Ω: 6.8 kΩ (1.092; 5.6 kΩ
+    // is 1.112), not 360 kΩ.
+    ['FAULT_N', { rMin: FAULT_RMIN, rMax: FAULT_RMAX, adviceMin: FAULT_RMIN / 0.95, adviceCap: 47e3, suggested: 6.8e3, lowestPower: 330e3 }],
+    // The frost thermostat (off-board) beside the controller's 30–50 kΩ pull-up: from 1/(1/Rmin −
+    // 1/30 k) = 3417.6 Ω, shrunk 3597.5 Ω, capped at 10 kΩ: √ = 5998 Ω, 5.6 kΩ (1.071), not 62 kΩ.
+    ['FROST', { ohms: 1 / (1 / 100e3 + 1 / 40e3), ohmsMin: 1 / (1 / 100e3 + 1 / 30e3), ohmsMax: 1 / (1 / 100e3 + 1 / 50e3), rMin: FROST_RMIN, adviceMin: 1 / (1 / FROST_RMIN - 1 / 30e3) / 0.95, adviceCap: 10e3, suggested: 5.6e3 }],
+    // The rain gauge (off-board) beside the controller's 47 kΩ: from 1/(1/Rmin − 1/47 k) = 3628.5 Ω,
+    // shrunk 3819.5 Ω, capped at 10 kΩ: √ = 6180 Ω, 6.8 kΩ (1.1003; 5.6 kΩ is 1.1036).
+    ['RAIN', { rMin: RAIN_RMIN, adviceMin: 1 / (1 / RAIN_RMIN - 1 / 47e3) / 0.95, adviceCap: 10e3, suggested: 6.8e3 }],
+  ] as const)('pull-up advice on %s follows the policy', (netId, values) => {
+    const f = result.findings.find((x) => x.id === `pull-range:${netId}:all-on`);
+    expect(f, netId).toBeDefined();
+    for (const [k, v] of Object.entries(values)) expectClose((f!.values as Readonly<Record<string, unknown>>)[k], v as Expected, `${netId} ${k}`);
+  });
+
+  it('has the standby and reset scenarios, and back-power finds the sensor fed through its bus pins there only', () => {
+    expect(design.scenarios?.map((sc) => sc.id)).toEqual(['standby', 'reset']);
+    expect(design.scenarios?.[0]).toEqual({ id: 'standby', label: 'Standby: sensor rail off', off: ['1v8'] });
     const backPower = result.findings.filter((f) => f.rule === 'back-power');
     expect(backPower.map((f) => `${f.scenario} ${f.id}`).sort()).toEqual([
       'standby back-power:SCL:standby:U2.SCL',

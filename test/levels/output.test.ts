@@ -28,10 +28,24 @@ describe('outputLevel', () => {
     expect(r.estimate).toBe(estimate);
   });
 
-  it('a single point gives that point\'s level as the estimate above it', () => {
-    // JESD8C LVCMOS: VOH VDD−0.2 V at 100 µA only.
-    const r = outputLevel([{ v: 'VDD-0.2', i: 100e-6 }], 1e-3, 3.0, 'high')!;
-    expect(r.v).toBeCloseTo(2.8, 12);
+  // A single row: the resistive line through the origin, as if the output were a resistor from
+  // its own rail. Numbers worked by hand from the rows named beside each case.
+  it.each([
+    // I2C-bus specification: VOL 0.4 V @ 3 mA (VDD > 2 V). 4.54 mA: 0.4 × 4.54 / 3 = 0.60533 V.
+    ['a 0.4 V @ 3 mA row at 4.54 mA', [{ v: 0.4, i: 3e-3 }], 4.54e-3, 3.3, 'low', 0.4 * 4.54 / 3],
+    // I2C-bus specification, VDD ≤ 2 V: VOL 0.2·VDD @ 3 mA = 0.342 V at 1.71 V; 4.59 mA gives
+    // 0.342 × 4.59 / 3 = 0.52326 V, above VIL 0.3 × 1.71 = 0.513 V (a failing low level).
+    ['a 0.2·VDD @ 3 mA row at 4.59 mA and 1.71 V', [{ v: '0.2*VDD', i: 3e-3 }], 4.59e-3, 1.71, 'low', 0.342 * 4.59 / 3],
+    // JESD8C LVCMOS: VOH VDD − 0.2 V @ 100 µA only; 1 mA at 3.0 V: 3.0 − 0.2 × 10 = 1.0 V.
+    ['a VDD−0.2 @ 100 µA row at 1 mA', [{ v: 'VDD-0.2', i: 100e-6 }], 1e-3, 3.0, 'high', 1.0],
+    // The same row at 100 mA: the line reaches 0 V and stops at the output's own rail (common practice).
+    ['a VDD−0.2 @ 100 µA row far beyond it stops at 0 V', [{ v: 'VDD-0.2', i: 100e-6 }], 100e-3, 3.0, 'high', 0],
+    ['a 0.4 V @ 3 mA row far beyond it stops at VDD', [{ v: 0.4, i: 3e-3 }], 1, 3.3, 'low', 3.3],
+    // A row at 0 A draws no line: its level is kept.
+    ['a row at 0 A keeps its level', [{ v: 0.1, i: 0 }], 1e-3, 3.3, 'low', 0.1],
+  ] as const)('single row: %s', (_name, points, load, vdd, sense, v) => {
+    const r = outputLevel(points, load, vdd, sense)!;
+    expect(r.v).toBeCloseTo(v, 12);
     expect(r.estimate).toBe(true);
   });
 

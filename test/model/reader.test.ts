@@ -111,6 +111,10 @@ const refusals: Refusal[] = [
   // resistance not positive
   { name: 'pull of 0 Ω', breakIt: (d) => void (d.nets[0].pull.ohms = 0), path: 'nets[0].pull.ohms', says: 'resistance (Ω) from 1 mΩ to 1 TΩ' },
   { name: 'pull of negative ohms', breakIt: (d) => void (d.parts[3].pins[2].pull.ohms = -100e3), path: 'parts[3].pins[2].pull.ohms', says: 'resistance (Ω) from 1 mΩ to 1 TΩ' },
+  // a pull's range (design-format: min ≤ ohms ≤ max, tolerance a fraction below 1)
+  { name: 'pull min above its ohms', breakIt: (d) => void (d.nets[0].pull.min = 5e3), path: 'nets[0].pull', says: 'min ≤ ohms ≤ max' },
+  { name: 'pull max below its ohms', breakIt: (d) => void (d.nets[0].pull.max = 4e3), path: 'nets[0].pull', says: 'min ≤ ohms ≤ max' },
+  { name: 'pull tolerance of 1', breakIt: (d) => void (d.nets[0].pull.tolerance = 1), path: 'nets[0].pull.tolerance', says: 'below 1' },
   // negative capacitance, current, time, ramp or tolerance
   { name: 'negative input capacitance', breakIt: (d) => void (d.profiles[0].params.cin = -5e-12), path: 'profiles[0].params.cin', says: 'capacitance' },
   { name: 'negative wiring capacitance', breakIt: (d) => void (d.nets[1].wiringCapacitance = -1e-12), path: 'nets[1].wiringCapacitance', says: 'capacitance' },

@@ -21,7 +21,7 @@ describe('committed JSON Schema files', () => {
     expect(s.additionalProperties).toBe(false);
     expect(s.required).toEqual(['format', 'version', 'title', 'rails', 'parts', 'nets']);
     expect(Object.keys(s.$defs as object).sort()).toEqual(
-      ['DiodeShifter', 'Discrete', 'FetShifter', 'Level', 'Net', 'OutputPoint', 'Params', 'Part', 'Pin', 'Profile', 'Pull', 'Rail', 'Resistor', 'Scenario', 'Waiver'],
+      ['DiodeShifter', 'Discrete', 'FetShifter', 'Level', 'Net', 'OutputPoint', 'Params', 'Part', 'Pin', 'PinState', 'Profile', 'Pull', 'Rail', 'Resistor', 'Scenario', 'Waiver'],
     );
   });
 });

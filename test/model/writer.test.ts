@@ -31,7 +31,7 @@ const TABLE_ORDER: { name: string; order: KeyOrder | undefined; schema: z.ZodObj
   { name: 'top level', order: KEY_ORDER.design, schema: DesignSchema, keys: ['format', 'version', 'title', 'settings', 'rails', 'scenarios', 'profiles', 'parts', 'discretes', 'nets'] },
   { name: 'settings', order: KEY_ORDER.design.children.settings, schema: SettingsSchema, keys: ['minMargin', 'defaultWiringCapacitance'] },
   { name: 'rail', order: KEY_ORDER.design.children.rails, schema: RailSchema, keys: ['id', 'label', 'nominal', 'tolerance', 'min', 'max', 'colour', 'minLoad'] },
-  { name: 'scenario', order: KEY_ORDER.design.children.scenarios, schema: ScenarioSchema, keys: ['id', 'label', 'off'] },
+  { name: 'scenario', order: KEY_ORDER.design.children.scenarios, schema: ScenarioSchema, keys: ['id', 'label', 'off', 'pins'] },
   { name: 'part', order: KEY_ORDER.design.children.parts, schema: PartSchema, keys: ['id', 'label', 'rail', 'profile', 'params', 'position', 'pins'] },
   { name: 'pin', order: KEY_ORDER.design.children.parts.children.pins, schema: PinSchema, keys: ['id', 'role', 'drive', 'rail', 'profile', 'params', 'pull', 'side'] },
   {
@@ -39,11 +39,11 @@ const TABLE_ORDER: { name: string; order: KeyOrder | undefined; schema: z.ZodObj
     order: KEY_ORDER.params,
     schema: ParamsSchema,
     keys: [
-      'vih', 'vil', 'schmitt', 'iih', 'iil', 'cin', 'viMax', 'unpoweredSafe', 'viMaxOff', 'voh', 'vol', 'ioMax', 'maxInputRamp', 'vddRange',
+      'vih', 'vil', 'schmitt', 'iih', 'iil', 'cin', 'viMax', 'unpoweredSafe', 'viMaxOff', 'voh', 'vol', 'ioMax', 'maxInputRamp', 'vddRange', 'deltaIcc', 'deltaIccDrop',
       'viMin', 'injectionMax', 'busHold', 'seriesResistance', 'minExternalPull', 'maxLoadCapacitance',
     ],
   },
-  { name: 'pull', order: KEY_ORDER.design.children.nets.children.pull, schema: PullSchema, keys: ['to', 'ohms'] },
+  { name: 'pull', order: KEY_ORDER.design.children.nets.children.pull, schema: PullSchema, keys: ['to', 'ohms', 'tolerance', 'min', 'max'] },
   { name: 'net', order: KEY_ORDER.design.children.nets, schema: NetSchema, keys: ['id', 'label', 'pins', 'pull', 'wiringCapacitance', 'maxRiseTime', 'waivers', 'route'] },
   { name: 'waiver', order: KEY_ORDER.design.children.nets.children.waivers, schema: WaiverSchema, keys: ['rule', 'scenario', 'note'] },
   { name: 'profile', order: KEY_ORDER.design.children.profiles, schema: ProfileSchema, keys: ['id', 'label', 'source', 'params'] },

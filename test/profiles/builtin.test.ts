@@ -24,7 +24,9 @@ const V1_IDS = [
 ];
 
 /** Ids the library added after the v1 list, in the library's order. */
-const ADDED_IDS = ['xlat-side', 'xlat-od'];
+const ADDED_IDS = [
+  'xlat-side', 'xlat-od', 'i2c-fm', 'smbus', 'cmos4000-ub', '74lvc-18', '74lvc-25', '74lvc-od', '74lvt', '74abt', '74avc', '74auc',
+];
 
 const ALL_IDS = [...V1_IDS, ...ADDED_IDS];
 
@@ -36,88 +38,95 @@ const TABLE: Record<string, Params> = {
   ttl: {
     vddRange: [4.75, 5.25], vih: 2, vil: 0.8,
     voh: [{ v: 2.4, i: 400 * µA }], vol: [{ v: 0.4, i: 16 * mA }],
-    iih: 40 * µA, iil: 1.6 * mA, viMax: 5.5,
+    iih: 40 * µA, iil: 1.6 * mA, cin: 5e-12, viMax: 5.5, // cin from memory (issue 16)
   },
   '74ls': {
     vddRange: [4.75, 5.25], vih: 2, vil: 0.8,
     voh: [{ v: 2.7, i: 400 * µA }], vol: [{ v: 0.4, i: 4 * mA }, { v: 0.5, i: 8 * mA }],
-    iih: 20 * µA, iil: 400 * µA, viMax: 7,
+    iih: 20 * µA, iil: 400 * µA, cin: 5e-12, viMax: 7, // cin from memory (issue 16)
   },
   '74ls-oc': {
     vddRange: [4.75, 5.25], vol: [{ v: 0.5, i: 8 * mA }], iih: 100 * µA, viMax: 5.5,
   },
   '74hc': {
-    vddRange: [4.5, 6], vih: '0.675*VDD+0.15', vil: '0.325*VDD-0.15',
-    voh: [{ v: 'VDD-0.1', i: 20 * µA }, { v: 'VDD-0.66', i: 4 * mA }],
-    vol: [{ v: 0.1, i: 20 * µA }, { v: 0.33, i: 4 * mA }],
+    // issue 16: the whole 2–6 V of JESD7 (as restated), each heavier row from the supply it is tabulated at
+    vddRange: [2, 6], vih: '0.675*VDD+0.15', vil: '0.325*VDD-0.15',
+    voh: [{ v: 'VDD-0.1', i: 20 * µA }, { v: 'VDD-0.66', i: 4 * mA, vddMin: 4.5 }, { v: 'VDD-0.66', i: 5.2 * mA, vddMin: 6 }],
+    vol: [{ v: 0.1, i: 20 * µA }, { v: 0.33, i: 4 * mA, vddMin: 4.5 }, { v: 0.33, i: 5.2 * mA, vddMin: 6 }],
     iih: 1 * µA, iil: 1 * µA, cin: 10e-12, viMax: 'VDD+0.5',
   },
   '74hct': {
     vddRange: [4.5, 5.5], vih: 2, vil: 0.8,
     voh: [{ v: 'VDD-0.1', i: 20 * µA }, { v: 'VDD-0.66', i: 4 * mA }],
     vol: [{ v: 0.1, i: 20 * µA }, { v: 0.33, i: 4 * mA }],
-    iih: 1 * µA, iil: 1 * µA, cin: 10e-12, viMax: 'VDD+0.5',
+    iih: 1 * µA, iil: 1 * µA, cin: 10e-12, deltaIcc: 0.5 * mA, deltaIccDrop: 2.1, viMax: 'VDD+0.5',
   },
   '74ac': {
     vddRange: [4.5, 6], vih: '0.7*VDD', vil: '0.3*VDD',
     voh: [{ v: 'VDD-0.1', i: 50 * µA }, { v: 'VDD-0.74', i: 24 * mA }],
     vol: [{ v: 0.1, i: 50 * µA }, { v: 0.44, i: 24 * mA }],
-    iih: 1 * µA, iil: 1 * µA, viMax: 'VDD+0.5',
+    iih: 1 * µA, iil: 1 * µA, cin: 10e-12, viMax: 'VDD+0.5', // cin from memory (issue 16)
   },
   '74act': {
     vddRange: [4.5, 5.5], vih: 2, vil: 0.8,
     voh: [{ v: 'VDD-0.1', i: 50 * µA }, { v: 'VDD-0.74', i: 24 * mA }],
     vol: [{ v: 0.1, i: 50 * µA }, { v: 0.44, i: 24 * mA }],
-    iih: 1 * µA, iil: 1 * µA, viMax: 'VDD+0.5',
+    iih: 1 * µA, iil: 1 * µA, cin: 10e-12, deltaIcc: 1.5 * mA, deltaIccDrop: 2.1, viMax: 'VDD+0.5', // cin from memory (issue 16)
   },
   '74ahc': {
     vddRange: [4.5, 5.5], vih: '0.7*VDD', vil: '0.3*VDD',
-    voh: [{ v: 'VDD-0.1', i: 50 * µA }, { v: 'VDD-0.56', i: 8 * mA }],
+    // VOH at 8 mA: VDD − 0.70, the −40…85 °C figure of a family datasheet's DC table (issue 16's review)
+    voh: [{ v: 'VDD-0.1', i: 50 * µA }, { v: 'VDD-0.7', i: 8 * mA }],
     vol: [{ v: 0.1, i: 50 * µA }, { v: 0.44, i: 8 * mA }],
-    iih: 1 * µA, iil: 1 * µA, viMax: 5.5,
+    iih: 1 * µA, iil: 1 * µA, cin: 10e-12, viMax: 5.5, // cin from memory
   },
   '74ahct': {
     vddRange: [4.5, 5.5], vih: 2, vil: 0.8,
-    voh: [{ v: 'VDD-0.1', i: 50 * µA }, { v: 'VDD-0.56', i: 8 * mA }],
+    // VOH at 8 mA: VDD − 0.70, the −40…85 °C figure of a family datasheet's DC table (issue 16's review)
+    voh: [{ v: 'VDD-0.1', i: 50 * µA }, { v: 'VDD-0.7', i: 8 * mA }],
     vol: [{ v: 0.1, i: 50 * µA }, { v: 0.44, i: 8 * mA }],
-    iih: 1 * µA, iil: 1 * µA, viMax: 5.5,
+    iih: 1 * µA, iil: 1 * µA, cin: 10e-12, deltaIcc: 1.5 * mA, deltaIccDrop: 2.1, viMax: 5.5, // cin from memory
   },
   '74lvc': {
     vddRange: [2.7, 3.6], vih: 2, vil: 0.8,
     voh: [{ v: 'VDD-0.2', i: 100 * µA }, { v: 'VDD-0.6', i: 12 * mA }],
     vol: [{ v: 0.2, i: 100 * µA }, { v: 0.4, i: 12 * mA }],
-    viMax: 5.5, unpoweredSafe: true, viMaxOff: 5.5,
+    iih: 5 * µA, iil: 5 * µA, cin: 5e-12, viMax: 5.5, unpoweredSafe: true, viMaxOff: 5.5, // currents and cin from memory
   },
   lvttl33: {
     vddRange: [3, 3.6], vih: 2, vil: 0.8,
-    voh: [{ v: 2.4, i: 2 * mA }], vol: [{ v: 0.4, i: 2 * mA }], viMax: 'VDD+0.5',
+    voh: [{ v: 2.4, i: 2 * mA }], vol: [{ v: 0.4, i: 2 * mA }], iih: 5 * µA, iil: 5 * µA, cin: 5e-12, viMax: 'VDD+0.5',
   },
   lvcmos33: {
     vddRange: [3, 3.6], vih: 2, vil: 0.8,
-    voh: [{ v: 'VDD-0.2', i: 100 * µA }], vol: [{ v: 0.2, i: 100 * µA }], viMax: 'VDD+0.5',
+    voh: [{ v: 'VDD-0.2', i: 100 * µA }], vol: [{ v: 0.2, i: 100 * µA }], iih: 5 * µA, iil: 5 * µA, cin: 5e-12, viMax: 'VDD+0.5',
   },
   lvcmos25: {
     vddRange: [2.3, 2.7], vih: 1.7, vil: 0.7,
     voh: [{ v: 'VDD-0.2', i: 100 * µA }, { v: 2, i: 1 * mA }, { v: 1.7, i: 2 * mA }],
     vol: [{ v: 0.2, i: 100 * µA }, { v: 0.4, i: 1 * mA }, { v: 0.7, i: 2 * mA }],
+    iih: 5 * µA, iil: 5 * µA, cin: 5e-12, // from memory (issue 16)
     viMax: 'VDD+0.5',
   },
   lvcmos18: {
     vddRange: [1.65, 1.95], vih: '0.65*VDD', vil: '0.35*VDD',
     voh: [{ v: 'VDD-0.2', i: 100 * µA }, { v: 'VDD-0.45', i: 2 * mA }],
     vol: [{ v: 0.2, i: 100 * µA }, { v: 0.45, i: 2 * mA }],
+    iih: 5 * µA, iil: 5 * µA, cin: 5e-12, // from memory (issue 16)
     viMax: 'VDD+0.5',
   },
   lvcmos15: {
     vddRange: [1.4, 1.6], vih: '0.65*VDD', vil: '0.35*VDD',
     voh: [{ v: 'VDD-0.2', i: 100 * µA }, { v: '0.75*VDD', i: 2 * mA }],
     vol: [{ v: 0.2, i: 100 * µA }, { v: '0.25*VDD', i: 2 * mA }],
+    iih: 5 * µA, iil: 5 * µA, cin: 5e-12, // from memory (issue 16)
     viMax: 'VDD+0.5',
   },
   lvcmos12: {
     vddRange: [1.1, 1.3], vih: '0.65*VDD', vil: '0.35*VDD',
     voh: [{ v: 'VDD-0.1', i: 100 * µA }, { v: '0.75*VDD', i: 2 * mA }],
     vol: [{ v: 0.1, i: 100 * µA }, { v: '0.25*VDD', i: 2 * mA }],
+    iih: 5 * µA, iil: 5 * µA, cin: 5e-12, // from memory (issue 16)
     viMax: 'VDD+0.5',
   },
   cmos4000: {
@@ -138,7 +147,9 @@ const TABLE: Record<string, Params> = {
   },
   'mcu-gpio': {
     vih: '0.7*VDD', vil: '0.3*VDD',
-    voh: [{ v: 'VDD-0.2', i: 100 * µA }], vol: [{ v: 0.2, i: 100 * µA }], viMax: 'VDD+0.5',
+    // 8 mA rows, ±1 µA and 5 pF from memory (issue 16)
+    voh: [{ v: 'VDD-0.2', i: 100 * µA }, { v: 'VDD-0.4', i: 8 * mA }], vol: [{ v: 0.2, i: 100 * µA }, { v: 0.4, i: 8 * mA }],
+    iih: 1 * µA, iil: 1 * µA, cin: 5e-12, viMax: 'VDD+0.5',
   },
   'off-board': {},
 };
@@ -165,6 +176,69 @@ const ADDED: Record<string, Params> = {
     iih: 1 * µA, iil: 1 * µA, // from memory
     viMax: 'VDD+0.5', // common practice
     unpoweredSafe: true, viMaxOff: 5.5, // common practice: partial power-down; 5.5 V from memory
+  },
+  'i2c-fm': {
+    vddRange: [2, 5.5], vih: '0.7*VDD', vil: '0.3*VDD',
+    vol: [{ v: 0.4, i: 3 * mA }, { v: 0.6, i: 6 * mA }], // I2C-bus specification: fast-mode 0.6 V @ 6 mA
+    iih: 10 * µA, iil: 10 * µA, cin: 10e-12, viMax: 'VDD+0.5',
+  },
+  smbus: {
+    // SMBus specification 2.0, from memory: fixed 0.8 / 2.1 V thresholds, 0.4 V @ 4 mA
+    vddRange: [3, 5.5], vih: 2.1, vil: 0.8, vol: [{ v: 0.4, i: 4 * mA }],
+    iih: 5 * µA, iil: 5 * µA, cin: 10e-12, viMax: 'VDD+0.5',
+  },
+  'cmos4000-ub': {
+    // JESD13 UB: 4.0 / 1.0 V at 5 V (restated), 12.5 / 2.5 V at 15 V (from memory): lines exact at both
+    vddRange: [5, 15], vih: '0.85*VDD-0.25', vil: '0.15*VDD+0.25',
+    voh: [{ v: 'VDD-0.05', i: 1 * µA }, { v: 'VDD-0.4', i: 360 * µA }],
+    vol: [{ v: 0.05, i: 1 * µA }, { v: 0.4, i: 360 * µA }],
+    iih: 1 * µA, iil: 1 * µA, viMax: 'VDD+0.5',
+  },
+  '74lvc-18': {
+    // JESD8-7 thresholds; 4 mA rows at 1.65 V from memory
+    vddRange: [1.65, 1.95], vih: '0.65*VDD', vil: '0.35*VDD',
+    voh: [{ v: 'VDD-0.2', i: 100 * µA }, { v: 'VDD-0.45', i: 4 * mA }],
+    vol: [{ v: 0.2, i: 100 * µA }, { v: 0.45, i: 4 * mA }],
+    iih: 5 * µA, iil: 5 * µA, cin: 5e-12, viMax: 5.5, unpoweredSafe: true, viMaxOff: 5.5,
+  },
+  '74lvc-25': {
+    // JESD8-5 thresholds; 8 mA rows at 2.3 V from memory
+    vddRange: [2.3, 2.7], vih: 1.7, vil: 0.7,
+    voh: [{ v: 'VDD-0.2', i: 100 * µA }, { v: 'VDD-0.6', i: 8 * mA }],
+    vol: [{ v: 0.2, i: 100 * µA }, { v: 0.6, i: 8 * mA }],
+    iih: 5 * µA, iil: 5 * µA, cin: 5e-12, viMax: 5.5, unpoweredSafe: true, viMaxOff: 5.5,
+  },
+  '74lvc-od': {
+    // as 74LVC, sink rows only
+    vddRange: [2.7, 3.6], vih: 2, vil: 0.8, vol: [{ v: 0.2, i: 100 * µA }, { v: 0.4, i: 12 * mA }],
+    iih: 5 * µA, iil: 5 * µA, cin: 5e-12, viMax: 5.5, unpoweredSafe: true, viMaxOff: 5.5,
+  },
+  '74lvt': {
+    // from memory: TTL levels, 32 mA rows at 3.0 V
+    vddRange: [3, 3.6], vih: 2, vil: 0.8,
+    voh: [{ v: 'VDD-0.2', i: 100 * µA }, { v: 2, i: 32 * mA }],
+    vol: [{ v: 0.2, i: 100 * µA }, { v: 0.5, i: 32 * mA }, { v: 0.55, i: 64 * mA }],
+    iih: 1 * µA, iil: 1 * µA, cin: 5e-12, viMax: 5.5, unpoweredSafe: true, viMaxOff: 5.5,
+  },
+  '74abt': {
+    // from memory: TTL levels at 4.5 V
+    vddRange: [4.5, 5.5], vih: 2, vil: 0.8,
+    voh: [{ v: 2.5, i: 3 * mA }, { v: 2, i: 32 * mA }], vol: [{ v: 0.55, i: 64 * mA }],
+    iih: 1 * µA, iil: 1 * µA, cin: 5e-12, viMax: 5.5,
+  },
+  '74avc': {
+    // JESD8-7 thresholds; 4 mA rows at 1.65 V from memory
+    vddRange: [1.65, 1.95], vih: '0.65*VDD', vil: '0.35*VDD',
+    voh: [{ v: 'VDD-0.2', i: 100 * µA }, { v: 'VDD-0.45', i: 4 * mA }],
+    vol: [{ v: 0.2, i: 100 * µA }, { v: 0.45, i: 4 * mA }],
+    iih: 2.5 * µA, iil: 2.5 * µA, cin: 5e-12, viMax: 3.6, unpoweredSafe: true, viMaxOff: 3.6,
+  },
+  '74auc': {
+    // JESD8-12 thresholds; 3 mA rows at 1.1 V from memory
+    vddRange: [1.1, 1.3], vih: '0.65*VDD', vil: '0.35*VDD',
+    voh: [{ v: 'VDD-0.1', i: 100 * µA }, { v: 'VDD-0.3', i: 3 * mA }],
+    vol: [{ v: 0.1, i: 100 * µA }, { v: 0.3, i: 3 * mA }],
+    iih: 5 * µA, iil: 5 * µA, cin: 5e-12, viMax: 3.6, unpoweredSafe: true, viMaxOff: 3.6,
   },
 };
 

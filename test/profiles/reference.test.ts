@@ -6,7 +6,8 @@
 import { describe, expect, it } from 'vitest';
 import type { OutputPoint, Profile } from '../../rules/model/schema.ts';
 import { levelAt, type Level } from '../../rules/levels/level.ts';
-import { builtinProfile } from '../../rules/profiles/index.ts';
+import { largestTestCurrent, outputLevel } from '../../rules/levels/output.ts';
+import { BUILTIN_PROFILES, builtinProfile } from '../../rules/profiles/index.ts';
 
 const TOL = 1e-9;
 const µA = 1e-6;
@@ -278,5 +279,119 @@ describe('5 V levels as the trade quotes them (common practice)', () => {
     const vdd = 5;
     expect(output(driver, 'voh', ioh, vdd) - input(receiver, 'vih', vdd) >= 0).toBe(high);
     expect(input(receiver, 'vil', vdd) - output(driver, 'vol', iol, vdd) >= 0).toBe(low);
+  });
+});
+
+describe('issue 16: the profiles\' added rows and families', () => {
+  it.each([
+    // 74AHC/AHCT at 8 mA: 3.8 V at 4.5 V over −40…85 °C (a family datasheet's DC table, from the
+    // review; the 3.94 V of the 25 °C column is not the worst case).
+    ['74ahc', 'voh', 8 * mA, 4.5, 3.8],
+    ['74ahct', 'voh', 8 * mA, 4.5, 3.8],
+    // I2C-bus specification, fast-mode: VOL 0.6 V at 6 mA (std), beside 0.4 V at 3 mA.
+    ['i2c-fm', 'vol', 6 * mA, 3.3, 0.6],
+    ['i2c-fm', 'vol', 3 * mA, 3.3, 0.4],
+    // JESD8-7 at 1.65 V for the 1.8 V LVC column; 4 mA rows from memory: 1.2 V / 0.45 V.
+    ['74lvc-18', 'voh', 4 * mA, 1.65, 1.2],
+    ['74lvc-18', 'vol', 4 * mA, 1.65, 0.45],
+    // 2.5 V LVC column at 2.3 V, from memory: 1.7 V / 0.6 V at 8 mA.
+    ['74lvc-25', 'voh', 8 * mA, 2.3, 1.7],
+    ['74lvc-25', 'vol', 8 * mA, 2.3, 0.6],
+  ] as const)('%s %s @ %s A at %s V = %s V', (id, key, current, vdd, table) => {
+    expect(Math.abs(output(id, key, current, vdd) - table)).toBeLessThanOrEqual(TOL);
+  });
+
+  it.each([
+    // JESD13 UB: 4.0 / 1.0 V at 5 V (restated), 8.0 / 2.0 at 10 V and 12.5 / 2.5 at 15 V (from memory).
+    ['cmos4000-ub', 5, 4.0, 1.0],
+    ['cmos4000-ub', 10, 8.0, 2.0],
+    ['cmos4000-ub', 15, 12.5, 2.5],
+    // JESD8-7 (restated): 0.65·VDD / 0.35·VDD; JESD8-5: 1.7 / 0.7 V.
+    ['74lvc-18', 1.8, 0.65 * 1.8, 0.35 * 1.8],
+    ['74avc', 1.8, 0.65 * 1.8, 0.35 * 1.8],
+    ['74lvc-25', 2.5, 1.7, 0.7],
+    // JESD8-12 (restated).
+    ['74auc', 1.2, 0.65 * 1.2, 0.35 * 1.2],
+    // TTL levels of the BiCMOS types (from memory) and SMBus 2.0's fixed levels (from memory).
+    ['74lvt', 3.3, 2.0, 0.8],
+    ['74abt', 5, 2.0, 0.8],
+    ['smbus', 3.3, 2.1, 0.8],
+    ['smbus', 5, 2.1, 0.8],
+  ] as const)('%s at %s V: VIH never below %s V, VIL never above %s V', (id, vdd, vih, vil) => {
+    expectConservative('vih', input(id, 'vih', vdd), vih);
+    expectConservative('vil', input(id, 'vil', vdd), vil);
+  });
+
+  it('4000 UB lines are exact at 5 and 15 V (JESD13 UB)', () => {
+    expect(Math.abs(input('cmos4000-ub', 'vih', 5) - 4.0)).toBeLessThanOrEqual(TOL);
+    expect(Math.abs(input('cmos4000-ub', 'vil', 15) - 2.5)).toBeLessThanOrEqual(TOL);
+  });
+
+  it('open-drain types have no high drive', () => {
+    expect(profile('74lvc-od').params.voh).toBeUndefined();
+    expect(profile('smbus').params.voh).toBeUndefined();
+  });
+
+  // Rise-time bounds need the pins' capacitance: the families that lacked it now carry it.
+  it.each(['74lvc', 'lvttl33', 'lvcmos33', 'lvcmos25', 'lvcmos18', '74ac', '74act', '74ahc', '74ahct', 'ttl', '74ls', 'mcu-gpio'])(
+    '%s has an input capacitance and input currents',
+    (id) => {
+      const p = profile(id).params;
+      expect(p.cin).toBeGreaterThan(0);
+      expect(p.iih).toBeGreaterThan(0);
+      expect(p.iil).toBeGreaterThan(0);
+    },
+  );
+
+  it('the microcontroller starting point has an 8 mA row each way (from memory)', () => {
+    expect(output('mcu-gpio', 'voh', 8 * mA, 3.3)).toBeCloseTo(2.9, 12);
+    expect(output('mcu-gpio', 'vol', 8 * mA, 3.3)).toBeCloseTo(0.4, 12);
+  });
+
+  // Every number has a temperature basis: each built-in profile states it in its source.
+  it.each(BUILTIN_PROFILES.filter((p) => p.id !== 'off-board').map((p) => p.id))('%s names its temperature range', (id) => {
+    expect(profile(id).source).toMatch(/(−40…85|0…70) °C/);
+  });
+
+  it.each([
+    ['xlat-side', /direction-controlled/],
+    ['xlat-od', /auto-direction open-drain/],
+  ] as const)('the translator profile %s says which class it models', (id, pattern) => {
+    expect(profile(id).source).toMatch(pattern);
+    expect(profile(id).label).toMatch(pattern);
+  });
+});
+
+describe('74HC over its whole 2–6 V: JESD7 (JESD7A test points), as restated in parts\' DC tables', () => {
+  const hc = () => profile('74hc').params;
+  it.each([
+    // [supply, load, sense, level, guaranteed]
+    [2.0, 20 * µA, 'high', 1.9, true], // 1.9 V @ 20 µA at 2 V
+    [2.0, 20 * µA, 'low', 0.1, true],
+    [3.3, 20 * µA, 'high', 3.2, true], // the 20 µA row holds at every supply
+    [4.5, 4 * mA, 'high', 3.84, true], // 3.84 V @ 4 mA at 4.5 V, −40…85 °C
+    [4.5, 4 * mA, 'low', 0.33, true],
+    [6.0, 5.2 * mA, 'high', 5.34, true], // 5.34 V @ 5.2 mA at 6 V, −40…85 °C
+    [6.0, 5.2 * mA, 'low', 0.33, true],
+  ] as const)('at %s V, %s A %s: %s V', (vdd, load, sense, level, guaranteed) => {
+    const r = outputLevel(sense === 'high' ? hc().voh : hc().vol, load, vdd, sense)!;
+    expect(Math.abs(r.v - level)).toBeLessThanOrEqual(TOL);
+    expect(r.estimate).toBe(!guaranteed);
+  });
+
+  it('at 3.3 V a 1 mA load is beyond what is tabulated there (the 4 mA row starts at 4.5 V)', () => {
+    expect(largestTestCurrent(hc().voh, 3.3)).toBeCloseTo(20 * µA, 12);
+    expect(largestTestCurrent(hc().vol, 3.3)).toBeCloseTo(20 * µA, 12);
+    expect(outputLevel(hc().vol, 1 * mA, 3.3, 'low')!.estimate).toBe(true);
+    expect(largestTestCurrent(hc().vol, 5.0)).toBeCloseTo(4 * mA, 12);
+  });
+
+  it.each([[2, 1.5, 0.5], [6, 4.2, 1.8]])('at %s V the threshold lines are exact: VIH %s V, VIL %s V', (vdd, vih, vil) => {
+    expect(Math.abs(input('74hc', 'vih', vdd) - vih)).toBeLessThanOrEqual(TOL);
+    expect(Math.abs(input('74hc', 'vil', vdd) - vil)).toBeLessThanOrEqual(TOL);
+  });
+
+  it('covers 2–6 V', () => {
+    expect(hc().vddRange).toEqual([2, 6]);
   });
 });

@@ -42,7 +42,7 @@ function crossingDesign(extra: { downWaivers?: Waiver[]; minMargin?: number } = 
       part('M', '3v3', 'mcu-gpio', [output('OUT'), input('IN'), output('S'), output('P'), input('I2')]),
       part('H', '5v0', '74hct', [input('A'), output('Y'), input('B')]),
       part('L', '3v3', 'mcu-gpio', [input('B'), input('C')]),
-      part('Q', '3v3', '74hc', [input('D')]),
+      part('Q', '3v3', '74hct', [input('D')]), // 74HCT: 4.5–5.5 V (JESD7), so rail-range warns
     ],
     nets,
   });
@@ -114,8 +114,9 @@ describe('findings and summary', () => {
   it('keeps a waived finding in place, with its note, counted as waived', () => {
     const f = r.findings.find((x) => x.id === 'overvoltage:DOWN:all-on:M.IN');
     expect(f).toMatchObject({ severity: 'error', waived: 'series 1 kΩ limits the clamp current' });
-    // errors: the 5 V pull-up over-drives M.P and L.C (5.25 V > 3.635 V); warning: rail-range;
-    // info: 3 crossings × 2 power states.
+    // errors: the 5 V pull-up over-drives M.P and L.C (5.25 V > 3.635 V); its (5.25 − 0.4) /
+    // 10 kΩ ≈ 0.49 mA into M.P stays within the GPIO's 8 mA row (from memory), 0.4 V low;
+    // warning: rail-range; info: 3 crossings × 2 power states.
     expect(r.summary).toEqual({ error: 2, warning: 1, info: 6, waived: 1 });
   });
 

@@ -33,8 +33,8 @@ describe('JUnit XML of the example', () => {
 
   it('has a suite per power state and a case per net in each, in the file\'s order', () => {
     expect(root.name).toBe('testsuites');
-    expect(root.children.map((s) => s.name)).toEqual(['testsuite', 'testsuite']);
-    expect(root.children.map((s) => s.attrs['name'])).toEqual(['all-on (All rails on)', 'standby (Standby: sensor rail off)']);
+    expect(root.children.map((s) => s.name)).toEqual(['testsuite', 'testsuite', 'testsuite']);
+    expect(root.children.map((s) => s.attrs['name'])).toEqual(['all-on (All rails on)', 'standby (Standby: sensor rail off)', 'reset (Reset: controller pins are inputs)']);
     for (const s of root.children) {
       const names = s.children.map((c) => c.attrs['name']);
       expect(names.slice(0, d.nets.length)).toEqual(d.nets.map((n) => `net ${n.id}`));
@@ -66,13 +66,23 @@ describe('JUnit XML of the example', () => {
   });
 });
 
+/** The example with FLOW's planted pull-range error waived: only its edge-rate warning is left to fail it. */
+function flowWaived(): Design {
+  const d = greenhouse();
+  return { ...d, nets: d.nets.map((n) => (n.id === 'FLOW' ? { ...n, waivers: [{ rule: 'pull-range' as const, note: 'a pull-up is fitted on the sensor' }] } : n)) };
+}
+
 describe('JUnit XML details', () => {
-  it.each<[string, FailOn, number]>([
-    // The example has unwaived errors on 9 nets in each of its 2 power states and on SCL2_L in all-on; edge-rate warns on FLOW in both.
-    ['fail on error', 'error', 19],
-    ['fail on warning adds the FLOW cases', 'warning', 21],
-  ])('%s', (_name, failOn, expected) => {
-    const d = greenhouse();
+  it.each<[string, () => Design, FailOn, number]>([
+    // The example has unwaived errors on 9 nets in all-on (VALVE_EN, SDA, SCL, DISP_RX, STATUS,
+    // PUMP_EN, SLEEP, TANK_LOW, FLOW), the same 9 in standby, and 8 in reset (no contention on
+    // PUMP_EN once the controller's pin is an input). edge-rate warns on FLOW in all three.
+    ['fail on error', greenhouse, 'error', 26],
+    ['fail on warning: FLOW fails already by its error', greenhouse, 'warning', 26],
+    ['fail on error, FLOW\'s error waived: FLOW passes', flowWaived, 'error', 23],
+    ['fail on warning, FLOW\'s error waived: its warning fails it again', flowWaived, 'warning', 26],
+  ])('%s', (_name, make, failOn, expected) => {
+    const d = make();
     const root = parseXml(renderJunit(reportOf(d, failOn), { nets: nets(d) }));
     expect(Number(root.attrs['failures'])).toBe(expected);
   });
@@ -82,12 +92,18 @@ describe('JUnit XML details', () => {
     const xml = renderJunit(reportOf(d), { nets: nets(d) });
     const root = parseXml(xml);
     expect(root.attrs['name']).toBe('railcross check: Greenhouse <rev B> & "C" \uFFFD');
-    const valve = cases(root).filter(({ c }) => c.attrs['name'] === 'net VALVE_EN');
-    expect(valve.length).toBe(2);
-    for (const { c } of valve) {
-      expect(failure(c)).toBeUndefined();
+    const valve = new Map(cases(root).filter(({ c }) => c.attrs['name'] === 'net VALVE_EN').map(({ suite, c }) => [suite.attrs['name']!.split(' ')[0]!, c]));
+    expect([...valve.keys()]).toEqual(['all-on', 'standby', 'reset']);
+    for (const state of ['all-on', 'standby']) {
+      const c = valve.get(state)!;
+      expect(failure(c), state).toBeUndefined();
       expect(c.children.find((e) => e.name === 'system-out')!.text).toContain('waived: fixed by a buffer & a <note>');
     }
+    // In reset the controller's pin is an input: nothing drives VALVE_EN, and the floating inputs
+    // are an error the level-high waiver does not cover.
+    const reset = failure(valve.get('reset')!);
+    expect(reset?.text).toContain('floating-input:VALVE_EN:reset');
+    expect(reset?.text).not.toContain('level-high');
   });
 
   it('with a baseline holding every finding, nothing fails', () => {

@@ -152,7 +152,7 @@ describe('Markdown tables', () => {
         current = [];
       }
     }
-    expect(tables.length).toBe(4); // summary, findings, crossings, profiles
+    expect(tables.length).toBe(5); // summary, findings, crossings, interface power (the example's display input), profiles
     for (const t of tables) expect(new Set(t).size).toBe(1);
     expect(rows.some((r) => r.includes('VALVE\\|EN'))).toBe(true);
   });

@@ -97,8 +97,17 @@ const railArb = (base: (typeof RAIL_POOL)[number]): fc.Arbitrary<Rail> =>
       return rail;
     });
 
+// Pulls exact as typed, with a tolerance, or with a datasheet's min/max around their value.
 const pullArb = (railIds: readonly string[]): fc.Arbitrary<Pull> =>
-  fc.record({ to: fc.constantFrom('ground', ...railIds), ohms: fc.double({ min: 1, max: 1e7, noNaN: true }) }, { noNullPrototype: true });
+  fc.record({
+    to: fc.constantFrom('ground', ...railIds),
+    ohms: fc.double({ min: 1, max: 1e7, noNaN: true }),
+    spread: fc.option(fc.tuple(fc.constantFrom('tolerance', 'ends'), fc.double({ min: 0, max: 0.5, noNaN: true })), { nil: undefined }),
+  }, { noNullPrototype: true }).map(({ to, ohms, spread }): Pull => {
+    if (spread === undefined) return { to, ohms };
+    const [kind, t] = spread;
+    return kind === 'tolerance' ? { to, ohms, tolerance: t } : { to, ohms, min: ohms * (1 - t), max: ohms * (1 + t) };
+  });
 
 const PIN_IDS = ['A', 'B', 'Y', 'EN', 'TX', 'RX', 'SDA', 'SCL', 'IRQ_N', 'D0', 'D-1'];
 const PART_IDS = ['U1', 'U2', 'U3', 'U4', 'U5', 'J1', 'J2', 'Q7'];

@@ -50,7 +50,9 @@ function makePin(r: Rand, id: string): Pin {
   return { id, role: 'bidir', drive: r() < 0.5 ? 'open-drain' : 'three-state' };
 }
 
-function makePart(r: Rand, n: number, rails: readonly Rail[], faultRate: number): Part {
+const DEFAULT_GRID = { columns: 50, dx: 220, dy: 180 };
+
+function makePart(r: Rand, n: number, rails: readonly Rail[], faultRate: number, grid: { columns: number; dx: number; dy: number } = DEFAULT_GRID): Part {
   const rail = pick(r, rails).id;
   const families = r() < faultRate ? ODD_FAMILIES : (FAMILIES[rail] ?? ODD_FAMILIES);
   const pins: Pin[] = [];
@@ -61,7 +63,7 @@ function makePart(r: Rand, n: number, rails: readonly Rail[], faultRate: number)
     label: `Block ${n}`,
     rail,
     profile: pick(r, families),
-    position: { x: (n % 50) * 220, y: Math.floor(n / 50) * 180 },
+    position: { x: (n % grid.columns) * grid.dx, y: Math.floor(n / grid.columns) * grid.dy },
     pins,
   };
 }
@@ -79,6 +81,16 @@ export interface GeneratorOptions {
    * (what the incremental property test wants).
    */
   wiring?: 'board' | 'random';
+  /**
+   * Parts per row of the grid and the grid's pitch (default 50 a row, 220 × 180: chips nearly
+   * touching). A drawing test gives room between chips, as a person would.
+   */
+  grid?: { columns: number; dx: number; dy: number };
+  /**
+   * Deal pins into nets only among this many consecutive parts (a row's neighbours), as a board
+   * wires chips near each other; default: across the whole design.
+   */
+  cluster?: number;
   /**
    * Share of neighbouring nets joined by a part between chips (version 2: a series resistor, a
    * resistor tied to a rail or ground, a FET or a diode shifter); default 0. With any, a tenth of
@@ -185,17 +197,34 @@ export function generateDesign(seed: number, options: GeneratorOptions): Design 
   const faultRate = options.faultRate ?? 0.05;
   const loneRate = options.loneRate ?? (wiring === 'random' ? 0.1 : 0.01);
   const parts: Part[] = [];
-  for (let n = 1; n <= options.parts; n++) parts.push(makePart(r, n, RAILS, faultRate));
+  for (let n = 1; n <= options.parts; n++) parts.push(makePart(r, n, RAILS, faultRate, options.grid));
 
   const pool: Dealt[] = [];
   for (const p of parts) {
     for (const pin of p.pins) if (r() >= loneRate) pool.push({ key: `${p.id}.${pin.id}`, pin, rail: pin.rail ?? p.rail });
   }
-  for (let k = pool.length - 1; k > 0; k--) {
-    const j = Math.floor(r() * (k + 1));
-    [pool[k], pool[j]] = [pool[j]!, pool[k]!];
+  let nets: Net[];
+  if (options.cluster === undefined) {
+    for (let k = pool.length - 1; k > 0; k--) {
+      const j = Math.floor(r() * (k + 1));
+      [pool[k], pool[j]] = [pool[j]!, pool[k]!];
+    }
+    nets = wiring === 'random' ? randomNets(r, pool) : boardNets(r, pool);
+  } else {
+    // Each cluster of parts wired among itself, net ids numbered on across clusters.
+    nets = [];
+    const size = options.cluster;
+    for (let first = 1; first <= options.parts; first += size) {
+      const ids = new Set(parts.slice(first - 1, first - 1 + size).map((p) => p.id));
+      const local = pool.filter((d) => ids.has(d.key.slice(0, d.key.indexOf('.'))));
+      for (let k = local.length - 1; k > 0; k--) {
+        const j = Math.floor(r() * (k + 1));
+        [local[k], local[j]] = [local[j]!, local[k]!];
+      }
+      const made = wiring === 'random' ? randomNets(r, local) : boardNets(r, local);
+      for (const net of made) nets.push({ ...net, id: `N${nets.length + 1}` });
+    }
   }
-  const nets = wiring === 'random' ? randomNets(r, pool) : boardNets(r, pool);
   const rate = options.discretes ?? 0;
   const discretes: Discrete[] = [];
   const rails = RAILS.map((x) => ({ ...x }));
@@ -221,7 +250,7 @@ export function generateDesign(seed: number, options: GeneratorOptions): Design 
 
 export const EDIT_KINDS = [
   'add-part', 'remove-part', 'connect', 'disconnect', 'move-part', 'rail-voltage',
-  'switch-profile', 'add-waiver', 'rail-off', 'net-pull',
+  'switch-profile', 'add-waiver', 'rail-off', 'net-pull', 'pin-state',
   'add-discrete', 'remove-discrete', 'discrete-value', 'move-discrete',
 ] as const;
 export type EditKind = (typeof EDIT_KINDS)[number];
@@ -257,6 +286,7 @@ export function applyEdit(design: Design, kind: EditKind, r: Rand): Design {
         const k = Math.floor(r() * d.parts.length);
         const part = d.parts[k]!;
         for (const pin of part.pins) unplug(d, `${part.id}.${pin.id}`);
+        for (const sc of d.scenarios ?? []) if (sc.pins !== undefined) sc.pins = sc.pins.filter((p) => !p.pin.startsWith(`${part.id}.`));
         d.parts.splice(k, 1);
         return;
       }
@@ -347,6 +377,19 @@ export function applyEdit(design: Design, kind: EditKind, r: Rand): Design {
         if (list.length === 0) return;
         const x = pick(r, list);
         x.position = { x: (x.position?.x ?? 0) + 10, y: 0 };
+        return;
+      }
+      case 'pin-state': {
+        // A pin made an input at reset, with or without a weak pull-down, or given back its own state.
+        const scenario = d.scenarios?.[0];
+        if (scenario === undefined || d.parts.length === 0) return;
+        const part = pick(r, d.parts);
+        if (part.pins.length === 0) return;
+        const key = `${part.id}.${pick(r, part.pins).id}`;
+        const pins = scenario.pins ?? [];
+        scenario.pins = pins.some((p) => p.pin === key)
+          ? pins.filter((p) => p.pin !== key)
+          : [...pins, r() < 0.5 ? { pin: key, role: 'input' } : { pin: key, role: 'input', pull: { to: 'ground', ohms: 40e3 } }];
         return;
       }
       case 'net-pull': {

@@ -11,7 +11,7 @@ import { withParam } from '../../store/paramFields.ts';
 import { Modal } from '../Modal.tsx';
 import { ParamEditor } from '../ParamEditor.tsx';
 import { ProfileOptions } from '../ProfileOptions.tsx';
-import { draftOf, newChipDraft, partOf, rowProblems, setPartFields, type ChipDraft } from './chipDraft.ts';
+import { draftOf, newChipDraft, partFromDraft, rowProblems, setPartFields, type ChipDraft } from './chipDraft.ts';
 import { profileParam } from './inherited.ts';
 import { PinTable } from './PinTable.tsx';
 
@@ -40,7 +40,7 @@ export function ChipDialog({ partId }: { partId: string | null }) {
       setError(rowProblem);
       return;
     }
-    const { part, pinMap } = partOf(draft);
+    const { part, pinMap } = partFromDraft(draft);
     const s = store.getState();
     const out = draft.orig === null ? place(part) : s.apply(editPart(draft.orig, part, pinMap));
     if (!out.ok) {

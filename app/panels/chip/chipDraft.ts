@@ -82,7 +82,7 @@ export function setPartFields(draft: ChipDraft, patch: Partial<Omit<Part, 'pins'
 }
 
 /** The part the draft describes, and what became of each old pin (for `editPart`). */
-export function partOf(draft: ChipDraft): { part: Part; pinMap: Record<string, string | null> } {
+export function partFromDraft(draft: ChipDraft): { part: Part; pinMap: Record<string, string | null> } {
   const part: Part = { ...draft.part, id: draft.part.id.trim(), pins: draft.rows.map((r) => r.pin) };
   // A pin whose row was removed leaves its nets, even if a new row takes its id.
   const pinMap: Record<string, string | null> = Object.fromEntries(draft.origPins.map((id) => [id, null]));

@@ -69,6 +69,16 @@ export function rewirePart(design: Draft<Design>, from: string, to: string, pinM
     const pin = pinMap(key.slice(prefix.length));
     return pin === null ? null : `${to}.${pin}`;
   };
+  // Power states' pin states follow the pins too, or go with them.
+  for (const s of design.scenarios ?? []) {
+    if (s.pins === undefined || !s.pins.some((p) => p.pin.startsWith(prefix))) continue;
+    const kept = s.pins.flatMap((p) => {
+      const key = mapKey(p.pin);
+      return key === null ? [] : [{ ...p, pin: key }];
+    });
+    if (kept.length > 0) s.pins = kept;
+    else delete s.pins;
+  }
   for (let k = design.nets.length - 1; k >= 0; k--) {
     const net = design.nets[k]!;
     if (!net.pins.some((p) => p.startsWith(prefix))) continue;

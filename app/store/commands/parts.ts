@@ -113,6 +113,11 @@ export function removeParts(design: Draft<Design>, ids: readonly string[]): void
     design.discretes = design.discretes.filter((d) => !gone.has(d.id));
     if (design.discretes.length === 0) delete design.discretes;
   }
+  for (const s of design.scenarios ?? []) {
+    if (s.pins === undefined || !s.pins.some((p) => isGone(p.pin))) continue;
+    s.pins = s.pins.filter((p) => !isGone(p.pin));
+    if (s.pins.length === 0) delete s.pins;
+  }
   for (let k = design.nets.length - 1; k >= 0; k--) {
     const net = design.nets[k]!;
     if (!net.pins.some(isGone)) continue;

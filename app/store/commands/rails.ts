@@ -89,7 +89,8 @@ export function deleteRail(id: string): Command {
       const user =
         design.parts.find((p) => p.rail === id || p.pins.some((q) => q.rail === id || q.pull?.to === id))?.id ??
         design.nets.find((n) => n.pull?.to === id)?.id ??
-        design.discretes?.find((d) => (d.kind === 'fet-shifter' && d.gate === id) || (d.kind === 'resistor' && (d.tie?.['1'] === id || d.tie?.['2'] === id)))?.id;
+        design.discretes?.find((d) => (d.kind === 'fet-shifter' && d.gate === id) || (d.kind === 'resistor' && (d.tie?.['1'] === id || d.tie?.['2'] === id)))?.id ??
+        design.scenarios?.find((s) => s.pins?.some((p) => p.pull?.to === id))?.id;
       if (user !== undefined) return refuse(`Rail ${id} is still used by ${user}.`);
       design.rails = design.rails.filter((r) => r.id !== id);
       for (const s of design.scenarios ?? []) s.off = s.off.filter((r) => r !== id);

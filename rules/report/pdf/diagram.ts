@@ -8,6 +8,7 @@ import type { jsPDF } from 'jspdf';
 import type { Design, Part, Pin, Rail } from '../../model/schema.ts';
 import { formatQuantity } from '../../levels/units.ts';
 import type { Report } from '../reportSchema.ts';
+import { pullLabel } from '../pullLabel.ts';
 import { addPage, contentWidth, fitText, pageHeight, sectionHeading, type Ctx } from './page.ts';
 import { CHIP, layoutDiagram, normalOf, type DiagramLayout, type PartBox, type PinPlace, type Point } from './diagramLayout.ts';
 import {
@@ -64,14 +65,19 @@ function drawWires(doc: jsPDF, v: View, layout: DiagramLayout, status: ReadonlyM
       setDraw(doc, ERROR_SOFT);
       doc.setLineWidth(p.casing);
       doc.setLineDashPattern([], 0);
-      for (const w of wires) polyline(doc, v, w.points);
+      for (const w of wires) polyline(doc, v, w.drawn);
     }
     setDraw(doc, STATUS_COLOUR[level]);
     doc.setLineWidth(p.width);
     doc.setLineDashPattern(p.dash, 0);
-    for (const w of wires) polyline(doc, v, w.points);
+    for (const w of wires) polyline(doc, v, w.drawn);
   }
   doc.setLineDashPattern([], 0);
+  // A dot where a net branches, in its wires' colour, so that a branch is never taken for a crossing.
+  for (const j of layout.junctions) {
+    setFill(doc, STATUS_COLOUR[status.get(j.net.id) ?? 'clean']);
+    doc.circle(v.x(j.at.x), v.y(j.at.y), clamp(2.6 * v.s, 0.5, 2.2), 'F');
+  }
 }
 
 type MarkKind = 'output' | 'input' | 'bidir';
@@ -130,7 +136,9 @@ function drawPinName(ctx: Ctx, v: View, box: PartBox, place: PinPlace, count: nu
     ty = place.side === 'top' ? y + 19 : y - 10;
     align = 'center';
   }
-  const name = fitText(doc, place.pin.id, room);
+  // A pin's own pull (an internal one) follows its name: `RAIN ↑47K`.
+  const pull = place.pin.pull === undefined ? '' : ` ${pullLabel(place.pin.pull, [...rails.values()]).split(' ')[0]}`;
+  const name = fitText(doc, `${place.pin.id}${pull}`, room);
   doc.text(name, v.x(tx), v.y(ty), { align });
   if (ownRail !== undefined) {
     const w = doc.getTextWidth(name) / v.s;
@@ -182,7 +190,7 @@ function drawBox(ctx: Ctx, v: View, box: PartBox, rails: ReadonlyMap<string, Rai
   }
 }
 
-function drawNetLabels(ctx: Ctx, v: View, layout: DiagramLayout, status: ReadonlyMap<string, Status>): void {
+function drawNetLabels(ctx: Ctx, v: View, layout: DiagramLayout, status: ReadonlyMap<string, Status>, rails: readonly Rail[]): void {
   const { doc } = ctx;
   const size = 8.5 * v.s;
   doc.setFont(ctx.fonts.mono, 'normal');
@@ -191,7 +199,9 @@ function drawNetLabels(ctx: Ctx, v: View, layout: DiagramLayout, status: Readonl
     const st = status.get(net.id) ?? 'clean';
     const mark = st === 'clean' ? 0 : 9;
     const n = normalOf(pin.side);
-    const w = doc.getTextWidth(net.id) / v.s + mark;
+    // The net's pull resistor, value and rail, beside its name (as on the canvas).
+    const text = net.pull === undefined ? net.id : `${net.id}  ${pullLabel(net.pull, rails)}`;
+    const w = doc.getTextWidth(text) / v.s + mark;
     // Beside the stub, above it for left and right pins, to its right for top and bottom ones.
     const x0 = pin.side === 'left' ? pin.at.x - 4 - w : pin.side === 'right' ? pin.at.x + 4 : pin.at.x + 4;
     const y0 = n.y === 0 ? pin.at.y - 3.5 : pin.side === 'top' ? pin.at.y - 5 : pin.at.y + 12;
@@ -200,7 +210,7 @@ function drawNetLabels(ctx: Ctx, v: View, layout: DiagramLayout, status: Readonl
     doc.rect(v.x(x0 - 1), v.y(y0 - 7.5), (w + 2) * v.s, 9.5 * v.s, 'F');
     if (st !== 'clean') drawSeverityMark(doc, st, v.x(x0 + 3.5), v.y(y0 - 3), 7 * v.s);
     setText(doc, st === 'clean' ? INK_2 : STATUS_COLOUR[st]);
-    doc.text(net.id, v.x(x0 + mark), v.y(y0));
+    doc.text(text, v.x(x0 + mark), v.y(y0));
   }
 }
 
@@ -337,7 +347,7 @@ export function drawDiagram(ctx: Ctx, design: Design, report: Report, options: D
     const status = netStatus(report, options.state.id);
     drawWires(doc, view, layout, status);
     for (const box of layout.boxes) drawBox(ctx, view, box, rails, options.family);
-    drawNetLabels(ctx, view, layout, status);
+    drawNetLabels(ctx, view, layout, status, design.rails);
   }
   drawLegend(ctx, pageHeight(doc) - MARGIN.bottom - LEGEND_HEIGHT, design.rails, `${options.state.label} (${options.state.id})`);
 }

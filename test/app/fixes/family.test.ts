@@ -12,7 +12,7 @@ import { describe, expect, it } from 'vitest';
 import { exampleDesign } from '../../../app/example.ts';
 import type { Design } from '../../../rules/model/schema.ts';
 import { link, rail, rail3v3, rail5v0, scenario } from '../../support/build.ts';
-import { applyAndUndo, type FixCase, offered, partOf, pinOf } from './support.ts';
+import { applyAndUndo, type FixCase, offered, partById, pinOf } from './support.ts';
 import { harness } from '../harness.ts';
 import { applyFix, fixesFor } from '../../../app/store/commands/fixes/index.ts';
 import { setPartProfile } from '../../../app/store/commands/index.ts';
@@ -26,13 +26,13 @@ const cases: FixCase[] = [
   {
     name: 'greenhouse VALVE_EN: U3 from 74hc to 74hct (2.0 V ≤ 3.135 − 0.2 V)',
     start: greenhouse, finding: 'level-high:VALVE_EN:all-on:U1.VALVE_EN>U3.EN', fix: 'ttl-inputs',
-    expect: (d) => expect(partOf(d, 'U3').profile).toBe('74hct'),
+    expect: (d) => expect(partById(d, 'U3').profile).toBe('74hct'),
   },
   {
     name: '74ac part to 74act',
     start: link({ rail: '3v3', profile: 'lvcmos33' }, { rail: '5v0', profile: '74ac' }),
     finding: 'level-high:N:all-on:D.Y>R.A', fix: 'ttl-inputs',
-    expect: (d) => expect(partOf(d, 'R').profile).toBe('74act'),
+    expect: (d) => expect(partById(d, 'R').profile).toBe('74act'),
   },
   {
     name: 'a pin that names its own profile (74ahc) switches alone, its part keeps 74hc',
@@ -40,20 +40,20 @@ const cases: FixCase[] = [
     finding: 'level-high:N:all-on:D.Y>R.A', fix: 'ttl-inputs',
     expect(d) {
       expect(pinOf(d, 'R.A').profile).toBe('74ahct');
-      expect(partOf(d, 'R').profile).toBe('74hc');
+      expect(partById(d, 'R').profile).toBe('74hc');
     },
   },
   {
     name: 'overvoltage on a 3.3 V LVCMOS input from a 5 V output: 74lvc',
     start: link({ rail: '5v0', profile: '74hc' }, { rail: '3v3', profile: 'lvcmos33' }),
     finding: 'overvoltage:N:all-on:R.A', fix: 'tolerant-family:74lvc',
-    expect: (d) => expect(partOf(d, 'R').profile).toBe('74lvc'),
+    expect: (d) => expect(partById(d, 'R').profile).toBe('74lvc'),
   },
   {
     name: 'overvoltage on a 74HCT input from a 5.3 V rail: 74ahct (same fixed thresholds)',
     start: link({ rail: '5v3', profile: '74hc' }, { rail: '5v0', profile: '74hct' }, { rails: [rail5v0, rail5v3] }),
     finding: 'overvoltage:N:all-on:R.A', fix: 'tolerant-family:74ahct',
-    expect: (d) => expect(partOf(d, 'R').profile).toBe('74ahct'),
+    expect: (d) => expect(partById(d, 'R').profile).toBe('74ahct'),
   },
   {
     name: 'greenhouse DISP_RX: the MCU pin recorded as 5.5 V-tolerant',

@@ -10,17 +10,21 @@ import { harness } from '../harness.ts';
 describe('previewFix', () => {
   it.each([
     {
-      name: 'a pull-up moved into its range: the error goes, an info takes its id in each power state',
-      finding: 'pull-range:FROST:all-on', fix: 'pull-value',
-      gone: ['pull-range:FROST:all-on', 'pull-range:FROST:standby'],
-      added: ['pull-range:FROST:all-on/info', 'pull-range:FROST:standby/info'],
+      // FLOW's pull-up fixes the slow edge too: edge-rate goes with the pull-range error.
+      name: 'a pull-up added into its range: the error goes, an info takes its id in each of the three power states',
+      finding: 'pull-range:FLOW:all-on', fix: 'pull-value',
+      gone: [
+        'pull-range:FLOW:all-on', 'pull-range:FLOW:standby', 'pull-range:FLOW:reset',
+        'edge-rate:FLOW:all-on', 'edge-rate:FLOW:standby', 'edge-rate:FLOW:reset',
+      ],
+      added: ['pull-range:FLOW:all-on/info', 'pull-range:FLOW:standby/info', 'pull-range:FLOW:reset/info'],
     },
     {
       name: 'a translator on VALVE_EN: the level error and the crossing go in both power states',
       finding: 'level-high:VALVE_EN:all-on:U1.VALVE_EN>U3.EN', fix: 'translator',
       gone: [
         'level-high:VALVE_EN:all-on:U1.VALVE_EN>U3.EN', 'level-high:VALVE_EN:standby:U1.VALVE_EN>U3.EN',
-        'rail-crossing:VALVE_EN:all-on', 'rail-crossing:VALVE_EN:standby',
+        'rail-crossing:VALVE_EN:all-on', 'rail-crossing:VALVE_EN:standby', 'rail-crossing:VALVE_EN:reset',
       ],
       added: [],
     },

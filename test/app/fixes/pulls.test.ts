@@ -2,7 +2,8 @@
  * Resistor fixes: a pull-up sized by the open-collector formulas, a pull-up moved into its
  * range, ties for floating inputs, and the waiver for shared three-state enables.
  *
- * Sizing (handbook, open-collector pull-up; IEC 60063 E24 for the chosen value):
+ * Sizing (handbook, open-collector pull-up; the I2C-bus specification's rise-time bound; IEC
+ * 60063 E12 for the chosen value, nearest the middle of the range as README's policy says):
  *   Rmin = (VCC,max − VOL) / (IOL − Σ IIL),  Rmax = (VCC,min − VIH − margin) / Σ IIH.
  * The greenhouse's numbers are its own invented demo data (off-board switch: VOL 0.1 V at 1 mA,
  * 1 µA leakage; controller input 1 µA; thermostat 10 µA); the controller's VIH is 0.7·VDD
@@ -17,19 +18,33 @@ import { applyAndUndo, type FixCase, netOf, offered, pinOf } from './support.ts'
 
 const greenhouse = exampleDesign();
 
-/** The largest IEC 60063 E24 value at or below r (E24 mantissas transcribed from IEC 60063). */
-function e24Below(r: number): number {
-  const E24 = [1.0, 1.1, 1.2, 1.3, 1.5, 1.6, 1.8, 2.0, 2.2, 2.4, 2.7, 3.0, 3.3, 3.6, 3.9, 4.3, 4.7, 5.1, 5.6, 6.2, 6.8, 7.5, 8.2, 9.1];
-  const decade = 10 ** Math.floor(Math.log10(r));
-  const m = [...E24].reverse().find((x) => x * decade <= r)!;
-  return Number((m * decade).toPrecision(2));
+/** IEC 60063 E12 mantissas (transcribed). */
+const E12 = [1.0, 1.2, 1.5, 1.8, 2.2, 2.7, 3.3, 3.9, 4.7, 5.6, 6.8, 8.2];
+
+/**
+ * The pull-up advice (README, "Pull-up advice"), written again here from its definition: the
+ * E12 value inside [lo, hi] nearest √(lo·hi) on a log scale.
+ */
+function nearestMiddleE12(lo: number, hi: number): number {
+  const middle = Math.sqrt(lo * hi);
+  const inside: number[] = [];
+  for (let decade = 1; decade <= 6; decade++) for (const m of E12) {
+    const v = Number((m * 10 ** decade).toPrecision(2));
+    if (v >= lo && v <= hi) inside.push(v);
+  }
+  return inside.reduce((a, b) => (Math.abs(Math.log(b / middle)) <= Math.abs(Math.log(a / middle)) ? b : a));
 }
 
-// TANK_LOW: Rmax = (3.135 − 0.7·3.135 − 0.2) / (1 µA + 1 µA) = 370.25 kΩ → 360 kΩ;
-// Rmin = (3.465 − 0.1) / (1 mA − 1 µA) = 3.37 kΩ lies below it.
-const tankLow = e24Below((3.135 * 0.3 - 0.2) / 2e-6);
-// FROST: Rmax = (3.135 · 0.3 − 0.2) / (10 µA + 1 µA) = 67.3 kΩ → 62 kΩ (the 100 kΩ fitted is too large).
-const frost = e24Below((3.135 * 0.3 - 0.2) / 11e-6);
+// TANK_LOW: Rmin = (3.465 − 0.1) / (1 mA − 1 µA) = 3.368 kΩ; Rmax = (3.135 − 0.7·3.135 − 0.2) /
+// (1 µA + 1 µA) = 370.25 kΩ, leakage only, and the switch is off-board: the advice is
+// [3368/0.95, 10 kΩ] (5 % tolerance, the 10 kΩ practical cap), √ = 5955 Ω → 5.6 kΩ.
+const tankLow = nearestMiddleE12((3.465 - 0.1) / (1e-3 - 1e-6) / 0.95, 10e3);
+// FLOW: only the controller's 40 kΩ pulls it up, beyond what the 10 µs rise allows over 1.505 nF:
+// Rmax = 10 µs / (ln(7/3) × 1.505 nF); Rmin = (3.465 − 0.4) / (1 mA − 1 µA). A pull of the net's
+// own beside 40 kΩ: [1/(1/Rmin − 1/40 k)/0.95, 1/(1/(0.7·Rmax) − 1/40 k)/1.05] → 4.7 kΩ.
+const flowRMin = (3.465 - 0.4) / (1e-3 - 1e-6);
+const flowRMax = 10e-6 / (Math.log(7 / 3) * 1.505e-9);
+const flow = nearestMiddleE12(1 / (1 / flowRMin - 1 / 40e3) / 0.95, 1 / (1 / (0.7 * flowRMax) - 1 / 40e3) / 1.05);
 
 /** Two three-state 3.3 V LVCMOS outputs sharing a net with one input; LVCMOS is rated at 100 µA (JESD8C, as restated). */
 const shared = design({
@@ -59,9 +74,25 @@ const cases: FixCase[] = [
     expect: (d) => expect(netOf(d, 'TANK_LOW').pull).toEqual({ to: '3v3', ohms: tankLow }),
   },
   {
-    name: `greenhouse FROST (pull-range, too large): ${frost} Ω`,
-    start: greenhouse, finding: 'pull-range:FROST:all-on', fix: 'pull-value',
-    expect: (d) => expect(netOf(d, 'FROST').pull).toEqual({ to: '3v3', ohms: frost }),
+    name: `greenhouse FLOW (pull-range, the internal pull too weak): add ${flow} Ω`,
+    start: greenhouse, finding: 'pull-range:FLOW:all-on', fix: 'pull-value',
+    expect: (d) => expect(netOf(d, 'FLOW').pull).toEqual({ to: '3v3', ohms: flow }),
+  },
+  {
+    // The net's own 100 kΩ with too little left by a 10 µs rise limit: the advice of the rule.
+    name: 'a pull-up too large is changed to the advised value',
+    start: { ...greenhouse, nets: greenhouse.nets.map((n) => (n.id === 'FROST' ? { ...n, wiringCapacitance: 1e-9, maxRiseTime: 10e-6 } : n)) },
+    finding: 'pull-range:FROST:all-on', fix: 'pull-value',
+    // C = 1 nF + 5 pF; Rmax = 10 µs / (ln(7/3) × 1.005 nF) = 11.74 kΩ; Rmin = (3.465 − 0.4) /
+    // (1 mA − 1 µA); beside the controller's 30–50 kΩ: [1/(1/Rmin − 1/30 k)/0.95,
+    // 1/(1/(0.7·Rmax) − 1/50 k)/1.05], √ ≈ 5.34 kΩ → 5.6 kΩ.
+    expect: (d) => expect(netOf(d, 'FROST').pull).toEqual({
+      to: '3v3',
+      ohms: nearestMiddleE12(
+        1 / (1 / flowRMin - 1 / 30e3) / 0.95,
+        1 / (1 / (0.7 * 10e-6 / (Math.log(7 / 3) * 1.005e-9)) - 1 / 50e3) / 1.05,
+      ),
+    }),
   },
   {
     name: 'greenhouse BOARD_SLEEP (no driver): 10 kΩ up to the receivers\' 5v0',
@@ -102,7 +133,7 @@ const cases: FixCase[] = [
 
 describe('resistor fixes and the enables waiver', () => {
   it('the expected values are what the formulas give (guards the transcription)', () => {
-    expect([tankLow, frost, sharedUp, sharedDown]).toEqual([360e3, 62e3, 47e3, 47e3]);
+    expect([tankLow, flow, sharedUp, sharedDown]).toEqual([5.6e3, 4.7e3, 47e3, 47e3]);
   });
 
   it.each(cases)('$name', ({ start, finding, fix, expect: check }) => {

@@ -19,11 +19,11 @@ export interface FixCase {
 }
 
 /** The part, net or pin of a design by id (`PART.PIN` for a pin); the cases know it is there. */
-export const partOf = (d: Design, id: string) => d.parts.find((p) => p.id === id)!;
+export const partById = (d: Design, id: string) => d.parts.find((p) => p.id === id)!;
 export const netOf = (d: Design, id: string) => d.nets.find((n) => n.id === id)!;
 export const pinOf = (d: Design, key: string) => {
   const [part, pin] = key.split('.');
-  return partOf(d, part!).pins.find((x) => x.id === pin)!;
+  return partById(d, part!).pins.find((x) => x.id === pin)!;
 };
 
 export interface Applied {

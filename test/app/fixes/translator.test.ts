@@ -12,7 +12,7 @@ import { exampleDesign } from '../../../app/example.ts';
 import type { Design, Part } from '../../../rules/model/schema.ts';
 import { chipSize } from '../../../app/canvas/chipLayout.ts';
 import { design, input, net, output, part, rail1v8, rail3v3, rail5v0, scenario } from '../../support/build.ts';
-import { applyAndUndo, type FixCase, netOf, offered, partOf } from './support.ts';
+import { applyAndUndo, type FixCase, netOf, offered, partById } from './support.ts';
 import { harness } from '../harness.ts';
 import { applyFix, fixesFor } from '../../../app/store/commands/fixes/index.ts';
 import { MAX_CHANNELS } from '../../../app/store/commands/fixes/translator.ts';
@@ -32,12 +32,12 @@ const cases: Omit<FixCase, 'fix'>[] = [
       // The new half comes right after the original, so that the report keeps them together.
       expect(d.nets.map((n) => n.id).indexOf('VALVE_EN_5v0')).toBe(d.nets.map((n) => n.id).indexOf('VALVE_EN') + 1);
       const box = (p: Part) => ({ ...p.position!, ...chipSize(p) });
-      const t = box(partOf(d, 'U8')!);
+      const t = box(partById(d, 'U8')!);
       for (const other of d.parts.filter((p) => p.id !== 'U8').map(box)) {
         const apart = t.x + t.width <= other.x || other.x + other.width <= t.x || t.y + t.height <= other.y || other.y + other.height <= t.y;
         expect(apart).toBe(true);
       }
-      expect(partOf(d, 'U8')).toEqual({
+      expect(partById(d, 'U8')).toEqual({
         id: 'U8', label: 'Dual-rail translator for VALVE_EN', rail: '3v3', profile: 'xlat-side',
         // Halfway between U1 (360, 160) and U3 (720, 80) is (540, 120), on top of U1: the nearest
         // spot clear of every chip by 24 px, searched in rings of 40 px steps, is (460, 40).
@@ -53,8 +53,8 @@ const cases: Omit<FixCase, 'fix'>[] = [
     expect(d) {
       expect(netOf(d, 'DISP_RX')?.pins).toEqual(['U4.TX', 'U8.A']);
       expect(netOf(d, 'DISP_RX_3v3')?.pins).toEqual(['U8.B', 'U1.DISP_RX']);
-      expect(partOf(d, 'U8')).toMatchObject({ rail: '5v0', profile: 'xlat-side' });
-      expect(partOf(d, 'U8')?.pins.map((p) => [p.id, p.role, p.rail])).toEqual([['A', 'input', undefined], ['B', 'output', '3v3']]);
+      expect(partById(d, 'U8')).toMatchObject({ rail: '5v0', profile: 'xlat-side' });
+      expect(partById(d, 'U8')?.pins.map((p) => [p.id, p.role, p.rail])).toEqual([['A', 'input', undefined], ['B', 'output', '3v3']]);
     },
   },
   {
@@ -70,8 +70,8 @@ const cases: Omit<FixCase, 'fix'>[] = [
         id: 'SDA_1v8', label: 'SDA_1v8', pins: ['U8.B', 'U2.SDA'], pull: { to: '1v8', ohms: 4700 },
         wiringCapacitance: 5e-11, maxRiseTime: 1e-6,
       });
-      expect(partOf(d, 'U8')).toMatchObject({ rail: '3v3', profile: 'xlat-od' });
-      expect(partOf(d, 'U8')?.pins.map((p) => [p.id, p.role, p.drive])).toEqual([['A', 'bidir', 'open-drain'], ['B', 'bidir', 'open-drain']]);
+      expect(partById(d, 'U8')).toMatchObject({ rail: '3v3', profile: 'xlat-od' });
+      expect(partById(d, 'U8')?.pins.map((p) => [p.id, p.role, p.drive])).toEqual([['A', 'bidir', 'open-drain'], ['B', 'bidir', 'open-drain']]);
     },
   },
   {
@@ -107,7 +107,7 @@ const cases: Omit<FixCase, 'fix'>[] = [
       });
       expect(netOf(d, 'N_1v8')).toEqual({ id: 'N_1v8', label: 'CLK_1v8', pins: ['U1.B', 'R.A', 'S.A'], route: [['U1.B', 'R.A'], ['R.A', 'S.A']] });
       // Halfway between D and M (0, 100) and R and S (400, 100).
-      expect(partOf(d, 'U1')?.position).toEqual({ x: 200, y: 100 });
+      expect(partById(d, 'U1')?.position).toEqual({ x: 200, y: 100 });
     },
   },
 ];
@@ -166,7 +166,7 @@ describe('a channel of a translator already there', () => {
     applyAndUndo(start, 'overvoltage:SCL:all-on:U2.SCL', 'translator-channel', ({ design: d, fix }) => {
       expect(fix.title).toBe('Use channel 2 of translator U8 on SCL');
       expect(d.parts.filter((p) => p.profile === 'xlat-od').map((p) => p.id)).toEqual(['U8']);
-      expect(partOf(d, 'U8')).toMatchObject({
+      expect(partById(d, 'U8')).toMatchObject({
         label: 'Dual-rail translator for SDA, SCL',
         // The sensor sits left of the controller: side B faces it, and channel 2 follows channel 1.
         pins: [

@@ -1,7 +1,7 @@
 import 'fake-indexeddb/auto';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import type { Session } from '../../../app/library/session.ts';
-import { startSession } from '../../../app/library/start.ts';
+import type { Session } from '../../../app/session/session.ts';
+import { startSession } from '../../../app/session/start.ts';
 import { setTitle } from '../../../app/store/commands/index.ts';
 import { dbName, tab } from './sessionSupport.ts';
 

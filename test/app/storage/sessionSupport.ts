@@ -1,8 +1,8 @@
 /** Sessions (what one browser tab runs) on a test database of their own, closed afterwards. */
 import { Dexie } from 'dexie';
 import { afterEach } from 'vitest';
-import type { Session } from '../../../app/library/session.ts';
-import { startSession } from '../../../app/library/start.ts';
+import type { Session } from '../../../app/session/session.ts';
+import { startSession } from '../../../app/session/start.ts';
 import type { KeyValueStore } from '../../../app/storage/staging.ts';
 
 let n = 0;

@@ -1,6 +1,6 @@
 import 'fake-indexeddb/auto';
 import { describe, expect, it } from 'vitest';
-import type { Session } from '../../../app/library/session.ts';
+import type { Session } from '../../../app/session/session.ts';
 import { Library } from '../../../app/storage/library.ts';
 import { fingerprint, replayStaged, STAGE_PREFIX, type Staged } from '../../../app/storage/staging.ts';
 import { nudgeParts, setTitle } from '../../../app/store/commands/index.ts';

@@ -1,6 +1,6 @@
 import 'fake-indexeddb/auto';
 import { describe, expect, it, vi } from 'vitest';
-import { Session } from '../../../app/library/session.ts';
+import { Session } from '../../../app/session/session.ts';
 import { RailcrossDb } from '../../../app/storage/db.ts';
 import { Library } from '../../../app/storage/library.ts';
 import { setTitle } from '../../../app/store/commands/index.ts';

@@ -5,7 +5,7 @@
 import type { Draft } from 'immer';
 import { check } from '../../../../rules/engine/check.ts';
 import type { CheckResult, Finding } from '../../../../rules/engine/types.ts';
-import { E24, largestInRange, seriesValuesBetween } from '../../../../rules/levels/series.ts';
+import { choosePull } from '../../../../rules/levels/pullAdvice.ts';
 import { formatQuantity } from '../../../../rules/levels/units.ts';
 import { GROUND } from '../../../../rules/model/references.ts';
 import type { Design, Pull } from '../../../../rules/model/schema.ts';
@@ -30,30 +30,30 @@ function setNetPull(draft: Draft<Design>, netId: string, pull: Pull): Refusal | 
 }
 
 /**
- * The value `pull-range` allows in every power state: the largest E24 value between the
- * largest Rmin and the smallest Rmax over the net's `pull-range` findings. Undefined when no
- * finding gives a range or the ranges leave no value. Without any upper bound (no input
- * current, no rise-time limit) the usual 10 kΩ, or the first E24 value above Rmin.
+ * The value `pull-range` advises in every power state (README, "Pull-up advice"): the advice
+ * ranges of the net's `pull-range` findings intersected (the largest low end, the smallest high
+ * end; each already shrunk by the tolerance, guarded and capped), then the same choice the rule
+ * makes, the E12 value nearest the middle, else E24. Undefined when no finding advises, a state
+ * leaves no value (a range empty, or the pins' own pulls already too strong), or the ranges
+ * leave none together.
  */
-export function pullValueFrom(findings: readonly Finding[], net: string): { ohms: number; rMin: number; rMax: number | null } | undefined {
+export function pullValueFrom(findings: readonly Finding[], net: string): { ohms: number; rMin: number; rMax: number | null; to: string | null } | undefined {
   let lo = 0;
   let hi = Infinity;
   let seen = false;
+  let to: string | null = null;
   for (const f of findings) {
     if (f.rule !== 'pull-range' || f.net !== net) continue;
     seen = true;
-    const { rMin, rMax, empty } = f.values;
-    if (empty === true || typeof rMin !== 'number') return undefined;
-    lo = Math.max(lo, rMin);
-    if (typeof rMax === 'number') hi = Math.min(hi, rMax);
+    const { adviceMin, adviceMax, suggested, adviceTo } = f.values;
+    if (typeof suggested !== 'number' || typeof adviceMin !== 'number') return undefined;
+    lo = Math.max(lo, adviceMin);
+    if (typeof adviceMax === 'number') hi = Math.min(hi, adviceMax);
+    if (typeof adviceTo === 'string') to ??= adviceTo;
   }
-  if (!seen) return undefined;
-  if (hi === Infinity) {
-    const r = lo <= DEFAULT_PULL_OHMS ? DEFAULT_PULL_OHMS : seriesValuesBetween(E24, lo, lo * 10)[0];
-    return r === undefined ? undefined : { ohms: r, rMin: lo, rMax: null };
-  }
-  const r = largestInRange(E24, lo, hi);
-  return r === null ? undefined : { ohms: r, rMin: lo, rMax: hi };
+  if (!seen || !(lo <= hi)) return undefined;
+  const r = choosePull(lo, hi).suggested;
+  return r === null ? undefined : { ohms: r, rMin: lo, rMax: hi === Infinity ? null : hi, to };
 }
 
 function rangeText(v: { rMin: number; rMax: number | null }): string {
@@ -83,27 +83,34 @@ export function addPullFix(design: Design, finding: Finding): QuickFix | undefin
     finding: finding.id,
     title: `Pull ${netName(net)} up to ${to} with ${ohms(value.ohms)}`,
     sentence:
-      `Adds a ${ohms(value.ohms)} pull-up from ${netName(net)} to ${to}, the largest E24 value in the allowed range ` +
-      `${rangeText(value)}, so that the open-drain drivers have a high level to release to.`,
+      `Adds a ${ohms(value.ohms)} pull-up from ${netName(net)} to ${to}, the standard value nearest the middle of ` +
+      `${rangeText(value)} (the allowed range within its tolerance), so that the open-drain drivers have a high level to release to.`,
     apply: (draft) => setNetPull(draft, net.id, pull),
   };
 }
 
-/** pull-range outside its range: set the pull to the E24 value that every power state allows. */
+/**
+ * pull-range outside its range: set the net's own pull-up to the value the rule advises in every
+ * power state, or add one when the pins' internal pulls were all the net had.
+ */
 export function pullValueFix(design: Design, finding: Finding, result: CheckResult): QuickFix | undefined {
   const net = finding.net === null ? undefined : findNet(design, finding.net);
-  const pull = net?.pull;
-  if (net === undefined || pull === undefined || pull.to === GROUND) return undefined;
+  if (net === undefined) return undefined;
   const value = pullValueFrom(result.findings, net.id);
-  if (value === undefined || value.ohms === pull.ohms) return undefined;
-  const next: Pull = { to: pull.to, ohms: value.ohms };
+  if (value === undefined) return undefined;
+  const pull = net.pull !== undefined && net.pull.to !== GROUND ? net.pull : undefined;
+  const to = pull?.to ?? value.to;
+  if (to === null || (pull !== undefined && value.ohms === pull.ohms)) return undefined;
+  const next: Pull = { to, ohms: value.ohms };
   return {
     id: 'pull-value',
     finding: finding.id,
-    title: `Change the pull-up of ${netName(net)} to ${ohms(value.ohms)}`,
+    title: pull === undefined
+      ? `Pull ${netName(net)} up to ${to} with ${ohms(value.ohms)}`
+      : `Change the pull-up of ${netName(net)} to ${ohms(value.ohms)}`,
     sentence:
-      `Replaces the ${ohms(pull.ohms)} pull-up to ${pull.to} by ${ohms(value.ohms)}, the largest E24 value inside ` +
-      `${rangeText(value)}, the range its drivers, receivers and rise time allow.`,
+      `${pull === undefined ? `Adds a ${ohms(value.ohms)} pull-up to ${to} beside the pins' own pulls` : `Replaces the ${ohms(pull.ohms)} pull-up to ${pull.to} by ${ohms(value.ohms)}`}, ` +
+      `the standard value nearest the middle of ${rangeText(value)}, the range its drivers, receivers and rise time allow within its tolerance.`,
     apply: (draft) => setNetPull(draft, net.id, next),
   };
 }

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { buildEditorReport, editorReportMarkdown } from '../../../app/library/reportExport.ts';
+import { buildEditorReport, editorReportMarkdown } from '../../../app/session/reportExport.ts';
 import { renderMarkdown } from '../../../rules/report/renderMarkdown.ts';
 import { exampleDesign } from '../../../app/example.ts';
 import { check } from '../../../rules/engine/check.ts';
