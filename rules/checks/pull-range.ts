@@ -159,8 +159,12 @@ function outcome(view: NetView, drivers: readonly PinView[], ups: readonly PullS
 /** The pulls judged, in words: the net's own alone as before, or every one with their parallel value. */
 function describePulls(ups: readonly PullSource[], together: number): string {
   const one = ups[0]!;
-  if (ups.length === 1) return one.origin === 'net' ? `The ${fmtOhms(one.ohms)} pull-up to ${one.to}` : `The ${fmtOhms(one.ohms)} pull-up inside ${one.origin}`;
-  const parts = ups.map((p) => (p.origin === 'net' ? `${fmtOhms(p.ohms)} of the net` : `${fmtOhms(p.ohms)} inside ${p.origin}`));
+  // A resistor part (version 2) is an external pull-up, named by its designator.
+  if (ups.length === 1) {
+    return one.origin === 'net' ? `The ${fmtOhms(one.ohms)} pull-up to ${one.to}`
+      : one.resistor === true ? `The ${fmtOhms(one.ohms)} pull-up ${one.origin} to ${one.to}` : `The ${fmtOhms(one.ohms)} pull-up inside ${one.origin}`;
+  }
+  const parts = ups.map((p) => (p.origin === 'net' ? `${fmtOhms(p.ohms)} of the net` : p.resistor === true ? `${fmtOhms(p.ohms)} of ${p.origin}` : `${fmtOhms(p.ohms)} inside ${p.origin}`));
   return `The pull-ups (${parts.join(', ')}; ${fmtOhms(together)} together)`;
 }
 

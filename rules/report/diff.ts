@@ -121,6 +121,9 @@ const UNITS: Readonly<Record<string, string>> = {
   ohmsMin: 'Ω', ohmsMax: 'Ω', lowestPower: 'Ω', adviceMin: 'Ω', adviceMax: 'Ω', adviceCap: 'Ω', othersOhms: 'Ω',
   suggestedRise: 's', suggestedHigh: 'V', suggestedLow: 'V', suggestedSink: 'A',
   current: 'A', drop: 'V', high: 'V', threshold: 'V',
+  // Version 2: parts between chips.
+  injectionMax: 'A', total: 'A', minLoad: 'A', viMin: 'V', vgate: 'V', vgs: 'V', vgsTh: 'V', iLow: 'A', iHigh: 'A', rated: 'A',
+  gateMax: 'V', pullMin: 'V', minExternalPull: 'Ω', vlow: 'V', rs: 'Ω', rpu: 'Ω', maxLoadCapacitance: 'F', overdrive: 'A',
 };
 
 /** Value keys that are plain numbers (fractions, factors): printed as they are. */

@@ -103,7 +103,7 @@ describe('exit status and output', () => {
     ['--format junit, passing', ['check', 'quiet.json', '--format=junit'], 0, { out: /<testsuites [^>]*tests="2" failures="0"/, noErr: true }],
     ['--quiet: the verdict alone', ['check', 'greenhouse.json', '--quiet'], 1, { out: new RegExp(`^FAIL: unwaived findings at the fail-on level \\(error\\): ${G.error} errors\\.\\n$`), noErr: true }],
     ['--quiet, passing', ['check', 'quiet.json', '--quiet'], 0, { out: /^PASS: [^\n]*\n$/, noErr: true }],
-    ['--verbose lists info findings', ['check', 'greenhouse.json', '--verbose'], 1, { out: new RegExp(`^Info \\(${G.info}\\)\\n {2}pull-range: `, 'm'), noErr: true }],
+    ['--verbose lists info findings', ['check', 'greenhouse.json', '--verbose'], 1, { out: new RegExp(`^Info \\(${G.info}\\)\\n {2}clamp-current: `, 'm'), noErr: true }],
     ['without --verbose, info is a count', ['check', 'greenhouse.json'], 1, { out: new RegExp(`^Info: ${G.info} findings, not listed \\(--verbose lists them\\)$`, 'm'), noErr: true }],
     ['--quiet with --verbose', ['check', 'quiet.json', '--quiet', '--verbose'], 2, { err: /--quiet and --verbose contradict/, noOut: true }],
     ['--quiet with --format json', ['check', 'quiet.json', '--quiet', '--json'], 2, { err: /--quiet shapes the text report: it cannot go with --format json/, noOut: true }],

@@ -121,7 +121,7 @@ describe.skipIf(!HAVE_POPPLER)('the example\'s PDF, read back with pdftotext', (
 
   it('has every rail-crossing row with its rails, state, margins and worst finding', () => {
     const crossings = section(text, /^Rail crossings \(\d+\)$/m, /^Noise margins per net$/m);
-    expect(made.report.crossings.length).toBe(18); // 6 crossing nets × 3 power states in the example
+    expect(made.report.crossings.length).toBe(32); // 6 crossing nets × 3 power states, and the parts between chips' 6 in all-on and at reset, 2 in standby (its FET gates off)
     for (const c of made.report.crossings) {
       const margin = (m: number | null) => (m === null ? '—' : `${escapeRe(String(Number(m.toPrecision(3))))} V`);
       const row = new RegExp(
@@ -195,8 +195,8 @@ describe.skipIf(!HAVE_POPPLER)('the example\'s PDF, read back with pdftotext', (
   it('puts the verdict, the counts and the power states on the cover', () => {
     const cover = text.slice(0, text.indexOf('page 1 of'));
     expect(cover).toContain('Greenhouse irrigation controller');
-    // 9 planted all-on errors, 9 again in standby, and at reset 7 again plus the floating enable.
-    expect(cover).toContain('FAIL: unwaived findings at the fail-on level (error): 26 errors.');
+    // 9 planted all-on errors, 9 again in standby, and at reset 7 again plus the floating enable; the SCL2 shifter's 2 in all-on and at reset.
+    expect(cover).toContain('FAIL: unwaived findings at the fail-on level (error): 30 errors.');
     expect(cover).toContain('2026-01-01 00:00 UTC');
     expect(cover).toContain('railcross 0.1.0');
     expect(cover).toMatch(/^\s*standby\s+Standby: sensor rail off\s+1v8\s*$/m);

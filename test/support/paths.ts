@@ -32,7 +32,8 @@ export function divider(extra: { r1?: number; r2?: number; tolerance?: number; m
     ],
     nets: [
       net('TX5', ['U1.Y', 'R1.1']),
-      net('RX33', ['R1.2', 'R2.1', 'U2.A'], { wiringCapacitance: 10e-12, ...(extra.maxRiseTime === undefined ? {} : { maxRiseTime: extra.maxRiseTime }) }),
+      // 5 pF of wiring and the input's 5 pF (lvcmos33): the 10 pF on the divided net.
+      net('RX33', ['R1.2', 'R2.1', 'U2.A'], { wiringCapacitance: 5e-12, ...(extra.maxRiseTime === undefined ? {} : { maxRiseTime: extra.maxRiseTime }) }),
     ],
   });
 }
@@ -94,14 +95,14 @@ export function fetBus(extra: {
 }
 
 /**
- * A Schottky diode shifter: a 3.3 V LVCMOS output (cathode side) into a 5 V input pulled up to
+ * A Schottky diode shifter: a 3.3 V 74LVC output (cathode side) into a 5 V input pulled up to
  * 5 V on the anode side.
  */
 export function diodeLink(extra: { vfMax?: number; leakageMax?: number; pull?: number; vih?: number; vil?: number } = {}): Design {
   return design({
     rails: [rail5v0, rail3v3],
     parts: [
-      part('U1', '3v3', 'lvcmos33', [output('Y')]),
+      part('U1', '3v3', '74lvc', [output('Y')]),
       part('U2', '5v0', '74hct', [input('A', { params: { ...(extra.vih === undefined ? {} : { vih: extra.vih }), ...(extra.vil === undefined ? {} : { vil: extra.vil }) } })]),
     ],
     discretes: [diodeShifter('D1', extra.vfMax ?? 0.45, extra.leakageMax ?? 5e-6), resistor('RP', extra.pull ?? 10e3, { tolerance: 0.01, tie: { '2': '5v0' } })],
