@@ -27,7 +27,7 @@ async function drawing(page: Page): Promise<Drawing> {
     }));
     const chips = [...document.querySelectorAll<HTMLElement>('.react-flow__node')].map((n) => {
       const m = /translate\((-?[\d.]+)px, (-?[\d.]+)px\)/.exec(n.style.transform);
-      const chip = n.querySelector<HTMLElement>('.rc-chip')!;
+      const chip = n.querySelector<HTMLElement>('.rc-chip, .rc-discrete')!;
       return { id: n.dataset.id ?? '', x: Number(m?.[1]) + chip.offsetLeft, y: Number(m?.[2]) + chip.offsetTop, width: chip.offsetWidth, height: chip.offsetHeight };
     });
     return { wires, chips, junctions: document.querySelectorAll('.rc-junction').length };

@@ -101,7 +101,7 @@ export function Canvas() {
   const keeper = useRef<RouteKeeper | null>(null);
   keeper.current ??= createRouteKeeper();
   const routes = keeper.current;
-  useLayoutEffect(() => routes.update(parts, nets), [routes, parts, nets]);
+  useLayoutEffect(() => routes.update(parts, nets, discreteParts ?? []), [routes, parts, nets, discreteParts]);
   useEffect(() => () => routes.dispose(), [routes]);
   const place = usePlacePart();
   useCanvasKeys();

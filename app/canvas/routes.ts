@@ -7,7 +7,8 @@
  * (WireEdge), and until a route arrives a wire is drawn that way too.
  */
 import { createStore } from 'zustand/vanilla';
-import type { Net, Part } from '../../rules/model/schema.ts';
+import type { Discrete, Net, Part } from '../../rules/model/schema.ts';
+import { DISCRETE_SIZE } from './deriveFlow.ts';
 import { WireRouter, type Anchor, type Box, type Hop, type Point, type Route, type WireSpec } from '../../rules/routing/index.ts';
 import { solve, unpackHops, type HopMemory, type RouteJob, type RouteReply } from './routeJob.ts';
 import { netWires, wireId } from '../store/commands/index.ts';
@@ -61,6 +62,33 @@ export function chipBox(part: Part): Box {
 }
 
 const ORIGIN = { x: 0, y: 0 };
+
+/** The two pins of each kind of part between chips, left then right (DiscreteNode.tsx draws them so). */
+const DISCRETE_ENDS: Readonly<Record<Discrete['kind'], readonly [string, string]>> = {
+  resistor: ['1', '2'],
+  'fet-shifter': ['S', 'D'],
+  'diode-shifter': ['K', 'A'],
+};
+
+const discreteBoxes = new WeakMap<Discrete, Box>();
+
+/** A part between chips as an obstacle with its two anchors, at mid-height on each side (a tied end has none). */
+export function discreteBox(d: Discrete): Box {
+  const hit = discreteBoxes.get(d);
+  if (hit !== undefined) return hit;
+  const position = d.position ?? ORIGIN;
+  const x = position.x + NODE_MARGIN;
+  const y = position.y + NODE_MARGIN;
+  const { width, height } = DISCRETE_SIZE;
+  const [left, right] = DISCRETE_ENDS[d.kind];
+  const tied = (pin: string) => d.kind === 'resistor' && d.tie?.[pin as '1' | '2'] !== undefined;
+  const pins: Anchor[] = [];
+  if (!tied(left)) pins.push({ key: `${d.id}.${left}`, side: 'left', x: x - HANDLE_HALF, y: y + height / 2 });
+  if (!tied(right)) pins.push({ key: `${d.id}.${right}`, side: 'right', x: x + width + HANDLE_HALF, y: y + height / 2 });
+  const box: Box = { id: d.id, x, y, width, height, pins };
+  discreteBoxes.set(d, box);
+  return box;
+}
 
 function sameList<T>(a: readonly T[], b: readonly T[]): boolean {
   return a.length === b.length && a.every((x, k) => x === b[k]);
@@ -135,8 +163,8 @@ export function createRouteKeeper() {
   }
 
   /** Routes the design's wires again where its geometry or nets changed. */
-  function update(parts: readonly Part[], nets: readonly Net[]): void {
-    const boxes = parts.map(chipBox);
+  function update(parts: readonly Part[], nets: readonly Net[], discretes: readonly Discrete[] = []): void {
+    const boxes = discretes.length === 0 ? parts.map(chipBox) : [...parts.map(chipBox), ...discretes.map(discreteBox)];
     // A recolouring edit makes new part objects of the same geometry: nothing to route.
     if (nets === lastNets && sameList(boxes, lastBoxes)) return;
     lastBoxes = boxes;
