@@ -31,6 +31,26 @@ function scaled(mantissa: number, decade: number): number {
   return Number(`${mantissa}e${decade}`);
 }
 
+/**
+ * The series scaled to one decade, made once per (series, decade): building each value from its
+ * literal costs a string round trip, and the pull-up advice searches the same decades net after
+ * net.
+ */
+const decadeCache = new WeakMap<readonly number[], Map<number, readonly number[]>>();
+function decadeValues(series: readonly number[], decade: number): readonly number[] {
+  let bySeries = decadeCache.get(series);
+  if (bySeries === undefined) {
+    bySeries = new Map();
+    decadeCache.set(series, bySeries);
+  }
+  let values = bySeries.get(decade);
+  if (values === undefined) {
+    values = series.map((m) => scaled(m, decade));
+    bySeries.set(decade, values);
+  }
+  return values;
+}
+
 function decadeOf(x: number): number {
   return Math.floor(Math.log10(x));
 }
@@ -50,10 +70,7 @@ export function seriesValuesBetween(series: readonly number[], lo: number, hi: n
   const last = Number.isFinite(hi) ? Math.min(MAX_DECADE, decadeOf(hi) + 1) : MAX_DECADE;
   const values: number[] = [];
   for (let decade = first; decade <= last; decade++) {
-    for (const m of series) {
-      const v = scaled(m, decade);
-      if (v >= lower && v <= upper) values.push(v);
-    }
+    for (const v of decadeValues(series, decade)) if (v >= lower && v <= upper) values.push(v);
   }
   // A caller's own series need not be sorted or lie within one decade.
   return values.sort((x, y) => x - y);
@@ -74,10 +91,7 @@ export function largestInRange(series: readonly number[], lo: number, hi: number
   const top = Math.min(MAX_DECADE, decadeOf(hi) + 1);
   for (let decade = top; decade >= MIN_DECADE; decade--) {
     let best: number | null = null;
-    for (const m of series) {
-      const v = scaled(m, decade);
-      if (v <= upper && (best === null || v > best)) best = v;
-    }
+    for (const v of decadeValues(series, decade)) if (v <= upper && (best === null || v > best)) best = v;
     if (best !== null) return best >= lower ? best : null;
   }
   return null;
