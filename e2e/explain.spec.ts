@@ -5,7 +5,7 @@
  */
 import { readFileSync } from 'node:fs';
 import { expect, test, type Page } from '@playwright/test';
-import { check } from '../rules/engine/check.ts';
+import { check } from '../rules/check/check.ts';
 import type { Design } from '../rules/model/schema.ts';
 import { fixesFor } from '../app/store/commands/fixes/index.ts';
 

@@ -8,7 +8,7 @@
  */
 import { readFileSync } from 'node:fs';
 import { expect, test, type Page } from '@playwright/test';
-import { check } from '../rules/engine/check.ts';
+import { check } from '../rules/check/check.ts';
 import { writeDesign } from '../rules/model/writer.ts';
 import { ReportSchema } from '../rules/report/reportSchema.ts';
 import { generateDesign } from '../test/support/generator.ts';

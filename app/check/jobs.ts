@@ -4,7 +4,7 @@
  * reading a design file (the engine's reader), checking it (the engine's `check`, the same one
  * the command line runs) and writing its report. Each step says when it starts, for progress.
  */
-import { check } from '../../rules/engine/check.ts';
+import { check } from '../../rules/check/check.ts';
 import type { CheckResult } from '../../rules/engine/types.ts';
 import type { DesignError } from '../../rules/model/paths.ts';
 import { readDesign } from '../../rules/model/reader.ts';

@@ -6,7 +6,7 @@
  */
 import { applyPatches, enablePatches, produceWithPatches, type Patch } from 'immer';
 import { createStore, type StoreApi } from 'zustand/vanilla';
-import { check } from '../../rules/engine/check.ts';
+import { check } from '../../rules/check/check.ts';
 import { ALL_ON } from '../../rules/engine/powerStates.ts';
 import type { CheckResult } from '../../rules/engine/types.ts';
 import type { Design } from '../../rules/model/schema.ts';

@@ -6,7 +6,7 @@
 import { readDesign } from '../model/reader.ts';
 import { MAX_VOLTS } from '../model/limits.ts';
 import type { Design } from '../model/schema.ts';
-import { check } from '../engine/check.ts';
+import { check } from '../check/check.ts';
 import { ALL_ON } from '../engine/powerStates.ts';
 import { parseQuantity } from '../levels/units.ts';
 import { BUILTIN_PROFILES } from '../profiles/index.ts';

@@ -1,6 +1,6 @@
 /** Turning rule drafts into findings: ids, waivers, and the report's order. */
 import type { Net } from '../model/schema.ts';
-import type { Draft, MessageFns, Rule } from '../checks/defineRule.ts';
+import type { Draft, MessageFns, Rule } from './rule.ts';
 import { RULE_IDS, type RuleId } from '../model/ruleIds.ts';
 import type { Finding, FindingOf, PowerState, Summary } from './types.ts';
 import type { FindingValues } from './values.ts';

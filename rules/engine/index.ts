@@ -1,5 +1,4 @@
 /** The rule engine's public face. */
-export { check } from './check.ts';
 export { ALL_ON, ALL_ON_LABEL, powerStates, railStates, effectiveSettings } from './powerStates.ts';
 export { resolvePin, lookupProfile } from './resolve.ts';
 export type * from './types.ts';

@@ -1,5 +1,5 @@
 /**
- * Design file, version 2 (docs/design-format.md): the one zod schema. The TypeScript types below
+ * Design file, version 2 (rules/schema/design-format.md): the one zod schema. The TypeScript types below
  * and rules/schema/design.schema.json are both derived from it.
  *
  * The schema checks shape and local values; references between records (a net naming a pin,

@@ -14,7 +14,7 @@ import {
   setRailTolerance, setRailVoltage, setResetState, tidyLayout, addDiscrete, newDiscrete, setDiscrete, removeDiscrete, type Command,
 } from '../../app/store/commands/index.ts';
 import { applyFix, fixesFor } from '../../app/store/commands/fixes/index.ts';
-import { check } from '../../rules/engine/check.ts';
+import { check } from '../../rules/check/check.ts';
 import { RULE_IDS } from '../../rules/model/ruleIds.ts';
 import { validateDesign } from '../../rules/model/reader.ts';
 import type { Design } from '../../rules/model/schema.ts';

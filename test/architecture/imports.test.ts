@@ -79,7 +79,7 @@ describe('the folder structure', () => {
   it('the folders of rules/ import each other without a cycle', () => {
     // Named here while it is being taken apart: rules implement the engine's contract, and the
     // engine's entry point runs the registry of rules. A new cycle fails this test.
-    const known = ['rules/checks → rules/engine → rules/checks'];
+    const known: string[] = [];
     const found = cycles(folderGraph(rulesFiles)).filter((c) => !known.some((k) => c.startsWith(`${k} (`)));
     expect(found).toEqual([]);
   });

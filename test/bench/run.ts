@@ -5,7 +5,7 @@
  * edits of every kind re-checked incrementally) and heapMB (heap in use after a full check).
  */
 import os from 'node:os';
-import { check } from '../../rules/engine/check.ts';
+import { check } from '../../rules/check/check.ts';
 import type { CheckResult } from '../../rules/engine/types.ts';
 import type { Design } from '../../rules/model/schema.ts';
 import { applyEdit, EDIT_KINDS, generateDesign, rng } from '../support/generator.ts';

@@ -10,7 +10,7 @@
 import { describe, expect, it } from 'vitest';
 import type { AnyRule } from '../../rules/checks/defineRule.ts';
 import { RULES } from '../../rules/checks/index.ts';
-import { check } from '../../rules/engine/check.ts';
+import { check } from '../../rules/check/check.ts';
 import { nonFinitePaths } from '../../rules/engine/undecidable.ts';
 import type { Design } from '../../rules/model/schema.ts';
 import { bidir, design, input, net, output, part, rail, rail3v3, rail5v0, scenario } from '../support/build.ts';

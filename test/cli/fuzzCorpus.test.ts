@@ -18,7 +18,7 @@ import Ajv2020 from 'ajv/dist/2020.js';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { main } from '../../rules/cli/main.ts';
-import { check } from '../../rules/engine/check.ts';
+import { check } from '../../rules/check/check.ts';
 import { nonFinitePaths } from '../../rules/engine/undecidable.ts';
 import { readDesign } from '../../rules/model/reader.ts';
 import type { Design } from '../../rules/model/schema.ts';

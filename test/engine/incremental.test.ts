@@ -4,7 +4,7 @@
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { check } from '../../rules/engine/check.ts';
+import { check } from '../../rules/check/check.ts';
 import type { CheckResult } from '../../rules/engine/types.ts';
 import { validateDesign } from '../../rules/model/reader.ts';
 import { applyEdit, EDIT_KINDS, generateDesign, rng } from '../support/generator.ts';

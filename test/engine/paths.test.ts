@@ -4,7 +4,7 @@
  * are named beside them.
  */
 import { describe, expect, it } from 'vitest';
-import { check } from '../../rules/engine/check.ts';
+import { check } from '../../rules/check/check.ts';
 import { solve } from '../../rules/engine/nodal.ts';
 import { pathExposure } from '../../rules/engine/paths.ts';
 import { levelAt } from '../../rules/levels/level.ts';

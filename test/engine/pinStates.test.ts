@@ -5,7 +5,7 @@
  * own kind of value (invented).
  */
 import { describe, expect, it } from 'vitest';
-import { check } from '../../rules/engine/check.ts';
+import { check } from '../../rules/check/check.ts';
 import { validateDesign } from '../../rules/model/reader.ts';
 import type { PinState } from '../../rules/model/schema.ts';
 import { design, input, net, output, part } from '../support/build.ts';

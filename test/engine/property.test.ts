@@ -4,7 +4,7 @@
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { check } from '../../rules/engine/check.ts';
+import { check } from '../../rules/check/check.ts';
 import type { Finding } from '../../rules/engine/types.ts';
 import type { Design } from '../../rules/model/schema.ts';
 import { RULE_IDS } from '../../rules/model/ruleIds.ts';

@@ -3,7 +3,7 @@
  * check() on small designs (each source named beside its rows).
  */
 import { describe, expect, it } from 'vitest';
-import { check } from '../../rules/engine/check.ts';
+import { check } from '../../rules/check/check.ts';
 import type { Profile } from '../../rules/model/schema.ts';
 import { design, input, net, output, part, rail } from '../support/build.ts';
 

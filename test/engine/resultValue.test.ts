@@ -1,11 +1,11 @@
 /**
  * A check result is a value: a later incremental check never changes an earlier result
- * (the engine's contract, rules/engine/check.ts). Before the tables were made of shared
+ * (the engine's contract, rules/check/check.ts). Before the tables were made of shared
  * buckets, `check(d1, r0)` took over r0's Maps: r0.nets lost SDA while r0.design still had it.
  */
 import { produce } from 'immer';
 import { describe, expect, it } from 'vitest';
-import { check } from '../../rules/engine/check.ts';
+import { check } from '../../rules/check/check.ts';
 import type { CheckResult } from '../../rules/engine/types.ts';
 import { greenhouse } from '../report/fixtures.ts';
 

@@ -6,7 +6,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { defineRule } from '../../rules/checks/defineRule.ts';
-import { check } from '../../rules/engine/check.ts';
+import { check } from '../../rules/check/check.ts';
 import { isOfRule, valuesOf } from '../../rules/engine/findings.ts';
 import type { Finding } from '../../rules/engine/types.ts';
 import { greenhouse } from '../report/fixtures.ts';

@@ -7,7 +7,7 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { readDesign } from '../../rules/model/reader.ts';
-import { check } from '../../rules/engine/check.ts';
+import { check } from '../../rules/check/check.ts';
 import { valuesOf } from '../../rules/engine/findings.ts';
 
 const text = readFileSync(new URL('../../rules/examples/greenhouse.json', import.meta.url), 'utf8');

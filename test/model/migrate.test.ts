@@ -3,7 +3,7 @@ import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import '../support/propertySeed.ts';
 import { CURRENT_VERSION, migrate, readDesign, writeDesign, type Design } from '../../rules/model/index.ts';
-import { check } from '../../rules/engine/check.ts';
+import { check } from '../../rules/check/check.ts';
 import { designArb } from '../support/arbitraries.ts';
 import { generateDesign } from '../support/generator.ts';
 import { greenhouse } from './fixtures.ts';
@@ -35,7 +35,7 @@ const verdict = (d: Design) => {
 };
 
 describe('migrate', () => {
-  it('the current version is 2 (docs/design-format.md: "version 2")', () => {
+  it('the current version is 2 (rules/schema/design-format.md: "version 2")', () => {
     expect(CURRENT_VERSION).toBe(2);
   });
 

@@ -26,7 +26,7 @@ import {
 import { KEY_ORDER, type KeyOrder } from '../../rules/model/writer.ts';
 import { greenhouse } from './fixtures.ts';
 
-/** docs/design-format.md's tables, in their row order (transcribed; version 2). */
+/** rules/schema/design-format.md's tables, in their row order (transcribed; version 2). */
 const TABLE_ORDER: { name: string; order: KeyOrder | undefined; schema: z.ZodObject; keys: string[] }[] = [
   { name: 'top level', order: KEY_ORDER.design, schema: DesignSchema, keys: ['format', 'version', 'title', 'settings', 'rails', 'scenarios', 'profiles', 'parts', 'discretes', 'nets'] },
   { name: 'settings', order: KEY_ORDER.design.children.settings, schema: SettingsSchema, keys: ['minMargin', 'defaultWiringCapacitance'] },

@@ -4,7 +4,7 @@ import levelLow from '../../rules/checks/level-low.ts';
 import overvoltage from '../../rules/checks/overvoltage.ts';
 import railCrossing from '../../rules/checks/rail-crossing.ts';
 import railRange from '../../rules/checks/rail-range.ts';
-import { check } from '../../rules/engine/check.ts';
+import { check } from '../../rules/check/check.ts';
 import type { Design, Net, Waiver } from '../../rules/model/schema.ts';
 import { builtinProfile } from '../../rules/profiles/index.ts';
 import { buildReport } from '../../rules/report/buildReport.ts';

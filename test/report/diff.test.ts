@@ -4,7 +4,7 @@
  * that net's ids, and the findings behind them, as they were.
  */
 import { describe, expect, it } from 'vitest';
-import { check } from '../../rules/engine/check.ts';
+import { check } from '../../rules/check/check.ts';
 import type { Design, Net } from '../../rules/model/schema.ts';
 import { baselineOf, baselineVerdict, inBaseline } from '../../rules/report/baseline.ts';
 import { buildReport } from '../../rules/report/buildReport.ts';

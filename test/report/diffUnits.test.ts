@@ -4,7 +4,7 @@
  * `4205.816554809843`. Checked over the example and generated boards with every rule firing.
  */
 import { describe, expect, it } from 'vitest';
-import { check } from '../../rules/engine/check.ts';
+import { check } from '../../rules/check/check.ts';
 import { changeText, UNITLESS_VALUE_KEYS, unitOfValue } from '../../rules/report/diff.ts';
 import { generateDesign } from '../support/generator.ts';
 import { greenhouse } from './fixtures.ts';

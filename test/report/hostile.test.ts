@@ -9,7 +9,7 @@
  * finishes in well under a second: a regression fails by timing out, not by a stopwatch.
  */
 import { describe, expect, it } from 'vitest';
-import { check } from '../../rules/engine/check.ts';
+import { check } from '../../rules/check/check.ts';
 import type { Design } from '../../rules/model/schema.ts';
 import { buildReport } from '../../rules/report/buildReport.ts';
 import { codeSpan, escapeMarkdown, oneLine, renderMarkdown } from '../../rules/report/renderMarkdown.ts';

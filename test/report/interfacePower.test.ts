@@ -5,7 +5,7 @@
  */
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { check } from '../../rules/engine/check.ts';
+import { check } from '../../rules/check/check.ts';
 import { interfacePowerRows } from '../../rules/report/interfacePower.ts';
 import { buildReport } from '../../rules/report/buildReport.ts';
 import { renderText } from '../../rules/report/renderText.ts';

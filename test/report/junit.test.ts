@@ -3,7 +3,7 @@
  * state, a failure where an unwaived finding reaches the fail-on level, the rest in system-out.
  */
 import { describe, expect, it } from 'vitest';
-import { check } from '../../rules/engine/check.ts';
+import { check } from '../../rules/check/check.ts';
 import type { Design } from '../../rules/model/schema.ts';
 import { baselineOf } from '../../rules/report/baseline.ts';
 import { buildReport } from '../../rules/report/buildReport.ts';

@@ -10,7 +10,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { exampleDesign } from '../../app/example.ts';
-import { check } from '../../rules/engine/check.ts';
+import { check } from '../../rules/check/check.ts';
 import type { NetView, PowerState } from '../../rules/engine/types.ts';
 import { ladderAxis, ladderFor, type Ladder } from '../../rules/report/ladder.ts';
 

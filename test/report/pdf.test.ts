@@ -9,7 +9,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { loadDejaVuFonts } from '../../rules/cli/node.ts';
-import { check } from '../../rules/engine/check.ts';
+import { check } from '../../rules/check/check.ts';
 import type { Design } from '../../rules/model/schema.ts';
 import { buildReport } from '../../rules/report/buildReport.ts';
 import { RULES } from '../../rules/checks/index.ts';

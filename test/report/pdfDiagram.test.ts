@@ -9,7 +9,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { loadDejaVuFonts } from '../../rules/cli/node.ts';
-import { check } from '../../rules/engine/check.ts';
+import { check } from '../../rules/check/check.ts';
 import { buildReport } from '../../rules/report/buildReport.ts';
 import { writeReportPdf } from '../../rules/report/pdf/index.ts';
 import { layoutDiagram } from '../../rules/report/pdf/diagramLayout.ts';

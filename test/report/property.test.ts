@@ -9,7 +9,7 @@ import Ajv2020 from 'ajv/dist/2020.js';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { loadDejaVuFonts } from '../../rules/cli/node.ts';
-import { check } from '../../rules/engine/check.ts';
+import { check } from '../../rules/check/check.ts';
 import { buildReport } from '../../rules/report/buildReport.ts';
 import { writeReportPdf } from '../../rules/report/pdf/index.ts';
 import { renderMarkdown } from '../../rules/report/renderMarkdown.ts';

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { check } from '../../rules/engine/check.ts';
+import { check } from '../../rules/check/check.ts';
 import type { Design } from '../../rules/model/schema.ts';
 import { buildReport } from '../../rules/report/buildReport.ts';
 import { codeSpan, escapeMarkdown, renderMarkdown } from '../../rules/report/renderMarkdown.ts';

@@ -7,7 +7,7 @@ import { readFileSync } from 'node:fs';
 import Ajv from 'ajv';
 import { describe, expect, it } from 'vitest';
 import { RULES } from '../../rules/checks/index.ts';
-import { check } from '../../rules/engine/check.ts';
+import { check } from '../../rules/check/check.ts';
 import type { Design } from '../../rules/model/schema.ts';
 import { baselineOf } from '../../rules/report/baseline.ts';
 import { buildReport } from '../../rules/report/buildReport.ts';

@@ -1,7 +1,7 @@
 import { readFileSync } from 'node:fs';
 import Ajv2020 from 'ajv/dist/2020.js';
 import { describe, expect, it } from 'vitest';
-import { check } from '../../rules/engine/check.ts';
+import { check } from '../../rules/check/check.ts';
 import { buildReport } from '../../rules/report/buildReport.ts';
 import { ReportSchema, type Report } from '../../rules/report/reportSchema.ts';
 import { reportJsonSchema, SCHEMA_FILES, schemaText } from '../../rules/schema/schemas.ts';

@@ -10,7 +10,7 @@ import { describe, expect, it } from 'vitest';
 import { declaredSeverities, type AnyRule } from '../../rules/checks/defineRule.ts';
 import type { Design } from '../../rules/model/schema.ts';
 import type { Finding, Severity } from '../../rules/engine/types.ts';
-import { check } from '../../rules/engine/check.ts';
+import { check } from '../../rules/check/check.ts';
 import { validateDesign } from '../../rules/model/reader.ts';
 import { deepFreeze } from '../../rules/profiles/define.ts';
 

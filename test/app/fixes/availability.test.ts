@@ -5,7 +5,7 @@
 import { describe, expect, it } from 'vitest';
 import { exampleDesign } from '../../../app/example.ts';
 import { fixesFor, mayHaveFixes } from '../../../app/store/commands/fixes/index.ts';
-import { check } from '../../../rules/engine/check.ts';
+import { check } from '../../../rules/check/check.ts';
 import type { Finding } from '../../../rules/engine/types.ts';
 import { generateDesign } from '../../support/generator.ts';
 

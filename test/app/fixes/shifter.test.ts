@@ -6,7 +6,7 @@
 import { describe, expect, it } from 'vitest';
 import { fixesFor } from '../../../app/store/commands/fixes/index.ts';
 import { tryOn } from '../../../app/store/commands/fixes/preview.ts';
-import { check } from '../../../rules/engine/check.ts';
+import { check } from '../../../rules/check/check.ts';
 import { valuesOf } from '../../../rules/engine/findings.ts';
 import { validateDesign } from '../../../rules/model/reader.ts';
 import type { Design } from '../../../rules/model/schema.ts';

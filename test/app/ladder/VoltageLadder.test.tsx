@@ -6,7 +6,7 @@ import { renderToStaticMarkup } from 'react-dom/server';
 import { describe, expect, it } from 'vitest';
 import { exampleDesign } from '../../../app/example.ts';
 import { VoltageLadder } from '../../../app/ladder/VoltageLadder.tsx';
-import { check } from '../../../rules/engine/check.ts';
+import { check } from '../../../rules/check/check.ts';
 import { ladderFor } from '../../../rules/report/ladder.ts';
 
 const result = check(exampleDesign());

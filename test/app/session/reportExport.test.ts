@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { buildEditorReport, editorReportMarkdown } from '../../../app/session/reportExport.ts';
 import { renderMarkdown } from '../../../rules/report/renderMarkdown.ts';
 import { exampleDesign } from '../../../app/example.ts';
-import { check } from '../../../rules/engine/check.ts';
+import { check } from '../../../rules/check/check.ts';
 import { newDesign } from '../../../rules/model/newDesign.ts';
 import { ReportSchema } from '../../../rules/report/reportSchema.ts';
 

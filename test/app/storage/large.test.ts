@@ -4,7 +4,7 @@ import { readJob, reportJob, LARGE_DESIGN_PARTS, WORKER_FILE_BYTES } from '../..
 import { READ_ONLY } from '../../../app/store/editorStore.ts';
 import { setTitle } from '../../../app/store/commands/index.ts';
 import { exampleDesign } from '../../../app/example.ts';
-import { check } from '../../../rules/engine/check.ts';
+import { check } from '../../../rules/check/check.ts';
 import { writeDesign } from '../../../rules/model/writer.ts';
 import { ReportSchema } from '../../../rules/report/reportSchema.ts';
 import type { Design } from '../../../rules/model/schema.ts';

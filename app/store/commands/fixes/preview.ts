@@ -3,7 +3,7 @@
  * removes and those it brings. The findings panel shows this before the user applies a fix.
  */
 import { produce } from 'immer';
-import { check } from '../../../../rules/engine/check.ts';
+import { check } from '../../../../rules/check/check.ts';
 import type { CheckResult, Finding } from '../../../../rules/engine/types.ts';
 import type { Design } from '../../../../rules/model/schema.ts';
 import { isRefusal } from '../command.ts';

@@ -3,7 +3,7 @@
  * a pull-up value moved into its range, and a tie for a floating input.
  */
 import type { Draft } from 'immer';
-import { check } from '../../../../rules/engine/check.ts';
+import { check } from '../../../../rules/check/check.ts';
 import type { CheckResult, Finding } from '../../../../rules/engine/types.ts';
 import { choosePull } from '../../../../rules/levels/pullAdvice.ts';
 import { formatQuantity } from '../../../../rules/levels/units.ts';

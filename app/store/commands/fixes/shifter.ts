@@ -7,7 +7,7 @@
  * pull-range (its largest E24 value inside the range), as the pull-up fix sizes one.
  */
 import type { Draft } from 'immer';
-import { check } from '../../../../rules/engine/check.ts';
+import { check } from '../../../../rules/check/check.ts';
 import type { Finding } from '../../../../rules/engine/types.ts';
 import { formatQuantity } from '../../../../rules/levels/units.ts';
 import type { Design, Discrete } from '../../../../rules/model/schema.ts';

@@ -15,15 +15,15 @@
  */
 import type { Design, Discrete, Net, Part, Rail } from '../model/schema.ts';
 import { RULES } from '../checks/index.ts';
-import type { AnyRule } from '../checks/defineRule.ts';
-import { ALL_ON, effectiveSettings, powerStates, railStates } from './powerStates.ts';
-import { loneRails, pinView, prepareNet, type PrepareContext } from './prepare.ts';
-import { completeFinding, restampFinding, sortFindings } from './findings.ts';
-import { DesignIndex, groupKey, splitGroupKey } from './designIndex.ts';
-import { changedById } from './diff.ts';
-import { ChunkedMap, tallyOf } from './chunkedMap.ts';
-import { injectionsOf } from './injection.ts';
-import type { CheckResult, CheckStats, Finding, NetResult, PinView, PowerState, Summary } from './types.ts';
+import type { AnyRule } from '../engine/rule.ts';
+import { ALL_ON, effectiveSettings, powerStates, railStates } from '../engine/powerStates.ts';
+import { loneRails, pinView, prepareNet, type PrepareContext } from '../engine/prepare.ts';
+import { completeFinding, restampFinding, sortFindings } from '../engine/findings.ts';
+import { DesignIndex, groupKey, splitGroupKey } from '../engine/designIndex.ts';
+import { changedById } from '../engine/diff.ts';
+import { ChunkedMap, tallyOf } from '../engine/chunkedMap.ts';
+import { injectionsOf } from '../engine/injection.ts';
+import type { CheckResult, CheckStats, Finding, NetResult, PinView, PowerState, Summary } from '../engine/types.ts';
 
 // The engine runs in Node and the browser alike; both have a monotonic clock here.
 const clock = (globalThis as { performance?: { now(): number } }).performance;
