@@ -284,14 +284,17 @@ describe('greenhouse irrigation controller example', () => {
     expect(result.findings.find((f) => f.id === 'rail-injection:3v3:all-on')?.severity).toBe('info');
   });
 
-  // The editor draws a part as a box about 200 wide and 40 + 22 per pin tall, on a canvas of
-  // about 1200 × 700: the example's boxes must neither overlap nor leave it, and every pin is placed.
+  // The editor draws a part as a box about 200 wide and 40 + 22 per pin tall, a part between
+  // chips as one of 120 × 64, on a canvas of about 1400 × 1150 (the parts between chips sit in
+  // bands of their own, so that no two nets share a wire's track): the example's boxes must
+  // neither overlap nor leave it, and every pin is placed.
   it('lays its parts out without overlaps, each pin on a side', () => {
-    const boxes = design.parts.map((p) => ({
-      id: p.id, x: p.position?.x ?? 0, y: p.position?.y ?? 0, w: 200, h: 40 + 22 * p.pins.length,
-    }));
+    const boxes = [
+      ...design.parts.map((p) => ({ id: p.id, x: p.position?.x ?? 0, y: p.position?.y ?? 0, w: 200, h: 40 + 22 * p.pins.length })),
+      ...(design.discretes ?? []).map((d) => ({ id: d.id, x: d.position?.x ?? 0, y: d.position?.y ?? 0, w: 120, h: 64 })),
+    ];
     const problems: string[] = [];
-    for (const b of boxes) if (b.x < 0 || b.y < 0 || b.x + b.w > 1200 || b.y + b.h > 700) problems.push(`${b.id} off canvas`);
+    for (const b of boxes) if (b.x < 0 || b.y < 0 || b.x + b.w > 1400 || b.y + b.h > 1150) problems.push(`${b.id} off canvas`);
     for (const [i, a] of boxes.entries()) {
       for (const b of boxes.slice(i + 1)) {
         if (a.x < b.x + b.w && b.x < a.x + a.w && a.y < b.y + b.h && b.y < a.y + a.h) problems.push(`${a.id}/${b.id}`);

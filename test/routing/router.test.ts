@@ -9,7 +9,7 @@ import { produce } from 'immer';
 import { describe, expect, it } from 'vitest';
 import type { Design } from '../../rules/model/schema.ts';
 import { bodyCrossings, nudge, routeOnce, sharedTracks, SPACING, WireRouter, type WireSpec } from '../../rules/routing/index.ts';
-import { chipBox } from '../../app/canvas/routes.ts';
+import { chipBox, discreteBox } from '../../app/canvas/routes.ts';
 import { netWires, wireId } from '../../app/store/commands/index.ts';
 import { generateDesign } from '../support/generator.ts';
 
@@ -24,7 +24,8 @@ describe('routes that cannot be misread', () => {
     ['the greenhouse example', example()],
     ['a generated 200-part board (seed 4, chips 400 × 320 apart, wired in rows of 6)', generateDesign(4, { parts: 200, grid: { columns: 20, dx: 400, dy: 320 }, cluster: 6 })],
   ])('%s: no shared track, no wire through a chip, every wire from pin to pin at right angles', (_name, design) => {
-    const boxes = design.parts.map(chipBox);
+    // The parts between chips are boxes too, as the canvas routes them (app/canvas/routes.ts).
+    const boxes = [...design.parts.map(chipBox), ...(design.discretes ?? []).map(discreteBox)];
     const wires = wiresOf(design);
     const routes = [...routeOnce(boxes, wires).values()];
     expect(routes).toHaveLength(wires.length);
