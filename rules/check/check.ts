@@ -310,24 +310,36 @@ function splitStates(states: readonly PowerState[]): { allOn: PowerState; scenar
   return { allOn, scenarios: states.filter((s) => s !== allOn) };
 }
 
-function fullCheck(design: Design, rules: readonly AnyRule[], started: number): CheckResult {
-  const states = powerStates(design);
-  const index = DesignIndex.build(design);
+/**
+ * Every power state's tables: `all-on` first (a scenario re-stamps from it), then each scenario,
+ * each judged by `judge` (whole, or only what an edit dirtied), with the rail injection of each.
+ */
+function judgeStates(
+  design: Design, states: readonly PowerState[], index: DesignIndex, rules: readonly AnyRule[],
+  judge: (ctx: StateContext, allOn: StateTables | undefined) => StateTables,
+) {
   const { allOn, scenarios } = splitStates(states);
   const allOnCtx = contextFor(design, allOn, index, rules);
-  const base = checkState(allOnCtx, index, undefined);
+  const base = judge(allOnCtx, undefined);
   const nets = new Map<string, NetTable>([[ALL_ON, base.nets]]);
   const lonePins = new Map<string, LoneTable>([[ALL_ON, base.lone]]);
   const injection = new Map<string, readonly Finding[]>([[ALL_ON, injectionFindings(allOnCtx, index, base.nets)]]);
   let checked = base.checked;
   for (const state of scenarios) {
     const ctx = contextFor(design, state, index, rules);
-    const s = checkState(ctx, index, base);
+    const s = judge(ctx, base);
     nets.set(state.id, s.nets);
     lonePins.set(state.id, s.lone);
     injection.set(state.id, injectionFindings(ctx, index, s.nets));
     checked += s.checked;
   }
+  return { allOnCtx, nets, lonePins, injection, checked };
+}
+
+function fullCheck(design: Design, rules: readonly AnyRule[], started: number): CheckResult {
+  const states = powerStates(design);
+  const index = DesignIndex.build(design);
+  const { allOnCtx, nets, lonePins, injection, checked } = judgeStates(design, states, index, rules, (ctx, allOn) => checkState(ctx, index, allOn));
   const railFindings = checkGroups(allOnCtx, index, index.groups.keys(), ChunkedMap.empty());
   const result = makeResult(design, states, { nets, lonePins, railFindings, injection }, { netsChecked: checked, incremental: false, ms: now() - started });
   internals.set(result, { index, rules, consumed: false });
@@ -535,24 +547,13 @@ function incrementalCheck(design: Design, prev: CheckResult, inner: Internals, s
     const lone = prev.lonePins.get(id) as LoneTable | undefined;
     return nets === undefined || lone === undefined ? undefined : { nets, lone, checked: 0 };
   };
-  const { allOn, scenarios } = splitStates(states);
-  const allOnCtx = contextFor(design, allOn, index, rules);
-  const base = recheckState(allOnCtx, index, dirty, previous(ALL_ON)!, undefined);
-  const nets = new Map<string, NetTable>([[ALL_ON, base.nets]]);
-  const lonePins = new Map<string, LoneTable>([[ALL_ON, base.lone]]);
-  const injection = new Map<string, readonly Finding[]>([[ALL_ON, injectionFindings(allOnCtx, index, base.nets)]]);
-  let checked = base.checked;
-  for (const state of scenarios) {
-    const ctx = contextFor(design, state, index, rules);
-    const was = previous(state.id);
-    const s = dirty.states.has(state.id) || was === undefined
-      ? checkState(ctx, index, base)
-      : recheckState(ctx, index, dirty, was, base);
-    nets.set(state.id, s.nets);
-    lonePins.set(state.id, s.lone);
-    injection.set(state.id, injectionFindings(ctx, index, s.nets));
-    checked += s.checked;
-  }
+  const { allOnCtx, nets, lonePins, injection, checked } = judgeStates(design, states, index, rules, (ctx, allOn) => {
+    // all-on always has tables to re-check from; a new or changed scenario is judged whole.
+    const was = previous(ctx.state.id);
+    return allOn !== undefined && (dirty.states.has(ctx.state.id) || was === undefined)
+      ? checkState(ctx, index, allOn)
+      : recheckState(ctx, index, dirty, was!, allOn);
+  });
   const railFindings = checkGroups(allOnCtx, index, dirty.groups, prev.railFindings as LoneTable);
   const result = makeResult(design, states, { nets, lonePins, railFindings, injection }, { netsChecked: checked, incremental: true, ms: now() - started });
   internals.set(result, { index, rules, consumed: false });
