@@ -5,7 +5,7 @@
  * violation on the way.
  */
 import { expect, test } from '@playwright/test';
-import { handle, wire } from './gestures.ts';
+import { handle, uncoveredPoint, wire } from './gestures.ts';
 
 test('a newcomer\'s first minutes', async ({ page }) => {
   const problems: string[] = [];
@@ -63,18 +63,7 @@ test('a newcomer\'s first minutes', async ({ page }) => {
 
   // Hovering the wire shows its worst high margin.
   // A point of the wire that no chip covers (wires pass under chips).
-  const mid = await edge.locator('path.react-flow__edge-path').evaluate((el) => {
-    const path = el as SVGPathElement;
-    const m = path.getScreenCTM()!;
-    const length = path.getTotalLength();
-    for (let k = 1; k < 40; k++) {
-      const p = path.getPointAtLength((length * k) / 40);
-      const x = p.x * m.a + p.y * m.c + m.e;
-      const y = p.x * m.b + p.y * m.d + m.f;
-      if (document.elementFromPoint(x, y)?.closest('.react-flow__edge') === path.closest('.react-flow__edge')) return { x, y };
-    }
-    throw new Error('the wire is covered everywhere');
-  });
+  const mid = await uncoveredPoint(edge);
   await page.mouse.move(mid.x, mid.y);
   await expect(page.locator('.rc-wire-tip [data-margin="high"]')).toHaveText('-0.759 V');
 

@@ -8,6 +8,7 @@
  */
 import { readFileSync } from 'node:fs';
 import { expect, test, type Page } from '@playwright/test';
+import { watch } from './gestures.ts';
 import { check } from '../rules/check/check.ts';
 import { writeDesign } from '../rules/model/writer.ts';
 import { ReportSchema } from '../rules/report/reportSchema.ts';
@@ -15,17 +16,6 @@ import { generateDesign } from '../test/support/generator.ts';
 
 const PARTS = 5000;
 
-function watch(page: Page): string[] {
-  const problems: string[] = [];
-  page.on('console', (m) => {
-    if (m.type() === 'error') problems.push(`console: ${m.text()}`);
-  });
-  page.on('pageerror', (e) => problems.push(`page error: ${e.message}`));
-  void page.addInitScript(() => {
-    document.addEventListener('securitypolicyviolation', (e) => console.error(`CSP violation: ${e.violatedDirective} ${e.blockedURI}`));
-  });
-  return problems;
-}
 
 test('a 5,000-part import keeps the page answering and opens with a choice', async ({ page }) => {
   test.setTimeout(240_000);

@@ -3,7 +3,7 @@
  * wide enough then for the voltage ladder and the rail-crossings table to show whole.
  */
 import { expect, test } from '@playwright/test';
-import { centre } from './gestures.ts';
+import { centre, uncoveredPoint } from './gestures.ts';
 
 test('the side panel widens by its edge, keeps its width, and then shows the ladder and the crossings whole', async ({ page }) => {
   await page.goto('/');
@@ -53,18 +53,7 @@ test('hovering a red wire says why it is red: its worst finding in words', async
   await expect(edge.locator('.rc-wire')).toHaveAttribute('data-severity', 'error');
   await expect(page.locator('.rc-wire[data-routed="no"]')).toHaveCount(0);
   // A point along the wire that nothing else covers.
-  const at = await edge.locator('path.react-flow__edge-path').evaluate((el) => {
-    const path = el as SVGPathElement;
-    const m = path.getScreenCTM()!;
-    const length = path.getTotalLength();
-    for (let k = 1; k < 40; k++) {
-      const p = path.getPointAtLength((length * k) / 40);
-      const x = p.x * m.a + p.y * m.c + m.e;
-      const y = p.x * m.b + p.y * m.d + m.f;
-      if (document.elementFromPoint(x, y)?.closest('.react-flow__edge') === path.closest('.react-flow__edge')) return { x, y };
-    }
-    throw new Error('the wire is covered everywhere');
-  });
+  const at = await uncoveredPoint(edge);
   await page.mouse.move(at.x, at.y);
   // DISP_RX: the 5 V display's output into the 3.3 V controller, beyond what the input may see.
   const worst = page.locator('.rc-wire-tip [data-worst]');

@@ -9,6 +9,7 @@ import { execFileSync } from 'node:child_process';
 import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { expect, test, type Download, type Page } from '@playwright/test';
+import { watch } from './gestures.ts';
 import { readDesign } from '../rules/model/reader.ts';
 import { writeDesign } from '../rules/model/writer.ts';
 import { ReportSchema } from '../rules/report/reportSchema.ts';
@@ -18,18 +19,6 @@ const GOOD = fixture('seed-tray-heater.railcross.json');
 const BAD = fixture('unknown-rail.railcross.json');
 const EXAMPLE_TITLE = 'Greenhouse irrigation controller';
 
-/** Console errors, page errors and CSP violations of a page, to be empty at the end. */
-function watch(page: Page): string[] {
-  const problems: string[] = [];
-  page.on('console', (m) => {
-    if (m.type() === 'error') problems.push(`console: ${m.text()}`);
-  });
-  page.on('pageerror', (e) => problems.push(`page error: ${e.message}`));
-  void page.addInitScript(() => {
-    document.addEventListener('securitypolicyviolation', (e) => console.error(`CSP violation: ${e.violatedDirective} ${e.blockedURI}`));
-  });
-  return problems;
-}
 
 async function start(page: Page): Promise<void> {
   await page.goto('/');

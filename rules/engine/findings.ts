@@ -26,45 +26,45 @@ export function completeFinding<M extends MessageFns>(
   const at = net?.id ?? draft.subject ?? place;
   const id = findingId(rule.id, at, state.id, draft.suffix);
   const bad = undecidablePaths(draft.values, draft.data);
-  if (bad.length > 0) {
-    const where = net === null ? [draft.subject, draft.suffix] : [draft.suffix ?? `net ${net.id}`];
-    const subject = [...new Set(where.filter((w): w is string => w !== undefined && w !== ''))].join(', ');
-    return {
-      id,
-      rule: rule.id,
-      severity: 'error',
-      scenario: state.id,
-      net: net?.id ?? null,
-      place: at,
-      ...(draft.suffix === undefined ? {} : { suffix: draft.suffix }),
-      pins: draft.pins,
-      parts: draft.parts,
-      message: undecidableMessage(rule.meta.title, subject, bad, draft.values, draft.data),
+  const judged = bad.length === 0
+    ? {
+      severity: draft.severity,
+      message: rule.meta.messages[draft.messageId]!(draft.data),
+      messageId: draft.messageId,
+      values: draft.values,
+      hint: draft.hint ?? rule.meta.hint,
+      // A finding that could not be decided is never waived: a waiver accepts a known risk.
+      waived: net === null ? undefined : waiverNote(net, rule.id, state.id),
+    }
+    : {
+      severity: 'error' as const,
+      message: undecidableMessage(rule.meta.title, undecidableSubject(draft, net), bad, draft.values, draft.data),
       messageId: UNDECIDABLE,
       values: { ...finiteOrNull(draft.values), undecidable: bad },
       hint: UNDECIDABLE_HINT,
-    } as Finding; // the one place a finding is made: rule and values come from one typed rule
-  }
-  const message = rule.meta.messages[draft.messageId]!(draft.data);
-  const waived = net === null ? undefined : waiverNote(net, rule.id, state.id);
+      waived: undefined,
+    };
+  const { waived, ...rest } = judged;
   // The one place a finding is made: its rule and values come from one typed rule, which the
   // union of findings by rule cannot see through a generic rule.
   return {
     id,
     rule: rule.id,
-    severity: draft.severity,
     scenario: state.id,
     net: net?.id ?? null,
     place: at,
     ...(draft.suffix === undefined ? {} : { suffix: draft.suffix }),
     pins: draft.pins,
     parts: draft.parts,
-    message,
-    messageId: draft.messageId,
-    values: draft.values,
-    hint: draft.hint ?? rule.meta.hint,
+    ...rest,
     ...(waived === undefined ? {} : { waived }),
   } as Finding;
+}
+
+/** What an undecided finding names in its message: the pin pair or pin, else the net (or the rail). */
+function undecidableSubject<M extends MessageFns>(draft: Draft<M>, net: Net | null): string {
+  const where = net === null ? [draft.subject, draft.suffix] : [draft.suffix ?? `net ${net.id}`];
+  return [...new Set(where.filter((w): w is string => w !== undefined && w !== ''))].join(', ');
 }
 
 /** Whether a finding is of `rule`: narrows it, and so its values, to that rule's. */
