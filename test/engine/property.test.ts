@@ -15,7 +15,8 @@ const RUNS = { numRuns: 150 };
 /** A finding without its waiver mark, to compare two checks finding by finding. */
 const bare = ({ waived: _w, ...f }: Finding) => f;
 
-describe('check() over random valid designs', () => {
+// 150 random designs a test: a second or two alone, many more on a machine shared with other work.
+describe('check() over random valid designs', { timeout: 120_000 }, () => {
   it('never throws, and its summary counts its findings', () => {
     fc.assert(
       fc.property(designArb(), (design) => {

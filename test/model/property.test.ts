@@ -204,7 +204,8 @@ const corruptions: Corruption[] = [
   },
 ];
 
-describe('reader properties', () => {
+// 200 random files a test: generous, so that a busy machine slows it without failing it.
+describe('reader properties', { timeout: 120_000 }, () => {
   it('every corruption kind of the table is named once', () => {
     expect(new Set(corruptions.map((c) => c.name)).size).toBe(corruptions.length);
   });
