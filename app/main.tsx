@@ -11,7 +11,11 @@ import { startSession } from './session/start.ts';
 const element = document.getElementById('root');
 if (element === null) throw new Error('index.html has no #root element');
 const root = createRoot(element);
-root.render(<p className="rc-opening" role="status">Opening your designs…</p>);
+root.render(
+  <p className="rc-opening" role="status">
+    Opening your designs…
+  </p>,
+);
 const session = await startSession();
 // `npm run bench:ui` drives the editor through this hook; without `?bench` its chunk is never loaded.
 if (new URLSearchParams(location.search).has('bench')) (await import('./bench/benchHooks.ts')).exposeForBench(session);

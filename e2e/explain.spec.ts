@@ -9,12 +9,18 @@ import { check } from '../rules/check/check.ts';
 import type { Design } from '../rules/model/schema.ts';
 import { fixesFor } from '../app/store/commands/fixes/index.ts';
 
-const example = JSON.parse(readFileSync(new URL('../rules/examples/greenhouse.json', import.meta.url), 'utf8')) as Design;
+const example = JSON.parse(
+  readFileSync(new URL('../rules/examples/greenhouse.json', import.meta.url), 'utf8'),
+) as Design;
 
-test('the ladder of a crossing net shows the engine\'s margins, and a quick fix clears its finding', async ({ page }) => {
+test("the ladder of a crossing net shows the engine's margins, and a quick fix clears its finding", async ({
+  page,
+}) => {
   const problems: string[] = [];
   page.on('pageerror', (e) => problems.push(e.message));
-  page.on('console', (m) => { if (m.type() === 'error') problems.push(m.text()); });
+  page.on('console', (m) => {
+    if (m.type() === 'error') problems.push(m.text());
+  });
   await page.goto('/');
   await expect(page.locator('.rc-wire[data-net="VALVE_EN"]').first()).toHaveAttribute('data-severity', 'error');
 
@@ -29,9 +35,14 @@ test('the ladder of a crossing net shows the engine\'s margins, and a quick fix 
   // Every margin drawn equals the engine's analysis of the net (computed here, in Node).
   const analysis = check(example).nets.get('all-on')!.get('VALVE_EN')!.view.analysis;
   for (const pair of analysis.pairs) {
-    for (const [kind, side] of [['nmh', pair.high], ['nml', pair.low]] as const) {
+    for (const [kind, side] of [
+      ['nmh', pair.high],
+      ['nml', pair.low],
+    ] as const) {
       if (side === null) continue;
-      const mark = ladder.locator(`[data-kind="${kind}"][data-driver="${pair.driver}"][data-receiver="${pair.receiver}"]`).first();
+      const mark = ladder
+        .locator(`[data-kind="${kind}"][data-driver="${pair.driver}"][data-receiver="${pair.receiver}"]`)
+        .first();
       const drawn = Number(await mark.getAttribute('data-margin'));
       expect(Math.abs(drawn - side.margin)).toBeLessThan(1e-9);
       await expect(mark).toHaveAttribute('data-status', side.status);
@@ -57,12 +68,18 @@ test('the ladder of a crossing net shows the engine\'s margins, and a quick fix 
 
 /** The ids of the unwaived errors listed for the power state on the canvas. */
 async function errorIds(page: Page): Promise<string[]> {
-  return page.locator('li[data-finding-row]:not(.rc-finding-item--waived)').evaluateAll((rows) =>
-    rows.filter((r) => r.querySelector('.rc-finding[data-severity="error"]') !== null).map((r) => r.getAttribute('data-finding-row') ?? ''),
-  );
+  return page
+    .locator('li[data-finding-row]:not(.rc-finding-item--waived)')
+    .evaluateAll((rows) =>
+      rows
+        .filter((r) => r.querySelector('.rc-finding[data-severity="error"]') !== null)
+        .map((r) => r.getAttribute('data-finding-row') ?? ''),
+    );
 }
 
-test('every quick fix offered on the example works from its row: the finding goes, no error comes, undo restores it', async ({ page }) => {
+test('every quick fix offered on the example works from its row: the finding goes, no error comes, undo restores it', async ({
+  page,
+}) => {
   test.setTimeout(180_000);
   const problems: string[] = [];
   page.on('pageerror', (e) => problems.push(e.message));
@@ -71,14 +88,20 @@ test('every quick fix offered on the example works from its row: the finding goe
   let tried = 0;
   for (const state of ['all-on', 'standby', 'reset']) {
     await page.getByTestId('power-state').selectOption(state);
-    const rows = await page.locator('li[data-finding-row]').evaluateAll((els) =>
-      els.filter((e) => e.querySelector('[data-testid="fix-open"]') !== null).map((e) => e.getAttribute('data-finding-row') ?? ''),
-    );
+    const rows = await page
+      .locator('li[data-finding-row]')
+      .evaluateAll((els) =>
+        els
+          .filter((e) => e.querySelector('[data-testid="fix-open"]') !== null)
+          .map((e) => e.getAttribute('data-finding-row') ?? ''),
+      );
     expect(rows.length, `rows with a fix in ${state}`).toBeGreaterThan(0);
     for (const id of rows) {
       const row = page.locator(`li[data-finding-row="${id}"]`);
       await row.getByTestId('fix-open').click();
-      const fixes = await row.locator('[data-fix]').evaluateAll((els) => els.map((e) => e.getAttribute('data-fix') ?? ''));
+      const fixes = await row
+        .locator('[data-fix]')
+        .evaluateAll((els) => els.map((e) => e.getAttribute('data-fix') ?? ''));
       // A rule with remedies may have none for this case (two push-pull outputs on one net): it says so.
       if (fixes.length === 0) await expect(row).toContainText('No quick fix applies');
       for (const fixId of fixes) {
@@ -89,7 +112,10 @@ test('every quick fix offered on the example works from its row: the finding goe
         await fix.getByTestId('fix-apply').click();
         await expect(row, `${fixId} on ${id}`).toHaveCount(0);
         const after = await errorIds(page);
-        expect(after.filter((e) => !before.includes(e)), `errors brought by ${fixId} on ${id}`).toEqual([]);
+        expect(
+          after.filter((e) => !before.includes(e)),
+          `errors brought by ${fixId} on ${id}`,
+        ).toEqual([]);
         await page.keyboard.press('Control+z');
         await expect(row, `undo of ${fixId} on ${id}`).toHaveCount(1);
         expect(await errorIds(page)).toEqual(before);

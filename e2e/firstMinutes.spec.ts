@@ -7,7 +7,7 @@
 import { expect, test } from '@playwright/test';
 import { handle, uncoveredPoint, wire } from './gestures.ts';
 
-test('a newcomer\'s first minutes', async ({ page }) => {
+test("a newcomer's first minutes", async ({ page }) => {
   const problems: string[] = [];
   page.on('console', (m) => {
     if (m.type() === 'error') problems.push(`console: ${m.text()}`);
@@ -120,7 +120,9 @@ test('the keyboard: Delete a wire, undo, redo; New design is one step too', asyn
   await expect(page.locator('.react-flow__node')).toHaveCount(0);
   await expect(page.getByTestId('design-title')).toHaveValue('Untitled design');
   await page.getByTestId('open-library').click();
-  await expect(page.locator('[data-testid="library-row"][data-title="Greenhouse irrigation controller"]')).toHaveCount(1);
+  await expect(page.locator('[data-testid="library-row"][data-title="Greenhouse irrigation controller"]')).toHaveCount(
+    1,
+  );
 });
 
 test('numeric fields take engineering notation and refuse anything else', async ({ page }) => {

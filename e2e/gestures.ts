@@ -41,7 +41,9 @@ export function watch(page: Page): string[] {
   });
   page.on('pageerror', (e) => problems.push(`page error: ${e.message}`));
   void page.addInitScript(() => {
-    document.addEventListener('securitypolicyviolation', (e) => console.error(`CSP violation: ${e.violatedDirective} ${e.blockedURI}`));
+    document.addEventListener('securitypolicyviolation', (e) =>
+      console.error(`CSP violation: ${e.violatedDirective} ${e.blockedURI}`),
+    );
   });
   return problems;
 }
@@ -56,7 +58,8 @@ export async function uncoveredPoint(edge: Locator): Promise<{ x: number; y: num
       const p = path.getPointAtLength((length * k) / 40);
       const x = p.x * m.a + p.y * m.c + m.e;
       const y = p.x * m.b + p.y * m.d + m.f;
-      if (document.elementFromPoint(x, y)?.closest('.react-flow__edge') === path.closest('.react-flow__edge')) return { x, y };
+      if (document.elementFromPoint(x, y)?.closest('.react-flow__edge') === path.closest('.react-flow__edge'))
+        return { x, y };
     }
     throw new Error('the wire is covered everywhere');
   });

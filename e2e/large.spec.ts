@@ -7,7 +7,7 @@
  * allowed by the page's policy).
  */
 import { readFileSync } from 'node:fs';
-import { expect, test, type Page } from '@playwright/test';
+import { expect, test } from '@playwright/test';
 import { watch } from './gestures.ts';
 import { check } from '../rules/check/check.ts';
 import { writeDesign } from '../rules/model/writer.ts';
@@ -15,7 +15,6 @@ import { ReportSchema } from '../rules/report/reportSchema.ts';
 import { generateDesign } from '../test/support/generator.ts';
 
 const PARTS = 5000;
-
 
 test('a 5,000-part import keeps the page answering and opens with a choice', async ({ page }) => {
   test.setTimeout(240_000);
@@ -27,7 +26,11 @@ test('a 5,000-part import keeps the page answering and opens with a choice', asy
   const before = await page.getByTestId('design-title').inputValue();
 
   await page.getByTestId('open-library').click();
-  await page.getByTestId('import-file').setInputFiles({ name: 'big-board.railcross.json', mimeType: 'application/json', buffer: Buffer.from(writeDesign(design)) });
+  await page.getByTestId('import-file').setInputFiles({
+    name: 'big-board.railcross.json',
+    mimeType: 'application/json',
+    buffer: Buffer.from(writeDesign(design)),
+  });
   // While the worker reads and checks it, the page answers: the Export menu opens and closes.
   const task = page.getByTestId('task');
   await expect(task).toContainText(/Reading|Checking/);
@@ -47,7 +50,9 @@ test('a 5,000-part import keeps the page answering and opens with a choice', asy
 
   await page.getByTestId('large-report').click();
   await expect(page.getByTestId('large-report-ready')).toBeVisible({ timeout: 120_000 });
-  await expect(page.getByTestId('large-report-ready').locator('[data-count="error"]')).toHaveText(`${summary.error.toLocaleString('en')} error${summary.error === 1 ? '' : 's'}`);
+  await expect(page.getByTestId('large-report-ready').locator('[data-count="error"]')).toHaveText(
+    `${summary.error.toLocaleString('en')} error${summary.error === 1 ? '' : 's'}`,
+  );
   const download = page.waitForEvent('download');
   await page.getByTestId('large-download').click();
   const report = JSON.parse(readFileSync(await (await download).path(), 'utf8')) as unknown;

@@ -5,7 +5,9 @@
 import { expect, test } from '@playwright/test';
 import { centre, uncoveredPoint } from './gestures.ts';
 
-test('the side panel widens by its edge, keeps its width, and then shows the ladder and the crossings whole', async ({ page }) => {
+test('the side panel widens by its edge, keeps its width, and then shows the ladder and the crossings whole', async ({
+  page,
+}) => {
   await page.goto('/');
   await expect(page.locator('.rc-wire[data-net="VALVE_EN"]').first()).toBeVisible();
   const side = page.locator('.rc-side');
@@ -62,7 +64,9 @@ test('hovering a red wire says why it is red: its worst finding in words', async
   await expect(worst).toContainText('DISP_RX');
 });
 
-test('at the default width, the crossings table scrolls inside its frame rather than running out of the panel', async ({ page }) => {
+test('at the default width, the crossings table scrolls inside its frame rather than running out of the panel', async ({
+  page,
+}) => {
   await page.goto('/');
   await page.getByTestId('tab-crossings').click();
   const table = page.getByTestId('crossings');
@@ -72,7 +76,16 @@ test('at the default width, the crossings table scrolls inside its frame rather 
     const side = t.closest('.rc-side') as HTMLElement;
     const f = frame.getBoundingClientRect();
     const s = side.getBoundingClientRect();
-    return { frameRight: f.right, sideRight: s.right, frameLeft: f.left, sideLeft: s.left, scroll: frame.scrollWidth, client: frame.clientWidth, table: t.getBoundingClientRect().width, overflowX: getComputedStyle(frame).overflowX };
+    return {
+      frameRight: f.right,
+      sideRight: s.right,
+      frameLeft: f.left,
+      sideLeft: s.left,
+      scroll: frame.scrollWidth,
+      client: frame.clientWidth,
+      table: t.getBoundingClientRect().width,
+      overflowX: getComputedStyle(frame).overflowX,
+    };
   });
   // The frame stays inside the panel; a table wider than the frame scrolls within it.
   expect(m.frameLeft).toBeGreaterThanOrEqual(m.sideLeft - 1);

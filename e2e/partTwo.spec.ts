@@ -14,7 +14,7 @@ async function onCanvas(page: Page, key: string): Promise<void> {
   await page.keyboard.press(key);
 }
 
-test('a chip from the pin table, with one pin\'s VIH overridden, judged by the override', async ({ page }) => {
+test("a chip from the pin table, with one pin's VIH overridden, judged by the override", async ({ page }) => {
   await page.goto('/');
   await expect(page.locator('.rc-wire').first()).toBeVisible();
 
@@ -25,7 +25,11 @@ test('a chip from the pin table, with one pin\'s VIH overridden, judged by the o
   await dialog.getByTestId('chip-label').fill('Valve gate of our own');
   await dialog.getByTestId('chip-rail').selectOption('5v0');
   await dialog.getByTestId('chip-profile').selectOption('74hc');
-  for (const [k, id, role] of [[0, 'A', 'input'], [1, 'B', 'input'], [2, 'Y', 'output']] as const) {
+  for (const [k, id, role] of [
+    [0, 'A', 'input'],
+    [1, 'B', 'input'],
+    [2, 'Y', 'output'],
+  ] as const) {
     await dialog.getByTestId('pin-add').click();
     await dialog.getByTestId(`pin-${k}-id`).fill(id);
     await dialog.getByTestId(`pin-${k}-role`).selectOption(role);
@@ -55,14 +59,19 @@ test('a chip from the pin table, with one pin\'s VIH overridden, judged by the o
   await expect(page.locator(`.rc-finding[data-net="${net}"][data-rule="level-high"]`)).toHaveCount(0);
 
   // X1.B is on no net: its finding says it cannot be waived (a waiver belongs to a net in version 1).
-  const lone = page.locator('li', { has: page.locator('.rc-finding[data-net=""][data-rule="floating-input"]', { hasText: 'X1.B' }) });
+  const lone = page.locator('li', {
+    has: page.locator('.rc-finding[data-net=""][data-rule="floating-input"]', { hasText: 'X1.B' }),
+  });
   await expect(lone).toContainText('cannot be waived');
   await expect(lone.getByTestId('waive')).toHaveCount(0);
 
   // The details panel says where A's VIH comes from.
   await page.locator('[data-part="X1"] .rc-chip-head').click();
   await page.getByTestId('pin-toggle-A').click();
-  await expect(page.locator('[data-testid="pin-effective-A"] tr[data-param="vih"]')).toHaveAttribute('data-origin', 'pin');
+  await expect(page.locator('[data-testid="pin-effective-A"] tr[data-param="vih"]')).toHaveAttribute(
+    'data-origin',
+    'pin',
+  );
   await expect(page.getByTestId('part-profile-source')).toContainText('JESD7');
 
   // Edit the chip: A's VIH at 0.8·VDD is 4.2 V at 5.25 V, above what the gate can give: the high level fails.
@@ -120,7 +129,9 @@ test('copy and paste of two connected chips brings the net between them, not the
   await expect(page.locator('.react-flow__node.selected')).toHaveCount(2);
   const at = await page.locator('.react-flow__node[data-id="U8"]').boundingBox();
   await page.keyboard.press('ArrowRight');
-  await expect.poll(async () => (await page.locator('.react-flow__node[data-id="U8"]').boundingBox())?.x ?? 0).toBeGreaterThan((at?.x ?? 0) + 1);
+  await expect
+    .poll(async () => (await page.locator('.react-flow__node[data-id="U8"]').boundingBox())?.x ?? 0)
+    .toBeGreaterThan((at?.x ?? 0) + 1);
   await page.keyboard.press('Control+z');
   await page.keyboard.press('Control+z');
   await expect(nodes).toHaveCount(before);
@@ -138,15 +149,22 @@ test('the shortcut list opens with "?" and says what the keys do', async ({ page
   await expect(list).toHaveCount(0);
 });
 
-test('every chip is drawn exactly at the size its node is given (the canvas contains each chip strictly)', async ({ page }) => {
+test('every chip is drawn exactly at the size its node is given (the canvas contains each chip strictly)', async ({
+  page,
+}) => {
   await page.goto('/');
   await expect(page.locator('.rc-wire').first()).toBeVisible();
   const sizes = await page.locator('.react-flow__node').evaluateAll((nodes) =>
     nodes.map((n) => {
       const chip = n.firstElementChild as HTMLElement;
       // The chip's margin (6 px each side, styles.css) holds the outer half of each handle.
-      return { id: n.getAttribute('data-id'), node: [(n as HTMLElement).offsetWidth, (n as HTMLElement).offsetHeight], chip: [chip.offsetWidth + 12, chip.offsetHeight + 12] };
-    }));
+      return {
+        id: n.getAttribute('data-id'),
+        node: [(n as HTMLElement).offsetWidth, (n as HTMLElement).offsetHeight],
+        chip: [chip.offsetWidth + 12, chip.offsetHeight + 12],
+      };
+    }),
+  );
   expect(sizes.length).toBeGreaterThan(5);
   for (const s of sizes) expect({ id: s.id, size: s.chip }).toEqual({ id: s.id, size: s.node });
 });
@@ -160,11 +178,15 @@ test('Shift+drag on the canvas selects the chips inside the box; Delete removes 
   await page.keyboard.down('Shift');
   await page.mouse.move(Math.min(a.x, b.x) - 8, Math.min(a.y, b.y) - 8);
   await page.mouse.down();
-  await page.mouse.move(Math.max(a.x + a.width, b.x + b.width) + 8, Math.max(a.y + a.height, b.y + b.height) + 8, { steps: 10 });
+  await page.mouse.move(Math.max(a.x + a.width, b.x + b.width) + 8, Math.max(a.y + a.height, b.y + b.height) + 8, {
+    steps: 10,
+  });
   await page.mouse.up();
   await page.keyboard.up('Shift');
   await expect(page.locator('.react-flow__node.selected')).toHaveCount(2);
-  const ids = await page.locator('.react-flow__node.selected').evaluateAll((ns) => ns.map((n) => n.getAttribute('data-id')).sort());
+  const ids = await page
+    .locator('.react-flow__node.selected')
+    .evaluateAll((ns) => ns.map((n) => n.getAttribute('data-id')).sort());
   expect(ids).toEqual(['U6', 'U7']);
   await page.keyboard.press('Delete');
   await expect(page.locator('.react-flow__node[data-id="U6"]')).toHaveCount(0);
@@ -178,14 +200,29 @@ test('a rule with many findings lists the first 60 and shows the rest on request
   // A test bench of our own: 75 spare gates whose enable inputs are left on no net, each one a
   // floating-input warning (an unused CMOS input floats: common practice).
   const parts = Array.from({ length: 75 }, (_, k) => ({
-    id: `G${k + 1}`, label: `Spare gate ${k + 1}`, rail: '3v3', profile: '74lvc',
-    position: { x: (k % 15) * 240, y: Math.floor(k / 15) * 140 }, pins: [{ id: 'EN', role: 'input', side: 'left' }],
+    id: `G${k + 1}`,
+    label: `Spare gate ${k + 1}`,
+    rail: '3v3',
+    profile: '74lvc',
+    position: { x: (k % 15) * 240, y: Math.floor(k / 15) * 140 },
+    pins: [{ id: 'EN', role: 'input', side: 'left' }],
   }));
-  const design = { format: 'railcross.design', version: 1, title: 'Spare gate bench', rails: [{ id: '3v3', label: '3.3 V', nominal: 3.3, tolerance: 0.05 }], parts, nets: [] };
+  const design = {
+    format: 'railcross.design',
+    version: 1,
+    title: 'Spare gate bench',
+    rails: [{ id: '3v3', label: '3.3 V', nominal: 3.3, tolerance: 0.05 }],
+    parts,
+    nets: [],
+  };
   await page.goto('/');
   await expect(page.locator('.react-flow__node').first()).toBeVisible();
   await page.getByTestId('open-library').click();
-  await page.getByTestId('import-file').setInputFiles({ name: 'spare-gates.railcross.json', mimeType: 'application/json', buffer: Buffer.from(JSON.stringify(design)) });
+  await page.getByTestId('import-file').setInputFiles({
+    name: 'spare-gates.railcross.json',
+    mimeType: 'application/json',
+    buffer: Buffer.from(JSON.stringify(design)),
+  });
   await expect(page.getByTestId('design-title')).toHaveValue('Spare gate bench');
 
   const rows = page.locator('.rc-finding[data-rule="floating-input"]');
@@ -196,15 +233,16 @@ test('a rule with many findings lists the first 60 and shows the rest on request
   await expect(page.getByTestId('more-floating-input')).toHaveCount(0);
 });
 
-test('the details panel fits its column: rails, power states and a part\'s fields stay inside it', async ({ page }) => {
+test("the details panel fits its column: rails, power states and a part's fields stay inside it", async ({ page }) => {
   await page.goto('/');
   await expect(page.locator('.react-flow__node').first()).toBeVisible();
-  const outside = () => page.locator('.rc-details').evaluate((panel) => {
-    const edge = panel.getBoundingClientRect().right + 0.5;
-    return [...panel.querySelectorAll('input, select, button, table')]
-      .filter((e) => e.getBoundingClientRect().width > 0 && e.getBoundingClientRect().right > edge)
-      .map((e) => e.outerHTML.slice(0, 60));
-  });
+  const outside = () =>
+    page.locator('.rc-details').evaluate((panel) => {
+      const edge = panel.getBoundingClientRect().right + 0.5;
+      return [...panel.querySelectorAll('input, select, button, table')]
+        .filter((e) => e.getBoundingClientRect().width > 0 && e.getBoundingClientRect().right > edge)
+        .map((e) => e.outerHTML.slice(0, 60));
+    });
   await page.getByText('Rails', { exact: true }).click();
   await page.getByText('Power states', { exact: true }).click();
   await expect(page.locator('.rc-rail-row').first()).toBeVisible();

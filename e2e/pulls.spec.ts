@@ -5,7 +5,7 @@
  */
 import { expect, test } from '@playwright/test';
 
-test('pulls drawn with their values; a pin\'s tooltip says its pull, rail and profile', async ({ page }) => {
+test("pulls drawn with their values; a pin's tooltip says its pull, rail and profile", async ({ page }) => {
   await page.goto('/');
   await expect(page.locator('[data-net-label="SDA"] [data-pull]')).toHaveText('↑4K7 3.3 V');
   await expect(page.locator('[data-net-label="SCL"] [data-pull]')).toHaveText('↑4K7 3.3 V');
@@ -16,5 +16,7 @@ test('pulls drawn with their values; a pin\'s tooltip says its pull, rail and pr
   expect(tip).toContain('rail 3.3 V controller I/O (3v3)');
   expect(tip).toMatch(/profile mcu-gpio/);
   // A pin without a pull of its own says so, rather than leaving it unsaid.
-  expect(await page.locator('.react-flow__node[data-id="U1"] [data-pin="VALVE_EN"]').getAttribute('title')).toContain('no pull of its own');
+  expect(await page.locator('.react-flow__node[data-id="U1"] [data-pin="VALVE_EN"]').getAttribute('title')).toContain(
+    'no pull of its own',
+  );
 });

@@ -7,7 +7,9 @@
 import { expect, test } from '@playwright/test';
 
 const railOf = (page: import('@playwright/test').Page, part: string) =>
-  page.locator(`.rc-chip[data-part="${part}"]`).evaluate((el) => getComputedStyle(el).getPropertyValue('--rail').trim());
+  page
+    .locator(`.rc-chip[data-part="${part}"]`)
+    .evaluate((el) => getComputedStyle(el).getPropertyValue('--rail').trim());
 
 test('a rail colour picked in the editor colours the chips on that rail', async ({ page }) => {
   const problems: string[] = [];
@@ -16,7 +18,9 @@ test('a rail colour picked in the editor colours the chips on that rail', async 
   });
   page.on('pageerror', (e) => problems.push(`page error: ${e.message}`));
   await page.addInitScript(() => {
-    document.addEventListener('securitypolicyviolation', (e) => console.error(`CSP violation: ${e.violatedDirective} ${e.blockedURI}`));
+    document.addEventListener('securitypolicyviolation', (e) =>
+      console.error(`CSP violation: ${e.violatedDirective} ${e.blockedURI}`),
+    );
   });
   await page.goto('/');
   // The example: U3 sits on the 5 V rail, coloured #c2410c in rules/examples/greenhouse.json.

@@ -21,7 +21,9 @@ function watch(page: Page): { problems: string[]; dialogs: string[] } {
     void d.accept();
   });
   void page.addInitScript(() => {
-    document.addEventListener('securitypolicyviolation', (e) => console.error(`CSP violation: ${e.violatedDirective} ${e.blockedURI}`));
+    document.addEventListener('securitypolicyviolation', (e) =>
+      console.error(`CSP violation: ${e.violatedDirective} ${e.blockedURI}`),
+    );
   });
   return { problems, dialogs };
 }

@@ -28,7 +28,13 @@ async function drawing(page: Page): Promise<Drawing> {
     const chips = [...document.querySelectorAll<HTMLElement>('.react-flow__node')].map((n) => {
       const m = /translate\((-?[\d.]+)px, (-?[\d.]+)px\)/.exec(n.style.transform);
       const chip = n.querySelector<HTMLElement>('.rc-chip, .rc-discrete')!;
-      return { id: n.dataset.id ?? '', x: Number(m?.[1]) + chip.offsetLeft, y: Number(m?.[2]) + chip.offsetTop, width: chip.offsetWidth, height: chip.offsetHeight };
+      return {
+        id: n.dataset.id ?? '',
+        x: Number(m?.[1]) + chip.offsetLeft,
+        y: Number(m?.[2]) + chip.offsetTop,
+        width: chip.offsetWidth,
+        height: chip.offsetHeight,
+      };
     });
     return { wires, chips, junctions: document.querySelectorAll('.rc-junction').length };
   });
@@ -38,7 +44,9 @@ async function drawing(page: Page): Promise<Drawing> {
 }
 
 function judge(d: Drawing) {
-  const shared = sharedTracks(d.wires, WIRE_WIDTH).map((s) => `${s.nets.join(' / ')}: ${Math.round(s.length)} px at ${Math.round(s.at.x)},${Math.round(s.at.y)}`);
+  const shared = sharedTracks(d.wires, WIRE_WIDTH).map(
+    (s) => `${s.nets.join(' / ')}: ${Math.round(s.length)} px at ${Math.round(s.at.x)},${Math.round(s.at.y)}`,
+  );
   const through = bodyCrossings(d.wires, d.chips).map((c) => `${c.net} through ${c.part}: ${Math.round(c.length)} px`);
   return { shared, through };
 }
@@ -66,7 +74,9 @@ test('a generated 200-part board: no shared track, no wire through a chip', asyn
   await page.goto('/?bench');
   await expect.poll(() => page.evaluate(() => '__railcrossBench' in window)).toBe(true);
   await page.evaluate(async (json) => {
-    const bench = (window as unknown as { __railcrossBench: { session: { createAndOpen(d: unknown): Promise<unknown> } } }).__railcrossBench;
+    const bench = (
+      window as unknown as { __railcrossBench: { session: { createAndOpen(d: unknown): Promise<unknown> } } }
+    ).__railcrossBench;
     await bench.session.createAndOpen(JSON.parse(json));
   }, JSON.stringify(design));
   await expect(page.locator('.react-flow__node')).toHaveCount(200, { timeout: 30_000 });
@@ -81,7 +91,12 @@ test('a generated 200-part board: no shared track, no wire through a chip', asyn
 test('Tidy layout arranges the example by signal flow, routes it clean, and is one undo step', async ({ page }) => {
   await page.goto('/');
   await expect(page.locator('.rc-wire[data-net="VALVE_EN"]').first()).toBeVisible();
-  const where = () => page.evaluate(() => [...document.querySelectorAll<HTMLElement>('.react-flow__node')].map((n) => `${n.dataset.id}@${n.style.transform}`).sort());
+  const where = () =>
+    page.evaluate(() =>
+      [...document.querySelectorAll<HTMLElement>('.react-flow__node')]
+        .map((n) => `${n.dataset.id}@${n.style.transform}`)
+        .sort(),
+    );
   const before = await where();
   await page.getByTestId('tidy-layout').click();
   await expect.poll(where).not.toEqual(before);

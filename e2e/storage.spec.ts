@@ -19,7 +19,6 @@ const GOOD = fixture('seed-tray-heater.railcross.json');
 const BAD = fixture('unknown-rail.railcross.json');
 const EXAMPLE_TITLE = 'Greenhouse irrigation controller';
 
-
 async function start(page: Page): Promise<void> {
   await page.goto('/');
   await expect(page.locator('.react-flow__node').first()).toBeVisible();
@@ -66,7 +65,9 @@ test('an edit survives a reload, and the library lists it with its counts', asyn
   expect(problems).toEqual([]);
 });
 
-test('a refused file names the place and leaves the library as it was; a good one becomes a new design', async ({ page }) => {
+test('a refused file names the place and leaves the library as it was; a good one becomes a new design', async ({
+  page,
+}) => {
   const problems = watch(page);
   await start(page);
   await openLibrary(page);
@@ -85,7 +86,9 @@ test('a refused file names the place and leaves the library as it was; a good on
   await expect(page.locator('.react-flow__node')).toHaveCount(2);
   await openLibrary(page);
   await expect(rows(page)).toHaveCount(2);
-  await expect(page.locator('[data-testid="library-row"][data-title="Greenhouse irrigation controller"]')).toHaveCount(1);
+  await expect(page.locator('[data-testid="library-row"][data-title="Greenhouse irrigation controller"]')).toHaveCount(
+    1,
+  );
   expect(problems).toEqual([]);
 });
 
@@ -182,7 +185,9 @@ test('Export: the JSON report holds to the report schema and carries the finding
   expect(parsed.success).toBe(true);
   const report = parsed.success ? parsed.data : undefined;
   expect(report?.design.title).toBe(EXAMPLE_TITLE);
-  expect(report?.findings.some((f) => f.rule === 'level-high' && f.net === 'VALVE_EN' && f.severity === 'error')).toBe(true);
+  expect(report?.findings.some((f) => f.rule === 'level-high' && f.net === 'VALVE_EN' && f.severity === 'error')).toBe(
+    true,
+  );
   expect(problems).toEqual([]);
 });
 
@@ -204,7 +209,7 @@ test('Export: the PDF report shows its progress and holds the findings', async (
   // The progress indication may be brief: note whether it ever appeared.
   await page.evaluate(() => {
     const seen = new MutationObserver(() => {
-      if (document.querySelector('[data-testid="task"]') !== null) document.documentElement.dataset['sawTask'] = 'yes';
+      if (document.querySelector('[data-testid="task"]') !== null) document.documentElement.dataset.sawTask = 'yes';
     });
     seen.observe(document.body, { childList: true, subtree: true });
   });

@@ -1,4 +1,4 @@
-// `npm test`: the type checks, every vitest test, then (when e2e/ has specs) the Playwright
+// `npm test`: the type checks, the linter and formatter (Biome), every vitest test, then (when e2e/ has specs) the Playwright
 // specs; it ends with one plain "N passed, N failed" line so that a run that executed no
 // test is visible at a glance (neither runner prints such a line itself).
 import { spawnSync } from 'node:child_process';
@@ -19,14 +19,18 @@ function run(label, cmd, args) {
 }
 
 function readCounts(file) {
-  if (!existsSync(file)) { broken = true; return; }
+  if (!existsSync(file)) {
+    broken = true;
+    return;
+  }
   const j = JSON.parse(readFileSync(file, 'utf8'));
   passed += j.numPassedTests ?? j.stats?.expected ?? 0;
-  failed += j.numFailedTests ?? ((j.stats?.unexpected ?? 0) + (j.stats?.flaky ?? 0));
+  failed += j.numFailedTests ?? (j.stats?.unexpected ?? 0) + (j.stats?.flaky ?? 0);
 }
 
 run('typecheck', 'npx', ['tsc', '-p', 'tsconfig.json', '--noEmit']);
 run('typecheck rules/ (no DOM)', 'npx', ['tsc', '-p', 'rules/tsconfig.json', '--noEmit']);
+run('lint and format (Biome, biome.jsonc)', 'npx', ['biome', 'ci', '.']);
 
 const unitJson = join(out, 'vitest.json');
 run('vitest', 'npx', ['vitest', 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${unitJson}`]);

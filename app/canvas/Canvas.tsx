@@ -6,14 +6,29 @@ import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState, typ
 import { useStore } from 'zustand';
 import { createStore } from 'zustand/vanilla';
 import {
-  Background, BackgroundVariant, ConnectionMode, Controls, Panel, ReactFlow, useReactFlow,
-  type Connection, type EdgeChange, type FinalConnectionState, type IsValidConnection, type NodeChange,
+  Background,
+  BackgroundVariant,
+  ConnectionMode,
+  Controls,
+  Panel,
+  ReactFlow,
+  useReactFlow,
+  type Connection,
+  type EdgeChange,
+  type FinalConnectionState,
+  type IsValidConnection,
+  type NodeChange,
 } from '@xyflow/react';
 import { connectPins, moveParts, parseWireId, tidyLayout, type Move } from '../store/commands/index.ts';
 import { useEditor, useEditorStore } from '../store/EditorProvider.tsx';
 import type { XY } from '../store/editorStore.ts';
 import { ChipNode } from './ChipNode.tsx';
-import { createFlowDeriver, type ChipNode as ChipNodeType, type DiscreteNode as DiscreteNodeType, type WireEdge as WireEdgeType } from './deriveFlow.ts';
+import {
+  createFlowDeriver,
+  type ChipNode as ChipNodeType,
+  type DiscreteNode as DiscreteNodeType,
+  type WireEdge as WireEdgeType,
+} from './deriveFlow.ts';
 import { DiscreteNode } from './DiscreteNode.tsx';
 import { Legend } from './Legend.tsx';
 import { LARGE_DESIGN_PARTS } from '../check/limits.ts';
@@ -46,12 +61,20 @@ function sameKeys(set: ReadonlySet<string> | null, map: ReadonlyMap<string, unkn
 }
 
 /** Where a large design's view starts: at its top-left chip, at a readable size. */
-function largeViewport(parts: readonly { readonly position?: { readonly x: number; readonly y: number } | undefined }[]): { x: number; y: number; zoom: number } {
+function largeViewport(
+  parts: readonly { readonly position?: { readonly x: number; readonly y: number } | undefined }[],
+): { x: number; y: number; zoom: number } {
   const zoom = 0.8;
   let corner: { x: number; y: number } | undefined;
   for (const p of parts) {
     const at = p.position;
-    if (at !== undefined && Number.isFinite(at.x) && Number.isFinite(at.y) && (corner === undefined || at.x + at.y < corner.x + corner.y)) corner = at;
+    if (
+      at !== undefined &&
+      Number.isFinite(at.x) &&
+      Number.isFinite(at.y) &&
+      (corner === undefined || at.x + at.y < corner.x + corner.y)
+    )
+      corner = at;
   }
   return { x: 24 - (corner?.x ?? 0) * zoom, y: 24 - (corner?.y ?? 0) * zoom, zoom };
 }
@@ -62,10 +85,18 @@ function TidyButton() {
   const flow = useReactFlow();
   const empty = useEditor((s) => s.design.parts.length === 0);
   return (
-    <button type="button" className="rc-tidy-btn" disabled={empty} data-testid="tidy-layout" title="Arrange the chips by signal flow, left to right (one undo step)"
+    <button
+      type="button"
+      className="rc-tidy-btn"
+      disabled={empty}
+      data-testid="tidy-layout"
+      title="Arrange the chips by signal flow, left to right (one undo step)"
       onClick={() => {
         if (store.getState().apply(tidyLayout()).ok) requestAnimationFrame(() => void flow.fitView(fitViewOptions));
-      }}>Tidy layout</button>
+      }}
+    >
+      Tidy layout
+    </button>
   );
 }
 
@@ -85,17 +116,29 @@ export function Canvas() {
   const dragStore = useRef(createStore<DragState>(() => ({ drag: null, moving: null }))).current;
   const drag = useStore(dragStore, (s) => s.drag);
   const moving = useStore(dragStore, (s) => s.moving);
-  const setDrag = useCallback((next: (was: ReadonlyMap<string, XY> | null) => ReadonlyMap<string, XY> | null) => {
-    const was = dragStore.getState();
-    const drag = next(was.drag);
-    dragStore.setState({ drag, moving: drag === null ? null : sameKeys(was.moving, drag) ? was.moving : new Set(drag.keys()) });
-  }, [dragStore]);
+  const setDrag = useCallback(
+    (next: (was: ReadonlyMap<string, XY> | null) => ReadonlyMap<string, XY> | null) => {
+      const was = dragStore.getState();
+      const drag = next(was.drag);
+      dragStore.setState({
+        drag,
+        moving: drag === null ? null : sameKeys(was.moving, drag) ? was.moving : new Set(drag.keys()),
+      });
+    },
+    [dragStore],
+  );
   const deriver = useRef(createFlowDeriver()).current;
   const chipNodes = useMemo(() => deriver.nodes(parts, selectedParts, drag), [deriver, parts, selectedParts, drag]);
-  const discreteNodes = useMemo(() => deriver.discretes(discreteParts, selectedParts, drag), [deriver, discreteParts, selectedParts, drag]);
+  const discreteNodes = useMemo(
+    () => deriver.discretes(discreteParts, selectedParts, drag),
+    [deriver, discreteParts, selectedParts, drag],
+  );
   // Most designs have no parts between chips: then the chips' own array, unchanged. Parts
   // between chips come first (drawn beneath), so that the chips keep their order, the newest last.
-  const nodes = useMemo<AnyNode[]>(() => (discreteNodes.length === 0 ? chipNodes : [...discreteNodes, ...chipNodes]), [chipNodes, discreteNodes]);
+  const nodes = useMemo<AnyNode[]>(
+    () => (discreteNodes.length === 0 ? chipNodes : [...discreteNodes, ...chipNodes]),
+    [chipNodes, discreteNodes],
+  );
   const edges = useMemo(() => deriver.edges(nets, selectedWires, moving), [deriver, nets, selectedWires, moving]);
   // Wires routed around chips from the design (not from a drag); each wire reads its own route.
   const keeper = useRef<RouteKeeper | null>(null);
@@ -106,65 +149,87 @@ export function Canvas() {
   const place = usePlacePart();
   useCanvasKeys();
 
-  const onNodesChange = useCallback((changes: NodeChange<AnyNode>[]) => {
-    const s = store.getState();
-    let dragging: Map<string, XY> | undefined;
-    const moves: Move[] = [];
-    let selected: Set<string> | undefined;
-    for (const c of changes) {
-      if (c.type === 'dimensions' && c.dimensions !== undefined) deriver.measured.set(c.id, c.dimensions);
-      else if (c.type === 'position' && c.position !== undefined) {
-        if (c.dragging === true) (dragging ??= new Map()).set(c.id, c.position);
-        else moves.push({ id: c.id, ...c.position });
-      } else if (c.type === 'select') {
-        selected ??= new Set(s.selection.parts);
-        if (c.selected) selected.add(c.id);
-        else selected.delete(c.id);
+  const onNodesChange = useCallback(
+    (changes: NodeChange<AnyNode>[]) => {
+      const s = store.getState();
+      let dragging: Map<string, XY> | undefined;
+      const moves: Move[] = [];
+      let selected: Set<string> | undefined;
+      for (const c of changes) {
+        if (c.type === 'dimensions' && c.dimensions !== undefined) deriver.measured.set(c.id, c.dimensions);
+        else if (c.type === 'position' && c.position !== undefined) {
+          if (c.dragging === true) (dragging ??= new Map()).set(c.id, c.position);
+          else moves.push({ id: c.id, ...c.position });
+        } else if (c.type === 'select') {
+          selected ??= new Set(s.selection.parts);
+          if (c.selected) selected.add(c.id);
+          else selected.delete(c.id);
+        }
       }
-    }
-    if (dragging !== undefined) {
-      const step = dragging;
-      setDrag((was) => new Map([...(was ?? []), ...step]));
-    }
-    // The end of a drag is the one step that goes on the undo stack.
-    if (moves.length > 0) {
-      s.apply(moveParts(moves));
-      setDrag(() => null);
-    }
-    if (selected !== undefined) s.select({ parts: [...selected], ...(selected.size > 0 ? { net: null } : {}) });
-  }, [store, deriver, setDrag]);
+      if (dragging !== undefined) {
+        const step = dragging;
+        setDrag((was) => new Map([...(was ?? []), ...step]));
+      }
+      // The end of a drag is the one step that goes on the undo stack.
+      if (moves.length > 0) {
+        s.apply(moveParts(moves));
+        setDrag(() => null);
+      }
+      if (selected !== undefined) s.select({ parts: [...selected], ...(selected.size > 0 ? { net: null } : {}) });
+    },
+    [store, deriver, setDrag],
+  );
 
-  const onEdgesChange = useCallback((changes: EdgeChange<WireEdgeType>[]) => {
-    const s = store.getState();
-    let wires: Set<string> | undefined;
-    for (const c of changes) {
-      if (c.type !== 'select') continue;
-      wires ??= new Set(s.selection.wires);
-      if (c.selected) wires.add(c.id);
-      else wires.delete(c.id);
-    }
-    if (wires === undefined) return;
-    const list = [...wires];
-    const nets = new Set(list.map((id) => parseWireId(id)?.net));
-    const net = nets.size === 1 ? ([...nets][0] ?? null) : null;
-    s.select({ wires: list, ...(list.length > 0 ? { net } : {}) });
-  }, [store]);
+  const onEdgesChange = useCallback(
+    (changes: EdgeChange<WireEdgeType>[]) => {
+      const s = store.getState();
+      let wires: Set<string> | undefined;
+      for (const c of changes) {
+        if (c.type !== 'select') continue;
+        wires ??= new Set(s.selection.wires);
+        if (c.selected) wires.add(c.id);
+        else wires.delete(c.id);
+      }
+      if (wires === undefined) return;
+      const list = [...wires];
+      const nets = new Set(list.map((id) => parseWireId(id)?.net));
+      const net = nets.size === 1 ? ([...nets][0] ?? null) : null;
+      s.select({ wires: list, ...(list.length > 0 ? { net } : {}) });
+    },
+    [store],
+  );
 
-  const onConnect = useCallback((c: Connection) => {
-    store.getState().apply(connectPins(pinOf(c.source, c.sourceHandle), pinOf(c.target, c.targetHandle)));
-  }, [store]);
+  const onConnect = useCallback(
+    (c: Connection) => {
+      store.getState().apply(connectPins(pinOf(c.source, c.sourceHandle), pinOf(c.target, c.targetHandle)));
+    },
+    [store],
+  );
 
   // Refused while dragging (a pin to itself, to its own net): the handle shows it; on release, say why.
-  const isValidConnection = useCallback<IsValidConnection>((c) => {
-    const a = pinOf(c.source, c.sourceHandle);
-    const b = pinOf(c.target, c.targetHandle);
-    return a !== b && !store.getState().design.nets.some((n) => n.pins.includes(a) && n.pins.includes(b));
-  }, [store]);
+  const isValidConnection = useCallback<IsValidConnection>(
+    (c) => {
+      const a = pinOf(c.source, c.sourceHandle);
+      const b = pinOf(c.target, c.targetHandle);
+      return a !== b && !store.getState().design.nets.some((n) => n.pins.includes(a) && n.pins.includes(b));
+    },
+    [store],
+  );
 
-  const onConnectEnd = useCallback((_: MouseEvent | TouchEvent, state: FinalConnectionState) => {
-    if (state.isValid === true || state.fromHandle === null || state.toHandle === null) return;
-    store.getState().apply(connectPins(pinOf(state.fromHandle.nodeId, state.fromHandle.id), pinOf(state.toHandle.nodeId, state.toHandle.id)));
-  }, [store]);
+  const onConnectEnd = useCallback(
+    (_: MouseEvent | TouchEvent, state: FinalConnectionState) => {
+      if (state.isValid === true || state.fromHandle === null || state.toHandle === null) return;
+      store
+        .getState()
+        .apply(
+          connectPins(
+            pinOf(state.fromHandle.nodeId, state.fromHandle.id),
+            pinOf(state.toHandle.nodeId, state.toHandle.id),
+          ),
+        );
+    },
+    [store],
+  );
 
   const onPaneClick = useCallback(() => store.getState().select({ parts: [], wires: [], net: null }), [store]);
 
@@ -174,12 +239,15 @@ export function Canvas() {
     e.dataTransfer.dropEffect = 'copy';
   }, []);
 
-  const onDrop = useCallback((e: DragEvent) => {
-    const id = e.dataTransfer.getData(TEMPLATE_MIME);
-    if (id === '') return;
-    e.preventDefault();
-    place(id, { x: e.clientX, y: e.clientY });
-  }, [place]);
+  const onDrop = useCallback(
+    (e: DragEvent) => {
+      const id = e.dataTransfer.getData(TEMPLATE_MIME);
+      if (id === '') return;
+      e.preventDefault();
+      place(id, { x: e.clientX, y: e.clientY });
+    },
+    [place],
+  );
 
   const readOnly = useEditor((s) => s.readOnly);
   // Decided once per editor (a design that grows past the limit keeps its view).
@@ -189,48 +257,62 @@ export function Canvas() {
   });
   return (
     <RouteContext.Provider value={routes.store}>
-    <div className={`rc-canvas${drag !== null ? ' rc-canvas--dragging' : ''}`} id={CANVAS_ID} onDragOver={onDragOver} onDrop={onDrop}>
-      <ReactFlow<AnyNode, WireEdgeType>
-        nodes={nodes}
-        edges={edges}
-        nodeTypes={nodeTypes}
-        edgeTypes={edgeTypes}
-        onNodesChange={onNodesChange}
-        onEdgesChange={onEdgesChange}
-        onConnect={onConnect}
-        onConnectEnd={onConnectEnd}
-        onPaneClick={onPaneClick}
-        isValidConnection={isValidConnection}
-        connectionMode={ConnectionMode.Loose}
-        nodesDraggable={!readOnly}
-        nodesConnectable={!readOnly}
-        deleteKeyCode={null}
-        multiSelectionKeyCode={multiSelectionKeys}
-        onlyRenderVisibleElements
-        snapToGrid
-        snapGrid={snapGrid}
-        // A large design opens on its first chips, not fitted whole: every chip in view at once
-        // is what the page waits on (press F to fit it all).
-        fitView={large === null}
-        defaultViewport={large ?? undefined}
-        fitViewOptions={fitViewOptions}
-        minZoom={0.05}
-        proOptions={proOptions}
-        aria-label="Canvas: chips and the wires between them"
+      {/* biome-ignore lint/a11y/noStaticElementInteractions: the canvas is the drop target of palette drags; the palette's Enter key places a part without one */}
+      <div
+        className={`rc-canvas${drag !== null ? ' rc-canvas--dragging' : ''}`}
+        id={CANVAS_ID}
+        onDragOver={onDragOver}
+        onDrop={onDrop}
       >
-        <Background variant={BackgroundVariant.Dots} gap={20} size={1.2} className="rc-grid" />
-        <Controls showInteractive={false} position="bottom-right" />
-        <Panel position="bottom-left">
-          <Legend />
-        </Panel>
-        <Panel position="top-right">
-          <TidyButton />
-          <button type="button" className="rc-keys-btn" aria-label="Keyboard shortcuts" title="Keyboard shortcuts (?)" data-testid="shortcuts-button"
-            onClick={() => store.getState().openDialog({ kind: 'keys' })}>?</button>
-        </Panel>
-      </ReactFlow>
-      <Dialogs />
-    </div>
+        <ReactFlow<AnyNode, WireEdgeType>
+          nodes={nodes}
+          edges={edges}
+          nodeTypes={nodeTypes}
+          edgeTypes={edgeTypes}
+          onNodesChange={onNodesChange}
+          onEdgesChange={onEdgesChange}
+          onConnect={onConnect}
+          onConnectEnd={onConnectEnd}
+          onPaneClick={onPaneClick}
+          isValidConnection={isValidConnection}
+          connectionMode={ConnectionMode.Loose}
+          nodesDraggable={!readOnly}
+          nodesConnectable={!readOnly}
+          deleteKeyCode={null}
+          multiSelectionKeyCode={multiSelectionKeys}
+          onlyRenderVisibleElements
+          snapToGrid
+          snapGrid={snapGrid}
+          // A large design opens on its first chips, not fitted whole: every chip in view at once
+          // is what the page waits on (press F to fit it all).
+          fitView={large === null}
+          defaultViewport={large ?? undefined}
+          fitViewOptions={fitViewOptions}
+          minZoom={0.05}
+          proOptions={proOptions}
+          aria-label="Canvas: chips and the wires between them"
+        >
+          <Background variant={BackgroundVariant.Dots} gap={20} size={1.2} className="rc-grid" />
+          <Controls showInteractive={false} position="bottom-right" />
+          <Panel position="bottom-left">
+            <Legend />
+          </Panel>
+          <Panel position="top-right">
+            <TidyButton />
+            <button
+              type="button"
+              className="rc-keys-btn"
+              aria-label="Keyboard shortcuts"
+              title="Keyboard shortcuts (?)"
+              data-testid="shortcuts-button"
+              onClick={() => store.getState().openDialog({ kind: 'keys' })}
+            >
+              ?
+            </button>
+          </Panel>
+        </ReactFlow>
+        <Dialogs />
+      </div>
     </RouteContext.Provider>
   );
 }

@@ -20,12 +20,25 @@ import { zoomTier } from './farZoom.ts';
 import { railStyle } from './railStyle.ts';
 import { GLYPH_TEXT, glyphKind, PinGlyph } from './PinGlyph.tsx';
 
-const POSITION: Readonly<Record<Side, Position>> = { left: Position.Left, right: Position.Right, top: Position.Top, bottom: Position.Bottom };
+const POSITION: Readonly<Record<Side, Position>> = {
+  left: Position.Left,
+  right: Position.Right,
+  top: Position.Top,
+  bottom: Position.Bottom,
+};
 
 /** The swatch of a pin on a rail other than its part's: only such pins read the rails. */
 function OwnRail({ id }: { id: string }) {
   const rail = useEditor((s) => s.design.rails.find((r) => r.id === id));
-  return <span className="rc-pin-rail" style={railStyle(rail?.colour)} aria-label={`rail ${rail?.label ?? id}`} title={`on rail ${rail?.label ?? id}`} />;
+  return (
+    <span
+      className="rc-pin-rail"
+      role="img"
+      style={railStyle(rail?.colour)}
+      aria-label={`rail ${rail?.label ?? id}`}
+      title={`on rail ${rail?.label ?? id}`}
+    />
+  );
 }
 
 /**
@@ -38,12 +51,22 @@ export function pinTip(pin: Pin, partRail: string, partProfile: string, rails: r
   return [
     `${pin.id}: ${GLYPH_TEXT[glyphKind(pin)]}`,
     pin.pull === undefined ? 'no pull of its own' : `internal ${pullWords(pin.pull, rails)}`,
-    `rail ${rail === undefined ? railId : `${rail.label} (${rail.id})`}${pin.rail !== undefined && pin.rail !== partRail ? ', not its part\'s' : ''}`,
+    `rail ${rail === undefined ? railId : `${rail.label} (${rail.id})`}${pin.rail !== undefined && pin.rail !== partRail ? ", not its part's" : ''}`,
     `profile ${pin.profile ?? partProfile}${pin.profile !== undefined ? ' (its own)' : ''}`,
   ].join('\n');
 }
 
-const PinRow = memo(function PinRow({ pin, side, partRail, partProfile }: { pin: Pin; side: Side; partRail: string; partProfile: string }) {
+const PinRow = memo(function PinRow({
+  pin,
+  side,
+  partRail,
+  partProfile,
+}: {
+  pin: Pin;
+  side: Side;
+  partRail: string;
+  partProfile: string;
+}) {
   const kind = glyphKind(pin);
   const rails = useEditor((s) => s.design.rails);
   const ownRail = pin.rail !== undefined && pin.rail !== partRail ? pin.rail : undefined;
@@ -52,7 +75,11 @@ const PinRow = memo(function PinRow({ pin, side, partRail, partProfile }: { pin:
       <Handle type="source" position={POSITION[side]} id={pin.id} className="rc-handle" />
       <PinGlyph kind={kind} side={side} />
       <span className="rc-pin-name">{pin.id}</span>
-      {pin.pull !== undefined && <span className="rc-pin-pull" data-pin-pull>{pullLabel(pin.pull, rails).split(' ')[0]}</span>}
+      {pin.pull !== undefined && (
+        <span className="rc-pin-pull" data-pin-pull>
+          {pullLabel(pin.pull, rails).split(' ')[0]}
+        </span>
+      )}
       {ownRail !== undefined && <OwnRail id={ownRail} />}
     </div>
   );
@@ -73,8 +100,30 @@ function PinStub({ pin, side, partRail }: { pin: Pin; side: Side; partRail: stri
   );
 }
 
-function Rows({ pins, side, partRail, partProfile, far }: { pins: readonly Pin[]; side: Side; partRail: string; partProfile: string; far: boolean }) {
-  return <>{pins.map((p) => (far ? <PinStub key={p.id} pin={p} side={side} partRail={partRail} /> : <PinRow key={p.id} pin={p} side={side} partRail={partRail} partProfile={partProfile} />))}</>;
+function Rows({
+  pins,
+  side,
+  partRail,
+  partProfile,
+  far,
+}: {
+  pins: readonly Pin[];
+  side: Side;
+  partRail: string;
+  partProfile: string;
+  far: boolean;
+}) {
+  return (
+    <>
+      {pins.map((p) =>
+        far ? (
+          <PinStub key={p.id} pin={p} side={side} partRail={partRail} />
+        ) : (
+          <PinRow key={p.id} pin={p} side={side} partRail={partRail} partProfile={partProfile} />
+        ),
+      )}
+    </>
+  );
 }
 
 function Head({ id, part, rail, family }: { id: string; part: Part; rail: Rail | undefined; family: string }) {
@@ -103,6 +152,7 @@ function ChipNodeView({ id, selected }: NodeProps<ChipNodeType>) {
   const updateNodeInternals = useUpdateNodeInternals();
   const mounted = useRef(false);
   const pins = part?.pins;
+  // biome-ignore lint/correctness/useExhaustiveDependencies: a new pins array is the very reason to measure the handles again
   useEffect(() => {
     if (mounted.current) updateNodeInternals(id);
     mounted.current = true;
@@ -112,19 +162,37 @@ function ChipNodeView({ id, selected }: NodeProps<ChipNodeType>) {
   const layout = pinLayout(part.pins);
   const rows = Math.max(layout.left.length, layout.right.length);
   return (
-    <div className={`rc-chip${selected ? ' rc-chip--selected' : ''}${far ? ' rc-chip--far' : ''}${tier === 2 ? ' rc-chip--tiny' : ''}`} style={railStyle(rail?.colour)} data-part={id}>
+    <div
+      className={`rc-chip${selected ? ' rc-chip--selected' : ''}${far ? ' rc-chip--far' : ''}${tier === 2 ? ' rc-chip--tiny' : ''}`}
+      style={railStyle(rail?.colour)}
+      data-part={id}
+    >
       {layout.top.length > 0 && (
-        <div className="rc-strip rc-strip--top"><Rows pins={layout.top} side="top" partRail={part.rail} partProfile={part.profile} far={far} /></div>
+        <div className="rc-strip rc-strip--top">
+          <Rows pins={layout.top} side="top" partRail={part.rail} partProfile={part.profile} far={far} />
+        </div>
       )}
-      {far ? <div className="rc-chip-head"><span className="rc-chip-id">{id}</span></div> : <Head id={id} part={part} rail={rail} family={family} />}
+      {far ? (
+        <div className="rc-chip-head">
+          <span className="rc-chip-id">{id}</span>
+        </div>
+      ) : (
+        <Head id={id} part={part} rail={rail} family={family} />
+      )}
       {rows > 0 && (
         <div className="rc-chip-body">
-          <div className="rc-col rc-col--left"><Rows pins={layout.left} side="left" partRail={part.rail} partProfile={part.profile} far={far} /></div>
-          <div className="rc-col rc-col--right"><Rows pins={layout.right} side="right" partRail={part.rail} partProfile={part.profile} far={far} /></div>
+          <div className="rc-col rc-col--left">
+            <Rows pins={layout.left} side="left" partRail={part.rail} partProfile={part.profile} far={far} />
+          </div>
+          <div className="rc-col rc-col--right">
+            <Rows pins={layout.right} side="right" partRail={part.rail} partProfile={part.profile} far={far} />
+          </div>
         </div>
       )}
       {layout.bottom.length > 0 && (
-        <div className="rc-strip rc-strip--bottom"><Rows pins={layout.bottom} side="bottom" partRail={part.rail} partProfile={part.profile} far={far} /></div>
+        <div className="rc-strip rc-strip--bottom">
+          <Rows pins={layout.bottom} side="bottom" partRail={part.rail} partProfile={part.profile} far={far} />
+        </div>
       )}
     </div>
   );

@@ -29,7 +29,7 @@ const ENDS: Readonly<Record<Discrete['kind'], readonly [string, string]>> = {
 };
 
 /** Our symbols, 64 × 24, drawn from the two pins inwards. */
-function Symbol({ kind }: { kind: Discrete['kind'] }) {
+function PartSymbol({ kind }: { kind: Discrete['kind'] }) {
   if (kind === 'resistor') {
     // A capsule with three cross bars: ours, not a zigzag and not a plain box.
     return (
@@ -63,18 +63,34 @@ function DiscreteNodeView({ id, selected }: NodeProps<DiscreteNodeType>) {
   const [left, right] = ENDS[d.kind];
   const tie = d.kind === 'resistor' ? d.tie : undefined;
   const end = (pin: string, position: Position) =>
-    tie?.[pin as '1' | '2'] !== undefined
-      ? <span className={`rc-discrete-tie rc-discrete-tie--${position}`} title={`${id}.${pin} tied to ${tie[pin as '1' | '2']}`}>{tie[pin as '1' | '2']}</span>
-      : <Handle type="source" position={position} id={pin} className="rc-handle" title={`${id}.${pin}`} />;
+    tie?.[pin as '1' | '2'] !== undefined ? (
+      <span
+        className={`rc-discrete-tie rc-discrete-tie--${position}`}
+        title={`${id}.${pin} tied to ${tie[pin as '1' | '2']}`}
+      >
+        {tie[pin as '1' | '2']}
+      </span>
+    ) : (
+      <Handle type="source" position={position} id={pin} className="rc-handle" title={`${id}.${pin}`} />
+    );
   const gate = d.kind === 'fet-shifter' ? d.gate : undefined;
   return (
-    <div className={`rc-discrete${selected ? ' rc-discrete--selected' : ''}`} data-discrete={id} data-kind={d.kind}
-      title={`${id}${d.label === undefined ? '' : `: ${d.label}`} (${d.kind})`}>
+    <div
+      className={`rc-discrete${selected ? ' rc-discrete--selected' : ''}`}
+      data-discrete={id}
+      data-kind={d.kind}
+      title={`${id}${d.label === undefined ? '' : `: ${d.label}`} (${d.kind})`}
+    >
       {end(left, Position.Left)}
       <div className="rc-discrete-body">
-        <div className="rc-discrete-head"><span className="rc-chip-id">{id}</span>{gate !== undefined && <span className="rc-discrete-gate">gate {gate}</span>}</div>
-        <Symbol kind={d.kind} />
-        <div className="rc-discrete-value" data-testid={`value-${id}`}>{discreteValue(d)}</div>
+        <div className="rc-discrete-head">
+          <span className="rc-chip-id">{id}</span>
+          {gate !== undefined && <span className="rc-discrete-gate">gate {gate}</span>}
+        </div>
+        <PartSymbol kind={d.kind} />
+        <div className="rc-discrete-value" data-testid={`value-${id}`}>
+          {discreteValue(d)}
+        </div>
       </div>
       {end(right, Position.Right)}
     </div>

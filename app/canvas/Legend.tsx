@@ -25,9 +25,28 @@ export function Legend() {
           </ul>
           <div className="rc-legend-title">Wires</div>
           <ul>
-            <li><svg width="34" height="10" aria-hidden="true"><path d="M1 5 H33" className="rc-key-wire--case" /><path d="M1 5 H33" className="rc-key-wire rc-key-wire--error" /></svg><SeverityGlyph severity="error" /><span>error: heavy red, cased</span></li>
-            <li><svg width="34" height="10" aria-hidden="true"><path d="M1 5 H33" className="rc-key-wire rc-key-wire--warning" /><path d="M1 5 H33" className="rc-key-wire--core" /></svg><SeverityGlyph severity="warning" /><span>warning: amber double line</span></li>
-            <li><svg width="34" height="10" aria-hidden="true"><path d="M1 5 H33" className="rc-key-wire rc-key-wire--clean" /></svg><span>no error or warning</span></li>
+            <li>
+              <svg width="34" height="10" aria-hidden="true">
+                <path d="M1 5 H33" className="rc-key-wire--case" />
+                <path d="M1 5 H33" className="rc-key-wire rc-key-wire--error" />
+              </svg>
+              <SeverityGlyph severity="error" />
+              <span>error: heavy red, cased</span>
+            </li>
+            <li>
+              <svg width="34" height="10" aria-hidden="true">
+                <path d="M1 5 H33" className="rc-key-wire rc-key-wire--warning" />
+                <path d="M1 5 H33" className="rc-key-wire--core" />
+              </svg>
+              <SeverityGlyph severity="warning" />
+              <span>warning: amber double line</span>
+            </li>
+            <li>
+              <svg width="34" height="10" aria-hidden="true">
+                <path d="M1 5 H33" className="rc-key-wire rc-key-wire--clean" />
+              </svg>
+              <span>no error or warning</span>
+            </li>
           </ul>
         </div>
       )}

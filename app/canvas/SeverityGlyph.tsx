@@ -4,7 +4,14 @@ import type { Severity } from '../../rules/engine/types.ts';
 export function SeverityGlyph({ severity, size = 12 }: { severity: Severity | 'clean'; size?: number }) {
   if (severity === 'clean') return null;
   return (
-    <svg className={`rc-sev rc-sev--${severity}`} viewBox="0 0 12 12" width={size} height={size} aria-label={severity} role="img">
+    <svg
+      className={`rc-sev rc-sev--${severity}`}
+      viewBox="0 0 12 12"
+      width={size}
+      height={size}
+      aria-label={severity}
+      role="img"
+    >
       {severity === 'error' && (
         <>
           <path d="M6 0.5 L11.5 6 L6 11.5 L0.5 6 Z" className="s-fill" />

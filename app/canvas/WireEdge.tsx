@@ -9,7 +9,14 @@ import { memo, useContext, useState } from 'react';
 import { useStore } from 'zustand';
 import { svgPath, type Point } from '../../rules/routing/index.ts';
 import { RouteContext } from './routeContext.ts';
-import { BaseEdge, EdgeLabelRenderer, getSmoothStepPath, Position, useStore as useFlowStore, type EdgeProps } from '@xyflow/react';
+import {
+  BaseEdge,
+  EdgeLabelRenderer,
+  getSmoothStepPath,
+  Position,
+  useStore as useFlowStore,
+  type EdgeProps,
+} from '@xyflow/react';
 import { formatQuantity } from '../../rules/levels/units.ts';
 import type { Pull } from '../../rules/model/schema.ts';
 import type { Finding, Severity } from '../../rules/engine/types.ts';
@@ -32,7 +39,8 @@ const RULE_TITLE = new Map(RULES.map((r) => [r.id, r.meta.title]));
 /** The net's worst unwaived finding: the first of the highest severity, as the findings list orders them. */
 function worstFinding(findings: readonly Finding[]): Finding | undefined {
   let best: Finding | undefined;
-  for (const f of findings) if (f.waived === undefined && (best === undefined || RANK[f.severity] > RANK[best.severity])) best = f;
+  for (const f of findings)
+    if (f.waived === undefined && (best === undefined || RANK[f.severity] > RANK[best.severity])) best = f;
   return best;
 }
 
@@ -40,21 +48,39 @@ function worstFinding(findings: readonly Finding[]): Finding | undefined {
 function WireTip({ net, x, y }: { net: string; x: number; y: number }) {
   const high = useEditor((s) => s.result.nets.get(s.powerState)?.get(net)?.view.analysis.worstHigh);
   const low = useEditor((s) => s.result.nets.get(s.powerState)?.get(net)?.view.analysis.worstLow);
-  const count = useEditor((s) => s.result.nets.get(s.powerState)?.get(net)?.findings.filter((f) => f.waived === undefined).length ?? 0);
+  const count = useEditor(
+    (s) =>
+      s.result.nets
+        .get(s.powerState)
+        ?.get(net)
+        ?.findings.filter((f) => f.waived === undefined).length ?? 0,
+  );
   // Why the wire has its colour: its worst unwaived finding, in the rule's own words.
   const worst = useEditor((s) => worstFinding(s.result.nets.get(s.powerState)?.get(net)?.findings ?? []));
   const state = useEditor((s) => s.result.states.find((st) => st.id === s.powerState)?.label ?? s.powerState);
   return (
-    <div className="rc-wire-tip" style={{ transform: `translate(-50%, calc(-100% - 14px)) translate(${x}px, ${y}px)` }} role="tooltip">
+    <div
+      className="rc-wire-tip"
+      style={{ transform: `translate(-50%, calc(-100% - 14px)) translate(${x}px, ${y}px)` }}
+      role="tooltip"
+    >
       {worst !== undefined && (
         <div className={`rc-wire-tip-worst rc-wire-tip-worst--${worst.severity}`} data-worst={worst.rule}>
           <b>{RULE_TITLE.get(worst.rule) ?? worst.rule}</b>
           <span>{worst.message}</span>
         </div>
       )}
-      <div className="rc-wire-tip-row"><span>worst high margin</span><b data-margin="high">{margin(high)}</b></div>
-      <div className="rc-wire-tip-row"><span>worst low margin</span><b data-margin="low">{margin(low)}</b></div>
-      <div className="rc-wire-tip-foot">{count === 0 ? 'no findings' : `${count} finding${count === 1 ? '' : 's'}`} · {state}</div>
+      <div className="rc-wire-tip-row">
+        <span>worst high margin</span>
+        <b data-margin="high">{margin(high)}</b>
+      </div>
+      <div className="rc-wire-tip-row">
+        <span>worst low margin</span>
+        <b data-margin="low">{margin(low)}</b>
+      </div>
+      <div className="rc-wire-tip-foot">
+        {count === 0 ? 'no findings' : `${count} finding${count === 1 ? '' : 's'}`} · {state}
+      </div>
     </div>
   );
 }
@@ -62,7 +88,11 @@ function WireTip({ net, x, y }: { net: string; x: number; y: number }) {
 /** A net's pull resistor beside its name: value and where it goes (`↑4K7 3.3 V`). */
 function PullTag({ pull }: { pull: Pull }) {
   const rails = useEditor((s) => s.design.rails);
-  return <span className="rc-net-pull" data-pull title={pullWords(pull, rails)}>{pullLabel(pull, rails)}</span>;
+  return (
+    <span className="rc-net-pull" data-pull title={pullWords(pull, rails)}>
+      {pullLabel(pull, rails)}
+    </span>
+  );
 }
 
 /**
@@ -94,7 +124,8 @@ function fitEnds(points: readonly Point[], sx: number, sy: number, tx: number, t
   if (n < 2) return null;
   const a = points[0]!;
   const b = points[n - 1]!;
-  if (Math.abs(a.x - sx) > SNAP || Math.abs(a.y - sy) > SNAP || Math.abs(b.x - tx) > SNAP || Math.abs(b.y - ty) > SNAP) return null;
+  if (Math.abs(a.x - sx) > SNAP || Math.abs(a.y - sy) > SNAP || Math.abs(b.x - tx) > SNAP || Math.abs(b.y - ty) > SNAP)
+    return null;
   if (a.x === sx && a.y === sy && b.x === tx && b.y === ty) return points as Point[];
   const out = points.map((p) => ({ x: p.x, y: p.y }));
   // Move each end and the corner after it along the end's run, so that every run stays straight.
@@ -134,18 +165,55 @@ function WireEdgeView(props: EdgeProps<WireEdgeType>) {
     [midX, midY] = [mid.x, mid.y];
   } else {
     // Not routed yet, or its chip is being dragged: straight runs from pin to pin until routed.
-    [path, midX, midY] = getSmoothStepPath({ sourceX, sourceY, targetX, targetY, sourcePosition, targetPosition, borderRadius: 3, offset: 14 });
+    [path, midX, midY] = getSmoothStepPath({
+      sourceX,
+      sourceY,
+      targetX,
+      targetY,
+      sourcePosition,
+      targetPosition,
+      borderRadius: 3,
+      offset: 14,
+    });
   }
   const name = labelPlace(sourceX, sourceY, sourcePosition);
 
-  const classes = ['rc-wire', `rc-wire--${severity}`, selected ? 'rc-wire--selected' : '', highlighted ? 'rc-wire--net' : '', tiny ? 'rc-wire--tiny' : ''].filter((c) => c !== '').join(' ');
+  const classes = [
+    'rc-wire',
+    `rc-wire--${severity}`,
+    selected ? 'rc-wire--selected' : '',
+    highlighted ? 'rc-wire--net' : '',
+    tiny ? 'rc-wire--tiny' : '',
+  ]
+    .filter((c) => c !== '')
+    .join(' ');
   return (
-    <g className={classes} data-net={net} data-severity={severity} data-rule={rule} data-routed={fitted !== null ? 'yes' : 'no'} onMouseEnter={far ? undefined : () => setHover(true)} onMouseLeave={() => setHover(false)}>
+    // biome-ignore lint/a11y/noStaticElementInteractions: hover only shows the wire's summary, which the net's details panel gives to the keyboard too
+    <g
+      className={classes}
+      data-net={net}
+      data-severity={severity}
+      data-rule={rule}
+      data-routed={fitted !== null ? 'yes' : 'no'}
+      onMouseEnter={far ? undefined : () => setHover(true)}
+      onMouseLeave={() => setHover(false)}
+    >
       {(selected || highlighted) && <path d={path} className="rc-wire-halo" fill="none" />}
-      {(severity === 'error' || (severity === 'warning' && !tiny)) && <path d={path} className="rc-wire-case" fill="none" />}
+      {(severity === 'error' || (severity === 'warning' && !tiny)) && (
+        <path d={path} className="rc-wire-case" fill="none" />
+      )}
       {/* Far out, a wire is too thin to aim at: no wide invisible twin to catch the pointer. */}
       <BaseEdge id={id} path={path} interactionWidth={far ? 0 : 14} />
-      {dots?.map((p) => <circle key={`${p.x},${p.y}`} className="rc-junction" cx={p.x} cy={p.y} r={tiny ? 5 : 3.2} data-junction={net} />)}
+      {dots?.map((p) => (
+        <circle
+          key={`${p.x},${p.y}`}
+          className="rc-junction"
+          cx={p.x}
+          cy={p.y}
+          r={tiny ? 5 : 3.2}
+          data-junction={net}
+        />
+      ))}
       {!far && (data?.label != null || hover) && (
         <EdgeLabelRenderer>
           {data?.label != null && (

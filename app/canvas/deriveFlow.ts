@@ -34,7 +34,8 @@ export const MOVING_WIRE = 'rc-wire-moving';
  */
 export const MOVING_LAYERS_MAX = 24;
 
-const layered = (ids: { readonly size: number } | null | undefined) => ids != null && ids.size > 0 && ids.size <= MOVING_LAYERS_MAX;
+const layered = (ids: { readonly size: number } | null | undefined) =>
+  ids != null && ids.size > 0 && ids.size <= MOVING_LAYERS_MAX;
 
 interface NodeEntry {
   readonly key: string;
@@ -74,7 +75,11 @@ export function createFlowDeriver() {
     return last.length === next.length && next.every((x, k) => x === last[k]) ? last : next;
   }
 
-  function nodes(parts: readonly Part[], selectedParts: readonly string[], drag: ReadonlyMap<string, XY> | null): ChipNode[] {
+  function nodes(
+    parts: readonly Part[],
+    selectedParts: readonly string[],
+    drag: ReadonlyMap<string, XY> | null,
+  ): ChipNode[] {
     const selected = new Set(selectedParts);
     const seen = new Set<string>();
     const marksChips = layered(drag);
@@ -113,7 +118,11 @@ export function createFlowDeriver() {
   /**
    * `moving`: the ids of the chips being dragged (one set for the whole drag, null otherwise).
    */
-  function edges(nets: readonly Net[], selectedWires: readonly string[], moving: ReadonlySet<string> | null = null): WireEdge[] {
+  function edges(
+    nets: readonly Net[],
+    selectedWires: readonly string[],
+    moving: ReadonlySet<string> | null = null,
+  ): WireEdge[] {
     const selected = new Set(selectedWires);
     const seen = new Set<string>();
     const out: WireEdge[] = [];
@@ -127,7 +136,12 @@ export function createFlowDeriver() {
     for (const net of nets) {
       seen.add(net.id);
       const hit = netCache.get(net.id);
-      const mine = selected.size === 0 ? '' : (hit?.ids ?? netWires(net).map(([a, b]) => wireId(net.id, a, b))).filter((id) => selected.has(id)).join('|');
+      const mine =
+        selected.size === 0
+          ? ''
+          : (hit?.ids ?? netWires(net).map(([a, b]) => wireId(net.id, a, b)))
+              .filter((id) => selected.has(id))
+              .join('|');
       const movingKey = movingOf(net);
       // The same net object drawn with the same selection: nothing to look at.
       if (hit !== undefined && hit.net === net && hit.selectedKey === mine && hit.movingKey === movingKey) {
@@ -175,7 +189,11 @@ export function createFlowDeriver() {
   let lastDiscretes: DiscreteNode[] = [];
 
   /** The parts between chips as nodes, cached as chips are. */
-  function discretes(list: readonly Discrete[] | undefined, selectedParts: readonly string[], drag: ReadonlyMap<string, XY> | null): DiscreteNode[] {
+  function discretes(
+    list: readonly Discrete[] | undefined,
+    selectedParts: readonly string[],
+    drag: ReadonlyMap<string, XY> | null,
+  ): DiscreteNode[] {
     const selected = new Set(selectedParts);
     const out = (list ?? []).map((d) => {
       const pos = drag?.get(d.id) ?? d.position ?? { x: 0, y: 0 };
@@ -184,8 +202,13 @@ export function createFlowDeriver() {
       const hit = discreteCache.get(d.id);
       if (hit !== undefined && hit.key === key) return hit.node;
       const node: DiscreteNode = {
-        id: d.id, type: 'discrete', position: { x: pos.x, y: pos.y }, data: { discrete: d.id }, selected: isSelected,
-        width: DISCRETE_SIZE.width + 2 * NODE_MARGIN, height: DISCRETE_SIZE.height + 2 * NODE_MARGIN,
+        id: d.id,
+        type: 'discrete',
+        position: { x: pos.x, y: pos.y },
+        data: { discrete: d.id },
+        selected: isSelected,
+        width: DISCRETE_SIZE.width + 2 * NODE_MARGIN,
+        height: DISCRETE_SIZE.height + 2 * NODE_MARGIN,
       };
       discreteCache.set(d.id, { key, node });
       return node;
@@ -204,5 +227,9 @@ export type FlowDeriver = ReturnType<typeof createFlowDeriver>;
 /** Parts and nets of a design as React Flow would get them, without caching (tests, one-off uses). */
 export function deriveOnce(design: Design): { nodes: ChipNode[]; edges: WireEdge[]; discretes: DiscreteNode[] } {
   const d = createFlowDeriver();
-  return { nodes: d.nodes(design.parts, [], null), edges: d.edges(design.nets, []), discretes: d.discretes(design.discretes, [], null) };
+  return {
+    nodes: d.nodes(design.parts, [], null),
+    edges: d.edges(design.nets, []),
+    discretes: d.discretes(design.discretes, [], null),
+  };
 }

@@ -25,7 +25,9 @@ function useViewCentre(): () => { x: number; y: number } {
   const { screenToFlowPosition } = useReactFlow();
   return useCallback(() => {
     const rect = document.getElementById(CANVAS_ID)?.getBoundingClientRect();
-    return screenToFlowPosition(rect === undefined ? { x: 0, y: 0 } : { x: rect.left + rect.width / 2, y: rect.top + rect.height / 2 });
+    return screenToFlowPosition(
+      rect === undefined ? { x: 0, y: 0 } : { x: rect.left + rect.width / 2, y: rect.top + rect.height / 2 },
+    );
   }, [screenToFlowPosition]);
 }
 
@@ -87,7 +89,13 @@ export function useFocus() {
       } else ids = 'part' in target ? [target.part] : [...target.parts];
       if (ids.length === 0) return;
       // includeHiddenNodes: see fitViewOptions.
-      void fitView({ nodes: ids.map((id) => ({ id })), padding: 0.35, duration: 250, maxZoom: 1.2, includeHiddenNodes: true });
+      void fitView({
+        nodes: ids.map((id) => ({ id })),
+        padding: 0.35,
+        duration: 250,
+        maxZoom: 1.2,
+        includeHiddenNodes: true,
+      });
     },
     [store, fitView],
   );
@@ -100,11 +108,14 @@ export function useFocus() {
 export function usePlaceDiscrete(): (kind: DiscreteKind) => void {
   const store = useEditorStore();
   const viewCentre = useViewCentre();
-  return useCallback((kind) => {
-    const s = store.getState();
-    const c = viewCentre();
-    const part = newDiscrete(s.design, kind, { x: c.x - DISCRETE_SIZE.width / 2, y: c.y - DISCRETE_SIZE.height / 2 });
-    const out = s.apply(addDiscrete(part));
-    if (out.ok) s.select({ parts: [part.id], wires: [], net: null });
-  }, [store, viewCentre]);
+  return useCallback(
+    (kind) => {
+      const s = store.getState();
+      const c = viewCentre();
+      const part = newDiscrete(s.design, kind, { x: c.x - DISCRETE_SIZE.width / 2, y: c.y - DISCRETE_SIZE.height / 2 });
+      const out = s.apply(addDiscrete(part));
+      if (out.ok) s.select({ parts: [part.id], wires: [], net: null });
+    },
+    [store, viewCentre],
+  );
 }

@@ -5,7 +5,18 @@
  * (a large design crosses itself hundreds of thousands of times: worked out here, off the
  * painting thread, and handed over only where they changed).
  */
-import { crossIndex, hopsOf, junctionsOf, MAX_HOPS, type Box, type Hop, type Point, type Route, type WireRouter, type WireSpec } from '../../rules/routing/index.ts';
+import {
+  crossIndex,
+  hopsOf,
+  junctionsOf,
+  MAX_HOPS,
+  type Box,
+  type Hop,
+  type Point,
+  type Route,
+  type WireRouter,
+  type WireSpec,
+} from '../../rules/routing/index.ts';
 
 export interface RouteJob {
   readonly seq: number;

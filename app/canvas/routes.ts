@@ -9,10 +9,27 @@
 import { createStore } from 'zustand/vanilla';
 import type { Discrete, Net, Part } from '../../rules/model/schema.ts';
 import { DISCRETE_SIZE } from './deriveFlow.ts';
-import { WireRouter, type Anchor, type Box, type Hop, type Point, type Route, type WireSpec } from '../../rules/routing/index.ts';
+import {
+  WireRouter,
+  type Anchor,
+  type Box,
+  type Hop,
+  type Point,
+  type Route,
+  type WireSpec,
+} from '../../rules/routing/index.ts';
 import { solve, unpackHops, type HopMemory, type RouteJob, type RouteReply } from './routeJob.ts';
 import { netWires, wireId } from '../store/commands/index.ts';
-import { BODY_PADDING, CHIP_WIDTH, chipSize, HEADER_HEIGHT, NODE_MARGIN, pinLayout, ROW_HEIGHT, STRIP_HEIGHT } from './chipLayout.ts';
+import {
+  BODY_PADDING,
+  CHIP_WIDTH,
+  chipSize,
+  HEADER_HEIGHT,
+  NODE_MARGIN,
+  pinLayout,
+  ROW_HEIGHT,
+  STRIP_HEIGHT,
+} from './chipLayout.ts';
 
 export interface RouteState {
   readonly routes: ReadonlyMap<string, Route>;
@@ -47,14 +64,23 @@ export function chipBox(part: Part): Box {
   const y = position.y + NODE_MARGIN;
   const l = pinLayout(part.pins);
   const top = l.top.length > 0 ? STRIP_HEIGHT : 0;
-  const rowY = (k: number) => y + TOP_BORDER + top + (HEADER_HEIGHT - TOP_BORDER) + BODY_PADDING / 2 + (k + 0.5) * ROW_HEIGHT;
+  const rowY = (k: number) =>
+    y + TOP_BORDER + top + (HEADER_HEIGHT - TOP_BORDER) + BODY_PADDING / 2 + (k + 0.5) * ROW_HEIGHT;
   const spread = (k: number, n: number) => x + CHIP_WIDTH / 2 + (k - (n - 1) / 2) * (STRIP_PIN + 10);
   const pins: Anchor[] = [];
   const key = (id: string) => `${part.id}.${id}`;
-  l.left.forEach((p, k) => pins.push({ key: key(p.id), side: 'left', x: x - HANDLE_HALF, y: rowY(k) }));
-  l.right.forEach((p, k) => pins.push({ key: key(p.id), side: 'right', x: x + width + HANDLE_HALF, y: rowY(k) }));
-  l.top.forEach((p, k) => pins.push({ key: key(p.id), side: 'top', x: spread(k, l.top.length), y: y - HANDLE_HALF }));
-  l.bottom.forEach((p, k) => pins.push({ key: key(p.id), side: 'bottom', x: spread(k, l.bottom.length), y: y + height + HANDLE_HALF }));
+  l.left.forEach((p, k) => {
+    pins.push({ key: key(p.id), side: 'left', x: x - HANDLE_HALF, y: rowY(k) });
+  });
+  l.right.forEach((p, k) => {
+    pins.push({ key: key(p.id), side: 'right', x: x + width + HANDLE_HALF, y: rowY(k) });
+  });
+  l.top.forEach((p, k) => {
+    pins.push({ key: key(p.id), side: 'top', x: spread(k, l.top.length), y: y - HANDLE_HALF });
+  });
+  l.bottom.forEach((p, k) => {
+    pins.push({ key: key(p.id), side: 'bottom', x: spread(k, l.bottom.length), y: y + height + HANDLE_HALF });
+  });
   const box: Box = { id: part.id, x, y, width, height, pins };
   if (byPos === undefined) boxCache.set(part.pins, (byPos = new WeakMap()));
   byPos.set(position, box);
@@ -84,7 +110,8 @@ export function discreteBox(d: Discrete): Box {
   const tied = (pin: string) => d.kind === 'resistor' && d.tie?.[pin as '1' | '2'] !== undefined;
   const pins: Anchor[] = [];
   if (!tied(left)) pins.push({ key: `${d.id}.${left}`, side: 'left', x: x - HANDLE_HALF, y: y + height / 2 });
-  if (!tied(right)) pins.push({ key: `${d.id}.${right}`, side: 'right', x: x + width + HANDLE_HALF, y: y + height / 2 });
+  if (!tied(right))
+    pins.push({ key: `${d.id}.${right}`, side: 'right', x: x + width + HANDLE_HALF, y: y + height / 2 });
   const box: Box = { id: d.id, x, y, width, height, pins };
   discreteBoxes.set(d, box);
   return box;
@@ -121,7 +148,12 @@ export function createRouteKeeper() {
     const junctions = new Map<string, readonly Point[]>();
     for (const [net, list] of reply.junctions) {
       const old = was.junctions.get(net);
-      junctions.set(net, old !== undefined && old.length === list.length && old.every((p, k) => p.x === list[k]!.x && p.y === list[k]!.y) ? old : list);
+      junctions.set(
+        net,
+        old !== undefined && old.length === list.length && old.every((p, k) => p.x === list[k]!.x && p.y === list[k]!.y)
+          ? old
+          : list,
+      );
     }
     // Hops arrive only for the wires whose hops changed; the rest keep theirs (and their drawing).
     let hops = was.hops;

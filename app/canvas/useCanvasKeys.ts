@@ -15,10 +15,17 @@ import { NUDGE, NUDGE_BIG } from './shortcuts.ts';
 /** Where a paste lands: each paste of one copy a step further down and right, so that none hides another. */
 const PASTE_STEP = 40;
 
-const ARROWS: Readonly<Record<string, [number, number]>> = { ArrowLeft: [-1, 0], ArrowRight: [1, 0], ArrowUp: [0, -1], ArrowDown: [0, 1] };
+const ARROWS: Readonly<Record<string, [number, number]>> = {
+  ArrowLeft: [-1, 0],
+  ArrowRight: [1, 0],
+  ArrowUp: [0, -1],
+  ArrowDown: [0, 1],
+};
 
 function inFieldOrDialog(target: EventTarget | null): boolean {
-  return target instanceof Element && target.closest('input, textarea, select, [contenteditable="true"], dialog') !== null;
+  return (
+    target instanceof Element && target.closest('input, textarea, select, [contenteditable="true"], dialog') !== null
+  );
 }
 
 /**
@@ -57,9 +64,17 @@ export function useCanvasKeys(): void {
         e.preventDefault();
         if (key === 'c') {
           clipboard.current = { clip, pasted: 0 };
-          s.notify({ kind: 'done', text: `Copied ${clip.parts.length} ${clip.parts.length === 1 ? 'part' : 'parts'} and ${clip.nets.length} ${clip.nets.length === 1 ? 'net' : 'nets'}.` });
+          s.notify({
+            kind: 'done',
+            text: `Copied ${clip.parts.length} ${clip.parts.length === 1 ? 'part' : 'parts'} and ${clip.nets.length} ${clip.nets.length === 1 ? 'net' : 'nets'}.`,
+          });
         } else {
-          paste(store, clip, 1, `Duplicate ${clip.parts.length === 1 ? clip.parts[0]!.id : `${clip.parts.length} parts`}`);
+          paste(
+            store,
+            clip,
+            1,
+            `Duplicate ${clip.parts.length === 1 ? clip.parts[0]!.id : `${clip.parts.length} parts`}`,
+          );
         }
       } else if (mod && !e.altKey && canvas && key === 'v') {
         const held = clipboard.current;

@@ -19,7 +19,10 @@ async function answer(request: Request): Promise<void> {
     if (request.kind === 'read') {
       progress('reading');
       const read = readJob(await request.file.text(), progress);
-      last = read.reply.ok && read.result !== null && read.reply.design !== null ? { key: request.id, design: read.reply.design, result: read.result } : null;
+      last =
+        read.reply.ok && read.result !== null && read.reply.design !== null
+          ? { key: request.id, design: read.reply.design, result: read.result }
+          : null;
       const { reply } = await storeIfLarge(read, request.store, progress);
       post({ id: request.id, kind: 'read', reply });
     } else {

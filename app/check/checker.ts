@@ -5,7 +5,15 @@
  */
 import type { CheckResult } from '../../rules/engine/types.ts';
 import type { Design } from '../../rules/model/schema.ts';
-import { readJob, reportJob, storeIfLarge, type ReadReply, type ReportReply, type Stage, type StoreLarge } from './jobs.ts';
+import {
+  readJob,
+  reportJob,
+  storeIfLarge,
+  type ReadReply,
+  type ReportReply,
+  type Stage,
+  type StoreLarge,
+} from './jobs.ts';
 import type { Request, Response } from './protocol.ts';
 
 export type OnStage = (stage: Stage) => void;
@@ -33,7 +41,7 @@ class WorkerChecker implements Checker {
   private readonly pending = new Map<number, Pending>();
 
   private send(request: Unnumbered, onStage: OnStage): Promise<Response> {
-    const worker = this.worker ??= this.start();
+    const worker = (this.worker ??= this.start());
     const id = this.next++;
     return new Promise<Response>((resolve) => {
       this.pending.set(id, { resolve, onStage });
@@ -42,7 +50,10 @@ class WorkerChecker implements Checker {
   }
 
   private start(): Worker {
-    const worker = new Worker(new URL('./check.worker.ts', import.meta.url), { type: 'module', name: 'railcross-check' });
+    const worker = new Worker(new URL('./check.worker.ts', import.meta.url), {
+      type: 'module',
+      name: 'railcross-check',
+    });
     worker.addEventListener('message', (event: MessageEvent<Response>) => {
       const r = event.data;
       const p = this.pending.get(r.id);
@@ -53,7 +64,8 @@ class WorkerChecker implements Checker {
     });
     worker.addEventListener('error', (event) => {
       // A worker that fails to start or crashes answers every open request with the reason.
-      for (const [id, p] of this.pending) p.resolve({ id, kind: 'failed', error: event.message || 'the checking worker stopped' });
+      for (const [id, p] of this.pending)
+        p.resolve({ id, kind: 'failed', error: event.message || 'the checking worker stopped' });
       this.pending.clear();
       this.worker = null;
     });
@@ -84,7 +96,10 @@ export class InlineChecker implements Checker {
   async read(file: Blob, onStage: OnStage, store?: StoreLarge): Promise<ReadOutcome> {
     const key = this.next++;
     const read = readJob(await file.text(), onStage);
-    this.last = read.reply.ok && read.result !== null && read.reply.design !== null ? { key, design: read.reply.design, result: read.result } : null;
+    this.last =
+      read.reply.ok && read.result !== null && read.reply.design !== null
+        ? { key, design: read.reply.design, result: read.result }
+        : null;
     const { reply } = await storeIfLarge(read, store, onStage);
     return { reply, key };
   }

@@ -25,15 +25,15 @@ export interface Counts {
 
 export type ReadReply =
   | {
-    readonly ok: true;
-    /** The design, unless it was stored where it was read (`stored`): a large design never crosses to the page. */
-    readonly design: Design | null;
-    readonly stored: { readonly id: string; readonly rev: number } | null;
-    readonly title: string;
-    readonly parts: number;
-    readonly counts: Counts;
-    readonly checkMs: number;
-  }
+      readonly ok: true;
+      /** The design, unless it was stored where it was read (`stored`): a large design never crosses to the page. */
+      readonly design: Design | null;
+      readonly stored: { readonly id: string; readonly rev: number } | null;
+      readonly title: string;
+      readonly parts: number;
+      readonly counts: Counts;
+      readonly checkMs: number;
+    }
   | { readonly ok: false; readonly errors: readonly DesignError[] };
 
 export type ReportReply =
@@ -45,7 +45,10 @@ function countsOf(result: CheckResult): Counts {
 }
 
 /** Read a design file's text and check it. */
-export function readJob(text: string, progress: (stage: Stage) => void): { reply: ReadReply; result: CheckResult | null } {
+export function readJob(
+  text: string,
+  progress: (stage: Stage) => void,
+): { reply: ReadReply; result: CheckResult | null } {
   progress('reading');
   const read = readDesign(text);
   if (!read.ok) return { reply: { ok: false, errors: read.errors }, result: null };
@@ -53,7 +56,18 @@ export function readJob(text: string, progress: (stage: Stage) => void): { reply
   const start = performance.now();
   const result = check(read.design);
   const checkMs = performance.now() - start;
-  return { reply: { ok: true, design: read.design, stored: null, title: read.design.title, parts: read.design.parts.length, counts: countsOf(result), checkMs }, result };
+  return {
+    reply: {
+      ok: true,
+      design: read.design,
+      stored: null,
+      title: read.design.title,
+      parts: read.design.parts.length,
+      counts: countsOf(result),
+      checkMs,
+    },
+    result,
+  };
 }
 
 /** Where a read stores a design of more than `aboveParts` parts itself, as a new design of the library. */
@@ -66,7 +80,11 @@ export interface StoreLarge {
  * After `readJob`, a design above the limit is stored in the library from here (its own
  * connection to the database), so that the page never copies it in or out.
  */
-export async function storeIfLarge(read: { reply: ReadReply; result: CheckResult | null }, store: StoreLarge | undefined, progress: (stage: Stage) => void): Promise<{ reply: ReadReply; result: CheckResult | null }> {
+export async function storeIfLarge(
+  read: { reply: ReadReply; result: CheckResult | null },
+  store: StoreLarge | undefined,
+  progress: (stage: Stage) => void,
+): Promise<{ reply: ReadReply; result: CheckResult | null }> {
   const { reply } = read;
   if (!reply.ok || store === undefined || reply.parts <= store.aboveParts || reply.design === null) return read;
   progress('storing');
@@ -80,7 +98,11 @@ export async function storeIfLarge(read: { reply: ReadReply; result: CheckResult
 }
 
 /** The JSON report of a stored document (read and checked here) or of a design just checked. */
-export function reportJob(source: { readonly doc: unknown } | { readonly design: Design; readonly result: CheckResult }, progress: (stage: Stage) => void, now = new Date()): ReportReply {
+export function reportJob(
+  source: { readonly doc: unknown } | { readonly design: Design; readonly result: CheckResult },
+  progress: (stage: Stage) => void,
+  now = new Date(),
+): ReportReply {
   let design: Design;
   let result: CheckResult;
   if ('doc' in source) {

@@ -66,33 +66,58 @@ export function CrossingsTable() {
   if (rows.length === 0) return <p className="rc-empty">No net crosses rails.</p>;
   return (
     <>
-    <p className="rc-muted rc-tight">Worst high (NMH) and low (NML) noise margins of every net that joins pins of different rails, per power state. Click a row for its voltage ladder.</p>
-    <table className="rc-crossings" data-testid="crossings">
-      <thead>
-        <tr>
-          {COLUMNS.map((c) => (
-            <th key={c.key} scope="col" aria-sort={sort.key === c.key ? (sort.up ? 'ascending' : 'descending') : 'none'}>
-              <button type="button" className="rc-link" onClick={() => setSort({ key: c.key, up: sort.key === c.key ? !sort.up : true })}>
-                {c.title}{sort.key === c.key ? (sort.up ? ' ▲' : ' ▼') : ''}
-              </button>
-            </th>
-          ))}
-        </tr>
-      </thead>
-      <tbody>
-        {rows.map((r) => (
-          <tr key={`${r.scenario}:${r.net}`} data-net={r.net} data-severity={r.worst} data-scenario={r.scenario}
-            tabIndex={0} onClick={() => open(r)} onKeyDown={(e) => { if (e.key === 'Enter') open(r); }}>
-            <td>{r.label}</td>
-            <td>{r.rails.join(' ')}</td>
-            <td>{r.scenario}</td>
-            <td className="rc-num" data-margin={r.marginHigh ?? ''}>{margin(r.marginHigh)}</td>
-            <td className="rc-num" data-margin={r.marginLow ?? ''}>{margin(r.marginLow)}</td>
-            <td className={`rc-worst rc-worst--${r.worst}`}>{r.worst}</td>
+      <p className="rc-muted rc-tight">
+        Worst high (NMH) and low (NML) noise margins of every net that joins pins of different rails, per power state.
+        Click a row for its voltage ladder.
+      </p>
+      <table className="rc-crossings" data-testid="crossings">
+        <thead>
+          <tr>
+            {COLUMNS.map((c) => (
+              <th
+                key={c.key}
+                scope="col"
+                aria-sort={sort.key === c.key ? (sort.up ? 'ascending' : 'descending') : 'none'}
+              >
+                <button
+                  type="button"
+                  className="rc-link"
+                  onClick={() => setSort({ key: c.key, up: sort.key === c.key ? !sort.up : true })}
+                >
+                  {c.title}
+                  {sort.key === c.key ? (sort.up ? ' ▲' : ' ▼') : ''}
+                </button>
+              </th>
+            ))}
           </tr>
-        ))}
-      </tbody>
-    </table>
+        </thead>
+        <tbody>
+          {rows.map((r) => (
+            <tr
+              key={`${r.scenario}:${r.net}`}
+              data-net={r.net}
+              data-severity={r.worst}
+              data-scenario={r.scenario}
+              tabIndex={0}
+              onClick={() => open(r)}
+              onKeyDown={(e) => {
+                if (e.key === 'Enter') open(r);
+              }}
+            >
+              <td>{r.label}</td>
+              <td>{r.rails.join(' ')}</td>
+              <td>{r.scenario}</td>
+              <td className="rc-num" data-margin={r.marginHigh ?? ''}>
+                {margin(r.marginHigh)}
+              </td>
+              <td className="rc-num" data-margin={r.marginLow ?? ''}>
+                {margin(r.marginLow)}
+              </td>
+              <td className={`rc-worst rc-worst--${r.worst}`}>{r.worst}</td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
     </>
   );
 }

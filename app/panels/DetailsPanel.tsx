@@ -15,9 +15,15 @@ const PowerStatesEditor = memo(PowerStatesView);
 const ProfilesEditor = memo(ProfilesView);
 
 export function DetailsPanel() {
-  const part = useEditor((s) => (s.selection.parts.length === 1 ? partById(s.design.parts, s.selection.parts[0]!) : undefined));
-  const discrete = useEditor((s) => (s.selection.parts.length === 1 ? s.design.discretes?.find((d) => d.id === s.selection.parts[0]) : undefined));
-  const net = useEditor((s) => (s.selection.net === null ? undefined : s.design.nets.find((n) => n.id === s.selection.net)));
+  const part = useEditor((s) =>
+    s.selection.parts.length === 1 ? partById(s.design.parts, s.selection.parts[0]!) : undefined,
+  );
+  const discrete = useEditor((s) =>
+    s.selection.parts.length === 1 ? s.design.discretes?.find((d) => d.id === s.selection.parts[0]) : undefined,
+  );
+  const net = useEditor((s) =>
+    s.selection.net === null ? undefined : s.design.nets.find((n) => n.id === s.selection.net),
+  );
   const many = useEditor((s) => s.selection.parts.length + s.selection.wires.length);
   return (
     <section className="rc-details" aria-label="Details">
@@ -30,7 +36,11 @@ export function DetailsPanel() {
         ) : net !== undefined ? (
           <NetDetails net={net} />
         ) : (
-          <p className="rc-empty">{many > 1 ? `${many} items selected: Delete removes them; Ctrl+C copies the chips, arrow keys move them.` : 'Select a chip or a wire to edit it.'}</p>
+          <p className="rc-empty">
+            {many > 1
+              ? `${many} items selected: Delete removes them; Ctrl+C copies the chips, arrow keys move them.`
+              : 'Select a chip or a wire to edit it.'}
+          </p>
         )}
         <details className="rc-fold">
           <summary>Rails</summary>

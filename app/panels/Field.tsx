@@ -54,18 +54,44 @@ interface FieldProps {
   title?: string;
 }
 
-function Frame({ label, quiet, error, errorId, children }: { label: string; quiet?: boolean | undefined; error: string | null; errorId: string; children: React.ReactNode }) {
+function Frame({
+  label,
+  quiet,
+  error,
+  errorId,
+  children,
+}: {
+  label: string;
+  quiet?: boolean | undefined;
+  error: string | null;
+  errorId: string;
+  children: React.ReactNode;
+}) {
   return (
+    // biome-ignore lint/a11y/noLabelWithoutControl: the control is the child the caller passes in, wrapped by this label
     <label className={`rc-field${error !== null ? ' rc-field--invalid' : ''}`}>
       <span className={quiet === true ? 'rc-sr' : 'rc-field-label'}>{label}</span>
       {children}
-      {error !== null && <span className="rc-field-error" id={errorId} role="alert">{error}</span>}
+      {error !== null && (
+        <span className="rc-field-error" id={errorId} role="alert">
+          {error}
+        </span>
+      )}
     </label>
   );
 }
 
 /** One edited text input in its frame: shows `shown`, commits through `commit` (null, or why not). */
-function EditedInput({ label, quiet, testId, placeholder, title, shown, commit, decimal }: FieldProps & {
+function EditedInput({
+  label,
+  quiet,
+  testId,
+  placeholder,
+  title,
+  shown,
+  commit,
+  decimal,
+}: FieldProps & {
   shown: string;
   commit: (text: string) => string | null;
   decimal?: boolean;
@@ -76,16 +102,32 @@ function EditedInput({ label, quiet, testId, placeholder, title, shown, commit, 
   const readOnly = useEditor((s) => s.readOnly);
   return (
     <Frame label={label} quiet={quiet} error={f.error} errorId={errorId}>
-      <input type="text" inputMode={decimal === true ? 'decimal' : undefined} value={f.value} data-testid={testId} spellCheck={false} readOnly={readOnly}
-        aria-invalid={f.error !== null} placeholder={placeholder} title={title} aria-describedby={f.error !== null ? errorId : undefined}
-        onChange={(e) => f.onChange(e.target.value)} onBlur={f.onBlur} onKeyDown={f.onKeyDown} />
+      <input
+        type="text"
+        inputMode={decimal === true ? 'decimal' : undefined}
+        value={f.value}
+        data-testid={testId}
+        spellCheck={false}
+        readOnly={readOnly}
+        aria-invalid={f.error !== null}
+        placeholder={placeholder}
+        title={title}
+        aria-describedby={f.error !== null ? errorId : undefined}
+        onChange={(e) => f.onChange(e.target.value)}
+        onBlur={f.onBlur}
+        onKeyDown={f.onKeyDown}
+      />
     </Frame>
   );
 }
 
 const reason = (out: Outcome): string | null => (out.ok ? null : out.reason);
 
-export function TextField({ value, onCommit, ...field }: FieldProps & { value: string; onCommit: (text: string) => Outcome }) {
+export function TextField({
+  value,
+  onCommit,
+  ...field
+}: FieldProps & { value: string; onCommit: (text: string) => Outcome }) {
   return <EditedInput {...field} shown={value} commit={(text) => reason(onCommit(text))} />;
 }
 
@@ -103,24 +145,39 @@ export interface QuantityFieldProps extends FieldProps {
 export function QuantityField({ value, unit, onCommit, format, parse, ...field }: QuantityFieldProps) {
   const shown = format !== undefined ? format(value) : formatQuantity(value, unit, 4);
   return (
-    <EditedInput {...field} decimal shown={shown} commit={(text) => {
-      const read = parse !== undefined ? parse(text) : parseQuantity(text, unit);
-      return read.ok ? reason(onCommit(read.value)) : read.error;
-    }} />
+    <EditedInput
+      {...field}
+      decimal
+      shown={shown}
+      commit={(text) => {
+        const read = parse !== undefined ? parse(text) : parseQuantity(text, unit);
+        return read.ok ? reason(onCommit(read.value)) : read.error;
+      }}
+    />
   );
 }
 
 /** A quantity that may be left empty: empty text stores nothing (`undefined`), and the placeholder says what applies then. */
-export function OptionalQuantityField({ value, unit, onCommit, ...field }: FieldProps & {
+export function OptionalQuantityField({
+  value,
+  unit,
+  onCommit,
+  ...field
+}: FieldProps & {
   value: number | undefined;
   unit: Unit;
   onCommit: (value: number | undefined) => Outcome;
 }) {
   return (
-    <EditedInput {...field} decimal shown={value === undefined ? '' : formatQuantity(value, unit, 4)} commit={(text) => {
-      if (text.trim() === '') return reason(onCommit(undefined));
-      const read = parseQuantity(text, unit);
-      return read.ok ? reason(onCommit(read.value)) : read.error;
-    }} />
+    <EditedInput
+      {...field}
+      decimal
+      shown={value === undefined ? '' : formatQuantity(value, unit, 4)}
+      commit={(text) => {
+        if (text.trim() === '') return reason(onCommit(undefined));
+        const read = parseQuantity(text, unit);
+        return read.ok ? reason(onCommit(read.value)) : read.error;
+      }}
+    />
   );
 }

@@ -23,28 +23,64 @@ function WaiverForm({ finding, state, onDone }: { finding: Finding; state: strin
   const [everywhere, setEverywhere] = useState(false);
   const [error, setError] = useState<string | null>(null);
   const accept = () => {
-    const out = store.getState().apply(addWaiver({ net: finding.net!, rule: finding.rule, scenario: everywhere ? undefined : finding.scenario }, note));
+    const out = store
+      .getState()
+      .apply(
+        addWaiver({ net: finding.net!, rule: finding.rule, scenario: everywhere ? undefined : finding.scenario }, note),
+      );
     if (out.ok) onDone();
     else setError(out.reason);
   };
   return (
-    <form className="rc-waive-form" aria-label={`Accept ${finding.rule} on ${finding.net}`} data-testid="waive-form"
-      onSubmit={(e) => { e.preventDefault(); accept(); }}>
-      <label htmlFor={noteId} className="rc-field-label">Why this is acceptable</label>
-      <textarea id={noteId} value={note} rows={2} data-testid="waive-note" autoFocus
-        onChange={(e) => { setNote(e.target.value); setError(null); }}
+    <form
+      className="rc-waive-form"
+      aria-label={`Accept ${finding.rule} on ${finding.net}`}
+      data-testid="waive-form"
+      onSubmit={(e) => {
+        e.preventDefault();
+        accept();
+      }}
+    >
+      <label htmlFor={noteId} className="rc-field-label">
+        Why this is acceptable
+      </label>
+      <textarea
+        id={noteId}
+        value={note}
+        rows={2}
+        data-testid="waive-note"
+        // biome-ignore lint/a11y/noAutofocus: the note field opens because the user just asked to waive; typing goes there
+        autoFocus
+        onChange={(e) => {
+          setNote(e.target.value);
+          setError(null);
+        }}
         onKeyDown={(e) => {
           if (e.key === 'Enter' && (e.ctrlKey || e.metaKey)) accept();
           if (e.key === 'Escape') onDone();
-        }} />
+        }}
+      />
       <label className="rc-toggle">
-        <input type="checkbox" checked={everywhere} onChange={(e) => setEverywhere(e.target.checked)} data-testid="waive-everywhere" />
+        <input
+          type="checkbox"
+          checked={everywhere}
+          onChange={(e) => setEverywhere(e.target.checked)}
+          data-testid="waive-everywhere"
+        />
         in every power state, not only “{state}”
       </label>
-      {error !== null && <span className="rc-field-error" role="alert">{error}</span>}
+      {error !== null && (
+        <span className="rc-field-error" role="alert">
+          {error}
+        </span>
+      )}
       <div className="rc-waive-buttons">
-        <button type="submit" className="rc-primary" disabled={note.trim() === ''} data-testid="waive-accept">Accept</button>
-        <button type="button" onClick={onDone}>Cancel</button>
+        <button type="submit" className="rc-primary" disabled={note.trim() === ''} data-testid="waive-accept">
+          Accept
+        </button>
+        <button type="button" onClick={onDone}>
+          Cancel
+        </button>
       </div>
     </form>
   );
@@ -63,30 +99,62 @@ function FindingRowView({ finding: f, text, showState, onPick }: RowProps) {
   const waived = f.waived !== undefined;
   return (
     <li className={`rc-finding-item${waived ? ' rc-finding-item--waived' : ''}`} data-finding-row={f.id}>
-      <button type="button" className={`rc-finding${waived ? ' rc-finding--waived' : ''}`} onClick={() => onPick(f)}
-        data-net={f.net ?? ''} data-severity={f.severity} data-rule={f.rule} data-finding={f.id} data-waived={waived ? 'true' : 'false'}>
+      <button
+        type="button"
+        className={`rc-finding${waived ? ' rc-finding--waived' : ''}`}
+        onClick={() => onPick(f)}
+        data-net={f.net ?? ''}
+        data-severity={f.severity}
+        data-rule={f.rule}
+        data-finding={f.id}
+        data-waived={waived ? 'true' : 'false'}
+      >
         <span className="rc-finding-top">
           <span className="rc-finding-place">{text.place}</span>
-          <span className="rc-finding-rule">{text.rule}{showState && ` · ${text.state}`}</span>
+          <span className="rc-finding-rule">
+            {text.rule}
+            {showState && ` · ${text.state}`}
+          </span>
         </span>
         <span className="rc-finding-msg">{f.message}</span>
         {waived ? (
-          <span className="rc-finding-waiver" data-testid="waiver-note"><span className="rc-waived-badge">Waived</span> {f.waived}</span>
+          <span className="rc-finding-waiver" data-testid="waiver-note">
+            <span className="rc-waived-badge">Waived</span> {f.waived}
+          </span>
         ) : (
           <span className="rc-finding-hint">{f.hint}</span>
         )}
       </button>
       <div className="rc-finding-actions">
         {f.net === null ? (
-          <span className="rc-muted" title="A waiver belongs to a net in version 1 of the design format">On no net: cannot be waived in this version.</span>
+          <span className="rc-muted" title="A waiver belongs to a net in version 1 of the design format">
+            On no net: cannot be waived in this version.
+          </span>
         ) : waived ? (
-          <button type="button" className="rc-link" data-testid="unwaive"
-            onClick={() => store.getState().apply(removeWaiverFor(f.net!, f.rule, f.scenario))}>Withdraw the waiver</button>
+          <button
+            type="button"
+            className="rc-link"
+            data-testid="unwaive"
+            onClick={() => store.getState().apply(removeWaiverFor(f.net!, f.rule, f.scenario))}
+          >
+            Withdraw the waiver
+          </button>
         ) : waiving ? (
-          <WaiverForm finding={f} state={f.scenario === ALL_ON ? 'All rails on' : text.state} onDone={() => setWaiving(false)} />
+          <WaiverForm
+            finding={f}
+            state={f.scenario === ALL_ON ? 'All rails on' : text.state}
+            onDone={() => setWaiving(false)}
+          />
         ) : (
-          <button type="button" className="rc-link" data-testid="waive" aria-label={`Accept with a note: ${text.rule} on ${text.place}`}
-            onClick={() => setWaiving(true)}>Accept with a note…</button>
+          <button
+            type="button"
+            className="rc-link"
+            data-testid="waive"
+            aria-label={`Accept with a note: ${text.rule} on ${text.place}`}
+            onClick={() => setWaiving(true)}
+          >
+            Accept with a note…
+          </button>
         )}
         {!waiving && <FixMenu finding={f} />}
       </div>
@@ -95,6 +163,13 @@ function FindingRowView({ finding: f, text, showState, onPick }: RowProps) {
 }
 
 /** A row re-renders only when its finding (kept by the engine while its net is unchanged) or its text changes. */
-export const FindingRow = memo(FindingRowView, (a, b) =>
-  a.finding === b.finding && a.showState === b.showState && a.onPick === b.onPick &&
-  a.text.place === b.text.place && a.text.rule === b.text.rule && a.text.state === b.text.state);
+export const FindingRow = memo(
+  FindingRowView,
+  (a, b) =>
+    a.finding === b.finding &&
+    a.showState === b.showState &&
+    a.onPick === b.onPick &&
+    a.text.place === b.text.place &&
+    a.text.rule === b.text.rule &&
+    a.text.state === b.text.state,
+);

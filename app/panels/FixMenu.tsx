@@ -7,7 +7,14 @@
 import { useMemo, useState } from 'react';
 import type { Finding, Summary } from '../../rules/engine/types.ts';
 import { SeverityGlyph } from '../canvas/SeverityGlyph.tsx';
-import { applyFix, fixesFor, mayHaveFixes, previewFix, type FixPreview, type QuickFix } from '../store/commands/fixes/index.ts';
+import {
+  applyFix,
+  fixesFor,
+  mayHaveFixes,
+  previewFix,
+  type FixPreview,
+  type QuickFix,
+} from '../store/commands/fixes/index.ts';
 import { useEditorStore } from '../store/EditorProvider.tsx';
 import './explain.css';
 
@@ -16,17 +23,30 @@ function counts(s: Summary): string {
 }
 
 function Changes({ preview }: { preview: FixPreview }) {
-  if (preview.refused !== undefined) return <p className="rc-field-error" role="alert">{preview.refused}</p>;
+  if (preview.refused !== undefined)
+    return (
+      <p className="rc-field-error" role="alert">
+        {preview.refused}
+      </p>
+    );
   return (
     <div className="rc-fix-preview" data-testid="fix-preview">
-      <p className="rc-tight">Removes {preview.gone.length} finding{preview.gone.length === 1 ? '' : 's'}, brings {preview.added.length}:</p>
+      <p className="rc-tight">
+        Removes {preview.gone.length} finding{preview.gone.length === 1 ? '' : 's'}, brings {preview.added.length}:
+      </p>
       <ul>
         {preview.gone.map((f) => (
-          <li key={`g-${f.id}`} className="rc-fix-gone"><SeverityGlyph severity={f.severity} /> <s>{f.rule} · {f.net ?? f.pins.join(', ')}</s></li>
+          <li key={`g-${f.id}`} className="rc-fix-gone">
+            <SeverityGlyph severity={f.severity} />{' '}
+            <s>
+              {f.rule} · {f.net ?? f.pins.join(', ')}
+            </s>
+          </li>
         ))}
         {preview.added.map((f) => (
           <li key={`a-${f.id}`} className="rc-fix-added" data-severity={f.severity}>
-            <SeverityGlyph severity={f.severity} /> {f.rule} · {f.net ?? f.pins.join(', ')}{f.waived !== undefined && ' (waived)'}
+            <SeverityGlyph severity={f.severity} /> {f.rule} · {f.net ?? f.pins.join(', ')}
+            {f.waived !== undefined && ' (waived)'}
           </li>
         ))}
       </ul>
@@ -51,17 +71,39 @@ function FixOption({ fix, onApplied }: { fix: QuickFix; onApplied: (before: Summ
       <p className="rc-tight">{fix.sentence}</p>
       {fix.needsConfirmation === true && (
         <label className="rc-toggle">
-          <input type="checkbox" checked={confirmed} onChange={(e) => setConfirmed(e.target.checked)} data-testid="fix-confirm" />
+          <input
+            type="checkbox"
+            checked={confirmed}
+            onChange={(e) => setConfirmed(e.target.checked)}
+            data-testid="fix-confirm"
+          />
           I have confirmed this in the part's datasheet
         </label>
       )}
       {preview !== null && <Changes preview={preview} />}
-      {error !== null && <p className="rc-field-error" role="alert">{error}</p>}
+      {error !== null && (
+        <p className="rc-field-error" role="alert">
+          {error}
+        </p>
+      )}
       <div className="rc-waive-buttons">
-        <button type="button" onClick={() => { const s = store.getState(); setPreview(previewFix(fix, s.design, s.result)); }} data-testid="fix-try">
+        <button
+          type="button"
+          onClick={() => {
+            const s = store.getState();
+            setPreview(previewFix(fix, s.design, s.result));
+          }}
+          data-testid="fix-try"
+        >
           What it changes
         </button>
-        <button type="button" className="rc-primary" onClick={apply} disabled={fix.needsConfirmation === true && !confirmed} data-testid="fix-apply">
+        <button
+          type="button"
+          className="rc-primary"
+          onClick={apply}
+          disabled={fix.needsConfirmation === true && !confirmed}
+          data-testid="fix-apply"
+        >
           Apply
         </button>
       </div>
@@ -82,25 +124,44 @@ export function FixMenu({ finding }: { finding: Finding }) {
   if (!mayHaveFixes(finding)) return null;
   if (!open) {
     return (
-      <button type="button" className="rc-link" data-testid="fix-open" aria-expanded="false" onClick={() => setOpen(true)}>
+      <button
+        type="button"
+        className="rc-link"
+        data-testid="fix-open"
+        aria-expanded="false"
+        onClick={() => setOpen(true)}
+      >
         Fix…
       </button>
     );
   }
   return (
-    <div className="rc-fix-menu" role="group" aria-label={`Fixes for ${finding.rule} on ${finding.net ?? finding.pins.join(', ')}`}>
+    // biome-ignore lint/a11y/useSemanticElements: a group of buttons, not a form: a fieldset would bring form semantics and styling
+    <div
+      className="rc-fix-menu"
+      role="group"
+      aria-label={`Fixes for ${finding.rule} on ${finding.net ?? finding.pins.join(', ')}`}
+    >
       {fixes.length === 0 && <p className="rc-muted rc-tight">No quick fix applies to this one: see the hint.</p>}
       <ul>
         {fixes.map((fix) => (
-          <FixOption key={fix.id} fix={fix}
+          <FixOption
+            key={fix.id}
+            fix={fix}
             onApplied={(before, after) => {
               // The row itself goes when its finding does: the status line keeps the account.
-              store.getState().notify({ kind: 'done', text: `${fix.title}: before ${counts(before)}, after ${counts(after)} (Ctrl+Z undoes it).` });
+              store.getState().notify({
+                kind: 'done',
+                text: `${fix.title}: before ${counts(before)}, after ${counts(after)} (Ctrl+Z undoes it).`,
+              });
               setOpen(false);
-            }} />
+            }}
+          />
         ))}
       </ul>
-      <button type="button" className="rc-link" onClick={() => setOpen(false)}>Close</button>
+      <button type="button" className="rc-link" onClick={() => setOpen(false)}>
+        Close
+      </button>
     </div>
   );
 }

@@ -6,7 +6,14 @@
 import { useId, type ReactNode } from 'react';
 import { NativeDialog } from './NativeDialog.tsx';
 
-export function Modal({ title, onClose, children, footer, wide, testId }: {
+export function Modal({
+  title,
+  onClose,
+  children,
+  footer,
+  wide,
+  testId,
+}: {
   title: string;
   onClose: () => void;
   children: ReactNode;
@@ -16,11 +23,17 @@ export function Modal({ title, onClose, children, footer, wide, testId }: {
 }) {
   const headingId = useId();
   return (
-    <NativeDialog className={`rc-modal${wide === true ? ' rc-modal--wide' : ''}`} labelledBy={headingId} onClose={onClose}
-      {...(testId === undefined ? {} : { testId })}>
+    <NativeDialog
+      className={`rc-modal${wide === true ? ' rc-modal--wide' : ''}`}
+      labelledBy={headingId}
+      onClose={onClose}
+      {...(testId === undefined ? {} : { testId })}
+    >
       <header className="rc-modal-head">
         <h2 id={headingId}>{title}</h2>
-        <button type="button" className="rc-icon-btn" aria-label="Close" onClick={onClose}>×</button>
+        <button type="button" className="rc-icon-btn" aria-label="Close" onClick={onClose}>
+          ×
+        </button>
       </header>
       <div className="rc-modal-body">{children}</div>
       {footer !== undefined && <footer className="rc-modal-foot">{footer}</footer>}

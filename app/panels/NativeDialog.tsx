@@ -15,7 +15,15 @@ interface NativeDialogProps {
  * A native modal dialog: the browser keeps focus inside it and makes the page behind inert,
  * which a div with aria-modal cannot. Every dialog of the editor and the library is one.
  */
-export function NativeDialog({ className, labelledBy, describedBy, role, testId, onClose, children }: NativeDialogProps) {
+export function NativeDialog({
+  className,
+  labelledBy,
+  describedBy,
+  role,
+  testId,
+  onClose,
+  children,
+}: NativeDialogProps) {
   const ref = useRef<HTMLDialogElement>(null);
   useEffect(() => {
     const dialog = ref.current;

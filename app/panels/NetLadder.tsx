@@ -10,7 +10,10 @@ import { useEditor } from '../store/EditorProvider.tsx';
 export function NetLadder({ net }: { net: string }) {
   const view = useEditor((s) => s.result.nets.get(s.powerState)?.get(net)?.view);
   const state = useEditor((s) => s.result.states.find((p) => p.id === s.powerState));
-  const ladder = useMemo(() => (view === undefined || state === undefined ? undefined : ladderFor(view, state)), [view, state]);
+  const ladder = useMemo(
+    () => (view === undefined || state === undefined ? undefined : ladderFor(view, state)),
+    [view, state],
+  );
   if (ladder === undefined) return null;
   return (
     <section className="rc-net-ladder" aria-label={`Voltage ladder of ${net}`} data-testid="net-ladder">

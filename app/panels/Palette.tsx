@@ -13,8 +13,16 @@ import type { DiscreteKind } from '../../rules/model/schema.ts';
 /** The parts between chips, in the trade's words. */
 const BETWEEN: readonly { kind: DiscreteKind; name: string; title: string }[] = [
   { kind: 'resistor', name: 'Resistor', title: 'A resistor: in series, or tied to a rail or ground as a pull' },
-  { kind: 'fet-shifter', name: 'FET shifter', title: 'A bidirectional N-MOSFET level shifter for open-drain lines: S on the low side, D on the high side' },
-  { kind: 'diode-shifter', name: 'Diode shifter', title: 'A Schottky diode shifter: K on the driver\'s net, A on the receiver\'s (with its own pull-up)' },
+  {
+    kind: 'fet-shifter',
+    name: 'FET shifter',
+    title: 'A bidirectional N-MOSFET level shifter for open-drain lines: S on the low side, D on the high side',
+  },
+  {
+    kind: 'diode-shifter',
+    name: 'Diode shifter',
+    title: "A Schottky diode shifter: K on the driver's net, A on the receiver's (with its own pull-up)",
+  },
 ];
 
 function groupByName(list: readonly Template[]): [string, Template[]][] {
@@ -72,19 +80,44 @@ export function Palette() {
     <aside className="rc-palette" aria-label="Parts">
       <div className="rc-palette-top">
         <h2 className="rc-panel-head">Parts</h2>
-        <button type="button" className="rc-new-chip" data-testid="new-chip" title="Make a chip of your own from a pin table"
-          onClick={() => store.getState().openDialog({ kind: 'chip', part: null })}>New chip…</button>
+        <button
+          type="button"
+          className="rc-new-chip"
+          data-testid="new-chip"
+          title="Make a chip of your own from a pin table"
+          onClick={() => store.getState().openDialog({ kind: 'chip', part: null })}
+        >
+          New chip…
+        </button>
       </div>
-      <input className="rc-search" type="search" placeholder="Search name or family" aria-label="Search parts"
-        value={query} onChange={(e) => setQuery(e.target.value)} onKeyDown={onSearchKey} data-testid="palette-search" />
+      <input
+        className="rc-search"
+        type="search"
+        placeholder="Search name or family"
+        aria-label="Search parts"
+        value={query}
+        onChange={(e) => setQuery(e.target.value)}
+        onKeyDown={onSearchKey}
+        data-testid="palette-search"
+      />
       <ul className="rc-palette-list" ref={listRef} aria-label="Part templates">
         {groups.map(([name, list]) => (
           <li key={name} className="rc-palette-group">
             <div className="rc-palette-name">{name}</div>
             <ul>
               {list.map((t) => (
-                <li key={t.id} className="rc-template" tabIndex={0} draggable data-template={t.id} title={`${t.name}: ${t.family}. Drag onto the canvas, or press Enter.`}
-                  onKeyDown={(e) => onItemKey(e, t)} onDragStart={(e) => onDragStart(e, t)} onDoubleClick={() => place(t.id)}>
+                <li
+                  key={t.id}
+                  className="rc-template"
+                  // biome-ignore lint/a11y/noNoninteractiveTabindex: a palette entry is picked with Enter (places the part) as well as dragged
+                  tabIndex={0}
+                  draggable
+                  data-template={t.id}
+                  title={`${t.name}: ${t.family}. Drag onto the canvas, or press Enter.`}
+                  onKeyDown={(e) => onItemKey(e, t)}
+                  onDragStart={(e) => onDragStart(e, t)}
+                  onDoubleClick={() => place(t.id)}
+                >
                   {t.family}
                 </li>
               ))}
@@ -93,10 +126,20 @@ export function Palette() {
         ))}
         {found.length === 0 && <li className="rc-empty">No part matches “{query}”.</li>}
       </ul>
+      {/* biome-ignore lint/a11y/useSemanticElements: a group of buttons, not a form */}
       <div className="rc-palette-between" role="group" aria-label="Between chips">
         <h3>Between chips</h3>
         {BETWEEN.map((b) => (
-          <button key={b.kind} type="button" className="rc-new-chip" data-testid={`place-${b.kind}`} title={b.title} onClick={() => placeDiscrete(b.kind)}>{b.name}</button>
+          <button
+            key={b.kind}
+            type="button"
+            className="rc-new-chip"
+            data-testid={`place-${b.kind}`}
+            title={b.title}
+            onClick={() => placeDiscrete(b.kind)}
+          >
+            {b.name}
+          </button>
         ))}
       </div>
       <div className="rc-palette-foot">Drag a part onto the canvas, or select it and press Enter.</div>

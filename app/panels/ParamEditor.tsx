@@ -13,7 +13,14 @@ export interface Fallback {
   readonly from: string;
 }
 
-export function ParamEditor({ params, onChange, fallback, label, testId, valueHeading = 'Override' }: {
+export function ParamEditor({
+  params,
+  onChange,
+  fallback,
+  label,
+  testId,
+  valueHeading = 'Override',
+}: {
   params: Params | undefined;
   /** Store a value, or take the key away (`undefined`). */
   onChange: (key: ParamKey, value: unknown) => Outcome;
@@ -39,18 +46,34 @@ export function ParamEditor({ params, onChange, fallback, label, testId, valueHe
           const other = fallback?.(field.key);
           return (
             <tr key={field.key} data-param={field.key}>
-              <th scope="row"><abbr title={field.meaning}>{field.label}</abbr></th>
+              <th scope="row">
+                <abbr title={field.meaning}>{field.label}</abbr>
+              </th>
               <td>
-                <TextField quiet label={`${field.label}, ${field.meaning}`} title={`${field.meaning}; e.g. ${field.example}`}
-                  value={formatParam(field.key, value)} placeholder={other?.text ?? field.example} testId={`${testId}-${field.key}`}
+                <TextField
+                  quiet
+                  label={`${field.label}, ${field.meaning}`}
+                  title={`${field.meaning}; e.g. ${field.example}`}
+                  value={formatParam(field.key, value)}
+                  placeholder={other?.text ?? field.example}
+                  testId={`${testId}-${field.key}`}
                   onCommit={(text) => {
                     if (text.trim() === '') return onChange(field.key, undefined);
                     const read = parseParam(field.key, text);
                     return read.ok ? onChange(field.key, read.value) : { ok: false, reason: read.error };
-                  }} />
+                  }}
+                />
               </td>
               {fallback !== undefined && (
-                <td className="rc-param-from">{other === undefined ? <span className="rc-muted">not given</span> : <><span className="rc-mono">{other.text}</span> <span className="rc-muted">{other.from}</span></>}</td>
+                <td className="rc-param-from">
+                  {other === undefined ? (
+                    <span className="rc-muted">not given</span>
+                  ) : (
+                    <>
+                      <span className="rc-mono">{other.text}</span> <span className="rc-muted">{other.from}</span>
+                    </>
+                  )}
+                </td>
               )}
             </tr>
           );

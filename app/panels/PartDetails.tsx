@@ -20,39 +20,75 @@ export function PartDetails({ part }: { part: Part }) {
   const overrides = Object.keys(part.params ?? {}).length;
   return (
     <div className="rc-part-details" data-testid="part-details">
-      <h3><span className="rc-chip-id">{part.id}</span> {part.label}</h3>
+      <h3>
+        <span className="rc-chip-id">{part.id}</span> {part.label}
+      </h3>
       <div className="rc-two">
-        <TextField label="Designator" value={part.id} testId="part-id" onCommit={(t) => {
-          const out = apply(renamePart(part.id, t));
-          if (out.ok) store.getState().select({ parts: [t.trim()], wires: [], net: null });
-          return out;
-        }} />
-        <TextField label="Label" value={part.label} testId="part-label" onCommit={(t) => apply(setPartLabel(part.id, t))} />
+        <TextField
+          label="Designator"
+          value={part.id}
+          testId="part-id"
+          onCommit={(t) => {
+            const out = apply(renamePart(part.id, t));
+            if (out.ok) store.getState().select({ parts: [t.trim()], wires: [], net: null });
+            return out;
+          }}
+        />
+        <TextField
+          label="Label"
+          value={part.label}
+          testId="part-label"
+          onCommit={(t) => apply(setPartLabel(part.id, t))}
+        />
       </div>
       <label className="rc-field">
         <span className="rc-field-label">Rail</span>
         <select value={part.rail} data-testid="part-rail" onChange={(e) => apply(setPartRail(part.id, e.target.value))}>
-          {rails.map((r) => <option key={r.id} value={r.id}>{r.label} ({r.nominal} V)</option>)}
+          {rails.map((r) => (
+            <option key={r.id} value={r.id}>
+              {r.label} ({r.nominal} V)
+            </option>
+          ))}
         </select>
       </label>
       <label className="rc-field">
         <span className="rc-field-label">Profile</span>
-        <select value={part.profile} data-testid="part-profile" onChange={(e) => apply(setPartProfile(part.id, e.target.value))}>
+        <select
+          value={part.profile}
+          data-testid="part-profile"
+          onChange={(e) => apply(setPartProfile(part.id, e.target.value))}
+        >
           <ProfileOptions local={local} />
         </select>
       </label>
       <p className="rc-profile-source" data-testid="part-profile-source">
-        <span className="rc-muted">Source of the profile's numbers: </span>{profile?.source ?? 'unknown profile'}
-        {local?.some((p) => p.id === part.profile) === true && <span className="rc-muted"> (a profile of this design)</span>}
+        <span className="rc-muted">Source of the profile's numbers: </span>
+        {profile?.source ?? 'unknown profile'}
+        {local?.some((p) => p.id === part.profile) === true && (
+          <span className="rc-muted"> (a profile of this design)</span>
+        )}
       </p>
-      <button type="button" data-testid="part-edit" onClick={() => store.getState().openDialog({ kind: 'chip', part: part.id })}>
+      <button
+        type="button"
+        data-testid="part-edit"
+        onClick={() => store.getState().openDialog({ kind: 'chip', part: part.id })}
+      >
         Edit pins and overrides…
       </button>
-      {overrides > 0 && <span className="rc-muted"> {overrides} override{overrides === 1 ? '' : 's'} for every pin</span>}
+      {overrides > 0 && (
+        <span className="rc-muted">
+          {' '}
+          {overrides} override{overrides === 1 ? '' : 's'} for every pin
+        </span>
+      )}
       {part.pins.some((p) => p.role !== 'input') && (
         <p>
-          <button type="button" data-testid="part-reset-state" onClick={() => apply(setResetState(part.id))}
-            title="In the power state “reset”, its outputs and bidir pins become inputs, as a controller's pins are before firmware runs">
+          <button
+            type="button"
+            data-testid="part-reset-state"
+            onClick={() => apply(setResetState(part.id))}
+            title="In the power state “reset”, its outputs and bidir pins become inputs, as a controller's pins are before firmware runs"
+          >
             Reset state
           </button>
           <span className="rc-muted"> its outputs as inputs before firmware runs</span>
@@ -66,10 +102,19 @@ export function PartDetails({ part }: { part: Part }) {
           const own = Object.keys(pin.params ?? {}).length;
           return (
             <li key={pin.id} className="rc-pin-item">
-              <button type="button" className="rc-pin-toggle" aria-expanded={open} data-testid={`pin-toggle-${pin.id}`} onClick={() => setOpenPin(open ? null : pin.id)}>
+              <button
+                type="button"
+                className="rc-pin-toggle"
+                aria-expanded={open}
+                data-testid={`pin-toggle-${pin.id}`}
+                onClick={() => setOpenPin(open ? null : pin.id)}
+              >
                 <PinGlyph kind={kind} side="right" />
                 <span className="rc-pin-name">{pin.id}</span>
-                <span className="rc-muted">{GLYPH_TEXT[kind]} · {sideOf(pin)}{own > 0 ? ` · ${own} override${own === 1 ? '' : 's'}` : ''}</span>
+                <span className="rc-muted">
+                  {GLYPH_TEXT[kind]} · {sideOf(pin)}
+                  {own > 0 ? ` · ${own} override${own === 1 ? '' : 's'}` : ''}
+                </span>
               </button>
               {open && <PinEffective part={part} pin={pin} />}
             </li>

@@ -22,25 +22,47 @@ export function PinEffective({ part, pin }: { part: Part; pin: Pin }) {
   return (
     <div className="rc-pin-effective" data-testid={`pin-effective-${pin.id}`}>
       <p className="rc-muted">
-        Rail {rail?.label ?? r.rail}{pin.rail !== undefined ? ' (the pin\'s own)' : ''}; {fromProfile}{pin.profile !== undefined ? ' (the pin\'s own)' : ''}.
-        {profile !== undefined && <> Source of the profile: <span className="rc-source">{profile.source}</span></>}
+        Rail {rail?.label ?? r.rail}
+        {pin.rail !== undefined ? " (the pin's own)" : ''}; {fromProfile}
+        {pin.profile !== undefined ? " (the pin's own)" : ''}.
+        {profile !== undefined && (
+          <>
+            {' '}
+            Source of the profile: <span className="rc-source">{profile.source}</span>
+          </>
+        )}
       </p>
       {rows.length === 0 ? (
         <p className="rc-muted">No parameters: the profile gives none.</p>
       ) : (
         <table className="rc-effective" aria-label={`Effective parameters of ${r.key}`}>
-          <thead><tr><th scope="col">Parameter</th><th scope="col">Value</th><th scope="col">From</th></tr></thead>
+          <thead>
+            <tr>
+              <th scope="col">Parameter</th>
+              <th scope="col">Value</th>
+              <th scope="col">From</th>
+            </tr>
+          </thead>
           <tbody>
             {rows.map((f) => {
               const value = r.params[f.key];
               const origin = r.origin[f.key];
-              const atRail = LEVEL_KEYS.has(f.key) && typeof value === 'string' && rail !== undefined
-                ? ` = ${formatQuantity(levelAt(value as Level, rail.nominal), 'V', 3)} at ${formatQuantity(rail.nominal, 'V')}` : '';
+              const atRail =
+                LEVEL_KEYS.has(f.key) && typeof value === 'string' && rail !== undefined
+                  ? ` = ${formatQuantity(levelAt(value as Level, rail.nominal), 'V', 3)} at ${formatQuantity(rail.nominal, 'V')}`
+                  : '';
               return (
                 <tr key={f.key} data-param={f.key} data-origin={origin}>
-                  <th scope="row"><abbr title={f.meaning}>{f.label}</abbr></th>
-                  <td className="rc-mono">{formatParam(f.key, value)}{atRail}</td>
-                  <td className={`rc-origin rc-origin--${origin}`}>{origin === 'pin' ? 'pin override' : origin === 'part' ? 'part override' : fromProfile}</td>
+                  <th scope="row">
+                    <abbr title={f.meaning}>{f.label}</abbr>
+                  </th>
+                  <td className="rc-mono">
+                    {formatParam(f.key, value)}
+                    {atRail}
+                  </td>
+                  <td className={`rc-origin rc-origin--${origin}`}>
+                    {origin === 'pin' ? 'pin override' : origin === 'part' ? 'part override' : fromProfile}
+                  </td>
                 </tr>
               );
             })}

@@ -15,21 +15,39 @@ export function PowerStatesEditor() {
       {(scenarios ?? []).map((sc) => (
         <div key={sc.id} className="rc-state-row" data-state={sc.id}>
           <div className="rc-rail-top">
-            <TextField label={`Name of power state ${sc.id}`} quiet value={sc.label} onCommit={(t) => apply(setPowerStateLabel(sc.id, t))} />
-            <button type="button" className="rc-icon-btn" aria-label={`Delete power state ${sc.label}`} onClick={() => apply(deletePowerState(sc.id))}>×</button>
+            <TextField
+              label={`Name of power state ${sc.id}`}
+              quiet
+              value={sc.label}
+              onCommit={(t) => apply(setPowerStateLabel(sc.id, t))}
+            />
+            <button
+              type="button"
+              className="rc-icon-btn"
+              aria-label={`Delete power state ${sc.label}`}
+              onClick={() => apply(deletePowerState(sc.id))}
+            >
+              ×
+            </button>
           </div>
           <fieldset className="rc-off">
             <legend>Rails off</legend>
             {rails.map((r) => (
               <label key={r.id}>
-                <input type="checkbox" checked={sc.off.includes(r.id)} onChange={(e) => apply(setRailOff(sc.id, r.id, e.target.checked))} />
+                <input
+                  type="checkbox"
+                  checked={sc.off.includes(r.id)}
+                  onChange={(e) => apply(setRailOff(sc.id, r.id, e.target.checked))}
+                />
                 {r.label}
               </label>
             ))}
           </fieldset>
         </div>
       ))}
-      <button type="button" className="rc-add" onClick={() => apply(addPowerState())}>Add a power state</button>
+      <button type="button" className="rc-add" onClick={() => apply(addPowerState())}>
+        Add a power state
+      </button>
     </div>
   );
 }

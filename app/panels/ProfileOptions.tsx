@@ -7,11 +7,19 @@ export function ProfileOptions({ local }: { local: readonly Profile[] | undefine
     <>
       {local !== undefined && local.length > 0 && (
         <optgroup label="This design">
-          {local.map((p) => <option key={p.id} value={p.id}>{p.label}</option>)}
+          {local.map((p) => (
+            <option key={p.id} value={p.id}>
+              {p.label}
+            </option>
+          ))}
         </optgroup>
       )}
       <optgroup label="Library">
-        {BUILTIN_PROFILES.filter((p) => !local?.some((l) => l.id === p.id)).map((p) => <option key={p.id} value={p.id}>{p.label}</option>)}
+        {BUILTIN_PROFILES.filter((p) => !local?.some((l) => l.id === p.id)).map((p) => (
+          <option key={p.id} value={p.id}>
+            {p.label}
+          </option>
+        ))}
       </optgroup>
     </>
   );

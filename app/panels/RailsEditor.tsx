@@ -1,10 +1,16 @@
-import { addRail, deleteRail, setRailColour, setRailLabel, setRailTolerance, setRailVoltage } from '../store/commands/index.ts';
+import {
+  addRail,
+  deleteRail,
+  setRailColour,
+  setRailLabel,
+  setRailTolerance,
+  setRailVoltage,
+} from '../store/commands/index.ts';
 import { useEditor, useEditorStore } from '../store/EditorProvider.tsx';
 import { DEFAULT_TOLERANCE } from '../../rules/model/schema.ts';
 import { longRailColour } from '../../rules/model/colour.ts';
 import { QuantityField, TextField } from './Field.tsx';
 import { formatPercent, parsePercent } from './percent.ts';
-
 
 /** Each rail's label, nominal voltage, tolerance and colour. */
 export function RailsEditor() {
@@ -16,23 +22,57 @@ export function RailsEditor() {
       {rails.map((r) => (
         <div key={r.id} className="rc-rail-row" data-rail={r.id}>
           <div className="rc-rail-top">
-            <input type="color" aria-label={`Colour of rail ${r.label}`} value={longRailColour(r.colour) ?? '#888888'}
-              onChange={(e) => apply(setRailColour(r.id, e.target.value))} />
-            <TextField label={`Label of rail ${r.id}`} quiet value={r.label} testId={`rail-label-${r.id}`} onCommit={(t) => apply(setRailLabel(r.id, t))} />
-            <button type="button" className="rc-icon-btn" aria-label={`Delete rail ${r.label}`} title="Delete this rail (only when nothing uses it)"
-              onClick={() => apply(deleteRail(r.id))}>×</button>
+            <input
+              type="color"
+              aria-label={`Colour of rail ${r.label}`}
+              value={longRailColour(r.colour) ?? '#888888'}
+              onChange={(e) => apply(setRailColour(r.id, e.target.value))}
+            />
+            <TextField
+              label={`Label of rail ${r.id}`}
+              quiet
+              value={r.label}
+              testId={`rail-label-${r.id}`}
+              onCommit={(t) => apply(setRailLabel(r.id, t))}
+            />
+            <button
+              type="button"
+              className="rc-icon-btn"
+              aria-label={`Delete rail ${r.label}`}
+              title="Delete this rail (only when nothing uses it)"
+              onClick={() => apply(deleteRail(r.id))}
+            >
+              ×
+            </button>
           </div>
           <div className="rc-rail-nums">
-            <QuantityField label="Nominal" unit="V" value={r.nominal} testId={`rail-nominal-${r.id}`} onCommit={(v) => apply(setRailVoltage(r.id, v))} />
-            <QuantityField label="Tolerance ±" unit="V" value={r.tolerance ?? DEFAULT_TOLERANCE} testId={`rail-tolerance-${r.id}`}
-              format={formatPercent} parse={parsePercent} onCommit={(v) => apply(setRailTolerance(r.id, v))} />
+            <QuantityField
+              label="Nominal"
+              unit="V"
+              value={r.nominal}
+              testId={`rail-nominal-${r.id}`}
+              onCommit={(v) => apply(setRailVoltage(r.id, v))}
+            />
+            <QuantityField
+              label="Tolerance ±"
+              unit="V"
+              value={r.tolerance ?? DEFAULT_TOLERANCE}
+              testId={`rail-tolerance-${r.id}`}
+              format={formatPercent}
+              parse={parsePercent}
+              onCommit={(v) => apply(setRailTolerance(r.id, v))}
+            />
           </div>
           {(r.min !== undefined || r.max !== undefined) && (
-            <div className="rc-muted">Explicit range in the file: {r.min ?? '…'} – {r.max ?? '…'} V wins over the tolerance.</div>
+            <div className="rc-muted">
+              Explicit range in the file: {r.min ?? '…'} – {r.max ?? '…'} V wins over the tolerance.
+            </div>
           )}
         </div>
       ))}
-      <button type="button" className="rc-add" onClick={() => apply(addRail())}>Add a rail</button>
+      <button type="button" className="rc-add" onClick={() => apply(addRail())}>
+        Add a rail
+      </button>
     </div>
   );
 }

@@ -15,14 +15,23 @@ export function ShortcutsDialog() {
           <dl>
             {g.items.map((s) => (
               <div key={s.does} className="rc-keys-row">
-                <dt>{s.keys.map((k, i) => <span key={k}>{i > 0 && ' or '}<kbd>{k}</kbd></span>)}</dt>
+                <dt>
+                  {s.keys.map((k, i) => (
+                    <span key={k}>
+                      {i > 0 && ' or '}
+                      <kbd>{k}</kbd>
+                    </span>
+                  ))}
+                </dt>
                 <dd>{s.does}</dd>
               </div>
             ))}
           </dl>
         </section>
       ))}
-      <button type="button" data-autofocus onClick={close}>Close</button>
+      <button type="button" data-autofocus onClick={close}>
+        Close
+      </button>
     </Modal>
   );
 }

@@ -5,11 +5,15 @@ import { useEditor, useEditorStore } from '../store/EditorProvider.tsx';
 
 function saveText(s: SaveStatus): string {
   switch (s.state) {
-    case 'idle': return '';
+    case 'idle':
+      return '';
     case 'pending':
-    case 'saving': return 'Saving…';
-    case 'saved': return 'Saved in this browser';
-    case 'failed': return `Not saved: ${s.error}`;
+    case 'saving':
+      return 'Saving…';
+    case 'saved':
+      return 'Saved in this browser';
+    case 'failed':
+      return `Not saved: ${s.error}`;
   }
 }
 
@@ -17,7 +21,10 @@ export function StatusLine({ saver }: { saver: SaveIndicator }) {
   const store = useEditorStore();
   const check = useEditor((s) => s.lastCheck);
   const notice = useEditor((s) => s.notice);
-  const save = useSyncExternalStore((l) => saver.subscribe(l), () => saver.status);
+  const save = useSyncExternalStore(
+    (l) => saver.subscribe(l),
+    () => saver.status,
+  );
   const ms = check.ms < 10 ? check.ms.toFixed(2) : check.ms.toFixed(0);
   return (
     <footer className="rc-status">
@@ -26,11 +33,21 @@ export function StatusLine({ saver }: { saver: SaveIndicator }) {
       </span>
       {notice !== null && (
         <span className={`rc-notice rc-notice--${notice.kind}`} role="status" data-testid="notice">
-          {notice.kind === 'refused' ? 'Refused: ' : ''}{notice.text}
-          <button type="button" className="rc-icon-btn" aria-label="Dismiss" onClick={() => store.getState().notify(null)}>×</button>
+          {notice.kind === 'refused' ? 'Refused: ' : ''}
+          {notice.text}
+          <button
+            type="button"
+            className="rc-icon-btn"
+            aria-label="Dismiss"
+            onClick={() => store.getState().notify(null)}
+          >
+            ×
+          </button>
         </span>
       )}
-      <span className={`rc-save rc-save--${save.state}`} data-testid="save-status" data-state={save.state}>{saveText(save)}</span>
+      <span className={`rc-save rc-save--${save.state}`} data-testid="save-status" data-state={save.state}>
+        {saveText(save)}
+      </span>
     </footer>
   );
 }

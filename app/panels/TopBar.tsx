@@ -41,7 +41,7 @@ export function TopBar() {
 
   return (
     <header className="rc-topbar">
-      <div className="rc-brand" aria-label="Railcross">
+      <div className="rc-brand" role="img" aria-label="Railcross">
         <svg viewBox="0 0 20 20" width="20" height="20" aria-hidden="true" className="rc-brand-mark">
           <path d="M2 6 H18 M2 14 H18 M7 2 V18 M13 2 V18" />
         </svg>
@@ -49,35 +49,85 @@ export function TopBar() {
       </div>
       <LibraryButton />
       <div className="rc-title">
-        <TextField label="Design title" quiet value={title} testId="design-title" onCommit={(t) => store.getState().apply(setTitle(t))} />
+        <TextField
+          label="Design title"
+          quiet
+          value={title}
+          testId="design-title"
+          onCommit={(t) => store.getState().apply(setTitle(t))}
+        />
       </div>
       {readOnly && session.openId !== null && (
         <span className="rc-read-only" data-testid="read-only">
           <span className="rc-read-only-badge">Read-only</span>
-          <button type="button" data-testid="edit-anyway" title="Open this design for editing (each change waits for its check)" onClick={() => void session.editAnyway()}>Edit</button>
+          <button
+            type="button"
+            data-testid="edit-anyway"
+            title="Open this design for editing (each change waits for its check)"
+            onClick={() => void session.editAnyway()}
+          >
+            Edit
+          </button>
         </span>
       )}
       <label className="rc-state-pick">
         <span>Power state</span>
-        <select value={powerState} data-testid="power-state" onChange={(e) => store.getState().setPowerState(e.target.value)}>
-          {states.map((s) => <option key={s.id} value={s.id}>{s.label}</option>)}
+        <select
+          value={powerState}
+          data-testid="power-state"
+          onChange={(e) => store.getState().setPowerState(e.target.value)}
+        >
+          {states.map((s) => (
+            <option key={s.id} value={s.id}>
+              {s.label}
+            </option>
+          ))}
         </select>
       </label>
-      <div className="rc-counts" title={`Unwaived findings in this power state; in all power states: ${allErrors} errors, ${allWarnings} warnings`}>
-        <span className="rc-count rc-count--error" data-count="error"><SeverityGlyph severity="error" /> {errors} {errors === 1 ? 'error' : 'errors'}</span>
-        <span className="rc-count rc-count--warning" data-count="warning"><SeverityGlyph severity="warning" /> {warnings} {warnings === 1 ? 'warning' : 'warnings'}</span>
-        {(allErrors !== errors || allWarnings !== warnings) && <span className="rc-count-all">all states: {allErrors} / {allWarnings}</span>}
+      <div
+        className="rc-counts"
+        title={`Unwaived findings in this power state; in all power states: ${allErrors} errors, ${allWarnings} warnings`}
+      >
+        <span className="rc-count rc-count--error" data-count="error">
+          <SeverityGlyph severity="error" /> {errors} {errors === 1 ? 'error' : 'errors'}
+        </span>
+        <span className="rc-count rc-count--warning" data-count="warning">
+          <SeverityGlyph severity="warning" /> {warnings} {warnings === 1 ? 'warning' : 'warnings'}
+        </span>
+        {(allErrors !== errors || allWarnings !== warnings) && (
+          <span className="rc-count-all">
+            all states: {allErrors} / {allWarnings}
+          </span>
+        )}
       </div>
       <div className="rc-history">
-        <button type="button" disabled={undoName === undefined} title={undoName === undefined ? 'Nothing to undo' : `Undo: ${undoName} (Ctrl+Z)`}
-          data-testid="undo" onClick={() => store.getState().undo()}>Undo</button>
-        <button type="button" disabled={redoName === undefined} title={redoName === undefined ? 'Nothing to redo' : `Redo: ${redoName} (Ctrl+Shift+Z)`}
-          data-testid="redo" onClick={() => store.getState().redo()}>Redo</button>
+        <button
+          type="button"
+          disabled={undoName === undefined}
+          title={undoName === undefined ? 'Nothing to undo' : `Undo: ${undoName} (Ctrl+Z)`}
+          data-testid="undo"
+          onClick={() => store.getState().undo()}
+        >
+          Undo
+        </button>
+        <button
+          type="button"
+          disabled={redoName === undefined}
+          title={redoName === undefined ? 'Nothing to redo' : `Redo: ${redoName} (Ctrl+Shift+Z)`}
+          data-testid="redo"
+          onClick={() => store.getState().redo()}
+        >
+          Redo
+        </button>
       </div>
       <ExportMenu />
       <div className="rc-docs">
-        <button type="button" data-testid="new-design" onClick={() => open(newDesign())}>New design</button>
-        <button type="button" data-testid="open-example" onClick={() => open(exampleDesign())}>Open example</button>
+        <button type="button" data-testid="new-design" onClick={() => open(newDesign())}>
+          New design
+        </button>
+        <button type="button" data-testid="open-example" onClick={() => open(exampleDesign())}>
+          Open example
+        </button>
       </div>
     </header>
   );

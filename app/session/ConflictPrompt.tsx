@@ -17,7 +17,9 @@ function text(conflict: Conflict, title: string, unsaved: boolean): { head: stri
     };
   }
   return {
-    head: conflict.restorable ? 'This design was deleted in another tab' : 'This design was deleted for good in another tab',
+    head: conflict.restorable
+      ? 'This design was deleted in another tab'
+      : 'This design was deleted for good in another tab',
     body: `${mine}. ${conflict.restorable ? 'It is in Recently deleted and can be restored.' : 'Keep this tab’s version as a new design to go on.'}`,
   };
 }
@@ -28,6 +30,7 @@ export function ConflictPrompt() {
   const open = useSessionState((s) => s.open);
   const first = useRef<HTMLButtonElement>(null);
   const [busy, setBusy] = useState(false);
+  // biome-ignore lint/correctness/useExhaustiveDependencies: each new conflict takes the focus again
   useEffect(() => first.current?.focus(), [conflict]);
   if (conflict === null) return null;
   const title = open.store.getState().design.title;
@@ -37,25 +40,53 @@ export function ConflictPrompt() {
     void session.resolveConflict(choice).finally(() => setBusy(false));
   };
   return (
-    <NativeDialog className="rc-conflict" role="alertdialog" labelledBy="rc-conflict-head" describedBy="rc-conflict-body" testId="conflict">
+    <NativeDialog
+      className="rc-conflict"
+      role="alertdialog"
+      labelledBy="rc-conflict-head"
+      describedBy="rc-conflict-body"
+      testId="conflict"
+    >
       <h2 id="rc-conflict-head">{head}</h2>
       <p id="rc-conflict-body">{body}</p>
       <div className="rc-dialog-actions">
         {conflict.kind === 'changed' && (
-          <button type="button" ref={first} className="rc-primary" disabled={busy} data-testid="conflict-reload" onClick={choose('reload')}>
+          <button
+            type="button"
+            ref={first}
+            className="rc-primary"
+            disabled={busy}
+            data-testid="conflict-reload"
+            onClick={choose('reload')}
+          >
             Load the other tab’s version
           </button>
         )}
         {conflict.kind === 'deleted' && conflict.restorable && (
-          <button type="button" ref={first} className="rc-primary" disabled={busy} data-testid="conflict-restore" onClick={choose('restore')}>
+          <button
+            type="button"
+            ref={first}
+            className="rc-primary"
+            disabled={busy}
+            data-testid="conflict-restore"
+            onClick={choose('restore')}
+          >
             Restore it and keep editing
           </button>
         )}
-        <button type="button" ref={conflict.kind === 'deleted' && !conflict.restorable ? first : undefined} disabled={busy} data-testid="conflict-copy" onClick={choose('copy')}>
+        <button
+          type="button"
+          ref={conflict.kind === 'deleted' && !conflict.restorable ? first : undefined}
+          disabled={busy}
+          data-testid="conflict-copy"
+          onClick={choose('copy')}
+        >
           Keep mine as a copy
         </button>
       </div>
-      {conflict.kind === 'changed' && <p className="rc-dialog-foot">Loading the other version is one step: Undo brings this tab’s version back.</p>}
+      {conflict.kind === 'changed' && (
+        <p className="rc-dialog-foot">Loading the other version is one step: Undo brings this tab’s version back.</p>
+      )}
     </NativeDialog>
   );
 }

@@ -42,27 +42,69 @@ export function ExportMenu() {
 
   return (
     <div className="rc-menu" ref={box}>
-      <button type="button" aria-haspopup="menu" aria-expanded={open} data-testid="export-menu" aria-busy={busy} onClick={() => setOpen(!open)}>
-        {busy ? <><span className="rc-spinner" aria-hidden="true" /> Exporting…</> : 'Export ▾'}
+      <button
+        type="button"
+        aria-haspopup="menu"
+        aria-expanded={open}
+        data-testid="export-menu"
+        aria-busy={busy}
+        onClick={() => setOpen(!open)}
+      >
+        {busy ? (
+          <>
+            <span className="rc-spinner" aria-hidden="true" /> Exporting…
+          </>
+        ) : (
+          'Export ▾'
+        )}
       </button>
-      {busy && <span className="rc-sr" role="status">{task}</span>}
+      {busy && (
+        <span className="rc-sr" role="status">
+          {task}
+        </span>
+      )}
       {open && (
         <div className="rc-menu-list" role="menu" aria-label="Export">
-          <button type="button" role="menuitem" data-testid="export-design" onClick={run(() => exportDesignFile(session.editor.getState().design))}>
+          <button
+            type="button"
+            role="menuitem"
+            data-testid="export-design"
+            onClick={run(() => exportDesignFile(session.editor.getState().design))}
+          >
             Design file <span className="rc-menu-note">.railcross.json</span>
           </button>
-          <button type="button" role="menuitem" data-testid="export-report-json" onClick={run(() => exportReportJson(session))}>
+          <button
+            type="button"
+            role="menuitem"
+            data-testid="export-report-json"
+            onClick={run(() => exportReportJson(session))}
+          >
             Report (JSON) <span className="rc-menu-note">for scripts and reviews</span>
           </button>
-          <button type="button" role="menuitem" data-testid="export-report-md" onClick={run(() => exportReportMarkdown(session))}>
+          <button
+            type="button"
+            role="menuitem"
+            data-testid="export-report-md"
+            onClick={run(() => exportReportMarkdown(session))}
+          >
             Report (Markdown) <span className="rc-menu-note">for a review or pull request</span>
           </button>
-          <button type="button" role="menuitem" data-testid="export-report-pdf" disabled={busy} onClick={run(() => void exportReportPdf(session))}>
+          <button
+            type="button"
+            role="menuitem"
+            data-testid="export-report-pdf"
+            disabled={busy}
+            onClick={run(() => void exportReportPdf(session))}
+          >
             Report (PDF) <span className="rc-menu-note">to print or send</span>
           </button>
         </div>
       )}
-      {busy && <div className="rc-task" data-testid="task" role="progressbar" aria-label={task}>{task}</div>}
+      {busy && (
+        <div className="rc-task" data-testid="task" role="progressbar" aria-label={task}>
+          {task}
+        </div>
+      )}
     </div>
   );
 }

@@ -20,35 +20,74 @@ export function LargePrompt() {
   const busy = large.busy !== null;
   const where = large.source === 'start' ? 'It was open when this page last closed. ' : '';
   return (
-    <NativeDialog key={large.id} className="rc-conflict rc-large" labelledBy="rc-large-head" describedBy="rc-large-body" testId="large-design"
-      onClose={busy ? undefined : choose('cancel')}>
-      <h2 id="rc-large-head">“{large.title}” is a large design: {plural(large.parts, 'part')}</h2>
+    <NativeDialog
+      key={large.id}
+      className="rc-conflict rc-large"
+      labelledBy="rc-large-head"
+      describedBy="rc-large-body"
+      testId="large-design"
+      onClose={busy ? undefined : choose('cancel')}
+    >
+      <h2 id="rc-large-head">
+        “{large.title}” is a large design: {plural(large.parts, 'part')}
+      </h2>
       <p id="rc-large-body">
-        {where}Above {n(LARGE_DESIGN_PARTS)} parts the editor opens slowly and every change waits for its check.
-        Choose how to open it.
-        {large.counts !== null && ` When last checked: ${plural(large.counts.errors, 'error')}, ${plural(large.counts.warnings, 'warning')}.`}
+        {where}Above {n(LARGE_DESIGN_PARTS)} parts the editor opens slowly and every change waits for its check. Choose
+        how to open it.
+        {large.counts !== null &&
+          ` When last checked: ${plural(large.counts.errors, 'error')}, ${plural(large.counts.warnings, 'warning')}.`}
       </p>
       <div className="rc-dialog-actions">
-        <button type="button" className="rc-primary" data-autofocus disabled={busy} data-testid="large-read-only" onClick={choose('read-only')}>Open read-only</button>
-        <button type="button" disabled={busy} data-testid="large-open" onClick={choose('open')}>Open anyway</button>
-        <button type="button" disabled={busy} data-testid="large-report" onClick={choose('report')}>Report only</button>
-        <button type="button" disabled={busy} data-testid="large-cancel" onClick={choose('cancel')}>Not now</button>
+        <button
+          type="button"
+          className="rc-primary"
+          data-autofocus
+          disabled={busy}
+          data-testid="large-read-only"
+          onClick={choose('read-only')}
+        >
+          Open read-only
+        </button>
+        <button type="button" disabled={busy} data-testid="large-open" onClick={choose('open')}>
+          Open anyway
+        </button>
+        <button type="button" disabled={busy} data-testid="large-report" onClick={choose('report')}>
+          Report only
+        </button>
+        <button type="button" disabled={busy} data-testid="large-cancel" onClick={choose('cancel')}>
+          Not now
+        </button>
       </div>
-      {busy && <p className="rc-dialog-foot" role="status" data-testid="large-busy">{large.busy}</p>}
-      {large.error !== null && <p className="rc-large-error" role="alert">The check could not be made: {large.error}</p>}
+      {busy && (
+        <p className="rc-dialog-foot" role="status" data-testid="large-busy">
+          {large.busy}
+        </p>
+      )}
+      {large.error !== null && (
+        <p className="rc-large-error" role="alert">
+          The check could not be made: {large.error}
+        </p>
+      )}
       {large.report !== null && (
         <div className="rc-large-report" data-testid="large-report-ready">
           <p>
             Checked: <strong data-count="error">{plural(large.report.counts.errors, 'error')}</strong>,{' '}
-            <strong data-count="warning">{plural(large.report.counts.warnings, 'warning')}</strong> unwaived, {plural(large.report.findings, 'finding')} in all.
+            <strong data-count="warning">{plural(large.report.counts.warnings, 'warning')}</strong> unwaived,{' '}
+            {plural(large.report.findings, 'finding')} in all.
           </p>
-          <button type="button" className="rc-primary" data-testid="large-download"
-            onClick={() => downloadFile(large.report!.fileName, large.report!.text, 'application/json')}>Download the report (JSON)</button>
+          <button
+            type="button"
+            className="rc-primary"
+            data-testid="large-download"
+            onClick={() => downloadFile(large.report!.fileName, large.report!.text, 'application/json')}
+          >
+            Download the report (JSON)
+          </button>
         </div>
       )}
       <p className="rc-dialog-foot">
-        Read-only shows every chip, wire and finding and changes nothing; “Edit” beside the title opens it for editing later.
-        Report only checks it without opening it.
+        Read-only shows every chip, wire and finding and changes nothing; “Edit” beside the title opens it for editing
+        later. Report only checks it without opening it.
       </p>
     </NativeDialog>
   );

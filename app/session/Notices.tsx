@@ -14,19 +14,32 @@ function NoticeCard({ notice }: { notice: Notice }) {
     return () => clearTimeout(timer);
   }, [session, notice]);
   return (
-    <div className={`rc-note rc-note--${notice.tone}`} role={notice.tone === 'error' ? 'alert' : 'status'} data-notice={notice.key}>
+    <div
+      className={`rc-note rc-note--${notice.tone}`}
+      role={notice.tone === 'error' ? 'alert' : 'status'}
+      data-notice={notice.key}
+    >
       <div className="rc-note-head">
         <strong>{notice.title}</strong>
-        <button type="button" className="rc-icon-btn" aria-label="Dismiss" onClick={() => session.dismiss(notice.key)}>×</button>
+        <button type="button" className="rc-icon-btn" aria-label="Dismiss" onClick={() => session.dismiss(notice.key)}>
+          ×
+        </button>
       </div>
       {notice.lines.length > 0 && (
         <ul className="rc-note-lines">
-          {notice.lines.map((line, i) => <li key={i}>{line}</li>)}
+          {notice.lines.map((line, i) => (
+            // biome-ignore lint/suspicious/noArrayIndexKey: a notice's lines never change once shown
+            <li key={i}>{line}</li>
+          ))}
         </ul>
       )}
       {notice.actions !== undefined && (
         <div className="rc-note-actions">
-          {notice.actions.map((a) => <button type="button" key={a.label} onClick={a.run}>{a.label}</button>)}
+          {notice.actions.map((a) => (
+            <button type="button" key={a.label} onClick={a.run}>
+              {a.label}
+            </button>
+          ))}
         </div>
       )}
     </div>
@@ -38,7 +51,9 @@ export function Notices() {
   if (notices.length === 0) return null;
   return (
     <div className="rc-notes" data-testid="notices">
-      {notices.map((n) => <NoticeCard key={n.key} notice={n} />)}
+      {notices.map((n) => (
+        <NoticeCard key={n.key} notice={n} />
+      ))}
     </div>
   );
 }

@@ -21,16 +21,20 @@ export function useSessionState<T>(selector: (state: SessionState) => T): T {
 }
 
 /** The value of a query over the database, kept current as any tab changes what it reads. */
-export function useLive<T>(query: (() => Promise<T>) | null, deps: readonly unknown[]): { value: T | undefined; error: string | null } {
+export function useLive<T>(
+  query: (() => Promise<T>) | null,
+  deps: readonly unknown[],
+): { value: T | undefined; error: string | null } {
   const [state, setState] = useState<{ value: T | undefined; error: string | null }>({ value: undefined, error: null });
   useEffect(() => {
     if (query === null) return undefined;
     const subscription = liveQuery(query).subscribe({
       next: (value) => setState({ value, error: null }),
-      error: (error: unknown) => setState((s) => ({ value: s.value, error: error instanceof Error ? error.message : String(error) })),
+      error: (error: unknown) =>
+        setState((s) => ({ value: s.value, error: error instanceof Error ? error.message : String(error) })),
     });
     return () => subscription.unsubscribe();
-    // The caller names what the query depends on: the query itself is a new closure every render.
+    // biome-ignore lint/correctness/useExhaustiveDependencies: the caller names what the query depends on: the query itself is a new closure every render.
   }, deps);
   return state;
 }

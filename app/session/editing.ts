@@ -93,7 +93,7 @@ export class Editing {
     }
     if (this.hooks.isHeld(this)) throw new Error(HELD);
     const start = performance.now();
-    let outcome;
+    let outcome: Awaited<ReturnType<typeof library.save>>;
     try {
       outcome = await library.save(id, this.baseRev, entry.design, entry);
     } catch (error) {
@@ -105,9 +105,12 @@ export class Editing {
       performance.measure('railcross:save', { start });
       return;
     }
-    this.hooks.onConflict(this, outcome.reason === 'changed'
-      ? { kind: 'changed', rev: outcome.rev, savedAt: outcome.savedAt }
-      : { kind: 'deleted', restorable: outcome.reason === 'deleted' });
+    this.hooks.onConflict(
+      this,
+      outcome.reason === 'changed'
+        ? { kind: 'changed', rev: outcome.rev, savedAt: outcome.savedAt }
+        : { kind: 'deleted', restorable: outcome.reason === 'deleted' },
+    );
     throw new Error(HELD);
   }
 }

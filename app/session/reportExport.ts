@@ -14,7 +14,9 @@ import { reportJsonFileName, reportMarkdownFileName } from '../storage/designFil
 import { downloadFile } from './download.ts';
 import type { Session } from './session.ts';
 
-export type Built = { readonly ok: true; readonly report: Report } | { readonly ok: false; readonly errors: readonly string[] };
+export type Built =
+  | { readonly ok: true; readonly report: Report }
+  | { readonly ok: false; readonly errors: readonly string[] };
 
 /** The report of the open design, as the command line would write it, checked against its schema. */
 export function buildEditorReport(design: Design, result: CheckResult, now = new Date()): Built {
@@ -26,23 +28,38 @@ export function buildEditorReport(design: Design, result: CheckResult, now = new
   }
   const parsed = ReportSchema.safeParse(report);
   if (parsed.success) return { ok: true, report };
-  return { ok: false, errors: parsed.error.issues.slice(0, 6).map((i) => `${i.path.join('.') || '(root)'}: ${i.message}`) };
+  return {
+    ok: false,
+    errors: parsed.error.issues.slice(0, 6).map((i) => `${i.path.join('.') || '(root)'}: ${i.message}`),
+  };
 }
 
 function refused(session: Session, what: string, errors: readonly string[]): void {
-  session.notify({ key: 'export', tone: 'error', title: `The ${what} could not be made`, lines: [...errors, 'Please report this: the design itself is fine and still saved.'] });
+  session.notify({
+    key: 'export',
+    tone: 'error',
+    title: `The ${what} could not be made`,
+    lines: [...errors, 'Please report this: the design itself is fine and still saved.'],
+  });
 }
 
 /** "Export → Report (JSON)". */
 export function exportReportJson(session: Session): void {
   const { design, result } = session.editor.getState();
   const built = buildEditorReport(design, result);
-  if (!built.ok) return refused(session, 'JSON report', built.errors);
+  if (!built.ok) {
+    refused(session, 'JSON report', built.errors);
+    return;
+  }
   downloadFile(reportJsonFileName(design.title), `${JSON.stringify(built.report, null, 2)}\n`, 'application/json');
 }
 
 /** "Export → Report (Markdown)": the text and file name it writes, or why it could not. */
-export function editorReportMarkdown(design: Design, result: CheckResult, now = new Date()): { ok: true; name: string; text: string } | { ok: false; errors: readonly string[] } {
+export function editorReportMarkdown(
+  design: Design,
+  result: CheckResult,
+  now = new Date(),
+): { ok: true; name: string; text: string } | { ok: false; errors: readonly string[] } {
   const built = buildEditorReport(design, result, now);
   if (!built.ok) return built;
   return { ok: true, name: reportMarkdownFileName(design.title), text: renderMarkdown(built.report) };
@@ -52,7 +69,10 @@ export function editorReportMarkdown(design: Design, result: CheckResult, now = 
 export function exportReportMarkdown(session: Session): void {
   const { design, result } = session.editor.getState();
   const made = editorReportMarkdown(design, result);
-  if (!made.ok) return refused(session, 'Markdown report', made.errors);
+  if (!made.ok) {
+    refused(session, 'Markdown report', made.errors);
+    return;
+  }
   downloadFile(made.name, made.text, 'text/markdown');
 }
 
@@ -74,10 +94,13 @@ export async function exportReportPdf(session: Session): Promise<void> {
     session.setTask('Making the PDF: loading the writer…');
     await nextFrame();
     const { makeReportPdf } = await import('./reportPdf.ts');
-    const bytes = await makeReportPdf({ report: built.report, design, result, paper: paperFor(navigator.language) }, async (step) => {
-      session.setTask(`Making the PDF: ${step}…`);
-      await nextFrame();
-    });
+    const bytes = await makeReportPdf(
+      { report: built.report, design, result, paper: paperFor(navigator.language) },
+      async (step) => {
+        session.setTask(`Making the PDF: ${step}…`);
+        await nextFrame();
+      },
+    );
     downloadFile(reportPdfFileName(design.title), bytes, 'application/pdf');
   } catch (error) {
     refused(session, 'PDF report', [error instanceof Error ? error.message : String(error)]);

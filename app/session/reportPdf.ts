@@ -16,14 +16,19 @@ async function fetchBytes(url: string): Promise<Uint8Array> {
 }
 
 function loadFonts(): Promise<PdfFonts> {
-  fonts ??= Promise.all([fetchBytes(regularUrl), fetchBytes(boldUrl), fetchBytes(monoUrl)]).then(([regular, bold, mono]) => ({ regular, bold, mono }));
+  fonts ??= Promise.all([fetchBytes(regularUrl), fetchBytes(boldUrl), fetchBytes(monoUrl)]).then(
+    ([regular, bold, mono]) => ({ regular, bold, mono }),
+  );
   // A failed fetch is tried again next time rather than remembered.
   fonts.catch(() => (fonts = undefined));
   return fonts;
 }
 
 /** Write the PDF; `onStep` names each stage so the page can show it. */
-export async function makeReportPdf(input: Omit<ReportPdfInput, 'fonts'>, onStep: (step: string) => Promise<void>): Promise<Uint8Array> {
+export async function makeReportPdf(
+  input: Omit<ReportPdfInput, 'fonts'>,
+  onStep: (step: string) => Promise<void>,
+): Promise<Uint8Array> {
   await onStep('loading fonts');
   const loaded = await loadFonts();
   await onStep('writing the pages');

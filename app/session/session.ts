@@ -67,7 +67,12 @@ export interface LargeChoice {
   readonly key: number | null;
   /** What is being done for it now ("Checking…"). */
   readonly busy: string | null;
-  readonly report: { readonly counts: Counts; readonly findings: number; readonly text: string; readonly fileName: string } | null;
+  readonly report: {
+    readonly counts: Counts;
+    readonly findings: number;
+    readonly text: string;
+    readonly fileName: string;
+  } | null;
   readonly error: string | null;
 }
 
@@ -75,15 +80,17 @@ export type LargeAction = 'open' | 'read-only' | 'report' | 'cancel';
 
 function stageText(stage: Stage, title: string, parts: number | null): string {
   if (stage === 'reading') return `Reading “${title}”…`;
-  if (stage === 'checking') return `Checking “${title}”${parts === null ? '' : ` (${parts.toLocaleString('en')} parts)`}…`;
+  if (stage === 'checking')
+    return `Checking “${title}”${parts === null ? '' : ` (${parts.toLocaleString('en')} parts)`}…`;
   return `Writing the report of “${title}”…`;
 }
 
 /** Let the browser paint (a progress text, a dialog) before a long step on this thread. */
-const painted = () => new Promise<void>((resolve) => {
-  if (typeof requestAnimationFrame === 'function') requestAnimationFrame(() => setTimeout(resolve, 0));
-  else setTimeout(resolve, 0);
-});
+const painted = () =>
+  new Promise<void>((resolve) => {
+    if (typeof requestAnimationFrame === 'function') requestAnimationFrame(() => setTimeout(resolve, 0));
+    else setTimeout(resolve, 0);
+  });
 export interface SessionState {
   readonly open: OpenDesign;
   readonly conflict: Conflict | null;
@@ -104,10 +111,17 @@ export function errorLines(errors: readonly DesignError[], max = 6): string[] {
 }
 
 /** Revisions the reader refused on opening, and which one is open instead. */
-export function refusedRevisionsNotice(title: string, revs: readonly number[], opened: number, errors: readonly DesignError[]): Notice {
-  const which = revs.length === 1 ? `revision ${revs[0]} could not be read` : `revisions ${revs.join(', ')} could not be read`;
+export function refusedRevisionsNotice(
+  title: string,
+  revs: readonly number[],
+  opened: number,
+  errors: readonly DesignError[],
+): Notice {
+  const which =
+    revs.length === 1 ? `revision ${revs[0]} could not be read` : `revisions ${revs.join(', ')} could not be read`;
   return {
-    key: 'open', tone: 'error',
+    key: 'open',
+    tone: 'error',
     title: `“${title}”: ${which}; revision ${opened} is open`,
     lines: [...errorLines(errors, 3), 'The unreadable revisions stay stored; the next save starts from this one.'],
   };
@@ -150,7 +164,13 @@ export class Session {
     this.tab = channel?.tab ?? crypto.randomUUID();
     this.ctx = this.editing(first.id, first.rev, first.design);
     this.state = createStore<SessionState>()(() => ({
-      open: this.openOf(this.ctx), conflict: null, notices: [], view: null, storageError, task: null, large: null,
+      open: this.openOf(this.ctx),
+      conflict: null,
+      notices: [],
+      view: null,
+      storageError,
+      task: null,
+      large: null,
     }));
     this.channel?.subscribe((change) => this.onRemoteChange(change));
     this.settled = this.afterOpen(this.ctx);
@@ -173,31 +193,62 @@ export class Session {
   /** Reads, checks and reports large designs off the main thread (created when first needed). */
   private checkerInstance: Checker | null = null;
   get checker(): Checker {
-    return this.checkerInstance ??= makeChecker();
+    return (this.checkerInstance ??= makeChecker());
   }
 
   /**
    * Open a design of the library in place of the current one (whose edits are saved first).
    * A design of more than `LARGE_DESIGN_PARTS` parts waits for the user's choice unless `force`.
    */
-  async openDesign(id: string, options: { readonly force?: boolean; readonly readOnly?: boolean } = {}): Promise<boolean> {
+  async openDesign(
+    id: string,
+    options: { readonly force?: boolean; readonly readOnly?: boolean } = {},
+  ): Promise<boolean> {
     if (this.library === null || (id === this.ctx.id && options.force !== true)) return id === this.ctx.id;
     if (options.force !== true) {
       const parts = await this.library.partCount(id);
       if (parts > LARGE_DESIGN_PARTS) {
         const record = await this.library.db.designs.get(id);
-        this.offerLarge({ id, title: record?.title ?? id, parts, counts: record === undefined ? null : { errors: record.errors, warnings: record.warnings }, source: 'library', key: null });
+        this.offerLarge({
+          id,
+          title: record?.title ?? id,
+          parts,
+          counts: record === undefined ? null : { errors: record.errors, warnings: record.warnings },
+          source: 'library',
+          key: null,
+        });
         return false;
       }
     }
     await this.flush();
     const opened = await this.library.open(id);
     if (!opened.ok) {
-      this.notify({ key: 'open', tone: 'error', title: 'This design could not be opened', lines: opened.reason === 'missing' ? ['It is no longer in the library.'] : opened.refused.flatMap((r) => errorLines(r.errors, 3)) });
+      this.notify({
+        key: 'open',
+        tone: 'error',
+        title: 'This design could not be opened',
+        lines:
+          opened.reason === 'missing'
+            ? ['It is no longer in the library.']
+            : opened.refused.flatMap((r) => errorLines(r.errors, 3)),
+      });
       return false;
     }
-    if (opened.refused.length > 0) this.notify(refusedRevisionsNotice(opened.record.title, opened.refused.map((r) => r.rev), opened.rev, opened.refused[0]?.errors ?? []));
-    this.adopt(id, opened.record.rev, opened.design, options.readOnly === true ? createEditorStore(opened.design, { readOnly: true }) : undefined);
+    if (opened.refused.length > 0)
+      this.notify(
+        refusedRevisionsNotice(
+          opened.record.title,
+          opened.refused.map((r) => r.rev),
+          opened.rev,
+          opened.refused[0]?.errors ?? [],
+        ),
+      );
+    this.adopt(
+      id,
+      opened.record.rev,
+      opened.design,
+      options.readOnly === true ? createEditorStore(opened.design, { readOnly: true }) : undefined,
+    );
     return true;
   }
 
@@ -221,12 +272,21 @@ export class Session {
       setLarge({ busy: 'Checking…', error: null });
       const onStage = (stage: Stage) => setLarge({ busy: stageText(stage, large.title, large.parts) });
       try {
-        const reply = await this.checker.report(large.key !== null ? { key: large.key } : { doc: await this.library.newestDocument(large.id) }, onStage);
+        const reply = await this.checker.report(
+          large.key !== null ? { key: large.key } : { doc: await this.library.newestDocument(large.id) },
+          onStage,
+        );
         if (!reply.ok) setLarge({ busy: null, error: reply.errors.join('; ') });
         else {
           setLarge({
-            busy: null, counts: reply.counts,
-            report: { counts: reply.counts, findings: reply.findings, text: `${JSON.stringify(reply.report, null, 2)}\n`, fileName: reportJsonFileName(large.title) },
+            busy: null,
+            counts: reply.counts,
+            report: {
+              counts: reply.counts,
+              findings: reply.findings,
+              text: `${JSON.stringify(reply.report, null, 2)}\n`,
+              fileName: reportJsonFileName(large.title),
+            },
           });
         }
       } catch (error) {
@@ -305,11 +365,17 @@ export class Session {
     if (file.size > WORKER_FILE_BYTES && file.size <= MAX_DESIGN_FILE_BYTES) return this.importInWorker(file);
     const read = await readDesignFile(file);
     if (!read.ok) {
-      this.notify({ key: 'import', tone: 'error', title: `“${file.name}” was not imported: it is not a valid design file`, lines: [...errorLines(read.errors), 'Nothing stored has changed.'] });
+      this.notify({
+        key: 'import',
+        tone: 'error',
+        title: `“${file.name}” was not imported: it is not a valid design file`,
+        lines: [...errorLines(read.errors), 'Nothing stored has changed.'],
+      });
       return false;
     }
     const ok = await this.guard(`“${file.name}” could not be stored`, () => this.createAndOpen(read.design));
-    if (ok) this.notify({ key: 'import', tone: 'info', title: `Imported “${read.design.title}” as a new design`, lines: [] });
+    if (ok)
+      this.notify({ key: 'import', tone: 'info', title: `Imported “${read.design.title}” as a new design`, lines: [] });
     this.setView(null);
     return ok;
   }
@@ -318,28 +384,50 @@ export class Session {
     this.setView(null);
     this.setTask(stageText('reading', file.name, null));
     const library = this.library;
-    let outcome;
+    let outcome: Awaited<ReturnType<Checker['read']>>;
     try {
       const store = library === null ? undefined : { dbName: library.db.name, aboveParts: LARGE_DESIGN_PARTS };
       outcome = await this.checker.read(file, (stage) => this.setTask(stageText(stage, file.name, null)), store);
     } catch (error) {
       this.setTask(null);
-      this.notify({ key: 'import', tone: 'error', title: `“${file.name}” was not imported`, lines: [`${ROOT_PATH}: ${storageProblem(error)}`, 'Nothing stored has changed.'] });
+      this.notify({
+        key: 'import',
+        tone: 'error',
+        title: `“${file.name}” was not imported`,
+        lines: [`${ROOT_PATH}: ${storageProblem(error)}`, 'Nothing stored has changed.'],
+      });
       return false;
     }
     const { reply, key } = outcome;
     if (!reply.ok) {
       this.setTask(null);
-      this.notify({ key: 'import', tone: 'error', title: `“${file.name}” was not imported: it is not a valid design file`, lines: [...errorLines(reply.errors), 'Nothing stored has changed.'] });
+      this.notify({
+        key: 'import',
+        tone: 'error',
+        title: `“${file.name}” was not imported: it is not a valid design file`,
+        lines: [...errorLines(reply.errors), 'Nothing stored has changed.'],
+      });
       return false;
     }
-    const imported: Notice = { key: 'import', tone: 'info', title: `Imported “${reply.title}” as a new design`, lines: [] };
+    const imported: Notice = {
+      key: 'import',
+      tone: 'info',
+      title: `Imported “${reply.title}” as a new design`,
+      lines: [],
+    };
     if (reply.stored !== null) {
       // Stored by the worker: tell other tabs, and offer the choice.
       this.setTask(null);
       this.channel?.post({ id: reply.stored.id, rev: reply.stored.rev, deleted: false });
       this.notify(imported);
-      this.offerLarge({ id: reply.stored.id, title: reply.title, parts: reply.parts, counts: reply.counts, source: 'import', key });
+      this.offerLarge({
+        id: reply.stored.id,
+        title: reply.title,
+        parts: reply.parts,
+        counts: reply.counts,
+        source: 'import',
+        key,
+      });
       return true;
     }
     const design = reply.design;
@@ -362,20 +450,27 @@ export class Session {
       this.ctx.store.getState().apply(setTitle(title));
       return;
     }
-    await this.guard('The design could not be renamed', async () => this.refused('renamed', await this.library?.rename(id, title)));
+    await this.guard('The design could not be renamed', async () =>
+      this.refused('renamed', await this.library?.rename(id, title)),
+    );
   }
 
   async duplicate(id: string): Promise<void> {
     if (id === this.ctx.id) await this.flush();
-    await this.guard('The design could not be duplicated', async () => this.refused('duplicated', await this.library?.duplicate(id)));
+    await this.guard('The design could not be duplicated', async () =>
+      this.refused('duplicated', await this.library?.duplicate(id)),
+    );
   }
 
   /** A library action that found the design changed, gone or unreadable says so. */
   private refused(what: string, outcome: object | undefined): void {
     if (outcome === undefined || !('ok' in outcome) || outcome.ok !== false || !('reason' in outcome)) return;
-    const why = outcome.reason === 'changed' ? 'another tab saved it meanwhile: try again'
-      : outcome.reason === 'unreadable' ? 'its stored revisions could not be read'
-        : 'it is no longer in the library';
+    const why =
+      outcome.reason === 'changed'
+        ? 'another tab saved it meanwhile: try again'
+        : outcome.reason === 'unreadable'
+          ? 'its stored revisions could not be read'
+          : 'it is no longer in the library';
     this.notify({ key: 'storage', tone: 'error', title: `The design could not be ${what}`, lines: [`Why: ${why}.`] });
   }
 
@@ -409,11 +504,19 @@ export class Session {
     if (library === null || ctx.id === null) return;
     const read = await library.readRevision(ctx.id, rev);
     if (!read.ok) {
-      this.notify({ key: 'revision', tone: 'error', title: `Revision ${rev} could not be read`, lines: errorLines(read.errors) });
+      this.notify({
+        key: 'revision',
+        tone: 'error',
+        title: `Revision ${rev} could not be read`,
+        lines: errorLines(read.errors),
+      });
       return;
     }
     this.setView(null);
-    if (asCopy) await this.guard('The copy could not be stored', () => this.createAndOpen({ ...read.design, title: `${read.design.title} (revision ${rev})` }));
+    if (asCopy)
+      await this.guard('The copy could not be stored', () =>
+        this.createAndOpen({ ...read.design, title: `${read.design.title} (revision ${rev})` }),
+      );
     else ctx.store.getState().apply(replaceDesign(read.design, `Restore revision ${rev}`));
   }
 
@@ -449,8 +552,14 @@ export class Session {
     if (this.library === null || ctx.id === null || entry === undefined) return false;
     const inFlight = ctx.saver.inFlight;
     this.staged = stage(this.staging, {
-      tab: this.tab, id: ctx.id, baseRev: ctx.baseRev, inFlight: inFlight === undefined || inFlight === entry ? null : fingerprint(inFlight.design),
-      design: entry.design, errors: entry.errors, warnings: entry.warnings, at: Date.now(),
+      tab: this.tab,
+      id: ctx.id,
+      baseRev: ctx.baseRev,
+      inFlight: inFlight === undefined || inFlight === entry ? null : fingerprint(inFlight.design),
+      design: entry.design,
+      errors: entry.errors,
+      warnings: entry.warnings,
+      at: Date.now(),
     });
     return this.staged;
   }
@@ -472,7 +581,13 @@ export class Session {
         this.settled = this.afterOpen(this.ctx);
         await this.settled;
       });
-      if (ok) this.notify({ key: 'conflict', tone: 'info', title: `This tab's version is now a new design, “${title}”`, lines: [] });
+      if (ok)
+        this.notify({
+          key: 'conflict',
+          tone: 'info',
+          title: `This tab's version is now a new design, “${title}”`,
+          lines: [],
+        });
       return;
     }
     if (choice === 'restore') {
@@ -483,11 +598,18 @@ export class Session {
     }
     const opened = await library.open(ctx.id);
     if (!opened.ok) {
-      this.notify({ key: 'conflict', tone: 'error', title: 'The other version could not be read', lines: opened.reason === 'missing' ? [] : opened.refused.flatMap((r) => errorLines(r.errors, 3)) });
+      this.notify({
+        key: 'conflict',
+        tone: 'error',
+        title: 'The other version could not be read',
+        lines: opened.reason === 'missing' ? [] : opened.refused.flatMap((r) => errorLines(r.errors, 3)),
+      });
       return;
     }
     this.state.setState({ conflict: null });
-    ctx.takeStored(opened.record.rev, () => ctx.store.getState().apply(replaceDesign(opened.design, "Load the other tab's version")));
+    ctx.takeStored(opened.record.rev, () =>
+      ctx.store.getState().apply(replaceDesign(opened.design, "Load the other tab's version")),
+    );
   }
 
   /** When this tab comes back into view, a change it missed is found by comparing revisions. */
@@ -603,8 +725,13 @@ export class Session {
     if (status.state === 'saved') this.dismiss('save');
     if (status.state !== 'failed' || status.error === HELD) return;
     this.notify({
-      key: 'save', tone: 'error', title: 'Your changes are not saved',
-      lines: [`Why: ${status.error}.`, 'The design stays open in this page. Export it now to keep a copy, or try again.'],
+      key: 'save',
+      tone: 'error',
+      title: 'Your changes are not saved',
+      lines: [
+        `Why: ${status.error}.`,
+        'The design stays open in this page. Export it now to keep a copy, or try again.',
+      ],
       actions: [
         { label: 'Export design file', run: () => exportDesignFile(ctx.store.getState().design) },
         { label: 'Try again', run: () => void ctx.saver.flush() },

@@ -35,7 +35,15 @@ async function openDb(name: string | undefined): Promise<RailcrossDb> {
   // An older Railcross in another tab that does not close its connection blocks the upgrade.
   const blocked = new Promise<never>((_, reject) => {
     db.on('blocked', () => {
-      timer = setTimeout(() => reject(new Error('another Railcross tab keeps an older version of the database open: close or reload it, then reload this page')), BLOCKED_MS);
+      timer = setTimeout(
+        () =>
+          reject(
+            new Error(
+              'another Railcross tab keeps an older version of the database open: close or reload it, then reload this page',
+            ),
+          ),
+        BLOCKED_MS,
+      );
     });
   });
   try {
@@ -54,7 +62,13 @@ interface First {
 
 /** The design to open first holds too many parts to open before the user says how. */
 interface LargeFirst {
-  readonly large: { readonly id: string; readonly title: string; readonly parts: number; readonly errors: number; readonly warnings: number };
+  readonly large: {
+    readonly id: string;
+    readonly title: string;
+    readonly parts: number;
+    readonly errors: number;
+    readonly warnings: number;
+  };
 }
 
 /** The design to open first, and what the user should hear about the others. */
@@ -63,7 +77,8 @@ async function chooseFirst(library: Library, notices: Notice[]): Promise<First |
   if (listing.skipped.length > 0) {
     const n = listing.skipped.length;
     notices.push({
-      key: 'skipped', tone: 'error',
+      key: 'skipped',
+      tone: 'error',
       title: `${n} stored design ${n === 1 ? 'record' : 'records'} could not be read and ${n === 1 ? 'was' : 'were'} skipped; the others open as usual`,
       lines: listing.skipped.slice(0, 6).map((s) => `${s.where}: ${s.message}`),
     });
@@ -78,16 +93,30 @@ async function chooseFirst(library: Library, notices: Notice[]): Promise<First |
     const title = listed?.title ?? id;
     // Read (and check) nothing of a design this large before the user chooses: that froze the page.
     const parts = await library.partCount(id);
-    if (parts > LARGE_DESIGN_PARTS) return { large: { id, title, parts, errors: listed?.errors ?? 0, warnings: listed?.warnings ?? 0 } };
+    if (parts > LARGE_DESIGN_PARTS)
+      return { large: { id, title, parts, errors: listed?.errors ?? 0, warnings: listed?.warnings ?? 0 } };
     const opened = await library.open(id);
     if (opened.ok) {
       if (opened.refused.length > 0) {
-        notices.push(refusedRevisionsNotice(title, opened.refused.map((r) => r.rev), opened.rev, opened.refused[0]?.errors ?? []));
+        notices.push(
+          refusedRevisionsNotice(
+            title,
+            opened.refused.map((r) => r.rev),
+            opened.rev,
+            opened.refused[0]?.errors ?? [],
+          ),
+        );
       }
       return { id, rev: opened.record.rev, design: opened.design };
     }
-    const errors = opened.reason === 'unreadable' ? opened.refused.flatMap((r) => errorLines(r.errors, 2)).slice(0, 6) : [];
-    notices.push({ key: `unreadable-${id}`, tone: 'error', title: `“${title}” could not be read and was skipped`, lines: errors });
+    const errors =
+      opened.reason === 'unreadable' ? opened.refused.flatMap((r) => errorLines(r.errors, 2)).slice(0, 6) : [];
+    notices.push({
+      key: `unreadable-${id}`,
+      tone: 'error',
+      title: `“${title}” could not be read and was skipped`,
+      lines: errors,
+    });
   }
   const design = listing.designs.length === 0 && listing.skipped.length === 0 ? exampleDesign() : newDesign();
   const record = await library.create(design);
@@ -113,7 +142,9 @@ export async function startSession(dbName?: string, staging: KeyValueStore | nul
     const why = storageProblem(error);
     const session = new Session(null, null, { id: null, rev: 0, design: exampleDesign() }, why);
     session.notify({
-      key: 'storage', tone: 'error', title: 'Designs cannot be stored in this browser',
+      key: 'storage',
+      tone: 'error',
+      title: 'Designs cannot be stored in this browser',
       lines: [`Why: ${why}.`, 'You can still edit, import and export; export your design to keep it.'],
       actions: [{ label: 'Export design file', run: () => exportDesignFile(session.editor.getState().design) }],
     });
@@ -121,10 +152,15 @@ export async function startSession(dbName?: string, staging: KeyValueStore | nul
     return session;
   }
   performance.measure('railcross:open', { start });
-  const session = 'large' in first
-    // Nothing opens behind the choice: an empty, read-only page that stores nothing.
-    ? new Session(library, channel, { id: null, rev: 0, design: createEditorStore(newDesign(first.large.title), { readOnly: true }) })
-    : new Session(library, channel, first);
+  const session =
+    'large' in first
+      ? // Nothing opens behind the choice: an empty, read-only page that stores nothing.
+        new Session(library, channel, {
+          id: null,
+          rev: 0,
+          design: createEditorStore(newDesign(first.large.title), { readOnly: true }),
+        })
+      : new Session(library, channel, first);
   if ('large' in first) {
     const { id, title, parts, errors, warnings } = first.large;
     session.offerLarge({ id, title, parts, counts: { errors, warnings }, source: 'start', key: null });
@@ -142,7 +178,9 @@ const LOCK_PREFIX = 'railcross-tab-';
 const locks = (): LockManager | undefined => (typeof navigator === 'undefined' ? undefined : navigator.locks);
 
 function holdTabLock(tab: string): void {
-  void locks()?.request(LOCK_PREFIX + tab, () => new Promise<void>(() => {})).catch(() => {});
+  void locks()
+    ?.request(LOCK_PREFIX + tab, () => new Promise<void>(() => {}))
+    .catch(() => {});
 }
 
 /** Whether the tab that staged an entry is still open (where the browser can tell). */
@@ -163,16 +201,21 @@ function replayNotices(replayed: readonly Replayed[], session: Session): Notice[
   const recovered = replayed.filter((r) => r.outcome === 'recovered');
   for (const r of recovered) {
     notices.push({
-      key: `recovered-${r.copy}`, tone: 'info',
+      key: `recovered-${r.copy}`,
+      tone: 'info',
       title: `Edits made just before a page closed are kept as a new design, “${r.title}”`,
-      lines: ['Another tab saved the design meanwhile (or deleted it), so they were not written over its newer version.'],
+      lines: [
+        'Another tab saved the design meanwhile (or deleted it), so they were not written over its newer version.',
+      ],
       actions: [{ label: 'Open it', run: () => void session.openDesign(r.copy) }],
     });
   }
   const unreadable = replayed.filter((r) => r.outcome === 'unreadable');
   if (unreadable.length > 0) {
     notices.push({
-      key: 'staged-unreadable', tone: 'error', title: 'Edits left by a closed page could not be read and were dropped',
+      key: 'staged-unreadable',
+      tone: 'error',
+      title: 'Edits left by a closed page could not be read and were dropped',
       lines: unreadable.slice(0, 3).map((r) => `${r.key}: ${r.why}`),
     });
   }

@@ -14,7 +14,9 @@ interface Message extends Change {
 function isMessage(value: unknown): value is Message {
   if (typeof value !== 'object' || value === null) return false;
   const m = value as Record<string, unknown>;
-  return typeof m['tab'] === 'string' && typeof m['id'] === 'string' && typeof m['rev'] === 'number' && typeof m['deleted'] === 'boolean';
+  return (
+    typeof m.tab === 'string' && typeof m.id === 'string' && typeof m.rev === 'number' && typeof m.deleted === 'boolean'
+  );
 }
 
 export class TabChannel {

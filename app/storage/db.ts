@@ -100,10 +100,22 @@ async function moveCurrentIntoLibrary(tx: Transaction): Promise<void> {
     const id = newDesignId();
     const at = typeof row.savedAt === 'number' ? row.savedAt : Date.now();
     const design: DesignRecord = {
-      id, title: titleOf(row.design), rev: 1, createdAt: at, updatedAt: at, deletedAt: null, errors: 0, warnings: 0,
+      id,
+      title: titleOf(row.design),
+      rev: 1,
+      createdAt: at,
+      updatedAt: at,
+      deletedAt: null,
+      errors: 0,
+      warnings: 0,
     };
     const revision: RevisionRecord = { designId: id, rev: 1, savedAt: at, title: design.title, errors: 0, warnings: 0 };
-    const document: DocumentRecord = { designId: id, rev: 1, formatVersion: formatVersionOf(row.design), doc: row.design };
+    const document: DocumentRecord = {
+      designId: id,
+      rev: 1,
+      formatVersion: formatVersionOf(row.design),
+      doc: row.design,
+    };
     await tx.table('designs').add(design);
     await tx.table('revisions').add(revision);
     await tx.table('documents').add(document);

@@ -19,13 +19,24 @@ export const MAX_DESIGN_FILE_BYTES = 20 * 1024 * 1024;
 export async function readDesignFile(file: Blob): Promise<ReadResult> {
   if (file.size > MAX_DESIGN_FILE_BYTES) {
     const mb = (file.size / (1024 * 1024)).toFixed(1);
-    return { ok: false, errors: [{ path: ROOT_PATH, message: `the file is ${mb} MB: expected at most 20 MB for a design file` }] };
+    return {
+      ok: false,
+      errors: [{ path: ROOT_PATH, message: `the file is ${mb} MB: expected at most 20 MB for a design file` }],
+    };
   }
   let text: string;
   try {
     text = await file.text();
   } catch (error) {
-    return { ok: false, errors: [{ path: ROOT_PATH, message: `the file could not be read (${error instanceof Error ? error.message : String(error)})` }] };
+    return {
+      ok: false,
+      errors: [
+        {
+          path: ROOT_PATH,
+          message: `the file could not be read (${error instanceof Error ? error.message : String(error)})`,
+        },
+      ],
+    };
   }
   return readDesign(text);
 }

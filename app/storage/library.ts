@@ -45,14 +45,14 @@ export interface RefusedRevision {
 
 export type OpenOutcome =
   | {
-    readonly ok: true;
-    readonly record: DesignRecord;
-    readonly design: Design;
-    /** The revision read: the newest one the reader accepts. */
-    readonly rev: number;
-    /** Newer revisions it refused, newest first. */
-    readonly refused: readonly RefusedRevision[];
-  }
+      readonly ok: true;
+      readonly record: DesignRecord;
+      readonly design: Design;
+      /** The revision read: the newest one the reader accepts. */
+      readonly rev: number;
+      /** Newer revisions it refused, newest first. */
+      readonly refused: readonly RefusedRevision[];
+    }
   | { readonly ok: false; readonly reason: 'missing' }
   | { readonly ok: false; readonly reason: 'unreadable'; readonly refused: readonly RefusedRevision[] };
 
@@ -68,7 +68,11 @@ export function readDocument(doc: unknown): ReadResult {
   return validateDesign(migrate(doc));
 }
 
-const range = (id: string) => [[id, Dexie.minKey], [id, Dexie.maxKey]] as const;
+const range = (id: string) =>
+  [
+    [id, Dexie.minKey],
+    [id, Dexie.maxKey],
+  ] as const;
 
 export class Library {
   constructor(
@@ -96,7 +100,14 @@ export class Library {
   async create(design: Design, counts: Counts = { errors: 0, warnings: 0 }): Promise<DesignRecord> {
     const at = this.now();
     const record: DesignRecord = {
-      id: newDesignId(), title: design.title, rev: 1, createdAt: at, updatedAt: at, deletedAt: null, ...pick(counts), parts: design.parts.length,
+      id: newDesignId(),
+      title: design.title,
+      rev: 1,
+      createdAt: at,
+      updatedAt: at,
+      deletedAt: null,
+      ...pick(counts),
+      parts: design.parts.length,
     };
     await this.db.transaction('rw', this.db.designs, this.db.revisions, this.db.documents, async () => {
       await this.db.designs.add(record);
@@ -111,7 +122,12 @@ export class Library {
     const raw = await this.db.designs.get(id);
     if (raw === undefined) return { ok: false, reason: 'missing' };
     const record = checkDesignRecord(raw, designPlace(raw, 0));
-    if (isSkipped(record)) return { ok: false, reason: 'unreadable', refused: [{ rev: 0, errors: [{ path: record.where, message: record.message }] }] };
+    if (isSkipped(record))
+      return {
+        ok: false,
+        reason: 'unreadable',
+        refused: [{ rev: 0, errors: [{ path: record.where, message: record.message }] }],
+      };
     const refused: RefusedRevision[] = [];
     for (let rev = record.rev; rev >= 1 && rev > record.rev - KEPT_REVISIONS; rev--) {
       const stored = await this.db.documents.get([id, rev]);
@@ -155,15 +171,29 @@ export class Library {
       const current = await designs.get(id);
       if (current === undefined) return { ok: false, reason: 'missing' };
       if (current.deletedAt !== null) return { ok: false, reason: 'deleted' };
-      if (current.rev !== baseRev) return { ok: false, reason: 'changed', rev: current.rev, savedAt: current.updatedAt };
+      if (current.rev !== baseRev)
+        return { ok: false, reason: 'changed', rev: current.rev, savedAt: current.updatedAt };
       const rev = baseRev + 1;
       const at = this.now();
       await this.writeRevision(id, rev, at, design, counts);
-      await designs.put({ ...current, title: design.title, rev, updatedAt: at, ...pick(counts), parts: design.parts.length });
+      await designs.put({
+        ...current,
+        title: design.title,
+        rev,
+        updatedAt: at,
+        ...pick(counts),
+        parts: design.parts.length,
+      });
       if (rev > KEPT_REVISIONS) {
         const [from] = range(id);
-        await revisions.where('[designId+rev]').between(from, [id, rev - KEPT_REVISIONS], true, true).delete();
-        await documents.where('[designId+rev]').between(from, [id, rev - KEPT_REVISIONS], true, true).delete();
+        await revisions
+          .where('[designId+rev]')
+          .between(from, [id, rev - KEPT_REVISIONS], true, true)
+          .delete();
+        await documents
+          .where('[designId+rev]')
+          .between(from, [id, rev - KEPT_REVISIONS], true, true)
+          .delete();
       }
       return { ok: true, rev, savedAt: at };
     });
@@ -208,7 +238,10 @@ export class Library {
 
   /** Purge what was deleted more than `DELETED_KEPT_MS` ago; returns how many designs went. */
   async purgeExpired(): Promise<number> {
-    const ids = await this.db.designs.where('deletedAt').below(this.now() - DELETED_KEPT_MS).primaryKeys();
+    const ids = await this.db.designs
+      .where('deletedAt')
+      .below(this.now() - DELETED_KEPT_MS)
+      .primaryKeys();
     for (const id of ids) await this.purge(id);
     return ids.length;
   }
@@ -230,7 +263,16 @@ export class Library {
   /** One revision's document through the reader. */
   async readRevision(id: string, rev: number): Promise<ReadResult> {
     const stored = await this.db.documents.get([id, rev]);
-    if (stored === undefined) return { ok: false, errors: [{ path: `documents[${JSON.stringify(id)}, ${rev}]`, message: 'expected a stored revision, found none (it may have been dropped as one of the oldest)' }] };
+    if (stored === undefined)
+      return {
+        ok: false,
+        errors: [
+          {
+            path: `documents[${JSON.stringify(id)}, ${rev}]`,
+            message: 'expected a stored revision, found none (it may have been dropped as one of the oldest)',
+          },
+        ],
+      };
     return readDocument(stored.doc);
   }
 

@@ -48,7 +48,7 @@ const REVISION_FIELDS: readonly (readonly [keyof RevisionRecord, Check, string])
   ['warnings', isCount, 'count'],
 ];
 
-function describe(v: unknown): string {
+function describeValue(v: unknown): string {
   if (v === undefined) return 'nothing';
   if (v === null) return 'null';
   if (typeof v === 'string') return `"${v.length > 40 ? `${v.slice(0, 40)}…` : v}"`;
@@ -56,14 +56,19 @@ function describe(v: unknown): string {
   return String(v);
 }
 
-function checkFields<T>(value: unknown, where: string, fields: readonly (readonly [keyof T, Check, string])[]): T | Skipped {
+function checkFields<T>(
+  value: unknown,
+  where: string,
+  fields: readonly (readonly [keyof T, Check, string])[],
+): T | Skipped {
   if (typeof value !== 'object' || value === null || Array.isArray(value)) {
-    return { where, message: `expected a record (an object), found ${describe(value)}` };
+    return { where, message: `expected a record (an object), found ${describeValue(value)}` };
   }
   const record = value as Record<string, unknown>;
   for (const [key, ok, kind] of fields) {
     const v = record[key as string];
-    if (!ok(v)) return { where: `${where}.${String(key)}`, message: `expected ${EXPECTED[kind]}, found ${describe(v)}` };
+    if (!ok(v))
+      return { where: `${where}.${String(key)}`, message: `expected ${EXPECTED[kind]}, found ${describeValue(v)}` };
   }
   return value as T;
 }

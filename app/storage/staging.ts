@@ -74,9 +74,16 @@ export function unstage(store: KeyValueStore | null, tab: string): void {
 function isStaged(value: unknown): value is Staged {
   if (typeof value !== 'object' || value === null) return false;
   const v = value as Record<string, unknown>;
-  return typeof v['tab'] === 'string' && typeof v['id'] === 'string' && Number.isInteger(v['baseRev'])
-    && (v['inFlight'] === null || typeof v['inFlight'] === 'string') && typeof v['design'] === 'object' && v['design'] !== null
-    && typeof v['errors'] === 'number' && typeof v['warnings'] === 'number';
+  return (
+    typeof v.tab === 'string' &&
+    typeof v.id === 'string' &&
+    Number.isInteger(v.baseRev) &&
+    (v.inFlight === null || typeof v.inFlight === 'string') &&
+    typeof v.design === 'object' &&
+    v.design !== null &&
+    typeof v.errors === 'number' &&
+    typeof v.warnings === 'number'
+  );
 }
 
 /** What became of one staged entry. */
@@ -90,7 +97,11 @@ export type Replayed =
  * Carry every staged entry of a tab that is gone into the library, oldest first, and remove it.
  * `tabAlive(tab)` says whether a tab is still open (its entry is then left to it).
  */
-export async function replayStaged(library: Library, store: KeyValueStore | null, tabAlive: (tab: string) => Promise<boolean> = async () => false): Promise<Replayed[]> {
+export async function replayStaged(
+  library: Library,
+  store: KeyValueStore | null,
+  tabAlive: (tab: string) => Promise<boolean> = async () => false,
+): Promise<Replayed[]> {
   if (store === null) return [];
   const entries: { key: string; staged: Staged | null; why: string }[] = [];
   try {
@@ -104,7 +115,9 @@ export async function replayStaged(library: Library, store: KeyValueStore | null
         entries.push({ key, staged: null, why: error instanceof Error ? error.message : String(error) });
         continue;
       }
-      entries.push(isStaged(parsed) ? { key, staged: parsed, why: '' } : { key, staged: null, why: 'not a staged design entry' });
+      entries.push(
+        isStaged(parsed) ? { key, staged: parsed, why: '' } : { key, staged: null, why: 'not a staged design entry' },
+      );
     }
   } catch {
     return [];
@@ -126,7 +139,15 @@ export async function replayStaged(library: Library, store: KeyValueStore | null
 
 async function replayOne(library: Library, staged: Staged, key: string): Promise<Replayed> {
   const read = readDocument(staged.design);
-  if (!read.ok) return { outcome: 'unreadable', key, why: read.errors.map((e) => `${e.path}: ${e.message}`).slice(0, 3).join('; ') };
+  if (!read.ok)
+    return {
+      outcome: 'unreadable',
+      key,
+      why: read.errors
+        .map((e) => `${e.path}: ${e.message}`)
+        .slice(0, 3)
+        .join('; '),
+    };
   const { design } = read;
   const counts: Counts = { errors: staged.errors, warnings: staged.warnings };
   const record = await library.db.designs.get(staged.id);

@@ -28,7 +28,10 @@ export interface ChipLook {
 
 /** A chip's part, its rail and its family's name. */
 export const CHIP_LOOK: KeyedSpec<ChipLook> = {
-  relevant: (s, prev) => s.design.parts !== prev.design.parts || s.design.rails !== prev.design.rails || s.design.profiles !== prev.design.profiles,
+  relevant: (s, prev) =>
+    s.design.parts !== prev.design.parts ||
+    s.design.rails !== prev.design.rails ||
+    s.design.profiles !== prev.design.profiles,
   read: (s, id) => {
     const part = partById(s.design.parts, id);
     return {

@@ -25,7 +25,11 @@ export function copyParts(design: Design, ids: readonly string[]): Clip | undefi
     if (pins.length < 2) continue;
     // A net drawn in its pin order stays so when it is copied whole; otherwise the wires kept are the ones drawn.
     const whole = pins.length === net.pins.length && net.route === undefined;
-    const route = whole ? [] : netWires(net).filter(([a, b]) => inside(a) && inside(b)).map(([a, b]): [string, string] => [a, b]);
+    const route = whole
+      ? []
+      : netWires(net)
+          .filter(([a, b]) => inside(a) && inside(b))
+          .map(([a, b]): [string, string] => [a, b]);
     // A net's label names a signal of the board and its waivers judged that net: neither goes with a copy.
     nets.push({
       id: net.id,
@@ -46,7 +50,11 @@ export function designatorPrefix(id: string): string {
 }
 
 /** The clip as it would land in `design`, moved by `offset`: fresh designators and net ids. */
-export function planPaste(design: Design, clip: Clip, offset: { x: number; y: number }): { parts: Part[]; nets: Net[] } {
+export function planPaste(
+  design: Design,
+  clip: Clip,
+  offset: { x: number; y: number },
+): { parts: Part[]; nets: Net[] } {
   const takenParts = design.parts.map((p) => p.id);
   const renamed = new Map<string, string>();
   for (const p of clip.parts) {
@@ -60,7 +68,11 @@ export function planPaste(design: Design, clip: Clip, offset: { x: number; y: nu
   };
   const parts = clip.parts.map((p): Part => {
     const at = p.position ?? { x: 0, y: 0 };
-    return { ...structuredClone(p), id: renamed.get(p.id)!, position: { x: Math.round(at.x + offset.x), y: Math.round(at.y + offset.y) } };
+    return {
+      ...structuredClone(p),
+      id: renamed.get(p.id)!,
+      position: { x: Math.round(at.x + offset.x), y: Math.round(at.y + offset.y) },
+    };
   });
   const takenNets = design.nets.map((n) => n.id);
   const nets = clip.nets.map((n): Net => {

@@ -23,7 +23,9 @@ export interface Step {
   readonly inverse: readonly Patch[];
 }
 
-export type Outcome = { readonly ok: true; readonly changed: boolean } | { readonly ok: false; readonly reason: string };
+export type Outcome =
+  | { readonly ok: true; readonly changed: boolean }
+  | { readonly ok: false; readonly reason: string };
 
 /** The last re-check, for the status line. */
 export interface CheckStat {
@@ -81,7 +83,12 @@ export function createEditorStore(design: Design, options: { readonly readOnly?:
   const readOnly = options.readOnly === true;
   return createStore<EditorState>()((set, get) => {
     /** Take a new design: re-check against the previous result and keep the UI state consistent. */
-    function adopt(next: Design, action: string, history: Pick<EditorState, 'past' | 'future'>, notice: StatusNote | null): void {
+    function adopt(
+      next: Design,
+      action: string,
+      history: Pick<EditorState, 'past' | 'future'>,
+      notice: StatusNote | null,
+    ): void {
       const s = get();
       const result = check(next, s.result);
       const powerState = result.states.some((st) => st.id === s.powerState) ? s.powerState : ALL_ON;
@@ -142,7 +149,12 @@ export function createEditorStore(design: Design, options: { readonly readOnly?:
         const step = s.past[s.past.length - 1];
         if (step === undefined) return false;
         const next = applyPatches(s.design, step.inverse as Patch[]);
-        adopt(next, `Undo ${step.name}`, { past: s.past.slice(0, -1), future: [step, ...s.future] }, { kind: 'done', text: `Undid: ${step.name}` });
+        adopt(
+          next,
+          `Undo ${step.name}`,
+          { past: s.past.slice(0, -1), future: [step, ...s.future] },
+          { kind: 'done', text: `Undid: ${step.name}` },
+        );
         return true;
       },
 
@@ -152,7 +164,12 @@ export function createEditorStore(design: Design, options: { readonly readOnly?:
         const step = s.future[0];
         if (step === undefined) return false;
         const next = applyPatches(s.design, step.patches as Patch[]);
-        adopt(next, `Redo ${step.name}`, { past: [...s.past, step], future: s.future.slice(1) }, { kind: 'done', text: `Redid: ${step.name}` });
+        adopt(
+          next,
+          `Redo ${step.name}`,
+          { past: [...s.past, step], future: s.future.slice(1) },
+          { kind: 'done', text: `Redid: ${step.name}` },
+        );
         return true;
       },
 

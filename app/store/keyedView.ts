@@ -18,7 +18,10 @@ export class KeyedView<V> {
   private readonly subs = new Map<string, Set<() => void>>();
   private readonly values = new Map<string, V>();
 
-  constructor(private readonly store: EditorStore, private readonly spec: KeyedSpec<V>) {
+  constructor(
+    private readonly store: EditorStore,
+    private readonly spec: KeyedSpec<V>,
+  ) {
     store.subscribe((s, prev) => {
       if (!spec.relevant(s, prev)) return;
       for (const [key, listeners] of this.subs) {

@@ -35,28 +35,154 @@ export interface ParamField {
 
 /** Every key of Params, in the order a datasheet's DC table gives them. */
 export const PARAM_FIELDS: readonly ParamField[] = [
-  { key: 'vih', label: 'VIH', meaning: 'lowest input voltage read as high', example: '2.0 or 0.7*VDD', kind: { type: 'level' } },
-  { key: 'vil', label: 'VIL', meaning: 'highest input voltage read as low', example: '0.8 or 0.3*VDD', kind: { type: 'level' } },
-  { key: 'voh', label: 'VOH', meaning: 'lowest output-high voltage at a sourced current (level @ current; …)', example: 'VDD-0.1 @ 20µ; VDD-0.8 @ 4m', kind: { type: 'points' } },
-  { key: 'vol', label: 'VOL', meaning: 'highest output-low voltage at a sunk current (level @ current; …)', example: '0.1 @ 20µ; 0.4 @ 4m', kind: { type: 'points' } },
-  { key: 'iih', label: 'IIH', meaning: 'current drawn from the net when it is high (magnitude)', example: '1 µA', kind: { type: 'quantity', unit: 'A' } },
-  { key: 'iil', label: 'IIL', meaning: 'current drawn from the net when it is low (magnitude)', example: '1.6 mA', kind: { type: 'quantity', unit: 'A' } },
+  {
+    key: 'vih',
+    label: 'VIH',
+    meaning: 'lowest input voltage read as high',
+    example: '2.0 or 0.7*VDD',
+    kind: { type: 'level' },
+  },
+  {
+    key: 'vil',
+    label: 'VIL',
+    meaning: 'highest input voltage read as low',
+    example: '0.8 or 0.3*VDD',
+    kind: { type: 'level' },
+  },
+  {
+    key: 'voh',
+    label: 'VOH',
+    meaning: 'lowest output-high voltage at a sourced current (level @ current; …)',
+    example: 'VDD-0.1 @ 20µ; VDD-0.8 @ 4m',
+    kind: { type: 'points' },
+  },
+  {
+    key: 'vol',
+    label: 'VOL',
+    meaning: 'highest output-low voltage at a sunk current (level @ current; …)',
+    example: '0.1 @ 20µ; 0.4 @ 4m',
+    kind: { type: 'points' },
+  },
+  {
+    key: 'iih',
+    label: 'IIH',
+    meaning: 'current drawn from the net when it is high (magnitude)',
+    example: '1 µA',
+    kind: { type: 'quantity', unit: 'A' },
+  },
+  {
+    key: 'iil',
+    label: 'IIL',
+    meaning: 'current drawn from the net when it is low (magnitude)',
+    example: '1.6 mA',
+    kind: { type: 'quantity', unit: 'A' },
+  },
   { key: 'cin', label: 'CIN', meaning: 'input capacitance', example: '5 pF', kind: { type: 'quantity', unit: 'F' } },
-  { key: 'viMax', label: 'VI max', meaning: 'highest voltage the pin may see while powered', example: '5.5 or VDD+0.5', kind: { type: 'level' } },
-  { key: 'ioMax', label: 'IO max', meaning: 'largest continuous output current', example: '25 mA', kind: { type: 'quantity', unit: 'A' } },
-  { key: 'schmitt', label: 'VT+ / VT−', meaning: 'Schmitt-trigger thresholds, rising / falling', example: '0.7*VDD / 0.3*VDD', kind: { type: 'schmitt' } },
-  { key: 'maxInputRamp', label: 'Ramp max', meaning: 'slowest input edge accepted', example: '10 ns/V', kind: { type: 'quantity', unit: 's/V' } },
-  { key: 'unpoweredSafe', label: 'Safe off', meaning: 'may carry voltage while its chip is unpowered', example: 'yes or no', kind: { type: 'bool' } },
-  { key: 'viMaxOff', label: 'VI max off', meaning: 'highest voltage the pin may see while unpowered', example: '3.6 V', kind: { type: 'volts' } },
-  { key: 'deltaIcc', label: 'ΔICC', meaning: 'extra supply current per input held high below its supply', example: '0.5 mA', kind: { type: 'quantity', unit: 'A' } },
-  { key: 'deltaIccDrop', label: 'ΔICC at', meaning: 'how far below its supply the input is held for ΔICC', example: '2.1 V', kind: { type: 'volts' } },
-  { key: 'vddRange', label: 'VDD range', meaning: 'supply range over which the numbers hold', example: '1.65 … 3.6', kind: { type: 'range' } },
-  { key: 'viMin', label: 'VI min', meaning: 'lowest voltage the pin may see while powered', example: '-0.5', kind: { type: 'level' } },
-  { key: 'injectionMax', label: 'I inj max', meaning: 'largest current its clamp diodes may carry', example: '2 mA', kind: { type: 'quantity', unit: 'A' } },
-  { key: 'busHold', label: 'Bus hold', meaning: 'bus-hold input: hold current / largest overdrive current', example: '75 µA / 500 µA', kind: { type: 'busHold' } },
-  { key: 'seriesResistance', label: 'Rs', meaning: 'series output resistance of a weak push-pull auto-direction translator', example: '4.5 kΩ', kind: { type: 'quantity', unit: 'Ω' } },
-  { key: 'minExternalPull', label: 'R pull min', meaning: 'smallest external pull resistor the pin tolerates', example: '50 kΩ', kind: { type: 'quantity', unit: 'Ω' } },
-  { key: 'maxLoadCapacitance', label: 'C load max', meaning: 'largest capacitance the pin drives reliably', example: '70 pF', kind: { type: 'quantity', unit: 'F' } },
+  {
+    key: 'viMax',
+    label: 'VI max',
+    meaning: 'highest voltage the pin may see while powered',
+    example: '5.5 or VDD+0.5',
+    kind: { type: 'level' },
+  },
+  {
+    key: 'ioMax',
+    label: 'IO max',
+    meaning: 'largest continuous output current',
+    example: '25 mA',
+    kind: { type: 'quantity', unit: 'A' },
+  },
+  {
+    key: 'schmitt',
+    label: 'VT+ / VT−',
+    meaning: 'Schmitt-trigger thresholds, rising / falling',
+    example: '0.7*VDD / 0.3*VDD',
+    kind: { type: 'schmitt' },
+  },
+  {
+    key: 'maxInputRamp',
+    label: 'Ramp max',
+    meaning: 'slowest input edge accepted',
+    example: '10 ns/V',
+    kind: { type: 'quantity', unit: 's/V' },
+  },
+  {
+    key: 'unpoweredSafe',
+    label: 'Safe off',
+    meaning: 'may carry voltage while its chip is unpowered',
+    example: 'yes or no',
+    kind: { type: 'bool' },
+  },
+  {
+    key: 'viMaxOff',
+    label: 'VI max off',
+    meaning: 'highest voltage the pin may see while unpowered',
+    example: '3.6 V',
+    kind: { type: 'volts' },
+  },
+  {
+    key: 'deltaIcc',
+    label: 'ΔICC',
+    meaning: 'extra supply current per input held high below its supply',
+    example: '0.5 mA',
+    kind: { type: 'quantity', unit: 'A' },
+  },
+  {
+    key: 'deltaIccDrop',
+    label: 'ΔICC at',
+    meaning: 'how far below its supply the input is held for ΔICC',
+    example: '2.1 V',
+    kind: { type: 'volts' },
+  },
+  {
+    key: 'vddRange',
+    label: 'VDD range',
+    meaning: 'supply range over which the numbers hold',
+    example: '1.65 … 3.6',
+    kind: { type: 'range' },
+  },
+  {
+    key: 'viMin',
+    label: 'VI min',
+    meaning: 'lowest voltage the pin may see while powered',
+    example: '-0.5',
+    kind: { type: 'level' },
+  },
+  {
+    key: 'injectionMax',
+    label: 'I inj max',
+    meaning: 'largest current its clamp diodes may carry',
+    example: '2 mA',
+    kind: { type: 'quantity', unit: 'A' },
+  },
+  {
+    key: 'busHold',
+    label: 'Bus hold',
+    meaning: 'bus-hold input: hold current / largest overdrive current',
+    example: '75 µA / 500 µA',
+    kind: { type: 'busHold' },
+  },
+  {
+    key: 'seriesResistance',
+    label: 'Rs',
+    meaning: 'series output resistance of a weak push-pull auto-direction translator',
+    example: '4.5 kΩ',
+    kind: { type: 'quantity', unit: 'Ω' },
+  },
+  {
+    key: 'minExternalPull',
+    label: 'R pull min',
+    meaning: 'smallest external pull resistor the pin tolerates',
+    example: '50 kΩ',
+    kind: { type: 'quantity', unit: 'Ω' },
+  },
+  {
+    key: 'maxLoadCapacitance',
+    label: 'C load max',
+    meaning: 'largest capacitance the pin drives reliably',
+    example: '70 pF',
+    kind: { type: 'quantity', unit: 'F' },
+  },
 ];
 
 export const FIELD_BY_KEY: ReadonlyMap<ParamKey, ParamField> = new Map(PARAM_FIELDS.map((f) => [f.key, f]));
@@ -78,12 +204,16 @@ export function formatLevel(level: Level): string {
 }
 
 function parsePoints(text: string): ParamRead {
-  const items = text.split(/[;\n]/).map((t) => t.trim()).filter((t) => t !== '');
+  const items = text
+    .split(/[;\n]/)
+    .map((t) => t.trim())
+    .filter((t) => t !== '');
   if (items.length === 0) return { ok: false, error: 'expected at least one "level @ current"' };
   const points: OutputPoint[] = [];
   for (const item of items) {
     const [v, i, ...rest] = item.split('@');
-    if (i === undefined || rest.length > 0) return { ok: false, error: `"${item}": expected "level @ current", e.g. "VDD-0.4 @ 4m"` };
+    if (i === undefined || rest.length > 0)
+      return { ok: false, error: `"${item}": expected "level @ current", e.g. "VDD-0.4 @ 4m"` };
     const level = parseLevelText(v ?? '');
     if (!level.ok) return { ok: false, error: `"${item}": ${level.error}` };
     const current = parseQuantity(i, 'A');
@@ -124,7 +254,8 @@ export function parseParam(key: ParamKey, text: string): ParamRead {
       return parsePoints(s);
     case 'schmitt': {
       const [plus, minus, ...rest] = s.split('/');
-      if (minus === undefined || rest.length > 0) return { ok: false, error: 'expected "VT+ / VT−", e.g. "0.7*VDD / 0.3*VDD"' };
+      if (minus === undefined || rest.length > 0)
+        return { ok: false, error: 'expected "VT+ / VT−", e.g. "0.7*VDD / 0.3*VDD"' };
       const a = parseLevelText(plus ?? '');
       const b = parseLevelText(minus);
       if (!a.ok) return { ok: false, error: `VT+: ${a.error}` };
@@ -141,7 +272,8 @@ export function parseParam(key: ParamKey, text: string): ParamRead {
       return parseRange(s);
     case 'busHold': {
       const [hold, overdrive, ...rest] = s.split('/');
-      if (overdrive === undefined || rest.length > 0) return { ok: false, error: 'expected "hold / overdrive", e.g. "75 µA / 500 µA"' };
+      if (overdrive === undefined || rest.length > 0)
+        return { ok: false, error: 'expected "hold / overdrive", e.g. "75 µA / 500 µA"' };
       const a = parseQuantity(hold ?? '', 'A');
       const b = parseQuantity(overdrive, 'A');
       if (!a.ok) return { ok: false, error: `hold: ${a.error}` };

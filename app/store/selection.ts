@@ -12,7 +12,9 @@ export const EMPTY_SELECTION: Selection = { parts: [], wires: [], net: null };
 
 /** The selection without what no longer exists (after an undo, a delete, a split). */
 export function cleanSelection(design: Design, sel: Selection): Selection {
-  const parts = sel.parts.filter((id) => design.parts.some((p) => p.id === id) || (design.discretes ?? []).some((d) => d.id === id));
+  const parts = sel.parts.filter(
+    (id) => design.parts.some((p) => p.id === id) || (design.discretes ?? []).some((d) => d.id === id),
+  );
   const wires = sel.wires.filter((id) => {
     const w = parseWireId(id);
     const net = w === undefined ? undefined : design.nets.find((n) => n.id === w.net);

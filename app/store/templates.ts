@@ -19,8 +19,22 @@ export interface Template {
 
 /** The logic families a gate or a buffer comes in, in library order. */
 const LOGIC_FAMILIES = [
-  'ttl', '74ls', '74hc', '74hct', '74ac', '74act', '74ahc', '74ahct', '74lvc',
-  'lvttl33', 'lvcmos33', 'lvcmos25', 'lvcmos18', 'lvcmos15', 'lvcmos12', 'cmos4000',
+  'ttl',
+  '74ls',
+  '74hc',
+  '74hct',
+  '74ac',
+  '74act',
+  '74ahc',
+  '74ahct',
+  '74lvc',
+  'lvttl33',
+  'lvcmos33',
+  'lvcmos25',
+  'lvcmos18',
+  'lvcmos15',
+  'lvcmos12',
+  'cmos4000',
 ] as const;
 
 const profile = (id: string): Profile => {
@@ -40,7 +54,8 @@ export function pickRail(rails: readonly Rail[], p: Profile, preferred?: number)
   const inRange = range === undefined ? rails : rails.filter((r) => r.nominal >= range[0] && r.nominal <= range[1]);
   const pool = inRange.length > 0 ? inRange : rails;
   let best: Rail | undefined;
-  for (const r of pool) if (best === undefined || Math.abs(r.nominal - target) < Math.abs(best.nominal - target)) best = r;
+  for (const r of pool)
+    if (best === undefined || Math.abs(r.nominal - target) < Math.abs(best.nominal - target)) best = r;
   return best;
 }
 
@@ -63,7 +78,8 @@ interface Spec {
 
 function template(spec: Spec): Template {
   const profiles = spec.profiles.map(profile);
-  const family = profiles.length === 1 ? profiles[0]!.label : profiles.map((p, k) => `${'AB'[k]}: ${p.label}`).join(' / ');
+  const family =
+    profiles.length === 1 ? profiles[0]!.label : profiles.map((p, k) => `${'AB'[k]}: ${p.label}`).join(' / ');
   return {
     id: spec.id,
     name: spec.name,
@@ -74,7 +90,10 @@ function template(spec: Spec): Template {
       if (rails.some((r) => r === undefined)) return { refused: 'The design has no rail: add a rail first.' };
       const chosen = rails as Rail[];
       return {
-        id: freshId(spec.prefix, design.parts.map((p) => p.id)),
+        id: freshId(
+          spec.prefix,
+          design.parts.map((p) => p.id),
+        ),
         label: spec.name,
         rail: chosen[chosen.length - 1]!.id,
         profile: profiles[profiles.length - 1]!.id,
@@ -94,14 +113,22 @@ const usual = (family: string) => (USUAL_SUPPLY[family] === undefined ? {} : { p
 
 function gate(family: string): Template {
   return template({
-    id: `gate:${family}`, name: 'Single gate', profiles: [family], prefix: 'U', ...usual(family),
+    id: `gate:${family}`,
+    name: 'Single gate',
+    profiles: [family],
+    prefix: 'U',
+    ...usual(family),
     pins: () => [input('A'), input('B'), output('Y')],
   });
 }
 
 function buffer(family: string): Template {
   return template({
-    id: `buffer:${family}`, name: 'Octal buffer', profiles: [family], prefix: 'U', ...usual(family),
+    id: `buffer:${family}`,
+    name: 'Octal buffer',
+    profiles: [family],
+    prefix: 'U',
+    ...usual(family),
     pins: () => [
       input('OE_N'),
       ...Array.from({ length: 8 }, (_, k) => input(`A${k + 1}`)),
@@ -113,14 +140,21 @@ function buffer(family: string): Template {
 /** Two channels each way; side A on its own rail and family (pin overrides), side B the part's. */
 function translator(a: string, b: string, name: string): Template {
   return template({
-    id: `translator:${a}:${b}`, name: `Dual-rail translator ${name}`, profiles: [a, b], prefix: 'U',
+    id: `translator:${a}:${b}`,
+    name: `Dual-rail translator ${name}`,
+    profiles: [a, b],
+    prefix: 'U',
     pins: ([railA]) => {
       const sideA = { rail: railA!.id, profile: a, side: 'left' as const };
       return [
-        input('A1', sideA), input('A2', sideA),
-        output('A3', { ...sideA, drive: 'three-state' }), output('A4', { ...sideA, drive: 'three-state' }),
-        output('B1', { drive: 'three-state' }), output('B2', { drive: 'three-state' }),
-        input('B3', { side: 'right' }), input('B4', { side: 'right' }),
+        input('A1', sideA),
+        input('A2', sideA),
+        output('A3', { ...sideA, drive: 'three-state' }),
+        output('A4', { ...sideA, drive: 'three-state' }),
+        output('B1', { drive: 'three-state' }),
+        output('B2', { drive: 'three-state' }),
+        input('B3', { side: 'right' }),
+        input('B4', { side: 'right' }),
       ];
     },
   });
@@ -129,7 +163,11 @@ function translator(a: string, b: string, name: string): Template {
 function mcu(n: 8 | 16): Template {
   const io = n === 8 ? 4 : 6;
   return template({
-    id: `mcu:${n}`, name: `Microcontroller with ${n} pins`, profiles: ['mcu-gpio'], prefix: 'U', preferred: 3.3,
+    id: `mcu:${n}`,
+    name: `Microcontroller with ${n} pins`,
+    profiles: ['mcu-gpio'],
+    prefix: 'U',
+    preferred: 3.3,
     pins: () => [
       ...range('IN', io, (id) => input(id)),
       ...range('OUT', io, (id) => output(id)),
@@ -138,7 +176,8 @@ function mcu(n: 8 | 16): Template {
             // The two-wire pins are bus pins: the I2C-bus specification's levels, not the GPIO rows.
             { id: 'SDA', role: 'bidir', drive: 'open-drain', profile: 'i2c', side: 'left' } satisfies Pin,
             { id: 'SCL', role: 'bidir', drive: 'open-drain', profile: 'i2c', side: 'left' } satisfies Pin,
-            output('TX'), input('RX'),
+            output('TX'),
+            input('RX'),
           ]
         : []),
     ],
@@ -147,7 +186,10 @@ function mcu(n: 8 | 16): Template {
 
 function sensor(family: 'i2c' | 'i2c-lv'): Template {
   return template({
-    id: `sensor:${family}`, name: 'Two-wire-bus sensor', profiles: [family], prefix: 'U',
+    id: `sensor:${family}`,
+    name: 'Two-wire-bus sensor',
+    profiles: [family],
+    prefix: 'U',
     preferred: family === 'i2c' ? 3.3 : 1.8,
     pins: () => [
       { id: 'SDA', role: 'bidir', drive: 'open-drain', side: 'left' },
@@ -161,7 +203,9 @@ function offBoard(direction: 'in' | 'out'): Template {
   return template({
     id: `off-board:${direction}`,
     name: direction === 'in' ? 'Off-board signal coming in' : 'Off-board signal going out',
-    profiles: ['off-board'], prefix: 'J', preferred: 3.3,
+    profiles: ['off-board'],
+    prefix: 'J',
+    preferred: 3.3,
     // The connector drives what comes in and receives what goes out.
     pins: () => [direction === 'in' ? output('SIG') : input('SIG')],
   });
@@ -188,6 +232,9 @@ export function templateById(id: string): Template | undefined {
 
 /** Templates whose name or family contains every word of `query` (case-insensitive). */
 export function searchTemplates(query: string, list: readonly Template[] = TEMPLATES): Template[] {
-  const words = query.toLowerCase().split(/\s+/).filter((w) => w !== '');
+  const words = query
+    .toLowerCase()
+    .split(/\s+/)
+    .filter((w) => w !== '');
   return list.filter((t) => words.every((w) => t.search.includes(w)));
 }

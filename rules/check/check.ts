@@ -150,7 +150,12 @@ interface StateContext extends PrepareContext {
 
 function contextFor(design: Design, state: PowerState, index: DesignIndex, rules: readonly AnyRule[]): StateContext {
   return {
-    design, state, rails: railStates(design, state), settings: effectiveSettings(design), pinIndex: index.pins, rules,
+    design,
+    state,
+    rails: railStates(design, state),
+    settings: effectiveSettings(design),
+    pinIndex: index.pins,
+    rules,
     ...(index.discretes.size === 0 ? {} : { links: index }),
   };
 }
@@ -160,7 +165,13 @@ function contextFor(design: Design, state: PowerState, index: DesignIndex, rules
  * is off sees exactly what it sees in `all-on`: its result there is re-stamped for this state.
  */
 function checkNet(ctx: StateContext, net: Net, allOn?: NetResult): NetResult {
-  if (allOn !== undefined && allOn.net === net && ctx.state.id !== ALL_ON && !touchesOff(allOn, ctx.state) && !setsPins(net, ctx.state)) {
+  if (
+    allOn !== undefined &&
+    allOn.net === net &&
+    ctx.state.id !== ALL_ON &&
+    !touchesOff(allOn, ctx.state) &&
+    !setsPins(net, ctx.state)
+  ) {
     return {
       net,
       view: allOn.view,
@@ -205,10 +216,20 @@ function checkLonePin(ctx: StateContext, pin: PinView): Finding[] {
  * is off, and whose role, drive and pull the state leaves alone, is judged as in `all-on`: its
  * findings there are re-stamped (none there, none here).
  */
-function judgeLonePin(ctx: StateContext, index: DesignIndex, key: string, allOn: LoneTable | undefined): readonly Finding[] {
+function judgeLonePin(
+  ctx: StateContext,
+  index: DesignIndex,
+  key: string,
+  allOn: LoneTable | undefined,
+): readonly Finding[] {
   const at = index.pins.get(key)!;
   const off = ctx.state.off;
-  if (allOn !== undefined && !off.has(at.rail) && (at.pullTo === undefined || !off.has(at.pullTo)) && !ctx.state.pins.has(key)) {
+  if (
+    allOn !== undefined &&
+    !off.has(at.rail) &&
+    (at.pullTo === undefined || !off.has(at.pullTo)) &&
+    !ctx.state.pins.has(key)
+  ) {
     return (allOn.get(key) ?? []).map((f) => restampFinding(f, ctx.state, null));
   }
   return checkLonePin(ctx, pinView(at, ctx.rails, ctx.state));
@@ -253,7 +274,12 @@ function checkState(ctx: StateContext, index: DesignIndex, allOn: StateTables | 
 }
 
 /** Every (rail, profile) group of the design. */
-function checkGroups(ctx: StateContext, index: DesignIndex, keys: Iterable<string>, railFindings: LoneTable): LoneTable {
+function checkGroups(
+  ctx: StateContext,
+  index: DesignIndex,
+  keys: Iterable<string>,
+  railFindings: LoneTable,
+): LoneTable {
   const railById = new Map(ctx.design.rails.map((r) => [r.id, r]));
   const changes: [string, readonly Finding[] | undefined][] = [];
   for (const group of keys) {
@@ -315,7 +341,10 @@ function splitStates(states: readonly PowerState[]): { allOn: PowerState; scenar
  * each judged by `judge` (whole, or only what an edit dirtied), with the rail injection of each.
  */
 function judgeStates(
-  design: Design, states: readonly PowerState[], index: DesignIndex, rules: readonly AnyRule[],
+  design: Design,
+  states: readonly PowerState[],
+  index: DesignIndex,
+  rules: readonly AnyRule[],
   judge: (ctx: StateContext, allOn: StateTables | undefined) => StateTables,
 ) {
   const { allOn, scenarios } = splitStates(states);
@@ -339,9 +368,16 @@ function judgeStates(
 function fullCheck(design: Design, rules: readonly AnyRule[], started: number): CheckResult {
   const states = powerStates(design);
   const index = DesignIndex.build(design);
-  const { allOnCtx, nets, lonePins, injection, checked } = judgeStates(design, states, index, rules, (ctx, allOn) => checkState(ctx, index, allOn));
+  const { allOnCtx, nets, lonePins, injection, checked } = judgeStates(design, states, index, rules, (ctx, allOn) =>
+    checkState(ctx, index, allOn),
+  );
   const railFindings = checkGroups(allOnCtx, index, index.groups.keys(), ChunkedMap.empty());
-  const result = makeResult(design, states, { nets, lonePins, railFindings, injection }, { netsChecked: checked, incremental: false, ms: now() - started });
+  const result = makeResult(
+    design,
+    states,
+    { nets, lonePins, railFindings, injection },
+    { netsChecked: checked, incremental: false, ms: now() - started },
+  );
   internals.set(result, { index, rules, consumed: false });
   return result;
 }
@@ -395,13 +431,19 @@ function whatChanged(design: Design, prev: CheckResult, index: DesignIndex): Cha
   // Rails: everything on a changed rail, or pulled to it.
   const oldRails = new Map<string, Rail>();
   if (before.rails !== design.rails) for (const r of before.rails) oldRails.set(r.id, r);
-  changedById(before.rails, design.rails, (id) => oldRails.get(id), (old, now) => {
-    const id = (now ?? old)!.id;
-    for (const g of index.groupsOfRail.get(id) ?? []) dirty.groups.add(g);
-    index.touchingRail(id, dirty.nets, dirty.lone);
-    // A pin that a power state pulls to this rail depends on it too.
-    for (const sc of design.scenarios ?? []) for (const p of sc.pins ?? []) if (p.pull?.to === id) dirty.pins.add(p.pin);
-  });
+  changedById(
+    before.rails,
+    design.rails,
+    (id) => oldRails.get(id),
+    (old, now) => {
+      const id = (now ?? old)!.id;
+      for (const g of index.groupsOfRail.get(id) ?? []) dirty.groups.add(g);
+      index.touchingRail(id, dirty.nets, dirty.lone);
+      // A pin that a power state pulls to this rail depends on it too.
+      for (const sc of design.scenarios ?? [])
+        for (const p of sc.pins ?? []) if (p.pull?.to === id) dirty.pins.add(p.pin);
+    },
+  );
 
   // Design-local profiles: every pin that uses a changed id.
   const profilePins = new Set<string>();
@@ -420,38 +462,60 @@ function whatChanged(design: Design, prev: CheckResult, index: DesignIndex): Cha
   // Parts: a part that only moved or was relabelled changes nothing the rules see; a part whose
   // pins alone changed dirties those pins; anything else dirties every pin it had or has.
   const parts: [Part | undefined, Part | undefined][] = [];
-  changedById(before.parts, design.parts, (id) => index.parts.get(id), (old, now) => {
-    parts.push([old, now]);
-    if (old !== undefined && now !== undefined && old.rail === now.rail && old.profile === now.profile && old.params === now.params) {
-      const oldPins = new Map(old.pins.map((p) => [p.id, p]));
-      for (const pin of now.pins) if (oldPins.get(pin.id) !== pin) dirty.pins.add(`${now.id}.${pin.id}`);
-      const ids = new Set(now.pins.map((p) => p.id));
-      for (const pin of old.pins) if (!ids.has(pin.id)) dirty.pins.add(`${old.id}.${pin.id}`);
-      return;
-    }
-    for (const part of [old, now]) if (part !== undefined) for (const pin of part.pins) dirty.pins.add(`${part.id}.${pin.id}`);
-  });
+  changedById(
+    before.parts,
+    design.parts,
+    (id) => index.parts.get(id),
+    (old, now) => {
+      parts.push([old, now]);
+      if (
+        old !== undefined &&
+        now !== undefined &&
+        old.rail === now.rail &&
+        old.profile === now.profile &&
+        old.params === now.params
+      ) {
+        const oldPins = new Map(old.pins.map((p) => [p.id, p]));
+        for (const pin of now.pins) if (oldPins.get(pin.id) !== pin) dirty.pins.add(`${now.id}.${pin.id}`);
+        const ids = new Set(now.pins.map((p) => p.id));
+        for (const pin of old.pins) if (!ids.has(pin.id)) dirty.pins.add(`${old.id}.${pin.id}`);
+        return;
+      }
+      for (const part of [old, now])
+        if (part !== undefined) for (const pin of part.pins) dirty.pins.add(`${part.id}.${pin.id}`);
+    },
+  );
 
   // Nets: changed ones directly, and every pin that joins or leaves one.
   const nets: [Net | undefined, Net | undefined][] = [];
-  changedById(before.nets, design.nets, (id) => index.nets.get(id), (old, now) => {
-    nets.push([old, now]);
-    dirty.nets.add((now ?? old)!.id);
-    for (const key of old?.pins ?? []) dirty.lone.add(key);
-    for (const key of now?.pins ?? []) dirty.lone.add(key);
-  });
+  changedById(
+    before.nets,
+    design.nets,
+    (id) => index.nets.get(id),
+    (old, now) => {
+      nets.push([old, now]);
+      dirty.nets.add((now ?? old)!.id);
+      for (const key of old?.pins ?? []) dirty.lone.add(key);
+      for (const key of now?.pins ?? []) dirty.lone.add(key);
+    },
+  );
 
   // Discretes: a changed one dirties the nets of its pins (and, below, every net joined to them).
   const discretes: [Discrete | undefined, Discrete | undefined][] = [];
   const movedDiscretes: Discrete[] = [];
-  changedById(before.discretes ?? NO_DISCRETES, design.discretes ?? NO_DISCRETES, (id) => index.discretes.get(id), (old, now) => {
-    if (old !== undefined && now !== undefined && discreteMovedOnly(old, now)) {
-      movedDiscretes.push(now);
-      return;
-    }
-    discretes.push([old, now]);
-    if (old !== undefined) for (const n of index.netsOfDiscrete(old)) if (n !== undefined) dirty.nets.add(n);
-  });
+  changedById(
+    before.discretes ?? NO_DISCRETES,
+    design.discretes ?? NO_DISCRETES,
+    (id) => index.discretes.get(id),
+    (old, now) => {
+      if (old !== undefined && now !== undefined && discreteMovedOnly(old, now)) {
+        movedDiscretes.push(now);
+        return;
+      }
+      discretes.push([old, now]);
+      if (old !== undefined) for (const n of index.netsOfDiscrete(old)) if (n !== undefined) dirty.nets.add(n);
+    },
+  );
 
   spreadPins(index, dirty);
   spreadPaths(index, dirty);
@@ -555,7 +619,12 @@ function incrementalCheck(design: Design, prev: CheckResult, inner: Internals, s
       : recheckState(ctx, index, dirty, was!, allOn);
   });
   const railFindings = checkGroups(allOnCtx, index, dirty.groups, prev.railFindings as LoneTable);
-  const result = makeResult(design, states, { nets, lonePins, railFindings, injection }, { netsChecked: checked, incremental: true, ms: now() - started });
+  const result = makeResult(
+    design,
+    states,
+    { nets, lonePins, railFindings, injection },
+    { netsChecked: checked, incremental: true, ms: now() - started },
+  );
   internals.set(result, { index, rules, consumed: false });
   return result;
 }

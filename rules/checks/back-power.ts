@@ -58,12 +58,12 @@ export default defineRule({
     severity: { error: '' },
     explanation:
       'When a rail is off, the chips on it sit at 0 V but their pins stay on the nets. Each such pin ' +
-      'is compared with the highest voltage the net\'s live sources can apply (powered push-pull and ' +
-      'three-state drivers\' rails, pull resistors\' rails). A pin rated for voltage while unpowered ' +
+      "is compared with the highest voltage the net's live sources can apply (powered push-pull and " +
+      "three-state drivers' rails, pull resistors' rails). A pin rated for voltage while unpowered " +
       'is held to that rating (viMaxOff); a pin declared unpowered-safe without one is held to its ' +
-      'powered limit at its rail\'s lowest voltage; any other pin to 0.5 V, where its clamp diode ' +
+      "powered limit at its rail's lowest voltage; any other pin to 0.5 V, where its clamp diode " +
       'starts to feed the dead rail and can half-power the chip. A source on another net that reaches the ' +
-      'pin through series resistors is judged at the voltage the network leaves on the pin\'s net, and ' +
+      "pin through series resistors is judged at the voltage the network leaves on the pin's net, and " +
       'the finding gives the current the resistors then let into the dead rail (the clamp held at 0 V).',
     hint:
       'Use a part specified for partial power-down (pins that may carry voltage at VDD = 0), a buffer ' +
@@ -86,19 +86,28 @@ export default defineRule({
       const sources = netSources(pin, view.drivers, view.pulls);
       const direct = worstExposure(pin, sources, view.rails, () => limit.v);
       let worst: { vNet: number; limit: number; from: string; source: string; current?: number } | undefined =
-        direct === undefined ? undefined : { vNet: direct.vNet, limit: direct.limit, from: sourceText(direct.source), source: direct.source.from };
+        direct === undefined
+          ? undefined
+          : { vNet: direct.vNet, limit: direct.limit, from: sourceText(direct.source), source: direct.source.from };
       if ((worst === undefined || !exceeds(worst.vNet, worst.limit)) && view.path !== undefined) {
         const far = pathExposure(view.path, pin, view.rails, () => limit.v, 'high');
         if (far !== undefined) {
           worst = {
-            vNet: far.vNet, limit: far.limit, source: far.source, current: far.current,
+            vNet: far.vNet,
+            limit: far.limit,
+            source: far.source,
+            current: far.current,
             from: `${far.source === 'pulls' ? 'The pull-ups' : far.source} through series resistance (${amps(far.current)} into the dead rail)`,
           };
         }
       }
       if (worst === undefined || !exceeds(worst.vNet, worst.limit)) continue;
       const data: Data = {
-        pin: pin.key, rail: pin.rail, vNet: worst.vNet, viMax: limit.v, from: worst.from,
+        pin: pin.key,
+        rail: pin.rail,
+        vNet: worst.vNet,
+        viMax: limit.v,
+        from: worst.from,
         ...(limit.kind === 'viMax' ? { railMin: limit.railMin } : {}),
       };
       report({
@@ -109,7 +118,11 @@ export default defineRule({
         parts: partsOf(pin.key),
         suffix: pin.key,
         values: {
-          vNet: worst.vNet, viMax: limit.v, pin: pin.key, source: worst.source, limit: limit.kind,
+          vNet: worst.vNet,
+          viMax: limit.v,
+          pin: pin.key,
+          source: worst.source,
+          limit: limit.kind,
           ...(worst.current === undefined ? {} : { current: worst.current }),
         },
       });

@@ -33,8 +33,8 @@ export default defineRule({
       'A bus-hold input is never floating: a weak latch keeps the net at its last level (so floating-input ' +
       'does not report it). A strap resistor meant to set the level while nothing drives the net must ' +
       'overdrive every latch on the net: R ≤ (Vpull,min − VIH,max)/ΣI_overdrive,max for a strap to a ' +
-      'rail, R ≤ VIL,min/ΣI_overdrive,max for a strap to ground, VIH and VIL the bus-hold inputs\' worst at ' +
-      'the rails\' ends and each resistor at its high tolerance end. Judged on nets with no powered ' +
+      "rail, R ≤ VIL,min/ΣI_overdrive,max for a strap to ground, VIH and VIL the bus-hold inputs' worst at " +
+      "the rails' ends and each resistor at its high tolerance end. Judged on nets with no powered " +
       'push-pull driver.',
     hint: 'Use a smaller strap resistor (at most the bound), or drive the net actively.',
     messages: {
@@ -45,7 +45,8 @@ export default defineRule({
   checkNet(view, report) {
     const holders = view.pins.filter((p) => p.powered && p.params.busHold !== undefined);
     if (holders.length === 0 || view.pulls.length === 0) return;
-    if (view.drivers.some((d) => d.drive === 'push-pull') || view.remoteDrivers.some((d) => d.drive === 'push-pull')) return;
+    if (view.drivers.some((d) => d.drive === 'push-pull') || view.remoteDrivers.some((d) => d.drive === 'push-pull'))
+      return;
     let overdrive = 0;
     for (const h of holders) overdrive += h.params.busHold!.overdrive;
     if (overdrive === 0) return;
@@ -66,12 +67,20 @@ export default defineRule({
       if (rMax === Infinity) continue;
       const high = p.max;
       if (Number.isFinite(rMax) && Number.isFinite(high) && !exceeds(high, rMax)) continue;
-      const pull = p.origin === 'net' ? `the net's pull to ${p.to}` : p.resistor === true ? p.origin : `${p.origin}'s internal pull`;
+      const pull =
+        p.origin === 'net'
+          ? `the net's pull to ${p.to}`
+          : p.resistor === true
+            ? p.origin
+            : `${p.origin}'s internal pull`;
       const keys = holders.map((h) => h.key);
       report({
         messageId: 'strapTooWeak',
         data: { net: view.net.id, pull, ohms: high, rMax: Math.max(0, rMax), overdrive, toward: up ? 'high' : 'low' },
-        severity: 'error', pins: keys, parts: partsOf(...keys), suffix: p.origin,
+        severity: 'error',
+        pins: keys,
+        parts: partsOf(...keys),
+        suffix: p.origin,
         values: { pull: p.origin, ohms: high, rMax, overdrive, toward: up ? 'high' : 'low' },
       });
     }

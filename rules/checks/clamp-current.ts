@@ -25,18 +25,18 @@ interface Data {
 export default defineRule({
   id: 'clamp-current',
   meta: {
-    title: 'Clamp currents through series resistors stay within the pin\'s limit',
-    severity: { error: 'above the pin\'s injection-current limit', info: 'with the current when within it' },
+    title: "Clamp currents through series resistors stay within the pin's limit",
+    severity: { error: "above the pin's injection-current limit", info: 'with the current when within it' },
     explanation:
       'When a source on another net reaches a powered input only through resistance and would lift it ' +
-      'above its viMax, the input\'s protection diode conducts into its rail. The current is taken with ' +
-      'the diode\'s drop at 0 V, the worst case: I = (Vsrc,max − VDD,rx,min)/R for one series resistor, ' +
+      "above its viMax, the input's protection diode conducts into its rail. The current is taken with " +
+      "the diode's drop at 0 V, the worst case: I = (Vsrc,max − VDD,rx,min)/R for one series resistor, " +
       'and in general the current the resistor network pushes into the pin held at its supply, the ' +
-      'largest over the rails\' corners and the resistors\' tolerance ends. It is compared with the ' +
-      'pin\'s injectionMax (datasheets give it, often a few mA). A pin without injectionMax is left to ' +
+      "largest over the rails' corners and the resistors' tolerance ends. It is compared with the " +
+      "pin's injectionMax (datasheets give it, often a few mA). A pin without injectionMax is left to " +
       'overvoltage, which then reports the over-voltage as an error.',
     hint:
-      'Raise the series resistance so that the clamp current stays within the pin\'s injection limit ' +
+      "Raise the series resistance so that the clamp current stays within the pin's injection limit " +
       '(R ≥ (Vsrc,max − VDD,rx,min)/Iinj), or use a divider or an input that tolerates the voltage.',
     messages: {
       overLimit: (d: Data) =>
@@ -65,15 +65,30 @@ export default defineRule({
       const from = far.source === 'pulls' ? 'The pull-ups across the series resistors' : far.source;
       report({
         messageId: over ? 'overLimit' : 'withinLimit',
-        data: { pin: pin.key, from, vNet: far.vNet, viMax: far.limit, current: far.current, injectionMax, pinVdd: far.pinVdd },
+        data: {
+          pin: pin.key,
+          from,
+          vNet: far.vNet,
+          viMax: far.limit,
+          current: far.current,
+          injectionMax,
+          pinVdd: far.pinVdd,
+        },
         severity: over ? 'error' : 'info',
         pins: [pin.key],
         parts: partsOf(pin.key),
         suffix: pin.key,
         ...(over ? {} : { hint: 'Nothing to change; the rail must still absorb the current (rail-injection).' }),
         values: {
-          pin: pin.key, rail: pin.rail, source: far.source, vNet: far.vNet, viMax: far.limit, pinVdd: far.pinVdd,
-          current: far.current, injectionMax, resistors: far.resistors,
+          pin: pin.key,
+          rail: pin.rail,
+          source: far.source,
+          vNet: far.vNet,
+          viMax: far.limit,
+          pinVdd: far.pinVdd,
+          current: far.current,
+          injectionMax,
+          resistors: far.resistors,
         },
       });
     }

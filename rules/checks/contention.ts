@@ -54,7 +54,9 @@ export default defineRule({
       severity: fight ? 'error' : 'warning',
       pins: data.drivers,
       parts: partsOf(...data.drivers),
-      ...(fight ? {} : { hint: 'Make sure only one output is enabled at a time, then waive this with a note saying how.' }),
+      ...(fight
+        ? {}
+        : { hint: 'Make sure only one output is enabled at a time, then waive this with a note saying how.' }),
       values: { drivers: data.drivers, kinds: data.kinds },
     });
   },

@@ -24,9 +24,7 @@ interface Data {
 }
 
 function past(o: Overload, list: 'voh' | 'vol'): string {
-  return o.by === 'ioMax'
-    ? `its ioMax of ${amps(o.limit)}`
-    : `the ${amps(o.limit)} of its largest ${list} test point`;
+  return o.by === 'ioMax' ? `its ioMax of ${amps(o.limit)}` : `the ${amps(o.limit)} of its largest ${list} test point`;
 }
 
 const sources = (o: Overload) => `sources ${amps(o.load)} when high, beyond ${past(o, 'voh')}`;
@@ -54,17 +52,18 @@ export default defineRule({
     severity: { error: '' },
     explanation:
       'Every other pin on a net draws its input current from the driver (iih when high, iil when low), ' +
-      'and pull resistors add what flows through them. A driver\'s output levels are guaranteed only up ' +
+      "and pull resistors add what flows through them. A driver's output levels are guaranteed only up " +
       'to the largest test current of its voh and vol rows, and it must never carry more than its ioMax. ' +
       'A load beyond the test currents is DC fan-out exceeded: the levels the other rules use become ' +
       'estimates; a load beyond ioMax overloads the output itself. ' +
       'An open-drain driver has no high drive; only its low side is judged.',
     hint:
-      'Split the loads with a buffer, drive fewer inputs, use a stronger driver, or use a larger pull ' +
-      'resistor.',
+      'Split the loads with a buffer, drive fewer inputs, use a stronger driver, or use a larger pull ' + 'resistor.',
     messages: {
-      highOverload: (d: Data) => `${d.driver} ${sources(d.high!)}: ${consequence(d, 'its high level is no longer guaranteed')}.`,
-      lowOverload: (d: Data) => `${d.driver} ${sinks(d.low!)}: ${consequence(d, 'its low level is no longer guaranteed')}.`,
+      highOverload: (d: Data) =>
+        `${d.driver} ${sources(d.high!)}: ${consequence(d, 'its high level is no longer guaranteed')}.`,
+      lowOverload: (d: Data) =>
+        `${d.driver} ${sinks(d.low!)}: ${consequence(d, 'its low level is no longer guaranteed')}.`,
       bothOverload: (d: Data) =>
         `${d.driver} ${sources(d.high!)}, and ${sinks(d.low!)}: ${consequence(d, 'neither level is guaranteed')}.`,
     },
@@ -83,7 +82,12 @@ export default defineRule({
       const low = judge(load.low, ratedLow ?? undefined, ioMax);
       if (high === undefined && low === undefined) continue;
       report({
-        messageId: high !== undefined && low !== undefined ? 'bothOverload' : high !== undefined ? 'highOverload' : 'lowOverload',
+        messageId:
+          high !== undefined && low !== undefined
+            ? 'bothOverload'
+            : high !== undefined
+              ? 'highOverload'
+              : 'lowOverload',
         data: { driver: driver.key, ...(high === undefined ? {} : { high }), ...(low === undefined ? {} : { low }) },
         severity: 'error',
         pins: [driver.key],

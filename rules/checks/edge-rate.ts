@@ -14,7 +14,6 @@ import { defineRule } from './defineRule.ts';
 import { farads, ohms, rampUnit, seconds, volts } from './format.ts';
 import { partsOfPins as partsOf } from '../model/pinKeys.ts';
 
-
 /** What charges the net on a rising edge. */
 interface EdgeSource {
   /** The driver's pin key; null when the pull-up makes the high level. */
@@ -55,13 +54,19 @@ function outputResistance(driver: PinView, rails: RailStates): number | undefine
  */
 function edgeSource(view: NetView, except?: string): EdgeSource | undefined {
   if (view.pathEdge !== undefined && !view.drivers.some((d) => d.drive !== 'open-drain')) {
-    return { driver: view.pathEdge.driver, resistance: view.pathEdge.resistance, swing: view.pathEdge.swing, through: true };
+    return {
+      driver: view.pathEdge.driver,
+      resistance: view.pathEdge.resistance,
+      swing: view.pathEdge.swing,
+      through: true,
+    };
   }
   if (view.highFromPull) {
     // The pulls at the top of their ranges: the slowest edge.
     const resistance = parallelResistance(view.pulls, 'max')!;
     let swing = Infinity;
-    for (const c of corners(pullRails(view.pulls), view.rails.ranges)) swing = Math.min(swing, thevenin(view.pulls, c)!.v);
+    for (const c of corners(pullRails(view.pulls), view.rails.ranges))
+      swing = Math.min(swing, thevenin(view.pulls, c)!.v);
     return { driver: null, resistance, swing };
   }
   let slowest: EdgeSource | undefined;
@@ -99,15 +104,15 @@ export default defineRule({
     title: 'Edges are fast enough',
     severity: { warning: '' },
     explanation:
-      'The rising edge is estimated as a single RC charge of the net\'s capacitance (the pins\' cin plus ' +
-      'the wiring). On a net pulled high by resistors, R is the pulls\' Thévenin resistance and the rise ' +
+      "The rising edge is estimated as a single RC charge of the net's capacitance (the pins' cin plus " +
+      "the wiring). On a net pulled high by resistors, R is the pulls' Thévenin resistance and the rise " +
       'time is taken from 30 % to 70 % (ln(7/3)·RC); on an actively driven net, R is the output resistance ' +
       'of the slowest driver, read from the slope between its two largest voh test points, and the rise ' +
-      'time is taken from 10 % to 90 % (ln 9·RC). The rise time is compared with the net\'s maxRiseTime, ' +
+      "time is taken from 10 % to 90 % (ln 9·RC). The rise time is compared with the net's maxRiseTime, " +
       'and each non-Schmitt receiver with a maxInputRamp is given the ramp of that 10–90 % edge over 80 % ' +
       'of the swing, in s/V. A net that a driver reaches only through series resistors is given the 10–90 % ' +
-      'edge ln 9·Rth·C, Rth the resistance seen from the net with the driver\'s net and every rail at 0 V ' +
-      '(a divider\'s R1‖R2), each resistor at its high tolerance end, and C the net\'s own capacitance.',
+      "edge ln 9·Rth·C, Rth the resistance seen from the net with the driver's net and every rail at 0 V " +
+      "(a divider's R1‖R2), each resistor at its high tolerance end, and C the net's own capacitance.",
     hint:
       'Lower the pull-up resistance or use a stronger driver, cut the capacitance (shorter wiring, fewer ' +
       'loads), or split the loads with a buffer.',
@@ -144,7 +149,11 @@ export default defineRule({
           pins,
           parts: partsOf(...pins),
           values: {
-            riseTime, span: pulled ? '30-70' : '10-90', capacitance: c, resistance: source.resistance, limit,
+            riseTime,
+            span: pulled ? '30-70' : '10-90',
+            capacitance: c,
+            resistance: source.resistance,
+            limit,
             driver: source.driver,
           },
         });
@@ -169,8 +178,14 @@ export default defineRule({
         suffix: rx.key,
         hint: 'Use a receiver with a Schmitt-trigger input, a stronger driver or pull-up, or less capacitance on the net.',
         values: {
-          ramp, maxInputRamp, pin: rx.key, driver: s.driver, t1090, swing: s.swing,
-          resistance: s.resistance, capacitance: c,
+          ramp,
+          maxInputRamp,
+          pin: rx.key,
+          driver: s.driver,
+          t1090,
+          swing: s.swing,
+          resistance: s.resistance,
+          capacitance: c,
         },
       });
     }

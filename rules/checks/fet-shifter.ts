@@ -77,17 +77,17 @@ export default defineRule({
     severity: { error: '' },
     explanation:
       'A bidirectional N-MOSFET shifter joins a low-side net (its source) and a high-side net (its drain), ' +
-      'each with its own pull-up, the gate on the low side\'s rail. A driver pulling either side low must ' +
-      'turn the FET on: VGS = Vgate,min − VOL must reach the FET\'s largest VGS(th). It then sinks both ' +
+      "each with its own pull-up, the gate on the low side's rail. A driver pulling either side low must " +
+      "turn the FET on: VGS = Vgate,min − VOL must reach the FET's largest VGS(th). It then sinks both " +
       'pull-ups: I = (Vpull,L,max − VOL)/R_L,min + (Vpull,H,max − VOL)/R_H,min, each resistor at its low ' +
       'tolerance end, which must not exceed its rated IOL (the current of its largest vol test point). Each ' +
-      'side needs a pull-up to a rail, and the gate\'s rail must not exceed the high side\'s pull rail ' +
-      '(else the FET never turns off). The far side\'s low, VOL + I_far·RDS(on), and each side\'s high ' +
-      'are judged by level-low and level-high on the receiver\'s net; rise time and pull-up range per ' +
+      "side needs a pull-up to a rail, and the gate's rail must not exceed the high side's pull rail " +
+      "(else the FET never turns off). The far side's low, VOL + I_far·RDS(on), and each side's high " +
+      "are judged by level-low and level-high on the receiver's net; rise time and pull-up range per " +
       'side by edge-rate and pull-range.',
     hint:
       'Use a FET with a lower VGS(th) (logic-level), larger pull-ups on the side that is not the weak ' +
-      'driver\'s, a gate on the low side\'s rail, or a dedicated two-wire bus translator.',
+      "driver's, a gate on the low side's rail, or a dedicated two-wire bus translator.",
     messages: {
       mayNotTurnOn: (d: TurnOn) =>
         `${d.fet} may not turn on when ${d.driver} pulls low: VGS = ${volts(d.vgate)} − ${volts(d.vol)} = ${volts(d.vgs)}, below its VGS(th) of up to ${volts(d.vgsTh)}.`,
@@ -107,11 +107,19 @@ export default defineRule({
       const low = link.self;
       const high = link.other;
       const keys = [`${fet.id}.S`, `${fet.id}.D`];
-      for (const [side, node] of [['low', low], ['high', high]] as const) {
+      for (const [side, node] of [
+        ['low', low],
+        ['high', high],
+      ] as const) {
         if (node.pulls.some((p) => p.to !== GROUND)) continue;
         report({
-          messageId: 'sideWithoutPull', data: { fet: fet.id, side, net: node.netId }, severity: 'error',
-          pins: keys, parts: [fet.id], suffix: `${fet.id}:${side}`, values: { fet: fet.id, side, net: node.netId },
+          messageId: 'sideWithoutPull',
+          data: { fet: fet.id, side, net: node.netId },
+          severity: 'error',
+          pins: keys,
+          parts: [fet.id],
+          suffix: `${fet.id}:${side}`,
+          values: { fet: fet.id, side, net: node.netId },
         });
       }
       for (const rail of pullRailsOf(high)) {
@@ -119,12 +127,19 @@ export default defineRule({
         const r = view.rails.ranges.get(rail);
         if (g === undefined || r === undefined || rail === fet.gate || !exceeds(g.max, r.min)) continue;
         report({
-          messageId: 'gateAboveHighSide', data: { fet: fet.id, gate: fet.gate, gateMax: g.max, pullRail: rail, pullMin: r.min },
-          severity: 'error', pins: keys, parts: [fet.id], suffix: `${fet.id}:gate:${rail}`,
+          messageId: 'gateAboveHighSide',
+          data: { fet: fet.id, gate: fet.gate, gateMax: g.max, pullRail: rail, pullMin: r.min },
+          severity: 'error',
+          pins: keys,
+          parts: [fet.id],
+          suffix: `${fet.id}:gate:${rail}`,
           values: { fet: fet.id, gate: fet.gate, gateMax: g.max, pullRail: rail, pullMin: r.min },
         });
       }
-      for (const [node, other] of [[low, high], [high, low]] as const) {
+      for (const [node, other] of [
+        [low, high],
+        [high, low],
+      ] as const) {
         for (const d of node.pins) {
           if (!d.powered || d.role === 'input') continue;
           const top = topVol(d);
@@ -135,12 +150,21 @@ export default defineRule({
             const vgate = c.get(fet.gate) ?? 0;
             const vol = top.v(c.get(d.rail) ?? 0);
             const vgs = vgate - vol;
-            if (turn === undefined || vgs < turn.vgs || !Number.isFinite(vgs)) turn = { fet: fet.id, driver: d.key, vgate, vol, vgs, vgsTh: fet.vgsThMax };
+            if (turn === undefined || vgs < turn.vgs || !Number.isFinite(vgs))
+              turn = { fet: fet.id, driver: d.key, vgate, vol, vgs, vgsTh: fet.vgsThMax };
           }
-          if (turn !== undefined && (!Number.isFinite(turn.vgs) || !Number.isFinite(fet.vgsThMax) || below(turn.vgs, fet.vgsThMax))) {
+          if (
+            turn !== undefined &&
+            (!Number.isFinite(turn.vgs) || !Number.isFinite(fet.vgsThMax) || below(turn.vgs, fet.vgsThMax))
+          ) {
             report({
-              messageId: 'mayNotTurnOn', data: turn, severity: 'error', pins: [d.key, ...keys], parts: partsOf(d.key, fet.id),
-              suffix: `${fet.id}:${d.key}`, values: { ...turn },
+              messageId: 'mayNotTurnOn',
+              data: turn,
+              severity: 'error',
+              pins: [d.key, ...keys],
+              parts: partsOf(d.key, fet.id),
+              suffix: `${fet.id}:${d.key}`,
+              values: { ...turn },
             });
           }
           // Both pull-ups at their rails' highest, the resistors at their low ends, at the driver's VOL.
@@ -150,12 +174,21 @@ export default defineRule({
             const iLow = pullUpCurrent(node === low ? node : other, c, vol);
             const iHigh = pullUpCurrent(node === low ? other : node, c, vol);
             const total = iLow + iHigh;
-            if (sink === undefined || total > sink.total || !Number.isFinite(total)) sink = { fet: fet.id, driver: d.key, iLow, iHigh, total, rated: top.i };
+            if (sink === undefined || total > sink.total || !Number.isFinite(total))
+              sink = { fet: fet.id, driver: d.key, iLow, iHigh, total, rated: top.i };
           }
-          if (sink !== undefined && (!Number.isFinite(sink.total) || !Number.isFinite(sink.rated) || exceeds(sink.total, sink.rated))) {
+          if (
+            sink !== undefined &&
+            (!Number.isFinite(sink.total) || !Number.isFinite(sink.rated) || exceeds(sink.total, sink.rated))
+          ) {
             report({
-              messageId: 'sinksBoth', data: sink, severity: 'error', pins: [d.key, ...keys], parts: partsOf(d.key, fet.id),
-              suffix: `${fet.id}:${d.key}:sink`, values: { ...sink },
+              messageId: 'sinksBoth',
+              data: sink,
+              severity: 'error',
+              pins: [d.key, ...keys],
+              parts: partsOf(d.key, fet.id),
+              suffix: `${fet.id}:${d.key}:sink`,
+              values: { ...sink },
             });
           }
         }

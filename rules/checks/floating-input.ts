@@ -30,7 +30,7 @@ export default defineRule({
       'A CMOS input that nothing drives drifts to an undefined level, draws shoot-through current and ' +
       'may oscillate. A net with a powered receiver needs a powered driver or a pull resistor; a net ' +
       'whose only drivers are three-state floats whenever none is enabled, unless a pull holds it. Any ' +
-      'pull counts here, the net\'s own, one inside a pin or a resistor part tied to a rail or ground, even ' +
+      "pull counts here, the net's own, one inside a pin or a resistor part tied to a rail or ground, even " +
       'to a rail that is off. A driver on another net that reaches this one through a series resistor or a ' +
       'shifter drives it too, and a powered bus-hold input keeps the net at its last level. An input pin ' +
       'on no net, on a powered rail and without an internal pull, floats too.',
@@ -58,9 +58,7 @@ export default defineRule({
       severity: allThreeState ? 'warning' : 'error',
       pins,
       parts: partsOf(...pins),
-      ...(allThreeState
-        ? { hint: 'Add a pull resistor, or make sure one of the outputs is always enabled.' }
-        : {}),
+      ...(allThreeState ? { hint: 'Add a pull resistor, or make sure one of the outputs is always enabled.' } : {}),
       values: { pins, ...(allThreeState ? { drivers: driverKeys } : {}) },
     });
   },

@@ -42,12 +42,12 @@ export default defineRule({
       'A CMOS input whose datasheet gives an extra supply current (ΔICC) for an input held at its supply ' +
       'less a test offset (commonly VCC − 2.1 V for TTL-input CMOS) draws that current whenever a driver ' +
       'holds it high below that level: a 3.3 V output into a 5 V TTL-input CMOS part does. The lowest high ' +
-      'level of the net\'s drivers is compared with the receiver\'s supply at its highest less the offset, at ' +
-      'every combination of the rails\' ends; each such input is reported with its ΔICC, and the report ' +
+      "level of the net's drivers is compared with the receiver's supply at its highest less the offset, at " +
+      "every combination of the rails' ends; each such input is reported with its ΔICC, and the report " +
       'sums them per rail and power state, so that a board relying on many such inputs sees the cost.',
     hint:
       'Drive the input from its own supply (a translator or a buffer on that rail), or accept the current in ' +
-      'the rail\'s budget.',
+      "the rail's budget.",
     messages: {
       belowSupply: (d: Data) =>
         `${d.pin} is held high at ${volts(d.high)} by ${d.driver}, below ${volts(d.threshold)} (its supply less the ` +
@@ -61,10 +61,13 @@ export default defineRule({
       const { deltaIcc, deltaIccDrop } = receiver.params;
       // Only a ΔICC that is 0 (or none) means no extra current; one that is not a number goes on and fails.
       if (deltaIcc === undefined || deltaIccDrop === undefined || deltaIcc <= 0) continue;
-      let worst: { driver: string; high: number; threshold: number; score: number; corner: Record<string, number> } | undefined;
+      let worst:
+        | { driver: string; high: number; threshold: number; score: number; corner: Record<string, number> }
+        | undefined;
       for (const driver of view.drivers) {
         if (driver.partId === receiver.partId) continue;
-        const railIds = driver.drive === 'open-drain' ? [...pullRails(view.pulls), receiver.rail] : [driver.rail, receiver.rail];
+        const railIds =
+          driver.drive === 'open-drain' ? [...pullRails(view.pulls), receiver.rail] : [driver.rail, receiver.rail];
         const w = worstCorner(railIds, view.rails, (c) => {
           const high = highAt(view, driver, c, sumIih);
           if (high === undefined) return undefined;
@@ -76,14 +79,27 @@ export default defineRule({
       if (worst === undefined || !below(worst.high, worst.threshold)) continue;
       report({
         messageId: 'belowSupply',
-        data: { pin: receiver.key, driver: worst.driver, high: worst.high, threshold: worst.threshold, current: deltaIcc, rail: receiver.rail },
+        data: {
+          pin: receiver.key,
+          driver: worst.driver,
+          high: worst.high,
+          threshold: worst.threshold,
+          current: deltaIcc,
+          rail: receiver.rail,
+        },
         severity: 'info',
         pins: [receiver.key, worst.driver],
         parts: partsOf(receiver.key, worst.driver),
         suffix: receiver.key,
         values: {
-          pin: receiver.key, driver: worst.driver, rail: receiver.rail, current: deltaIcc, drop: deltaIccDrop,
-          high: worst.high, threshold: worst.threshold, corner: worst.corner,
+          pin: receiver.key,
+          driver: worst.driver,
+          rail: receiver.rail,
+          current: deltaIcc,
+          drop: deltaIccDrop,
+          high: worst.high,
+          threshold: worst.threshold,
+          corner: worst.corner,
         },
       });
     }

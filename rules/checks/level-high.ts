@@ -31,11 +31,11 @@ export default defineRule({
     severity: { error: 'when NMH < 0', warning: 'when NMH < minMargin' },
     explanation:
       'For every powered driver and receiver on different parts, the lowest guaranteed output-high ' +
-      'level (at the load the net puts on the driver, or the pull-up\'s level for an open-drain net) ' +
-      'is compared with the highest input-high threshold, at every combination of the rails\' ends.',
+      "level (at the load the net puts on the driver, or the pull-up's level for an open-drain net) " +
+      "is compared with the highest input-high threshold, at every combination of the rails' ends.",
     hint:
       'Use a receiver with TTL-compatible thresholds, a dual-supply level translator, or raise the ' +
-      'driver\'s supply; for an open-drain net, pull up to the receiver\'s rail.',
+      "driver's supply; for an open-drain net, pull up to the receiver's rail.",
     messages: {
       highFails: (d: Data) =>
         `${source(d)} but ${d.receiver} needs ${volts(d.vih)} to read high: NMH ${volts(d.margin)} (${cornerText(d.driverVdd, d.receiverVdd)}).`,
@@ -48,9 +48,16 @@ export default defineRule({
       const side = pair.high;
       if (side === null || side.status === 'pass') continue;
       const data: Data = {
-        driver: pair.driver, receiver: pair.receiver, voh: side.out, vih: side.threshold, margin: side.margin,
-        minMargin: view.settings.minMargin, driverVdd: side.driverVdd, receiverVdd: side.receiverVdd,
-        estimate: side.estimate, ...(side.vpull === undefined ? {} : { vpull: side.vpull }),
+        driver: pair.driver,
+        receiver: pair.receiver,
+        voh: side.out,
+        vih: side.threshold,
+        margin: side.margin,
+        minMargin: view.settings.minMargin,
+        driverVdd: side.driverVdd,
+        receiverVdd: side.receiverVdd,
+        estimate: side.estimate,
+        ...(side.vpull === undefined ? {} : { vpull: side.vpull }),
       };
       report({
         messageId: side.status === 'fail' ? 'highFails' : 'highMarginLow',
@@ -60,8 +67,13 @@ export default defineRule({
         parts: partsOf(pair.driver, pair.receiver),
         suffix: `${pair.driver}>${pair.receiver}`,
         values: {
-          voh: side.out, vih: side.threshold, margin: side.margin, driver: pair.driver, receiver: pair.receiver,
-          driverVdd: side.driverVdd, receiverVdd: side.receiverVdd,
+          voh: side.out,
+          vih: side.threshold,
+          margin: side.margin,
+          driver: pair.driver,
+          receiver: pair.receiver,
+          driverVdd: side.driverVdd,
+          receiverVdd: side.receiverVdd,
           ...(side.vpull === undefined ? {} : { vpull: side.vpull }),
           ...(side.estimate ? { estimate: true } : {}),
         },
@@ -69,4 +81,3 @@ export default defineRule({
     }
   },
 });
-

@@ -27,8 +27,8 @@ export default defineRule({
     severity: { error: 'when NML < 0', warning: 'when NML < minMargin' },
     explanation:
       'For every powered driver and receiver on different parts, the highest guaranteed output-low ' +
-      'level (at the current the net\'s inputs and pull-ups push into the driver) is compared with the ' +
-      'lowest input-low threshold, at every combination of the rails\' ends.',
+      "level (at the current the net's inputs and pull-ups push into the driver) is compared with the " +
+      "lowest input-low threshold, at every combination of the rails' ends.",
     hint:
       'Reduce the low-level load (fewer inputs, a weaker pull-up), use a stronger driver, or a ' +
       'level translator whose outputs suit the receiver.',
@@ -47,16 +47,29 @@ export default defineRule({
       report({
         messageId: side.status === 'fail' ? 'lowFails' : 'lowMarginLow',
         data: {
-          driver: pair.driver, receiver: pair.receiver, vol: side.out, vil: side.threshold, margin: side.margin,
-          minMargin: view.settings.minMargin, driverVdd, receiverVdd: side.receiverVdd, estimate: side.estimate,
+          driver: pair.driver,
+          receiver: pair.receiver,
+          vol: side.out,
+          vil: side.threshold,
+          margin: side.margin,
+          minMargin: view.settings.minMargin,
+          driverVdd,
+          receiverVdd: side.receiverVdd,
+          estimate: side.estimate,
         },
         severity: side.status === 'fail' ? 'error' : 'warning',
         pins: [pair.driver, pair.receiver],
         parts: partsOf(pair.driver, pair.receiver),
         suffix: `${pair.driver}>${pair.receiver}`,
         values: {
-          vol: side.out, vil: side.threshold, margin: side.margin, driver: pair.driver, receiver: pair.receiver,
-          driverVdd, receiverVdd: side.receiverVdd, ...(side.estimate ? { estimate: true } : {}),
+          vol: side.out,
+          vil: side.threshold,
+          margin: side.margin,
+          driver: pair.driver,
+          receiver: pair.receiver,
+          driverVdd,
+          receiverVdd: side.receiverVdd,
+          ...(side.estimate ? { estimate: true } : {}),
         },
       });
     }

@@ -15,7 +15,8 @@ interface Data {
 }
 
 const whose = (d: Data) =>
-  d.drivers.length === 1 ? `Open-drain driver ${d.drivers[0]} on net ${d.net} can only pull low`
+  d.drivers.length === 1
+    ? `Open-drain driver ${d.drivers[0]} on net ${d.net} can only pull low`
     : `Open-drain drivers ${d.drivers.join(', ')} on net ${d.net} can only pull low`;
 
 export default defineRule({
@@ -26,11 +27,11 @@ export default defineRule({
     explanation:
       'An open-drain (or open-collector) output only sinks current; something else must lift the net ' +
       'when every driver lets go. A net with a powered open-drain driver needs a pull resistor to a ' +
-      'rail: the net\'s own resistor or a pin\'s internal pull-up. A resistor to ground does not count, ' +
-      'and neither does nothing: without a pull-up the net\'s high level is undefined.',
+      "rail: the net's own resistor or a pin's internal pull-up. A resistor to ground does not count, " +
+      "and neither does nothing: without a pull-up the net's high level is undefined.",
     hint:
-      'Fit a pull-up resistor from the net to the receivers\' rail (sized by pull-range), or enable a ' +
-      'pin\'s internal pull-up where one is strong enough for the net.',
+      "Fit a pull-up resistor from the net to the receivers' rail (sized by pull-range), or enable a " +
+      "pin's internal pull-up where one is strong enough for the net.",
     messages: {
       noPull: (d: Data) => `${whose(d)}, and no resistor pulls the net up to a rail.`,
       onlyGroundPulls: (d: Data) =>

@@ -9,8 +9,13 @@ import { levelAt } from '../levels/level.ts';
 import { below, exceeds, higherScore } from '../levels/compare.ts';
 import { corners, type Corner } from '../levels/rails.ts';
 import {
-  DEFAULT_RESISTOR_TOLERANCE, PRACTICAL_CAP_OFF_BOARD, PRACTICAL_CAP_ON_BOARD, RISE_GUARD, choosePull,
-  lowestPowerPull, shrinkByTolerance,
+  DEFAULT_RESISTOR_TOLERANCE,
+  PRACTICAL_CAP_OFF_BOARD,
+  PRACTICAL_CAP_ON_BOARD,
+  RISE_GUARD,
+  choosePull,
+  lowestPowerPull,
+  shrinkByTolerance,
 } from '../levels/pullAdvice.ts';
 import { pullTolerance } from '../model/pullRange.ts';
 import { highThreshold } from '../engine/resolve.ts';
@@ -78,7 +83,8 @@ function minimum(view: NetView, drivers: readonly PinView[], ups: readonly PullS
       const r = (thevenin(ups, c)!.v - levelAt(top.v, c.get(d.rail) ?? 0)) / current;
       return { score: -r, r, corner: cornerRecord(c) };
     });
-    if (worst !== undefined && (best === undefined || higherScore(worst.r, best.r))) best = { r: worst.r, corner: worst.corner, driver: d.key };
+    if (worst !== undefined && (best === undefined || higherScore(worst.r, best.r)))
+      best = { r: worst.r, corner: worst.corner, driver: d.key };
   }
   return { best, weak };
 }
@@ -102,8 +108,8 @@ function highestVih(judged: readonly PinView[], c: Corner): number {
  * receivers' rails. Undefined when Σ iih is 0 or no receiver has a VIH.
  */
 function levelMaximum(view: NetView, ups: readonly PullSource[]): Bound | undefined {
-  const iih = sumIih(view);
   const judged = view.receivers.filter((r) => highThreshold(r) !== undefined);
+  const iih = sumIih(view);
   // Only a sum that is 0 means no bound; one that is not a number goes on and fails the check.
   if (iih <= 0 || judged.length === 0) return undefined;
   return worstCorner([...pullRails(ups), ...judged.map((r) => r.rail)], view.rails, (c) => {
@@ -129,7 +135,6 @@ interface Outcome {
 function outcome(view: NetView, drivers: readonly PinView[], ups: readonly PullSource[]): Outcome {
   const rWeak = parallelResistance(ups, 'max')!;
   const rise = view.capacitance > 0 ? RISE_30_70 * rWeak * view.capacitance : null;
-  const judged = view.receivers.filter((r) => highThreshold(r) !== undefined);
   const iih = sumIih(view);
   let high: number | null = null;
   for (const c of corners(pullRails(ups), view.rails.ranges)) {
@@ -161,15 +166,24 @@ function describePulls(ups: readonly PullSource[], together: number): string {
   const one = ups[0]!;
   // A resistor part (version 2) is an external pull-up, named by its designator.
   if (ups.length === 1) {
-    return one.origin === 'net' ? `The ${fmtOhms(one.ohms)} pull-up to ${one.to}`
-      : one.resistor === true ? `The ${fmtOhms(one.ohms)} pull-up ${one.origin} to ${one.to}` : `The ${fmtOhms(one.ohms)} pull-up inside ${one.origin}`;
+    return one.origin === 'net'
+      ? `The ${fmtOhms(one.ohms)} pull-up to ${one.to}`
+      : one.resistor === true
+        ? `The ${fmtOhms(one.ohms)} pull-up ${one.origin} to ${one.to}`
+        : `The ${fmtOhms(one.ohms)} pull-up inside ${one.origin}`;
   }
-  const parts = ups.map((p) => (p.origin === 'net' ? `${fmtOhms(p.ohms)} of the net` : p.resistor === true ? `${fmtOhms(p.ohms)} of ${p.origin}` : `${fmtOhms(p.ohms)} inside ${p.origin}`));
+  const parts = ups.map((p) =>
+    p.origin === 'net'
+      ? `${fmtOhms(p.ohms)} of the net`
+      : p.resistor === true
+        ? `${fmtOhms(p.ohms)} of ${p.origin}`
+        : `${fmtOhms(p.ohms)} inside ${p.origin}`,
+  );
   return `The pull-ups (${parts.join(', ')}; ${fmtOhms(together)} together)`;
 }
 
 const emptyHint =
-  'Lower the net\'s capacitance (shorter wiring, fewer loads), allow a slower rise time, split the net with a ' +
+  "Lower the net's capacitance (shorter wiring, fewer loads), allow a slower rise time, split the net with a " +
   'buffer, use drivers rated for more sink current, or use receivers with lower thresholds.';
 
 function range(d: Data): string {
@@ -188,8 +202,12 @@ interface Advice {
  * middle, and the largest E24 value as the lowest-power alternative.
  */
 function advise(
-  view: NetView, drivers: readonly PinView[], ups: readonly PullSource[], rMin: number,
-  level: Bound | undefined, rise: number | undefined,
+  view: NetView,
+  drivers: readonly PinView[],
+  ups: readonly PullSource[],
+  rMin: number,
+  level: Bound | undefined,
+  rise: number | undefined,
 ): Advice {
   const own = ups.find((p) => p.origin === 'net');
   const others = ups.filter((p) => p !== own);
@@ -206,7 +224,10 @@ function advise(
   const lo = rMin > 0 ? beside(rMin, gStrong) : 0;
   const hi = effMax === undefined ? Infinity : beside(effMax, gWeak);
   // The net's pull as written (its view always carries both ends): 5 % unless it gives a range.
-  const tolerance = own === undefined || view.net.pull === undefined ? DEFAULT_RESISTOR_TOLERANCE : pullTolerance(view.net.pull, DEFAULT_RESISTOR_TOLERANCE);
+  const tolerance =
+    own === undefined || view.net.pull === undefined
+      ? DEFAULT_RESISTOR_TOLERANCE
+      : pullTolerance(view.net.pull, DEFAULT_RESISTOR_TOLERANCE);
   const shrunk = shrinkByTolerance(lo, hi, tolerance);
   const offBoard = view.pins.some((p) => p.profileId === 'off-board');
   const cap = offBoard ? PRACTICAL_CAP_OFF_BOARD : PRACTICAL_CAP_ON_BOARD;
@@ -215,34 +236,68 @@ function advise(
   const top = capped ? cap : shrunk.hi;
   const othersTooStrong = lo === Infinity;
   // Without a sink rating there is no lower bound, and the middle of [0, Rmax] means nothing.
-  const choice = othersTooStrong || !(shrunk.lo > 0) || !(shrunk.lo <= top) ? { suggested: null, series: null } : choosePull(shrunk.lo, top);
+  const choice =
+    othersTooStrong || !(shrunk.lo > 0) || !(shrunk.lo <= top)
+      ? { suggested: null, series: null }
+      : choosePull(shrunk.lo, top);
   const lowestPower = othersTooStrong || !Number.isFinite(shrunk.hi) ? null : lowestPowerPull(shrunk.lo, shrunk.hi);
   const s = choice.suggested;
-  const result: Outcome = s === null
-    ? { rise: null, high: null, low: null, sink: null }
-    : outcome(view, drivers, [...others, { ohms: s, min: s * (1 - tolerance), max: s * (1 + tolerance), to, origin: 'net' }]);
+  const result: Outcome =
+    s === null
+      ? { rise: null, high: null, low: null, sink: null }
+      : outcome(view, drivers, [
+          ...others,
+          { ohms: s, min: s * (1 - tolerance), max: s * (1 + tolerance), to, origin: 'net' },
+        ]);
   const values = {
-    suggested: s, suggestedSeries: choice.series, lowestPower, adviceTo: to,
-    adviceMin: Number.isFinite(shrunk.lo) ? shrunk.lo : null, adviceMax: Number.isFinite(top) ? top : null,
-    adviceTolerance: tolerance, adviceCap: capped ? cap : null, riseGuard: byRise ? RISE_GUARD : null,
+    suggested: s,
+    suggestedSeries: choice.series,
+    lowestPower,
+    adviceTo: to,
+    adviceMin: Number.isFinite(shrunk.lo) ? shrunk.lo : null,
+    adviceMax: Number.isFinite(top) ? top : null,
+    adviceTolerance: tolerance,
+    adviceCap: capped ? cap : null,
+    riseGuard: byRise ? RISE_GUARD : null,
     othersOhms: others.length === 0 ? null : parallelResistance(others)!,
-    suggestedRise: result.rise, suggestedHigh: result.high, suggestedLow: result.low, suggestedSink: result.sink,
+    suggestedRise: result.rise,
+    suggestedHigh: result.high,
+    suggestedLow: result.low,
+    suggestedSink: result.sink,
   };
   return { text: adviceText(values, to, othersTooStrong, own !== undefined), values };
 }
 
-function adviceText(v: {
-  suggested: number | null; suggestedSeries: string | null; lowestPower: number | null; adviceMin: number | null;
-  adviceMax: number | null; adviceTolerance: number; adviceCap: number | null; riseGuard: number | null; othersOhms: number | null;
-  suggestedRise: number | null; suggestedHigh: number | null; suggestedLow: number | null; suggestedSink: number | null;
-}, to: string, othersTooStrong: boolean, hasOwn: boolean): string {
+function adviceText(
+  v: {
+    suggested: number | null;
+    suggestedSeries: string | null;
+    lowestPower: number | null;
+    adviceMin: number | null;
+    adviceMax: number | null;
+    adviceTolerance: number;
+    adviceCap: number | null;
+    riseGuard: number | null;
+    othersOhms: number | null;
+    suggestedRise: number | null;
+    suggestedHigh: number | null;
+    suggestedLow: number | null;
+    suggestedSink: number | null;
+  },
+  to: string,
+  othersTooStrong: boolean,
+  hasOwn: boolean,
+): string {
   if (othersTooStrong) {
-    return ` The pins' internal pull-ups alone (${fmtOhms(v.othersOhms!)}) already pull harder than the drivers can sink: ` +
-      `disable or remove some of them${hasOwn ? ' and the net\'s own pull-up' : ''}.`;
+    return (
+      ` The pins' internal pull-ups alone (${fmtOhms(v.othersOhms!)}) already pull harder than the drivers can sink: ` +
+      `disable or remove some of them${hasOwn ? " and the net's own pull-up" : ''}.`
+    );
   }
-  if (v.suggested === null && v.adviceMin === 0) return ' No driver gives a rated sink current (vol), so the range has no lower end to advise from.';
-  if (v.suggested === null) return ' No standard value fits the range left after the resistor\'s tolerance.';
-  const which = hasOwn ? 'For the net\'s own pull-up' : `For a pull-up of the net's own to ${to}`;
+  if (v.suggested === null && v.adviceMin === 0)
+    return ' No driver gives a rated sink current (vol), so the range has no lower end to advise from.';
+  if (v.suggested === null) return " No standard value fits the range left after the resistor's tolerance.";
+  const which = hasOwn ? "For the net's own pull-up" : `For a pull-up of the net's own to ${to}`;
   const span = `${fmtOhms(v.adviceMin ?? 0)}–${v.adviceMax === null ? '∞' : fmtOhms(v.adviceMax)}`;
   const how = [
     `within ±${Math.round(v.adviceTolerance * 1000) / 10} % tolerance`,
@@ -255,28 +310,38 @@ function adviceText(v: {
     ...(v.suggestedLow === null ? [] : [`low ${volts(v.suggestedLow)}`]),
     ...(v.suggestedSink === null ? [] : [`sink ${amps(v.suggestedSink)}`]),
   ].join(', ');
-  const cap = v.adviceCap === null ? '' :
-    ` Only leakage bounds it from above, so it is capped at ${fmtOhms(v.adviceCap)}, a practical value; a rise-time limit on the net would sharpen it.`;
-  const alt = v.lowestPower === null || v.lowestPower === v.suggested ? '' : ` Largest value inside (lowest power): ${fmtOhms(v.lowestPower)}.`;
-  return ` ${which}: ${fmtOhms(v.suggested)} (${v.suggestedSeries} nearest the middle of ${span}, ${how})` +
-    `${gives === '' ? '' : `, worst case ${gives}`}.${cap}${alt}`;
+  const cap =
+    v.adviceCap === null
+      ? ''
+      : ` Only leakage bounds it from above, so it is capped at ${fmtOhms(v.adviceCap)}, a practical value; a rise-time limit on the net would sharpen it.`;
+  const alt =
+    v.lowestPower === null || v.lowestPower === v.suggested
+      ? ''
+      : ` Largest value inside (lowest power): ${fmtOhms(v.lowestPower)}.`;
+  return (
+    ` ${which}: ${fmtOhms(v.suggested)} (${v.suggestedSeries} nearest the middle of ${span}, ${how})` +
+    `${gives === '' ? '' : `, worst case ${gives}`}.${cap}${alt}`
+  );
 }
 
 export default defineRule({
   id: 'pull-range',
   meta: {
     title: 'Open-drain pull-ups are sized',
-    severity: { error: 'when the pull-ups are outside their range or no value fits', info: 'with the range and the advice when inside' },
+    severity: {
+      error: 'when the pull-ups are outside their range or no value fits',
+      info: 'with the range and the advice when inside',
+    },
     explanation:
       'A net whose open-drain drivers release it high is judged by all its pull-ups to powered rails together, ' +
-      'the net\'s own and the pins\' internal ones in parallel, each at the worst end of its range (the largest ' +
+      "the net's own and the pins' internal ones in parallel, each at the worst end of its range (the largest " +
       'for the rise time and the high level, the smallest for the sink current). Together they must be small ' +
-      'enough to charge the net\'s capacitance within its maximum rise time (30–70 %, ln(7/3)·RC) and to hold ' +
-      'the net above every receiver\'s VIH plus the wanted margin against all input currents, yet large enough ' +
-      'that each driver, at its largest rated sink current less the other pins\' low-level currents, still pulls ' +
+      "enough to charge the net's capacitance within its maximum rise time (30–70 %, ln(7/3)·RC) and to hold " +
+      "the net above every receiver's VIH plus the wanted margin against all input currents, yet large enough " +
+      "that each driver, at its largest rated sink current less the other pins' low-level currents, still pulls " +
       'the net down to its rated VOL. Each bound is taken at the worst ends of the rails involved. The advice ' +
-      'is for the net\'s own pull-up, beside the pins\' internal ones: the range they leave, with the rise-time ' +
-      'bound at 0.7 × maxRiseTime (a capacitance guard), shrunk by the resistor\'s tolerance (5 % unless the ' +
+      "is for the net's own pull-up, beside the pins' internal ones: the range they leave, with the rise-time " +
+      "bound at 0.7 × maxRiseTime (a capacitance guard), shrunk by the resistor's tolerance (5 % unless the " +
       'pull gives one) to [Rmin/(1−t), Rmax/(1+t)]; where only leakage bounds it from above, capped at 10 kΩ ' +
       'on a net with an off-board pin and at 47 kΩ on board; the IEC 60063 E12 value nearest the geometric mean ' +
       'of that range (E24 when no E12 value fits), with its worst rise time, high level, low level and sink ' +
@@ -322,26 +387,46 @@ export default defineRule({
     const strongest = parallelResistance(ups, 'min')!;
     const weakest = parallelResistance(ups, 'max')!;
     const advice = empty ? undefined : advise(view, drivers, ups, rMin!, level, rise);
-    const messageId = empty ? 'noRange'
-      : below(strongest, rMin!) ? 'tooSmall'
-        : rMax !== null && exceeds(weakest, rMax) ? 'tooLarge' : 'inRange';
+    const messageId = empty
+      ? 'noRange'
+      : below(strongest, rMin!)
+        ? 'tooSmall'
+        : rMax !== null && exceeds(weakest, rMax)
+          ? 'tooLarge'
+          : 'inRange';
     const keys = drivers.map((d) => d.key);
     report({
       messageId,
       data: {
-        net: view.net.id, pulls: describePulls(ups, together), verb: ups.length === 1 ? 'is' : 'are', ohms: together, rMin, rMax, weak, advice: advice?.text ?? '',
+        net: view.net.id,
+        pulls: describePulls(ups, together),
+        verb: ups.length === 1 ? 'is' : 'are',
+        ohms: together,
+        rMin,
+        rMax,
+        weak,
+        advice: advice?.text ?? '',
       },
       severity: messageId === 'inRange' ? 'info' : 'error',
       pins: keys,
       parts: partsOf(...keys),
       values: {
-        ohms: together, ohmsMin: strongest, ohmsMax: weakest, rMin, rMax, empty,
+        ohms: together,
+        ohmsMin: strongest,
+        ohmsMax: weakest,
+        rMin,
+        rMax,
+        empty,
         ...(advice?.values ?? { suggested: null, lowestPower: null }),
-        rMinDriver: weak[0] ?? best?.driver ?? null, rMinCorner: best?.corner ?? null,
-        rMaxBy: rMax === null ? null : byLevel ? 'level' : 'rise-time', rMaxCorner: byLevel ? level!.corner : null,
+        rMinDriver: weak[0] ?? best?.driver ?? null,
+        rMinCorner: best?.corner ?? null,
+        rMaxBy: rMax === null ? null : byLevel ? 'level' : 'rise-time',
+        rMaxCorner: byLevel ? level!.corner : null,
         capacitance: view.capacitance,
       },
-      ...(messageId === 'inRange' ? { hint: 'Nothing must change; the suggested value leaves the most room for tolerance and stray capacitance.' } : {}),
+      ...(messageId === 'inRange'
+        ? { hint: 'Nothing must change; the suggested value leaves the most room for tolerance and stray capacitance.' }
+        : {}),
       ...(empty ? { hint: emptyHint } : {}),
     });
   },

@@ -24,7 +24,7 @@ export default defineRule({
     explanation:
       'Every net whose pins sit on more than one rail is listed in each power state with its worst ' +
       'high and low margins, so that a review sees every crossing, passing or not. A pull ' +
-      'resistor\'s rail does not make a crossing. A net that a driver reaches through a series resistor ' +
+      "resistor's rail does not make a crossing. A net that a driver reaches through a series resistor " +
       'or a shifter counts the rails of the pins on every net so joined.',
     hint: 'Review each crossing: margins, over-voltage and the unpowered cases are checked by the other rules.',
     messages: {

@@ -19,14 +19,17 @@ export default defineRule({
   id: 'rail-injection',
   meta: {
     title: 'Rails absorb the clamp currents pushed into them',
-    severity: { error: 'when the summed clamp current exceeds the rail\'s minLoad or the rail states none', info: 'when within it' },
+    severity: {
+      error: "when the summed clamp current exceeds the rail's minLoad or the rail states none",
+      info: 'when within it',
+    },
     explanation:
       'Every clamp current that clamp-current computes (a source driving an input above its viMax through ' +
-      'series resistance) flows through the input\'s protection diode into the input\'s rail. In each power ' +
-      'state the currents into one rail are summed and compared with the rail\'s minLoad, the least current ' +
+      "series resistance) flows through the input's protection diode into the input's rail. In each power " +
+      "state the currents into one rail are summed and compared with the rail's minLoad, the least current " +
       'its loads always draw: a regulator that cannot sink current lets the rail rise by the excess. A rail ' +
       'that states no minLoad cannot be judged, which is reported as an error rather than passed.',
-    hint: 'State the rail\'s minimum load (minLoad), add a bleeder load, or raise the series resistances so less current is injected.',
+    hint: "State the rail's minimum load (minLoad), add a bleeder load, or raise the series resistances so less current is injected.",
     messages: {
       exceedsMinLoad: (d: Data) =>
         `${amps(d.total)} of clamp current flows into ${d.rail} through ${d.count} input${d.count === 1 ? '' : 's'}, more than its minimum load of ${amps(d.minLoad ?? 0)}: the rail may rise.`,
@@ -43,7 +46,12 @@ export default defineRule({
     if (total === 0) return;
     const pins = injected.map((x) => x.pin);
     const minLoad = rail.minLoad;
-    const messageId = minLoad === undefined ? 'noMinLoad' : !Number.isFinite(total) || exceeds(total, minLoad) ? 'exceedsMinLoad' : 'absorbed';
+    const messageId =
+      minLoad === undefined
+        ? 'noMinLoad'
+        : !Number.isFinite(total) || exceeds(total, minLoad)
+          ? 'exceedsMinLoad'
+          : 'absorbed';
     report({
       messageId,
       data: { rail: rail.id, total, count: pins.length, ...(minLoad === undefined ? {} : { minLoad }) },
@@ -51,7 +59,12 @@ export default defineRule({
       pins,
       parts: partsOf(...pins),
       subject: rail.id,
-      values: { rail: rail.id, total, minLoad: minLoad ?? null, currents: injected.map((x) => ({ pin: x.pin, net: x.net, current: x.current })) },
+      values: {
+        rail: rail.id,
+        total,
+        minLoad: minLoad ?? null,
+        currents: injected.map((x) => ({ pin: x.pin, net: x.net, current: x.current })),
+      },
     });
   },
 });

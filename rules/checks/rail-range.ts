@@ -20,14 +20,14 @@ interface Data {
 export default defineRule({
   id: 'rail-range',
   meta: {
-    title: 'Rails stay inside the families\' supply ranges',
+    title: "Rails stay inside the families' supply ranges",
     severity: { warning: '' },
     explanation:
-      'A profile\'s levels hold only over its vddRange. Each rail is compared with the narrowest ' +
-      'vddRange of the pins on it that use one profile; outside it, the profile\'s numbers are not ' +
+      "A profile's levels hold only over its vddRange. Each rail is compared with the narrowest " +
+      "vddRange of the pins on it that use one profile; outside it, the profile's numbers are not " +
       'guaranteed and every margin on those pins is in doubt.',
     hint:
-      'Bring the rail inside the family\'s range, or take the chosen part\'s datasheet values for ' +
+      "Bring the rail inside the family's range, or take the chosen part's datasheet values for " +
       'this supply into a design-local profile.',
     messages: {
       outside: (d: Data) =>
@@ -48,7 +48,15 @@ export default defineRule({
     const keys = view.pinKeys();
     report({
       messageId: 'outside',
-      data: { rail: rail.id, profile, railMin: range.min, railMax: range.max, profileMin, profileMax, count: keys.length },
+      data: {
+        rail: rail.id,
+        profile,
+        railMin: range.min,
+        railMax: range.max,
+        profileMin,
+        profileMax,
+        count: keys.length,
+      },
       severity: 'warning',
       pins: keys,
       parts: partsOf(...keys),

@@ -53,12 +53,12 @@ export default defineRule({
     severity: { error: '' },
     explanation:
       'An auto-direction translator senses the direction from the signal itself, so what hangs on its ' +
-      'pins matters. Each external pull on the net (the net\'s own or a resistor part; each at its low ' +
-      'tolerance end) must be at least the pin\'s minExternalPull. For a weak push-pull type with a series ' +
-      'output resistance Rs, a pull-up Rpu divides its low level: VCC·Rs/(Rpu + Rs) at the pull rail\'s ' +
-      'highest and Rpu at its low end, which must stay at or below every other receiver\'s VIL. The net\'s ' +
-      'capacitance must not exceed the pin\'s maxLoadCapacitance where one is stated. An open-drain pass ' +
-      'type\'s internal pulls are its pins\' pulls: they add to every driver\'s sink current (drive-load, ' +
+      "pins matters. Each external pull on the net (the net's own or a resistor part; each at its low " +
+      "tolerance end) must be at least the pin's minExternalPull. For a weak push-pull type with a series " +
+      "output resistance Rs, a pull-up Rpu divides its low level: VCC·Rs/(Rpu + Rs) at the pull rail's " +
+      "highest and Rpu at its low end, which must stay at or below every other receiver's VIL. The net's " +
+      "capacitance must not exceed the pin's maxLoadCapacitance where one is stated. An open-drain pass " +
+      "type's internal pulls are its pins' pulls: they add to every driver's sink current (drive-load, " +
       'pull-range), and its VIL (about 0.15 V) is judged by level-low.',
     hint:
       'Remove or enlarge the external pull-up (these translators need none or a weak one), shorten the ' +
@@ -81,11 +81,15 @@ export default defineRule({
       const pulls = view.pulls.filter(external);
       if (minExternalPull !== undefined) {
         for (const p of pulls) {
-          if (Number.isFinite(lowEnd(p)) && Number.isFinite(minExternalPull) && !below(lowEnd(p), minExternalPull)) continue;
+          if (Number.isFinite(lowEnd(p)) && Number.isFinite(minExternalPull) && !below(lowEnd(p), minExternalPull))
+            continue;
           report({
             messageId: 'pullTooStrong',
             data: { pin: pin.key, pull: pullName(p), ohms: lowEnd(p), minExternalPull },
-            severity: 'error', pins: [pin.key], parts: partsOf(pin.key), suffix: `${pin.key}:${p.origin}`,
+            severity: 'error',
+            pins: [pin.key],
+            parts: partsOf(pin.key),
+            suffix: `${pin.key}:${p.origin}`,
             values: { pin: pin.key, pull: p.origin, ohms: lowEnd(p), minExternalPull },
           });
         }
@@ -110,21 +114,39 @@ export default defineRule({
             const vlow = (vpull * rs) / (rpu + rs);
             const th = levelAt(vil, c.get(rx.rail) ?? 0);
             const score = th - vlow;
-            if (worst === undefined || score < worst.score || !Number.isFinite(score)) worst = { pin: pin.key, receiver: rx.key, vlow, vil: th, rs, rpu, vpull, score };
+            if (worst === undefined || score < worst.score || !Number.isFinite(score))
+              worst = { pin: pin.key, receiver: rx.key, vlow, vil: th, rs, rpu, vpull, score };
           }
         }
-        if (worst !== undefined && (!Number.isFinite(worst.vlow) || !Number.isFinite(worst.vil) || exceeds(worst.vlow, worst.vil))) {
+        if (
+          worst !== undefined &&
+          (!Number.isFinite(worst.vlow) || !Number.isFinite(worst.vil) || exceeds(worst.vlow, worst.vil))
+        ) {
           const { score: _s, ...data } = worst;
           report({
-            messageId: 'lowLevelLost', data, severity: 'error', pins: [pin.key, data.receiver], parts: partsOf(pin.key, data.receiver),
-            suffix: `${pin.key}>${data.receiver}`, values: { ...data },
+            messageId: 'lowLevelLost',
+            data,
+            severity: 'error',
+            pins: [pin.key, data.receiver],
+            parts: partsOf(pin.key, data.receiver),
+            suffix: `${pin.key}>${data.receiver}`,
+            values: { ...data },
           });
         }
       }
-      if (maxLoadCapacitance !== undefined && (!Number.isFinite(view.capacitance) || !Number.isFinite(maxLoadCapacitance) || exceeds(view.capacitance, maxLoadCapacitance))) {
+      if (
+        maxLoadCapacitance !== undefined &&
+        (!Number.isFinite(view.capacitance) ||
+          !Number.isFinite(maxLoadCapacitance) ||
+          exceeds(view.capacitance, maxLoadCapacitance))
+      ) {
         report({
-          messageId: 'loadTooLarge', data: { pin: pin.key, capacitance: view.capacitance, maxLoadCapacitance },
-          severity: 'error', pins: [pin.key], parts: partsOf(pin.key), suffix: `${pin.key}:load`,
+          messageId: 'loadTooLarge',
+          data: { pin: pin.key, capacitance: view.capacitance, maxLoadCapacitance },
+          severity: 'error',
+          pins: [pin.key],
+          parts: partsOf(pin.key),
+          suffix: `${pin.key}:load`,
           values: { pin: pin.key, capacitance: view.capacitance, maxLoadCapacitance },
         });
       }

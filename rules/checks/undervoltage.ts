@@ -31,9 +31,9 @@ export default defineRule({
       'on its net can apply: each powered push-pull or three-state driver at the lower of 0 V and its ' +
       'rail (a driver on a negative rail swings below ground), each pull resistor at its rail or 0 V for ' +
       'ground, and sources on other nets through series resistors at the voltage the network leaves ' +
-      'on the pin\'s net; at every corner of the rails involved. Below viMin a clamped input\'s diode ' +
+      "on the pin's net; at every corner of the rails involved. Below viMin a clamped input's diode " +
       'to ground conducts.',
-    hint: 'Clamp or divide the signal before the input, add a series resistor sized for the input\'s injection limit, or use a receiver made for the line\'s swing.',
+    hint: "Clamp or divide the signal before the input, add a series resistor sized for the input's injection limit, or use a receiver made for the line's swing.",
     messages: {
       tooLow: (d: Data) =>
         `${d.from} can pull ${d.pin} to ${volts(d.vNet)}, below its limit of ${volts(d.viMin)} at its supply of ${volts(d.pinVdd)}.`,
@@ -54,7 +54,8 @@ export default defineRule({
       };
       for (const d of view.drivers) {
         if (d.key === pin.key || d.drive === 'open-drain') continue;
-        for (const c of corners([d.rail, pin.rail], view.rails.ranges)) consider(Math.min(0, c.get(d.rail) ?? 0), c.get(pin.rail) ?? 0, d.key);
+        for (const c of corners([d.rail, pin.rail], view.rails.ranges))
+          consider(Math.min(0, c.get(d.rail) ?? 0), c.get(pin.rail) ?? 0, d.key);
       }
       for (const p of view.pulls) {
         const rails = p.to === GROUND ? [pin.rail] : [p.to, pin.rail];
@@ -63,7 +64,8 @@ export default defineRule({
       }
       if (view.path !== undefined) {
         const far = pathExposure(view.path, pin, view.rails, (vdd) => levelAt(viMin, vdd), 'low');
-        if (far !== undefined) consider(far.vNet, far.pinVdd, far.source === 'pulls' ? 'The pulls across the series resistors' : far.source);
+        if (far !== undefined)
+          consider(far.vNet, far.pinVdd, far.source === 'pulls' ? 'The pulls across the series resistors' : far.source);
       }
       const w = worst as { v: number; limit: number; from: string; pinVdd: number } | undefined;
       if (w === undefined || (Number.isFinite(w.v) && Number.isFinite(w.limit) && !below(w.v, w.limit))) continue;

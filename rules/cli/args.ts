@@ -42,7 +42,7 @@ export function parseArgs(args: readonly string[], spec: OptionSpec, command: st
     else {
       value = args[k + 1];
       // `--out --json` is a forgotten value, not a file called "--json".
-      if (value !== undefined && value.startsWith('--')) value = undefined;
+      if (value?.startsWith('--')) value = undefined;
       else k++;
     }
     if (value === undefined || value === '') return { ok: false, error: `--${name} needs a value` };

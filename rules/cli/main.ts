@@ -60,7 +60,7 @@ const SEE_HELP = 'Run "railcross --help" for the usage.';
 
 /** `SOURCE_DATE_EPOCH` (whole seconds since 1970, reproducible-builds.org) or now. */
 function generatedAt(env: CliIo['env']): string | Refusal {
-  const epoch = env['SOURCE_DATE_EPOCH'];
+  const epoch = env.SOURCE_DATE_EPOCH;
   if (epoch === undefined || epoch === '') return new Date().toISOString();
   const time = /^\d{1,15}$/.test(epoch) ? new Date(Number(epoch) * 1000) : undefined;
   if (time === undefined || Number.isNaN(time.getTime())) {
@@ -109,15 +109,18 @@ function checkOptions(args: readonly string[]): CheckOptions | Refusal {
   const { positional, options } = parsed;
   const value = (name: string) => options.get(name) as string | undefined;
   if (positional.length === 0) return refuse('check needs a design file: railcross check FILE', SEE_HELP);
-  if (positional.length > 1) return refuse(`check takes one design file, found ${positional.length}: ${positional.join(', ')}`, SEE_HELP);
+  if (positional.length > 1)
+    return refuse(`check takes one design file, found ${positional.length}: ${positional.join(', ')}`, SEE_HELP);
 
   const format = value('format') ?? (options.has('json') ? 'json' : 'text');
   if (!isOneOf(format, FORMATS)) return refuse(`--format is "${format}": expected text, json, md, sarif or junit`);
-  if (options.has('json') && format !== 'json') return refuse(`--json and --format ${format} contradict each other: give one`);
+  if (options.has('json') && format !== 'json')
+    return refuse(`--json and --format ${format} contradict each other: give one`);
   const quiet = options.has('quiet');
   const verbose = options.has('verbose');
   if (quiet && verbose) return refuse('--quiet and --verbose contradict each other: give one');
-  if ((quiet || verbose) && format !== 'text') return refuse(`--${quiet ? 'quiet' : 'verbose'} shapes the text report: it cannot go with --format ${format}`);
+  if ((quiet || verbose) && format !== 'text')
+    return refuse(`--${quiet ? 'quiet' : 'verbose'} shapes the text report: it cannot go with --format ${format}`);
 
   const failOn = value('fail-on') ?? 'error';
   if (failOn !== 'error' && failOn !== 'warning') return refuse(`--fail-on is "${failOn}": expected error or warning`);
@@ -128,13 +131,15 @@ function checkOptions(args: readonly string[]): CheckOptions | Refusal {
     const q = parseQuantity(margin, 'V');
     if (!q.ok) return refuse(`--min-margin is "${margin}": ${q.error} (e.g. 0.3, 300m or "300 mV")`);
     if (q.value < 0) return refuse(`--min-margin is "${margin}": expected a margin of 0 V or more`);
-    if (!(q.value <= MAX_VOLTS)) return refuse(`--min-margin is "${margin}": expected a margin of at most ${MAX_VOLTS / 1000} kV`);
+    if (!(q.value <= MAX_VOLTS))
+      return refuse(`--min-margin is "${margin}": expected a margin of at most ${MAX_VOLTS / 1000} kV`);
     minMargin = q.value;
   }
 
   const paper = value('paper') ?? 'a4';
   if (paper !== 'a4' && paper !== 'letter') return refuse(`--paper is "${paper}": expected a4 or letter`);
-  if (options.has('paper') && !options.has('pdf')) return refuse('--paper sets the PDF report\'s page size: give --pdf PATH as well');
+  if (options.has('paper') && !options.has('pdf'))
+    return refuse("--paper sets the PDF report's page size: give --pdf PATH as well");
 
   return {
     file: positional[0]!,
@@ -169,7 +174,10 @@ function loadDesign(file: string, io: CliIo, given?: string): Design | Refusal {
   const read = readDesign(text);
   if (!read.ok) {
     const n = read.errors.length;
-    return new Refusal([`railcross: ${file} is not a valid design (${n} problem${n === 1 ? '' : 's'}):`, ...read.errors.map((e) => `${e.path}: ${e.message}`)]);
+    return new Refusal([
+      `railcross: ${file} is not a valid design (${n} problem${n === 1 ? '' : 's'}):`,
+      ...read.errors.map((e) => `${e.path}: ${e.message}`),
+    ]);
   }
   return read.design;
 }
@@ -191,9 +199,14 @@ function reportFor(
 ): { design: Design; result: ReturnType<typeof check>; report: Report } | Refusal {
   const states = [ALL_ON, ...(design.scenarios ?? []).map((s) => s.id)];
   if (settings.scenario !== undefined && !states.includes(settings.scenario)) {
-    return refuse(`--scenario "${settings.scenario}" is not a power state of ${file}: expected one of ${states.join(', ')}`);
+    return refuse(
+      `--scenario "${settings.scenario}" is not a power state of ${file}: expected one of ${states.join(', ')}`,
+    );
   }
-  const checked = settings.minMargin === undefined ? design : { ...design, settings: { ...design.settings, minMargin: settings.minMargin } };
+  const checked =
+    settings.minMargin === undefined
+      ? design
+      : { ...design, settings: { ...design.settings, minMargin: settings.minMargin } };
   const result = check(checked);
   timing?.mark('check');
   const report = buildReport(checked, result, {
@@ -221,8 +234,13 @@ function loadReport(file: string, io: CliIo, settings: ReportSettings): Report |
   if (typeof doc === 'object' && doc !== null && (doc as { format?: unknown }).format === REPORT_FORMAT_ID) {
     const parsed = ReportSchema.safeParse(doc);
     if (parsed.success) return parsed.data;
-    const problems = parsed.error.issues.map((i) => `${i.path.length === 0 ? '(root)' : i.path.join('.')}: ${i.message}`);
-    return new Refusal([`railcross: ${file} is not a valid report (${plural(problems.length, 'problem')}):`, ...problems.slice(0, 20)]);
+    const problems = parsed.error.issues.map(
+      (i) => `${i.path.length === 0 ? '(root)' : i.path.join('.')}: ${i.message}`,
+    );
+    return new Refusal([
+      `railcross: ${file} is not a valid report (${plural(problems.length, 'problem')}):`,
+      ...problems.slice(0, 20),
+    ]);
   }
   const design = loadDesign(file, io, text);
   if (design instanceof Refusal) return design;
@@ -260,12 +278,21 @@ function write(io: CliIo, path: string, data: string | Uint8Array): Refusal | un
 }
 
 /** The PDF report's bytes; jsPDF is loaded only when a PDF is asked for (it is large, and slow to load). */
-async function pdfBytes(io: CliIo, design: Design, result: ReturnType<typeof check>, report: Report, paper: Paper, timing: Timing): Promise<Uint8Array | Refusal> {
+async function pdfBytes(
+  io: CliIo,
+  design: Design,
+  result: ReturnType<typeof check>,
+  report: Report,
+  paper: Paper,
+  timing: Timing,
+): Promise<Uint8Array | Refusal> {
   let fonts: PdfFonts;
   try {
     fonts = io.loadPdfFonts();
   } catch (error) {
-    return refuse(`cannot read the PDF report's fonts (the dejavu-fonts-ttf package): ${error instanceof Error ? error.message : String(error)}`);
+    return refuse(
+      `cannot read the PDF report's fonts (the dejavu-fonts-ttf package): ${error instanceof Error ? error.message : String(error)}`,
+    );
   }
   timing.mark('pdf-read-fonts');
   const { writeReportPdf } = await import('../report/pdf/index.ts');
@@ -283,14 +310,19 @@ async function runCheck(args: readonly string[], io: CliIo): Promise<number | Re
   if (options instanceof Refusal) return options;
   const time = generatedAt(io.env);
   if (time instanceof Refusal) return time;
-  const timing = new Timing(io.env['RAILCROSS_TIMING'] === '1');
+  const timing = new Timing(io.env.RAILCROSS_TIMING === '1');
   const text = readText(options.file, io);
   if (text instanceof Refusal) return text;
   timing.mark('read');
   const design = loadDesign(options.file, io, text);
   if (design instanceof Refusal) return design;
   timing.mark('validate');
-  const settings: ReportSettings = { failOn: options.failOn, generatedAt: time, scenario: options.scenario, minMargin: options.minMargin };
+  const settings: ReportSettings = {
+    failOn: options.failOn,
+    generatedAt: time,
+    scenario: options.scenario,
+    minMargin: options.minMargin,
+  };
   const built = reportFor(design, options.file, settings, timing);
   if (built instanceof Refusal) return built;
   const { report, result } = built;
@@ -310,7 +342,9 @@ async function runCheck(args: readonly string[], io: CliIo): Promise<number | Re
   if (options.out !== undefined) {
     const failed = write(io, options.out, json);
     if (failed !== undefined) return failed;
-    notes.push(`railcross: wrote the JSON report to ${options.out} (${sizeText(new TextEncoder().encode(json).length)})`);
+    notes.push(
+      `railcross: wrote the JSON report to ${options.out} (${sizeText(new TextEncoder().encode(json).length)})`,
+    );
   }
   // Written whatever the verdict: a failing design is when the PDF is most wanted.
   if (options.pdf !== undefined) {
@@ -332,7 +366,13 @@ async function runCheck(args: readonly string[], io: CliIo): Promise<number | Re
   return judged.fails ? EXIT_FAIL : EXIT_PASS;
 }
 
-function render(report: Report, options: CheckOptions, judged: Verdict, baseline: Baseline | undefined, design: Design): string {
+function render(
+  report: Report,
+  options: CheckOptions,
+  judged: Verdict,
+  baseline: Baseline | undefined,
+  design: Design,
+): string {
   switch (options.format) {
     case 'json':
       return reportJson(report);
@@ -341,7 +381,10 @@ function render(report: Report, options: CheckOptions, judged: Verdict, baseline
     case 'sarif':
       return renderSarif(report, { file: options.file, ...(baseline === undefined ? {} : { baseline }) });
     case 'junit':
-      return renderJunit(report, { nets: design.nets.map((n) => n.id), ...(baseline === undefined ? {} : { baseline }) });
+      return renderJunit(report, {
+        nets: design.nets.map((n) => n.id),
+        ...(baseline === undefined ? {} : { baseline }),
+      });
     case 'text':
       return renderText(report, {
         verbose: options.verbose,
@@ -355,10 +398,12 @@ async function runDiff(args: readonly string[], io: CliIo): Promise<number | Ref
   const parsed = parseArgs(args, { format: 'value', 'fail-on': 'value', json: 'flag' }, 'diff');
   if (!parsed.ok) return refuse(parsed.error, SEE_HELP);
   const { positional, options } = parsed;
-  if (positional.length !== 2) return refuse(`diff compares two files, found ${positional.length}: railcross diff OLD NEW`, SEE_HELP);
+  if (positional.length !== 2)
+    return refuse(`diff compares two files, found ${positional.length}: railcross diff OLD NEW`, SEE_HELP);
   const format = (options.get('format') as string | undefined) ?? (options.has('json') ? 'json' : 'text');
   if (!isOneOf(format, DIFF_FORMATS)) return refuse(`--format is "${format}": expected text, json or md`);
-  if (options.has('json') && format !== 'json') return refuse(`--json and --format ${format} contradict each other: give one`);
+  if (options.has('json') && format !== 'json')
+    return refuse(`--json and --format ${format} contradict each other: give one`);
   const failOn = (options.get('fail-on') as string | undefined) ?? 'error';
   if (failOn !== 'error' && failOn !== 'warning') return refuse(`--fail-on is "${failOn}": expected error or warning`);
   const time = generatedAt(io.env);
@@ -370,7 +415,11 @@ async function runDiff(args: readonly string[], io: CliIo): Promise<number | Ref
   const after = loadReport(newFile, io, settings);
   if (after instanceof Refusal) return after;
   const d = diffReports(before, after, { from: oldFile, to: newFile }, failOn);
-  const render: Record<DiffFormat, () => string> = { text: () => renderDiffText(d), md: () => renderDiffMarkdown(d), json: () => renderDiffJson(d) };
+  const render: Record<DiffFormat, () => string> = {
+    text: () => renderDiffText(d),
+    md: () => renderDiffMarkdown(d),
+    json: () => renderDiffJson(d),
+  };
   io.stdout(render[format]());
   return d.summary.regressions > 0 ? EXIT_FAIL : EXIT_PASS;
 }
@@ -378,7 +427,8 @@ async function runDiff(args: readonly string[], io: CliIo): Promise<number | Ref
 function runProfiles(args: readonly string[], io: CliIo): number | Refusal {
   const parsed = parseArgs(args, { json: 'flag' }, 'profiles');
   if (!parsed.ok) return refuse(parsed.error, SEE_HELP);
-  if (parsed.positional.length > 0) return refuse(`profiles takes no arguments, found: ${parsed.positional.join(', ')}`, SEE_HELP);
+  if (parsed.positional.length > 0)
+    return refuse(`profiles takes no arguments, found: ${parsed.positional.join(', ')}`, SEE_HELP);
   if (parsed.options.has('json')) {
     io.stdout(`${JSON.stringify({ tool: TOOL_NAME, profiles: BUILTIN_PROFILES }, null, 2)}\n`);
     return EXIT_PASS;

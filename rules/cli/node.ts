@@ -7,7 +7,7 @@ import { createRequire } from 'node:module';
 import process from 'node:process';
 import { fileURLToPath } from 'node:url';
 import type { PdfFonts } from '../report/pdf/fonts.ts';
-import { BUNDLED_FONT_FILES } from './fontFiles.ts';
+import type { BUNDLED_FONT_FILES } from './fontFiles.ts';
 import { main, EXIT_UNCHECKED, type CliIo } from './main.ts';
 
 const require = createRequire(import.meta.url);
@@ -48,7 +48,9 @@ export async function run(argv: readonly string[] = process.argv.slice(2)): Prom
   try {
     return await main(argv, nodeIo);
   } catch (error) {
-    process.stderr.write(`railcross: internal error, please report it: ${error instanceof Error ? (error.stack ?? error.message) : String(error)}\n`);
+    process.stderr.write(
+      `railcross: internal error, please report it: ${error instanceof Error ? (error.stack ?? error.message) : String(error)}\n`,
+    );
     return EXIT_UNCHECKED;
   }
 }

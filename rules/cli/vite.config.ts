@@ -31,7 +31,8 @@ function finish(): Plugin {
     },
     writeBundle() {
       mkdirSync(join(dir, 'fonts'), { recursive: true });
-      for (const file of BUNDLED_FONT_FILES) copyFileSync(require.resolve(`dejavu-fonts-ttf/ttf/${file}`), join(dir, 'fonts', file));
+      for (const file of BUNDLED_FONT_FILES)
+        copyFileSync(require.resolve(`dejavu-fonts-ttf/ttf/${file}`), join(dir, 'fonts', file));
       chmodSync(join(dir, 'railcross.mjs'), 0o755);
     },
   };
@@ -45,7 +46,9 @@ export default defineConfig({
   logLevel: 'warn',
   ssr: { noExternal: true, target: 'node' },
   resolve: {
-    alias: Object.fromEntries(['html2canvas', 'canvg', 'dompurify'].map((name) => [name, join(root, 'rules/cli/unavailable.ts')])),
+    alias: Object.fromEntries(
+      ['html2canvas', 'canvg', 'dompurify'].map((name) => [name, join(root, 'rules/cli/unavailable.ts')]),
+    ),
   },
   build: {
     ssr: 'rules/cli/bin.ts',

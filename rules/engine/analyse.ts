@@ -9,7 +9,15 @@ import { below, lowerScore } from '../levels/compare.ts';
 import { highThreshold, lowThreshold } from './resolve.ts';
 import { pullRails, thevenin, worstCorner } from './netMath.ts';
 import type {
-  DriverLoad, EffectiveSettings, LevelSide, NetAnalysis, PairAnalysis, PairStatus, PinView, PullSource, RailStates,
+  DriverLoad,
+  EffectiveSettings,
+  LevelSide,
+  NetAnalysis,
+  PairAnalysis,
+  PairStatus,
+  PinView,
+  PullSource,
+  RailStates,
 } from './types.ts';
 
 export interface AnalysisInput {
@@ -50,8 +58,16 @@ function highSide(input: AnalysisInput, driver: PinView, receiver: PinView, sumI
       const receiverVdd = c.get(receiver.rail) ?? 0;
       const threshold = levelAt(vih, receiverVdd);
       return {
-        out, threshold, margin: out - threshold, driverVdd: null, receiverVdd, vpull: th.v,
-        estimate: false, status: judge(out, threshold, settings.minMargin), load: sumIih, score: out - threshold,
+        out,
+        threshold,
+        margin: out - threshold,
+        driverVdd: null,
+        receiverVdd,
+        vpull: th.v,
+        estimate: false,
+        status: judge(out, threshold, settings.minMargin),
+        load: sumIih,
+        score: out - threshold,
       };
     });
     return worst === undefined ? null : strip(worst);
@@ -65,8 +81,15 @@ function highSide(input: AnalysisInput, driver: PinView, receiver: PinView, sumI
     const level = outputLevel(voh, load, driverVdd, 'high')!;
     const threshold = levelAt(vih, receiverVdd);
     return {
-      out: level.v, threshold, margin: level.v - threshold, driverVdd, receiverVdd,
-      estimate: level.estimate, status: judge(level.v, threshold, settings.minMargin), load, score: level.v - threshold,
+      out: level.v,
+      threshold,
+      margin: level.v - threshold,
+      driverVdd,
+      receiverVdd,
+      estimate: level.estimate,
+      status: judge(level.v, threshold, settings.minMargin),
+      load,
+      score: level.v - threshold,
     };
   });
   return worst === undefined ? null : strip(worst);
@@ -84,8 +107,15 @@ function lowSide(input: AnalysisInput, driver: PinView, receiver: PinView): Leve
     const level = outputLevel(vol, load, driverVdd, 'low')!;
     const threshold = levelAt(vil, receiverVdd);
     return {
-      out: level.v, threshold, margin: threshold - level.v, driverVdd, receiverVdd,
-      estimate: level.estimate, status: judge(threshold, level.v, settings.minMargin), load, score: threshold - level.v,
+      out: level.v,
+      threshold,
+      margin: threshold - level.v,
+      driverVdd,
+      receiverVdd,
+      estimate: level.estimate,
+      status: judge(threshold, level.v, settings.minMargin),
+      load,
+      score: threshold - level.v,
     };
   });
   return worst === undefined ? null : strip(worst);

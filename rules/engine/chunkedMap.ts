@@ -76,7 +76,10 @@ export class ChunkedMap<V> implements ReadonlyMap<string, V> {
       const bucket = spine[at] as Map<string, V>;
       const had = bucket.has(key);
       if (value === undefined) {
-        if (had) { bucket.delete(key); size--; }
+        if (had) {
+          bucket.delete(key);
+          size--;
+        }
       } else {
         bucket.set(key, value);
         if (!had) size++;

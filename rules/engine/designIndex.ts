@@ -28,7 +28,6 @@ export interface PinGroup {
   readonly ranges: Map<readonly [number, number], { range: readonly [number, number]; count: number }>;
 }
 
-
 function addTo(map: Map<string, Set<string>>, key: string, value: string): void {
   let set = map.get(key);
   if (set === undefined) {
@@ -154,7 +153,13 @@ export class DesignIndex {
     const key = res.resolved.key;
     const vddRange = res.resolved.params.vddRange;
     const entry: PinEntry = {
-      part, pin, resolution: res, rail: res.resolved.rail, profile: res.resolved.profileId, pullTo: pin.pull?.to, vddRange,
+      part,
+      pin,
+      resolution: res,
+      rail: res.resolved.rail,
+      profile: res.resolved.profileId,
+      pullTo: pin.pull?.to,
+      vddRange,
     };
     this.pins.set(key, entry);
     if (!this.netOfPin.has(key)) this.lone.add(key);
@@ -240,7 +245,10 @@ export class DesignIndex {
     for (const net of this.nets.values()) if (net.pull?.to === rail) nets.add(net.id);
     // A resistor tied to the rail, a FET shifter's gate on it.
     for (const d of this.discretes.values()) {
-      const on = d.kind === 'resistor' ? d.tie?.['1'] === rail || d.tie?.['2'] === rail : d.kind === 'fet-shifter' && d.gate === rail;
+      const on =
+        d.kind === 'resistor'
+          ? d.tie?.['1'] === rail || d.tie?.['2'] === rail
+          : d.kind === 'fet-shifter' && d.gate === rail;
       if (!on) continue;
       for (const n of this.netsOfDiscrete(d)) if (n !== undefined) nets.add(n);
     }

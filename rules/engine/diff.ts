@@ -14,7 +14,10 @@ export function changedById<T extends { id: string }>(
   let kept = 0;
   for (let k = 0; k < after.length; k++) {
     const item = after[k]!;
-    if (before[k] === item) { kept++; continue; }
+    if (before[k] === item) {
+      kept++;
+      continue;
+    }
     const old = current(item.id);
     if (old !== undefined) kept++;
     if (old !== item) onChange(old, item);
@@ -27,7 +30,11 @@ export function changedById<T extends { id: string }>(
  * appends and deletes without reordering, so a walk in step finds them without hashing every
  * id; a reordered array falls back on a set of ids.
  */
-function removedFrom<T extends { id: string }>(before: readonly T[], after: readonly T[], onRemoved: (old: T) => void): void {
+function removedFrom<T extends { id: string }>(
+  before: readonly T[],
+  after: readonly T[],
+  onRemoved: (old: T) => void,
+): void {
   const missing: T[] = [];
   let j = 0;
   let steps = 0;
@@ -45,4 +52,3 @@ function removedFrom<T extends { id: string }>(before: readonly T[], after: read
   }
   for (const o of missing) onRemoved(o);
 }
-

@@ -26,24 +26,25 @@ export function completeFinding<M extends MessageFns>(
   const at = net?.id ?? draft.subject ?? place;
   const id = findingId(rule.id, at, state.id, draft.suffix);
   const bad = undecidablePaths(draft.values, draft.data);
-  const judged = bad.length === 0
-    ? {
-      severity: draft.severity,
-      message: rule.meta.messages[draft.messageId]!(draft.data),
-      messageId: draft.messageId,
-      values: draft.values,
-      hint: draft.hint ?? rule.meta.hint,
-      // A finding that could not be decided is never waived: a waiver accepts a known risk.
-      waived: net === null ? undefined : waiverNote(net, rule.id, state.id),
-    }
-    : {
-      severity: 'error' as const,
-      message: undecidableMessage(rule.meta.title, undecidableSubject(draft, net), bad, draft.values, draft.data),
-      messageId: UNDECIDABLE,
-      values: { ...finiteOrNull(draft.values), undecidable: bad },
-      hint: UNDECIDABLE_HINT,
-      waived: undefined,
-    };
+  const judged =
+    bad.length === 0
+      ? {
+          severity: draft.severity,
+          message: rule.meta.messages[draft.messageId]!(draft.data),
+          messageId: draft.messageId,
+          values: draft.values,
+          hint: draft.hint ?? rule.meta.hint,
+          // A finding that could not be decided is never waived: a waiver accepts a known risk.
+          waived: net === null ? undefined : waiverNote(net, rule.id, state.id),
+        }
+      : {
+          severity: 'error' as const,
+          message: undecidableMessage(rule.meta.title, undecidableSubject(draft, net), bad, draft.values, draft.data),
+          messageId: UNDECIDABLE,
+          values: { ...finiteOrNull(draft.values), undecidable: bad },
+          hint: UNDECIDABLE_HINT,
+          waived: undefined,
+        };
   const { waived, ...rest } = judged;
   // The one place a finding is made: its rule and values come from one typed rule, which the
   // union of findings by rule cannot see through a generic rule.
@@ -128,7 +129,8 @@ export function sortFindings(
   stateOrder: ReadonlyMap<string, number>,
   netOrder: ReadonlyMap<string, number>,
 ): Finding[] {
-  const netRank = (f: Finding) => (f.net === null ? Number.MAX_SAFE_INTEGER : (netOrder.get(f.net) ?? Number.MAX_SAFE_INTEGER - 1));
+  const netRank = (f: Finding) =>
+    f.net === null ? Number.MAX_SAFE_INTEGER : (netOrder.get(f.net) ?? Number.MAX_SAFE_INTEGER - 1);
   return findings.sort(
     (a, b) =>
       (stateOrder.get(a.scenario) ?? 0) - (stateOrder.get(b.scenario) ?? 0) ||

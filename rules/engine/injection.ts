@@ -31,7 +31,8 @@ export function injectionsOf(view: NetView): readonly Injection[] {
       if (direct !== undefined && exceeds(direct.vNet, direct.limit)) continue;
       const far = pathExposure(view.path, pin, view.rails, limit, 'high', `viMax:${String(viMax)}`);
       const undecided = far !== undefined && (!Number.isFinite(far.vNet) || !Number.isFinite(far.current));
-      if (far !== undefined && (undecided || (exceeds(far.vNet, far.limit) && far.current > 0))) out.push({ pin: pin.key, rail: pin.rail, current: far.current });
+      if (far !== undefined && (undecided || (exceeds(far.vNet, far.limit) && far.current > 0)))
+        out.push({ pin: pin.key, rail: pin.rail, current: far.current });
     }
   }
   hit = out;

@@ -122,7 +122,6 @@ export function worstCorner<T extends { score: number }>(
   return worst;
 }
 
-
 /** Something that can put a voltage on a net: a powered driver's rail, or a pull's rail. */
 export interface NetSource {
   /** The driver's pin key, or the pull's origin (`net` or the pin key). */
@@ -136,11 +135,7 @@ export interface NetSource {
  * rail (open-drain drivers excepted: they only pull low) and every pull resistor's rail, the
  * pin's own internal pull included (rules-catalogue.md, `overvoltage`, `back-power`).
  */
-export function netSources(
-  pin: PinView,
-  drivers: readonly PinView[],
-  pulls: readonly PullSource[],
-): NetSource[] {
+export function netSources(pin: PinView, drivers: readonly PinView[], pulls: readonly PullSource[]): NetSource[] {
   const out: NetSource[] = [];
   for (const d of drivers) {
     if (d.key === pin.key || d.drive === 'open-drain') continue;
@@ -181,7 +176,8 @@ export function worstExposure(
       const pinVdd = c.get(pin.rail) ?? 0;
       const lim = limit(pinVdd);
       const excess = vNet - lim;
-      if (worst === undefined || higherScore(excess, worst.excess)) worst = { vNet, limit: lim, source, pinVdd, excess };
+      if (worst === undefined || higherScore(excess, worst.excess))
+        worst = { vNet, limit: lim, source, pinVdd, excess };
     }
   }
   if (worst === undefined) return undefined;

@@ -39,22 +39,41 @@ export function solve(net: Network): (number | undefined)[] {
     adjacent[l.b]!.push(l.a);
   }
   const queue: number[] = [];
-  for (let k = 0; k < n; k++) if (fixed[k] !== undefined) { anchored[k] = true; queue.push(k); }
-  for (const t of ties) if (t.g > 0 && !anchored[t.a]) { anchored[t.a] = true; queue.push(t.a); }
+  for (let k = 0; k < n; k++)
+    if (fixed[k] !== undefined) {
+      anchored[k] = true;
+      queue.push(k);
+    }
+  for (const t of ties)
+    if (t.g > 0 && !anchored[t.a]) {
+      anchored[t.a] = true;
+      queue.push(t.a);
+    }
   while (queue.length > 0) {
     const k = queue.pop()!;
-    for (const j of adjacent[k]!) if (!anchored[j]) { anchored[j] = true; queue.push(j); }
+    for (const j of adjacent[k]!)
+      if (!anchored[j]) {
+        anchored[j] = true;
+        queue.push(j);
+      }
   }
 
   const free: number[] = [];
   const slot = new Array<number>(n).fill(-1);
-  for (let k = 0; k < n; k++) if (fixed[k] === undefined && anchored[k]) { slot[k] = free.length; free.push(k); }
+  for (let k = 0; k < n; k++)
+    if (fixed[k] === undefined && anchored[k]) {
+      slot[k] = free.length;
+      free.push(k);
+    }
   const m = free.length;
   const G: number[][] = Array.from({ length: m }, () => new Array<number>(m + 1).fill(0));
   for (const k of free) G[slot[k]!]![m] = inject[k] ?? 0;
   for (const l of links) {
     if (!(l.g > 0)) continue;
-    for (const [x, y] of [[l.a, l.b], [l.b, l.a]] as const) {
+    for (const [x, y] of [
+      [l.a, l.b],
+      [l.b, l.a],
+    ] as const) {
       const sx = slot[x]!;
       if (sx < 0) continue;
       const row = G[sx]!;
@@ -110,7 +129,12 @@ function gauss(A: number[][], m: number): number[] {
  * with every node at `v`. For a fixed node this is what its source delivers (before the node's own
  * injected current).
  */
-export function currentOut(net: Network, v: readonly (number | undefined)[], k: number, only?: (linkIndex: number) => boolean): number {
+export function currentOut(
+  net: Network,
+  v: readonly (number | undefined)[],
+  k: number,
+  only?: (linkIndex: number) => boolean,
+): number {
   const vk = v[k];
   if (vk === undefined) return 0;
   let i = 0;

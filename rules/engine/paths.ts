@@ -29,8 +29,20 @@ import { currentOut, solve, type Network } from './nodal.ts';
 import { pullEndVoltage } from './netMath.ts';
 import { GROUND } from './powerStates.ts';
 import type {
-  DriverLoad, EffectiveSettings, LevelSide, NetView, PairAnalysis, PairStatus, PathEdge, PathNode, PinView, PullSource,
-  RailStates, ResistorPath, SeriesResistor, ShifterLink,
+  DriverLoad,
+  EffectiveSettings,
+  LevelSide,
+  NetView,
+  PairAnalysis,
+  PairStatus,
+  PathEdge,
+  PathNode,
+  PinView,
+  PullSource,
+  RailStates,
+  ResistorPath,
+  SeriesResistor,
+  ShifterLink,
 } from './types.ts';
 
 /** More resistors with a tolerance than this in one path are judged at their ends all together. */
@@ -57,7 +69,15 @@ function tiedPull(d: Discrete, end: '1' | '2', netId: string, src: PathSource): 
   const to = d.tie?.[other];
   if (to === undefined || src.netOfPin.get(`${d.id}.${end}`) !== netId) return undefined;
   const tolerance = d.tolerance ?? DEFAULT_RESISTOR_TOLERANCE;
-  return { ohms: d.ohms, min: d.ohms * (1 - tolerance), max: d.ohms * (1 + tolerance), to, origin: d.id, tolerance, resistor: true };
+  return {
+    ohms: d.ohms,
+    min: d.ohms * (1 - tolerance),
+    max: d.ohms * (1 + tolerance),
+    to,
+    origin: d.id,
+    tolerance,
+    resistor: true,
+  };
 }
 
 /** A `pull` field as the engine sees it (prepare.ts `pullSource`, repeated: prepare imports this module). */
@@ -107,7 +127,11 @@ function across(d: Discrete, netId: string, src: PathSource): { pin: string; oth
  * The resistor path and the shifters of a net: undefined path when no series resistor joins it
  * to another net. `self` is the net's own node, made by the caller.
  */
-export function linksOf(net: Net, self: PathNode, src: PathSource): { path: ResistorPath | undefined; shifters: ShifterLink[] } {
+export function linksOf(
+  net: Net,
+  self: PathNode,
+  src: PathSource,
+): { path: ResistorPath | undefined; shifters: ShifterLink[] } {
   const nodes: PathNode[] = [self];
   const index = new Map<string, number>([[net.id, 0]]);
   const resistors: SeriesResistor[] = [];
@@ -244,21 +268,19 @@ function network(
   const ties: { a: number; g: number; v: number }[] = [];
   const inject: number[] = [];
   path.nodes.forEach((n, k) => {
-    n.pulls.forEach((p, j) => ties.push({ a: k, g: 1 / ohms.pulls[k]![j]!, v: ground ? 0 : pullEndVoltage(p, corner) }));
+    n.pulls.forEach((p, j) => {
+      ties.push({ a: k, g: 1 / ohms.pulls[k]![j]!, v: ground ? 0 : pullEndVoltage(p, corner) });
+    });
     let i = 0;
     if (sense !== 'none') {
       for (const p of n.pins) {
         if (p === except) continue;
-        i += sense === 'high' ? -(p.params.iih ?? 0) : p.params.iil ?? 0;
+        i += sense === 'high' ? -(p.params.iih ?? 0) : (p.params.iil ?? 0);
       }
     }
     inject.push(i);
   });
   return { n: path.nodes.length, fixed, links, ties, inject };
-}
-
-function nodeOfPin(path: ResistorPath, pin: PinView): number {
-  return path.nodes.findIndex((n) => n.pins.includes(pin));
 }
 
 function volAtTop(d: PinView, vdd: number): number | undefined {
@@ -288,7 +310,10 @@ export function pathLoad(path: ResistorPath, driver: PinView, rails: RailStates)
       if (driver.drive !== 'open-drain') {
         fixed[d] = vdd;
         const net = network(path, c, ohms, fixed, 'high', driver);
-        high = Math.max(high, currentOut(net, solve(net), d, () => true));
+        high = Math.max(
+          high,
+          currentOut(net, solve(net), d, () => true),
+        );
       }
       const vol = volAtTop(driver, vdd);
       if (vol !== undefined) {
@@ -389,10 +414,12 @@ function resistorPairs(
       const high: (Scored | undefined)[] = rxs.map(() => undefined);
       const low: (Scored | undefined)[] = rxs.map(() => undefined);
       const railIds = [driver.rail, ...rxs.map((rx) => rx.rail), ...pullRailIds];
-      const canHigh = driver.drive === 'open-drain' ? hasPullUp : driver.params.voh !== undefined && driver.params.voh.length > 0;
+      const canHigh =
+        driver.drive === 'open-drain' ? hasPullUp : driver.params.voh !== undefined && driver.params.voh.length > 0;
       for (const c of corners(railIds, rails.ranges)) {
         const driverVdd = c.get(driver.rail) ?? 0;
-        const vohLevel = driver.drive === 'open-drain' ? undefined : outputLevel(driver.params.voh, load.high, driverVdd, 'high');
+        const vohLevel =
+          driver.drive === 'open-drain' ? undefined : outputLevel(driver.params.voh, load.high, driverVdd, 'high');
         const volLevel = outputLevel(driver.params.vol, load.low, driverVdd, 'low');
         for (const ohms of cases) {
           // One solve per case serves every receiver on the net: they share its voltage.
@@ -417,9 +444,16 @@ function resistorPairs(
               const threshold = levelAt(vih, receiverVdd);
               if (high[k] === undefined || v - threshold < high[k]!.score) {
                 high[k] = {
-                  out: v, threshold, margin: v - threshold, driverVdd: vohLevel === undefined ? null : driverVdd, receiverVdd,
-                  estimate: vohLevel?.estimate ?? false, status: judge(v, threshold, settings.minMargin), load: load.high,
-                  detail: { vSource: vohLevel?.v ?? 0, ...seriesDetail(path, ohms) }, score: v - threshold,
+                  out: v,
+                  threshold,
+                  margin: v - threshold,
+                  driverVdd: vohLevel === undefined ? null : driverVdd,
+                  receiverVdd,
+                  estimate: vohLevel?.estimate ?? false,
+                  status: judge(v, threshold, settings.minMargin),
+                  load: load.high,
+                  detail: { vSource: vohLevel?.v ?? 0, ...seriesDetail(path, ohms) },
+                  score: v - threshold,
                 };
               }
             }
@@ -428,9 +462,16 @@ function resistorPairs(
               const threshold = levelAt(vil, receiverVdd);
               if (low[k] === undefined || threshold - v < low[k]!.score) {
                 low[k] = {
-                  out: v, threshold, margin: threshold - v, driverVdd, receiverVdd, estimate: volLevel.estimate,
-                  status: judge(threshold, v, settings.minMargin), load: load.low,
-                  detail: { vSource: volLevel.v, ...seriesDetail(path, ohms) }, score: threshold - v,
+                  out: v,
+                  threshold,
+                  margin: threshold - v,
+                  driverVdd,
+                  receiverVdd,
+                  estimate: volLevel.estimate,
+                  status: judge(threshold, v, settings.minMargin),
+                  load: load.low,
+                  detail: { vSource: volLevel.v, ...seriesDetail(path, ohms) },
+                  score: threshold - v,
                 };
               }
             }
@@ -455,15 +496,23 @@ function pathPullRails(path: ResistorPath): string[] {
 /** Each series resistor's value in the case, keyed `R:<id>`, Ω. */
 function seriesDetail(path: ResistorPath, ohms: CaseOhms): Record<string, number> {
   const out: Record<string, number> = {};
-  path.resistors.forEach((r, k) => { out[`R:${r.id}`] = ohms.series[k]!; });
-  path.nodes.forEach((n, k) => n.pulls.forEach((p, j) => {
-    if (p.resistor === true) out[`R:${p.origin}`] = ohms.pulls[k]![j]!;
-  }));
+  path.resistors.forEach((r, k) => {
+    out[`R:${r.id}`] = ohms.series[k]!;
+  });
+  path.nodes.forEach((n, k) => {
+    n.pulls.forEach((p, j) => {
+      if (p.resistor === true) out[`R:${p.origin}`] = ohms.pulls[k]![j]!;
+    });
+  });
   return out;
 }
 
 /** The high level a node's own pull-ups give it: Thévenin of the pulls (each at its high end) less the input currents' drop. */
-function pulledHigh(node: PathNode, corner: Corner, extraCurrent: number): { v: number; r: number; vpull: number } | undefined {
+function pulledHigh(
+  node: PathNode,
+  corner: Corner,
+  extraCurrent: number,
+): { v: number; r: number; vpull: number } | undefined {
   if (!node.pulls.some((p) => p.to !== GROUND)) return undefined;
   let g = 0;
   let i = 0;
@@ -479,7 +528,13 @@ function pulledHigh(node: PathNode, corner: Corner, extraCurrent: number): { v: 
   return { v: vpull - r * iih, r, vpull };
 }
 
-function shifterPairs(link: ShifterLink, rails: RailStates, settings: EffectiveSettings, loadOf: LoadOf, out: PairAnalysis[]): void {
+function shifterPairs(
+  link: ShifterLink,
+  rails: RailStates,
+  settings: EffectiveSettings,
+  loadOf: LoadOf,
+  out: PairAnalysis[],
+): void {
   const { part } = link;
   if (part.kind === 'fet-shifter' && !fetOn(part, rails)) return;
   // A diode passes a low from its cathode to its anode only.
@@ -503,9 +558,17 @@ function shifterPairs(link: ShifterLink, rails: RailStates, settings: EffectiveS
         if (vih !== undefined && pulled !== undefined) {
           const threshold = levelAt(vih, receiverVdd);
           high = keepWorst(high, {
-            out: pulled.v, threshold, margin: pulled.v - threshold, driverVdd: null, receiverVdd, vpull: pulled.vpull,
-            estimate: false, status: judge(pulled.v, threshold, settings.minMargin), load: 0,
-            detail: { pullResistance: pulled.r, ...(part.kind === 'diode-shifter' ? { leakage } : {}) }, score: pulled.v - threshold,
+            out: pulled.v,
+            threshold,
+            margin: pulled.v - threshold,
+            driverVdd: null,
+            receiverVdd,
+            vpull: pulled.vpull,
+            estimate: false,
+            status: judge(pulled.v, threshold, settings.minMargin),
+            load: 0,
+            detail: { pullResistance: pulled.r, ...(part.kind === 'diode-shifter' ? { leakage } : {}) },
+            score: pulled.v - threshold,
           });
         }
         const vol = outputLevel(driver.params.vol, load.low, driverVdd, 'low');
@@ -522,8 +585,16 @@ function shifterPairs(link: ShifterLink, rails: RailStates, settings: EffectiveS
           }
           const threshold = levelAt(vil, receiverVdd);
           low = keepWorst(low, {
-            out: v, threshold, margin: threshold - v, driverVdd, receiverVdd, estimate: vol.estimate,
-            status: judge(threshold, v, settings.minMargin), load: load.low, detail, score: threshold - v,
+            out: v,
+            threshold,
+            margin: threshold - v,
+            driverVdd,
+            receiverVdd,
+            estimate: vol.estimate,
+            status: judge(threshold, v, settings.minMargin),
+            load: load.low,
+            detail,
+            score: threshold - v,
           });
         }
       }
@@ -548,7 +619,11 @@ export function remotePairs(
 }
 
 /** Powered drivers on other nets that reach this one (series resistors, shifters that pass to it). */
-export function remoteDriversOf(path: ResistorPath | undefined, shifters: readonly ShifterLink[], rails: RailStates): PinView[] {
+export function remoteDriversOf(
+  path: ResistorPath | undefined,
+  shifters: readonly ShifterLink[],
+  rails: RailStates,
+): PinView[] {
   const out: PinView[] = [];
   path?.nodes.forEach((n, k) => {
     if (k !== path.self) for (const p of n.pins) if (p.powered && p.role !== 'input') out.push(p);
@@ -625,7 +700,9 @@ function exposureOf(
   };
   path.nodes.forEach((n, k) => {
     for (const p of n.pulls) if (p.to !== GROUND) see(rails.ranges.get(p.to));
-    if (k !== path.self) for (const p of n.pins) if (p.powered && p.role !== 'input' && p.drive !== 'open-drain') see(rails.ranges.get(p.rail));
+    if (k !== path.self)
+      for (const p of n.pins)
+        if (p.powered && p.role !== 'input' && p.drive !== 'open-drain') see(rails.ranges.get(p.rail));
   });
   // A number that is not finite is never short-cut: it must come out as undecidable.
   const finite = Number.isFinite(extreme) && Number.isFinite(limLow) && Number.isFinite(limHigh);
@@ -634,7 +711,9 @@ function exposureOf(
   const sources: { key: string; node: number; rail: string | undefined }[] = [];
   path.nodes.forEach((n, k) => {
     if (k === self) return;
-    for (const p of n.pins) if (p.powered && (p.role !== 'input') && p.drive !== 'open-drain') sources.push({ key: p.key, node: k, rail: p.rail });
+    for (const p of n.pins)
+      if (p.powered && p.role !== 'input' && p.drive !== 'open-drain')
+        sources.push({ key: p.key, node: k, rail: p.rail });
   });
   const remotePull = path.nodes.some((n, k) => k !== self && n.pulls.some((p) => p.to !== GROUND));
   if (remotePull || sources.length === 0) sources.push({ key: 'pulls', node: -1, rail: undefined });
@@ -656,8 +735,15 @@ function exposureOf(
         const excess = sense === 'high' ? v - lim : lim - v;
         if (worst === undefined || excess > worst.excess || !Number.isFinite(excess)) {
           worst = {
-            vNet: v, limit: lim, source: s.key, pinVdd, current: 0, resistors: seriesDetail(path, ohms), excess,
-            sourceNode: s.node, sourceRail: s.rail,
+            vNet: v,
+            limit: lim,
+            source: s.key,
+            pinVdd,
+            current: 0,
+            resistors: seriesDetail(path, ohms),
+            excess,
+            sourceNode: s.node,
+            sourceRail: s.rail,
           };
         }
       }
@@ -711,7 +797,13 @@ export function pathEdgeOf(path: ResistorPath, rails: RailStates): PathEdge | un
       const at = path.nodes.map((): number | undefined => undefined);
       at[k] = low.get(d.rail) ?? 0;
       const swing = solve(network(path, low, toleranceCases(path, 'min')[0]!, at, 'none'))[path.self] ?? 0;
-      const edge: PathEdge = { driver: d.key, resistance: r, capacitance: self.capacitance, riseTime: RISE_10_90 * r * self.capacitance, swing };
+      const edge: PathEdge = {
+        driver: d.key,
+        resistance: r,
+        capacitance: self.capacitance,
+        riseTime: RISE_10_90 * r * self.capacitance,
+        swing,
+      };
       if (slowest === undefined || edge.riseTime > slowest.riseTime) slowest = edge;
     }
   });

@@ -11,7 +11,9 @@ const NO_PINS: ReadonlyMap<string, PinState> = new Map();
 
 /** `all-on` first, then the design's scenarios in the file's order. */
 export function powerStates(design: Design): PowerState[] {
-  const states: PowerState[] = [{ id: ALL_ON, label: ALL_ON_LABEL, off: new Set(), pins: NO_PINS, scenario: undefined }];
+  const states: PowerState[] = [
+    { id: ALL_ON, label: ALL_ON_LABEL, off: new Set(), pins: NO_PINS, scenario: undefined },
+  ];
   for (const s of design.scenarios ?? []) {
     const pins = s.pins === undefined || s.pins.length === 0 ? NO_PINS : new Map(s.pins.map((p) => [p.pin, p]));
     states.push({ id: s.id, label: s.label, off: new Set(s.off), pins, scenario: s });

@@ -5,7 +5,17 @@
 import type { Design, Discrete, Net, PinState, Pull } from '../model/schema.ts';
 import { pullEnds } from '../model/pullRange.ts';
 import { analyseNet } from './analyse.ts';
-import { linkedRails, linksOf, nodeOf, pathEdgeOf, pathLoad, remoteDriversOf, remotePairs, shifterLoad, type PathSource } from './paths.ts';
+import {
+  linkedRails,
+  linksOf,
+  nodeOf,
+  pathEdgeOf,
+  pathLoad,
+  remoteDriversOf,
+  remotePairs,
+  shifterLoad,
+  type PathSource,
+} from './paths.ts';
 import { driverLoad } from './netMath.ts';
 import { GROUND } from './powerStates.ts';
 import { viewOf } from './resolve.ts';
@@ -28,7 +38,11 @@ export function pinView(at: PinEntry, rails: RailStates, state?: PowerState): Pi
 
 function withState(view: PinView, set: PinState): PinView {
   const role = set.role ?? view.role;
-  const drive = role === 'input' ? undefined : set.drive ?? (set.role === undefined ? view.drive : view.pin.drive ?? (role === 'output' ? 'push-pull' : 'three-state'));
+  const drive =
+    role === 'input'
+      ? undefined
+      : (set.drive ??
+        (set.role === undefined ? view.drive : (view.pin.drive ?? (role === 'output' ? 'push-pull' : 'three-state'))));
   const pull = set.pull === undefined ? view.pull : set.pull === null ? undefined : set.pull;
   return { ...view, role, drive, pull };
 }
@@ -71,7 +85,7 @@ function pinsOfNet(ctx: PrepareContext, net: Net): PinView[] {
 /** The prepared view of one net in one power state. */
 export function prepareNet(ctx: PrepareContext, net: Net): NetView {
   const links = ctx.links;
-  if (links !== undefined && links.linksOfNet.has(net.id)) return prepareLinkedNet(ctx, net);
+  if (links?.linksOfNet.has(net.id)) return prepareLinkedNet(ctx, net);
   const { settings } = ctx;
   const pins = pinsOfNet(ctx, net);
   const drivers = pins.filter((p) => p.powered && p.role !== 'input');
@@ -97,8 +111,22 @@ export function prepareNet(ctx: PrepareContext, net: Net): NetView {
 
   const analysis = analyseNet({ pins, drivers, receivers, pulls, highFromPull, loads, rails, settings });
   return {
-    net, settings, rails, pins, drivers, receivers, unpowered, pulls,
-    capacitance, highFromPull, loads, pinRails, analysis, shifters: NONE, remoteDrivers: NONE, pathRails: pinRails,
+    net,
+    settings,
+    rails,
+    pins,
+    drivers,
+    receivers,
+    unpowered,
+    pulls,
+    capacitance,
+    highFromPull,
+    loads,
+    pinRails,
+    analysis,
+    shifters: NONE,
+    remoteDrivers: NONE,
+    pathRails: pinRails,
   };
 }
 
@@ -145,13 +173,14 @@ function prepareLinkedNet(ctx: PrepareContext, net: Net): NetView {
     const own = driverLoad(d, node.pins, node.pulls, rails);
     let high = own.high;
     let low = own.low;
-    if (path !== undefined && path.nodes.includes(node)) {
+    if (path?.nodes.includes(node)) {
       const through = pathLoad({ ...path, self: path.nodes.indexOf(node) }, d, rails);
       high += through.high;
       low += through.low;
     }
     const link = shifters.find((s) => s.other === node);
-    if (link !== undefined) low += shifterLoad({ part: link.part, pin: OTHER_PIN[link.pin]!, other: link.self, self: link.other }, d, rails);
+    if (link !== undefined)
+      low += shifterLoad({ part: link.part, pin: OTHER_PIN[link.pin]!, other: link.self, self: link.other }, d, rails);
     return { high, low };
   };
 
@@ -172,8 +201,19 @@ function prepareLinkedNet(ctx: PrepareContext, net: Net): NetView {
   const analysis = remote.length === 0 ? local : { pairs: [...local.pairs, ...remote], worstHigh, worstLow };
   const pathEdge = path === undefined ? undefined : pathEdgeOf(path, rails);
   return {
-    net, settings, rails, pins, drivers, receivers, unpowered, pulls,
-    capacitance, highFromPull, loads, pinRails, analysis,
+    net,
+    settings,
+    rails,
+    pins,
+    drivers,
+    receivers,
+    unpowered,
+    pulls,
+    capacitance,
+    highFromPull,
+    loads,
+    pinRails,
+    analysis,
     ...(path === undefined ? {} : { path }),
     shifters,
     remoteDrivers: remoteDriversOf(path, shifters, rails),
@@ -188,7 +228,10 @@ function prepareLinkedNet(ctx: PrepareContext, net: Net): NetView {
  * with every rail on (check.ts re-stamps its findings).
  */
 export function loneRails(all: RailStates, pin: PinView): RailStates {
-  return railsOf(all, pin.pull === undefined || pin.pull.to === GROUND || pin.pull.to === pin.rail ? [pin.rail] : [pin.rail, pin.pull.to]);
+  return railsOf(
+    all,
+    pin.pull === undefined || pin.pull.to === GROUND || pin.pull.to === pin.rail ? [pin.rail] : [pin.rail, pin.pull.to],
+  );
 }
 
 /**

@@ -8,9 +8,28 @@ import { builtinProfile } from '../profiles/index.ts';
 import type { ParamOrigin, PinView, ResolvedPin } from './types.ts';
 
 const PARAM_KEYS: readonly (keyof Params)[] = [
-  'vih', 'vil', 'schmitt', 'iih', 'iil', 'cin', 'viMax', 'unpoweredSafe', 'viMaxOff',
-  'voh', 'vol', 'ioMax', 'maxInputRamp', 'vddRange', 'deltaIcc', 'deltaIccDrop',
-  'viMin', 'injectionMax', 'busHold', 'seriesResistance', 'minExternalPull', 'maxLoadCapacitance',
+  'vih',
+  'vil',
+  'schmitt',
+  'iih',
+  'iil',
+  'cin',
+  'viMax',
+  'unpoweredSafe',
+  'viMaxOff',
+  'voh',
+  'vol',
+  'ioMax',
+  'maxInputRamp',
+  'vddRange',
+  'deltaIcc',
+  'deltaIccDrop',
+  'viMin',
+  'injectionMax',
+  'busHold',
+  'seriesResistance',
+  'minExternalPull',
+  'maxLoadCapacitance',
 ];
 
 const localProfileMaps = new WeakMap<readonly Profile[], ReadonlyMap<string, Profile>>();
@@ -74,8 +93,18 @@ export function viewOf(entry: Resolution, powered: boolean): PinView {
     // over pins monomorphic (an object spread does not).
     const r = entry.resolved;
     view = {
-      key: r.key, partId: r.partId, pin: r.pin, role: r.role, drive: r.drive, rail: r.rail,
-      profileId: r.profileId, profile: r.profile, params: r.params, origin: r.origin, pull: r.pull, powered,
+      key: r.key,
+      partId: r.partId,
+      pin: r.pin,
+      role: r.role,
+      drive: r.drive,
+      rail: r.rail,
+      profileId: r.profileId,
+      profile: r.profile,
+      params: r.params,
+      origin: r.origin,
+      pull: r.pull,
+      powered,
     };
     entry.views[k] = view;
   }
@@ -118,7 +147,13 @@ function mergeParams(pin: Params | undefined, part: Params | undefined, profile:
 function entryOf(design: Design, part: Part, pin: Pin): CacheEntry {
   const profileId = pin.profile ?? part.profile;
   const hit = cache.get(pin);
-  if (hit !== undefined && hit.partId === part.id && hit.partRail === part.rail && hit.partParams === part.params && hit.profileId === profileId) {
+  if (
+    hit !== undefined &&
+    hit.partId === part.id &&
+    hit.partRail === part.rail &&
+    hit.partParams === part.params &&
+    hit.profileId === profileId
+  ) {
     // The built-in library never changes: with the same local profiles the lookup is the same.
     if (hit.localProfiles === design.profiles) return hit;
     const profile = lookupProfile(design, profileId);
@@ -135,8 +170,7 @@ function entryOf(design: Design, part: Part, pin: Pin): CacheEntry {
   } else {
     ({ params, origin } = mergeParams(pin.params, part.params, profile?.params));
   }
-  const drive =
-    pin.role === 'input' ? undefined : (pin.drive ?? (pin.role === 'bidir' ? 'three-state' : 'push-pull'));
+  const drive = pin.role === 'input' ? undefined : (pin.drive ?? (pin.role === 'bidir' ? 'three-state' : 'push-pull'));
   const resolved: ResolvedPin = {
     key: `${part.id}.${pin.id}`,
     partId: part.id,
@@ -151,8 +185,14 @@ function entryOf(design: Design, part: Part, pin: Pin): CacheEntry {
     pull: pin.pull,
   };
   const entry: CacheEntry = {
-    views: [undefined, undefined], partId: part.id, partRail: part.rail, partParams: part.params,
-    profileId, localProfiles: design.profiles, profile, resolved,
+    views: [undefined, undefined],
+    partId: part.id,
+    partRail: part.rail,
+    partParams: part.params,
+    profileId,
+    localProfiles: design.profiles,
+    profile,
+    resolved,
   };
   cache.set(pin, entry);
   return entry;

@@ -9,6 +9,7 @@ import type { RuleValues } from './values.ts';
 
 // eslint-style message functions: each takes the data a finding carries and writes one sentence.
 // eslint-disable-next-line @typescript-eslint/no-explicit-any
+// biome-ignore lint/suspicious/noExplicitAny: each message takes its own data type; the registry only needs them callable
 export type MessageFns = Record<string, (data: any) => string>;
 
 /**
@@ -62,7 +63,9 @@ export type Draft<M extends MessageFns, S extends Severity = Severity, I extends
   };
 }[keyof M & string];
 
-export type Reporter<M extends MessageFns, S extends Severity = Severity, I extends RuleId = RuleId> = (draft: Draft<M, S, I>) => void;
+export type Reporter<M extends MessageFns, S extends Severity = Severity, I extends RuleId = RuleId> = (
+  draft: Draft<M, S, I>,
+) => void;
 
 export interface Rule<M extends MessageFns = MessageFns, S extends Severity = Severity, I extends RuleId = RuleId> {
   readonly id: I;
@@ -78,14 +81,18 @@ export interface Rule<M extends MessageFns = MessageFns, S extends Severity = Se
 }
 
 /** Declares a rule; the identity function, there for the types. */
-export function defineRule<M extends MessageFns, S extends Severity, I extends RuleId>(rule: Rule<M, S, I>): Rule<M, S, I> {
+export function defineRule<M extends MessageFns, S extends Severity, I extends RuleId>(
+  rule: Rule<M, S, I>,
+): Rule<M, S, I> {
   return rule;
 }
 
 /** A rule of any message set, as the registry and the engine hold them. */
 // eslint-disable-next-line @typescript-eslint/no-explicit-any
+// biome-ignore lint/suspicious/noExplicitAny: a list of rules of every data and message type (a rule's own types stay checked in defineRule)
 export type AnyRule = Rule<any, any>;
 
 /** A rule of the given id, as the registry holds it. */
 // eslint-disable-next-line @typescript-eslint/no-explicit-any
+// biome-ignore lint/suspicious/noExplicitAny: as AnyRule, keyed by id
 export type RuleOf<I extends RuleId> = Rule<any, any, I>;

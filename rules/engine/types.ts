@@ -2,7 +2,23 @@
  * The engine's prepared views and results. Everything here lives outside the design document:
  * the document stays plain (architecture.md, "The engine's contract").
  */
-import type { Design, Discrete, DiodeShifter, FetShifter, Net, Params, Pin, PinDrive, PinRole, PinState, Profile, Pull, Rail, Scenario, Waiver } from '../model/schema.ts';
+import type {
+  Design,
+  Discrete,
+  DiodeShifter,
+  FetShifter,
+  Net,
+  Params,
+  Pin,
+  PinDrive,
+  PinRole,
+  PinState,
+  Profile,
+  Pull,
+  Rail,
+  Scenario,
+  Waiver,
+} from '../model/schema.ts';
 import type { RuleId } from '../model/ruleIds.ts';
 import type { Range } from '../levels/rails.ts';
 import type { FindingValues } from './values.ts';

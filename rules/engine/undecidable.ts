@@ -39,7 +39,12 @@ export function finiteOrNull<T>(value: T): T {
 }
 
 function at(path: string, root: unknown): unknown {
-  return path.split('.').reduce<unknown>((o, k) => (o !== null && typeof o === 'object' ? (o as Record<string, unknown>)[k] : undefined), root);
+  return path
+    .split('.')
+    .reduce<unknown>(
+      (o, k) => (o !== null && typeof o === 'object' ? (o as Record<string, unknown>)[k] : undefined),
+      root,
+    );
 }
 
 /** The non-finite numbers of a draft: its values' paths, then its message data's not already named. */
@@ -58,7 +63,13 @@ function named(path: string, values: unknown, data: unknown): string {
 }
 
 /** The sentence of an undecidable finding: which check, on what, and which numbers failed. */
-export function undecidableMessage(title: string, subject: string, paths: readonly string[], values: unknown, data: unknown): string {
+export function undecidableMessage(
+  title: string,
+  subject: string,
+  paths: readonly string[],
+  values: unknown,
+  data: unknown,
+): string {
   const names = paths.map((p) => named(p, values, data));
   return (
     `${title}: cannot be guaranteed${subject === '' ? '' : ` for ${subject}`}, ` +

@@ -294,5 +294,7 @@ export type FindingValues<I extends RuleId> = Undecided<RuleValues[I]>;
 
 /** Each number of `T` possibly null, spread over a union (edge-rate has two shapes). */
 type Undecided<T> = T extends unknown
-  ? { readonly [K in keyof T]: T[K] extends number ? number | null : T[K] } & { readonly undecidable?: readonly string[] }
+  ? { readonly [K in keyof T]: T[K] extends number ? number | null : T[K] } & {
+      readonly undecidable?: readonly string[];
+    }
   : never;

@@ -18,9 +18,7 @@ export interface LinearLevel {
   readonly b: number;
 }
 
-export type LevelResult =
-  | { ok: true; level: LinearLevel }
-  | { ok: false; error: string; at: number };
+export type LevelResult = { ok: true; level: LinearLevel } | { ok: false; error: string; at: number };
 
 type Token = { kind: 'num'; value: number; at: number } | { kind: 'vdd' | '+' | '-' | '*'; at: number };
 
@@ -33,9 +31,20 @@ function tokenize(text: string): Token[] | { error: string; at: number } {
   let i = 0;
   while (i < text.length) {
     const c = text[i]!;
-    if (c === ' ') { i++; continue; }
-    if (c === '+' || c === '-' || c === '*') { tokens.push({ kind: c, at: i }); i++; continue; }
-    if (text.startsWith('VDD', i)) { tokens.push({ kind: 'vdd', at: i }); i += 3; continue; }
+    if (c === ' ') {
+      i++;
+      continue;
+    }
+    if (c === '+' || c === '-' || c === '*') {
+      tokens.push({ kind: c, at: i });
+      i++;
+      continue;
+    }
+    if (text.startsWith('VDD', i)) {
+      tokens.push({ kind: 'vdd', at: i });
+      i += 3;
+      continue;
+    }
     if (isDigit(c) || c === '.') {
       const start = i;
       while (isDigit(text[i])) i++;
@@ -74,7 +83,10 @@ export function parseLevel(text: string): LevelResult {
       sign = op.kind === '-' ? -1 : 1;
       pos++;
     }
-    if (tokens[pos]?.kind === '-') { sign = -sign; pos++; }
+    if (tokens[pos]?.kind === '-') {
+      sign = -sign;
+      pos++;
+    }
     let coefficient = sign;
     let vddCount = 0;
     let expectFactor = true;

@@ -61,10 +61,10 @@ export function largestTestCurrent(points: readonly OutputPoint[] | undefined, v
  * (VOL · I/I_row for a low level, VDD − (VDD − VOH) · I/I_row for a high one), or that point's
  * level when its test current is 0 A (no line can be drawn). The line stops at the output's own rails, 0 V for a high level and `vdd` for a low
  * one (an output stage cannot swing beyond its supply: common practice), so that test points
-   * a hair apart never extrapolate to astronomical or infinite volts. A load or supply that is
-   * not finite gives NaN (no guarantee), never a clamped level. Rows with a `vddMin` above `vdd`
-   * do not count; when none counts, all are read and the level is an estimate. Undefined for an
-   * empty list.
+ * a hair apart never extrapolate to astronomical or infinite volts. A load or supply that is
+ * not finite gives NaN (no guarantee), never a clamped level. Rows with a `vddMin` above `vdd`
+ * do not count; when none counts, all are read and the level is an estimate. Undefined for an
+ * empty list.
  */
 export function outputLevel(
   points: readonly OutputPoint[] | undefined,

@@ -35,7 +35,7 @@ const IEC_RESISTANCE_LETTER: Readonly<Record<string, number>> = { R: 0, K: 3, M:
 
 /** Symbols accepted after a value, per unit. `R` for ohms follows IEC 60062 (`470R`). */
 const UNIT_SYMBOLS: Readonly<Record<Unit, readonly string[]>> = {
-  'Ω': ['\u03a9', '\u2126', 'ohm', 'ohms', 'Ohm', 'Ohms', 'OHM', 'OHMS', 'R'],
+  Ω: ['\u03a9', '\u2126', 'ohm', 'ohms', 'Ohm', 'Ohms', 'OHM', 'OHMS', 'R'],
   V: ['V'],
   A: ['A'],
   F: ['F'],
@@ -102,7 +102,8 @@ function readSuffix(
   const rest = suffix.slice(1);
   const p = prefixExponent(first, unit);
   if (p !== undefined && symbolOk(rest)) {
-    if (!allowPrefix) return { ok: false, error: `a prefix ("${first}") after an exponent or a letter code; write one or the other` };
+    if (!allowPrefix)
+      return { ok: false, error: `a prefix ("${first}") after an exponent or a letter code; write one or the other` };
     return { ok: true, exponent: p };
   }
   const other = unitOfSymbol(suffix) ?? (p !== undefined ? unitOfSymbol(rest) : undefined);
@@ -168,7 +169,10 @@ export function parseQuantity(text: string, unit?: Unit): QuantityResult {
 
   let exponent = 0;
   let hasExponent = false;
-  if ((s[i] === 'e' || s[i] === 'E') && (isDigit(s[i + 1]) || ((s[i + 1] === '-' || s[i + 1] === '+') && isDigit(s[i + 2])))) {
+  if (
+    (s[i] === 'e' || s[i] === 'E') &&
+    (isDigit(s[i + 1]) || ((s[i + 1] === '-' || s[i + 1] === '+') && isDigit(s[i + 2])))
+  ) {
     let j = i + 1;
     const expSign = s[j] === '-' ? -1 : 1;
     if (s[j] === '-' || s[j] === '+') j++;
@@ -187,13 +191,20 @@ export function parseQuantity(text: string, unit?: Unit): QuantityResult {
 
 function example(unit: Unit | undefined): string {
   switch (unit) {
-    case 'Ω': return '4k7 or 4.7 kΩ';
-    case 'F': return '100n or 15 pF';
-    case 'V': return '3.3 or 3.3 V';
-    case 'A': return '4 mA';
-    case 's': return '300 ns';
-    case 's/V': return '10 ns/V';
-    default: return '4.7 or 4k7';
+    case 'Ω':
+      return '4k7 or 4.7 kΩ';
+    case 'F':
+      return '100n or 15 pF';
+    case 'V':
+      return '3.3 or 3.3 V';
+    case 'A':
+      return '4 mA';
+    case 's':
+      return '300 ns';
+    case 's/V':
+      return '10 ns/V';
+    default:
+      return '4.7 or 4k7';
   }
 }
 
@@ -265,7 +276,13 @@ export function formatIec60062(ohms: number): string {
   if (ohms === 0) return '0R';
   const rounded = Number.isFinite(ohms) ? Number(ohms.toPrecision(3)) : NaN;
   if (!(rounded >= 1e-3 && rounded < 1e15)) return '';
-  const letters: readonly [string, number][] = [['T', 12], ['G', 9], ['M', 6], ['K', 3], ['R', 0]];
+  const letters: readonly [string, number][] = [
+    ['T', 12],
+    ['G', 9],
+    ['M', 6],
+    ['K', 3],
+    ['R', 0],
+  ];
   const [letter, exponent] = letters.find(([, e]) => rounded >= Number(`1e${e}`)) ?? ['R', 0];
   // In this range String() never uses exponent form, so its digits are the code's digits.
   const scaled = Number((rounded / Number(`1e${exponent}`)).toPrecision(3));

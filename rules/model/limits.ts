@@ -63,7 +63,17 @@ export const MIN_RAMP = 1e-15;
 export const MAX_RAMP = 1;
 
 const PREFIXES: readonly (readonly [number, string])[] = [
-  [1e12, 'T'], [1e9, 'G'], [1e6, 'M'], [1e3, 'k'], [1, ''], [1e-3, 'm'], [1e-6, 'µ'], [1e-9, 'n'], [1e-12, 'p'], [1e-15, 'f'], [1e-18, 'a'],
+  [1e12, 'T'],
+  [1e9, 'G'],
+  [1e6, 'M'],
+  [1e3, 'k'],
+  [1, ''],
+  [1e-3, 'm'],
+  [1e-6, 'µ'],
+  [1e-9, 'n'],
+  [1e-12, 'p'],
+  [1e-15, 'f'],
+  [1e-18, 'a'],
 ];
 
 /**

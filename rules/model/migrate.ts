@@ -34,7 +34,7 @@ export function migrate(doc: unknown): unknown {
   if (typeof doc !== 'object' || doc === null || Array.isArray(doc)) return doc;
   let current = doc as Record<string, unknown>;
   for (;;) {
-    const version = current['version'];
+    const version = current.version;
     if (typeof version !== 'number' || !Number.isInteger(version) || version >= CURRENT_VERSION) {
       return current;
     }

@@ -43,7 +43,7 @@ export function formatPath(segments: readonly PathSegment[]): string {
 function child(node: unknown, s: PathSegment): unknown {
   if (typeof node !== 'object' || node === null) return undefined;
   if (typeof s === 'number') return Array.isArray(node) ? node[s] : undefined;
-  return Object.prototype.hasOwnProperty.call(node, s) ? (node as Record<string, unknown>)[s] : undefined;
+  return Object.hasOwn(node, s) ? (node as Record<string, unknown>)[s] : undefined;
 }
 
 /**

@@ -58,7 +58,10 @@ function notJson(text: string, error: unknown): ReadResult {
   const { line, column } = lineColumn(text, offset);
   // V8's wording, without its own position and source excerpt (we give line and column).
   const reason = raw.replace(/\s*in JSON at position.*$/s, '').replace(/, ".*$/s, '');
-  return refuse(ROOT_PATH, `Not JSON (line ${line}, column ${column}): ${reason}; expected a design file, which is a JSON document`);
+  return refuse(
+    ROOT_PATH,
+    `Not JSON (line ${line}, column ${column}): ${reason}; expected a design file, which is a JSON document`,
+  );
 }
 
 /** `format` and `version`, checked before anything else. */
@@ -66,17 +69,23 @@ function checkHeader(value: unknown): DesignError | undefined {
   if (typeof value !== 'object' || value === null || Array.isArray(value)) {
     return { path: ROOT_PATH, message: `${NOT_A_DESIGN} (found ${describeValue(value)}, not an object)` };
   }
-  const has = (k: string) => Object.prototype.hasOwnProperty.call(value, k);
-  const format = has('format') ? (value as Record<string, unknown>)['format'] : undefined;
+  const has = (k: string) => Object.hasOwn(value, k);
+  const format = has('format') ? (value as Record<string, unknown>).format : undefined;
   if (format !== FORMAT_ID) {
     return { path: 'format', message: `${NOT_A_DESIGN} (found ${describeValue(format)})` };
   }
-  const version = has('version') ? (value as Record<string, unknown>)['version'] : undefined;
+  const version = has('version') ? (value as Record<string, unknown>).version : undefined;
   if (typeof version === 'number' && Number.isInteger(version) && version > CURRENT_VERSION) {
-    return { path: 'version', message: `expected version ${CURRENT_VERSION} or earlier, found ${version}: the file was written by a newer Railcross` };
+    return {
+      path: 'version',
+      message: `expected version ${CURRENT_VERSION} or earlier, found ${version}: the file was written by a newer Railcross`,
+    };
   }
   if (typeof version !== 'number' || !Number.isInteger(version) || version < 1) {
-    return { path: 'version', message: `expected version ${CURRENT_VERSION} (a whole number), found ${describeValue(version)}` };
+    return {
+      path: 'version',
+      message: `expected version ${CURRENT_VERSION} (a whole number), found ${describeValue(version)}`,
+    };
   }
   return undefined;
 }
@@ -87,7 +96,10 @@ function validate(value: unknown, options: ReadOptions | undefined): ReadResult 
   const doc = migrate(value);
   const parsed = DesignSchema.safeParse(doc, { error: designErrorMap, reportInput: true });
   const builtin = new Set(options?.knownProfileIds ?? BUILTIN_PROFILE_IDS);
-  const located = [...(parsed.success ? [] : issuesToErrors(DesignSchema, parsed.error.issues)), ...checkReferences(doc, builtin)];
+  const located = [
+    ...(parsed.success ? [] : issuesToErrors(DesignSchema, parsed.error.issues)),
+    ...checkReferences(doc, builtin),
+  ];
   if (parsed.success && located.length === 0) return { ok: true, design: parsed.data };
   return { ok: false, errors: finishErrors(doc, located, MAX_ERRORS) };
 }
@@ -116,7 +128,8 @@ export function validateDesign(value: unknown, options?: ReadOptions): ReadResul
  */
 export function readDesign(text: string, options?: ReadOptions): ReadResult {
   try {
-    if (typeof text !== 'string') return refuse(ROOT_PATH, `expected the text of a design file, found ${describeValue(text)}`);
+    if (typeof text !== 'string')
+      return refuse(ROOT_PATH, `expected the text of a design file, found ${describeValue(text)}`);
     const body = text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
     let value: unknown;
     try {

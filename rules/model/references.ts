@@ -12,7 +12,7 @@ import { resolveRailRange } from './railRange.ts';
 
 type Rec = Record<string, unknown>;
 
-const own = (o: Rec, k: string): unknown => (Object.prototype.hasOwnProperty.call(o, k) ? o[k] : undefined);
+const own = (o: Rec, k: string): unknown => (Object.hasOwn(o, k) ? o[k] : undefined);
 const asRecord = (x: unknown): Rec | undefined =>
   typeof x === 'object' && x !== null && !Array.isArray(x) ? (x as Rec) : undefined;
 const asList = (x: unknown): readonly unknown[] => (Array.isArray(x) ? x : []);
@@ -47,7 +47,13 @@ function fail(ctx: Context, segments: readonly PathSegment[], message: string): 
 }
 
 /** Report ids that repeat among `items` (the second and later ones); returns each id's first index. */
-function uniqueIds(ctx: Context, items: readonly unknown[], at: readonly PathSegment[], kind: string, scope: string): Map<string, number> {
+function uniqueIds(
+  ctx: Context,
+  items: readonly unknown[],
+  at: readonly PathSegment[],
+  kind: string,
+  scope: string,
+): Map<string, number> {
   const first = new Map<string, number>();
   items.forEach((item, i) => {
     const rec = asRecord(item);
@@ -55,7 +61,12 @@ function uniqueIds(ctx: Context, items: readonly unknown[], at: readonly PathSeg
     if (id === undefined) return;
     const prior = first.get(id);
     if (prior === undefined) first.set(id, i);
-    else fail(ctx, [...at, i, 'id'], `duplicate ${kind} id ${JSON.stringify(id)} (first at ${formatPath([...at, prior])}): expected ids unique ${scope}`);
+    else
+      fail(
+        ctx,
+        [...at, i, 'id'],
+        `duplicate ${kind} id ${JSON.stringify(id)} (first at ${formatPath([...at, prior])}): expected ids unique ${scope}`,
+      );
   });
   return first;
 }
@@ -72,7 +83,11 @@ function checkPull(ctx: Context, pull: unknown, at: readonly PathSegment[]): voi
   if (rec === undefined) return;
   const to = asString(own(rec, 'to'));
   if (ctx.railIds !== undefined && to !== undefined && to !== GROUND && !ctx.railIds.has(to)) {
-    fail(ctx, [...at, 'to'], `unknown rail ${JSON.stringify(to)}: expected "ground" or a rail id of this design (${listIds(ctx.railIds)})`);
+    fail(
+      ctx,
+      [...at, 'to'],
+      `unknown rail ${JSON.stringify(to)}: expected "ground" or a rail id of this design (${listIds(ctx.railIds)})`,
+    );
   }
 }
 
@@ -100,21 +115,41 @@ function checkRails(ctx: Context, rails: readonly unknown[]): void {
       const where: PathSegment[] = ['rails', i];
       if (min !== undefined) where.push('min');
       else if (max !== undefined) where.push('max');
-      const hint = nominal < 0 && (min === undefined || max === undefined) ? '; a negative rail needs an explicit min and max' : '';
-      fail(ctx, where, `expected the rail's minimum ≤ its maximum, found ${range.min} V > ${range.max} V (an explicit min or max wins over nominal × (1 ± tolerance) for its end${hint})`);
+      const hint =
+        nominal < 0 && (min === undefined || max === undefined)
+          ? '; a negative rail needs an explicit min and max'
+          : '';
+      fail(
+        ctx,
+        where,
+        `expected the rail's minimum ≤ its maximum, found ${range.min} V > ${range.max} V (an explicit min or max wins over nominal × (1 ± tolerance) for its end${hint})`,
+      );
     }
   });
 }
 
-function checkProfileRef(ctx: Context, value: unknown, at: readonly PathSegment[], profileIds: ReadonlySet<string> | undefined): void {
+function checkProfileRef(
+  ctx: Context,
+  value: unknown,
+  at: readonly PathSegment[],
+  profileIds: ReadonlySet<string> | undefined,
+): void {
   const id = asString(value);
   if (profileIds !== undefined && id !== undefined && !profileIds.has(id)) {
-    fail(ctx, at, `unknown profile ${JSON.stringify(id)}: expected a built-in profile id or one of this design's profiles (${listIds(profileIds)})`);
+    fail(
+      ctx,
+      at,
+      `unknown profile ${JSON.stringify(id)}: expected a built-in profile id or one of this design's profiles (${listIds(profileIds)})`,
+    );
   }
 }
 
 /** Check the parts; returns each part id's pin ids (first part of each id only). */
-function checkParts(ctx: Context, parts: readonly unknown[], profileIds: ReadonlySet<string> | undefined): Map<string, Set<string>> {
+function checkParts(
+  ctx: Context,
+  parts: readonly unknown[],
+  profileIds: ReadonlySet<string> | undefined,
+): Map<string, Set<string>> {
   const pinsOf = new Map<string, Set<string>>();
   parts.forEach((item, i) => {
     const part = asRecord(item);
@@ -124,7 +159,13 @@ function checkParts(ctx: Context, parts: readonly unknown[], profileIds: Readonl
     checkProfileRef(ctx, own(part, 'profile'), [...at, 'profile'], profileIds);
     const pins = asList(own(part, 'pins'));
     const partId = asString(own(part, 'id'));
-    const ids = uniqueIds(ctx, pins, [...at, 'pins'], 'pin', partId === undefined ? 'within the part' : `within part ${partId}`);
+    const ids = uniqueIds(
+      ctx,
+      pins,
+      [...at, 'pins'],
+      'pin',
+      partId === undefined ? 'within the part' : `within part ${partId}`,
+    );
     if (partId !== undefined && !pinsOf.has(partId)) pinsOf.set(partId, new Set(ids.keys()));
     pins.forEach((p, j) => {
       const pin = asRecord(p);
@@ -170,9 +211,17 @@ function checkDiscretes(
     const kind = asString(own(d, 'kind'));
     if (id !== undefined) {
       if (partIds.has(id)) {
-        fail(ctx, [...at, 'id'], `duplicate id ${JSON.stringify(id)} (a part at parts[${partIds.get(id)}]): expected ids unique among parts and discretes`);
+        fail(
+          ctx,
+          [...at, 'id'],
+          `duplicate id ${JSON.stringify(id)} (a part at parts[${partIds.get(id)}]): expected ids unique among parts and discretes`,
+        );
       } else if (seen.has(id)) {
-        fail(ctx, [...at, 'id'], `duplicate id ${JSON.stringify(id)} (first at discretes[${seen.get(id)}]): expected ids unique among parts and discretes`);
+        fail(
+          ctx,
+          [...at, 'id'],
+          `duplicate id ${JSON.stringify(id)} (first at discretes[${seen.get(id)}]): expected ids unique among parts and discretes`,
+        );
       } else {
         seen.set(id, i);
         const pins = kind === undefined ? undefined : DISCRETE_PIN_IDS[kind];
@@ -186,7 +235,11 @@ function checkDiscretes(
         const to = asString(own(tie, end));
         if (to === undefined) continue;
         if (ctx.railIds !== undefined && to !== GROUND && !ctx.railIds.has(to)) {
-          fail(ctx, [...at, 'tie', end], `unknown rail ${JSON.stringify(to)}: expected "ground" or a rail id of this design (${listIds(ctx.railIds)})`);
+          fail(
+            ctx,
+            [...at, 'tie', end],
+            `unknown rail ${JSON.stringify(to)}: expected "ground" or a rail id of this design (${listIds(ctx.railIds)})`,
+          );
         }
         if (id !== undefined) tied.set(`${id}.${end}`, formatPath([...at, 'tie', end]));
       }
@@ -224,11 +277,19 @@ function checkNets(
       if (pinsOf === undefined) return;
       const pins = pinsOf.get(partId);
       if (pins === undefined) {
-        fail(ctx, where, `unknown part ${JSON.stringify(partId)} in ${JSON.stringify(ref)}: expected PART.PIN naming a part of this design (${listIds(pinsOf.keys())})`);
+        fail(
+          ctx,
+          where,
+          `unknown part ${JSON.stringify(partId)} in ${JSON.stringify(ref)}: expected PART.PIN naming a part of this design (${listIds(pinsOf.keys())})`,
+        );
         return;
       }
       if (!pins.has(pinId)) {
-        fail(ctx, where, `part ${partId} has no pin ${JSON.stringify(pinId)}: expected one of its pins (${listIds(pins)})`);
+        fail(
+          ctx,
+          where,
+          `part ${partId} has no pin ${JSON.stringify(pinId)}: expected one of its pins (${listIds(pins)})`,
+        );
         return;
       }
       const tiedAt = tied.get(ref);
@@ -247,7 +308,11 @@ function checkNets(
       asList(pair).forEach((value, end) => {
         const ref = asString(value);
         if (ref !== undefined && !names.has(ref)) {
-          fail(ctx, [...at, 'route', k, end], `${JSON.stringify(ref)} is not on ${netName}: expected a pin of its "pins"`);
+          fail(
+            ctx,
+            [...at, 'route', k, end],
+            `${JSON.stringify(ref)} is not on ${netName}: expected a pin of its "pins"`,
+          );
         }
       });
     });
@@ -255,7 +320,11 @@ function checkNets(
       const waiver = asRecord(w);
       const scenario = waiver && asString(own(waiver, 'scenario'));
       if (scenarioIds !== undefined && scenario !== undefined && !scenarioIds.has(scenario)) {
-        fail(ctx, [...at, 'waivers', k, 'scenario'], `unknown scenario ${JSON.stringify(scenario)}: expected "all-on" or a scenario id of this design (${listIds(scenarioIds)})`);
+        fail(
+          ctx,
+          [...at, 'waivers', k, 'scenario'],
+          `unknown scenario ${JSON.stringify(scenario)}: expected "all-on" or a scenario id of this design (${listIds(scenarioIds)})`,
+        );
       }
     });
   });
@@ -291,10 +360,15 @@ export function checkReferences(doc: unknown, builtinProfileIds: ReadonlySet<str
     scenarios && new Set(['all-on', ...uniqueIds(ctx, scenarios, ['scenarios'], 'scenario', 'among scenarios').keys()]);
   scenarios?.forEach((s, i) => {
     const rec = asRecord(s);
-    if (rec !== undefined) asList(own(rec, 'off')).forEach((r, j) => checkRailRef(ctx, r, ['scenarios', i, 'off', j]));
+    if (rec !== undefined)
+      asList(own(rec, 'off')).forEach((r, j) => {
+        checkRailRef(ctx, r, ['scenarios', i, 'off', j]);
+      });
   });
 
-  const profileIds = profiles && new Set([...builtinProfileIds, ...uniqueIds(ctx, profiles, ['profiles'], 'profile', 'among profiles').keys()]);
+  const profileIds =
+    profiles &&
+    new Set([...builtinProfileIds, ...uniqueIds(ctx, profiles, ['profiles'], 'profile', 'among profiles').keys()]);
 
   let pinsOf: Map<string, Set<string>> | undefined;
   if (parts !== undefined) {
@@ -302,7 +376,8 @@ export function checkReferences(doc: unknown, builtinProfileIds: ReadonlySet<str
     pinsOf = checkParts(ctx, parts, profileIds);
   }
   const discretes = listOr('discretes', true);
-  const tied = discretes === undefined ? new Map<string, string>() : checkDiscretes(ctx, discretes, parts ?? [], pinsOf);
+  const tied =
+    discretes === undefined ? new Map<string, string>() : checkDiscretes(ctx, discretes, parts ?? [], pinsOf);
   scenarios?.forEach((s, i) => {
     const rec = asRecord(s);
     if (rec === undefined) return;

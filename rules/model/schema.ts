@@ -12,8 +12,21 @@ import { RULE_IDS } from './ruleIds.ts';
 import { describeValue } from './schemaIssues.ts';
 import { RAIL_COLOUR_PATTERN } from './colour.ts';
 import {
-  MAX_AMPS, MAX_FARADS, MAX_OHMS, MAX_RAMP, MAX_SECONDS, MAX_TOLERANCE, MAX_VDD_FACTOR, MAX_VOLTS,
-  MIN_AMPS, MIN_FARADS, MIN_OHMS, MIN_RAMP, MIN_SECONDS, limitText, rangeText,
+  MAX_AMPS,
+  MAX_FARADS,
+  MAX_OHMS,
+  MAX_RAMP,
+  MAX_SECONDS,
+  MAX_TOLERANCE,
+  MAX_VDD_FACTOR,
+  MAX_VOLTS,
+  MIN_AMPS,
+  MIN_FARADS,
+  MIN_OHMS,
+  MIN_RAMP,
+  MIN_SECONDS,
+  limitText,
+  rangeText,
 } from './limits.ts';
 
 // zod would otherwise compile validators with `new Function`, which a strict CSP forbids.
@@ -108,132 +121,170 @@ export const LevelSchema = z
           : `expected a Level: volts (a number) or a string such as "0.7*VDD", found ${describeValue(iss.input)}`,
     },
   )
-  .meta({ id: 'Level', description: 'Volts, or a linear expression of the pin\'s supply VDD, e.g. "0.7*VDD", "VDD-0.45"' });
+  .meta({
+    id: 'Level',
+    description: 'Volts, or a linear expression of the pin\'s supply VDD, e.g. "0.7*VDD", "VDD-0.45"',
+  });
 
-const OutputPointSchema = z.strictObject({
-  v: LevelSchema,
-  i: current(),
-  vddMin: volts('supply').optional(),
-}).meta({
-  id: 'OutputPoint',
-  description: 'A guaranteed output level v (Level) at a load current i (A, magnitude), from the supply vddMin (V) up when given',
-});
+const OutputPointSchema = z
+  .strictObject({
+    v: LevelSchema,
+    i: current(),
+    vddMin: volts('supply').optional(),
+  })
+  .meta({
+    id: 'OutputPoint',
+    description:
+      'A guaranteed output level v (Level) at a load current i (A, magnitude), from the supply vddMin (V) up when given',
+  });
 
 const VddRangeSchema = z
   .tuple([volts(), volts()])
   .refine(([lo, hi]) => lo <= hi, { message: 'expected vddRange [min, max] with min ≤ max' });
 
-export const ParamsSchema = z.strictObject({
-  vih: LevelSchema.optional(),
-  vil: LevelSchema.optional(),
-  schmitt: z.strictObject({ vtPlus: LevelSchema, vtMinus: LevelSchema }).optional(),
-  iih: current().optional(),
-  iil: current().optional(),
-  cin: capacitance().optional(),
-  viMax: LevelSchema.optional(),
-  unpoweredSafe: z.boolean().optional(),
-  viMaxOff: volts().optional(),
-  voh: z.array(OutputPointSchema).optional(),
-  vol: z.array(OutputPointSchema).optional(),
-  ioMax: current().optional(),
-  maxInputRamp: magnitude('ramp', 's/V', MIN_RAMP, MAX_RAMP).optional(),
-  vddRange: VddRangeSchema.optional(),
-  deltaIcc: current().optional(),
-  deltaIccDrop: volts().optional(),
-  // Version 2.
-  viMin: LevelSchema.optional(),
-  injectionMax: current().optional(),
-  busHold: z.strictObject({ hold: current(), overdrive: current() }).optional(),
-  seriesResistance: resistance().optional(),
-  minExternalPull: resistance().optional(),
-  maxLoadCapacitance: capacitance().optional(),
-}).meta({ id: 'Params', description: 'Electrical parameters of a pin; each key is resolved on its own: pin params, part params, profile' });
+export const ParamsSchema = z
+  .strictObject({
+    vih: LevelSchema.optional(),
+    vil: LevelSchema.optional(),
+    schmitt: z.strictObject({ vtPlus: LevelSchema, vtMinus: LevelSchema }).optional(),
+    iih: current().optional(),
+    iil: current().optional(),
+    cin: capacitance().optional(),
+    viMax: LevelSchema.optional(),
+    unpoweredSafe: z.boolean().optional(),
+    viMaxOff: volts().optional(),
+    voh: z.array(OutputPointSchema).optional(),
+    vol: z.array(OutputPointSchema).optional(),
+    ioMax: current().optional(),
+    maxInputRamp: magnitude('ramp', 's/V', MIN_RAMP, MAX_RAMP).optional(),
+    vddRange: VddRangeSchema.optional(),
+    deltaIcc: current().optional(),
+    deltaIccDrop: volts().optional(),
+    // Version 2.
+    viMin: LevelSchema.optional(),
+    injectionMax: current().optional(),
+    busHold: z.strictObject({ hold: current(), overdrive: current() }).optional(),
+    seriesResistance: resistance().optional(),
+    minExternalPull: resistance().optional(),
+    maxLoadCapacitance: capacitance().optional(),
+  })
+  .meta({
+    id: 'Params',
+    description: 'Electrical parameters of a pin; each key is resolved on its own: pin params, part params, profile',
+  });
 
-export const PullSchema = z.strictObject({
-  to: z.string().min(1, { message: 'expected a rail id or "ground"' }),
-  ohms: resistance(),
-  tolerance: z
-    .number()
-    .min(0, { message: 'expected a tolerance (a fraction of the value) of 0 or more' })
-    .lt(MAX_TOLERANCE, { message: 'expected a tolerance (a fraction of the value, 0.05 for ±5 %) below 1' })
-    .optional(),
-  min: resistance().optional(),
-  max: resistance().optional(),
-}).refine((p) => !(p.min !== undefined && p.min > p.ohms) && !(p.max !== undefined && p.max < p.ohms), {
-  message: 'expected min ≤ ohms ≤ max',
-}).meta({
-  id: 'Pull',
-  description: 'A pull resistor to a rail or to ground; its range ohms × (1 ± tolerance), exact unless given, an explicit min or max winning for its end',
-});
+export const PullSchema = z
+  .strictObject({
+    to: z.string().min(1, { message: 'expected a rail id or "ground"' }),
+    ohms: resistance(),
+    tolerance: z
+      .number()
+      .min(0, { message: 'expected a tolerance (a fraction of the value) of 0 or more' })
+      .lt(MAX_TOLERANCE, { message: 'expected a tolerance (a fraction of the value, 0.05 for ±5 %) below 1' })
+      .optional(),
+    min: resistance().optional(),
+    max: resistance().optional(),
+  })
+  .refine((p) => !(p.min !== undefined && p.min > p.ohms) && !(p.max !== undefined && p.max < p.ohms), {
+    message: 'expected min ≤ ohms ≤ max',
+  })
+  .meta({
+    id: 'Pull',
+    description:
+      'A pull resistor to a rail or to ground; its range ohms × (1 ± tolerance), exact unless given, an explicit min or max winning for its end',
+  });
 
 const PositionSchema = z.strictObject({ x: z.number(), y: z.number() });
 
-export const RailSchema = z.strictObject({
-  id: id('rail', true),
-  label: z.string(),
-  nominal: volts(),
-  tolerance: z
-    .number()
-    .min(0, { message: 'expected a tolerance (a fraction of nominal) of 0 or more' })
-    .lt(MAX_TOLERANCE, { message: 'expected a tolerance (a fraction of nominal, 0.05 for ±5 %) below 1' })
-    .optional(),
-  min: volts().optional(),
-  max: volts().optional(),
-  colour: z
-    .string()
-    .regex(new RegExp(RAIL_COLOUR_PATTERN), { message: 'expected a colour "#rgb" or "#rrggbb" (hexadecimal digits)' })
-    .optional(),
-  minLoad: current().optional(),
-}).meta({ id: 'Rail', description: 'A supply domain; range nominal × (1 ± tolerance), an explicit min or max wins for its end' });
+export const RailSchema = z
+  .strictObject({
+    id: id('rail', true),
+    label: z.string(),
+    nominal: volts(),
+    tolerance: z
+      .number()
+      .min(0, { message: 'expected a tolerance (a fraction of nominal) of 0 or more' })
+      .lt(MAX_TOLERANCE, { message: 'expected a tolerance (a fraction of nominal, 0.05 for ±5 %) below 1' })
+      .optional(),
+    min: volts().optional(),
+    max: volts().optional(),
+    colour: z
+      .string()
+      .regex(new RegExp(RAIL_COLOUR_PATTERN), { message: 'expected a colour "#rgb" or "#rrggbb" (hexadecimal digits)' })
+      .optional(),
+    minLoad: current().optional(),
+  })
+  .meta({
+    id: 'Rail',
+    description: 'A supply domain; range nominal × (1 ± tolerance), an explicit min or max wins for its end',
+  });
 
 /**
  * A pin's state in a power state before firmware runs: its role, drive and internal pull there
  * (`pull: null` for none), each key given replacing the pin's own.
  */
-export const PinStateSchema = z.strictObject({
-  pin: z.string().min(1, { message: 'expected a pin written PART.PIN' }),
-  role: z.enum(['input', 'output', 'bidir']).optional(),
-  drive: z.enum(['push-pull', 'three-state', 'open-drain']).optional(),
-  pull: PullSchema.nullable().optional(),
-}).meta({ id: 'PinState', description: 'A pin\'s role, drive and internal pull in one power state (e.g. GPIO pins as inputs at reset)' });
+export const PinStateSchema = z
+  .strictObject({
+    pin: z.string().min(1, { message: 'expected a pin written PART.PIN' }),
+    role: z.enum(['input', 'output', 'bidir']).optional(),
+    drive: z.enum(['push-pull', 'three-state', 'open-drain']).optional(),
+    pull: PullSchema.nullable().optional(),
+  })
+  .meta({
+    id: 'PinState',
+    description: "A pin's role, drive and internal pull in one power state (e.g. GPIO pins as inputs at reset)",
+  });
 
-export const ScenarioSchema = z.strictObject({
-  id: id('scenario', true).refine((s) => s !== 'all-on', {
-    message: 'expected a scenario id other than "all-on" (reserved for the state with every rail on)',
-  }),
-  label: z.string(),
-  off: z.array(z.string()),
-  pins: z.array(PinStateSchema).optional(),
-}).meta({ id: 'Scenario', description: 'A power state: the rails listed in off are at 0 V; pins may take another role, drive or pull there' });
+export const ScenarioSchema = z
+  .strictObject({
+    id: id('scenario', true).refine((s) => s !== 'all-on', {
+      message: 'expected a scenario id other than "all-on" (reserved for the state with every rail on)',
+    }),
+    label: z.string(),
+    off: z.array(z.string()),
+    pins: z.array(PinStateSchema).optional(),
+  })
+  .meta({
+    id: 'Scenario',
+    description: 'A power state: the rails listed in off are at 0 V; pins may take another role, drive or pull there',
+  });
 
-export const ProfileSchema = z.strictObject({
-  id: id('profile', true),
-  label: z.string(),
-  // A refinement, not .trim(): the reader returns the document's own values, never altered ones.
-  source: z.string().refine((v) => v.trim() !== '', { message: 'expected a non-empty source (where the numbers come from)' }),
-  params: ParamsSchema,
-}).meta({ id: 'Profile', description: 'A design-local logic-family profile' });
+export const ProfileSchema = z
+  .strictObject({
+    id: id('profile', true),
+    label: z.string(),
+    // A refinement, not .trim(): the reader returns the document's own values, never altered ones.
+    source: z
+      .string()
+      .refine((v) => v.trim() !== '', { message: 'expected a non-empty source (where the numbers come from)' }),
+    params: ParamsSchema,
+  })
+  .meta({ id: 'Profile', description: 'A design-local logic-family profile' });
 
-export const PinSchema = z.strictObject({
-  id: id('pin', false),
-  role: z.enum(['input', 'output', 'bidir']),
-  drive: z.enum(['push-pull', 'three-state', 'open-drain']).optional(),
-  rail: z.string().optional(),
-  profile: z.string().optional(),
-  params: ParamsSchema.optional(),
-  pull: PullSchema.optional(),
-  side: z.enum(['left', 'right', 'top', 'bottom']).optional(),
-}).meta({ id: 'Pin', description: 'A signal pin; nets name it PART.PIN' });
+export const PinSchema = z
+  .strictObject({
+    id: id('pin', false),
+    role: z.enum(['input', 'output', 'bidir']),
+    drive: z.enum(['push-pull', 'three-state', 'open-drain']).optional(),
+    rail: z.string().optional(),
+    profile: z.string().optional(),
+    params: ParamsSchema.optional(),
+    pull: PullSchema.optional(),
+    side: z.enum(['left', 'right', 'top', 'bottom']).optional(),
+  })
+  .meta({ id: 'Pin', description: 'A signal pin; nets name it PART.PIN' });
 
-export const PartSchema = z.strictObject({
-  id: id('part', false),
-  label: z.string(),
-  rail: z.string(),
-  profile: z.string(),
-  params: ParamsSchema.optional(),
-  position: PositionSchema.optional(),
-  pins: z.array(PinSchema),
-}).meta({ id: 'Part', description: 'A chip or an off-board connector' });
+export const PartSchema = z
+  .strictObject({
+    id: id('part', false),
+    label: z.string(),
+    rail: z.string(),
+    profile: z.string(),
+    params: ParamsSchema.optional(),
+    position: PositionSchema.optional(),
+    pins: z.array(PinSchema),
+  })
+  .meta({ id: 'Part', description: 'A chip or an off-board connector' });
 
 /** Where a resistor's end may go instead of a net: a rail id or `ground`. */
 const TieSchema = z.string().min(1, { message: 'expected a rail id or "ground"' });
@@ -244,52 +295,78 @@ const DiscreteBase = {
   position: PositionSchema.optional(),
 };
 
-export const ResistorSchema = z.strictObject({
-  ...DiscreteBase,
-  kind: z.literal('resistor'),
-  ohms: resistance(),
-  tolerance: fraction().optional(),
-  tie: z.strictObject({ '1': TieSchema.optional(), '2': TieSchema.optional() }).optional(),
-}).meta({ id: 'Resistor', description: 'A resistor with pins 1 and 2; an end in tie goes to a rail or ground instead of a net' });
+export const ResistorSchema = z
+  .strictObject({
+    ...DiscreteBase,
+    kind: z.literal('resistor'),
+    ohms: resistance(),
+    tolerance: fraction().optional(),
+    tie: z.strictObject({ '1': TieSchema.optional(), '2': TieSchema.optional() }).optional(),
+  })
+  .meta({
+    id: 'Resistor',
+    description: 'A resistor with pins 1 and 2; an end in tie goes to a rail or ground instead of a net',
+  });
 
-export const FetShifterSchema = z.strictObject({
-  ...DiscreteBase,
-  kind: z.literal('fet-shifter'),
-  gate: z.string().min(1, { message: 'expected a rail id' }),
-  vgsThMax: volts('threshold voltage').gt(0, { message: 'expected a positive threshold voltage (V)' }),
-  rdsOnMax: z.number().min(0, { message: 'expected a resistance (Ω) of 0 or more' }).max(MAX_OHMS, { message: `expected a resistance (Ω) of at most ${limitText(MAX_OHMS, 'Ω')}` }),
-}).meta({ id: 'FetShifter', description: 'A bidirectional N-MOSFET level shifter: pin S on the low side, pin D on the high side, the gate on a rail' });
+export const FetShifterSchema = z
+  .strictObject({
+    ...DiscreteBase,
+    kind: z.literal('fet-shifter'),
+    gate: z.string().min(1, { message: 'expected a rail id' }),
+    vgsThMax: volts('threshold voltage').gt(0, { message: 'expected a positive threshold voltage (V)' }),
+    rdsOnMax: z
+      .number()
+      .min(0, { message: 'expected a resistance (Ω) of 0 or more' })
+      .max(MAX_OHMS, { message: `expected a resistance (Ω) of at most ${limitText(MAX_OHMS, 'Ω')}` }),
+  })
+  .meta({
+    id: 'FetShifter',
+    description:
+      'A bidirectional N-MOSFET level shifter: pin S on the low side, pin D on the high side, the gate on a rail',
+  });
 
-export const DiodeShifterSchema = z.strictObject({
-  ...DiscreteBase,
-  kind: z.literal('diode-shifter'),
-  vfMax: volts('forward voltage').min(0, { message: 'expected a forward voltage (V) of 0 or more' }),
-  leakageMax: current(),
-}).meta({ id: 'DiodeShifter', description: 'A Schottky diode shifter: cathode K on the driver\'s net, anode A on the receiver\'s net, which has its own pull-up' });
+export const DiodeShifterSchema = z
+  .strictObject({
+    ...DiscreteBase,
+    kind: z.literal('diode-shifter'),
+    vfMax: volts('forward voltage').min(0, { message: 'expected a forward voltage (V) of 0 or more' }),
+    leakageMax: current(),
+  })
+  .meta({
+    id: 'DiodeShifter',
+    description:
+      "A Schottky diode shifter: cathode K on the driver's net, anode A on the receiver's net, which has its own pull-up",
+  });
 
-export const DiscreteSchema = z.discriminatedUnion('kind', [ResistorSchema, FetShifterSchema, DiodeShifterSchema], {
-  error: (iss) =>
-    iss.input === undefined
-      ? 'missing: expected "resistor", "fet-shifter" or "diode-shifter"'
-      : `expected "resistor", "fet-shifter" or "diode-shifter", found ${describeValue(iss.input)}`,
-}).meta({ id: 'Discrete', description: 'A part between chips: a resistor, a FET shifter or a diode shifter' });
+export const DiscreteSchema = z
+  .discriminatedUnion('kind', [ResistorSchema, FetShifterSchema, DiodeShifterSchema], {
+    error: (iss) =>
+      iss.input === undefined
+        ? 'missing: expected "resistor", "fet-shifter" or "diode-shifter"'
+        : `expected "resistor", "fet-shifter" or "diode-shifter", found ${describeValue(iss.input)}`,
+  })
+  .meta({ id: 'Discrete', description: 'A part between chips: a resistor, a FET shifter or a diode shifter' });
 
-export const WaiverSchema = z.strictObject({
-  rule: z.enum(RULE_IDS, { message: `expected a rule id: ${RULE_IDS.join(', ')}` }),
-  scenario: z.string().optional(),
-  note: z.string(),
-}).meta({ id: 'Waiver', description: 'A finding the engineer has reviewed and accepted, with the reason' });
+export const WaiverSchema = z
+  .strictObject({
+    rule: z.enum(RULE_IDS, { message: `expected a rule id: ${RULE_IDS.join(', ')}` }),
+    scenario: z.string().optional(),
+    note: z.string(),
+  })
+  .meta({ id: 'Waiver', description: 'A finding the engineer has reviewed and accepted, with the reason' });
 
-export const NetSchema = z.strictObject({
-  id: id('net', false),
-  label: z.string().optional(),
-  pins: z.array(z.string()),
-  pull: PullSchema.optional(),
-  wiringCapacitance: capacitance().optional(),
-  maxRiseTime: magnitude('time', 's', MIN_SECONDS, MAX_SECONDS).optional(),
-  waivers: z.array(WaiverSchema).optional(),
-  route: z.array(z.tuple([z.string(), z.string()])).optional(),
-}).meta({ id: 'Net', description: 'An electrical connection between pins' });
+export const NetSchema = z
+  .strictObject({
+    id: id('net', false),
+    label: z.string().optional(),
+    pins: z.array(z.string()),
+    pull: PullSchema.optional(),
+    wiringCapacitance: capacitance().optional(),
+    maxRiseTime: magnitude('time', 's', MIN_SECONDS, MAX_SECONDS).optional(),
+    waivers: z.array(WaiverSchema).optional(),
+    route: z.array(z.tuple([z.string(), z.string()])).optional(),
+  })
+  .meta({ id: 'Net', description: 'An electrical connection between pins' });
 
 export const SettingsSchema = z.strictObject({
   minMargin: volts('margin').optional(),

@@ -35,7 +35,11 @@ function quoteList(values: readonly unknown[]): string {
   return shown.length <= 1 ? (shown[0] ?? 'nothing') : `${shown.slice(0, -1).join(', ')} or ${shown.at(-1)}`;
 }
 
-function bound(iss: { origin: string; inclusive?: boolean; exact?: boolean }, n: number | bigint, side: 'min' | 'max'): string {
+function bound(
+  iss: { origin: string; inclusive?: boolean; exact?: boolean },
+  n: number | bigint,
+  side: 'min' | 'max',
+): string {
   if (iss.origin === 'array') {
     const how = iss.exact ? 'exactly' : side === 'min' ? 'at least' : 'at most';
     return `expected ${how} ${n} item${n === 1 ? '' : 's'}`;
@@ -111,7 +115,10 @@ export function issuesToErrors(root: z.ZodType, issues: readonly Issue[]): Locat
       const keys = allowedKeys(root, segments);
       const expected = keys ? `expected only ${keys.join(', ')}` : 'expected none';
       for (const key of iss.keys) {
-        out.push({ segments: [...segments, key], message: `unknown key ${JSON.stringify(key)} (the format has no such key): ${expected}` });
+        out.push({
+          segments: [...segments, key],
+          message: `unknown key ${JSON.stringify(key)} (the format has no such key): ${expected}`,
+        });
       }
       continue;
     }

@@ -17,10 +17,35 @@ const leaf = (...keys: string[]): KeyOrder => ({ keys });
 const LEVEL_POINT = leaf('v', 'i', 'vddMin');
 const PARAMS: KeyOrder = {
   keys: [
-    'vih', 'vil', 'schmitt', 'iih', 'iil', 'cin', 'viMax', 'unpoweredSafe', 'viMaxOff', 'voh', 'vol', 'ioMax', 'maxInputRamp', 'vddRange', 'deltaIcc', 'deltaIccDrop',
-    'viMin', 'injectionMax', 'busHold', 'seriesResistance', 'minExternalPull', 'maxLoadCapacitance',
+    'vih',
+    'vil',
+    'schmitt',
+    'iih',
+    'iil',
+    'cin',
+    'viMax',
+    'unpoweredSafe',
+    'viMaxOff',
+    'voh',
+    'vol',
+    'ioMax',
+    'maxInputRamp',
+    'vddRange',
+    'deltaIcc',
+    'deltaIccDrop',
+    'viMin',
+    'injectionMax',
+    'busHold',
+    'seriesResistance',
+    'minExternalPull',
+    'maxLoadCapacitance',
   ],
-  children: { schmitt: leaf('vtPlus', 'vtMinus'), voh: LEVEL_POINT, vol: LEVEL_POINT, busHold: leaf('hold', 'overdrive') },
+  children: {
+    schmitt: leaf('vtPlus', 'vtMinus'),
+    voh: LEVEL_POINT,
+    vol: LEVEL_POINT,
+    busHold: leaf('hold', 'overdrive'),
+  },
 };
 const PULL = leaf('to', 'ohms', 'tolerance', 'min', 'max');
 
@@ -31,7 +56,10 @@ export const KEY_ORDER = {
     children: {
       settings: leaf('minMargin', 'defaultWiringCapacitance'),
       rails: leaf('id', 'label', 'nominal', 'tolerance', 'min', 'max', 'colour', 'minLoad'),
-      scenarios: { keys: ['id', 'label', 'off', 'pins'], children: { pins: { keys: ['pin', 'role', 'drive', 'pull'], children: { pull: PULL } } } },
+      scenarios: {
+        keys: ['id', 'label', 'off', 'pins'],
+        children: { pins: { keys: ['pin', 'role', 'drive', 'pull'], children: { pull: PULL } } },
+      },
       profiles: { keys: ['id', 'label', 'source', 'params'], children: { params: PARAMS } },
       parts: {
         keys: ['id', 'label', 'rail', 'profile', 'params', 'position', 'pins'],
@@ -45,7 +73,20 @@ export const KEY_ORDER = {
         },
       },
       discretes: {
-        keys: ['id', 'kind', 'label', 'ohms', 'tolerance', 'tie', 'gate', 'vgsThMax', 'rdsOnMax', 'vfMax', 'leakageMax', 'position'],
+        keys: [
+          'id',
+          'kind',
+          'label',
+          'ohms',
+          'tolerance',
+          'tie',
+          'gate',
+          'vgsThMax',
+          'rdsOnMax',
+          'vfMax',
+          'leakageMax',
+          'position',
+        ],
         children: { tie: leaf('1', '2'), position: leaf('x', 'y') },
       },
       nets: {
@@ -77,14 +118,17 @@ function write(value: unknown, order: KeyOrder, depth: number): string {
     return `[\n${value.map((v) => inner + write(v, order, depth + 1)).join(',\n')}\n${outer}]`;
   }
   const record = value as Record<string, unknown>;
-  const present = (k: string) =>
-    Object.prototype.hasOwnProperty.call(record, k) && record[k] !== undefined && typeof record[k] !== 'function';
+  const present = (k: string) => Object.hasOwn(record, k) && record[k] !== undefined && typeof record[k] !== 'function';
   const known = order.keys.filter(present);
   // Keys outside the format cannot come from the reader; they are kept (sorted, last), not dropped.
-  const extra = Object.keys(record).filter((k) => !order.keys.includes(k) && present(k)).sort();
+  const extra = Object.keys(record)
+    .filter((k) => !order.keys.includes(k) && present(k))
+    .sort();
   const keys = [...known, ...extra];
   if (keys.length === 0) return '{}';
-  const lines = keys.map((k) => `${inner}${JSON.stringify(k)}: ${write(record[k], order.children?.[k] ?? NO_ORDER, depth + 1)}`);
+  const lines = keys.map(
+    (k) => `${inner}${JSON.stringify(k)}: ${write(record[k], order.children?.[k] ?? NO_ORDER, depth + 1)}`,
+  );
   return `{\n${lines.join(',\n')}\n${outer}}`;
 }
 

@@ -10,7 +10,7 @@ export const lvt = defineProfile({
   id: '74lvt',
   label: '74LVT-type 3.3 V BiCMOS, TTL levels, 5.5 V-tolerant',
   source:
-    'from memory (the family\'s DC table at 3.0 V, −40…85 °C): inputs 2.0 / 0.8 V; VOH VDD−0.2 V @ 100 µA and ' +
+    "from memory (the family's DC table at 3.0 V, −40…85 °C): inputs 2.0 / 0.8 V; VOH VDD−0.2 V @ 100 µA and " +
     '2.0 V @ 32 mA; VOL 0.2 V @ 100 µA, 0.5 V @ 32 mA and 0.55 V @ 64 mA; ±1 µA, 5 pF; inputs and outputs ' +
     'tolerate 5.5 V, powered or not',
   params: {
@@ -40,7 +40,7 @@ export const abt = defineProfile({
   id: '74abt',
   label: '74ABT-type 5 V BiCMOS, TTL levels',
   source:
-    'from memory (the family\'s DC table at 4.5 V, −40…85 °C): inputs 2.0 / 0.8 V; VOH 2.5 V @ 3 mA and ' +
+    "from memory (the family's DC table at 4.5 V, −40…85 °C): inputs 2.0 / 0.8 V; VOH 2.5 V @ 3 mA and " +
     '2.0 V @ 32 mA; VOL 0.55 V @ 64 mA; ±1 µA, 5 pF; input limit 5.5 V (common practice for a 5 V part)',
   params: {
     vddRange: [4.5, 5.5], // from memory

@@ -5,7 +5,18 @@ import { abt, lvt } from './bicmos.ts';
 import { auc, avc } from './avc.ts';
 import { deepFreeze } from './define.ts';
 import { mcuGpio, offBoard } from './generic.ts';
-import { lvc, lvc18, lvc25, lvcOpenDrain, lvcmos12, lvcmos15, lvcmos18, lvcmos25, lvcmos33, lvttl33 } from './lowVoltage.ts';
+import {
+  lvc,
+  lvc18,
+  lvc25,
+  lvcOpenDrain,
+  lvcmos12,
+  lvcmos15,
+  lvcmos18,
+  lvcmos25,
+  lvcmos33,
+  lvttl33,
+} from './lowVoltage.ts';
 import { ls, lsOpenCollector, ttl } from './ttl.ts';
 import { i2c, i2cFastMode, i2cLowVoltage, smbus } from './twoWire.ts';
 import { translatorOpenDrain, translatorSide } from './translators.ts';

@@ -13,7 +13,7 @@ export const mcuGpio = defineProfile({
   label: 'Microcontroller GPIO (starting point)',
   source:
     'an editable starting point: CMOS thresholds 0.7/0.3·VDD and a static LVCMOS row (common practice), ' +
-    'an 8 mA row VDD−0.4 / 0.4 V, ±1 µA leakage and 5 pF as a 3.3 V part\'s port table gives them ' +
+    "an 8 mA row VDD−0.4 / 0.4 V, ±1 µA leakage and 5 pF as a 3.3 V part's port table gives them " +
     '(from memory, −40…85 °C), VDD+0.5 clamp (common practice)',
   params: {
     vih: '0.7*VDD', // common practice

@@ -84,7 +84,8 @@ export const lvcmos33 = defineProfile({
 export const lvcmos25 = defineProfile({
   id: 'lvcmos25',
   label: '2.5 V LVCMOS (JESD8-5)',
-  source: 'JESD8-5: 1 mA rows restated, other rows and VDD+0.5 from memory; over the parts\' operating range (−40…85 °C); input leakage ±5 µA and 5 pF from memory',
+  source:
+    "JESD8-5: 1 mA rows restated, other rows and VDD+0.5 from memory; over the parts' operating range (−40…85 °C); input leakage ±5 µA and 5 pF from memory",
   params: {
     vddRange: [2.3, 2.7], // from memory
     vih: 1.7, // from memory
@@ -110,7 +111,8 @@ export const lvcmos25 = defineProfile({
 export const lvcmos18 = defineProfile({
   id: 'lvcmos18',
   label: '1.8 V LVCMOS (JESD8-7)',
-  source: 'JESD8-7: 2 mA rows restated, 100 µA rows and VDD+0.5 from memory; over the parts\' operating range (−40…85 °C); input leakage ±5 µA and 5 pF from memory',
+  source:
+    "JESD8-7: 2 mA rows restated, 100 µA rows and VDD+0.5 from memory; over the parts' operating range (−40…85 °C); input leakage ±5 µA and 5 pF from memory",
   params: {
     vddRange: [1.65, 1.95], // JESD8-7 restated
     vih: '0.65*VDD', // JESD8-7 restated
@@ -134,7 +136,8 @@ export const lvcmos18 = defineProfile({
 export const lvcmos15 = defineProfile({
   id: 'lvcmos15',
   label: '1.5 V LVCMOS (JESD8-11)',
-  source: 'JESD8-11: 2 mA rows restated, 100 µA rows and VDD+0.5 from memory; over the parts\' operating range (−40…85 °C); input leakage ±5 µA and 5 pF from memory',
+  source:
+    "JESD8-11: 2 mA rows restated, 100 µA rows and VDD+0.5 from memory; over the parts' operating range (−40…85 °C); input leakage ±5 µA and 5 pF from memory",
   params: {
     vddRange: [1.4, 1.6], // JESD8-11 title page (std)
     vih: '0.65*VDD', // JESD8-11 restated
@@ -158,7 +161,8 @@ export const lvcmos15 = defineProfile({
 export const lvcmos12 = defineProfile({
   id: 'lvcmos12',
   label: '1.2 V LVCMOS (JESD8-12)',
-  source: 'JESD8-12 restated; VDD range, 100 µA rows and VDD+0.5 from memory (low confidence); over the parts\' operating range (−40…85 °C); input leakage ±5 µA and 5 pF from memory',
+  source:
+    "JESD8-12 restated; VDD range, 100 µA rows and VDD+0.5 from memory (low confidence); over the parts' operating range (−40…85 °C); input leakage ±5 µA and 5 pF from memory",
   params: {
     vddRange: [1.1, 1.3], // from memory
     vih: '0.65*VDD', // JESD8-12 restated

@@ -50,7 +50,8 @@ export const ls = defineProfile({
 export const lsOpenCollector = defineProfile({
   id: '74ls-oc',
   label: '74LS open-collector output',
-  source: 'handbook (74LS open-collector data pages, commercial 0…70 °C): off leakage ≤ 0.1 mA at 5.5 V, VOL 0.5 V @ 8 mA',
+  source:
+    'handbook (74LS open-collector data pages, commercial 0…70 °C): off leakage ≤ 0.1 mA at 5.5 V, VOL 0.5 V @ 8 mA',
   params: {
     vddRange: [4.75, 5.25], // handbook: 5 V ± 5 %
     vol: [{ v: 0.5, i: 8e-3 }], // handbook: 0.5 V @ 8 mA

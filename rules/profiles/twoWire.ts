@@ -10,7 +10,7 @@ export const i2c = defineProfile({
   label: 'I2C-bus pin',
   source:
     'I2C-bus specification: thresholds (std), VOL 0.4 V @ 3 mA for VDD > 2 V (currents std, level restated), ' +
-    '±10 µA and 10 pF (restated); VIH max VDD+0.5 (restated); over the device\'s operating range (−40…85 °C)',
+    "±10 µA and 10 pF (restated); VIH max VDD+0.5 (restated); over the device's operating range (−40…85 °C)",
   params: {
     vddRange: [2, 5.5], // I2C-bus specification: the 0.4 V row holds for VDD > 2 V (restated); 5.5 V top from memory
     vih: '0.7*VDD', // I2C-bus specification (std)
@@ -29,8 +29,8 @@ export const i2cLowVoltage = defineProfile({
   label: 'I2C-bus pin, VDD ≤ 2 V',
   source:
     "I2C-bus specification's table for VDD ≤ 2 V, restated: VOL 0.2·VDD @ 3 mA (fast-mode); " +
-    'thresholds, ±10 µA, 10 pF and VDD+0.5 as for i2c; range from JESD8-7\'s 1.65 V (from memory); ' +
-    'over the device\'s operating range (−40…85 °C)',
+    "thresholds, ±10 µA, 10 pF and VDD+0.5 as for i2c; range from JESD8-7's 1.65 V (from memory); " +
+    "over the device's operating range (−40…85 °C)",
   params: {
     vddRange: [1.65, 2], // 1.65 V: JESD8-7's lowest supply (from memory); 2 V: the specification's low-supply row
     vih: '0.7*VDD', // I2C-bus specification (std)
@@ -51,7 +51,7 @@ export const i2cFastMode = defineProfile({
   id: 'i2c-fm',
   label: 'I2C-bus pin, fast-mode',
   source:
-    'I2C-bus specification: as i2c, with fast-mode\'s VOL 0.6 V @ 6 mA (std); over the device\'s operating range (−40…85 °C)',
+    "I2C-bus specification: as i2c, with fast-mode's VOL 0.6 V @ 6 mA (std); over the device's operating range (−40…85 °C)",
   params: {
     vddRange: [2, 5.5], // as i2c
     vih: '0.7*VDD', // I2C-bus specification (std)
@@ -76,7 +76,7 @@ export const smbus = defineProfile({
   label: 'SMBus pin (fixed 0.8 / 2.1 V levels)',
   source:
     'SMBus specification 2.0, from memory: VIL 0.8 V, VIH 2.1 V, VOL 0.4 V @ 4 mA (high-power class), ' +
-    'leakage ±5 µA, 10 pF (as the I2C-bus pin), VDD 3–5.5 V; over the device\'s operating range (−40…85 °C)',
+    "leakage ±5 µA, 10 pF (as the I2C-bus pin), VDD 3–5.5 V; over the device's operating range (−40…85 °C)",
   params: {
     vddRange: [3, 5.5], // SMBus 2.0, from memory
     vih: 2.1, // SMBus 2.0, from memory

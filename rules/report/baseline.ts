@@ -48,8 +48,19 @@ export function baselineVerdict(report: Report, baseline: Baseline): Verdict {
   const count = fresh.error + fresh.warning;
   const knownText = `${plural(known, 'finding')} at that level already in the baseline`;
   if (count > 0) {
-    const parts = [...(fresh.error > 0 ? [plural(fresh.error, 'error')] : []), ...(fresh.warning > 0 ? [plural(fresh.warning, 'warning')] : [])];
-    return { fails: true, count, line: `FAIL: unwaived findings at the fail-on level (${failOn}) not in the baseline: ${parts.join(' and ')}; ${knownText}.` };
+    const parts = [
+      ...(fresh.error > 0 ? [plural(fresh.error, 'error')] : []),
+      ...(fresh.warning > 0 ? [plural(fresh.warning, 'warning')] : []),
+    ];
+    return {
+      fails: true,
+      count,
+      line: `FAIL: unwaived findings at the fail-on level (${failOn}) not in the baseline: ${parts.join(' and ')}; ${knownText}.`,
+    };
   }
-  return { fails: false, count: 0, line: `PASS: no unwaived finding at the fail-on level (${failOn}) beyond the baseline; ${knownText}.` };
+  return {
+    fails: false,
+    count: 0,
+    line: `PASS: no unwaived finding at the fail-on level (${failOn}) beyond the baseline; ${knownText}.`,
+  };
 }

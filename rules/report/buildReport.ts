@@ -68,7 +68,8 @@ export function crossingRows(result: CheckResult, states: readonly PowerState[] 
       const { worstHigh, worstLow } = view.analysis;
       // A margin that is not a finite number is written null (JSON has no NaN or ∞) and the row
       // is an error whatever the findings say: the net could not be judged.
-      const undecided = (worstHigh !== null && !Number.isFinite(worstHigh)) || (worstLow !== null && !Number.isFinite(worstLow));
+      const undecided =
+        (worstHigh !== null && !Number.isFinite(worstHigh)) || (worstLow !== null && !Number.isFinite(worstLow));
       rows.push({
         net: net.id,
         label: net.label ?? net.id,
@@ -131,7 +132,11 @@ export function buildReport(design: Design, result: CheckResult, options: Report
     tool: TOOL_NAME,
     generatedAt: options.generatedAt,
     design: { title: design.title, parts: design.parts.length, nets: design.nets.length, rails: design.rails.length },
-    settings: { minMargin: settings.minMargin, defaultWiringCapacitance: settings.defaultWiringCapacitance, failOn: options.failOn },
+    settings: {
+      minMargin: settings.minMargin,
+      defaultWiringCapacitance: settings.defaultWiringCapacitance,
+      failOn: options.failOn,
+    },
     scenarios: states.map((s) => ({ id: s.id, label: s.label, off: [...s.off] })),
     summary: summarize(findings),
     findings: findings.map(reportFinding),

@@ -8,7 +8,8 @@ import type { OutputPoint, Params, Profile } from '../model/schema.ts';
 type Level = NonNullable<Params['vih']>;
 
 const level = (v: Level) => (typeof v === 'number' ? formatQuantity(v, 'V') : v);
-const points = (list: readonly OutputPoint[]) => list.map((p) => `${level(p.v)} at ${formatQuantity(p.i, 'A')}`).join('; ');
+const points = (list: readonly OutputPoint[]) =>
+  list.map((p) => `${level(p.v)} at ${formatQuantity(p.i, 'A')}`).join('; ');
 
 /** One `[name, value]` row per parameter the profile sets, in a fixed, readable order. */
 export function describeParams(params: Params): [string, string][] {
@@ -31,7 +32,12 @@ export function describeParams(params: Params): [string, string][] {
   add('VI max unpowered', p.viMaxOff === undefined ? undefined : formatQuantity(p.viMaxOff, 'V'));
   add('safe unpowered', p.unpoweredSafe === undefined ? undefined : p.unpoweredSafe ? 'yes' : 'no');
   add('max input ramp', p.maxInputRamp === undefined ? undefined : formatQuantity(p.maxInputRamp, 's/V'));
-  add('ΔICC per input', p.deltaIcc === undefined ? undefined : `${formatQuantity(p.deltaIcc, 'A')}${p.deltaIccDrop === undefined ? '' : ` at VDD − ${formatQuantity(p.deltaIccDrop, 'V')}`}`);
+  add(
+    'ΔICC per input',
+    p.deltaIcc === undefined
+      ? undefined
+      : `${formatQuantity(p.deltaIcc, 'A')}${p.deltaIccDrop === undefined ? '' : ` at VDD − ${formatQuantity(p.deltaIccDrop, 'V')}`}`,
+  );
   return rows;
 }
 

@@ -38,7 +38,13 @@ export interface ReportDiff {
   readonly from: DiffSide;
   readonly to: DiffSide;
   readonly failOn: FailOn;
-  readonly summary: { readonly new: number; readonly gone: number; readonly changed: number; readonly unchanged: number; readonly regressions: number };
+  readonly summary: {
+    readonly new: number;
+    readonly gone: number;
+    readonly changed: number;
+    readonly unchanged: number;
+    readonly regressions: number;
+  };
   readonly new: readonly ReportFinding[];
   readonly gone: readonly ReportFinding[];
   readonly changed: readonly ChangedFinding[];
@@ -61,8 +67,10 @@ function sameValue(a: unknown, b: unknown): boolean {
 /** The fields in which one finding, seen in two reports, differs. */
 export function fieldChanges(before: ReportFinding, after: ReportFinding): FieldChange[] {
   const changes: FieldChange[] = [];
-  if (before.severity !== after.severity) changes.push({ key: 'severity', before: before.severity, after: after.severity });
-  if (before.waived !== after.waived) changes.push({ key: 'waived', before: before.waived ?? null, after: after.waived ?? null });
+  if (before.severity !== after.severity)
+    changes.push({ key: 'severity', before: before.severity, after: after.severity });
+  if (before.waived !== after.waived)
+    changes.push({ key: 'waived', before: before.waived ?? null, after: after.waived ?? null });
   const keys = new Set([...Object.keys(before.values), ...Object.keys(after.values)]);
   for (const key of keys) {
     const a = before.values[key] ?? null;
@@ -113,17 +121,74 @@ export function diffReports(from: Report, to: Report, files: { from: string; to:
 
 /** Units of the values' keys that carry one (report-format.md: SI units). */
 const UNITS: Readonly<Record<string, string>> = {
-  voh: 'V', vih: 'V', vol: 'V', vil: 'V', margin: 'V', marginHigh: 'V', marginLow: 'V', driverVdd: 'V', receiverVdd: 'V', vpull: 'V',
-  vNet: 'V', viMax: 'V', railMin: 'V', railMax: 'V', profileMin: 'V', profileMax: 'V',
-  loadHigh: 'A', loadLow: 'A', ratedHigh: 'A', ratedLow: 'A',
-  riseTime: 's', limit: 's', capacitance: 'F', resistance: 'Ω', ohms: 'Ω', rMin: 'Ω', rMax: 'Ω', suggested: 'Ω', ramp: 's/V', maxInputRamp: 's/V',
-  pinVdd: 'V', ioMax: 'A', t1090: 's', swing: 'V',
-  ohmsMin: 'Ω', ohmsMax: 'Ω', lowestPower: 'Ω', adviceMin: 'Ω', adviceMax: 'Ω', adviceCap: 'Ω', othersOhms: 'Ω',
-  suggestedRise: 's', suggestedHigh: 'V', suggestedLow: 'V', suggestedSink: 'A',
-  current: 'A', drop: 'V', high: 'V', threshold: 'V',
+  voh: 'V',
+  vih: 'V',
+  vol: 'V',
+  vil: 'V',
+  margin: 'V',
+  marginHigh: 'V',
+  marginLow: 'V',
+  driverVdd: 'V',
+  receiverVdd: 'V',
+  vpull: 'V',
+  vNet: 'V',
+  viMax: 'V',
+  railMin: 'V',
+  railMax: 'V',
+  profileMin: 'V',
+  profileMax: 'V',
+  loadHigh: 'A',
+  loadLow: 'A',
+  ratedHigh: 'A',
+  ratedLow: 'A',
+  riseTime: 's',
+  limit: 's',
+  capacitance: 'F',
+  resistance: 'Ω',
+  ohms: 'Ω',
+  rMin: 'Ω',
+  rMax: 'Ω',
+  suggested: 'Ω',
+  ramp: 's/V',
+  maxInputRamp: 's/V',
+  pinVdd: 'V',
+  ioMax: 'A',
+  t1090: 's',
+  swing: 'V',
+  ohmsMin: 'Ω',
+  ohmsMax: 'Ω',
+  lowestPower: 'Ω',
+  adviceMin: 'Ω',
+  adviceMax: 'Ω',
+  adviceCap: 'Ω',
+  othersOhms: 'Ω',
+  suggestedRise: 's',
+  suggestedHigh: 'V',
+  suggestedLow: 'V',
+  suggestedSink: 'A',
+  current: 'A',
+  drop: 'V',
+  high: 'V',
+  threshold: 'V',
   // Version 2: parts between chips.
-  injectionMax: 'A', total: 'A', minLoad: 'A', viMin: 'V', vgate: 'V', vgs: 'V', vgsTh: 'V', iLow: 'A', iHigh: 'A', rated: 'A',
-  gateMax: 'V', pullMin: 'V', minExternalPull: 'Ω', vlow: 'V', rs: 'Ω', rpu: 'Ω', maxLoadCapacitance: 'F', overdrive: 'A',
+  injectionMax: 'A',
+  total: 'A',
+  minLoad: 'A',
+  viMin: 'V',
+  vgate: 'V',
+  vgs: 'V',
+  vgsTh: 'V',
+  iLow: 'A',
+  iHigh: 'A',
+  rated: 'A',
+  gateMax: 'V',
+  pullMin: 'V',
+  minExternalPull: 'Ω',
+  vlow: 'V',
+  rs: 'Ω',
+  rpu: 'Ω',
+  maxLoadCapacitance: 'F',
+  overdrive: 'A',
 };
 
 /** Value keys that are plain numbers (fractions, factors): printed as they are. */
@@ -151,43 +216,91 @@ const severityOf = (f: ReportFinding) => (f.waived === undefined ? f.severity : 
 
 function summaryLine(d: ReportDiff): string {
   const s = d.summary;
-  const regress = s.regressions === 0 ? `none fails where it did not (fail on ${d.failOn})` : `${plural(s.regressions, 'finding')} now fail${s.regressions === 1 ? 's' : ''} at the fail-on level (${d.failOn})`;
+  const regress =
+    s.regressions === 0
+      ? `none fails where it did not (fail on ${d.failOn})`
+      : `${plural(s.regressions, 'finding')} now fail${s.regressions === 1 ? 's' : ''} at the fail-on level (${d.failOn})`;
   return `${s.new} new, ${s.gone} gone, ${s.changed} changed, ${s.unchanged} unchanged; ${regress}.`;
 }
 
 /** The comparison as plain text, ending with a newline. */
 export function renderDiffText(d: ReportDiff): string {
-  const out = [`Railcross diff: ${d.from.file} → ${d.to.file}`, `${d.from.title} (${d.from.tool}) → ${d.to.title} (${d.to.tool})`, '', summaryLine(d)];
+  const out = [
+    `Railcross diff: ${d.from.file} → ${d.to.file}`,
+    `${d.from.title} (${d.from.tool}) → ${d.to.title} (${d.to.tool})`,
+    '',
+    summaryLine(d),
+  ];
   const list = (heading: string, findings: readonly ReportFinding[]) => {
     if (findings.length === 0) return;
     out.push('', `${heading} (${findings.length})`);
-    for (const f of findings) out.push(`  ${severityOf(f).toUpperCase()}  ${f.rule}  ${where(f)}`, `      ${f.message}`);
+    for (const f of findings)
+      out.push(`  ${severityOf(f).toUpperCase()}  ${f.rule}  ${where(f)}`, `      ${f.message}`);
   };
   list('New', d.new);
   list('Gone', d.gone);
   if (d.changed.length > 0) {
     out.push('', `Changed (${d.changed.length})`);
-    for (const c of d.changed) out.push(`  ${severityOf(c.after).toUpperCase()}  ${c.after.rule}  ${where(c.after)}`, `      ${c.changes.map(changeText).join('; ')}`, `      ${c.after.message}`);
+    for (const c of d.changed)
+      out.push(
+        `  ${severityOf(c.after).toUpperCase()}  ${c.after.rule}  ${where(c.after)}`,
+        `      ${c.changes.map(changeText).join('; ')}`,
+        `      ${c.after.message}`,
+      );
   }
   return `${out.join('\n')}\n`;
 }
 
 /** The comparison as GitHub-flavoured Markdown for a review comment, ending with a newline. */
 export function renderDiffMarkdown(d: ReportDiff): string {
-  const out = [`## Railcross diff: ${escapeMarkdown(d.from.title)} → ${escapeMarkdown(d.to.title)}`, '', `${codeSpan(d.from.file)} → ${codeSpan(d.to.file)}. ${escapeMarkdown(summaryLine(d))}`];
+  const out = [
+    `## Railcross diff: ${escapeMarkdown(d.from.title)} → ${escapeMarkdown(d.to.title)}`,
+    '',
+    `${codeSpan(d.from.file)} → ${codeSpan(d.to.file)}. ${escapeMarkdown(summaryLine(d))}`,
+  ];
   const row = (cells: readonly string[]) => `| ${cells.join(' | ')} |`;
   const table = (heading: string, findings: readonly ReportFinding[]) => {
     if (findings.length === 0) return;
-    out.push('', `### ${heading} (${findings.length})`, '', row(['Severity', 'Rule', 'Net', 'Power state', 'Message']), row(['---', '---', '---', '---', '---']));
-    for (const f of findings) out.push(row([severityOf(f), codeSpan(f.rule), f.net === null ? '—' : codeSpan(f.net), codeSpan(f.scenario), escapeMarkdown(f.message)]));
+    out.push(
+      '',
+      `### ${heading} (${findings.length})`,
+      '',
+      row(['Severity', 'Rule', 'Net', 'Power state', 'Message']),
+      row(['---', '---', '---', '---', '---']),
+    );
+    for (const f of findings)
+      out.push(
+        row([
+          severityOf(f),
+          codeSpan(f.rule),
+          f.net === null ? '—' : codeSpan(f.net),
+          codeSpan(f.scenario),
+          escapeMarkdown(f.message),
+        ]),
+      );
   };
   table('New', d.new);
   table('Gone', d.gone);
   if (d.changed.length > 0) {
-    out.push('', `### Changed (${d.changed.length})`, '', row(['Severity', 'Rule', 'Net', 'Power state', 'What changed', 'Message now']), row(['---', '---', '---', '---', '---', '---']));
+    out.push(
+      '',
+      `### Changed (${d.changed.length})`,
+      '',
+      row(['Severity', 'Rule', 'Net', 'Power state', 'What changed', 'Message now']),
+      row(['---', '---', '---', '---', '---', '---']),
+    );
     for (const c of d.changed) {
       const f = c.after;
-      out.push(row([severityOf(f), codeSpan(f.rule), f.net === null ? '—' : codeSpan(f.net), codeSpan(f.scenario), escapeMarkdown(c.changes.map(changeText).join('; ')), escapeMarkdown(f.message)]));
+      out.push(
+        row([
+          severityOf(f),
+          codeSpan(f.rule),
+          f.net === null ? '—' : codeSpan(f.net),
+          codeSpan(f.scenario),
+          escapeMarkdown(c.changes.map(changeText).join('; ')),
+          escapeMarkdown(f.message),
+        ]),
+      );
     }
   }
   return `${out.join('\n')}\n`;

@@ -21,7 +21,11 @@ export interface JunitOptions {
  */
 export function escapeXml(text: string): string {
   return text
-    .replace(/[\u0000-\u0008\u000B\u000C\u000E-\u001F\uFFFE\uFFFF]|[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?<![\uD800-\uDBFF])[\uDC00-\uDFFF]/g, '\uFFFD')
+    .replace(
+      // biome-ignore lint/suspicious/noControlCharactersInRegex: these are the characters XML 1.0 cannot carry, removed on purpose
+      /[\u0000-\u0008\u000B\u000C\u000E-\u001F\uFFFE\uFFFF]|[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?<![\uD800-\uDBFF])[\uDC00-\uDFFF]/g,
+      '\uFFFD',
+    )
     .replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&apos;' })[c]!);
 }
 
@@ -40,7 +44,8 @@ interface Case {
 /** The report as a JUnit XML document, ending with a newline. */
 export function renderJunit(report: Report, options: JunitOptions = {}): string {
   const failOn = report.settings.failOn;
-  const failing = (f: ReportFinding) => reaches(f, failOn) && (options.baseline === undefined || !inBaseline(f, options.baseline));
+  const failing = (f: ReportFinding) =>
+    reaches(f, failOn) && (options.baseline === undefined || !inBaseline(f, options.baseline));
   const suites: string[] = [];
   let tests = 0;
   let failures = 0;
@@ -64,8 +69,13 @@ export function renderJunit(report: Report, options: JunitOptions = {}): string 
       const out = [`    <testcase classname="railcross.${escapeXml(state.id)}" name="${escapeXml(name)}">`];
       if (fails.length > 0) {
         suiteFailures++;
-        const message = fails.length === 1 ? fails[0]!.message : `${fails.length} findings at the fail-on level (${failOn}): ${fails.map((f) => f.rule).join(', ')}`;
-        out.push(`      <failure message="${escapeXml(message)}" type="${escapeXml(fails[0]!.rule)}">${escapeXml(fails.map(line).join('\n'))}</failure>`);
+        const message =
+          fails.length === 1
+            ? fails[0]!.message
+            : `${fails.length} findings at the fail-on level (${failOn}): ${fails.map((f) => f.rule).join(', ')}`;
+        out.push(
+          `      <failure message="${escapeXml(message)}" type="${escapeXml(fails[0]!.rule)}">${escapeXml(fails.map(line).join('\n'))}</failure>`,
+        );
       }
       const others = c.findings.filter((f) => !fails.includes(f));
       if (others.length > 0) out.push(`      <system-out>${escapeXml(others.map(line).join('\n'))}</system-out>`);

@@ -118,7 +118,10 @@ export interface Ladder {
 }
 
 /** The side of the pairs that has the smallest margin, with its pair. */
-function worstSide(pairs: readonly PairAnalysis[], side: 'high' | 'low'): { pair: PairAnalysis; s: LevelSide } | undefined {
+function worstSide(
+  pairs: readonly PairAnalysis[],
+  side: 'high' | 'low',
+): { pair: PairAnalysis; s: LevelSide } | undefined {
   let best: { pair: PairAnalysis; s: LevelSide } | undefined;
   for (const pair of pairs) {
     const s = pair[side];
@@ -158,25 +161,39 @@ function driverOf(view: NetView, d: PinView): LadderDriver {
   if (wh !== undefined) {
     const s = wh.s;
     high = {
-      from: s.out, to: s.vpull ?? s.driverVdd ?? s.out, driverVdd: s.driverVdd,
+      from: s.out,
+      to: s.vpull ?? s.driverVdd ?? s.out,
+      driverVdd: s.driverVdd,
       ...(s.vpull === undefined ? {} : { vpull: s.vpull }),
-      load: s.load, estimate: s.estimate, pair: { driver: wh.pair.driver, receiver: wh.pair.receiver },
+      load: s.load,
+      estimate: s.estimate,
+      pair: { driver: wh.pair.driver, receiver: wh.pair.receiver },
     };
   } else if (d.drive === 'open-drain') {
     const up = pulledHigh(view);
-    if (up !== undefined) high = { from: up.v, to: up.vpull, driverVdd: null, vpull: up.vpull, load: up.load, estimate: false };
+    if (up !== undefined)
+      high = { from: up.v, to: up.vpull, driverVdd: null, vpull: up.vpull, load: up.load, estimate: false };
   } else {
     // In no pair: its own rail's lowest supply is its worst corner.
     const level = outputLevel(d.params.voh, load?.high ?? 0, range.min, 'high');
-    if (level !== undefined) high = { from: level.v, to: range.min, driverVdd: range.min, load: load?.high ?? 0, estimate: level.estimate };
+    if (level !== undefined)
+      high = { from: level.v, to: range.min, driverVdd: range.min, load: load?.high ?? 0, estimate: level.estimate };
   }
   let low: LadderLowBand | null = null;
   if (wl !== undefined) {
     const s = wl.s;
-    low = { from: 0, to: s.out, driverVdd: s.driverVdd ?? 0, load: s.load, estimate: s.estimate, pair: { driver: wl.pair.driver, receiver: wl.pair.receiver } };
+    low = {
+      from: 0,
+      to: s.out,
+      driverVdd: s.driverVdd ?? 0,
+      load: s.load,
+      estimate: s.estimate,
+      pair: { driver: wl.pair.driver, receiver: wl.pair.receiver },
+    };
   } else {
     const level = outputLevel(d.params.vol, load?.low ?? 0, range.max, 'low');
-    if (level !== undefined) low = { from: 0, to: level.v, driverVdd: range.max, load: load?.low ?? 0, estimate: level.estimate };
+    if (level !== undefined)
+      low = { from: 0, to: level.v, driverVdd: range.max, load: load?.low ?? 0, estimate: level.estimate };
   }
   return { pin: d.key, part: d.partId, rail: d.rail, drive: d.drive ?? 'push-pull', high, low };
 }
@@ -191,13 +208,28 @@ function receiverOf(view: NetView, r: PinView): LadderReceiver {
   const pairOf = (w: { pair: PairAnalysis }) => ({ driver: w.pair.driver, receiver: w.pair.receiver });
   // In no pair: VIH is worst at the rail's highest supply, VIL at its lowest.
   const vih: LadderThreshold | null =
-    wh !== undefined ? { volts: wh.s.threshold, receiverVdd: wh.s.receiverVdd, pair: pairOf(wh) }
-    : hi === undefined ? null : { volts: levelAt(hi, range.max), receiverVdd: range.max };
+    wh !== undefined
+      ? { volts: wh.s.threshold, receiverVdd: wh.s.receiverVdd, pair: pairOf(wh) }
+      : hi === undefined
+        ? null
+        : { volts: levelAt(hi, range.max), receiverVdd: range.max };
   const vil: LadderThreshold | null =
-    wl !== undefined ? { volts: wl.s.threshold, receiverVdd: wl.s.receiverVdd, pair: pairOf(wl) }
-    : lo === undefined ? null : { volts: levelAt(lo, range.min), receiverVdd: range.min };
+    wl !== undefined
+      ? { volts: wl.s.threshold, receiverVdd: wl.s.receiverVdd, pair: pairOf(wl) }
+      : lo === undefined
+        ? null
+        : { volts: levelAt(lo, range.min), receiverVdd: range.min };
   const viMax = r.params.viMax === undefined ? null : { volts: levelAt(r.params.viMax, range.min), vdd: range.min };
-  return { pin: r.key, part: r.partId, rail: r.rail, vih, vil, schmitt: r.params.schmitt !== undefined, railRange: range, viMax };
+  return {
+    pin: r.key,
+    part: r.partId,
+    rail: r.rail,
+    vih,
+    vil,
+    schmitt: r.params.schmitt !== undefined,
+    railRange: range,
+    viMax,
+  };
 }
 
 function marginsOf(view: NetView): LadderMargin[] {
@@ -206,16 +238,32 @@ function marginsOf(view: NetView): LadderMargin[] {
     const h = pair.high;
     if (h !== null) {
       out.push({
-        kind: 'nmh', driver: pair.driver, receiver: pair.receiver, upper: h.out, lower: h.threshold, margin: h.margin,
-        status: h.status, driverVdd: h.driverVdd, receiverVdd: h.receiverVdd, ...(h.vpull === undefined ? {} : { vpull: h.vpull }),
+        kind: 'nmh',
+        driver: pair.driver,
+        receiver: pair.receiver,
+        upper: h.out,
+        lower: h.threshold,
+        margin: h.margin,
+        status: h.status,
+        driverVdd: h.driverVdd,
+        receiverVdd: h.receiverVdd,
+        ...(h.vpull === undefined ? {} : { vpull: h.vpull }),
         estimate: h.estimate,
       });
     }
     const l = pair.low;
     if (l !== null) {
       out.push({
-        kind: 'nml', driver: pair.driver, receiver: pair.receiver, upper: l.threshold, lower: l.out, margin: l.margin,
-        status: l.status, driverVdd: l.driverVdd, receiverVdd: l.receiverVdd, estimate: l.estimate,
+        kind: 'nml',
+        driver: pair.driver,
+        receiver: pair.receiver,
+        upper: l.threshold,
+        lower: l.out,
+        margin: l.margin,
+        status: l.status,
+        driverVdd: l.driverVdd,
+        receiverVdd: l.receiverVdd,
+        estimate: l.estimate,
       });
     }
   }
@@ -255,7 +303,12 @@ export function ladderAxis(highest: number): { top: number; ticks: number[] } {
 /** The ladder of one net's view in the power state it was prepared for (views carry no state: a
  * view judged alike in several states is shared by them). */
 export function ladderFor(view: NetView, state: PowerState): Ladder {
-  const rails: LadderRail[] = [...view.rails.ranges].map(([id, r]) => ({ id, min: r.min, max: r.max, off: view.rails.off.has(id) }));
+  const rails: LadderRail[] = [...view.rails.ranges].map(([id, r]) => ({
+    id,
+    min: r.min,
+    max: r.max,
+    off: view.rails.off.has(id),
+  }));
   const drivers = view.drivers.map((d) => driverOf(view, d));
   const receivers = view.receivers.map((r) => receiverOf(view, r));
   let highest = 0;

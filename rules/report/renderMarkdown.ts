@@ -53,10 +53,12 @@ function longestBacktickRun(s: string): number {
 
 /** Prose in a heading, paragraph or table cell. */
 export function escapeMarkdown(s: string): string {
-  return oneLine(s)
-    .replace(/[\\`*<>[\]|&~#]/g, (c) => `\\${c}`)
-    // An underscore inside a word never starts emphasis (GFM): leave `VALVE_EN` readable.
-    .replace(/(?<![\p{L}\p{N}])_|_(?![\p{L}\p{N}])/gu, '\\_');
+  return (
+    oneLine(s)
+      .replace(/[\\`*<>[\]|&~#]/g, (c) => `\\${c}`)
+      // An underscore inside a word never starts emphasis (GFM): leave `VALVE_EN` readable.
+      .replace(/(?<![\p{L}\p{N}])_|_(?![\p{L}\p{N}])/gu, '\\_')
+  );
 }
 
 /** An id or other literal in a code span; `|` still needs its escape inside a table. */
@@ -68,7 +70,11 @@ export function codeSpan(s: string): string {
   return `${fence}${pad}${text}${pad}${fence}`;
 }
 
-function table(head: readonly string[], rows: readonly (readonly string[])[], align?: readonly ('l' | 'r')[]): string[] {
+function table(
+  head: readonly string[],
+  rows: readonly (readonly string[])[],
+  align?: readonly ('l' | 'r')[],
+): string[] {
   const rule = head.map((_, k) => (align?.[k] === 'r' ? '---:' : '---'));
   const row = (cells: readonly string[]) => `| ${cells.join(' | ')} |`;
   return [row(head), row(rule), ...rows.map(row)];
@@ -79,12 +85,22 @@ export function renderMarkdown(report: Report, options: { readonly verdict?: Ver
   const out: string[] = [];
   const v = options.verdict ?? verdict(report);
   out.push(`# Railcross check: ${escapeMarkdown(report.design.title)}`, '');
-  out.push(`${escapeMarkdown(report.tool)}, generated ${escapeMarkdown(report.generatedAt)}. ${escapeMarkdown(designLine(report))}; ${escapeMarkdown(settingsLine(report))}.`, '');
+  out.push(
+    `${escapeMarkdown(report.tool)}, generated ${escapeMarkdown(report.generatedAt)}. ${escapeMarkdown(designLine(report))}; ${escapeMarkdown(settingsLine(report))}.`,
+    '',
+  );
   out.push(`Power states: ${report.scenarios.map((s) => escapeMarkdown(stateText(s))).join(', ')}.`, '');
   const [word, ...rest] = v.line.split(':');
   out.push(`**${word}**:${escapeMarkdown(rest.join(':'))}`, '');
   const s = report.summary;
-  out.push(...table(['Errors', 'Warnings', 'Info', 'Waived'], [[s.error, s.warning, s.info, s.waived].map(String)], ['r', 'r', 'r', 'r']), '');
+  out.push(
+    ...table(
+      ['Errors', 'Warnings', 'Info', 'Waived'],
+      [[s.error, s.warning, s.info, s.waived].map(String)],
+      ['r', 'r', 'r', 'r'],
+    ),
+    '',
+  );
 
   out.push('## Findings', '');
   if (report.findings.length === 0) out.push('None.');
@@ -133,7 +149,12 @@ export function renderMarkdown(report: Report, options: { readonly verdict?: Ver
     out.push(
       ...table(
         ['Power state', 'Rail', 'Current', 'Inputs'],
-        report.interfacePower.map((r) => [codeSpan(r.scenario), codeSpan(r.rail), formatQuantity(r.current, 'A'), r.pins.map(codeSpan).join(', ')]),
+        report.interfacePower.map((r) => [
+          codeSpan(r.scenario),
+          codeSpan(r.rail),
+          formatQuantity(r.current, 'A'),
+          r.pins.map(codeSpan).join(', '),
+        ]),
         ['l', 'l', 'r', 'l'],
       ),
     );
@@ -142,7 +163,13 @@ export function renderMarkdown(report: Report, options: { readonly verdict?: Ver
 
   out.push('## Profiles used', '');
   if (report.profiles.length === 0) out.push('None.');
-  else out.push(...table(['Profile', 'Label', 'Source'], report.profiles.map((p) => [codeSpan(p.id), escapeMarkdown(p.label), escapeMarkdown(p.source)])));
+  else
+    out.push(
+      ...table(
+        ['Profile', 'Label', 'Source'],
+        report.profiles.map((p) => [codeSpan(p.id), escapeMarkdown(p.label), escapeMarkdown(p.source)]),
+      ),
+    );
   out.push('');
 
   out.push('## Cautions', '');

@@ -27,10 +27,17 @@ export interface TextOptions {
 const MAX_COLUMN = 40;
 
 /** Left-aligned columns, two spaces apart; numeric columns right-aligned. */
-function table(head: readonly string[], rows: readonly (readonly string[])[], right: ReadonlySet<number> = new Set()): string[] {
+function table(
+  head: readonly string[],
+  rows: readonly (readonly string[])[],
+  right: ReadonlySet<number> = new Set(),
+): string[] {
   // A loop, not `Math.max(...rows)`: spreading thousands of rows overflows the stack.
   const width = head.map((h) => h.length);
-  for (const r of rows) head.forEach((_, k) => { width[k] = Math.min(MAX_COLUMN, Math.max(width[k]!, (r[k] ?? '').length)); });
+  for (const r of rows)
+    head.forEach((_, k) => {
+      width[k] = Math.min(MAX_COLUMN, Math.max(width[k]!, (r[k] ?? '').length));
+    });
   const line = (cells: readonly string[]) =>
     cells
       .map((c, k) => (right.has(k) ? c.padStart(width[k]!) : c.padEnd(width[k]!)))
@@ -115,7 +122,13 @@ export function renderText(report: Report, options: TextOptions = {}): string {
   out.push(`Power states: ${report.scenarios.map(stateText).join(', ')}`);
   out.push('');
   const s = report.summary;
-  out.push(...table(['errors', 'warnings', 'info', 'waived'], [[s.error, s.warning, s.info, s.waived].map(String)], new Set([0, 1, 2, 3])));
+  out.push(
+    ...table(
+      ['errors', 'warnings', 'info', 'waived'],
+      [[s.error, s.warning, s.info, s.waived].map(String)],
+      new Set([0, 1, 2, 3]),
+    ),
+  );
   out.push('');
   out.push((options.verdict ?? verdict(report)).line);
 
@@ -127,7 +140,15 @@ export function renderText(report: Report, options: TextOptions = {}): string {
     out.push(
       ...table(
         ['net', 'label', 'rails', 'state', 'worst NMH', 'worst NML', 'worst'],
-        report.crossings.map((c) => [c.net, c.label, c.rails.join(', '), c.scenario, marginText(c.marginHigh), marginText(c.marginLow), c.worst]),
+        report.crossings.map((c) => [
+          c.net,
+          c.label,
+          c.rails.join(', '),
+          c.scenario,
+          marginText(c.marginHigh),
+          marginText(c.marginLow),
+          c.worst,
+        ]),
         new Set([4, 5]),
       ),
     );

@@ -34,15 +34,19 @@ function logicalLocations(f: ReportFinding): { name: string; fullyQualifiedName:
   const out = [];
   if (f.net !== null) out.push({ name: f.net, fullyQualifiedName: `net:${f.net}`, kind: 'net' });
   for (const pin of f.pins) out.push({ name: pin, fullyQualifiedName: `pin:${pin}`, kind: 'pin' });
-  const rail = f.values['rail'];
+  const rail = f.values.rail;
   if (typeof rail === 'string') out.push({ name: rail, fullyQualifiedName: `rail:${rail}`, kind: 'rail' });
-  if (out.length === 0) for (const part of f.parts) out.push({ name: part, fullyQualifiedName: `part:${part}`, kind: 'part' });
+  if (out.length === 0)
+    for (const part of f.parts) out.push({ name: part, fullyQualifiedName: `part:${part}`, kind: 'part' });
   return out;
 }
 
 /** A rule's name as SARIF wants it, an identifier without spaces: `level-high` → `LevelHigh`. */
 export function ruleName(id: string): string {
-  return id.split('-').map((w) => w.charAt(0).toUpperCase() + w.slice(1)).join('');
+  return id
+    .split('-')
+    .map((w) => w.charAt(0).toUpperCase() + w.slice(1))
+    .join('');
 }
 
 /** The report as a SARIF log object (serialize it with JSON.stringify). */
@@ -68,7 +72,9 @@ export function toSarif(report: Report, options: SarifOptions): Record<string, u
       },
     ],
     partialFingerprints: { 'railcrossFindingId/v1': f.id },
-    ...(f.waived === undefined ? {} : { suppressions: [{ kind: 'inSource', status: 'accepted', justification: f.waived }] }),
+    ...(f.waived === undefined
+      ? {}
+      : { suppressions: [{ kind: 'inSource', status: 'accepted', justification: f.waived }] }),
     ...(options.baseline === undefined ? {} : { baselineState: inBaseline(f, options.baseline) ? 'unchanged' : 'new' }),
     properties: { findingId: f.id, scenario: f.scenario, hint: f.hint, values: f.values, pins: f.pins, parts: f.parts },
   }));
@@ -81,7 +87,12 @@ export function toSarif(report: Report, options: SarifOptions): Record<string, u
         invocations: [{ executionSuccessful: true, endTimeUtc: report.generatedAt }],
         artifacts: [{ location: { uri: fileUri(options.file) }, mimeType: 'application/json' }],
         results,
-        properties: { design: report.design, settings: report.settings, summary: report.summary, scenarios: report.scenarios },
+        properties: {
+          design: report.design,
+          settings: report.settings,
+          summary: report.summary,
+          scenarios: report.scenarios,
+        },
       },
     ],
   };

@@ -26,12 +26,20 @@ export function verdict(report: Report): Verdict {
       ...(error > 0 ? [plural(error, 'error')] : []),
       ...(failOn === 'warning' && warning > 0 ? [plural(warning, 'warning')] : []),
     ];
-    return { fails: true, count, line: `FAIL: unwaived findings at the fail-on level (${failOn}): ${parts.join(' and ')}.` };
+    return {
+      fails: true,
+      count,
+      line: `FAIL: unwaived findings at the fail-on level (${failOn}): ${parts.join(' and ')}.`,
+    };
   }
   const rest = [
     ...(failOn === 'error' && warning > 0 ? [plural(warning, 'warning')] : []),
     plural(info, 'info finding'),
     `${waived} waived`,
   ];
-  return { fails: false, count: 0, line: `PASS: no unwaived finding at the fail-on level (${failOn}); ${rest.join(', ')}.` };
+  return {
+    fails: false,
+    count: 0,
+    line: `PASS: no unwaived finding at the fail-on level (${failOn}); ${rest.join(', ')}.`,
+  };
 }

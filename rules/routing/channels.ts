@@ -11,7 +11,12 @@ import type { Point, Side } from './types.ts';
 /** How far a wire leaves its pin straight out before it turns. */
 export const STUB = 14;
 
-const OUT: Readonly<Record<Side, Point>> = { left: { x: -1, y: 0 }, right: { x: 1, y: 0 }, top: { x: 0, y: -1 }, bottom: { x: 0, y: 1 } };
+const OUT: Readonly<Record<Side, Point>> = {
+  left: { x: -1, y: 0 },
+  right: { x: 1, y: 0 },
+  top: { x: 0, y: -1 },
+  bottom: { x: 0, y: 1 },
+};
 
 /** The outward direction of a side. */
 export const normalOf = (side: Side): Point => OUT[side];
@@ -73,7 +78,13 @@ export class BoxIndex {
 
   constructor(boxes: Iterable<BodyRect>) {
     for (const b of boxes) {
-      const r: Rect = { x0: b.x - CLEARANCE, y0: b.y - CLEARANCE, x1: b.x + b.width + CLEARANCE, y1: b.y + b.height + CLEARANCE, seen: 0 };
+      const r: Rect = {
+        x0: b.x - CLEARANCE,
+        y0: b.y - CLEARANCE,
+        x1: b.x + b.width + CLEARANCE,
+        y1: b.y + b.height + CLEARANCE,
+        seen: 0,
+      };
       const i1 = cellOf(r.x1);
       const j1 = cellOf(r.y1);
       for (let i = cellOf(r.x0); i <= i1; i++) {
@@ -107,7 +118,8 @@ export class BoxIndex {
       }
     };
     if ((i1 - i0 + 1) * (j1 - j0 + 1) > this.cells.size) {
-      for (const cell of this.cells.values()) if (cell.i >= i0 && cell.i <= i1 && cell.j >= j0 && cell.j <= j1) take(cell);
+      for (const cell of this.cells.values())
+        if (cell.i >= i0 && cell.i <= i1 && cell.j >= j0 && cell.j <= j1) take(cell);
       return;
     }
     for (let i = i0; i <= i1; i++) {
@@ -139,7 +151,8 @@ function crossings(points: readonly Point[], index: BoxIndex): number {
 
 function pathLength(points: readonly Point[]): number {
   let sum = 0;
-  for (let k = 1; k < points.length; k++) sum += Math.abs(points[k]!.x - points[k - 1]!.x) + Math.abs(points[k]!.y - points[k - 1]!.y);
+  for (let k = 1; k < points.length; k++)
+    sum += Math.abs(points[k]!.x - points[k - 1]!.x) + Math.abs(points[k]!.y - points[k - 1]!.y);
   return sum;
 }
 
@@ -187,10 +200,17 @@ export function routeWire(a: PinAt, b: PinAt, index?: BoxIndex): Route {
   const yEdges: number[] = [];
   if (index !== undefined) {
     const m = 4 * CHANNEL + STUB;
-    index.each(index.begin(), Math.min(p.x, q.x) - m, Math.min(p.y, q.y) - m, Math.max(p.x, q.x) + m, Math.max(p.y, q.y) + m, (r) => {
-      xEdges.push(r.x0 - CHANNEL + CLEARANCE, r.x1 + CHANNEL - CLEARANCE);
-      yEdges.push(r.y0 - CHANNEL + CLEARANCE, r.y1 + CHANNEL - CLEARANCE);
-    });
+    index.each(
+      index.begin(),
+      Math.min(p.x, q.x) - m,
+      Math.min(p.y, q.y) - m,
+      Math.max(p.x, q.x) + m,
+      Math.max(p.y, q.y) + m,
+      (r) => {
+        xEdges.push(r.x0 - CHANNEL + CLEARANCE, r.x1 + CHANNEL - CLEARANCE);
+        yEdges.push(r.y0 - CHANNEL + CLEARANCE, r.y1 + CHANNEL - CLEARANCE);
+      },
+    );
   }
   const candidates: ['x' | 'y', number][] = [
     ...channels(mid.x, [p.x, q.x], xEdges, 12).map((v): ['x', number] => ['x', v]),
@@ -263,4 +283,3 @@ export function spreadChannels(routes: readonly { route: Route; net: string }[])
   }
   return offsets;
 }
-

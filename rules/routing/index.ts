@@ -1,6 +1,36 @@
 export * from './types.ts';
-export { BoxIndex, CHANNEL, CLEARANCE, normalOf, routePoints, routeWire, spreadChannels, STUB, type BodyRect, type PinAt } from './channels.ts';
+export {
+  BoxIndex,
+  CHANNEL,
+  CLEARANCE,
+  normalOf,
+  routePoints,
+  routeWire,
+  spreadChannels,
+  STUB,
+  type BodyRect,
+  type PinAt,
+} from './channels.ts';
 export { WireRouter, routeOnce, type RouteUpdate } from './wireRouter.ts';
-export { markRoutes, crossIndex, hopsOf, junctionsOf, svgPath, hopPolyline, HOP, MAX_HOPS, type CrossIndex, type Hop, type Marks } from './marks.ts';
-export { sharedTracks, bodyCrossings, pathPoints, type DrawnWire, type SharedTrack, type BodyCrossing } from './measure.ts';
+export {
+  markRoutes,
+  crossIndex,
+  hopsOf,
+  junctionsOf,
+  svgPath,
+  hopPolyline,
+  HOP,
+  MAX_HOPS,
+  type CrossIndex,
+  type Hop,
+  type Marks,
+} from './marks.ts';
+export {
+  sharedTracks,
+  bodyCrossings,
+  pathPoints,
+  type DrawnWire,
+  type SharedTrack,
+  type BodyCrossing,
+} from './measure.ts';
 export { nudge, tidy, SPACING } from './nudge.ts';

@@ -86,8 +86,10 @@ function runsOf(r: Route, horizontal: boolean, out: Run[]): void {
   for (let k = 1; k < r.points.length; k++) {
     const a = r.points[k - 1]!;
     const b = r.points[k]!;
-    if (horizontal && a.y === b.y && a.x !== b.x) out.push({ wire: r.id, net: r.net, segment: k - 1, at: a.y, lo: Math.min(a.x, b.x), hi: Math.max(a.x, b.x) });
-    else if (!horizontal && a.x === b.x && a.y !== b.y) out.push({ wire: r.id, net: r.net, segment: k - 1, at: a.x, lo: Math.min(a.y, b.y), hi: Math.max(a.y, b.y) });
+    if (horizontal && a.y === b.y && a.x !== b.x)
+      out.push({ wire: r.id, net: r.net, segment: k - 1, at: a.y, lo: Math.min(a.x, b.x), hi: Math.max(a.x, b.x) });
+    else if (!horizontal && a.x === b.x && a.y !== b.y)
+      out.push({ wire: r.id, net: r.net, segment: k - 1, at: a.x, lo: Math.min(a.y, b.y), hi: Math.max(a.y, b.y) });
   }
 }
 
@@ -137,7 +139,8 @@ export function junctionsOf(routes: Iterable<Route>): { net: string; at: Point }
     else list.push(r);
   }
   const junctions: { net: string; at: Point }[] = [];
-  for (const [net, list] of byNet) if (list.length > 1) for (const at of netJunctions(list)) junctions.push({ net, at });
+  for (const [net, list] of byNet)
+    if (list.length > 1) for (const at of netJunctions(list)) junctions.push({ net, at });
   return junctions;
 }
 
@@ -159,7 +162,10 @@ export function markRoutes(routes: Iterable<Route>): Marks {
  */
 function segmentHops(a: Point, b: Point, hops: readonly Hop[], segment: number): number[] {
   const dir = Math.sign(b.x - a.x);
-  const xs = hops.filter((h) => h.segment === segment).map((h) => h.x).sort((u, v) => dir * (u - v));
+  const xs = hops
+    .filter((h) => h.segment === segment)
+    .map((h) => h.x)
+    .sort((u, v) => dir * (u - v));
   const out: number[] = [];
   for (const x of xs) if (out.length === 0 || Math.abs(x - out[out.length - 1]!) > 2 * HOP + 1) out.push(x);
   return out;

@@ -32,8 +32,10 @@ function segments(wires: readonly DrawnWire[]): Seg[] {
     for (let k = 1; k < w.points.length; k++) {
       const a = w.points[k - 1]!;
       const b = w.points[k]!;
-      if (a.y === b.y && a.x !== b.x) out.push({ net: w.net, horizontal: true, at: a.y, lo: Math.min(a.x, b.x), hi: Math.max(a.x, b.x) });
-      else if (a.x === b.x && a.y !== b.y) out.push({ net: w.net, horizontal: false, at: a.x, lo: Math.min(a.y, b.y), hi: Math.max(a.y, b.y) });
+      if (a.y === b.y && a.x !== b.x)
+        out.push({ net: w.net, horizontal: true, at: a.y, lo: Math.min(a.x, b.x), hi: Math.max(a.x, b.x) });
+      else if (a.x === b.x && a.y !== b.y)
+        out.push({ net: w.net, horizontal: false, at: a.x, lo: Math.min(a.y, b.y), hi: Math.max(a.y, b.y) });
     }
   }
   return out;
@@ -87,10 +89,19 @@ export function bodyCrossings(wires: readonly DrawnWire[], rects: readonly Rect[
   const out: BodyCrossing[] = [];
   for (const s of segments(wires)) {
     for (const r of rects) {
-      const [x0, x1, y0, y1] = [r.x + tolerance, r.x + r.width - tolerance, r.y + tolerance, r.y + r.height - tolerance];
+      const [x0, x1, y0, y1] = [
+        r.x + tolerance,
+        r.x + r.width - tolerance,
+        r.y + tolerance,
+        r.y + r.height - tolerance,
+      ];
       const length = s.horizontal
-        ? s.at > y0 && s.at < y1 ? Math.min(s.hi, x1) - Math.max(s.lo, x0) : 0
-        : s.at > x0 && s.at < x1 ? Math.min(s.hi, y1) - Math.max(s.lo, y0) : 0;
+        ? s.at > y0 && s.at < y1
+          ? Math.min(s.hi, x1) - Math.max(s.lo, x0)
+          : 0
+        : s.at > x0 && s.at < x1
+          ? Math.min(s.hi, y1) - Math.max(s.lo, y0)
+          : 0;
       if (length > 0) out.push({ net: s.net, part: r.id, length });
     }
   }
@@ -111,12 +122,27 @@ export function pathPoints(d: string): Point[] {
   while ((m = re.exec(d)) !== null) {
     const nums = (m[2]!.match(/-?\d*\.?\d+(?:e[-+]?\d+)?/gi) ?? []).map(Number);
     switch (m[1]) {
-      case 'H': x = nums[0]!; break;
-      case 'V': y = nums[0]!; break;
-      case 'A': x = nums[5]!; y = nums[6]!; break;
-      case 'Q': x = nums[2]!; y = nums[3]!; break;
-      case 'C': x = nums[4]!; y = nums[5]!; break;
-      default: x = nums[0]!; y = nums[1]!;
+      case 'H':
+        x = nums[0]!;
+        break;
+      case 'V':
+        y = nums[0]!;
+        break;
+      case 'A':
+        x = nums[5]!;
+        y = nums[6]!;
+        break;
+      case 'Q':
+        x = nums[2]!;
+        y = nums[3]!;
+        break;
+      case 'C':
+        x = nums[4]!;
+        y = nums[5]!;
+        break;
+      default:
+        x = nums[0]!;
+        y = nums[1]!;
     }
     out.push({ x, y });
   }

@@ -45,7 +45,15 @@ function withJoints(points: readonly Point[]): Point[] {
   };
   const s = stubEnd(points[0]!, points[1]!);
   const t = stubEnd(points[n - 1]!, points[n - 2]!);
-  return [{ ...points[0]! }, s, { ...s }, ...points.slice(1, n - 1).map((p) => ({ ...p })), { ...t }, t, { ...points[n - 1]! }];
+  return [
+    { ...points[0]! },
+    s,
+    { ...s },
+    ...points.slice(1, n - 1).map((p) => ({ ...p })),
+    { ...t },
+    t,
+    { ...points[n - 1]! },
+  ];
 }
 
 /** Drops repeated points and the middle of three in a line. */
@@ -55,7 +63,11 @@ export function tidy(points: readonly Point[]): Point[] {
     const last = out[out.length - 1];
     if (last !== undefined && last.x === p.x && last.y === p.y) continue;
     const before = out[out.length - 2];
-    if (before !== undefined && last !== undefined && ((before.x === last.x && last.x === p.x) || (before.y === last.y && last.y === p.y))) {
+    if (
+      before !== undefined &&
+      last !== undefined &&
+      ((before.x === last.x && last.x === p.x) || (before.y === last.y && last.y === p.y))
+    ) {
       // Keep a point where the line doubles back on itself (it is a corner of a U of zero width).
       const back = (last.x - before.x) * (p.x - last.x) + (last.y - before.y) * (p.y - last.y) < 0;
       if (!back) out.pop();
@@ -79,7 +91,14 @@ function hitsBody(index: BoxIndex, a: Point, b: Point): boolean {
 }
 
 /** One pass over the runs of one direction. Returns how many runs moved. */
-function pass(wires: Point[][], nets: readonly string[], horizontal: boolean, index: BoxIndex, spacing: number, jogs: boolean): number {
+function pass(
+  wires: Point[][],
+  nets: readonly string[],
+  horizontal: boolean,
+  index: BoxIndex,
+  spacing: number,
+  jogs: boolean,
+): number {
   const segs: Seg[] = [];
   wires.forEach((pts, w) => {
     const n = pts.length;
@@ -96,7 +115,15 @@ function pass(wires: Point[][], nets: readonly string[], horizontal: boolean, in
         if (at === from) continue;
         limit = at > from ? [from + 2, Infinity] : [-Infinity, from - 2];
       }
-      segs.push({ wire: w, k, net: nets[w]!, at: horizontal ? a.y : a.x, lo: horizontal ? Math.min(a.x, b.x) : Math.min(a.y, b.y), hi: horizontal ? Math.max(a.x, b.x) : Math.max(a.y, b.y), ...(limit === undefined ? {} : { limit }) });
+      segs.push({
+        wire: w,
+        k,
+        net: nets[w]!,
+        at: horizontal ? a.y : a.x,
+        lo: horizontal ? Math.min(a.x, b.x) : Math.min(a.y, b.y),
+        hi: horizontal ? Math.max(a.x, b.x) : Math.max(a.y, b.y),
+        ...(limit === undefined ? {} : { limit }),
+      });
     }
   });
   segs.sort((u, v) => u.at - v.at || u.lo - v.lo);
@@ -110,7 +137,9 @@ function pass(wires: Point[][], nets: readonly string[], horizontal: boolean, in
     i = j;
     if (cluster.length < 2) continue;
     // Does anything in it clash: two nets side by side along the line?
-    const clash = cluster.some((s, a) => cluster.some((t, b) => b > a && t.net !== s.net && Math.min(s.hi, t.hi) - Math.max(s.lo, t.lo) > -spacing));
+    const clash = cluster.some((s, a) =>
+      cluster.some((t, b) => b > a && t.net !== s.net && Math.min(s.hi, t.hi) - Math.max(s.lo, t.lo) > -spacing),
+    );
     if (!clash) continue;
     // Tracks by first come along the line; a run joins a track of its own net or one it does not meet.
     const byLo = [...cluster].sort((u, v) => u.lo - v.lo || u.at - v.at);
@@ -129,7 +158,9 @@ function pass(wires: Point[][], nets: readonly string[], horizontal: boolean, in
     const n = tracks.length;
     if (n < 2) continue;
     // Tracks keep the order of the runs' old lines, so that wires cross each other no more than before.
-    const order = tracks.map((_, t) => t).sort((u, v) => tracks[u]!.sum / tracks[u]!.count - tracks[v]!.sum / tracks[v]!.count);
+    const order = tracks
+      .map((_, t) => t)
+      .sort((u, v) => tracks[u]!.sum / tracks[u]!.count - tracks[v]!.sum / tracks[v]!.count);
     const rank = new Map(order.map((t, r) => [t, r]));
     const centre = cluster.reduce((sum, s) => sum + s.at, 0) / cluster.length;
     // Centred on the old lines, else slid along: the first that enters no body (the run itself
@@ -148,7 +179,12 @@ function pass(wires: Point[][], nets: readonly string[], horizontal: boolean, in
         const pts = wires[s.wire]!;
         const a = put(pts[s.k]!, at);
         const b = put(pts[s.k + 1]!, at);
-        if (bad || hitsBody(index, a, b) || (s.k > 0 && hitsBody(index, pts[s.k - 1]!, a)) || (s.k + 2 < pts.length && hitsBody(index, b, pts[s.k + 2]!))) {
+        if (
+          bad ||
+          hitsBody(index, a, b) ||
+          (s.k > 0 && hitsBody(index, pts[s.k - 1]!, a)) ||
+          (s.k + 2 < pts.length && hitsBody(index, b, pts[s.k + 2]!))
+        ) {
           bad = true;
           break;
         }

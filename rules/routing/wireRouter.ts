@@ -72,8 +72,10 @@ export class WireRouter {
         index ??= new BoxIndex(boxes);
         const route = routeWire(a, b, index);
         const region = [
-          Math.min(route.p.x, route.q.x) - REACH, Math.min(route.p.y, route.q.y) - REACH,
-          Math.max(route.p.x, route.q.x) + REACH, Math.max(route.p.y, route.q.y) + REACH,
+          Math.min(route.p.x, route.q.x) - REACH,
+          Math.min(route.p.y, route.q.y) - REACH,
+          Math.max(route.p.x, route.q.x) + REACH,
+          Math.max(route.p.y, route.q.y) + REACH,
         ] as const;
         entry = { key, route, region };
         rerouted++;
@@ -83,7 +85,10 @@ export class WireRouter {
     }
     this.entries = entries;
 
-    const nudged = nudge(list.map(({ route, net }) => ({ net, points: routePoints(route) })), boxes);
+    const nudged = nudge(
+      list.map(({ route, net }) => ({ net, points: routePoints(route) })),
+      boxes,
+    );
     const routes = new Map<string, Route>();
     const changed = new Set<string>();
     list.forEach(({ spec }, k) => {

@@ -10,7 +10,15 @@ import { bench, harness } from './harness.ts';
 // D drives H and T on net A (route D–H, H–T); H drives T on net B; S is left out of the copy.
 const start = bench({
   nets: [
-    net('A', ['D.Y1', 'H.A', 'T.A'], { route: [['D.Y1', 'H.A'], ['H.A', 'T.A']], label: 'VALVE_EN', pull: { to: '5v0', ohms: 10e3 }, waivers: [{ rule: 'level-high', note: 'seen' }] }),
+    net('A', ['D.Y1', 'H.A', 'T.A'], {
+      route: [
+        ['D.Y1', 'H.A'],
+        ['H.A', 'T.A'],
+      ],
+      label: 'VALVE_EN',
+      pull: { to: '5v0', ohms: 10e3 },
+      waivers: [{ rule: 'level-high', note: 'seen' }],
+    }),
     net('B', ['H.Y', 'T.B']),
     net('C', ['D.Y2', 'S.SDA']),
   ],
@@ -31,7 +39,10 @@ describe('copy and paste', () => {
   it('pastes with fresh designators and net ids, moved by the offset, in one undo step', () => {
     const h = harness(start);
     const planned = planPaste(h.design, copyParts(h.design, ['H', 'T'])!, { x: 40, y: 40 });
-    expect(planned.parts.map((p) => [p.id, p.position])).toEqual([['H1', { x: 340, y: 140 }], ['T1', { x: 640, y: 140 }]]);
+    expect(planned.parts.map((p) => [p.id, p.position])).toEqual([
+      ['H1', { x: 340, y: 140 }],
+      ['T1', { x: 640, y: 140 }],
+    ]);
     expect(planned.nets.map((n) => [n.id, n.pins, n.route])).toEqual([
       ['N1', ['H1.A', 'T1.A'], [['H1.A', 'T1.A']]],
       ['N2', ['H1.Y', 'T1.B'], undefined],
@@ -58,7 +69,7 @@ describe('copy and paste', () => {
     expect(h.design.nets.map((n) => n.id)).toEqual(['A', 'B', 'C', 'N1', 'N2', 'N3', 'N4']);
   });
 
-  it('a paste into a design without the clip\'s rail is refused whole', () => {
+  it("a paste into a design without the clip's rail is refused whole", () => {
     const clip = copyParts(start, ['H', 'T'])!;
     // A design with no rails: nothing the clip names is there.
     const h = harness({ ...newDesign('Empty'), rails: [] });
@@ -68,7 +79,13 @@ describe('copy and paste', () => {
     expect(h.design.parts).toHaveLength(0);
   });
 
-  const prefixes: [string, string][] = [['U12', 'U'], ['J3', 'J'], ['VALVE', 'VALVE'], ['42', 'U'], ['R2C', 'R2C']];
+  const prefixes: [string, string][] = [
+    ['U12', 'U'],
+    ['J3', 'J'],
+    ['VALVE', 'VALVE'],
+    ['42', 'U'],
+    ['R2C', 'R2C'],
+  ];
   it.each(prefixes)('the designator letters of %s are %s', (id, prefix) => {
     expect(designatorPrefix(id)).toBe(prefix);
   });
@@ -79,10 +96,16 @@ describe('nudging with the arrow keys', () => {
     const h = harness(start);
     h.apply(nudgeParts(['H', 'T'], 10, 0));
     h.apply(nudgeParts(['H', 'T'], 0, -40));
-    expect(h.design.parts.slice(1, 3).map((p) => p.position)).toEqual([{ x: 310, y: 60 }, { x: 610, y: 60 }]);
+    expect(h.design.parts.slice(1, 3).map((p) => p.position)).toEqual([
+      { x: 310, y: 60 },
+      { x: 610, y: 60 },
+    ]);
     expect(h.store.getState().past.map((s) => s.name)).toEqual(['Nudge 2 parts', 'Nudge 2 parts']);
     h.undo();
-    expect(h.design.parts.slice(1, 3).map((p) => p.position)).toEqual([{ x: 310, y: 100 }, { x: 610, y: 100 }]);
+    expect(h.design.parts.slice(1, 3).map((p) => p.position)).toEqual([
+      { x: 310, y: 100 },
+      { x: 610, y: 100 },
+    ]);
     h.undo();
     expect(h.design).toEqual(start);
   });

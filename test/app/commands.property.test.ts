@@ -9,9 +9,33 @@ import fc from 'fast-check';
 import { afterAll, describe, expect, it } from 'vitest';
 import { exampleDesign } from '../../app/example.ts';
 import {
-  addPowerState, addProfile, addRail, addWaiver, connectPins, deletePowerState, deleteProfile, deleteRail, deleteSelection,
-  disconnectWire, moveParts, netWires, renamePart, setNetPull, setPartProfile, setPartRail, setProfileParam, setRailOff,
-  setRailTolerance, setRailVoltage, setResetState, tidyLayout, addDiscrete, newDiscrete, setDiscrete, removeDiscrete, type Command,
+  addPowerState,
+  addProfile,
+  addRail,
+  addWaiver,
+  connectPins,
+  deletePowerState,
+  deleteProfile,
+  deleteRail,
+  deleteSelection,
+  disconnectWire,
+  moveParts,
+  netWires,
+  renamePart,
+  setNetPull,
+  setPartProfile,
+  setPartRail,
+  setProfileParam,
+  setRailOff,
+  setRailTolerance,
+  setRailVoltage,
+  setResetState,
+  tidyLayout,
+  addDiscrete,
+  newDiscrete,
+  setDiscrete,
+  removeDiscrete,
+  type Command,
 } from '../../app/store/commands/index.ts';
 import { applyFix, fixesFor } from '../../app/store/commands/fixes/index.ts';
 import { check } from '../../rules/check/check.ts';
@@ -24,7 +48,8 @@ import { harness, type Harness } from './harness.ts';
 const FAMILIES = ['ttl', '74hc', '74hct', '74lvc', 'lvcmos33', 'lvcmos18', 'cmos4000', 'i2c-lv'];
 
 /** Picks the `n`-th (modulo) of a list, or undefined from an empty one. */
-const nth = <T>(list: readonly T[], n: number): T | undefined => (list.length === 0 ? undefined : list[n % list.length]);
+const nth = <T>(list: readonly T[], n: number): T | undefined =>
+  list.length === 0 ? undefined : list[n % list.length];
 const DISCRETE_PIN_IDS = { resistor: ['1', '2'], 'fet-shifter': ['S', 'D'], 'diode-shifter': ['K', 'A'] } as const;
 const pinsOf = (d: Design) => [
   ...d.parts.flatMap((p) => p.pins.map((pin) => `${p.id}.${pin.id}`)),
@@ -36,58 +61,209 @@ type Step = (h: Harness, n: number, m: number) => Command | 'undo' | 'redo' | un
 
 /** One maker per kind of edit: each reads the design as it is now and picks its targets with n and m. */
 const STEPS: readonly [string, Step][] = [
-  ['connect', (h, n, m) => { const pins = pinsOf(h.design); const a = nth(pins, n); const b = nth(pins, m); return a && b ? connectPins(a, b) : undefined; }],
-  ['disconnect', (h, n, m) => { const net = nth(h.design.nets, n); const wire = net && nth(netWires(net), m); return wire ? disconnectWire(wire[0], wire[1]) : undefined; }],
-  ['delete part', (h, n) => { const p = nth(h.design.parts, n); return p ? deleteSelection({ parts: [p.id], wires: [] }) : undefined; }],
-  ['delete wire', (h, n, m) => { const net = nth(h.design.nets, n); const wire = net && nth(netWires(net), m); return wire ? deleteSelection({ parts: [], wires: [wire] }) : undefined; }],
-  ['family', (h, n, m) => { const p = nth(h.design.parts, n); return p ? setPartProfile(p.id, FAMILIES[m % FAMILIES.length]!) : undefined; }],
-  ['part rail', (h, n, m) => { const p = nth(h.design.parts, n); const r = nth(h.design.rails, m); return p && r ? setPartRail(p.id, r.id) : undefined; }],
+  [
+    'connect',
+    (h, n, m) => {
+      const pins = pinsOf(h.design);
+      const a = nth(pins, n);
+      const b = nth(pins, m);
+      return a && b ? connectPins(a, b) : undefined;
+    },
+  ],
+  [
+    'disconnect',
+    (h, n, m) => {
+      const net = nth(h.design.nets, n);
+      const wire = net && nth(netWires(net), m);
+      return wire ? disconnectWire(wire[0], wire[1]) : undefined;
+    },
+  ],
+  [
+    'delete part',
+    (h, n) => {
+      const p = nth(h.design.parts, n);
+      return p ? deleteSelection({ parts: [p.id], wires: [] }) : undefined;
+    },
+  ],
+  [
+    'delete wire',
+    (h, n, m) => {
+      const net = nth(h.design.nets, n);
+      const wire = net && nth(netWires(net), m);
+      return wire ? deleteSelection({ parts: [], wires: [wire] }) : undefined;
+    },
+  ],
+  [
+    'family',
+    (h, n, m) => {
+      const p = nth(h.design.parts, n);
+      return p ? setPartProfile(p.id, FAMILIES[m % FAMILIES.length]!) : undefined;
+    },
+  ],
+  [
+    'part rail',
+    (h, n, m) => {
+      const p = nth(h.design.parts, n);
+      const r = nth(h.design.rails, m);
+      return p && r ? setPartRail(p.id, r.id) : undefined;
+    },
+  ],
   ['tidy layout', () => tidyLayout()],
-  ['move', (h, n, m) => { const p = nth(h.design.parts, n); return p ? moveParts([{ id: p.id, x: (m % 50) * 20, y: (n % 30) * 20 }]) : undefined; }],
-  ['rail voltage', (h, n, m) => { const r = nth(h.design.rails, n); return r ? setRailVoltage(r.id, [1.2, 1.8, 2.5, 3.3, 5][m % 5]!) : undefined; }],
-  ['rail tolerance', (h, n, m) => { const r = nth(h.design.rails, n); return r ? setRailTolerance(r.id, (m % 11) / 100) : undefined; }],
+  [
+    'move',
+    (h, n, m) => {
+      const p = nth(h.design.parts, n);
+      return p ? moveParts([{ id: p.id, x: (m % 50) * 20, y: (n % 30) * 20 }]) : undefined;
+    },
+  ],
+  [
+    'rail voltage',
+    (h, n, m) => {
+      const r = nth(h.design.rails, n);
+      return r ? setRailVoltage(r.id, [1.2, 1.8, 2.5, 3.3, 5][m % 5]!) : undefined;
+    },
+  ],
+  [
+    'rail tolerance',
+    (h, n, m) => {
+      const r = nth(h.design.rails, n);
+      return r ? setRailTolerance(r.id, (m % 11) / 100) : undefined;
+    },
+  ],
   ['add rail', () => addRail()],
-  ['delete rail', (h, n) => {
-    // Mostly a rail nothing uses (a used one is refused): the kind then changes designs too.
-    const used = new Set(h.design.parts.flatMap((p) => [p.rail, ...p.pins.map((pin) => pin.rail)]));
-    const unused = h.design.rails.filter((r) => !used.has(r.id));
-    const r = n % 4 === 0 ? nth(h.design.rails, n) : (nth(unused, n) ?? nth(h.design.rails, n));
-    return r ? deleteRail(r.id) : undefined;
-  }],
+  [
+    'delete rail',
+    (h, n) => {
+      // Mostly a rail nothing uses (a used one is refused): the kind then changes designs too.
+      const used = new Set(h.design.parts.flatMap((p) => [p.rail, ...p.pins.map((pin) => pin.rail)]));
+      const unused = h.design.rails.filter((r) => !used.has(r.id));
+      const r = n % 4 === 0 ? nth(h.design.rails, n) : (nth(unused, n) ?? nth(h.design.rails, n));
+      return r ? deleteRail(r.id) : undefined;
+    },
+  ],
   ['add power state', () => addPowerState()],
-  ['rail off', (h, n, m) => { const s = nth(h.design.scenarios ?? [], n); const r = nth(h.design.rails, m); return s && r ? setRailOff(s.id, r.id, m % 3 !== 0) : undefined; }],
-  ['reset state', (h, n) => { const p = nth(h.design.parts, n); return p ? setResetState(p.id) : undefined; }],
-  ['delete power state', (h, n) => { const s = nth(h.design.scenarios ?? [], n); return s ? deletePowerState(s.id) : undefined; }],
-  ['net pull', (h, n, m) => {
-    const net = nth(h.design.nets, n);
-    const to = m % 4 === 0 ? null : { to: m % 4 === 1 ? 'ground' : (nth(h.design.rails, m)?.id ?? 'ground'), ohms: [1e3, 4.7e3, 47e3][m % 3]! };
-    return net ? setNetPull(net.id, to) : undefined;
-  }],
-  ['waiver', (h, n, m) => { const net = nth(h.design.nets, n); return net ? addWaiver({ net: net.id, rule: RULE_IDS[m % RULE_IDS.length]! }, 'reviewed') : undefined; }],
-  ['rename part', (h, n, m) => { const p = nth(h.design.parts, n); return p ? renamePart(p.id, `R${m % 40}`) : undefined; }],
-  ['local profile', (h, n, m) => { const base = FAMILIES[n % FAMILIES.length]!; return addProfile(base, `${base}-own${m % 3}`, 'Our variant', 'from memory'); }],
-  ['profile level', (h, n, m) => { const p = nth(h.design.profiles ?? [], n); return p ? setProfileParam(p.id, 'vih', ['0.7*VDD', '2.0', '0.5*VDD'][m % 3]) : undefined; }],
-  ['delete profile', (h, n) => { const p = nth(h.design.profiles ?? [], n); return p ? deleteProfile(p.id) : undefined; }],
-  ['quick fix', (h, n, m) => {
-    const { result, design } = h.store.getState();
-    const f = nth(result.findings.filter((x) => x.severity !== 'info'), n);
-    const fix = f && nth(fixesFor(f, design, result), m);
-    return fix ? applyFix(fix) : undefined;
-  }],
-  ['add discrete', (h, n, m) => addDiscrete(newDiscrete(h.design, KINDS[n % 3]!, { x: m, y: n }, nth(h.design.rails, m)?.id))],
-  ['discrete value', (h, n, m) => {
-    const d = nth(h.design.discretes ?? [], n);
-    if (d === undefined) return undefined;
-    if (d.kind === 'resistor') {
-      // Sometimes a tie: refused while that end is on a net.
-      return m % 3 === 0 ? setDiscrete(d.id, { tie: { '2': m % 2 === 0 ? 'ground' : (nth(h.design.rails, m)?.id ?? 'ground') } }) : setDiscrete(d.id, { ohms: [1e3, 4.7e3, 47e3][m % 3]!, tolerance: 0.01 });
-    }
-    return d.kind === 'fet-shifter' ? setDiscrete(d.id, { vgsThMax: [0.8, 1.5][m % 2]!, gate: nth(h.design.rails, m)?.id ?? d.gate }) : setDiscrete(d.id, { vfMax: 0.3 });
-  }],
-  ['remove discrete', (h, n) => { const d = nth(h.design.discretes ?? [], n); return d ? removeDiscrete(d.id) : undefined; }],
-  ['move discrete', (h, n, m) => { const d = nth(h.design.discretes ?? [], n); return d ? moveParts([{ id: d.id, x: m, y: n }]) : undefined; }],
+  [
+    'rail off',
+    (h, n, m) => {
+      const s = nth(h.design.scenarios ?? [], n);
+      const r = nth(h.design.rails, m);
+      return s && r ? setRailOff(s.id, r.id, m % 3 !== 0) : undefined;
+    },
+  ],
+  [
+    'reset state',
+    (h, n) => {
+      const p = nth(h.design.parts, n);
+      return p ? setResetState(p.id) : undefined;
+    },
+  ],
+  [
+    'delete power state',
+    (h, n) => {
+      const s = nth(h.design.scenarios ?? [], n);
+      return s ? deletePowerState(s.id) : undefined;
+    },
+  ],
+  [
+    'net pull',
+    (h, n, m) => {
+      const net = nth(h.design.nets, n);
+      const to =
+        m % 4 === 0
+          ? null
+          : { to: m % 4 === 1 ? 'ground' : (nth(h.design.rails, m)?.id ?? 'ground'), ohms: [1e3, 4.7e3, 47e3][m % 3]! };
+      return net ? setNetPull(net.id, to) : undefined;
+    },
+  ],
+  [
+    'waiver',
+    (h, n, m) => {
+      const net = nth(h.design.nets, n);
+      return net ? addWaiver({ net: net.id, rule: RULE_IDS[m % RULE_IDS.length]! }, 'reviewed') : undefined;
+    },
+  ],
+  [
+    'rename part',
+    (h, n, m) => {
+      const p = nth(h.design.parts, n);
+      return p ? renamePart(p.id, `R${m % 40}`) : undefined;
+    },
+  ],
+  [
+    'local profile',
+    (_h, n, m) => {
+      const base = FAMILIES[n % FAMILIES.length]!;
+      return addProfile(base, `${base}-own${m % 3}`, 'Our variant', 'from memory');
+    },
+  ],
+  [
+    'profile level',
+    (h, n, m) => {
+      const p = nth(h.design.profiles ?? [], n);
+      return p ? setProfileParam(p.id, 'vih', ['0.7*VDD', '2.0', '0.5*VDD'][m % 3]) : undefined;
+    },
+  ],
+  [
+    'delete profile',
+    (h, n) => {
+      const p = nth(h.design.profiles ?? [], n);
+      return p ? deleteProfile(p.id) : undefined;
+    },
+  ],
+  [
+    'quick fix',
+    (h, n, m) => {
+      const { result, design } = h.store.getState();
+      const f = nth(
+        result.findings.filter((x) => x.severity !== 'info'),
+        n,
+      );
+      const fix = f && nth(fixesFor(f, design, result), m);
+      return fix ? applyFix(fix) : undefined;
+    },
+  ],
+  [
+    'add discrete',
+    (h, n, m) => addDiscrete(newDiscrete(h.design, KINDS[n % 3]!, { x: m, y: n }, nth(h.design.rails, m)?.id)),
+  ],
+  [
+    'discrete value',
+    (h, n, m) => {
+      const d = nth(h.design.discretes ?? [], n);
+      if (d === undefined) return undefined;
+      if (d.kind === 'resistor') {
+        // Sometimes a tie: refused while that end is on a net.
+        return m % 3 === 0
+          ? setDiscrete(d.id, { tie: { '2': m % 2 === 0 ? 'ground' : (nth(h.design.rails, m)?.id ?? 'ground') } })
+          : setDiscrete(d.id, { ohms: [1e3, 4.7e3, 47e3][m % 3]!, tolerance: 0.01 });
+      }
+      return d.kind === 'fet-shifter'
+        ? setDiscrete(d.id, { vgsThMax: [0.8, 1.5][m % 2]!, gate: nth(h.design.rails, m)?.id ?? d.gate })
+        : setDiscrete(d.id, { vfMax: 0.3 });
+    },
+  ],
+  [
+    'remove discrete',
+    (h, n) => {
+      const d = nth(h.design.discretes ?? [], n);
+      return d ? removeDiscrete(d.id) : undefined;
+    },
+  ],
+  [
+    'move discrete',
+    (h, n, m) => {
+      const d = nth(h.design.discretes ?? [], n);
+      return d ? moveParts([{ id: d.id, x: m, y: n }]) : undefined;
+    },
+  ],
   ['undo', () => 'undo'],
-  ['redo', (h) => { h.undo(); return 'redo'; }],
+  [
+    'redo',
+    (h) => {
+      h.undo();
+      return 'redo';
+    },
+  ],
 ];
 
 const stepArb = fc.tuple(fc.nat(STEPS.length - 1), fc.nat(1000), fc.nat(1000));
@@ -113,7 +289,10 @@ function run(start: Design, steps: readonly [number, number, number][]): void {
     const full = check(structuredClone(design));
     const { result } = h.store.getState();
     expect(result.summary, `summary after ${name}`).toEqual(full.summary);
-    expect(result.findings.map((f) => f.id), `findings after ${name}`).toEqual(full.findings.map((f) => f.id));
+    expect(
+      result.findings.map((f) => f.id),
+      `findings after ${name}`,
+    ).toEqual(full.findings.map((f) => f.id));
   }
   while (h.undo());
   expect(h.design).toEqual(original);
@@ -129,21 +308,27 @@ describe('the commands under random use', () => {
    * `npm run fuzz` may miss a rare one; they are there for the invariants).
    */
   afterAll(() => {
-    if (ran < 2 || process.env['RAILCROSS_FUZZ']) return;
+    if (ran < 2 || process.env.RAILCROSS_FUZZ) return;
     expect(STEPS.map(([name]) => name).filter((name) => (changed.get(name) ?? 0) === 0)).toEqual([]);
   });
 
-  it('on the greenhouse example: always a valid design, always the full check, undone to the start', { timeout: 120_000 }, () => {
-    fc.assert(fc.property(fc.array(stepArb, { minLength: 5, maxLength: 30 }), (steps) => run(exampleDesign(), steps)), { numRuns: 60 });
+  it('on the greenhouse example: always a valid design, always the full check, undone to the start', {
+    timeout: 120_000,
+  }, () => {
+    fc.assert(
+      fc.property(fc.array(stepArb, { minLength: 5, maxLength: 30 }), (steps) => run(exampleDesign(), steps)),
+      { numRuns: 60 },
+    );
     ran++;
   });
 
   it('on a generated board of 40 parts, the same', { timeout: 120_000 }, () => {
     fc.assert(
-      fc.property(fc.nat(10_000), fc.array(stepArb, { minLength: 5, maxLength: 25 }), (seed, steps) => run(generateDesign(seed, { parts: 40 }), steps)),
+      fc.property(fc.nat(10_000), fc.array(stepArb, { minLength: 5, maxLength: 25 }), (seed, steps) =>
+        run(generateDesign(seed, { parts: 40 }), steps),
+      ),
       { numRuns: 30 },
     );
     ran++;
   });
-
 });

@@ -1,7 +1,20 @@
 import { describe, expect, it } from 'vitest';
 import { readFileSync } from 'node:fs';
-import { createFlowDeriver, deriveOnce, MOVING_CHIP, MOVING_LAYERS_MAX, MOVING_WIRE } from '../../app/canvas/deriveFlow.ts';
-import { addWaiver, connectPins, editPart, setNetLabel, setPartLabel, setPartProfile } from '../../app/store/commands/index.ts';
+import {
+  createFlowDeriver,
+  deriveOnce,
+  MOVING_CHIP,
+  MOVING_LAYERS_MAX,
+  MOVING_WIRE,
+} from '../../app/canvas/deriveFlow.ts';
+import {
+  addWaiver,
+  connectPins,
+  editPart,
+  setNetLabel,
+  setPartLabel,
+  setPartProfile,
+} from '../../app/store/commands/index.ts';
 import { chipSize } from '../../app/canvas/chipLayout.ts';
 import type { Pin } from '../../rules/model/schema.ts';
 import { readDesign } from '../../rules/model/reader.ts';
@@ -11,7 +24,7 @@ import { bench, harness } from './harness.ts';
 const text = readFileSync(new URL('../../rules/examples/greenhouse.json', import.meta.url), 'utf8');
 
 describe('nodes and edges from the design', () => {
-  it('one node per part, n−1 wires per net of n pins, the net\'s name on its first wire', () => {
+  it("one node per part, n−1 wires per net of n pins, the net's name on its first wire", () => {
     const read = readDesign(text);
     if (!read.ok) throw new Error('example unreadable');
     const { nodes, edges } = deriveOnce(read.design);
@@ -24,7 +37,16 @@ describe('nodes and edges from the design', () => {
   });
 
   it('a net with a route draws exactly its route', () => {
-    const d = bench({ nets: [net('A', ['D.Y1', 'H.A', 'T.A'], { route: [['D.Y1', 'T.A'], ['D.Y1', 'H.A']] })] });
+    const d = bench({
+      nets: [
+        net('A', ['D.Y1', 'H.A', 'T.A'], {
+          route: [
+            ['D.Y1', 'T.A'],
+            ['D.Y1', 'H.A'],
+          ],
+        }),
+      ],
+    });
     expect(deriveOnce(d).edges.map((e) => e.id)).toEqual(['A:D.Y1:T.A', 'A:D.Y1:H.A']);
   });
 
@@ -82,7 +104,12 @@ describe('nodes and edges from the design', () => {
     // Every later step of the same drag hands over the same array.
     expect(flow.edges(h.design.nets, [], moving)).toBe(e1);
     const n = flow.nodes(h.design.parts, [], new Map([['T', { x: 40, y: 50 }]]));
-    expect(n.map((node) => [node.id, node.className])).toEqual([['D', undefined], ['H', undefined], ['T', MOVING_CHIP], ['S', undefined]]);
+    expect(n.map((node) => [node.id, node.className])).toEqual([
+      ['D', undefined],
+      ['H', undefined],
+      ['T', MOVING_CHIP],
+      ['S', undefined],
+    ]);
     // The drag ends: no marks left.
     const e2 = flow.edges(h.design.nets, [], null);
     expect(e2.map((e) => e.className)).toEqual([undefined, undefined, undefined]);
@@ -90,12 +117,16 @@ describe('nodes and edges from the design', () => {
   });
 
   it(`a drag of more than ${MOVING_LAYERS_MAX} chips marks none (the layers would cost more than they save)`, () => {
-    const many = Array.from({ length: MOVING_LAYERS_MAX + 1 }, (_, k) => part(`P${k}`, '5v0', '74hc', [output('Y')], { position: { x: k * 240, y: 0 } }));
+    const many = Array.from({ length: MOVING_LAYERS_MAX + 1 }, (_, k) =>
+      part(`P${k}`, '5v0', '74hc', [output('Y')], { position: { x: k * 240, y: 0 } }),
+    );
     const d = bench({ parts: many, nets: [net('A', ['P0.Y', 'P1.Y'])] });
     const flow = createFlowDeriver();
     const ids = new Set(many.map((p) => p.id));
     expect(flow.edges(d.nets, [], ids).every((e) => e.className === undefined)).toBe(true);
-    expect(flow.nodes(d.parts, [], new Map(many.map((p) => [p.id, { x: 1, y: 2 }]))).every((n) => n.className === undefined)).toBe(true);
+    expect(
+      flow.nodes(d.parts, [], new Map(many.map((p) => [p.id, { x: 1, y: 2 }]))).every((n) => n.className === undefined),
+    ).toBe(true);
     expect(flow.edges(d.nets, [], new Set(['P0'])).map((e) => e.className)).toEqual([MOVING_WIRE]);
   });
 
@@ -104,7 +135,11 @@ describe('nodes and edges from the design', () => {
     { name: 'one input', pins: [input('A')], height: 44 + 26 + 1 },
     { name: 'two inputs and an output', pins: [input('A'), input('B'), output('Y')], height: 44 + 46 + 1 },
     { name: 'a pin on top only', pins: [input('A', { side: 'top' })], height: 44 + 30 + 1 },
-    { name: 'three rows, a top and a bottom strip', pins: [input('A'), input('B'), input('C'), output('T', { side: 'top' }), output('B2', { side: 'bottom' })], height: 44 + 66 + 60 + 1 },
+    {
+      name: 'three rows, a top and a bottom strip',
+      pins: [input('A'), input('B'), input('C'), output('T', { side: 'top' }), output('B2', { side: 'bottom' })],
+      height: 44 + 66 + 60 + 1,
+    },
   ];
   it.each(sizes)('a chip with $name is $height px tall', ({ pins, height }) => {
     expect(chipSize(part('X', '5v0', '74hc', pins))).toEqual({ width: 208, height });

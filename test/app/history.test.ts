@@ -7,7 +7,12 @@ import { bench, harness } from './harness.ts';
 describe('undo and redo', () => {
   it('a drag of two parts is one step', () => {
     const h = harness();
-    h.apply(moveParts([{ id: 'D', x: 50, y: 60 }, { id: 'H', x: 300, y: 60 }]));
+    h.apply(
+      moveParts([
+        { id: 'D', x: 50, y: 60 },
+        { id: 'H', x: 300, y: 60 },
+      ]),
+    );
     expect(h.store.getState().past.map((s) => s.name)).toEqual(['Move 2 parts']);
     h.undo();
     expect(h.design.parts.map((p) => p.position)).toEqual([undefined, undefined, undefined, undefined]);
@@ -108,10 +113,12 @@ describe('the re-check after each command', () => {
   });
 
   it('the chosen power state picks which findings colour the wires', () => {
-    const h = harness(bench({
-      nets: [net('A', ['D.Y1', 'H.A'])],
-      scenarios: [{ id: 'S1', label: 'Logic off', off: ['3v3'] }],
-    }));
+    const h = harness(
+      bench({
+        nets: [net('A', ['D.Y1', 'H.A'])],
+        scenarios: [{ id: 'S1', label: 'Logic off', off: ['3v3'] }],
+      }),
+    );
     expect(h.store.getState().netStatus.get('A')?.rule).toBe('level-high');
     h.store.getState().setPowerState('S1');
     // With the driver's rail off there is no powered driver, so no level finding on A.

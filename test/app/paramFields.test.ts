@@ -27,8 +27,21 @@ const accepted: { key: ParamKey; text: string; value: unknown; shown: string }[]
   { key: 'unpoweredSafe', text: 'no', value: false, shown: 'no' },
   // JESD8C LVCMOS: VOH ≥ VDD − 0.2 V at 100 µA.
   { key: 'voh', text: 'VDD-0.2 @ 100u', value: [{ v: 'VDD-0.2', i: 100e-6 }], shown: 'VDD-0.2 @ 100 µA' },
-  { key: 'vol', text: '0.2 @ 100µA; 0.4 V @ 4 mA', value: [{ v: 0.2, i: 100e-6 }, { v: 0.4, i: 4e-3 }], shown: '0.2 V @ 100 µA; 0.4 V @ 4 mA' },
-  { key: 'schmitt', text: '0.7*VDD / 0.3*VDD', value: { vtPlus: '0.7*VDD', vtMinus: '0.3*VDD' }, shown: '0.7*VDD / 0.3*VDD' },
+  {
+    key: 'vol',
+    text: '0.2 @ 100µA; 0.4 V @ 4 mA',
+    value: [
+      { v: 0.2, i: 100e-6 },
+      { v: 0.4, i: 4e-3 },
+    ],
+    shown: '0.2 V @ 100 µA; 0.4 V @ 4 mA',
+  },
+  {
+    key: 'schmitt',
+    text: '0.7*VDD / 0.3*VDD',
+    value: { vtPlus: '0.7*VDD', vtMinus: '0.3*VDD' },
+    shown: '0.7*VDD / 0.3*VDD',
+  },
   // JESD8C LVCMOS 3.3 V normal supply range, 3.0 V to 3.6 V.
   { key: 'vddRange', text: '3 … 3.6', value: [3, 3.6], shown: '3 V … 3.6 V' },
   { key: 'vddRange', text: '3V to 3.6V', value: [3, 3.6], shown: '3 V … 3.6 V' },

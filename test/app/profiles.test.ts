@@ -1,7 +1,14 @@
 /** Design-local profiles: made from a built-in one with a required source, edited, used, deleted. */
 import { describe, expect, it } from 'vitest';
 import {
-  addProfile, connectPins, deleteProfile, localProfileId, setPartProfile, setProfileParam, setProfileSource, type Command,
+  addProfile,
+  connectPins,
+  deleteProfile,
+  localProfileId,
+  setPartProfile,
+  setProfileParam,
+  setProfileSource,
+  type Command,
 } from '../../app/store/commands/index.ts';
 import { validateDesign } from '../../rules/model/reader.ts';
 import { builtinProfile } from '../../rules/profiles/index.ts';
@@ -15,9 +22,16 @@ describe('design-local profiles', () => {
     expect(h.severity(id)).toBe('error');
     const local = localProfileId(h.design, '74hc');
     expect(local).toBe('74hc-local');
-    expect(h.apply(addProfile('74hc', local, '', 'datasheet of the chosen part, table 6'))).toEqual({ ok: true, changed: true });
+    expect(h.apply(addProfile('74hc', local, '', 'datasheet of the chosen part, table 6'))).toEqual({
+      ok: true,
+      changed: true,
+    });
     const made = h.design.profiles![0]!;
-    expect([made.id, made.label, made.source]).toEqual(['74hc-local', `${builtinProfile('74hc')!.label} (this design)`, 'datasheet of the chosen part, table 6']);
+    expect([made.id, made.label, made.source]).toEqual([
+      '74hc-local',
+      `${builtinProfile('74hc')!.label} (this design)`,
+      'datasheet of the chosen part, table 6',
+    ]);
     expect(made.params).toEqual(builtinProfile('74hc')!.params);
     h.apply(setPartProfile('H', local));
     // The copy has the built-in numbers: still failing.
@@ -49,13 +63,41 @@ describe('design-local profiles', () => {
 
   const start = bench();
   const refusals: { name: string; setup?: Command[]; command: Command; reason: RegExp }[] = [
-    { name: 'a profile without a source', command: addProfile('74hc', 'mine', 'Mine', '  '), reason: /where the numbers come from/ },
-    { name: 'a copy of an unknown family', command: addProfile('74xyz', 'mine', 'Mine', 'bench'), reason: /no built-in profile 74xyz/ },
-    { name: 'an id used twice', setup: [addProfile('74hc', 'mine', '', 'bench')], command: addProfile('74hct', 'mine', '', 'bench'), reason: /already has a profile mine/ },
+    {
+      name: 'a profile without a source',
+      command: addProfile('74hc', 'mine', 'Mine', '  '),
+      reason: /where the numbers come from/,
+    },
+    {
+      name: 'a copy of an unknown family',
+      command: addProfile('74xyz', 'mine', 'Mine', 'bench'),
+      reason: /no built-in profile 74xyz/,
+    },
+    {
+      name: 'an id used twice',
+      setup: [addProfile('74hc', 'mine', '', 'bench')],
+      command: addProfile('74hct', 'mine', '', 'bench'),
+      reason: /already has a profile mine/,
+    },
     { name: 'an id with ":"', command: addProfile('74hc', 'a:b', '', 'bench'), reason: /id/ },
-    { name: 'clearing the source', setup: [addProfile('74hc', 'mine', '', 'bench')], command: setProfileSource('mine', ''), reason: /needs a source/ },
-    { name: 'a Level that does not parse', setup: [addProfile('74hc', 'mine', '', 'bench')], command: setProfileParam('mine', 'vih', 'VDD*VDD'), reason: /vih: expected a Level/ },
-    { name: 'deleting a profile in use', setup: [addProfile('74hc', 'mine', '', 'bench'), setPartProfile('H', 'mine')], command: deleteProfile('mine'), reason: /still used by H/ },
+    {
+      name: 'clearing the source',
+      setup: [addProfile('74hc', 'mine', '', 'bench')],
+      command: setProfileSource('mine', ''),
+      reason: /needs a source/,
+    },
+    {
+      name: 'a Level that does not parse',
+      setup: [addProfile('74hc', 'mine', '', 'bench')],
+      command: setProfileParam('mine', 'vih', 'VDD*VDD'),
+      reason: /vih: expected a Level/,
+    },
+    {
+      name: 'deleting a profile in use',
+      setup: [addProfile('74hc', 'mine', '', 'bench'), setPartProfile('H', 'mine')],
+      command: deleteProfile('mine'),
+      reason: /still used by H/,
+    },
   ];
   it.each(refusals)('refuses $name', ({ setup = [], command, reason }) => {
     const h = harness(start);

@@ -50,7 +50,10 @@ describe('the reader', () => {
     const r = readDesign(JSON.stringify(d));
     expect(r.ok).toBe(false);
     if (r.ok) return;
-    expect(r.errors).toContainEqual({ path: 'rails[0].colour', message: expect.stringContaining('expected a colour "#rgb" or "#rrggbb"') });
+    expect(r.errors).toContainEqual({
+      path: 'rails[0].colour',
+      message: expect.stringContaining('expected a colour "#rgb" or "#rrggbb"'),
+    });
   });
 });
 

@@ -15,7 +15,10 @@ describe('reset state of a part', () => {
     expect(h.apply(setResetState('U1')).ok).toBe(true);
     const reset = h.design.scenarios?.find((s) => s.id === 'reset');
     expect(reset?.off).toEqual([]);
-    const outputs = start.parts.find((p) => p.id === 'U1')!.pins.filter((p) => p.role !== 'input').map((p) => `U1.${p.id}`);
+    const outputs = start.parts
+      .find((p) => p.id === 'U1')!
+      .pins.filter((p) => p.role !== 'input')
+      .map((p) => `U1.${p.id}`);
     // The example's reset state already sets VALVE_EN and PUMP_EN (the latter with its 40 kΩ
     // pull-down): they stay as they are, the controller's other outputs join them.
     expect(new Set(reset?.pins?.map((p) => p.pin))).toEqual(new Set(outputs));
@@ -24,7 +27,9 @@ describe('reset state of a part', () => {
     const valid = validateDesign(h.design);
     expect(valid.ok ? [] : valid.errors).toEqual([]);
     // The display's receive line floats while the controller boots: an error there only.
-    const floating = h.store.getState().result.findings.filter((f) => f.rule === 'floating-input' && f.net === 'DISP_TX');
+    const floating = h.store
+      .getState()
+      .result.findings.filter((f) => f.rule === 'floating-input' && f.net === 'DISP_TX');
     expect(floating.map((f) => `${f.scenario}/${f.severity}`)).toContain('reset/error');
     expect(floating.some((f) => f.scenario === 'all-on')).toBe(false);
     // A second click adds nothing.

@@ -43,22 +43,34 @@ describe('parts palette', () => {
     expect(valid.ok ? [] : valid.errors).toEqual([]);
   });
 
-  it('the 16-pin microcontroller\'s two-wire pins use the two-wire bus profile, its GPIO pins the GPIO one', () => {
+  it("the 16-pin microcontroller's two-wire pins use the two-wire bus profile, its GPIO pins the GPIO one", () => {
     const part = templateById('mcu:16')!.build(newDesign(), { x: 0, y: 0 });
     if ('refused' in part) throw new Error(part.refused);
     const profileOf = (id: string) => part.pins.find((p) => p.id === id)!.profile ?? part.profile;
-    expect([profileOf('SDA'), profileOf('SCL'), profileOf('OUT1'), profileOf('IN1')]).toEqual(['i2c', 'i2c', 'mcu-gpio', 'mcu-gpio']);
+    expect([profileOf('SDA'), profileOf('SCL'), profileOf('OUT1'), profileOf('IN1')]).toEqual([
+      'i2c',
+      'i2c',
+      'mcu-gpio',
+      'mcu-gpio',
+    ]);
   });
 
   it('a translator puts side A on its own rail and family', () => {
     const part = templateById('translator:lvcmos18:lvcmos33')!.build(newDesign(), { x: 0, y: 0 });
     if ('refused' in part) throw new Error(part.refused);
     expect([part.rail, part.profile]).toEqual(['3v3', 'lvcmos33']);
-    expect(part.pins.filter((p) => p.rail === '1v8' && p.profile === 'lvcmos18').map((p) => p.id)).toEqual(['A1', 'A2', 'A3', 'A4']);
+    expect(part.pins.filter((p) => p.rail === '1v8' && p.profile === 'lvcmos18').map((p) => p.id)).toEqual([
+      'A1',
+      'A2',
+      'A3',
+      'A4',
+    ]);
   });
 
   it('refuses to build without rails', () => {
-    expect(templateById('gate:74hc')!.build({ ...newDesign(), rails: [] }, { x: 0, y: 0 })).toEqual({ refused: 'The design has no rail: add a rail first.' });
+    expect(templateById('gate:74hc')!.build({ ...newDesign(), rails: [] }, { x: 0, y: 0 })).toEqual({
+      refused: 'The design has no rail: add a rail first.',
+    });
   });
 
   it.each([

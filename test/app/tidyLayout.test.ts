@@ -71,7 +71,9 @@ describe('tidy layout', () => {
     const h = harness(exampleDesign());
     h.apply(tidyLayout());
     const boxes = h.design.parts.map(chipBox);
-    const wires = h.design.nets.flatMap((n) => netWires(n).map(([a, b]) => ({ id: wireId(n.id, a, b), net: n.id, a, b })));
+    const wires = h.design.nets.flatMap((n) =>
+      netWires(n).map(([a, b]) => ({ id: wireId(n.id, a, b), net: n.id, a, b })),
+    );
     expect(bodyCrossings([...routeOnce(boxes, wires).values()], boxes)).toEqual([]);
   });
 });

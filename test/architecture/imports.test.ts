@@ -25,7 +25,7 @@ function sources(dir: string): string[] {
 const IMPORT = /(?:^|\n)\s*(?:import|export)\b[^;'"]*?\bfrom\s*['"]([^'"]+)['"]|import\(\s*['"]([^'"]+)['"]\s*\)/g;
 
 /** Every relative import of a file, as a path from the repository's root. */
-export function importsOf(file: string, text: string): string[] {
+function importsOf(file: string, text: string): string[] {
   const out: string[] = [];
   for (const m of text.matchAll(IMPORT)) {
     const spec = m[1] ?? m[2]!;
@@ -35,7 +35,11 @@ export function importsOf(file: string, text: string): string[] {
 }
 
 /** The folder of `rules/` a path is in (`rules/engine`), or the path's top folder elsewhere. */
-const folderOf = (path: string) => path.split('/').slice(0, path.startsWith('rules/') ? 2 : 1).join('/');
+const folderOf = (path: string) =>
+  path
+    .split('/')
+    .slice(0, path.startsWith('rules/') ? 2 : 1)
+    .join('/');
 
 function folderGraph(files: readonly string[]): Map<string, Map<string, string>> {
   const graph = new Map<string, Map<string, string>>();
@@ -52,14 +56,17 @@ function folderGraph(files: readonly string[]): Map<string, Map<string, string>>
 }
 
 /** Each cycle once, as its folders in order and the import that closes each step. */
-export function cycles(graph: Map<string, Map<string, string>>): string[] {
+function cycles(graph: Map<string, Map<string, string>>): string[] {
   const found = new Set<string>();
   const out: string[] = [];
   const walk = (start: string, at: string, path: string[], why: string[]) => {
     for (const [next, because] of graph.get(at) ?? []) {
       if (next === start) {
         const key = [...path].sort().join(' ');
-        if (!found.has(key)) { found.add(key); out.push(`${[...path, start].join(' → ')} (${[...why, because].join('; ')})`); }
+        if (!found.has(key)) {
+          found.add(key);
+          out.push(`${[...path, start].join(' → ')} (${[...why, because].join('; ')})`);
+        }
       } else if (!path.includes(next) && next > start) walk(start, next, [...path, next], [...why, because]);
     }
   };
@@ -72,7 +79,10 @@ const rulesFiles = sources('rules');
 describe('the folder structure', () => {
   it('rules/ never imports app/', () => {
     const offending = rulesFiles.flatMap((f) =>
-      importsOf(f, readFileSync(join(root, f), 'utf8')).filter((t) => t.startsWith('app/')).map((t) => `${f} → ${t}`));
+      importsOf(f, readFileSync(join(root, f), 'utf8'))
+        .filter((t) => t.startsWith('app/'))
+        .map((t) => `${f} → ${t}`),
+    );
     expect(offending).toEqual([]);
   });
 
@@ -94,7 +104,13 @@ describe('the folder structure', () => {
   });
 
   it('reads static, re-export and dynamic imports', () => {
-    const text = "import { a } from './x.ts';\nexport { b } from '../y/z.ts';\nconst m = await import('../../app/w.ts');\nimport type { T } from './t.ts';";
-    expect(importsOf('rules/engine/f.ts', text).sort()).toEqual(['app/w.ts', 'rules/engine/t.ts', 'rules/engine/x.ts', 'rules/y/z.ts']);
+    const text =
+      "import { a } from './x.ts';\nexport { b } from '../y/z.ts';\nconst m = await import('../../app/w.ts');\nimport type { T } from './t.ts';";
+    expect(importsOf('rules/engine/f.ts', text).sort()).toEqual([
+      'app/w.ts',
+      'rules/engine/t.ts',
+      'rules/engine/x.ts',
+      'rules/y/z.ts',
+    ]);
   });
 });

@@ -109,19 +109,41 @@ const results = CASES.map((c) => {
   }
   const a = summarize(cmd);
   const b = summarize(base);
-  return { case: c.name, command: a, floor: { wallMs: b.wallMs, cpuMs: b.cpuMs, maxRssMB: b.maxRssMB }, ratioWall: round(a.wallMs / b.wallMs, 2), ratioCpu: round(a.cpuMs / b.cpuMs, 2) };
+  return {
+    case: c.name,
+    command: a,
+    floor: { wallMs: b.wallMs, cpuMs: b.cpuMs, maxRssMB: b.maxRssMB },
+    ratioWall: round(a.wallMs / b.wallMs, 2),
+    ratioCpu: round(a.cpuMs / b.cpuMs, 2),
+  };
 });
 rmSync(dir, { recursive: true, force: true });
 
-const machine = { node: process.version, cpus: os.cpus().length, cpu: os.cpus()[0]?.model ?? '?', loadAverage: os.loadavg().map((x) => round(x, 2)), runs: RUNS };
+const machine = {
+  node: process.version,
+  cpus: os.cpus().length,
+  cpu: os.cpus()[0]?.model ?? '?',
+  loadAverage: os.loadavg().map((x) => round(x, 2)),
+  runs: RUNS,
+};
 if (json) {
-  process.stdout.write(`${JSON.stringify({ machine, parts: bigDesign.parts.length, nets: bigDesign.nets.length, results }, null, 2)}\n`);
+  process.stdout.write(
+    `${JSON.stringify({ machine, parts: bigDesign.parts.length, nets: bigDesign.nets.length, results }, null, 2)}\n`,
+  );
 } else {
-  console.log(`railcross CLI benchmark: ${RUNS} paired runs per case, medians; ${machine.cpus} CPUs, Node ${machine.node}, load ${machine.loadAverage.join(' ')}`);
+  console.log(
+    `railcross CLI benchmark: ${RUNS} paired runs per case, medians; ${machine.cpus} CPUs, Node ${machine.node}, load ${machine.loadAverage.join(' ')}`,
+  );
   console.log(`10,000-part design: ${bigDesign.parts.length} parts, ${bigDesign.nets.length} nets`);
   for (const r of results) {
     const c = r.command;
-    console.log(`\n${r.case}: wall ${c.wallMs} ms (floor ${r.floor.wallMs} ms, ×${r.ratioWall}), CPU ${c.cpuMs} ms (floor ${r.floor.cpuMs} ms, ×${r.ratioCpu}), peak RSS ${c.maxRssMB} MB (floor ${r.floor.maxRssMB} MB)`);
-    console.log(`  stages (ms): ${Object.entries(c.stagesMs).map(([k, v]) => `${k} ${v}`).join(', ')}`);
+    console.log(
+      `\n${r.case}: wall ${c.wallMs} ms (floor ${r.floor.wallMs} ms, ×${r.ratioWall}), CPU ${c.cpuMs} ms (floor ${r.floor.cpuMs} ms, ×${r.ratioCpu}), peak RSS ${c.maxRssMB} MB (floor ${r.floor.maxRssMB} MB)`,
+    );
+    console.log(
+      `  stages (ms): ${Object.entries(c.stagesMs)
+        .map(([k, v]) => `${k} ${v}`)
+        .join(', ')}`,
+    );
   }
 }

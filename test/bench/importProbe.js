@@ -10,12 +10,21 @@ const marks = window.__importMarks;
 new PerformanceObserver((list) => {
   for (const e of list.getEntries()) marks.blocks.push({ at: e.startTime, ms: e.duration });
 }).observe({ type: 'longtask', buffered: true });
-document.addEventListener('change', (e) => {
-  if (e.target instanceof HTMLInputElement && e.target.type === 'file') marks.start = performance.now();
-}, true);
-document.addEventListener('click', (e) => {
-  if (e.target instanceof Element && e.target.closest('[data-testid="large-open"]') !== null) marks.openClicked = performance.now();
-}, true);
+document.addEventListener(
+  'change',
+  (e) => {
+    if (e.target instanceof HTMLInputElement && e.target.type === 'file') marks.start = performance.now();
+  },
+  true,
+);
+document.addEventListener(
+  'click',
+  (e) => {
+    if (e.target instanceof Element && e.target.closest('[data-testid="large-open"]') !== null)
+      marks.openClicked = performance.now();
+  },
+  true,
+);
 let expected = performance.now() + 10;
 const tick = () => {
   const now = performance.now();
@@ -26,11 +35,24 @@ const tick = () => {
 setTimeout(tick, 10);
 const watch = () => {
   if (marks.choice === null && document.querySelector('[data-testid="large-design"]') !== null) {
-    requestAnimationFrame(() => requestAnimationFrame((t) => { marks.choice ??= t; }));
+    requestAnimationFrame(() =>
+      requestAnimationFrame((t) => {
+        marks.choice ??= t;
+      }),
+    );
   }
-  if (marks.openClicked !== null && marks.opened === null && document.querySelector('[data-testid="large-design"]') === null
-    && document.querySelectorAll('.rc-app .react-flow__node').length > 0 && document.querySelector('[data-testid="design-title"]')?.value === window.__importTitle) {
-    requestAnimationFrame(() => requestAnimationFrame((t) => { marks.opened ??= t; }));
+  if (
+    marks.openClicked !== null &&
+    marks.opened === null &&
+    document.querySelector('[data-testid="large-design"]') === null &&
+    document.querySelectorAll('.rc-app .react-flow__node').length > 0 &&
+    document.querySelector('[data-testid="design-title"]')?.value === window.__importTitle
+  ) {
+    requestAnimationFrame(() =>
+      requestAnimationFrame((t) => {
+        marks.opened ??= t;
+      }),
+    );
   }
   requestAnimationFrame(watch);
 };

@@ -10,6 +10,10 @@ const editorObserver = new MutationObserver(() => {
   if (document.querySelector('.rc-app .react-flow__node') === null) return;
   editorObserver.disconnect();
   // The first frame's callbacks run before the DOM is painted; the next frame starts after it.
-  requestAnimationFrame(() => requestAnimationFrame((t) => { window.__openMarks.editor = t; }));
+  requestAnimationFrame(() =>
+    requestAnimationFrame((t) => {
+      window.__openMarks.editor = t;
+    }),
+  );
 });
 editorObserver.observe(document, { childList: true, subtree: true });

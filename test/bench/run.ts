@@ -21,7 +21,7 @@ const round = (x: number, d = 3) => roundTo(x, d);
 
 function measure(parts: number) {
   // Two nets in a hundred joined by a part between chips (a resistor, a FET or diode shifter).
-  const design = generateDesign(20261202 + parts, { parts, discretes: Number(process.env['BENCH_DISCRETES'] ?? 0.02) });
+  const design = generateDesign(20261202 + parts, { parts, discretes: Number(process.env.BENCH_DISCRETES ?? 0.02) });
   const text = JSON.stringify(design);
   const reps = parts >= 10000 ? 7 : parts >= 1000 ? 15 : 41;
 
@@ -63,9 +63,15 @@ function measure(parts: number) {
   const fullMs = median(fullTimes);
   const editMs = median(editTimes);
   return {
-    parts, pins, nets: design.nets.length,
-    parseMs: round(parseMs), fullMs: round(fullMs), editMs: round(editMs), heapMB: round(heapMB, 1),
-    fullOverParse: round(fullMs / parseMs, 2), fullOverEdit: round(fullMs / editMs, 1),
+    parts,
+    pins,
+    nets: design.nets.length,
+    parseMs: round(parseMs),
+    fullMs: round(fullMs),
+    editMs: round(editMs),
+    heapMB: round(heapMB, 1),
+    fullOverParse: round(fullMs / parseMs, 2),
+    fullOverEdit: round(fullMs / editMs, 1),
   };
 }
 
@@ -80,6 +86,8 @@ const sizes = SIZES.map(measure);
 if (json) {
   process.stdout.write(`${JSON.stringify({ machine, sizes })}\n`);
 } else {
-  console.log(`Railcross engine benchmark — ${machine.cpus} × ${machine.cpu}, Node ${machine.node}${gc ? '' : ' (run with --expose-gc for heapMB)'}`);
+  console.log(
+    `Railcross engine benchmark — ${machine.cpus} × ${machine.cpu}, Node ${machine.node}${gc ? '' : ' (run with --expose-gc for heapMB)'}`,
+  );
   console.table(sizes);
 }

@@ -76,7 +76,8 @@ function findRecolouring(design: Design): { part: string; families: [string, str
         const out = store.getState().apply(setPartProfile(partId, family));
         const after = store.getState().netStatus.get(net.id)?.severity;
         if (out.ok) store.getState().undo();
-        if (out.ok && after !== 'error' && after !== 'warning') return { part: partId, families: [part.profile, family], net: net.id };
+        if (out.ok && after !== 'error' && after !== 'warning')
+          return { part: partId, families: [part.profile, family], net: net.id };
       }
     }
   }
@@ -100,7 +101,7 @@ async function waitForServer(url: string, ms: number): Promise<void> {
 async function poll<T>(page: Page, expression: string, what: string, ms = 60_000): Promise<T> {
   const until = Date.now() + ms;
   for (;;) {
-    const value = await page.evaluate(expression) as T | null;
+    const value = (await page.evaluate(expression)) as T | null;
     if (value !== null && value !== false) return value;
     if (Date.now() > until) throw new Error(what);
     await new Promise((r) => setTimeout(r, 100));
@@ -113,7 +114,10 @@ async function probe(page: Page): Promise<void> {
 }
 
 /** Saves of a 2,000-part design through the library, and page loads opening it; in a profile of its own. */
-async function storageBench(browser: Browser, errors: string[]): Promise<{ saves: number[]; firstPaint: number[]; editor: number[] }> {
+async function storageBench(
+  browser: Browser,
+  errors: string[],
+): Promise<{ saves: number[]; firstPaint: number[]; editor: number[] }> {
   const design = generateDesign(7, { parts: STORAGE_PARTS });
   const context = await browser.newContext({ viewport: VIEWPORT });
   try {
@@ -123,14 +127,18 @@ async function storageBench(browser: Browser, errors: string[]): Promise<{ saves
     await page.goto(`${BASE}/?bench`);
     await probe(page);
     await page.evaluate(`window.__probe.store(${JSON.stringify(design)})`);
-    const saves = await page.evaluate(`window.__probe.saves(${SAVES})`) as number[];
+    const saves = (await page.evaluate(`window.__probe.saves(${SAVES})`)) as number[];
     const title = `${design.title}, edit ${SAVES}`;
     const firstPaint: number[] = [];
     const editor: number[] = [];
     for (let k = 0; k < OPENS; k++) {
       // The normal page: the tab's session storage names the design to open, as after a reload.
       await page.goto(`${BASE}/`);
-      const marks = await poll<Record<string, number>>(page, 'window.__openMarks.editor === undefined ? null : window.__openMarks', 'the stored design never showed');
+      const marks = await poll<Record<string, number>>(
+        page,
+        'window.__openMarks.editor === undefined ? null : window.__openMarks',
+        'the stored design never showed',
+      );
       const shown = await page.getByTestId('design-title').inputValue();
       if (shown !== title) throw new Error(`the page opened “${shown}”, not the stored ${STORAGE_PARTS}-part design`);
       firstPaint.push(marks['first-contentful-paint'] ?? marks['first-paint'] ?? NaN);
@@ -163,16 +171,38 @@ async function importBench(browser: Browser, errors: string[]): Promise<ImportFi
     await page.goto(`${BASE}/`);
     await poll(page, `document.querySelector('.rc-app .react-flow__node') !== null`, 'the editor did not start');
     await page.getByTestId('open-library').click();
-    await page.getByTestId('import-file').setInputFiles({ name: 'large.railcross.json', mimeType: 'application/json', buffer: Buffer.from(JSON.stringify(design)) });
-    const choice = await poll<number>(page, 'window.__importMarks.choice', 'the large-design choice never showed', 180_000);
-    const before = await page.evaluate('window.__importMarks') as { start: number; blocks: { at: number; ms: number }[]; lags: { at: number; ms: number }[] };
+    await page.getByTestId('import-file').setInputFiles({
+      name: 'large.railcross.json',
+      mimeType: 'application/json',
+      buffer: Buffer.from(JSON.stringify(design)),
+    });
+    const choice = await poll<number>(
+      page,
+      'window.__importMarks.choice',
+      'the large-design choice never showed',
+      180_000,
+    );
+    const before = (await page.evaluate('window.__importMarks')) as {
+      start: number;
+      blocks: { at: number; ms: number }[];
+      lags: { at: number; ms: number }[];
+    };
     // What began after the import did: the file input's own transfer from the test harness comes before it.
     // A long task's `at` is its start; a late timer's `at` is when it fired, `ms` after it was due.
     const within = (xs: { at: number; ms: number }[], from: number, to: number, ended = false) =>
       Math.max(0, ...xs.filter((x) => (ended ? x.at - x.ms : x.at) >= from && x.at <= to).map((x) => x.ms));
     // Clicked from inside the page: opening anyway blocks the page for longer than an input's acknowledgement may wait.
     if (process.env.RAILCROSS_BENCH_DEBUG !== undefined) {
-      console.error(JSON.stringify({ start: before.start, choice, blocks: before.blocks.filter((b) => b.at >= before.start), lags: before.lags.filter((l) => l.ms > 40 && l.at >= before.start - 100).map((l) => [Math.round(l.at - before.start), Math.round(l.ms)]) }));
+      console.error(
+        JSON.stringify({
+          start: before.start,
+          choice,
+          blocks: before.blocks.filter((b) => b.at >= before.start),
+          lags: before.lags
+            .filter((l) => l.ms > 40 && l.at >= before.start - 100)
+            .map((l) => [Math.round(l.at - before.start), Math.round(l.ms)]),
+        }),
+      );
     }
     const profiling = process.env.RAILCROSS_BENCH_PROFILE !== undefined ? await context.newCDPSession(page) : null;
     if (profiling !== null) {
@@ -191,9 +221,18 @@ async function importBench(browser: Browser, errors: string[]): Promise<ImportFi
         const key = `${n.callFrame.functionName || '(anon)'} ${n.callFrame.url.split('/').pop()}:${n.callFrame.lineNumber}`;
         self.set(key, (self.get(key) ?? 0) + (dt[k] ?? 0) / 1000);
       });
-      console.error([...self].sort((a, b) => b[1] - a[1]).slice(0, 25).map(([k, v]) => `${v.toFixed(0)} ms ${k}`).join('\n'));
+      console.error(
+        [...self]
+          .sort((a, b) => b[1] - a[1])
+          .slice(0, 25)
+          .map(([k, v]) => `${v.toFixed(0)} ms ${k}`)
+          .join('\n'),
+      );
     }
-    const after = await page.evaluate('window.__importMarks') as { openClicked: number; blocks: { at: number; ms: number }[] };
+    const after = (await page.evaluate('window.__importMarks')) as {
+      openClicked: number;
+      blocks: { at: number; ms: number }[];
+    };
     return {
       blockMs: within(before.blocks, before.start, choice),
       lagMs: within(before.lags, before.start, choice, true),
@@ -208,9 +247,14 @@ async function importBench(browser: Browser, errors: string[]): Promise<ImportFi
 
 async function main() {
   log('building…');
-  const build = spawnSync('npx', ['vite', 'build', '--logLevel', 'error'], { stdio: ['ignore', json ? 'ignore' : 'inherit', 'inherit'] });
+  const build = spawnSync('npx', ['vite', 'build', '--logLevel', 'error'], {
+    stdio: ['ignore', json ? 'ignore' : 'inherit', 'inherit'],
+  });
   if (build.status !== 0) throw new Error('vite build failed');
-  const server = spawn('npx', ['vite', 'preview', '--port', String(PORT), '--strictPort', '--host', '127.0.0.1'], { stdio: 'ignore', detached: true });
+  const server = spawn('npx', ['vite', 'preview', '--port', String(PORT), '--strictPort', '--host', '127.0.0.1'], {
+    stdio: 'ignore',
+    detached: true,
+  });
   const stop = () => {
     try {
       if (server.pid !== undefined) process.kill(-server.pid);
@@ -238,32 +282,50 @@ async function main() {
 
     const design = generateDesign(20261202 + PARTS, { parts: PARTS });
     const edit = findRecolouring(design);
-    log(`design: ${PARTS} parts, ${design.nets.length} nets; recolouring edit: ${edit.part} ${edit.families.join(' ↔ ')} on net ${edit.net}`);
+    log(
+      `design: ${PARTS} parts, ${design.nets.length} nets; recolouring edit: ${edit.part} ${edit.families.join(' ↔ ')} on net ${edit.net}`,
+    );
 
     await page.goto(`${BASE}/?bench`);
     await probe(page);
-    const open = await page.evaluate(`window.__probe.open(${JSON.stringify(design)})`) as { ms: number; nodes: number; edges: number };
+    const open = (await page.evaluate(`window.__probe.open(${JSON.stringify(design)})`)) as {
+      ms: number;
+      nodes: number;
+      edges: number;
+    };
     const overview = await page.evaluate('window.__probe.view()');
     log('opened, fitted view:', overview);
 
     // The whole design in view (every chip on screen): the heaviest view there is.
-    const fitted = await page.evaluate(`window.__probe.recolour(${EDITS}, ${JSON.stringify(edit.part)}, ${JSON.stringify(edit.families)}, ${JSON.stringify(edit.net)})`) as Record<string, number[] | number>;
-    const fittedDrag = await page.evaluate(`window.__probe.drag(${EDITS}, ${JSON.stringify(edit.part)})`) as Record<string, number[] | number>;
+    const fitted = (await page.evaluate(
+      `window.__probe.recolour(${EDITS}, ${JSON.stringify(edit.part)}, ${JSON.stringify(edit.families)}, ${JSON.stringify(edit.net)})`,
+    )) as Record<string, number[] | number>;
+    const fittedDrag = (await page.evaluate(`window.__probe.drag(${EDITS}, ${JSON.stringify(edit.part)})`)) as Record<
+      string,
+      number[] | number
+    >;
     await page.evaluate('window.__probe.undo()');
 
     // A working view: the edited chip selected and brought into view with Shift+F, as a user would.
-    await page.evaluate(`window.__railcrossBench.session.editor.getState().select({ parts: [${JSON.stringify(edit.part)}], wires: [], net: null })`);
+    await page.evaluate(
+      `window.__railcrossBench.session.editor.getState().select({ parts: [${JSON.stringify(edit.part)}], wires: [], net: null })`,
+    );
     await page.keyboard.press('Shift+F');
     await page.waitForTimeout(800);
     const working = await page.evaluate('window.__probe.view()');
     log('working view:', working);
-    const work = await page.evaluate(`window.__probe.recolour(${EDITS}, ${JSON.stringify(edit.part)}, ${JSON.stringify(edit.families)}, ${JSON.stringify(edit.net)})`) as Record<string, number[] | number>;
-    const workDrag = await page.evaluate(`window.__probe.drag(${EDITS}, ${JSON.stringify(edit.part)})`) as Record<string, number[] | number>;
+    const work = (await page.evaluate(
+      `window.__probe.recolour(${EDITS}, ${JSON.stringify(edit.part)}, ${JSON.stringify(edit.families)}, ${JSON.stringify(edit.net)})`,
+    )) as Record<string, number[] | number>;
+    const workDrag = (await page.evaluate(`window.__probe.drag(${EDITS}, ${JSON.stringify(edit.part)})`)) as Record<
+      string,
+      number[] | number
+    >;
 
     // A reload opens the same design from storage: navigation start to the first full frame.
     await page.reload();
     await probe(page);
-    const reload = await page.evaluate(`window.__probe.reloaded(${PARTS})`) as { ms: number };
+    const reload = (await page.evaluate(`window.__probe.reloaded(${PARTS})`)) as { ms: number };
     await page.close();
     log(`storage: ${STORAGE_PARTS} parts, ${SAVES} saves, ${OPENS} page loads…`);
     const storage = await storageBench(browser, errors);
@@ -274,36 +336,84 @@ async function main() {
 
     const m = (o: Record<string, number[] | number>, k: string) => round(median(o[k] as number[]), 2);
     const rows = [
-      { view: 'working view (chip in focus)', check: m(work, 'check'), commit: m(work, 'commit'), edit: m(work, 'paint'), drag: m(workDrag, 'paint'), missed: (work.missed as number) + (workDrag.missed as number) },
-      { view: 'whole design in view', check: m(fitted, 'check'), commit: m(fitted, 'commit'), edit: m(fitted, 'paint'), drag: m(fittedDrag, 'paint'), missed: (fitted.missed as number) + (fittedDrag.missed as number) },
+      {
+        view: 'working view (chip in focus)',
+        check: m(work, 'check'),
+        commit: m(work, 'commit'),
+        edit: m(work, 'paint'),
+        drag: m(workDrag, 'paint'),
+        missed: (work.missed as number) + (workDrag.missed as number),
+      },
+      {
+        view: 'whole design in view',
+        check: m(fitted, 'check'),
+        commit: m(fitted, 'commit'),
+        edit: m(fitted, 'paint'),
+        drag: m(fittedDrag, 'paint'),
+        missed: (fitted.missed as number) + (fittedDrag.missed as number),
+      },
     ];
     const result = {
-      parts: PARTS, commitMs: rows[0]!.commit, editPaintMs: rows[0]!.edit, dragPaintMs: rows[0]!.drag, openMs: round(open.ms, 0),
-      saveMs: round(median(storage.saves), 1), openFirstPaintMs: round(median(storage.firstPaint), 0), openEditorMs: round(median(storage.editor), 0),
-      importParts: IMPORT_PARTS, importBlockMs: round(imported.blockMs, 0), importLagMs: round(imported.lagMs, 0), importChoiceMs: round(imported.choiceMs, 0),
-      importOpenMs: round(imported.openMs, 0), importOpenBlockMs: round(imported.openBlockMs, 0),
+      parts: PARTS,
+      commitMs: rows[0]!.commit,
+      editPaintMs: rows[0]!.edit,
+      dragPaintMs: rows[0]!.drag,
+      openMs: round(open.ms, 0),
+      saveMs: round(median(storage.saves), 1),
+      openFirstPaintMs: round(median(storage.firstPaint), 0),
+      openEditorMs: round(median(storage.editor), 0),
+      importParts: IMPORT_PARTS,
+      importBlockMs: round(imported.blockMs, 0),
+      importLagMs: round(imported.lagMs, 0),
+      importChoiceMs: round(imported.choiceMs, 0),
+      importOpenMs: round(imported.openMs, 0),
+      importOpenBlockMs: round(imported.openBlockMs, 0),
     };
     if (json) {
       console.log(JSON.stringify(result));
       return;
     }
-    console.log(`\nRailcross editor benchmark: ${PARTS} parts, ${design.nets.length} nets, medians of ${EDITS}; ${os.cpus().length} cores, Chromium headless, software rendering`);
-    console.log(`open → first full frame: ${round(open.ms, 0)} ms (goal ≤ 3000); after a reload, from navigation start: ${round(reload.ms, 0)} ms`);
-    console.table(rows.map((r) => ({
-      view: r.view, 'check ms': r.check, 'commit ms (≤ 5)': r.commit, 'edit → painted ms (≤ 33)': r.edit,
-      'drag step → painted ms (≤ 33)': r.drag, 'never painted': r.missed,
-    })));
+    console.log(
+      `\nRailcross editor benchmark: ${PARTS} parts, ${design.nets.length} nets, medians of ${EDITS}; ${os.cpus().length} cores, Chromium headless, software rendering`,
+    );
+    console.log(
+      `open → first full frame: ${round(open.ms, 0)} ms (goal ≤ 3000); after a reload, from navigation start: ${round(reload.ms, 0)} ms`,
+    );
+    console.table(
+      rows.map((r) => ({
+        view: r.view,
+        'check ms': r.check,
+        'commit ms (≤ 5)': r.commit,
+        'edit → painted ms (≤ 33)': r.edit,
+        'drag step → painted ms (≤ 33)': r.drag,
+        'never painted': r.missed,
+      })),
+    );
     const runs = (xs: readonly number[]) => xs.map((x) => round(x, 0)).join(', ');
     console.log(`\nDesign library: a ${STORAGE_PARTS}-part design, medians`);
     console.table([
-      { measure: 'save (one Library.save transaction, as autosave)', 'ms (median)': result.saveMs, goal: '≤ 100', runs: runs(storage.saves) },
-      { measure: 'page load → first paint', 'ms (median)': result.openFirstPaintMs, goal: '', runs: runs(storage.firstPaint) },
+      {
+        measure: 'save (one Library.save transaction, as autosave)',
+        'ms (median)': result.saveMs,
+        goal: '≤ 100',
+        runs: runs(storage.saves),
+      },
+      {
+        measure: 'page load → first paint',
+        'ms (median)': result.openFirstPaintMs,
+        goal: '',
+        runs: runs(storage.firstPaint),
+      },
       { measure: 'page load → editor shown', 'ms (median)': result.openEditorMs, goal: '', runs: runs(storage.editor) },
     ]);
     console.log(`\nImport of a ${IMPORT_PARTS}-part design file (read and checked in the worker), one run`);
     console.table([
       { measure: 'longest main-thread block, import → choice shown', ms: result.importBlockMs, goal: '< 100' },
-      { measure: 'longest input wait (10 ms timer late), import → choice shown', ms: result.importLagMs, goal: '< 100' },
+      {
+        measure: 'longest input wait (10 ms timer late), import → choice shown',
+        ms: result.importLagMs,
+        goal: '< 100',
+      },
       { measure: 'import → the choice painted', ms: result.importChoiceMs, goal: '' },
       { measure: '"Open anyway" → its chips painted', ms: result.importOpenMs, goal: '' },
       { measure: 'longest main-thread block while it opens', ms: result.importOpenBlockMs, goal: '' },

@@ -5,11 +5,12 @@ window.__probe = (() => {
   const bench = () => window.__railcrossBench;
   const frame = () => new Promise((r) => requestAnimationFrame(() => r(performance.now())));
   // A task posted after the store update runs once every microtask (all of React's synchronous work) is done.
-  const drain = () => new Promise((r) => {
-    const ch = new MessageChannel();
-    ch.port1.onmessage = () => r(performance.now());
-    ch.port2.postMessage(0);
-  });
+  const drain = () =>
+    new Promise((r) => {
+      const ch = new MessageChannel();
+      ch.port1.onmessage = () => r(performance.now());
+      ch.port2.postMessage(0);
+    });
   const sleep = (ms) => new Promise((r) => setTimeout(r, ms));
 
   /** Every node React Flow renders is measured (visible), there are wires, and the view has been fitted. */
@@ -45,7 +46,11 @@ window.__probe = (() => {
       const t0 = performance.now();
       await bench().session.createAndOpen(design);
       const t1 = await firstFullFrame(design.parts.length);
-      return { ms: t1 - t0, nodes: document.querySelectorAll('.react-flow__node').length, edges: document.querySelectorAll('.react-flow__edge').length };
+      return {
+        ms: t1 - t0,
+        nodes: document.querySelectorAll('.react-flow__node').length,
+        edges: document.querySelectorAll('.react-flow__edge').length,
+      };
     },
 
     /** After a reload: ms from the navigation's start to the first full frame. */
@@ -99,14 +104,27 @@ window.__probe = (() => {
       const r = head.getBoundingClientRect();
       let x = r.left + 20;
       const y = r.top + 8;
-      const ev = (type, target, buttons) => target.dispatchEvent(new MouseEvent(type, { bubbles: true, cancelable: true, view: window, clientX: x, clientY: y, button: 0, buttons }));
+      const ev = (type, target, buttons) =>
+        target.dispatchEvent(
+          new MouseEvent(type, {
+            bubbles: true,
+            cancelable: true,
+            view: window,
+            clientX: x,
+            clientY: y,
+            button: 0,
+            buttons,
+          }),
+        );
       ev('mousedown', head, 1);
       x += 6;
       ev('mousemove', document, 1);
       await frame();
       await frame();
       const out = { paint: [], missed: 0 };
-      const zoom = Number(/scale\(([^)]+)\)/.exec(document.querySelector('.react-flow__viewport').style.transform)?.[1] ?? 1);
+      const zoom = Number(
+        /scale\(([^)]+)\)/.exec(document.querySelector('.react-flow__viewport').style.transform)?.[1] ?? 1,
+      );
       // A little over one grid step (snap grid 10) on screen, so that every step moves the chip;
       // back and forth, so that it stays in view.
       const step = Math.max(1, Math.ceil(10 * zoom * 1.2));
@@ -157,6 +175,9 @@ window.__probe = (() => {
     },
 
     undo: () => bench().session.editor.getState().undo(),
-    pastNames: () => bench().session.editor.getState().past.map((s) => s.name),
+    pastNames: () =>
+      bench()
+        .session.editor.getState()
+        .past.map((s) => s.name),
   };
 })();

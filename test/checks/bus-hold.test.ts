@@ -22,18 +22,29 @@ ruleTester(rule, {
   valid: [
     { name: 'a 2.2 kΩ strap up overdrives 500 µA', design: strapped({ pull: { to: '3v3', ohms: 2200 } }) },
     { name: 'a 1.5 kΩ strap down overdrives 500 µA', design: strapped({ pull: { to: 'ground', ohms: 1500 } }) },
-    { name: 'an actively driven net needs no strap to win', design: strapped({ pull: { to: '3v3', ohms: 47e3 } }, 'push-pull') },
+    {
+      name: 'an actively driven net needs no strap to win',
+      design: strapped({ pull: { to: '3v3', ohms: 47e3 } }, 'push-pull'),
+    },
   ],
   invalid: [
     {
       name: 'a 4.7 kΩ strap up cannot overdrive the hold latch',
       design: strapped({ pull: { to: '3v3', ohms: 4700 } }),
-      findings: [{ messageId: 'strapTooWeak', severity: 'error', values: { ohms: 4700, rMax: (3.135 - 2.0) / 500e-6, overdrive: 500e-6, toward: 'high' } }],
+      findings: [
+        {
+          messageId: 'strapTooWeak',
+          severity: 'error',
+          values: { ohms: 4700, rMax: (3.135 - 2.0) / 500e-6, overdrive: 500e-6, toward: 'high' },
+        },
+      ],
     },
     {
       name: 'a 2.2 kΩ strap down on a three-state bus',
       design: strapped({ pull: { to: 'ground', ohms: 2200 } }, 'three-state'),
-      findings: [{ messageId: 'strapTooWeak', severity: 'error', values: { ohms: 2200, rMax: 0.8 / 500e-6, toward: 'low' } }],
+      findings: [
+        { messageId: 'strapTooWeak', severity: 'error', values: { ohms: 2200, rMax: 0.8 / 500e-6, toward: 'low' } },
+      ],
     },
   ],
 });

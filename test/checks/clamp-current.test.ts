@@ -12,16 +12,29 @@ const I_2K2 = (5.25 - 3.135) / 2090;
 ruleTester(rule, {
   valid: [
     { name: 'the divider keeps the input below viMax: no clamp current', design: divider() },
-    { name: 'a pin without an injection limit is overvoltage\'s to report', design: seriesClamp() },
+    { name: "a pin without an injection limit is overvoltage's to report", design: seriesClamp() },
   ],
   invalid: [
     {
       name: '2.23 mA through 1 kΩ against a 2 mA injection limit',
       design: seriesClamp({ injectionMax: 2e-3 }),
-      findings: [{
-        messageId: 'overLimit', severity: 'error', id: 'clamp-current:RX1:all-on:U2.A1', pins: ['U2.A1'],
-        values: { current: I_1K, injectionMax: 2e-3, vNet: 5.25, viMax: 3.635, pinVdd: 3.135, source: 'U1.Y1', rail: '3v3' },
-      }],
+      findings: [
+        {
+          messageId: 'overLimit',
+          severity: 'error',
+          id: 'clamp-current:RX1:all-on:U2.A1',
+          pins: ['U2.A1'],
+          values: {
+            current: I_1K,
+            injectionMax: 2e-3,
+            vNet: 5.25,
+            viMax: 3.635,
+            pinVdd: 3.135,
+            source: 'U1.Y1',
+            rail: '3v3',
+          },
+        },
+      ],
     },
     {
       name: '1.01 mA through 2.2 kΩ within a 5 mA limit is listed with its current',

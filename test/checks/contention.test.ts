@@ -8,7 +8,10 @@ import { bidir, design, input, net, output, part, rail, rail5v0, scenario } from
 // net; three-state outputs may share one only with mutually exclusive enables.
 
 /** Parts `A`, `B`, … each with one driving pin `Y`, and a receiver `R.A`, all on 5 V, on net `N`. */
-function shared(pins: Pin[], extra: { net?: Parameters<typeof net>[2]; scenarios?: ReturnType<typeof scenario>[] } = {}) {
+function shared(
+  pins: Pin[],
+  extra: { net?: Parameters<typeof net>[2]; scenarios?: ReturnType<typeof scenario>[] } = {},
+) {
   const ids = pins.map((_, k) => String.fromCharCode(65 + k));
   return design({
     rails: [rail5v0, rail('aux', 5, { tolerance: 0.05 })],
@@ -37,7 +40,11 @@ ruleTester(rule, {
     {
       name: 'inputs do not drive',
       design: design({
-        parts: [part('A', '5v0', '74hc', [output('Y')]), part('B', '5v0', '74hc', [input('A')]), part('C', '5v0', '74hc', [input('A')])],
+        parts: [
+          part('A', '5v0', '74hc', [output('Y')]),
+          part('B', '5v0', '74hc', [input('A')]),
+          part('C', '5v0', '74hc', [input('A')]),
+        ],
         nets: [net('N', ['A.Y', 'B.A', 'C.A'])],
       }),
     },
@@ -46,10 +53,15 @@ ruleTester(rule, {
     {
       name: 'two push-pull outputs',
       design: shared([pushPull, pushPull]),
-      findings: [{
-        messageId: 'pushPullFight', severity: 'error', id: 'contention:N:all-on', pins: ['A.Y', 'B.Y'],
-        values: { drivers: ['A.Y', 'B.Y'], kinds: ['push-pull', 'push-pull'] },
-      }],
+      findings: [
+        {
+          messageId: 'pushPullFight',
+          severity: 'error',
+          id: 'contention:N:all-on',
+          pins: ['A.Y', 'B.Y'],
+          values: { drivers: ['A.Y', 'B.Y'], kinds: ['push-pull', 'push-pull'] },
+        },
+      ],
     },
     {
       name: 'a push-pull with an open-drain output',
@@ -59,15 +71,25 @@ ruleTester(rule, {
     {
       name: 'a push-pull with a three-state output',
       design: shared([threeState, pushPull]),
-      findings: [{ messageId: 'pushPullFight', severity: 'error', values: { drivers: ['A.Y', 'B.Y'], kinds: ['three-state', 'push-pull'] } }],
+      findings: [
+        {
+          messageId: 'pushPullFight',
+          severity: 'error',
+          values: { drivers: ['A.Y', 'B.Y'], kinds: ['three-state', 'push-pull'] },
+        },
+      ],
     },
     {
       name: 'two three-state outputs need exclusive enables',
       design: shared([threeState, threeState]),
-      findings: [{
-        messageId: 'enablesNeeded', severity: 'warning', id: 'contention:N:all-on',
-        values: { drivers: ['A.Y', 'B.Y'], kinds: ['three-state', 'three-state'] },
-      }],
+      findings: [
+        {
+          messageId: 'enablesNeeded',
+          severity: 'warning',
+          id: 'contention:N:all-on',
+          values: { drivers: ['A.Y', 'B.Y'], kinds: ['three-state', 'three-state'] },
+        },
+      ],
     },
     {
       name: 'a three-state with an open-drain output',
@@ -78,7 +100,9 @@ ruleTester(rule, {
       // design-format.md: a bidir pin's default drive is three-state.
       name: 'two bidir pins default to three-state',
       design: shared([bidir('Y'), bidir('Y')]),
-      findings: [{ messageId: 'enablesNeeded', severity: 'warning', values: { kinds: ['three-state', 'three-state'] } }],
+      findings: [
+        { messageId: 'enablesNeeded', severity: 'warning', values: { kinds: ['three-state', 'three-state'] } },
+      ],
     },
     {
       name: 'two outputs of the same part count like any others',
@@ -103,7 +127,12 @@ ruleTester(rule, {
         scenarios: [scenario('aux-off', ['aux'])],
       }),
       findings: [
-        { messageId: 'enablesNeeded', severity: 'warning', scenario: 'all-on', waived: 'enables decoded from one address line' },
+        {
+          messageId: 'enablesNeeded',
+          severity: 'warning',
+          scenario: 'all-on',
+          waived: 'enables decoded from one address line',
+        },
         { messageId: 'enablesNeeded', severity: 'warning', scenario: 'aux-off' },
       ],
     },

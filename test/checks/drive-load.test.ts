@@ -15,7 +15,12 @@ const I2C_VOL = 0.4;
 const I2C_I_IN = 10e-6;
 
 /** One driver `D.Y` on `5v0` and `n` receivers `R1.A`…`Rn.A` on a second 5 V rail `aux`. */
-function fanOut(driverProfile: string, receiverProfile: string, n: number, scenarios = [] as ReturnType<typeof scenario>[]) {
+function fanOut(
+  driverProfile: string,
+  receiverProfile: string,
+  n: number,
+  scenarios = [] as ReturnType<typeof scenario>[],
+) {
   const receivers = Array.from({ length: n }, (_, k) => part(`R${k + 1}`, 'aux', receiverProfile, [input('A')]));
   return design({
     rails: [rail5v0, rail('aux', 5, { tolerance: 0.05 })],
@@ -75,13 +80,22 @@ ruleTester(rule, {
         { rail: '5v0', profile: '74hc' },
         { net: { pull: { to: '5v0', ohms: 1000 } } },
       ),
-      findings: [{
-        messageId: 'lowOverload', severity: 'error', id: 'drive-load:N:all-on:D.Y', pins: ['D.Y'],
-        values: {
-          driver: 'D.Y', loadHigh: HC_I_IN, loadLow: (5.25 - HC_VOL) / 1000 + HC_I_IN,
-          ratedHigh: HC_RATED, ratedLow: HC_RATED, ioMax: null,
+      findings: [
+        {
+          messageId: 'lowOverload',
+          severity: 'error',
+          id: 'drive-load:N:all-on:D.Y',
+          pins: ['D.Y'],
+          values: {
+            driver: 'D.Y',
+            loadHigh: HC_I_IN,
+            loadLow: (5.25 - HC_VOL) / 1000 + HC_I_IN,
+            ratedHigh: HC_RATED,
+            ratedLow: HC_RATED,
+            ioMax: null,
+          },
         },
-      }],
+      ],
     },
     {
       // High load = (Vdriver,max − 0 V) / R + iih of the receiver.
@@ -91,10 +105,13 @@ ruleTester(rule, {
         { rail: '5v0', profile: '74hc' },
         { net: { pull: { to: 'ground', ohms: 1000 } } },
       ),
-      findings: [{
-        messageId: 'highOverload', severity: 'error',
-        values: { loadHigh: 5.25 / 1000 + HC_I_IN, loadLow: HC_I_IN, ratedHigh: HC_RATED, ratedLow: HC_RATED },
-      }],
+      findings: [
+        {
+          messageId: 'highOverload',
+          severity: 'error',
+          values: { loadHigh: 5.25 / 1000 + HC_I_IN, loadLow: HC_I_IN, ratedHigh: HC_RATED, ratedLow: HC_RATED },
+        },
+      ],
     },
     {
       // The net's pull-up to the driver's own rail feeds (5.25 V − VOL)/R into a low output and draws
@@ -109,13 +126,16 @@ ruleTester(rule, {
         ],
         nets: [net('N', ['D.Y', 'R.A'], { pull: { to: '5v0', ohms: 1000 } })],
       }),
-      findings: [{
-        messageId: 'bothOverload', severity: 'error',
-        values: {
-          loadHigh: 5.25 / 1000 + HC_I_IN,
-          loadLow: (5.25 - HC_VOL) / 1000 + HC_I_IN,
+      findings: [
+        {
+          messageId: 'bothOverload',
+          severity: 'error',
+          values: {
+            loadHigh: 5.25 / 1000 + HC_I_IN,
+            loadLow: (5.25 - HC_VOL) / 1000 + HC_I_IN,
+          },
         },
-      }],
+      ],
     },
     {
       // Within the 24 mA rows (from memory) but beyond a part's own 2 mA ioMax (invented).
@@ -125,10 +145,13 @@ ruleTester(rule, {
         { rail: '5v0', profile: '74ac' },
         { net: { pull: { to: '5v0', ohms: 1000 } } },
       ),
-      findings: [{
-        messageId: 'lowOverload', severity: 'error',
-        values: { loadLow: (5.25 - AC_VOL) / 1000 + HC_I_IN, ratedLow: 24e-3, ioMax: 2e-3 },
-      }],
+      findings: [
+        {
+          messageId: 'lowOverload',
+          severity: 'error',
+          values: { loadLow: (5.25 - AC_VOL) / 1000 + HC_I_IN, ratedLow: 24e-3, ioMax: 2e-3 },
+        },
+      ],
     },
     {
       // I2C-bus specification: Rp(min) = (VDD − VOL) / IOL. At 3.465 V that is 3.065 V / 3 mA =
@@ -139,21 +162,30 @@ ruleTester(rule, {
         { rail: '3v3', profile: 'i2c' },
         { net: { pull: { to: '3v3', ohms: 1000 } } },
       ),
-      findings: [{
-        messageId: 'lowOverload', severity: 'error',
-        values: { loadHigh: null, ratedHigh: null, loadLow: (3.465 - I2C_VOL) / 1000 + I2C_I_IN, ratedLow: I2C_IOL },
-      }],
+      findings: [
+        {
+          messageId: 'lowOverload',
+          severity: 'error',
+          values: { loadHigh: null, ratedHigh: null, loadLow: (3.465 - I2C_VOL) / 1000 + I2C_I_IN, ratedLow: I2C_IOL },
+        },
+      ],
     },
     {
       // The pull-down at exactly ioMax above, given ± 10 %: its smallest end, 900 Ω, draws
       // 5.25 V / 900 Ω + 1 µA, beyond the ioMax set for 1 kΩ.
-      name: 'a pull\'s tolerance: its smallest end sets the load',
+      name: "a pull's tolerance: its smallest end sets the load",
       design: link(
         { rail: '5v0', profile: '74ac', part: { params: { ioMax: 5.25 / 1000 + HC_I_IN } } },
         { rail: '5v0', profile: '74ac' },
         { net: { pull: { to: 'ground', ohms: 1000, tolerance: 0.1 } } },
       ),
-      findings: [{ messageId: 'highOverload', severity: 'error', values: { loadHigh: 5.25 / 900 + HC_I_IN, ioMax: 5.25 / 1000 + HC_I_IN } }],
+      findings: [
+        {
+          messageId: 'highOverload',
+          severity: 'error',
+          values: { loadHigh: 5.25 / 900 + HC_I_IN, ioMax: 5.25 / 1000 + HC_I_IN },
+        },
+      ],
     },
     {
       // Handbook: 11 standard TTL loads, 17.6 mA > 16 mA and 0.44 mA > 0.4 mA. With the driver's rail
@@ -161,7 +193,12 @@ ruleTester(rule, {
       name: 'a driver on an off rail is not judged; unpowered receivers still load',
       design: fanOut('ttl', 'ttl', 11, [scenario('drv-off', ['5v0']), scenario('rx-off', ['aux'])]),
       findings: [
-        { messageId: 'bothOverload', severity: 'error', scenario: 'all-on', values: { loadLow: 11 * 1.6e-3, loadHigh: 11 * 40e-6 } },
+        {
+          messageId: 'bothOverload',
+          severity: 'error',
+          scenario: 'all-on',
+          values: { loadLow: 11 * 1.6e-3, loadHigh: 11 * 40e-6 },
+        },
         { messageId: 'bothOverload', severity: 'error', scenario: 'rx-off', id: 'drive-load:N:rx-off:D.Y' },
       ],
     },
@@ -170,7 +207,12 @@ ruleTester(rule, {
       design: link(
         { rail: '5v0', profile: '74hc' },
         { rail: '5v0', profile: '74hc' },
-        { net: { pull: { to: 'ground', ohms: 1000 }, waivers: [{ rule: 'drive-load', note: 'pull-down fitted only for test' }] } },
+        {
+          net: {
+            pull: { to: 'ground', ohms: 1000 },
+            waivers: [{ rule: 'drive-load', note: 'pull-down fitted only for test' }],
+          },
+        },
       ),
       findings: [{ messageId: 'highOverload', severity: 'error', waived: 'pull-down fitted only for test' }],
     },

@@ -1,6 +1,19 @@
 import rule from '../../rules/checks/floating-input.ts';
 import { ruleTester } from '../support/ruleTester.ts';
-import { bidir, design, input, link, net, output, part, rail, rail3v3, rail5v0, resistor, scenario } from '../support/build.ts';
+import {
+  bidir,
+  design,
+  input,
+  link,
+  net,
+  output,
+  part,
+  rail,
+  rail3v3,
+  rail5v0,
+  resistor,
+  scenario,
+} from '../support/build.ts';
 import { seriesClamp } from '../support/paths.ts';
 
 // Common practice: an unused or undriven CMOS input must be tied or pulled to a defined level.
@@ -9,7 +22,10 @@ const hc = { rail: '5v0', profile: '74hc' };
 const rails = [rail5v0, rail3v3, rail('aux', 5, { tolerance: 0.05 })];
 
 /** Receivers `R.A` (and `S.A`) on net `N`, with whatever drivers a case adds. */
-function receiversOnly(extra: Parameters<typeof net>[2] = {}, more: { scenarios?: ReturnType<typeof scenario>[] } = {}) {
+function receiversOnly(
+  extra: Parameters<typeof net>[2] = {},
+  more: { scenarios?: ReturnType<typeof scenario>[] } = {},
+) {
   return design({
     rails,
     parts: [part('R', '5v0', '74hc', [input('A')]), part('S', '5v0', '74hc', [input('A')])],
@@ -34,15 +50,24 @@ ruleTester(rule, {
       // A bus-hold input keeps the net at its last level (datasheet convention, from memory).
       name: 'a bus-hold input is not floating',
       design: design({
-        parts: [part('R', '5v0', '74hc', [input('A', { params: { busHold: { hold: 75e-6, overdrive: 500e-6 } } })]), part('S', '5v0', '74hc', [input('A')])],
+        parts: [
+          part('R', '5v0', '74hc', [input('A', { params: { busHold: { hold: 75e-6, overdrive: 500e-6 } } })]),
+          part('S', '5v0', '74hc', [input('A')]),
+        ],
         nets: [net('N', ['R.A', 'S.A'])],
       }),
     },
-    { name: 'receivers held by the net\'s pull resistor', design: receiversOnly({ pull: { to: 'ground', ohms: 10e3 } }) },
+    {
+      name: "receivers held by the net's pull resistor",
+      design: receiversOnly({ pull: { to: 'ground', ohms: 10e3 } }),
+    },
     {
       name: 'a pull inside a pin counts as a pull',
       design: design({
-        parts: [part('R', '5v0', '74hc', [input('A', { pull: { to: '5v0', ohms: 50e3 } })]), part('S', '5v0', '74hc', [input('A')])],
+        parts: [
+          part('R', '5v0', '74hc', [input('A', { pull: { to: '5v0', ohms: 50e3 } })]),
+          part('S', '5v0', '74hc', [input('A')]),
+        ],
         nets: [net('N', ['R.A', 'S.A'])],
       }),
     },
@@ -54,7 +79,10 @@ ruleTester(rule, {
     {
       name: 'three-state drivers with a pull resistor',
       design: design({
-        parts: [part('A', '5v0', '74hc', [output('Y', { drive: 'three-state' })]), part('R', '5v0', '74hc', [input('A')])],
+        parts: [
+          part('A', '5v0', '74hc', [output('Y', { drive: 'three-state' })]),
+          part('R', '5v0', '74hc', [input('A')]),
+        ],
         nets: [net('N', ['A.Y', 'R.A'], { pull: { to: '5v0', ohms: 10e3 } })],
       }),
     },
@@ -81,7 +109,9 @@ ruleTester(rule, {
     {
       name: 'unconnected outputs, bidir pins and pulled inputs are not floating inputs',
       design: design({
-        parts: [part('U', '5v0', '74hc', [output('Y'), bidir('IO'), input('A', { pull: { to: 'ground', ohms: 100e3 } })])],
+        parts: [
+          part('U', '5v0', '74hc', [output('Y'), bidir('IO'), input('A', { pull: { to: 'ground', ohms: 100e3 } })]),
+        ],
       }),
     },
   ],
@@ -89,10 +119,16 @@ ruleTester(rule, {
     {
       name: 'receivers with no driver and no pull',
       design: receiversOnly(),
-      findings: [{
-        messageId: 'noDriver', severity: 'error', id: 'floating-input:N:all-on', net: 'N', pins: ['R.A', 'S.A'],
-        values: { pins: ['R.A', 'S.A'] },
-      }],
+      findings: [
+        {
+          messageId: 'noDriver',
+          severity: 'error',
+          id: 'floating-input:N:all-on',
+          net: 'N',
+          pins: ['R.A', 'S.A'],
+          values: { pins: ['R.A', 'S.A'] },
+        },
+      ],
     },
     {
       name: 'drivers that are all three-state and no pull',
@@ -104,7 +140,14 @@ ruleTester(rule, {
         ],
         nets: [net('N', ['A.Y', 'B.Y', 'R.A'])],
       }),
-      findings: [{ messageId: 'allThreeState', severity: 'warning', pins: ['R.A'], values: { pins: ['R.A'], drivers: ['A.Y', 'B.Y'] } }],
+      findings: [
+        {
+          messageId: 'allThreeState',
+          severity: 'warning',
+          pins: ['R.A'],
+          values: { pins: ['R.A'], drivers: ['A.Y', 'B.Y'] },
+        },
+      ],
     },
     {
       // design-format.md: a bidir pin drives three-state by default, and receives too.
@@ -113,28 +156,55 @@ ruleTester(rule, {
         parts: [part('A', '5v0', '74hc', [bidir('IO')]), part('B', '5v0', '74hc', [bidir('IO')])],
         nets: [net('N', ['A.IO', 'B.IO'])],
       }),
-      findings: [{ messageId: 'allThreeState', severity: 'warning', values: { pins: ['A.IO', 'B.IO'], drivers: ['A.IO', 'B.IO'] } }],
+      findings: [
+        {
+          messageId: 'allThreeState',
+          severity: 'warning',
+          values: { pins: ['A.IO', 'B.IO'], drivers: ['A.IO', 'B.IO'] },
+        },
+      ],
     },
     {
       // With the driver's rail off the receiver is undriven; with the receiver's rail off nothing is judged.
       name: 'a driver on an off rail does not count; a receiver on one is not judged',
-      design: link({ rail: 'aux', profile: '74hc' }, { rail: '3v3', profile: 'lvcmos33' }, {
-        rails,
-        scenarios: [scenario('drv-off', ['aux']), scenario('rx-off', ['3v3'])],
-      }),
-      findings: [{ messageId: 'noDriver', severity: 'error', scenario: 'drv-off', id: 'floating-input:N:drv-off', pins: ['R.A'] }],
+      design: link(
+        { rail: 'aux', profile: '74hc' },
+        { rail: '3v3', profile: 'lvcmos33' },
+        {
+          rails,
+          scenarios: [scenario('drv-off', ['aux']), scenario('rx-off', ['3v3'])],
+        },
+      ),
+      findings: [
+        {
+          messageId: 'noDriver',
+          severity: 'error',
+          scenario: 'drv-off',
+          id: 'floating-input:N:drv-off',
+          pins: ['R.A'],
+        },
+      ],
     },
     {
       name: 'an input on no net, on a powered rail, without a pull',
       design: design({
         rails,
-        parts: [part('U', 'aux', '74hc', [output('Y'), input('A'), input('B', { pull: { to: 'ground', ohms: 100e3 } })])],
+        parts: [
+          part('U', 'aux', '74hc', [output('Y'), input('A'), input('B', { pull: { to: 'ground', ohms: 100e3 } })]),
+        ],
         scenarios: [scenario('aux-off', ['aux'])],
       }),
-      findings: [{
-        messageId: 'unusedInput', severity: 'warning', scenario: 'all-on', id: 'floating-input:U.A:all-on', net: null,
-        pins: ['U.A'], values: { pins: ['U.A'] },
-      }],
+      findings: [
+        {
+          messageId: 'unusedInput',
+          severity: 'warning',
+          scenario: 'all-on',
+          id: 'floating-input:U.A:all-on',
+          net: null,
+          pins: ['U.A'],
+          values: { pins: ['U.A'] },
+        },
+      ],
     },
     {
       name: 'a waived floating net stays, marked with its note',

@@ -10,7 +10,10 @@ const lvcmos = { rail: '3v3', profile: 'lvcmos33' } as const;
 ruleTester(rule, {
   valid: [
     // A 5 V 74HC output into 74HCT on the same rail: VDD − 0.1 V, never 2.1 V below the supply.
-    { name: 'driven from its own supply', design: link({ rail: '5v0', profile: '74hc' }, { rail: '5v0', profile: '74hct' }) },
+    {
+      name: 'driven from its own supply',
+      design: link({ rail: '5v0', profile: '74hc' }, { rail: '5v0', profile: '74hct' }),
+    },
     // 74HC inputs give no ΔICC in the library: nothing to report.
     { name: 'an input without a ΔICC', design: link(lvcmos, { rail: '5v0', profile: '74hc' }) },
     {
@@ -28,19 +31,29 @@ ruleTester(rule, {
       // 3.135 − 0.2 = 2.935 V against 5.25 − 2.1 = 3.15 V: 0.5 mA more from 5v0.
       name: '3.3 V CMOS into a 5 V TTL-input CMOS part',
       design: link(lvcmos, { rail: '5v0', profile: '74hct' }),
-      findings: [{
-        messageId: 'belowSupply', severity: 'info', id: 'interface-power:N:all-on:R.A', pins: ['R.A', 'D.Y'],
-        values: { pin: 'R.A', driver: 'D.Y', rail: '5v0', current: 0.5e-3, drop: 2.1, high: 3.135 - 0.2, threshold: 5.25 - 2.1 },
-      }],
+      findings: [
+        {
+          messageId: 'belowSupply',
+          severity: 'info',
+          id: 'interface-power:N:all-on:R.A',
+          pins: ['R.A', 'D.Y'],
+          values: {
+            pin: 'R.A',
+            driver: 'D.Y',
+            rail: '5v0',
+            current: 0.5e-3,
+            drop: 2.1,
+            high: 3.135 - 0.2,
+            threshold: 5.25 - 2.1,
+          },
+        },
+      ],
     },
     {
       // Two 74AHCT inputs on one net: one finding each, 1.5 mA each (the report sums them per rail).
       name: 'one finding per input',
       design: design({
-        parts: [
-          part('D', '3v3', 'lvcmos33', [output('Y')]),
-          part('R', '5v0', '74ahct', [input('A'), input('B')]),
-        ],
+        parts: [part('D', '3v3', 'lvcmos33', [output('Y')]), part('R', '5v0', '74ahct', [input('A'), input('B')])],
         nets: [net('N', ['D.Y', 'R.A', 'R.B'])],
       }),
       findings: [
@@ -54,14 +67,21 @@ ruleTester(rule, {
       // With the driver's rail off there is no driver.
       name: 'a pull-up to a lower rail holds the input below its supply',
       design: design({
-        parts: [part('D', '3v3', 'i2c', [output('Y', { drive: 'open-drain' })]), part('R', '5v0', '74hct', [input('A')])],
+        parts: [
+          part('D', '3v3', 'i2c', [output('Y', { drive: 'open-drain' })]),
+          part('R', '5v0', '74hct', [input('A')]),
+        ],
         nets: [net('N', ['D.Y', 'R.A'], { pull: { to: '3v3', ohms: 4700 } })],
         scenarios: [scenario('io-off', ['3v3'])],
       }),
-      findings: [{
-        messageId: 'belowSupply', severity: 'info', scenario: 'all-on',
-        values: { driver: 'D.Y', high: 3.135 - 4700 * (10e-6 + 1e-6), threshold: 3.15 },
-      }],
+      findings: [
+        {
+          messageId: 'belowSupply',
+          severity: 'info',
+          scenario: 'all-on',
+          values: { driver: 'D.Y', high: 3.135 - 4700 * (10e-6 + 1e-6), threshold: 3.15 },
+        },
+      ],
     },
   ],
 });

@@ -58,19 +58,33 @@ ruleTester(rule, {
       // both at the same VDD, the worst being 5.25 V for the VIH line.
       name: 'standard TTL driving 74HC fails high, judged at one shared VDD',
       design: link({ rail: '5v0', profile: 'ttl' }, { rail: '5v0', profile: '74hc' }),
-      findings: [{
-        messageId: 'highFails', severity: 'error', id: 'level-high:N:all-on:D.Y>R.A', pins: ['D.Y', 'R.A'],
-        values: { voh: 2.4, vih: hcVih(5.25), margin: 2.4 - hcVih(5.25), driverVdd: 5.25, receiverVdd: 5.25 },
-      }],
+      findings: [
+        {
+          messageId: 'highFails',
+          severity: 'error',
+          id: 'level-high:N:all-on:D.Y>R.A',
+          pins: ['D.Y', 'R.A'],
+          values: { voh: 2.4, vih: hcVih(5.25), margin: 2.4 - hcVih(5.25), driverVdd: 5.25, receiverVdd: 5.25 },
+        },
+      ],
     },
     {
       // Different rails: the driver at its lowest, the receiver at its highest.
       name: '3.3 V LVCMOS into 74HC on 5 V',
       design: link({ rail: '3v3', profile: 'lvcmos33' }, { rail: '5v0', profile: '74hc' }),
-      findings: [{
-        messageId: 'highFails', severity: 'error',
-        values: { voh: 3.135 - 0.2, vih: hcVih(5.25), margin: 3.135 - 0.2 - hcVih(5.25), driverVdd: 3.135, receiverVdd: 5.25 },
-      }],
+      findings: [
+        {
+          messageId: 'highFails',
+          severity: 'error',
+          values: {
+            voh: 3.135 - 0.2,
+            vih: hcVih(5.25),
+            margin: 3.135 - 0.2 - hcVih(5.25),
+            driverVdd: 3.135,
+            receiverVdd: 5.25,
+          },
+        },
+      ],
     },
     {
       name: 'margin of exactly 0 V is a warning, not an error',
@@ -97,17 +111,24 @@ ruleTester(rule, {
         { rail: '5v0', profile: '74hc' },
         { net: { pull: { to: '3v3', ohms: 4700 } } },
       ),
-      findings: [{
-        messageId: 'highFails', severity: 'error',
-        values: {
-          voh: 3.135 - 4700 * 11e-6, vih: hcVih(5.25), margin: 3.135 - 4700 * 11e-6 - hcVih(5.25),
-          driverVdd: null, receiverVdd: 5.25, vpull: 3.135,
+      findings: [
+        {
+          messageId: 'highFails',
+          severity: 'error',
+          values: {
+            voh: 3.135 - 4700 * 11e-6,
+            vih: hcVih(5.25),
+            margin: 3.135 - 4700 * 11e-6 - hcVih(5.25),
+            driverVdd: null,
+            receiverVdd: 5.25,
+            vpull: 3.135,
+          },
         },
-      }],
+      ],
     },
     {
       // The same pull given as 4.7 kΩ, at most 5 kΩ: the high level takes its largest end.
-      name: 'a pull\'s range: its largest end sets the high level',
+      name: "a pull's range: its largest end sets the high level",
       design: link(
         { rail: '3v3', profile: 'i2c', pin: { drive: 'open-drain' } },
         { rail: '5v0', profile: '74hc' },
@@ -127,9 +148,13 @@ ruleTester(rule, {
       // Only all-on fails: with the receiver's rail off it is not a receiver, and with the
       // driver's rail off it drives nothing.
       name: 'pins on an off rail are not judged',
-      design: link({ rail: '3v3', profile: 'lvcmos33' }, { rail: '5v0', profile: '74hc' }, {
-        scenarios: [scenario('rx-off', ['5v0']), scenario('tx-off', ['3v3'])],
-      }),
+      design: link(
+        { rail: '3v3', profile: 'lvcmos33' },
+        { rail: '5v0', profile: '74hc' },
+        {
+          scenarios: [scenario('rx-off', ['5v0']), scenario('tx-off', ['3v3'])],
+        },
+      ),
       findings: [{ messageId: 'highFails', severity: 'error', scenario: 'all-on' }],
     },
     {
@@ -141,18 +166,24 @@ ruleTester(rule, {
         { rail: '5v0', profile: '74hc', pin: { params: { schmitt: { vtPlus: 'VDD-0.5', vtMinus: 1 } } } },
         { net: { pull: { to: 'ground', ohms: 1000 } } },
       ),
-      findings: [{
-        messageId: 'highFails', severity: 'error',
-        values: { estimate: true, margin: -0.66 + hcSlope * (5.25 / 1000 + 1e-6 - 4e-3) + 0.5 },
-      }],
+      findings: [
+        {
+          messageId: 'highFails',
+          severity: 'error',
+          values: { estimate: true, margin: -0.66 + hcSlope * (5.25 / 1000 + 1e-6 - 4e-3) + 0.5 },
+        },
+      ],
     },
     {
       name: 'a waived finding stays, marked with its note',
-      design: link({ rail: '3v3', profile: 'lvcmos33' }, { rail: '5v0', profile: '74hc' }, {
-        net: { waivers: [{ rule: 'level-high', note: 'receiver replaced by HCT in rev B' }] },
-      }),
+      design: link(
+        { rail: '3v3', profile: 'lvcmos33' },
+        { rail: '5v0', profile: '74hc' },
+        {
+          net: { waivers: [{ rule: 'level-high', note: 'receiver replaced by HCT in rev B' }] },
+        },
+      ),
       findings: [{ messageId: 'highFails', severity: 'error', waived: 'receiver replaced by HCT in rev B' }],
     },
   ],
 });
-

@@ -42,7 +42,12 @@ ruleTester(rule, {
       name: 'a heavier load selects a worse guaranteed level',
       design: lvcmos25IntoLs(3),
       findings: [
-        { messageId: 'lowMarginLow', severity: 'warning', id: 'level-low:N:all-on:D.Y>L1.A', values: { vol: 0.7, vil: 0.8, margin: 0.1 } },
+        {
+          messageId: 'lowMarginLow',
+          severity: 'warning',
+          id: 'level-low:N:all-on:D.Y>L1.A',
+          values: { vol: 0.7, vil: 0.8, margin: 0.1 },
+        },
         { messageId: 'lowMarginLow', severity: 'warning', id: 'level-low:N:all-on:D.Y>L2.A' },
         { messageId: 'lowMarginLow', severity: 'warning', id: 'level-low:N:all-on:D.Y>L3.A' },
       ],
@@ -66,13 +71,20 @@ ruleTester(rule, {
         { rail: '1v8', profile: 'off-board', pin: { params: { vil: 0.3 } } },
         { net: { pull: { to: '3v3', ohms: 470 } } },
       ),
-      findings: [{
-        messageId: 'lowFails', severity: 'error',
-        values: {
-          vol: 0.2 * 1.89 * ((3.465 - 0.2 * 1.89) / 470) / 3e-3, vil: 0.3,
-          margin: 0.3 - 0.2 * 1.89 * ((3.465 - 0.2 * 1.89) / 470) / 3e-3, estimate: true, driverVdd: 1.89, receiverVdd: 1.89,
+      findings: [
+        {
+          messageId: 'lowFails',
+          severity: 'error',
+          values: {
+            vol: (0.2 * 1.89 * ((3.465 - 0.2 * 1.89) / 470)) / 3e-3,
+            vil: 0.3,
+            margin: 0.3 - (0.2 * 1.89 * ((3.465 - 0.2 * 1.89) / 470)) / 3e-3,
+            estimate: true,
+            driverVdd: 1.89,
+            receiverVdd: 1.89,
+          },
         },
-      }],
+      ],
     },
     {
       // A 1.8 V two-wire bus at 1.71 V: VOL 0.2·VDD = 0.342 V @ 3 mA, VIL 0.3·VDD = 0.513 V
@@ -84,10 +96,13 @@ ruleTester(rule, {
         { rail: 'x', profile: 'i2c-lv', pin: { params: { iil: 4.59e-3 } } },
         { rails: [rail('x', 1.71, { tolerance: 0 })] },
       ),
-      findings: [{
-        messageId: 'lowFails', severity: 'error',
-        values: { vol: 0.342 * 4.59 / 3, vil: 0.513, margin: 0.513 - 0.342 * 4.59 / 3, estimate: true },
-      }],
+      findings: [
+        {
+          messageId: 'lowFails',
+          severity: 'error',
+          values: { vol: (0.342 * 4.59) / 3, vil: 0.513, margin: 0.513 - (0.342 * 4.59) / 3, estimate: true },
+        },
+      ],
     },
     {
       // A Schmitt input is judged by vtMinus: 0.15 V against the driver's 0.2 V.

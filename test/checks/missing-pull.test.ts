@@ -8,10 +8,14 @@ import { bidir, design, input, link, net, output, part, scenario } from '../supp
 const od = { drive: 'open-drain' as const };
 
 /** Two bus pins (bidir, open-drain) of parts M and S on one net, with what the case adds. */
-function bus(extra: { pull?: { to: string; ohms: number }; pinPull?: { to: string; ohms: number }; off?: string[] } = {}) {
+function bus(
+  extra: { pull?: { to: string; ohms: number }; pinPull?: { to: string; ohms: number }; off?: string[] } = {},
+) {
   return design({
     parts: [
-      part('M', '3v3', 'i2c', [bidir('SDA', { ...od, ...(extra.pinPull === undefined ? {} : { pull: extra.pinPull }) })]),
+      part('M', '3v3', 'i2c', [
+        bidir('SDA', { ...od, ...(extra.pinPull === undefined ? {} : { pull: extra.pinPull }) }),
+      ]),
       part('S', '3v3', 'i2c', [bidir('SDA', od)]),
     ],
     nets: [net('SDA', ['M.SDA', 'S.SDA'], extra.pull === undefined ? {} : { pull: extra.pull })],
@@ -30,28 +34,49 @@ ruleTester(rule, {
       design: bus({ pull: { to: 'ground', ohms: 100000 }, pinPull: { to: '3v3', ohms: 47000 } }),
     },
     // The catalogue: a pull to an off rail still counts here (level-high reports the dead pull-up).
-    { name: 'a pull-up to a rail that is off in a scenario', design: bus({ pull: { to: '5v0', ohms: 4700 }, off: ['5v0'] }) },
-    { name: 'push-pull drivers need no pull', design: link({ rail: '3v3', profile: 'lvcmos33' }, { rail: '3v3', profile: 'lvcmos33' }) },
+    {
+      name: 'a pull-up to a rail that is off in a scenario',
+      design: bus({ pull: { to: '5v0', ohms: 4700 }, off: ['5v0'] }),
+    },
+    {
+      name: 'push-pull drivers need no pull',
+      design: link({ rail: '3v3', profile: 'lvcmos33' }, { rail: '3v3', profile: 'lvcmos33' }),
+    },
     {
       name: 'a three-state driver is not open-drain',
-      design: link({ rail: '3v3', profile: 'lvcmos33', pin: { drive: 'three-state' } }, { rail: '3v3', profile: 'lvcmos33' }),
+      design: link(
+        { rail: '3v3', profile: 'lvcmos33', pin: { drive: 'three-state' } },
+        { rail: '3v3', profile: 'lvcmos33' },
+      ),
     },
   ],
   invalid: [
     {
       name: 'open-drain bus with no pull at all',
       design: bus(),
-      findings: [{
-        messageId: 'noPull', severity: 'error', id: 'missing-pull:SDA:all-on', net: 'SDA',
-        pins: ['M.SDA', 'S.SDA'], values: { drivers: ['M.SDA', 'S.SDA'] },
-      }],
+      findings: [
+        {
+          messageId: 'noPull',
+          severity: 'error',
+          id: 'missing-pull:SDA:all-on',
+          net: 'SDA',
+          pins: ['M.SDA', 'S.SDA'],
+          values: { drivers: ['M.SDA', 'S.SDA'] },
+        },
+      ],
     },
     {
       name: 'a pull to ground does not lift the net',
-      design: link({ rail: '3v3', profile: 'lvcmos33', pin: od }, { rail: '3v3', profile: 'lvcmos33' }, {
-        net: { pull: { to: 'ground', ohms: 10000 } },
-      }),
-      findings: [{ messageId: 'onlyGroundPulls', severity: 'error', id: 'missing-pull:N:all-on', values: { drivers: ['D.Y'] } }],
+      design: link(
+        { rail: '3v3', profile: 'lvcmos33', pin: od },
+        { rail: '3v3', profile: 'lvcmos33' },
+        {
+          net: { pull: { to: 'ground', ohms: 10000 } },
+        },
+      ),
+      findings: [
+        { messageId: 'onlyGroundPulls', severity: 'error', id: 'missing-pull:N:all-on', values: { drivers: ['D.Y'] } },
+      ],
     },
     {
       name: 'ground pulls inside pins do not count either',
@@ -75,7 +100,13 @@ ruleTester(rule, {
       }),
       findings: [
         { messageId: 'noPull', severity: 'error', scenario: 'all-on', values: { drivers: ['M.SDA', 'S.SDA'] } },
-        { messageId: 'noPull', severity: 'error', scenario: 'io-off', id: 'missing-pull:SDA:io-off', values: { drivers: ['S.SDA'] } },
+        {
+          messageId: 'noPull',
+          severity: 'error',
+          scenario: 'io-off',
+          id: 'missing-pull:SDA:io-off',
+          values: { drivers: ['S.SDA'] },
+        },
       ],
     },
     {

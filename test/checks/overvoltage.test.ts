@@ -37,7 +37,11 @@ ruleTester(rule, {
     },
     {
       name: 'a pull to ground never raises the net',
-      design: link({ rail: '1v8', profile: 'lvcmos18' }, { rail: '1v8', profile: 'lvcmos18' }, { net: { pull: { to: 'ground', ohms: 10000 } } }),
+      design: link(
+        { rail: '1v8', profile: 'lvcmos18' },
+        { rail: '1v8', profile: 'lvcmos18' },
+        { net: { pull: { to: 'ground', ohms: 10000 } } },
+      ),
     },
     {
       // The issue's divider: judged at 5.25 × 3.333/(2.178 + 3.333) = 3.175 V, below 3.135 + 0.5 V.
@@ -45,7 +49,7 @@ ruleTester(rule, {
       design: divider(),
     },
     {
-      name: 'a series resistor into a pin with an injection limit is clamp-current\'s to judge',
+      name: "a series resistor into a pin with an injection limit is clamp-current's to judge",
       design: seriesClamp({ injectionMax: 5e-3 }),
     },
   ],
@@ -54,39 +58,65 @@ ruleTester(rule, {
       // Through 1 kΩ the open net still reaches 5.25 V; the clamp would carry (5.25 − 3.135)/950.
       name: 'a series resistor into a pin that states no injection limit',
       design: seriesClamp(),
-      findings: [{
-        messageId: 'throughResistance', severity: 'error', id: 'overvoltage:RX1:all-on:U2.A1',
-        values: { vNet: 5.25, viMax: 3.635, current: (5.25 - 3.135) / 950, source: 'U1.Y1' },
-      }],
+      findings: [
+        {
+          messageId: 'throughResistance',
+          severity: 'error',
+          id: 'overvoltage:RX1:all-on:U2.A1',
+          values: { vNet: 5.25, viMax: 3.635, current: (5.25 - 3.135) / 950, source: 'U1.Y1' },
+        },
+      ],
     },
     {
       // A CMOS input without tolerance: VDD + 0.5 V (the 3.3 V interface standards print this
       // form, restated), at the receiver rail's lowest 3.135 V, against the 5 V rail's 5.25 V.
       name: '5 V push-pull into a 3.3 V LVCMOS input',
       design: link({ rail: '5v0', profile: '74hc' }, { rail: '3v3', profile: 'lvcmos33' }),
-      findings: [{
-        messageId: 'tooHigh', severity: 'error', id: 'overvoltage:N:all-on:R.A', pins: ['R.A'],
-        values: { vNet: 5.25, viMax: 3.135 + 0.5, pin: 'R.A' },
-      }],
+      findings: [
+        {
+          messageId: 'tooHigh',
+          severity: 'error',
+          id: 'overvoltage:N:all-on:R.A',
+          pins: ['R.A'],
+          values: { vNet: 5.25, viMax: 3.135 + 0.5, pin: 'R.A' },
+        },
+      ],
     },
     {
-      name: 'a pin\'s own internal pull-up to a higher rail',
+      name: "a pin's own internal pull-up to a higher rail",
       design: design({
-        parts: [part('R', '1v8', 'lvcmos18', [input('A', { pull: { to: '3v3', ohms: 47000 } })]), part('D', '1v8', 'lvcmos18', [output('Y')])],
+        parts: [
+          part('R', '1v8', 'lvcmos18', [input('A', { pull: { to: '3v3', ohms: 47000 } })]),
+          part('D', '1v8', 'lvcmos18', [output('Y')]),
+        ],
         nets: [net('N', ['D.Y', 'R.A'])],
       }),
       findings: [
-        { messageId: 'tooHigh', severity: 'error', id: 'overvoltage:N:all-on:D.Y', values: { vNet: 3.465, viMax: 1.71 + 0.5 } },
-        { messageId: 'tooHigh', severity: 'error', id: 'overvoltage:N:all-on:R.A', values: { vNet: 3.465, viMax: 1.71 + 0.5 } },
+        {
+          messageId: 'tooHigh',
+          severity: 'error',
+          id: 'overvoltage:N:all-on:D.Y',
+          values: { vNet: 3.465, viMax: 1.71 + 0.5 },
+        },
+        {
+          messageId: 'tooHigh',
+          severity: 'error',
+          id: 'overvoltage:N:all-on:R.A',
+          values: { vNet: 3.465, viMax: 1.71 + 0.5 },
+        },
       ],
     },
     {
       // With the 5 V rail off the driver puts nothing on the net; with the 3.3 V rail off the
       // receiver is back-power's to judge. Only all-on remains.
       name: 'pins on an off rail neither drive nor are checked',
-      design: link({ rail: '5v0', profile: '74hc' }, { rail: '3v3', profile: 'lvcmos33' }, {
-        scenarios: [scenario('tx-off', ['5v0']), scenario('rx-off', ['3v3'])],
-      }),
+      design: link(
+        { rail: '5v0', profile: '74hc' },
+        { rail: '3v3', profile: 'lvcmos33' },
+        {
+          scenarios: [scenario('tx-off', ['5v0']), scenario('rx-off', ['3v3'])],
+        },
+      ),
       findings: [{ messageId: 'tooHigh', severity: 'error', scenario: 'all-on' }],
     },
     {

@@ -27,8 +27,26 @@ describe('drive-load: handbook fan-outs, exactly at the limit', () => {
   // fan-out 10; 74LS IOL 8 mA / IIL 0.4 mA and IOH 0.4 mA / IIH 20 µA, fan-out 20. At the fan-out
   // both loads equal the test currents exactly and pass; one more load exceeds both.
   it.each([
-    { family: 'standard TTL', profile: 'ttl', loads: 10, fails: false, iil: 1.6e-3, iih: 40e-6, iol: 16e-3, ioh: 0.4e-3 },
-    { family: 'standard TTL', profile: 'ttl', loads: 11, fails: true, iil: 1.6e-3, iih: 40e-6, iol: 16e-3, ioh: 0.4e-3 },
+    {
+      family: 'standard TTL',
+      profile: 'ttl',
+      loads: 10,
+      fails: false,
+      iil: 1.6e-3,
+      iih: 40e-6,
+      iol: 16e-3,
+      ioh: 0.4e-3,
+    },
+    {
+      family: 'standard TTL',
+      profile: 'ttl',
+      loads: 11,
+      fails: true,
+      iil: 1.6e-3,
+      iih: 40e-6,
+      iol: 16e-3,
+      ioh: 0.4e-3,
+    },
     { family: '74LS', profile: '74ls', loads: 20, fails: false, iil: 0.4e-3, iih: 20e-6, iol: 8e-3, ioh: 0.4e-3 },
     { family: '74LS', profile: '74ls', loads: 21, fails: true, iil: 0.4e-3, iih: 20e-6, iol: 8e-3, ioh: 0.4e-3 },
   ])('$family driving $loads of its own inputs: fails = $fails', ({ profile, loads, fails, iil, iih, iol, ioh }) => {
@@ -55,7 +73,7 @@ function bus(ohms: number, busCapacitance: number, maxRiseTime: number): Design 
   );
 }
 
-describe('edge-rate: the I2C-bus specification\'s pull-up limit Rp(max) = tr / (0.8473 · Cb)', () => {
+describe("edge-rate: the I2C-bus specification's pull-up limit Rp(max) = tr / (0.8473 · Cb)", () => {
   // Worked values from the specification's formula: standard-mode (1000 ns) at 400 pF → 2950.6 Ω;
   // fast-mode (300 ns) at 400 pF → 885.2 Ω. A whole ohm either side of the limit decides.
   it.each([
@@ -74,10 +92,16 @@ describe('edge-rate: single-pole RC constants', () => {
   // "2.2 RC" rule of thumb (common practice).
   const pulled = findingsOf(edgeRate, bus(10e3, 400e-12, 1e-9))[0]!;
   // 74HC driving 74HC through 1 nF of wiring (74HC rows: JESD7 as restated).
-  const driven = findingsOf(edgeRate, link(
-    { rail: '5v0', profile: '74hc' }, { rail: '5v0', profile: '74hc' }, { net: { wiringCapacitance: 1e-9, maxRiseTime: 1e-9 } },
-  ))[0]!;
-  const rise = (f: typeof pulled) => valuesOf(f, 'edge-rate') as FindingValues<'edge-rate'> & { riseTime: number; span: string };
+  const driven = findingsOf(
+    edgeRate,
+    link(
+      { rail: '5v0', profile: '74hc' },
+      { rail: '5v0', profile: '74hc' },
+      { net: { wiringCapacitance: 1e-9, maxRiseTime: 1e-9 } },
+    ),
+  )[0]!;
+  const rise = (f: typeof pulled) =>
+    valuesOf(f, 'edge-rate') as FindingValues<'edge-rate'> & { riseTime: number; span: string };
   const ratio = (f: typeof pulled) => {
     const v = valuesOf(f, 'edge-rate');
     if (!('riseTime' in v)) throw new Error(`${f.id} is not a rise time`);

@@ -68,9 +68,15 @@ const cases: Case[] = [
     // Advice: [966.7/0.95, 0.7 × 2950.6/1.05] = [1017.5, 1967.1] Ω, √ = 1414.7 Ω: E12 1.5 kΩ
     // (ratio 1.060, 1.2 kΩ is 1.179); largest E24 inside 1.8 kΩ.
     name: 'standard-mode, 3.3 V, 400 pF',
-    source: 'I2C-bus specification, pull-up sizing: Rp(min) = (VDD − VOL(max)) / IOL, Rp(max) = tr / (0.8473 × Cb); standard-mode tr 1000 ns, Cb 400 pF, VOL 0.4 V @ 3 mA',
+    source:
+      'I2C-bus specification, pull-up sizing: Rp(min) = (VDD − VOL(max)) / IOL, Rp(max) = tr / (0.8473 × Cb); standard-mode tr 1000 ns, Cb 400 pF, VOL 0.4 V @ 3 mA',
     design: twoWire(3.3, 400e-12, 1000e-9, 2200),
-    rMin: '966.7 Ω', rMax: '2950.6 Ω', empty: false, suggested: 1500, lowestPower: 1800, severity: 'info',
+    rMin: '966.7 Ω',
+    rMax: '2950.6 Ω',
+    empty: false,
+    suggested: 1500,
+    lowestPower: 1800,
+    severity: 'info',
   },
   {
     // Rp(max) at 200 pF = 5901.1 Ω. Advice [1017.5, 3934.1] Ω, √ = 2000.7 Ω: E12 2.2 kΩ (1.0996)
@@ -78,14 +84,24 @@ const cases: Case[] = [
     name: 'standard-mode, 3.3 V, 200 pF',
     source: 'I2C-bus specification, pull-up sizing (as above), Cb 200 pF',
     design: twoWire(3.3, 200e-12, 1000e-9, 2200),
-    rMin: '966.7 Ω', rMax: '5901.1 Ω', empty: false, suggested: 2200, lowestPower: 3900, severity: 'info',
+    rMin: '966.7 Ω',
+    rMax: '5901.1 Ω',
+    empty: false,
+    suggested: 2200,
+    lowestPower: 3900,
+    severity: 'info',
   },
   {
     // Rp(max) = 300 ns / (0.8473 × 400 pF) = 885.2 Ω < Rp(min) 966.7 Ω: no valid pull-up.
     name: 'fast-mode, 3.3 V, 400 pF: no valid pull-up',
     source: 'I2C-bus specification, pull-up sizing; fast-mode tr 300 ns, Cb 400 pF, VOL 0.4 V @ 3 mA',
     design: twoWire(3.3, 400e-12, 300e-9, 1000),
-    rMin: '966.7 Ω', rMax: '885.2 Ω', empty: true, suggested: null, lowestPower: null, severity: 'error',
+    rMin: '966.7 Ω',
+    rMax: '885.2 Ω',
+    empty: true,
+    suggested: null,
+    lowestPower: null,
+    severity: 'error',
   },
   {
     // Rp(min) = (5.5 − 0.4) / 20 mA = 255.0 Ω; Rp(max) = 120 ns / (0.8473 × 550 pF) = 257.5 Ω;
@@ -93,16 +109,27 @@ const cases: Case[] = [
     name: 'fast-mode plus, 5.5 V, 550 pF: no E24 value',
     source: 'I2C-bus specification, pull-up sizing; fast-mode plus tr 120 ns, Cb 550 pF, VOL 0.4 V @ 20 mA',
     design: twoWire(5.5, 550e-12, 120e-9, 256, { v: 0.4, i: 20e-3 }),
-    rMin: '255.0 Ω', rMax: '257.5 Ω', empty: false, suggested: null, lowestPower: null, severity: 'info',
+    rMin: '255.0 Ω',
+    rMax: '257.5 Ω',
+    empty: false,
+    suggested: null,
+    lowestPower: null,
+    severity: 'info',
   },
   {
     // Rmax = (4.75 − 2.4) / (4 × 20 µA + 0.1 mA) = 2.35 V / 0.18 mA = 13.06 kΩ;
     // Rmin = (5.25 − 0.5) / (8 mA − 4 × 0.4 mA) = 4.75 V / 6.4 mA = 742.2 Ω. Advice [781.3,
     // 12438] Ω (no rise limit; the 47 kΩ cap lies above), √ = 3117 Ω: E12 3.3 kΩ; largest E24 12 kΩ.
     name: '74LS open-collector with four 74LS loads',
-    source: 'handbook, open-collector TTL data pages: Rmax = (VCC,min − VOH) / (Σ leakage + Σ IIH), Rmin = (VCC,max − VOL) / (IOL − Σ IIL)',
+    source:
+      'handbook, open-collector TTL data pages: Rmax = (VCC,min − VOH) / (Σ leakage + Σ IIH), Rmin = (VCC,max − VOL) / (IOL − Σ IIL)',
     design: openCollector,
-    rMin: '742.2 Ω', rMax: '13.06 kΩ', empty: false, suggested: 3300, lowestPower: 12000, severity: 'info',
+    rMin: '742.2 Ω',
+    rMax: '13.06 kΩ',
+    empty: false,
+    suggested: 3300,
+    lowestPower: 12000,
+    severity: 'info',
   },
 ];
 
@@ -124,7 +151,13 @@ describe('pull-range reproduces published pull-up ranges', () => {
       const found = findingsOf(rule, c.design);
       expect(found.length).toBe(1);
       const f = found[0]!;
-      const v = f.values as { rMin: number | null; rMax: number | null; empty: boolean; suggested: number | null; lowestPower: number | null };
+      const v = f.values as {
+        rMin: number | null;
+        rMax: number | null;
+        empty: boolean;
+        suggested: number | null;
+        lowestPower: number | null;
+      };
       expect(asPrinted(v.rMin, c.rMin)).toBe(c.rMin);
       expect(asPrinted(v.rMax, c.rMax)).toBe(c.rMax);
       expect(v.empty).toBe(c.empty);

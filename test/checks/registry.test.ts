@@ -9,7 +9,12 @@ import { RULES } from '../../rules/checks/index.ts';
 import { declaredSeverities, type AnyRule } from '../../rules/checks/defineRule.ts';
 import { RULE_IDS } from '../../rules/model/ruleIds.ts';
 import {
-  readRulesSection, RULES_END, RULES_START, rulesMarkdown, rulesSection, withRulesSection,
+  readRulesSection,
+  RULES_END,
+  RULES_START,
+  rulesMarkdown,
+  rulesSection,
+  withRulesSection,
 } from '../../rules/checks/docs.ts';
 
 const root = new URL('../../', import.meta.url);
@@ -31,10 +36,13 @@ describe('the rule registry', () => {
     expect(ruleFiles.sort()).toEqual(RULE_IDS.map((id) => `${id}.ts`).sort());
   });
 
-  it.each(RULES.map((rule) => [rule.id, rule] as const))('%s is the default export of rules/checks/%s.ts', async (id, rule) => {
-    const module = (await import(`../../rules/checks/${id}.ts`)) as { default: AnyRule };
-    expect(module.default).toBe(rule);
-  });
+  it.each(RULES.map((rule) => [rule.id, rule] as const))(
+    '%s is the default export of rules/checks/%s.ts',
+    async (id, rule) => {
+      const module = (await import(`../../rules/checks/${id}.ts`)) as { default: AnyRule };
+      expect(module.default).toBe(rule);
+    },
+  );
 
   it.each(RULE_IDS.map((id) => [id, id]))('%s has its test table test/checks/%s.test.ts', (id) => {
     expect(exists(`test/checks/${id}.test.ts`), `test/checks/${id}.test.ts`).toBe(true);
@@ -73,13 +81,18 @@ describe("the README's rules section", () => {
     }
   });
 
-  const fake = [{
-    id: 'level-high',
-    meta: {
-      title: 'A *starred* title', severity: { error: 'when x < 0', warning: 'when x < 1' }, explanation: 'An <input> with a `tick` and [brackets].',
-      hint: 'Fix it.', messages: { m: () => '' },
+  const fake = [
+    {
+      id: 'level-high',
+      meta: {
+        title: 'A *starred* title',
+        severity: { error: 'when x < 0', warning: 'when x < 1' },
+        explanation: 'An <input> with a `tick` and [brackets].',
+        hint: 'Fix it.',
+        messages: { m: () => '' },
+      },
     },
-  }] as unknown as AnyRule[];
+  ] as unknown as AnyRule[];
 
   it.each([
     // Markup characters in the metadata are escaped; a bare "<" before a space is left alone.
@@ -103,7 +116,9 @@ describe("the README's rules section", () => {
 
   it('replaces only what stands between the markers', () => {
     const readme = `# R\n\nbefore\n\n${RULES_START}\nstale\n${RULES_END}\n\nafter\n`;
-    expect(withRulesSection(readme, fake)).toBe(`# R\n\nbefore\n\n${RULES_START}${rulesSection(fake)}${RULES_END}\n\nafter\n`);
+    expect(withRulesSection(readme, fake)).toBe(
+      `# R\n\nbefore\n\n${RULES_START}${rulesSection(fake)}${RULES_END}\n\nafter\n`,
+    );
     expect(rulesSection(fake)).toBe(`\n\n${rulesMarkdown(fake)}\n`);
   });
 });

@@ -32,13 +32,16 @@ describe('a design with a non-finite intermediate, past the reader', () => {
   it('its JSON report names the undecided numbers, holds null for them and validates', async () => {
     const io = fakeIo({ [FILE]: TEXT }, { SOURCE_DATE_EPOCH: '1767225600' });
     await main(['check', FILE, '--json'], io);
-    const report = JSON.parse(io.out) as { findings: { severity: string; message: string; values: Record<string, unknown> }[]; crossings: { worst: string; marginHigh: unknown; marginLow: unknown }[] };
+    const report = JSON.parse(io.out) as {
+      findings: { severity: string; message: string; values: Record<string, unknown> }[];
+      crossings: { worst: string; marginHigh: unknown; marginLow: unknown }[];
+    };
     expect(ReportSchema.safeParse(report).success).toBe(true);
     const undecided = report.findings.filter((f) => f.message.includes('cannot be guaranteed'));
     expect(undecided.length).toBeGreaterThan(0);
     for (const f of undecided) {
       expect(f.severity).toBe('error');
-      expect((f.values['undecidable'] as string[]).length).toBeGreaterThan(0);
+      expect((f.values.undecidable as string[]).length).toBeGreaterThan(0);
     }
     expect(report.crossings).toHaveLength(1);
     expect(report.crossings[0]).toMatchObject({ worst: 'error', marginHigh: null, marginLow: null });

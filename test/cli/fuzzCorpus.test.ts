@@ -35,7 +35,9 @@ const EXAMPLE = JSON.parse(EXAMPLE_TEXT) as Design;
 const FIXED_TIME = '2026-01-01T00:00:00.000Z';
 
 const ajv = new Ajv2020({ allErrors: true, strict: true, validateFormats: false });
-const validateJson = ajv.compile(JSON.parse(readFileSync(new URL('../../rules/schema/report.schema.json', import.meta.url), 'utf8')) as object);
+const validateJson = ajv.compile(
+  JSON.parse(readFileSync(new URL('../../rules/schema/report.schema.json', import.meta.url), 'utf8')) as object,
+);
 
 /** Everything a report must be, whatever the design. */
 function expectSound(report: Report): void {
@@ -52,7 +54,9 @@ function expectSound(report: Report): void {
 }
 
 describe('mutations of the example through the reader and main()', () => {
-  it('are refused with paths, or checked into a sound report with the right exit status', { timeout: 600_000 }, async () => {
+  it('are refused with paths, or checked into a sound report with the right exit status', {
+    timeout: 600_000,
+  }, async () => {
     await fc.assert(
       fc.asyncProperty(mutationsArb(EXTREME_NUMBERS), async (mutations) => {
         const text = JSON.stringify(mutate(EXAMPLE, mutations));
@@ -96,7 +100,9 @@ describe('designs that skip the reader with numbers JSON cannot carry', () => {
         }
         for (const c of report.crossings) {
           const analysis = result.nets.get(c.scenario)?.get(c.net)?.view.analysis;
-          const undecided = [analysis?.worstHigh, analysis?.worstLow].some((m) => typeof m === 'number' && !Number.isFinite(m));
+          const undecided = [analysis?.worstHigh, analysis?.worstLow].some(
+            (m) => typeof m === 'number' && !Number.isFinite(m),
+          );
           if (undecided) expect(c.worst).toBe('error');
         }
       }),

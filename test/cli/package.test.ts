@@ -34,7 +34,11 @@ beforeAll(() => {
   expect(tgz).toBeDefined();
   mkdirSync(home);
   // An empty folder, no network: everything the command needs must be in the tarball.
-  const installed = spawn('npm', ['install', '--offline', '--no-audit', '--no-fund', '--no-package-lock', join(work, tgz!)], home);
+  const installed = spawn(
+    'npm',
+    ['install', '--offline', '--no-audit', '--no-fund', '--no-package-lock', join(work, tgz!)],
+    home,
+  );
   expect(installed.status, installed.err).toBe(0);
   copyFileSync(EXAMPLE, join(home, 'design.json'));
 }, TIMEOUT);
@@ -42,7 +46,9 @@ beforeAll(() => {
 describe('the packed package, installed into an empty folder', () => {
   it('installs the command alone: no other package, no transpiler', () => {
     expect(readdirSync(join(home, 'node_modules')).filter((f) => !f.startsWith('.'))).toEqual(['railcross']);
-    const pkg = JSON.parse(readFileSync(join(home, 'node_modules/railcross/package.json'), 'utf8')) as { bin: Record<string, string> };
+    const pkg = JSON.parse(readFileSync(join(home, 'node_modules/railcross/package.json'), 'utf8')) as {
+      bin: Record<string, string>;
+    };
     expect(pkg.bin.railcross).toMatch(/\.mjs$/);
     const bin = readFileSync(join(home, 'node_modules/railcross', pkg.bin.railcross!), 'utf8');
     expect(bin.startsWith('#!/usr/bin/env node\n')).toBe(true);
@@ -51,46 +57,70 @@ describe('the packed package, installed into an empty folder', () => {
     expect(bare).toEqual([]);
   });
 
-  it('npx railcross check FILE --json: exit 1 (the example has errors) and the report', () => {
-    const r = npx(['check', 'design.json', '--json']);
-    expect(r.status, r.err).toBe(1);
-    const report = JSON.parse(r.out) as { format: string; generatedAt: string; summary: { error: number } };
-    expect(report.format).toBe('railcross.report');
-    expect(report.generatedAt).toBe('2026-01-01T00:00:00.000Z');
-    expect(report.summary.error).toBeGreaterThan(0);
-    expect(r.err).toBe('');
-  }, TIMEOUT);
+  it(
+    'npx railcross check FILE --json: exit 1 (the example has errors) and the report',
+    () => {
+      const r = npx(['check', 'design.json', '--json']);
+      expect(r.status, r.err).toBe(1);
+      const report = JSON.parse(r.out) as { format: string; generatedAt: string; summary: { error: number } };
+      expect(report.format).toBe('railcross.report');
+      expect(report.generatedAt).toBe('2026-01-01T00:00:00.000Z');
+      expect(report.summary.error).toBeGreaterThan(0);
+      expect(r.err).toBe('');
+    },
+    TIMEOUT,
+  );
 
-  it('npx railcross check FILE: the text report', () => {
-    const r = npx(['check', 'design.json']);
-    expect(r.status, r.err).toBe(1);
-    expect(r.out).toMatch(/^Railcross check: Greenhouse irrigation controller$/m);
-  }, TIMEOUT);
+  it(
+    'npx railcross check FILE: the text report',
+    () => {
+      const r = npx(['check', 'design.json']);
+      expect(r.status, r.err).toBe(1);
+      expect(r.out).toMatch(/^Railcross check: Greenhouse irrigation controller$/m);
+    },
+    TIMEOUT,
+  );
 
-  it('npx railcross check FILE --pdf: the PDF, with the fonts the package carries', () => {
-    const r = npx(['check', 'design.json', '--pdf', 'report.pdf', '--paper', 'letter', '--quiet']);
-    expect(r.status, r.err).toBe(1);
-    expect(readFileSync(join(home, 'report.pdf')).subarray(0, 5).toString('latin1')).toBe('%PDF-');
-  }, TIMEOUT);
+  it(
+    'npx railcross check FILE --pdf: the PDF, with the fonts the package carries',
+    () => {
+      const r = npx(['check', 'design.json', '--pdf', 'report.pdf', '--paper', 'letter', '--quiet']);
+      expect(r.status, r.err).toBe(1);
+      expect(readFileSync(join(home, 'report.pdf')).subarray(0, 5).toString('latin1')).toBe('%PDF-');
+    },
+    TIMEOUT,
+  );
 
-  it('profiles: exit 0 and the library with sources', () => {
-    const r = npx(['profiles']);
-    expect(r.status, r.err).toBe(0);
-    expect(r.out).toMatch(/^ttl: Standard TTL/m);
-  }, TIMEOUT);
+  it(
+    'profiles: exit 0 and the library with sources',
+    () => {
+      const r = npx(['profiles']);
+      expect(r.status, r.err).toBe(0);
+      expect(r.out).toMatch(/^ttl: Standard TTL/m);
+    },
+    TIMEOUT,
+  );
 
-  it('an invalid file: exit 2 and the place on stderr', () => {
-    const r = npx(['check', 'missing.json']);
-    expect(r.status).toBe(2);
-    expect(r.err).toMatch(/cannot read missing\.json/);
-  }, TIMEOUT);
+  it(
+    'an invalid file: exit 2 and the place on stderr',
+    () => {
+      const r = npx(['check', 'missing.json']);
+      expect(r.status).toBe(2);
+      expect(r.err).toMatch(/cannot read missing\.json/);
+    },
+    TIMEOUT,
+  );
 });
 
-describe('the repository\'s own bin (built by npm install, or by the pack above)', () => {
-  it('npx railcross from the repository root', () => {
-    expect(existsSync(join(ROOT, 'dist-cli/railcross.mjs'))).toBe(true);
-    const r = npx(['check', 'rules/examples/greenhouse.json', '--format', 'md'], ROOT);
-    expect(r.status, r.err).toBe(1);
-    expect(r.out).toMatch(/^# Railcross check: Greenhouse irrigation controller$/m);
-  }, TIMEOUT);
+describe("the repository's own bin (built by npm install, or by the pack above)", () => {
+  it(
+    'npx railcross from the repository root',
+    () => {
+      expect(existsSync(join(ROOT, 'dist-cli/railcross.mjs'))).toBe(true);
+      const r = npx(['check', 'rules/examples/greenhouse.json', '--format', 'md'], ROOT);
+      expect(r.status, r.err).toBe(1);
+      expect(r.out).toMatch(/^# Railcross check: Greenhouse irrigation controller$/m);
+    },
+    TIMEOUT,
+  );
 });

@@ -19,7 +19,9 @@ interface Expected {
 
 const DIR = new URL('../fixtures/regressions/', import.meta.url);
 const expected = JSON.parse(readFileSync(new URL('expected.json', DIR), 'utf8')) as Record<string, Expected | string>;
-const files = readdirSync(DIR).filter((f) => f.endsWith('.railcross.json')).sort();
+const files = readdirSync(DIR)
+  .filter((f) => f.endsWith('.railcross.json'))
+  .sort();
 const entries = Object.entries(expected).filter((e): e is [string, Expected] => typeof e[1] === 'object');
 
 describe('regression files', () => {

@@ -10,13 +10,20 @@ describe('ChunkedMap', () => {
     fc.assert(
       fc.property(
         fc.array(fc.tuple(fc.string({ maxLength: 3 }), fc.integer()), { maxLength: 200 }),
-        fc.array(fc.array(fc.tuple(fc.string({ maxLength: 3 }), fc.option(fc.integer(), { nil: undefined })), { maxLength: 40 }), { maxLength: 30 }),
+        fc.array(
+          fc.array(fc.tuple(fc.string({ maxLength: 3 }), fc.option(fc.integer(), { nil: undefined })), {
+            maxLength: 40,
+          }),
+          { maxLength: 30 },
+        ),
         (start, edits) => {
           const model = new Map(start);
           let map = ChunkedMap.from(start);
           const history: [ChunkedMap<number>, [string, number][]][] = [[map, sorted(model)]];
           for (const edit of edits) {
-            for (const [k, v] of edit) if (v === undefined) model.delete(k); else model.set(k, v);
+            for (const [k, v] of edit)
+              if (v === undefined) model.delete(k);
+              else model.set(k, v);
             map = map.with(edit);
             history.push([map, sorted(model)]);
             expect(map.size).toBe(model.size);
@@ -58,10 +65,15 @@ describe('ChunkedMap', () => {
       for (const v of b.values()) n += v;
       return { n };
     };
-    const sum = (into: { n: number }, p: { n: number }) => { into.n += p.n; };
+    const sum = (into: { n: number }, p: { n: number }) => {
+      into.n += p.n;
+    };
     expect(tallyOf(m, cache, measure, sum, () => ({ n: 0 })).n).toBe(1000);
     const first = measured;
-    const next = m.with([['P3', 5], ['new', 2]]);
+    const next = m.with([
+      ['P3', 5],
+      ['new', 2],
+    ]);
     expect(tallyOf(next, cache, measure, sum, () => ({ n: 0 })).n).toBe(1006);
     expect(measured - first).toBeLessThanOrEqual(2);
   });

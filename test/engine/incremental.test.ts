@@ -28,11 +28,17 @@ describe('incremental check', () => {
       fc.property(
         fc.integer({ min: 1, max: 2 ** 31 - 1 }),
         fc.integer({ min: 3, max: 14 }),
-        fc.array(fc.tuple(fc.constantFrom(...EDIT_KINDS), fc.integer({ min: 1, max: 2 ** 31 - 1 })), { minLength: 1, maxLength: 12 }),
+        fc.array(fc.tuple(fc.constantFrom(...EDIT_KINDS), fc.integer({ min: 1, max: 2 ** 31 - 1 })), {
+          minLength: 1,
+          maxLength: 12,
+        }),
         (seed, parts, edits) => {
           // Half the designs carry parts between chips (version 2), joining neighbouring nets.
           let design = generateDesign(seed, {
-            parts, faultRate: 0.3, wiring: seed % 2 === 0 ? 'random' : 'board', discretes: seed % 3 === 0 ? 0 : 0.35,
+            parts,
+            faultRate: 0.3,
+            wiring: seed % 2 === 0 ? 'random' : 'board',
+            discretes: seed % 3 === 0 ? 0 : 0.35,
           });
           let result = check(design);
           for (const [kind, editSeed] of edits) {

@@ -13,7 +13,8 @@ import type { Design } from '../../rules/model/schema.ts';
 import { validateDesign } from '../../rules/model/reader.ts';
 import { diodeLink, divider, fetBus, seriesClamp } from '../support/paths.ts';
 
-const close = (a: number, b: number, rel = 1e-9) => expect(Math.abs(a - b)).toBeLessThanOrEqual(rel * Math.max(Math.abs(a), Math.abs(b)) + 1e-15);
+const close = (a: number, b: number, rel = 1e-9) =>
+  expect(Math.abs(a - b)).toBeLessThanOrEqual(rel * Math.max(Math.abs(a), Math.abs(b)) + 1e-15);
 
 function viewOf(d: Design, netId: string, state = 'all-on'): NetView {
   const read = validateDesign(d);
@@ -26,7 +27,16 @@ describe('nodal solver', () => {
     {
       // Ohm's law: two equal resistors from 10 V to 0 V halve it (common practice).
       name: 'a divider of two equal resistors',
-      net: { n: 3, fixed: [10, undefined, 0], links: [{ a: 0, b: 1, g: 1e-3 }, { a: 1, b: 2, g: 1e-3 }], ties: [], inject: [0, 0, 0] },
+      net: {
+        n: 3,
+        fixed: [10, undefined, 0],
+        links: [
+          { a: 0, b: 1, g: 1e-3 },
+          { a: 1, b: 2, g: 1e-3 },
+        ],
+        ties: [],
+        inject: [0, 0, 0],
+      },
       expect: [10, 5, 0],
     },
     {
@@ -44,29 +54,46 @@ describe('nodal solver', () => {
     {
       // Millman: 5 V and 0 V through 1 kΩ and 3 kΩ meet at 5 × 3/4 = 3.75 V (common practice).
       name: 'two sources through unequal resistors',
-      net: { n: 1, fixed: [undefined], links: [], ties: [{ a: 0, g: 1e-3, v: 5 }, { a: 0, g: 1 / 3e3, v: 0 }], inject: [0] },
+      net: {
+        n: 1,
+        fixed: [undefined],
+        links: [],
+        ties: [
+          { a: 0, g: 1e-3, v: 5 },
+          { a: 0, g: 1 / 3e3, v: 0 },
+        ],
+        inject: [0],
+      },
       expect: [3.75],
     },
   ];
   it('a resistance that is not a number decides nothing: every node is NaN, never a skipped link', () => {
-    const got = solve({ n: 2, fixed: [5, undefined], links: [{ a: 0, b: 1, g: 1 / Number.NaN }], ties: [], inject: [0, 0] });
+    const got = solve({
+      n: 2,
+      fixed: [5, undefined],
+      links: [{ a: 0, b: 1, g: 1 / Number.NaN }],
+      ties: [],
+      inject: [0, 0],
+    });
     expect(got.every((v) => Number.isNaN(v))).toBe(true);
   });
 
   it.each(cases)('$name', ({ net, expect: want }) => {
     const got = solve(net);
-    want.forEach((w, k) => (w === undefined ? expect(got[k]).toBeUndefined() : close(got[k]!, w)));
+    want.forEach((w, k) => {
+      w === undefined ? expect(got[k]).toBeUndefined() : close(got[k]!, w);
+    });
   });
 });
 
-describe('the divider (the issue\'s reference case, worked by hand there)', () => {
+describe("the divider (the issue's reference case, worked by hand there)", () => {
   // k = R2/(R1 + R2); k_min = 3.267/(2.222 + 3.267) = 0.5952, k_max = 3.333/(2.178 + 3.333) = 0.6048.
   const kMin = 3267 / (2222 + 3267);
   const kMax = 3333 / (2178 + 3333);
   const view = viewOf(divider(), 'RX33');
   const pair = view.analysis.pairs.find((p) => p.driver === 'U1.Y' && p.receiver === 'U2.A')!;
 
-  it('k at the tolerance ends is the issue\'s 0.5952 and 0.6048', () => {
+  it("k at the tolerance ends is the issue's 0.5952 and 0.6048", () => {
     expect(kMin).toBeCloseTo(0.5952, 4);
     expect(kMax).toBeCloseTo(0.6048, 4);
   });
@@ -101,7 +128,7 @@ describe('the divider (the issue\'s reference case, worked by hand there)', () =
     expect(Math.log(9) * 1320 * 10e-12).toBeCloseTo(29.0e-9, 10);
   });
 
-  it('the driver\'s load includes the divider current, 5.25 V / (2.178 + 3.267) kΩ at most', () => {
+  it("the driver's load includes the divider current, 5.25 V / (2.178 + 3.267) kΩ at most", () => {
     const a = viewOf(divider(), 'TX5');
     // Plus the receiver's 5 µA input current (lvcmos33, from memory), drawn through the resistors.
     const r1 = 2178;
@@ -110,7 +137,7 @@ describe('the divider (the issue\'s reference case, worked by hand there)', () =
   });
 });
 
-describe('clamp current through a series resistor (the issue\'s case)', () => {
+describe("clamp current through a series resistor (the issue's case)", () => {
   it('1 kΩ − 5 % from 5.25 V into a 3.135 V rail: (5.25 − 3.135)/950 = 2.23 mA', () => {
     const view = viewOf(seriesClamp(), 'RX1');
     const pin = view.pins.find((p) => p.key === 'U2.A1')!;
@@ -121,7 +148,7 @@ describe('clamp current through a series resistor (the issue\'s case)', () => {
   });
 });
 
-describe('FET shifter pairs (the I2C-bus specification\'s level-shifting section)', () => {
+describe("FET shifter pairs (the I2C-bus specification's level-shifting section)", () => {
   it('far-side low = VOL + I_far · RDS(on), I_far the far pull-up at VOL (resistor at its low end)', () => {
     const view = viewOf(fetBus({ rdsOnMax: 6 }), 'SDA_H');
     const pair = view.analysis.pairs.find((p) => p.driver === 'U2.SDA' && p.receiver === 'U1.SDA')!;
@@ -133,14 +160,14 @@ describe('FET shifter pairs (the I2C-bus specification\'s level-shifting section
     expect(pair.via).toBe('Q1');
   });
 
-  it('each side\'s high is its own pull-up (no input currents here: Vpull,min)', () => {
+  it("each side's high is its own pull-up (no input currents here: Vpull,min)", () => {
     const view = viewOf(fetBus(), 'SDA_L');
     const pair = view.analysis.pairs.find((p) => p.driver === 'U1.SDA' && p.receiver === 'U2.SDA')!;
     close(pair.high!.out, 1.71);
     close(pair.high!.threshold, 0.7 * 1.71);
   });
 
-  it('the driver\'s low load counts both pull-ups: 1.49 V/4.653 kΩ + 3.065 V/4.653 kΩ', () => {
+  it("the driver's low load counts both pull-ups: 1.49 V/4.653 kΩ + 3.065 V/4.653 kΩ", () => {
     const view = viewOf(fetBus(), 'SDA_L');
     close(view.loads.get('U2.SDA')!.low, 1.49 / 4653 + 3.065 / 4653);
   });

@@ -20,14 +20,25 @@ function board(states: PinState[]) {
 }
 
 const ids = (d: ReturnType<typeof board>, scenario: string) =>
-  check(d).findings.filter((f) => f.scenario === scenario && f.severity !== 'info').map((f) => `${f.rule}/${f.severity}`).sort();
+  check(d)
+    .findings.filter((f) => f.scenario === scenario && f.severity !== 'info')
+    .map((f) => `${f.rule}/${f.severity}`)
+    .sort();
 
 describe('pin states in a power state', () => {
   it.each<[string, PinState[], string[]]>([
     // Nothing drives the enable while the controller's pin is an input: the valve driver's input floats.
-    ['the enable output is an input at reset: a floating enable is an error', [{ pin: 'U1.EN', role: 'input' }], ['floating-input/error']],
+    [
+      'the enable output is an input at reset: a floating enable is an error',
+      [{ pin: 'U1.EN', role: 'input' }],
+      ['floating-input/error'],
+    ],
     // A weak pull-down holds it low: no finding.
-    ['with a 40 kΩ pull-down at reset the enable is held low', [{ pin: 'U1.EN', role: 'input', pull: { to: 'ground', ohms: 40e3 } }], []],
+    [
+      'with a 40 kΩ pull-down at reset the enable is held low',
+      [{ pin: 'U1.EN', role: 'input', pull: { to: 'ground', ohms: 40e3 } }],
+      [],
+    ],
     // No state given for the pin: the reset state is judged as every rail on.
     ['no pin state: as with every rail on', [], []],
   ])('%s', (_name, states, expected) => {
@@ -38,9 +49,12 @@ describe('pin states in a power state', () => {
     expect(ids(d, 'all-on')).toEqual([]);
   });
 
-  it('a pin state\'s pull: null takes the pin\'s own pull away', () => {
+  it("a pin state's pull: null takes the pin's own pull away", () => {
     const d = design({
-      parts: [part('U1', '3v3', 'mcu-gpio', [output('EN', { drive: 'open-drain', pull: { to: '3v3', ohms: 40e3 } })]), part('U3', '3v3', '74hc', [input('EN')])],
+      parts: [
+        part('U1', '3v3', 'mcu-gpio', [output('EN', { drive: 'open-drain', pull: { to: '3v3', ohms: 40e3 } })]),
+        part('U3', '3v3', '74hc', [input('EN')]),
+      ],
       nets: [net('N', ['U1.EN', 'U3.EN'])],
       scenarios: [{ id: 'reset', label: 'Reset', off: [], pins: [{ pin: 'U1.EN', pull: null }] }],
     });

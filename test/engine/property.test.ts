@@ -41,7 +41,9 @@ describe('check() over random valid designs', { timeout: 120_000 }, () => {
           const net = design.nets[index]!;
           const waived: Design = {
             ...design,
-            nets: design.nets.map((n, i) => (i === index ? { ...n, waivers: [...(n.waivers ?? []), { rule, note: 'reviewed on the bench' }] } : n)),
+            nets: design.nets.map((n, i) =>
+              i === index ? { ...n, waivers: [...(n.waivers ?? []), { rule, note: 'reviewed on the bench' }] } : n,
+            ),
           };
           const before = check(design).findings;
           const after = check(waived).findings;
@@ -59,15 +61,19 @@ describe('check() over random valid designs', { timeout: 120_000 }, () => {
 
   it('removing every pin of a net removes its findings', () => {
     fc.assert(
-      fc.property(designArb().filter((d) => d.nets.length > 0), fc.nat(), (design, k) => {
-        const index = k % design.nets.length;
-        const id = design.nets[index]!.id;
-        const emptied: Design = {
-          ...design,
-          nets: design.nets.map((n, i) => (i === index ? { ...n, pins: [], route: [] } : n)),
-        };
-        expect(check(emptied).findings.filter((f) => f.net === id)).toEqual([]);
-      }),
+      fc.property(
+        designArb().filter((d) => d.nets.length > 0),
+        fc.nat(),
+        (design, k) => {
+          const index = k % design.nets.length;
+          const id = design.nets[index]!.id;
+          const emptied: Design = {
+            ...design,
+            nets: design.nets.map((n, i) => (i === index ? { ...n, pins: [], route: [] } : n)),
+          };
+          expect(check(emptied).findings.filter((f) => f.net === id)).toEqual([]);
+        },
+      ),
       RUNS,
     );
   });

@@ -10,17 +10,26 @@ import { design, input, net, output, part, rail } from '../support/build.ts';
 // Common practice, 5 V: the trade's CMOS levels (out 4.4/0.5 V, in 3.5/1.5 V). A design-local
 // profile carries them, since no built-in family is defined by exactly these round numbers.
 const tradeCmos: Profile = {
-  id: 'cmos5-trade', label: '5 V CMOS (trade levels)', source: 'common practice (5 V CMOS levels as the trade quotes them)',
+  id: 'cmos5-trade',
+  label: '5 V CMOS (trade levels)',
+  source: 'common practice (5 V CMOS levels as the trade quotes them)',
   params: { vih: 3.5, vil: 1.5, voh: [{ v: 4.4, i: 1e-3 }], vol: [{ v: 0.5, i: 1e-3 }] },
 };
 // Common practice, 5 V: the trade's TTL levels (out 2.4/0.4 V, in 2.0/0.8 V).
 const tradeTtl: Profile = {
-  id: 'ttl-trade', label: '5 V TTL (trade levels)', source: 'common practice (5 V TTL levels as the trade quotes them)',
+  id: 'ttl-trade',
+  label: '5 V TTL (trade levels)',
+  source: 'common practice (5 V TTL levels as the trade quotes them)',
   params: { vih: 2.0, vil: 0.8, voh: [{ v: 2.4, i: 1e-3 }], vol: [{ v: 0.4, i: 1e-3 }] },
 };
 
 /** The single pair's analysis of driver profile → receiver profile on given rails. */
-function pair(driver: string, receiver: string, rails = { d: 'r', r: 'r' }, railsList = [rail('r', 5, { tolerance: 0 })]) {
+function pair(
+  driver: string,
+  receiver: string,
+  rails = { d: 'r', r: 'r' },
+  railsList = [rail('r', 5, { tolerance: 0 })],
+) {
   const d = design({
     rails: railsList,
     profiles: [tradeCmos, tradeTtl],
@@ -29,16 +38,20 @@ function pair(driver: string, receiver: string, rails = { d: 'r', r: 'r' }, rail
   });
   const result = check(d);
   const p = result.nets.get('all-on')!.get('N')!.view.analysis.pairs[0]!;
-  return { high: p.high!, low: p.low!, findings: result.findings.filter((f) => f.rule === 'level-high' || f.rule === 'level-low') };
+  return {
+    high: p.high!,
+    low: p.low!,
+    findings: result.findings.filter((f) => f.rule === 'level-high' || f.rule === 'level-low'),
+  };
 }
 
 describe('5 V levels of the trade (common practice)', () => {
   const cases = [
     // [driver, receiver, NMH, NML, high status, low status]
-    ['ttl-trade', 'ttl-trade', 0.4, 0.4, 'pass', 'pass'],          // TTL: 0.4 V on both sides
-    ['cmos5-trade', 'cmos5-trade', 0.9, 1.0, 'pass', 'pass'],      // CMOS: 0.9 V high, 1.0 V low
-    ['cmos5-trade', 'ttl-trade', 2.4, 0.3, 'pass', 'pass'],        // CMOS driving TTL passes, 0.3 V low
-    ['ttl-trade', 'cmos5-trade', -1.1, 1.1, 'fail', 'pass'],       // TTL driving 5 V CMOS fails high
+    ['ttl-trade', 'ttl-trade', 0.4, 0.4, 'pass', 'pass'], // TTL: 0.4 V on both sides
+    ['cmos5-trade', 'cmos5-trade', 0.9, 1.0, 'pass', 'pass'], // CMOS: 0.9 V high, 1.0 V low
+    ['cmos5-trade', 'ttl-trade', 2.4, 0.3, 'pass', 'pass'], // CMOS driving TTL passes, 0.3 V low
+    ['ttl-trade', 'cmos5-trade', -1.1, 1.1, 'fail', 'pass'], // TTL driving 5 V CMOS fails high
   ] as const;
   it.each(cases)('%s → %s', (driver, receiver, nmh, nml, hs, ls) => {
     const { high, low } = pair(driver, receiver);
@@ -82,7 +95,10 @@ describe('built-in families through the engine', () => {
   });
 
   it('on two rails the driver is judged at its lowest and the receiver at its highest', () => {
-    const { high } = pair('74hc', '74hc', { d: 'a', r: 'b' }, [rail('a', 5, { tolerance: 0.1 }), rail('b', 5, { tolerance: 0.1 })]);
+    const { high } = pair('74hc', '74hc', { d: 'a', r: 'b' }, [
+      rail('a', 5, { tolerance: 0.1 }),
+      rail('b', 5, { tolerance: 0.1 }),
+    ]);
     expect(high.margin).toBeCloseTo(4.5 - 0.1 - (0.675 * 5.5 + 0.15), 9);
     expect(high.driverVdd).toBeCloseTo(4.5, 12);
     expect(high.receiverVdd).toBeCloseTo(5.5, 12);

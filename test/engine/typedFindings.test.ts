@@ -22,7 +22,7 @@ function marginOf(f: Finding): number | null | undefined {
 }
 
 describe('typed findings', () => {
-  it('narrow by rule: the example\'s planted level-high error reads its margin', () => {
+  it("narrow by rule: the example's planted level-high error reads its margin", () => {
     const f = result.findings.find((x) => x.rule === 'level-high' && x.severity === 'error')!;
     expect(marginOf(f)).toBeLessThan(0);
     expect(valuesOf(f, 'level-high').margin).toBe(marginOf(f));

@@ -60,7 +60,11 @@ const plantedErrors: Planted[] = [
   {
     id: 'drive-load:STATUS:all-on:U3.STATUS',
     values: {
-      driver: 'U3.STATUS', loadLow: 3 * TTL_IIL, ratedLow: HC_IO_TEST, loadHigh: 3 * TTL_IIH, ratedHigh: HC_IO_TEST,
+      driver: 'U3.STATUS',
+      loadLow: 3 * TTL_IIL,
+      ratedLow: HC_IO_TEST,
+      loadHigh: 3 * TTL_IIH,
+      ratedHigh: HC_IO_TEST,
       ioMax: null,
     },
   },
@@ -102,14 +106,23 @@ const plantedErrors: Planted[] = [
   // restated), 1.71 V rail: (1.71 − 0.342)/4653 + (3.465 − 0.342)/990 = 3.45 mA > 3 mA.
   {
     id: 'fet-shifter:SCL2_L:all-on:Q2:U20.SCL:sink',
-    values: { driver: 'U20.SCL', iLow: (V18.min - 0.2 * V18.min) / 4653, iHigh: (V33.max - 0.2 * V18.min) / 990, rated: 3e-3 },
+    values: {
+      driver: 'U20.SCL',
+      iLow: (V18.min - 0.2 * V18.min) / 4653,
+      iHigh: (V33.max - 0.2 * V18.min) / 990,
+      rated: 3e-3,
+    },
   },
   // The same sensor's low load as drive-load bounds it (catalogue: bounds at the rails' ends):
   // its own pull-up at 1.89 V less VOL 0.378 V, the far pull-up at 3.465 V less the lowest VOL
   // 0.342 V, and the controller's 1 µA input current (the example's own).
   {
     id: 'drive-load:SCL2_L:all-on:U20.SCL',
-    values: { driver: 'U20.SCL', loadLow: (1.8 * 1.05 - 0.2 * 1.8 * 1.05) / 4653 + (V33.max - 0.2 * V18.min) / 990 + U1_I, ratedLow: 3e-3 },
+    values: {
+      driver: 'U20.SCL',
+      loadLow: (1.8 * 1.05 - 0.2 * 1.8 * 1.05) / 4653 + (V33.max - 0.2 * V18.min) / 990 + U1_I,
+      ratedLow: 3e-3,
+    },
   },
   // Standby: the 1.8 V rail is off, the 3.3 V pull-ups stay: 3.465 V on an unpowered pin whose
   // clamp diode conducts above 0.5 V (common practice).
@@ -123,15 +136,23 @@ const plantedWarnings: Planted[] = [
   // VIL = 0.3 × 1.71 V (I2C-bus specification, restated): 0.4 + 5 × (1.31/4653 + 10 µA).
   {
     id: 'level-low:SCL2_L:all-on:U1.SCL2>U20.SCL',
-    values: { vol: 0.4 + 5 * ((V18.min - 0.4) / 4653 + 10e-6), vil: 0.3 * V18.min, driverVdd: V33.min, receiverVdd: V18.min },
+    values: {
+      vol: 0.4 + 5 * ((V18.min - 0.4) / 4653 + 10e-6),
+      vil: 0.3 * V18.min,
+      driverVdd: V33.min,
+      receiverVdd: V18.min,
+    },
   },
   // 15 m of cable to the flow meter (1.5 nF, the example's own) on the controller's internal
   // 40 kΩ pull-up: ln(7/3) × 40 kΩ × 1.505 nF ≈ 51 µs, against the 10 µs the pulse counter needs.
   {
     id: 'edge-rate:FLOW:all-on',
     values: {
-      riseTime: RISE_30_70 * 40e3 * (1.5e-9 + U1_CIN), span: '30-70', capacitance: 1.5e-9 + U1_CIN,
-      resistance: 40e3, limit: 10e-6,
+      riseTime: RISE_30_70 * 40e3 * (1.5e-9 + U1_CIN),
+      span: '30-70',
+      capacitance: 1.5e-9 + U1_CIN,
+      resistance: 40e3,
+      limit: 10e-6,
     },
   },
 ];
@@ -189,40 +210,58 @@ describe('greenhouse irrigation controller example', () => {
   const design = read.ok ? read.design : (JSON.parse(text) as never);
   const result = check(design);
   const ids = (severity: string) =>
-    result.findings.filter((f) => f.severity === severity && f.waived === undefined).map((f) => f.id).sort();
+    result.findings
+      .filter((f) => f.severity === severity && f.waived === undefined)
+      .map((f) => f.id)
+      .sort();
   it('has exactly the planted faults at error level', () => {
-    const expected = [...plantedErrors.map((p) => p.id), ...errorsAgainInStandby.map(inStandby), ...errorsAgainAtReset.map(atReset)];
+    const expected = [
+      ...plantedErrors.map((p) => p.id),
+      ...errorsAgainInStandby.map(inStandby),
+      ...errorsAgainAtReset.map(atReset),
+    ];
     expect(ids('error')).toEqual(expected.sort());
   });
 
   it('has exactly the planted warnings', () => {
-    const expected = [...plantedWarnings.map((p) => p.id), ...warningsAgainInStandby.map(inStandby), ...warningsAgainAtReset.map(atReset)];
+    const expected = [
+      ...plantedWarnings.map((p) => p.id),
+      ...warningsAgainInStandby.map(inStandby),
+      ...warningsAgainAtReset.map(atReset),
+    ];
     expect(ids('warning')).toEqual(expected.sort());
   });
 
   it.each([...plantedErrors, ...plantedWarnings])('$id carries its numbers and corner', ({ id, values }) => {
     const f = result.findings.find((x) => x.id === id);
     expect(f, id).toBeDefined();
-    for (const [k, v] of Object.entries(values)) expectClose((f!.values as Readonly<Record<string, unknown>>)[k], v, `${id} ${k}`);
+    for (const [k, v] of Object.entries(values))
+      expectClose((f!.values as Readonly<Record<string, unknown>>)[k], v, `${id} ${k}`);
     expect(f!.message).toMatch(/\d/);
   });
 
-  it.each([...errorsAgainAtReset, ...warningsAgainAtReset])('%s is found again at reset with the same numbers', (id) => {
-    const allOn = result.findings.find((f) => f.id === id);
-    const reset = result.findings.find((f) => f.id === atReset(id));
-    expect(reset, atReset(id)).toBeDefined();
-    expect(reset!.severity).toBe(allOn!.severity);
-    expect(reset!.values).toEqual(allOn!.values);
-  });
+  it.each([...errorsAgainAtReset, ...warningsAgainAtReset])(
+    '%s is found again at reset with the same numbers',
+    (id) => {
+      const allOn = result.findings.find((f) => f.id === id);
+      const reset = result.findings.find((f) => f.id === atReset(id));
+      expect(reset, atReset(id)).toBeDefined();
+      expect(reset!.severity).toBe(allOn!.severity);
+      expect(reset!.values).toEqual(allOn!.values);
+    },
+  );
 
-  it.each([...errorsAgainInStandby, ...warningsAgainInStandby])('%s is found again in standby with the same numbers', (id) => {
-    const allOn = result.findings.find((f) => f.id === id);
-    const standby = result.findings.find((f) => f.id === inStandby(id));
-    expect(allOn, id).toBeDefined();
-    expect(standby, inStandby(id)).toBeDefined();
-    expect(standby!.severity).toBe(allOn!.severity);
-    expect(standby!.values).toEqual(allOn!.values);
-  });
+  it.each([...errorsAgainInStandby, ...warningsAgainInStandby])(
+    '%s is found again in standby with the same numbers',
+    (id) => {
+      const allOn = result.findings.find((f) => f.id === id);
+      const standby = result.findings.find((f) => f.id === inStandby(id));
+      expect(allOn, id).toBeDefined();
+      expect(standby, inStandby(id)).toBeDefined();
+      expect(standby!.severity).toBe(allOn!.severity);
+      expect(standby!.values).toEqual(allOn!.values);
+    },
+  );
 
   // The pull-up advice (README, "Pull-up advice"), worked by hand: the range of the pulls
   // together, the net's own pull-up beside the pins' internal ones, the rise-time bound at
@@ -237,21 +276,54 @@ describe('greenhouse irrigation controller example', () => {
   const RAIN_RMIN = (V33.max - 0.1) / (1e-3 - U1_I); // the gauge's own 0.1 V @ 1 mA
   it.each([
     // 1.04–18.2 kΩ: [1096.1, 12104.8] Ω, √ = 3643 Ω: 3.9 kΩ (ratio 1.071; 3.3 kΩ is 1.104), not 18 kΩ.
-    ['SDA', { rMin: SDA_RMIN, rMax: SDA_RMAX, adviceMin: SDA_RMIN / 0.95, adviceMax: 0.7 * SDA_RMAX / 1.05, adviceCap: null, suggested: 3.9e3, lowestPower: 12e3 }],
+    [
+      'SDA',
+      {
+        rMin: SDA_RMIN,
+        rMax: SDA_RMAX,
+        adviceMin: SDA_RMIN / 0.95,
+        adviceMax: (0.7 * SDA_RMAX) / 1.05,
+        adviceCap: null,
+        suggested: 3.9e3,
+        lowestPower: 12e3,
+      },
+    ],
     ['SCL', { rMin: SDA_RMIN, rMax: SDA_RMAX, suggested: 3.9e3 }],
     // The fault line, leakage only, on board: [825.3 Ω, 47 kΩ], √ = 6228 Ω: 6.8 kΩ (1.092; 5.6 kΩ
     // is 1.112), not 360 kΩ.
-    ['FAULT_N', { rMin: FAULT_RMIN, rMax: FAULT_RMAX, adviceMin: FAULT_RMIN / 0.95, adviceCap: 47e3, suggested: 6.8e3, lowestPower: 330e3 }],
+    [
+      'FAULT_N',
+      {
+        rMin: FAULT_RMIN,
+        rMax: FAULT_RMAX,
+        adviceMin: FAULT_RMIN / 0.95,
+        adviceCap: 47e3,
+        suggested: 6.8e3,
+        lowestPower: 330e3,
+      },
+    ],
     // The frost thermostat (off-board) beside the controller's 30–50 kΩ pull-up: from 1/(1/Rmin −
     // 1/30 k) = 3417.6 Ω, shrunk 3597.5 Ω, capped at 10 kΩ: √ = 5998 Ω, 5.6 kΩ (1.071), not 62 kΩ.
-    ['FROST', { ohms: 1 / (1 / 100e3 + 1 / 40e3), ohmsMin: 1 / (1 / 100e3 + 1 / 30e3), ohmsMax: 1 / (1 / 100e3 + 1 / 50e3), rMin: FROST_RMIN, adviceMin: 1 / (1 / FROST_RMIN - 1 / 30e3) / 0.95, adviceCap: 10e3, suggested: 5.6e3 }],
+    [
+      'FROST',
+      {
+        ohms: 1 / (1 / 100e3 + 1 / 40e3),
+        ohmsMin: 1 / (1 / 100e3 + 1 / 30e3),
+        ohmsMax: 1 / (1 / 100e3 + 1 / 50e3),
+        rMin: FROST_RMIN,
+        adviceMin: 1 / (1 / FROST_RMIN - 1 / 30e3) / 0.95,
+        adviceCap: 10e3,
+        suggested: 5.6e3,
+      },
+    ],
     // The rain gauge (off-board) beside the controller's 47 kΩ: from 1/(1/Rmin − 1/47 k) = 3628.5 Ω,
     // shrunk 3819.5 Ω, capped at 10 kΩ: √ = 6180 Ω, 6.8 kΩ (1.1003; 5.6 kΩ is 1.1036).
     ['RAIN', { rMin: RAIN_RMIN, adviceMin: 1 / (1 / RAIN_RMIN - 1 / 47e3) / 0.95, adviceCap: 10e3, suggested: 6.8e3 }],
   ] as const)('pull-up advice on %s follows the policy', (netId, values) => {
     const f = result.findings.find((x) => x.id === `pull-range:${netId}:all-on`);
     expect(f, netId).toBeDefined();
-    for (const [k, v] of Object.entries(values)) expectClose((f!.values as Readonly<Record<string, unknown>>)[k], v as Expected, `${netId} ${k}`);
+    for (const [k, v] of Object.entries(values))
+      expectClose((f!.values as Readonly<Record<string, unknown>>)[k], v as Expected, `${netId} ${k}`);
   });
 
   it('has the standby and reset scenarios, and back-power finds the sensor fed through its bus pins there only', () => {
@@ -265,16 +337,21 @@ describe('greenhouse irrigation controller example', () => {
   });
 
   it('shows a FET-shifted two-wire bus, a divider and a series resistor, each correct', () => {
-    const live = (net: string) => result.findings.filter((f) => f.net === net && f.waived === undefined && f.severity !== 'info');
+    const live = (net: string) =>
+      result.findings.filter((f) => f.net === net && f.waived === undefined && f.severity !== 'info');
     for (const net of ['SDA2_H', 'SDA2_L', 'BUSY', 'BUSY_DIV', 'LEAK', 'LEAK_IN']) expect(live(net), net).toEqual([]);
-    expect((design.discretes ?? []).map((d) => d.kind).sort()).toEqual(['fet-shifter', 'fet-shifter', ...Array(7).fill('resistor')]);
+    expect((design.discretes ?? []).map((d) => d.kind).sort()).toEqual([
+      'fet-shifter',
+      'fet-shifter',
+      ...Array(7).fill('resistor'),
+    ]);
     // The divider R5 1.8 kΩ / R6 3.3 kΩ ±1 % from the display's 74HCT output (JESD7 restated:
     // VDD − 0.66 V at 4 mA) at 4.75 V, less the controller's 1 µA through R5‖R6, against
     // VIH = 0.7 × 3.465 V (the mcu-gpio starting point, common practice).
     const pair = result.nets.get('all-on')!.get('BUSY_DIV')!.view.analysis.pairs[0]!;
     const r5 = 1818;
     const r6 = 3267;
-    expectClose(pair.high!.out, 4.09 * r6 / (r5 + r6) - (r5 * r6 / (r5 + r6)) * U1_I, 'divider high');
+    expectClose(pair.high!.out, (4.09 * r6) / (r5 + r6) - ((r5 * r6) / (r5 + r6)) * U1_I, 'divider high');
     expectClose(pair.high!.threshold, MCU_VIH * V33.max, 'divider VIH');
     // The series resistor R7 10 kΩ −5 % into the controller's leak input (1 mA limit, the
     // example's own): (5.25 − 3.135)/9500 = 223 µA, absorbed by the 3.3 V rail's 20 mA minimum load.
@@ -290,17 +367,31 @@ describe('greenhouse irrigation controller example', () => {
   // neither overlap nor leave it, and every pin is placed.
   it('lays its parts out without overlaps, each pin on a side', () => {
     const boxes = [
-      ...design.parts.map((p) => ({ id: p.id, x: p.position?.x ?? 0, y: p.position?.y ?? 0, w: 200, h: 40 + 22 * p.pins.length })),
-      ...(design.discretes ?? []).map((d) => ({ id: d.id, x: d.position?.x ?? 0, y: d.position?.y ?? 0, w: 120, h: 64 })),
+      ...design.parts.map((p) => ({
+        id: p.id,
+        x: p.position?.x ?? 0,
+        y: p.position?.y ?? 0,
+        w: 200,
+        h: 40 + 22 * p.pins.length,
+      })),
+      ...(design.discretes ?? []).map((d) => ({
+        id: d.id,
+        x: d.position?.x ?? 0,
+        y: d.position?.y ?? 0,
+        w: 120,
+        h: 64,
+      })),
     ];
     const problems: string[] = [];
-    for (const b of boxes) if (b.x < 0 || b.y < 0 || b.x + b.w > 1400 || b.y + b.h > 1150) problems.push(`${b.id} off canvas`);
+    for (const b of boxes)
+      if (b.x < 0 || b.y < 0 || b.x + b.w > 1400 || b.y + b.h > 1150) problems.push(`${b.id} off canvas`);
     for (const [i, a] of boxes.entries()) {
       for (const b of boxes.slice(i + 1)) {
         if (a.x < b.x + b.w && b.x < a.x + a.w && a.y < b.y + b.h && b.y < a.y + a.h) problems.push(`${a.id}/${b.id}`);
       }
     }
-    for (const p of design.parts) for (const pin of p.pins) if (pin.side === undefined) problems.push(`${p.id}.${pin.id} no side`);
+    for (const p of design.parts)
+      for (const pin of p.pins) if (pin.side === undefined) problems.push(`${p.id}.${pin.id} no side`);
     expect(problems).toEqual([]);
   });
 });

@@ -57,8 +57,8 @@ const refused: [text: string, why: string][] = [
   ['1,5', 'the decimal point is "."'],
   ['\u0661', 'only ASCII digits (Arabic-Indic one)'],
   ['\uff11', 'only ASCII digits (full-width one)'],
-  ['1' + '0'.repeat(400), 'a number too large to be finite'],
-  ['VDD*' + '9'.repeat(400), 'a coefficient too large to be finite'],
+  [`1${'0'.repeat(400)}`, 'a number too large to be finite'],
+  [`VDD*${'9'.repeat(400)}`, 'a coefficient too large to be finite'],
 ];
 
 describe('parseLevel accepts the Level grammar', () => {
@@ -74,7 +74,9 @@ describe('parseLevel accepts the Level grammar', () => {
 describe('parseLevel refuses everything else without throwing', () => {
   it.each(refused)('%j (%s)', (text) => {
     let r: ReturnType<typeof parseLevel> | undefined;
-    expect(() => { r = parseLevel(text); }).not.toThrow();
+    expect(() => {
+      r = parseLevel(text);
+    }).not.toThrow();
     expect(r?.ok).toBe(false);
     if (r === undefined || r.ok) return;
     expect(r.error.length).toBeGreaterThan(0);
@@ -105,7 +107,10 @@ describe('compileLevel', () => {
   it('takes a number as a fixed voltage', () => {
     expect(compileLevel(2.4)).toEqual({ a: 2.4, b: 0 });
   });
-  it.each(['VDD*VDD', '1e3', ''])('throws, naming the Level, on %j (only an unvalidated document reaches it)', (text) => {
-    expect(() => compileLevel(text)).toThrow(`Level "${text}"`);
-  });
+  it.each(['VDD*VDD', '1e3', ''])(
+    'throws, naming the Level, on %j (only an unvalidated document reaches it)',
+    (text) => {
+      expect(() => compileLevel(text)).toThrow(`Level "${text}"`);
+    },
+  );
 });

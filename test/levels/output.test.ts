@@ -6,8 +6,14 @@
 import { describe, expect, it } from 'vitest';
 import { largestTestCurrent, outputLevel } from '../../rules/levels/output.ts';
 
-const voh = [{ v: 'VDD-0.1', i: 20e-6 }, { v: 'VDD-0.66', i: 4e-3 }];
-const vol = [{ v: 0.1, i: 20e-6 }, { v: 0.33, i: 4e-3 }];
+const voh = [
+  { v: 'VDD-0.1', i: 20e-6 },
+  { v: 'VDD-0.66', i: 4e-3 },
+];
+const vol = [
+  { v: 0.1, i: 20e-6 },
+  { v: 0.33, i: 4e-3 },
+];
 const slopeHigh = (-0.66 + 0.1) / (4e-3 - 20e-6);
 const slopeLow = (0.33 - 0.1) / (4e-3 - 20e-6);
 
@@ -18,7 +24,15 @@ describe('outputLevel', () => {
     ['a load just above it takes the next row', voh, 21e-6, 4.5, 'high', 3.84, false],
     ['exactly the largest test current is still guaranteed', voh, 4e-3, 5.5, 'high', 4.84, false],
     ['within 1e-9 of a test current counts as at it', voh, 4e-3 * (1 + 1e-12), 4.5, 'high', 3.84, false],
-    ['above the last row: the line through the last two, extrapolated', voh, 5e-3, 4.5, 'high', 3.84 + slopeHigh * 1e-3, true],
+    [
+      'above the last row: the line through the last two, extrapolated',
+      voh,
+      5e-3,
+      4.5,
+      'high',
+      3.84 + slopeHigh * 1e-3,
+      true,
+    ],
     ['the low side likewise', vol, 6e-3, 4.5, 'low', 0.33 + slopeLow * 2e-3, true],
     ['low side, light load', vol, 1e-6, 5, 'low', 0.1, false],
   ];
@@ -32,10 +46,17 @@ describe('outputLevel', () => {
   // its own rail. Numbers worked by hand from the rows named beside each case.
   it.each([
     // I2C-bus specification: VOL 0.4 V @ 3 mA (VDD > 2 V). 4.54 mA: 0.4 × 4.54 / 3 = 0.60533 V.
-    ['a 0.4 V @ 3 mA row at 4.54 mA', [{ v: 0.4, i: 3e-3 }], 4.54e-3, 3.3, 'low', 0.4 * 4.54 / 3],
+    ['a 0.4 V @ 3 mA row at 4.54 mA', [{ v: 0.4, i: 3e-3 }], 4.54e-3, 3.3, 'low', (0.4 * 4.54) / 3],
     // I2C-bus specification, VDD ≤ 2 V: VOL 0.2·VDD @ 3 mA = 0.342 V at 1.71 V; 4.59 mA gives
     // 0.342 × 4.59 / 3 = 0.52326 V, above VIL 0.3 × 1.71 = 0.513 V (a failing low level).
-    ['a 0.2·VDD @ 3 mA row at 4.59 mA and 1.71 V', [{ v: '0.2*VDD', i: 3e-3 }], 4.59e-3, 1.71, 'low', 0.342 * 4.59 / 3],
+    [
+      'a 0.2·VDD @ 3 mA row at 4.59 mA and 1.71 V',
+      [{ v: '0.2*VDD', i: 3e-3 }],
+      4.59e-3,
+      1.71,
+      'low',
+      (0.342 * 4.59) / 3,
+    ],
     // JESD8C LVCMOS: VOH VDD − 0.2 V @ 100 µA only; 1 mA at 3.0 V: 3.0 − 0.2 × 10 = 1.0 V.
     ['a VDD−0.2 @ 100 µA row at 1 mA', [{ v: 'VDD-0.2', i: 100e-6 }], 1e-3, 3.0, 'high', 1.0],
     // The same row at 100 mA: the line reaches 0 V and stops at the output's own rail (common practice).
@@ -51,7 +72,15 @@ describe('outputLevel', () => {
 
   it('an extrapolation is never better than the last guaranteed row', () => {
     // A list whose heavier row is (oddly) better than its lighter one: the estimate keeps the last row.
-    const r = outputLevel([{ v: 2.0, i: 1e-3 }, { v: 2.4, i: 2e-3 }], 5e-3, 3.3, 'high')!;
+    const r = outputLevel(
+      [
+        { v: 2.0, i: 1e-3 },
+        { v: 2.4, i: 2e-3 },
+      ],
+      5e-3,
+      3.3,
+      'high',
+    )!;
     expect(r.v).toBe(2.4);
   });
 
@@ -60,9 +89,39 @@ describe('outputLevel', () => {
   it.each([
     ['74HC high far above its rows: 0 V, not below', voh, 1, 4.5, 'high', 0],
     ['74HC low far above its rows: VDD, not above', vol, 1, 4.5, 'low', 4.5],
-    ['rows 1e-300 A apart, high: 0 V, not -Infinity', [{ v: 3, i: 1e-300 }, { v: 2, i: 2e-300 }], 1e-3, 3.3, 'high', 0],
-    ['rows 1e-300 A apart, low: VDD, not +Infinity', [{ v: 0.2, i: 1e-300 }, { v: 0.4, i: 2e-300 }], 1e-3, 3.3, 'low', 3.3],
-    ['a last row already below 0 V stays as it is (never better)', [{ v: 0.5, i: 1e-3 }, { v: -0.5, i: 2e-3 }], 1, 3.3, 'high', -0.5],
+    [
+      'rows 1e-300 A apart, high: 0 V, not -Infinity',
+      [
+        { v: 3, i: 1e-300 },
+        { v: 2, i: 2e-300 },
+      ],
+      1e-3,
+      3.3,
+      'high',
+      0,
+    ],
+    [
+      'rows 1e-300 A apart, low: VDD, not +Infinity',
+      [
+        { v: 0.2, i: 1e-300 },
+        { v: 0.4, i: 2e-300 },
+      ],
+      1e-3,
+      3.3,
+      'low',
+      3.3,
+    ],
+    [
+      'a last row already below 0 V stays as it is (never better)',
+      [
+        { v: 0.5, i: 1e-3 },
+        { v: -0.5, i: 2e-3 },
+      ],
+      1,
+      3.3,
+      'high',
+      -0.5,
+    ],
   ] as const)('%s', (_name, points, load, vdd, sense, v) => {
     const r = outputLevel(points, load, vdd, sense)!;
     expect(r.v).toBe(v);

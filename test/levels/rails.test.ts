@@ -26,13 +26,24 @@ describe('corners', () => {
   const flat = (ids: string[]) => corners(ids, ranges).map((c) => ids.map((id) => c.get(id)));
 
   it('pins on one rail share one VDD: two corners, not four', () => {
-    expect(flat(['5v0', '5v0'])).toEqual([[4.75, 4.75], [5.25, 5.25]]);
+    expect(flat(['5v0', '5v0'])).toEqual([
+      [4.75, 4.75],
+      [5.25, 5.25],
+    ]);
   });
   it('two rails are taken independently: four corners', () => {
-    expect(flat(['3v3', '5v0'])).toEqual([[3.135, 4.75], [3.135, 5.25], [3.465, 4.75], [3.465, 5.25]]);
+    expect(flat(['3v3', '5v0'])).toEqual([
+      [3.135, 4.75],
+      [3.135, 5.25],
+      [3.465, 4.75],
+      [3.465, 5.25],
+    ]);
   });
   it('an off rail contributes one value, 0 V', () => {
-    expect(flat(['off', '3v3'])).toEqual([[0, 3.135], [0, 3.465]]);
+    expect(flat(['off', '3v3'])).toEqual([
+      [0, 3.135],
+      [0, 3.465],
+    ]);
   });
   it('a rail unknown to the state is left out', () => {
     expect(corners(['nope'], ranges)).toEqual([new Map()]);

@@ -4,7 +4,8 @@ import { E12, E24, largestInRange, seriesValuesBetween } from '../../rules/level
 // IEC 60063, table of the E12 and E24 series (transcribed).
 const IEC60063_E12 = [1.0, 1.2, 1.5, 1.8, 2.2, 2.7, 3.3, 3.9, 4.7, 5.6, 6.8, 8.2];
 const IEC60063_E24 = [
-  1.0, 1.1, 1.2, 1.3, 1.5, 1.6, 1.8, 2.0, 2.2, 2.4, 2.7, 3.0, 3.3, 3.6, 3.9, 4.3, 4.7, 5.1, 5.6, 6.2, 6.8, 7.5, 8.2, 9.1,
+  1.0, 1.1, 1.2, 1.3, 1.5, 1.6, 1.8, 2.0, 2.2, 2.4, 2.7, 3.0, 3.3, 3.6, 3.9, 4.3, 4.7, 5.1, 5.6, 6.2, 6.8, 7.5, 8.2,
+  9.1,
 ];
 
 describe('IEC 60063 tables', () => {
@@ -26,9 +27,20 @@ describe('seriesValuesBetween', () => {
   // Expected values are decimal literals: a scaled value must be exactly that double (4700,
   // not 4700.000000000001).
   const cases: [name: string, series: readonly number[], lo: number, hi: number, values: number[]][] = [
-    ['one E12 decade of ohms', E12, 1000, 10000,
-      [1000, 1200, 1500, 1800, 2200, 2700, 3300, 3900, 4700, 5600, 6800, 8200, 10000]],
-    ['picofarads', E12, 1e-12, 4.7e-12, [1e-12, 1.2e-12, 1.5e-12, 1.8e-12, 2.2e-12, 2.7e-12, 3.3e-12, 3.9e-12, 4.7e-12]],
+    [
+      'one E12 decade of ohms',
+      E12,
+      1000,
+      10000,
+      [1000, 1200, 1500, 1800, 2200, 2700, 3300, 3900, 4700, 5600, 6800, 8200, 10000],
+    ],
+    [
+      'picofarads',
+      E12,
+      1e-12,
+      4.7e-12,
+      [1e-12, 1.2e-12, 1.5e-12, 1.8e-12, 2.2e-12, 2.7e-12, 3.3e-12, 3.9e-12, 4.7e-12],
+    ],
     ['milliohms', E24, 1e-3, 1.3e-3, [1e-3, 1.1e-3, 1.2e-3, 1.3e-3]],
     ['teraohm end', E24, 8e11, 1e12, [8.2e11, 9.1e11, 1e12]],
     ['across decades', E12, 6e5, 1.3e6, [6.8e5, 8.2e5, 1e6, 1.2e6]],

@@ -1,12 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import {
-  formatIec60062,
-  formatQuantity,
-  parseIec60062,
-  parseQuantity,
-  type Unit,
-} from '../../rules/levels/units.ts';
+import { formatIec60062, formatQuantity, parseIec60062, parseQuantity, type Unit } from '../../rules/levels/units.ts';
 
 // IEC 60062, resistance letter codes (the letter is the decimal point and the multiplier:
 // R = 1, K = 10³, M = 10⁶, G = 10⁹). The seven examples as the standard's scheme gives them.
@@ -108,7 +102,9 @@ describe('parseQuantity reads engineering notation exactly', () => {
 describe('parseQuantity refuses with an error result', () => {
   it.each(refusedText)('%j (%s): "%s"', (text, unit, messageHas) => {
     let r: ReturnType<typeof parseQuantity> | undefined;
-    expect(() => { r = parseQuantity(text, unit); }).not.toThrow();
+    expect(() => {
+      r = parseQuantity(text, unit);
+    }).not.toThrow();
     expect(r?.ok).toBe(false);
     expect(r).not.toHaveProperty('value');
     if (r !== undefined && !r.ok) expect(r.error).toContain(messageHas);
@@ -158,8 +154,19 @@ describe('formatQuantity', () => {
 
 describe('formatQuantity output parses back', () => {
   const values: [value: number, unit: Unit][] = [
-    [4700, 'Ω'], [0.47, 'Ω'], [47300, 'Ω'], [1.5e9, 'Ω'], [15e-12, 'F'], [2.2e-6, 'F'],
-    [100e-9, 'F'], [1e-21, 'F'], [-0.3, 'V'], [3.3, 'V'], [0.016, 'A'], [300e-9, 's'], [10e-9, 's/V'],
+    [4700, 'Ω'],
+    [0.47, 'Ω'],
+    [47300, 'Ω'],
+    [1.5e9, 'Ω'],
+    [15e-12, 'F'],
+    [2.2e-6, 'F'],
+    [100e-9, 'F'],
+    [1e-21, 'F'],
+    [-0.3, 'V'],
+    [3.3, 'V'],
+    [0.016, 'A'],
+    [300e-9, 's'],
+    [10e-9, 's/V'],
   ];
   it.each(values)('%d %s', (value, unit) => {
     expect(parseQuantity(formatQuantity(value, unit), unit)).toEqual({ ok: true, value });

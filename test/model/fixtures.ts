@@ -101,7 +101,14 @@ export function greenhouse(): Design {
     ],
     // Version 2: parts between chips (invented values).
     discretes: [
-      { id: 'R9', kind: 'resistor', label: 'Probe series resistor', ohms: 1e3, tolerance: 0.01, position: { x: 10, y: 20 } },
+      {
+        id: 'R9',
+        kind: 'resistor',
+        label: 'Probe series resistor',
+        ohms: 1e3,
+        tolerance: 0.01,
+        position: { x: 10, y: 20 },
+      },
       { id: 'R10', kind: 'resistor', ohms: 47e3, tie: { '2': 'ground' } },
       { id: 'Q1', kind: 'fet-shifter', gate: '1v8', vgsThMax: 1.0, rdsOnMax: 6 },
       { id: 'D1', kind: 'diode-shifter', vfMax: 0.45, leakageMax: 5e-6 },
@@ -115,11 +122,19 @@ export function greenhouse(): Design {
         // I2C-bus specification (UM10204), fast mode: rise time at most 300 ns (transcribed, from memory).
         maxRiseTime: 300e-9,
       },
-      { id: 'I2C_SCL', label: 'SCL', pins: ['U1.SCL', 'U4.SCL'], pull: { to: '3v3', ohms: 4.7e3 }, wiringCapacitance: 12e-12 },
+      {
+        id: 'I2C_SCL',
+        label: 'SCL',
+        pins: ['U1.SCL', 'U4.SCL'],
+        pull: { to: '3v3', ohms: 4.7e3 },
+        wiringCapacitance: 12e-12,
+      },
       {
         id: 'VALVE_EN',
         pins: ['U1.VALVE_EN', 'U2.EN'],
-        waivers: [{ rule: 'back-power', scenario: 'standby', note: 'Driver input is current-limited by its series resistor' }],
+        waivers: [
+          { rule: 'back-power', scenario: 'standby', note: 'Driver input is current-limited by its series resistor' },
+        ],
         route: [['U1.VALVE_EN', 'U2.EN']],
       },
       {
@@ -127,10 +142,20 @@ export function greenhouse(): Design {
         label: 'ALARM_N',
         pins: ['U2.FAULT_N', 'U1.ALARM_N'],
         pull: { to: '3v3', ohms: 10e3 },
-        waivers: [{ rule: 'level-high', note: 'reviewed' }, { rule: 'floating-input', scenario: 'all-on', note: 'reviewed' }],
+        waivers: [
+          { rule: 'level-high', note: 'reviewed' },
+          { rule: 'floating-input', scenario: 'all-on', note: 'reviewed' },
+        ],
       },
       { id: 'PROBE', pins: ['J1.PROBE', 'U3.A1', 'R10.1'], route: [['J1.PROBE', 'U3.A1']] },
-      { id: 'PROBE_BUF', pins: ['U3.B1', 'U1.PROBE_IN', 'U4.DRDY'], route: [['U3.B1', 'U1.PROBE_IN'], ['U1.PROBE_IN', 'U4.DRDY']] },
+      {
+        id: 'PROBE_BUF',
+        pins: ['U3.B1', 'U1.PROBE_IN', 'U4.DRDY'],
+        route: [
+          ['U3.B1', 'U1.PROBE_IN'],
+          ['U1.PROBE_IN', 'U4.DRDY'],
+        ],
+      },
     ],
   };
 }

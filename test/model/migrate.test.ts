@@ -14,7 +14,16 @@ function asVersion1(d: Design): Record<string, unknown> {
 }
 
 /** Keys that only version 2 has. */
-const V2_KEYS = new Set(['discretes', 'minLoad', 'viMin', 'injectionMax', 'busHold', 'seriesResistance', 'minExternalPull', 'maxLoadCapacitance']);
+const V2_KEYS = new Set([
+  'discretes',
+  'minLoad',
+  'viMin',
+  'injectionMax',
+  'busHold',
+  'seriesResistance',
+  'minExternalPull',
+  'maxLoadCapacitance',
+]);
 
 /** A design without anything version 2 added: a file a version-1 editor could have written. */
 function version1Subset(d: Design): Omit<Design, 'version'> {
@@ -22,10 +31,17 @@ function version1Subset(d: Design): Omit<Design, 'version'> {
   const strip = (v: unknown): unknown => {
     if (Array.isArray(v)) return v.map(strip);
     if (typeof v !== 'object' || v === null) return v;
-    return Object.fromEntries(Object.entries(v).filter(([k]) => !V2_KEYS.has(k)).map(([k, x]) => [k, strip(x)]));
+    return Object.fromEntries(
+      Object.entries(v)
+        .filter(([k]) => !V2_KEYS.has(k))
+        .map(([k, x]) => [k, strip(x)]),
+    );
   };
   const out = strip(d) as Design;
-  return { ...out, nets: out.nets.map((n) => ({ ...n, pins: n.pins.filter((p) => !between.has(p.slice(0, p.indexOf('.')))) })) };
+  return {
+    ...out,
+    nets: out.nets.map((n) => ({ ...n, pins: n.pins.filter((p) => !between.has(p.slice(0, p.indexOf('.')))) })),
+  };
 }
 
 /** What a check says, without the timing. */
@@ -51,7 +67,7 @@ describe('migrate', () => {
     const before = JSON.stringify(v1);
     const lifted = migrate(v1) as Record<string, unknown>;
     expect(lifted).not.toBe(v1);
-    expect(lifted['version']).toBe(2);
+    expect(lifted.version).toBe(2);
     expect(JSON.stringify(v1)).toBe(before);
     // Everything but the number is the same: a v1 pull stays a pull.
     expect({ ...lifted, version: 1 }).toEqual(v1);

@@ -22,8 +22,18 @@ describe('resolveRailRange (design-format.md: nominal × (1 ± tolerance), defau
     { name: 'given tolerance', rail: { nominal: 5, tolerance: 0.1 }, min: 4.5, max: 5.5 },
     { name: 'explicit min wins for its end only', rail: { nominal: 5, min: 4.5 }, min: 4.5, max: 5.25 },
     { name: 'explicit max wins for its end only', rail: { nominal: 1.8, tolerance: 0, max: 1.9 }, min: 1.8, max: 1.9 },
-    { name: 'undefined fields count as absent', rail: { nominal: 2.5, tolerance: undefined, min: undefined }, min: 2.375, max: 2.625 },
-    { name: 'an explicit inverted range is returned as given', rail: { nominal: 3, min: 3.3, max: 3.1 }, min: 3.3, max: 3.1 },
+    {
+      name: 'undefined fields count as absent',
+      rail: { nominal: 2.5, tolerance: undefined, min: undefined },
+      min: 2.375,
+      max: 2.625,
+    },
+    {
+      name: 'an explicit inverted range is returned as given',
+      rail: { nominal: 3, min: 3.3, max: 3.1 },
+      min: 3.3,
+      max: 3.1,
+    },
   ];
   it.each(cases)('$name', ({ rail, min, max }) => {
     const r = resolveRailRange(rail);

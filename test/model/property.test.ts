@@ -11,6 +11,7 @@ import { readDesign, validateDesign, writeDesign, type Design } from '../../rule
 import { designArb } from '../support/arbitraries.ts';
 
 // `any`: the corruptions break the types on purpose.
+// biome-ignore lint/suspicious/noExplicitAny: these tests build malformed documents on purpose
 type Doc = any;
 
 interface Corruption {
@@ -28,9 +29,27 @@ const hasNets = (d: Design) => d.nets.length > 0;
 const partsWithPins = (d: Doc) => (d.parts as Doc[]).map((p, i) => [p, i] as const).filter(([p]) => p.pins.length > 0);
 
 const corruptions: Corruption[] = [
-  { name: 'not JSON', apply: (d, n) => { const t = JSON.stringify(d); return { path: '(root)', text: t.slice(0, n % t.length) }; } },
-  { name: 'format wrong', apply: (d) => { d.format = 'railcross.report'; return { path: 'format' }; } },
-  { name: 'version wrong', apply: (d, n) => { d.version = [3, '1', null, 1.5][n % 4]; return { path: 'version' }; } },
+  {
+    name: 'not JSON',
+    apply: (d, n) => {
+      const t = JSON.stringify(d);
+      return { path: '(root)', text: t.slice(0, n % t.length) };
+    },
+  },
+  {
+    name: 'format wrong',
+    apply: (d) => {
+      d.format = 'railcross.report';
+      return { path: 'format' };
+    },
+  },
+  {
+    name: 'version wrong',
+    apply: (d, n) => {
+      d.version = [3, '1', null, 1.5][n % 4];
+      return { path: 'version' };
+    },
+  },
   {
     name: 'missing required key',
     apply: (d, n) => {
@@ -47,8 +66,22 @@ const corruptions: Corruption[] = [
       return { path: `rails[${i}].nominal` };
     },
   },
-  { name: 'unknown key', apply: (d, n) => { const [, i] = pick(d.parts as Doc[], n); d.parts[i].footprint = 'SO-8'; return { path: `parts[${i}].footprint` }; } },
-  { name: 'unknown rail on a part', apply: (d, n) => { const [, i] = pick(d.parts as Doc[], n); d.parts[i].rail = 'no-such-rail'; return { path: `parts[${i}].rail` }; } },
+  {
+    name: 'unknown key',
+    apply: (d, n) => {
+      const [, i] = pick(d.parts as Doc[], n);
+      d.parts[i].footprint = 'SO-8';
+      return { path: `parts[${i}].footprint` };
+    },
+  },
+  {
+    name: 'unknown rail on a part',
+    apply: (d, n) => {
+      const [, i] = pick(d.parts as Doc[], n);
+      d.parts[i].rail = 'no-such-rail';
+      return { path: `parts[${i}].rail` };
+    },
+  },
   {
     name: 'unknown pull rail on a pin',
     apply: (d, n) => {
@@ -58,7 +91,14 @@ const corruptions: Corruption[] = [
       return { path: `parts[${i}].pins[${j}].pull.to` };
     },
   },
-  { name: 'unknown profile', apply: (d, n) => { const [, i] = pick(d.parts as Doc[], n); d.parts[i].profile = 'no-such-profile'; return { path: `parts[${i}].profile` }; } },
+  {
+    name: 'unknown profile',
+    apply: (d, n) => {
+      const [, i] = pick(d.parts as Doc[], n);
+      d.parts[i].profile = 'no-such-profile';
+      return { path: `parts[${i}].profile` };
+    },
+  },
   {
     name: 'unknown rail turned off',
     apply: (d) => {
@@ -79,7 +119,10 @@ const corruptions: Corruption[] = [
   {
     name: 'duplicate id',
     apply: (d, n) => {
-      const [kind] = pick(['rails', 'parts', 'nets', 'profiles', 'scenarios'].filter((k) => (d[k]?.length ?? 0) > 0), n);
+      const [kind] = pick(
+        ['rails', 'parts', 'nets', 'profiles', 'scenarios'].filter((k) => (d[k]?.length ?? 0) > 0),
+        n,
+      );
       const list = d[kind] as Doc[];
       list.push(structuredClone(list[(n >> 3) % list.length]));
       return { path: `${kind}[${list.length - 1}].id` };
@@ -93,11 +136,20 @@ const corruptions: Corruption[] = [
       return { path: `parts[${i}].pins[${part.pins.length - 1}].id` };
     },
   },
-  { name: 'scenario all-on', apply: (d) => { d.scenarios = [{ id: 'all-on', label: '', off: [] }, ...(d.scenarios ?? [])]; return { path: 'scenarios[0].id' }; } },
+  {
+    name: 'scenario all-on',
+    apply: (d) => {
+      d.scenarios = [{ id: 'all-on', label: '', off: [] }, ...(d.scenarios ?? [])];
+      return { path: 'scenarios[0].id' };
+    },
+  },
   {
     name: 'id with a forbidden character',
     apply: (d, n) => {
-      const [where] = pick(['parts', 'nets', 'pins', 'rails'].filter((k) => k !== 'nets' || d.nets.length > 0), n);
+      const [where] = pick(
+        ['parts', 'nets', 'pins', 'rails'].filter((k) => k !== 'nets' || d.nets.length > 0),
+        n,
+      );
       const [bad] = pick(where === 'rails' ? [':', '>'] : ['.', ':', '>'], n >> 3);
       if (where === 'pins') {
         const [[part, i]] = pick(partsWithPins(d), n >> 5);
@@ -157,7 +209,14 @@ const corruptions: Corruption[] = [
       return { path: `nets[${i}].${key}` };
     },
   },
-  { name: 'negative tolerance', apply: (d, n) => { const [, i] = pick(d.rails as Doc[], n); d.rails[i].tolerance = -0.01; return { path: `rails[${i}].tolerance` }; } },
+  {
+    name: 'negative tolerance',
+    apply: (d, n) => {
+      const [, i] = pick(d.rails as Doc[], n);
+      d.rails[i].tolerance = -0.01;
+      return { path: `rails[${i}].tolerance` };
+    },
+  },
   {
     name: 'rail min above max',
     apply: (d, n) => {
@@ -190,7 +249,10 @@ const corruptions: Corruption[] = [
     apply: (d, n) => {
       const [net, i] = pick(d.nets as Doc[], n);
       const unknownRule = n % 2 === 0;
-      net.waivers = [...(net.waivers ?? []), unknownRule ? { rule: 'no-such-rule', note: '' } : { rule: 'level-low', scenario: 'no-such-state', note: '' }];
+      net.waivers = [
+        ...(net.waivers ?? []),
+        unknownRule ? { rule: 'no-such-rule', note: '' } : { rule: 'level-low', scenario: 'no-such-state', note: '' },
+      ];
       return { path: `nets[${i}].waivers[${net.waivers.length - 1}].${unknownRule ? 'rule' : 'scenario'}` };
     },
   },
@@ -198,7 +260,12 @@ const corruptions: Corruption[] = [
     name: '__proto__ key',
     apply: (d, n) => {
       const [, i] = pick(d.parts as Doc[], n);
-      Object.defineProperty(d.parts[i], '__proto__', { value: { polluted: true }, enumerable: true, configurable: true, writable: true });
+      Object.defineProperty(d.parts[i], '__proto__', {
+        value: { polluted: true },
+        enumerable: true,
+        configurable: true,
+        writable: true,
+      });
       return { path: `parts[${i}].__proto__` };
     },
   },
@@ -217,14 +284,18 @@ describe('reader properties', { timeout: 120_000 }, () => {
         const corruption = usable[which % usable.length]!;
         const doc = structuredClone(design) as Doc;
         const { path, text } = corruption.apply(doc, n);
-        const r = text !== undefined ? readDesign(text) : asText ? readDesign(JSON.stringify(doc)) : validateDesign(doc);
+        const r =
+          text !== undefined ? readDesign(text) : asText ? readDesign(JSON.stringify(doc)) : validateDesign(doc);
         expect(r.ok, corruption.name).toBe(false);
         if (r.ok) return;
         for (const e of r.errors) {
           expect(e.path.length).toBeGreaterThan(0);
           expect(e.message.length).toBeGreaterThan(0);
         }
-        expect(r.errors.map((e) => e.path), corruption.name).toContain(path);
+        expect(
+          r.errors.map((e) => e.path),
+          corruption.name,
+        ).toContain(path);
       }),
       { numRuns: 200 },
     );

@@ -11,7 +11,10 @@ describe('committed JSON Schema files', () => {
     } catch {
       // Reported by the assertion below, with the remedy.
     }
-    expect(committed === schemaText(build()), `rules/schema/${file} is stale or missing: run \`npm run schema\` and commit it`).toBe(true);
+    expect(
+      committed === schemaText(build()),
+      `rules/schema/${file} is stale or missing: run \`npm run schema\` and commit it`,
+    ).toBe(true);
   });
 
   it('the design schema names itself, is closed, and defines the records', () => {
@@ -20,8 +23,23 @@ describe('committed JSON Schema files', () => {
     expect(s.$id).toBe('urn:railcross:schema:design:2');
     expect(s.additionalProperties).toBe(false);
     expect(s.required).toEqual(['format', 'version', 'title', 'rails', 'parts', 'nets']);
-    expect(Object.keys(s.$defs as object).sort()).toEqual(
-      ['DiodeShifter', 'Discrete', 'FetShifter', 'Level', 'Net', 'OutputPoint', 'Params', 'Part', 'Pin', 'PinState', 'Profile', 'Pull', 'Rail', 'Resistor', 'Scenario', 'Waiver'],
-    );
+    expect(Object.keys(s.$defs as object).sort()).toEqual([
+      'DiodeShifter',
+      'Discrete',
+      'FetShifter',
+      'Level',
+      'Net',
+      'OutputPoint',
+      'Params',
+      'Part',
+      'Pin',
+      'PinState',
+      'Profile',
+      'Pull',
+      'Rail',
+      'Resistor',
+      'Scenario',
+      'Waiver',
+    ]);
   });
 });

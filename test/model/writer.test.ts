@@ -3,7 +3,7 @@
  * and the round trip through the reader.
  */
 import { describe, expect, it } from 'vitest';
-import { z } from 'zod';
+import type { z } from 'zod';
 import {
   DesignSchema,
   NetSchema,
@@ -28,29 +28,112 @@ import { greenhouse } from './fixtures.ts';
 
 /** rules/schema/design-format.md's tables, in their row order (transcribed; version 2). */
 const TABLE_ORDER: { name: string; order: KeyOrder | undefined; schema: z.ZodObject; keys: string[] }[] = [
-  { name: 'top level', order: KEY_ORDER.design, schema: DesignSchema, keys: ['format', 'version', 'title', 'settings', 'rails', 'scenarios', 'profiles', 'parts', 'discretes', 'nets'] },
-  { name: 'settings', order: KEY_ORDER.design.children.settings, schema: SettingsSchema, keys: ['minMargin', 'defaultWiringCapacitance'] },
-  { name: 'rail', order: KEY_ORDER.design.children.rails, schema: RailSchema, keys: ['id', 'label', 'nominal', 'tolerance', 'min', 'max', 'colour', 'minLoad'] },
-  { name: 'scenario', order: KEY_ORDER.design.children.scenarios, schema: ScenarioSchema, keys: ['id', 'label', 'off', 'pins'] },
-  { name: 'part', order: KEY_ORDER.design.children.parts, schema: PartSchema, keys: ['id', 'label', 'rail', 'profile', 'params', 'position', 'pins'] },
-  { name: 'pin', order: KEY_ORDER.design.children.parts.children.pins, schema: PinSchema, keys: ['id', 'role', 'drive', 'rail', 'profile', 'params', 'pull', 'side'] },
+  {
+    name: 'top level',
+    order: KEY_ORDER.design,
+    schema: DesignSchema,
+    keys: ['format', 'version', 'title', 'settings', 'rails', 'scenarios', 'profiles', 'parts', 'discretes', 'nets'],
+  },
+  {
+    name: 'settings',
+    order: KEY_ORDER.design.children.settings,
+    schema: SettingsSchema,
+    keys: ['minMargin', 'defaultWiringCapacitance'],
+  },
+  {
+    name: 'rail',
+    order: KEY_ORDER.design.children.rails,
+    schema: RailSchema,
+    keys: ['id', 'label', 'nominal', 'tolerance', 'min', 'max', 'colour', 'minLoad'],
+  },
+  {
+    name: 'scenario',
+    order: KEY_ORDER.design.children.scenarios,
+    schema: ScenarioSchema,
+    keys: ['id', 'label', 'off', 'pins'],
+  },
+  {
+    name: 'part',
+    order: KEY_ORDER.design.children.parts,
+    schema: PartSchema,
+    keys: ['id', 'label', 'rail', 'profile', 'params', 'position', 'pins'],
+  },
+  {
+    name: 'pin',
+    order: KEY_ORDER.design.children.parts.children.pins,
+    schema: PinSchema,
+    keys: ['id', 'role', 'drive', 'rail', 'profile', 'params', 'pull', 'side'],
+  },
   {
     name: 'params',
     order: KEY_ORDER.params,
     schema: ParamsSchema,
     keys: [
-      'vih', 'vil', 'schmitt', 'iih', 'iil', 'cin', 'viMax', 'unpoweredSafe', 'viMaxOff', 'voh', 'vol', 'ioMax', 'maxInputRamp', 'vddRange', 'deltaIcc', 'deltaIccDrop',
-      'viMin', 'injectionMax', 'busHold', 'seriesResistance', 'minExternalPull', 'maxLoadCapacitance',
+      'vih',
+      'vil',
+      'schmitt',
+      'iih',
+      'iil',
+      'cin',
+      'viMax',
+      'unpoweredSafe',
+      'viMaxOff',
+      'voh',
+      'vol',
+      'ioMax',
+      'maxInputRamp',
+      'vddRange',
+      'deltaIcc',
+      'deltaIccDrop',
+      'viMin',
+      'injectionMax',
+      'busHold',
+      'seriesResistance',
+      'minExternalPull',
+      'maxLoadCapacitance',
     ],
   },
-  { name: 'pull', order: KEY_ORDER.design.children.nets.children.pull, schema: PullSchema, keys: ['to', 'ohms', 'tolerance', 'min', 'max'] },
-  { name: 'net', order: KEY_ORDER.design.children.nets, schema: NetSchema, keys: ['id', 'label', 'pins', 'pull', 'wiringCapacitance', 'maxRiseTime', 'waivers', 'route'] },
-  { name: 'waiver', order: KEY_ORDER.design.children.nets.children.waivers, schema: WaiverSchema, keys: ['rule', 'scenario', 'note'] },
-  { name: 'profile', order: KEY_ORDER.design.children.profiles, schema: ProfileSchema, keys: ['id', 'label', 'source', 'params'] },
+  {
+    name: 'pull',
+    order: KEY_ORDER.design.children.nets.children.pull,
+    schema: PullSchema,
+    keys: ['to', 'ohms', 'tolerance', 'min', 'max'],
+  },
+  {
+    name: 'net',
+    order: KEY_ORDER.design.children.nets,
+    schema: NetSchema,
+    keys: ['id', 'label', 'pins', 'pull', 'wiringCapacitance', 'maxRiseTime', 'waivers', 'route'],
+  },
+  {
+    name: 'waiver',
+    order: KEY_ORDER.design.children.nets.children.waivers,
+    schema: WaiverSchema,
+    keys: ['rule', 'scenario', 'note'],
+  },
+  {
+    name: 'profile',
+    order: KEY_ORDER.design.children.profiles,
+    schema: ProfileSchema,
+    keys: ['id', 'label', 'source', 'params'],
+  },
 ];
 
 /** The discrete parts share one key order; each kind's schema has a subset of it. */
-const DISCRETE_ORDER = ['id', 'kind', 'label', 'ohms', 'tolerance', 'tie', 'gate', 'vgsThMax', 'rdsOnMax', 'vfMax', 'leakageMax', 'position'];
+const DISCRETE_ORDER = [
+  'id',
+  'kind',
+  'label',
+  'ohms',
+  'tolerance',
+  'tie',
+  'gate',
+  'vgsThMax',
+  'rdsOnMax',
+  'vfMax',
+  'leakageMax',
+  'position',
+];
 
 describe('writeDesign key order of the discretes (version 2)', () => {
   it('is the table order', () => {
@@ -83,7 +166,26 @@ describe('writeDesign key order', () => {
     } as unknown as Design;
     const text = writeDesign(shuffled);
     const keysInText = [...text.matchAll(/"(\w+)":/g)].map((m) => m[1]);
-    expect(keysInText).toEqual(['format', 'version', 'title', 'rails', 'id', 'label', 'nominal', 'colour', 'parts', 'id', 'label', 'rail', 'profile', 'pins', 'id', 'role', 'side', 'nets']);
+    expect(keysInText).toEqual([
+      'format',
+      'version',
+      'title',
+      'rails',
+      'id',
+      'label',
+      'nominal',
+      'colour',
+      'parts',
+      'id',
+      'label',
+      'rail',
+      'profile',
+      'pins',
+      'id',
+      'role',
+      'side',
+      'nets',
+    ]);
   });
 });
 
@@ -93,10 +195,23 @@ describe('writeDesign layout', () => {
 
   const cases: { name: string; holds: (t: string) => boolean }[] = [
     { name: 'ends with one newline', holds: (t) => t.endsWith('}\n') && !t.endsWith('\n\n') },
-    { name: 'two-space indentation', holds: (t) => t.includes('\n  "version": 2,\n') && t.includes('\n    {\n      "id": "5v0",') },
-    { name: 'plain arrays on one line', holds: (t) => t.includes('"pins": ["U3.B1", "U1.PROBE_IN", "U4.DRDY"]') && t.includes('"vddRange": [4.5, 5.5]') },
-    { name: 'route pairs one per line', holds: (t) => t.includes('"route": [\n        ["U3.B1", "U1.PROBE_IN"],\n        ["U1.PROBE_IN", "U4.DRDY"]\n      ]') },
-    { name: 'numbers as JSON numbers (SI, no engineering notation)', holds: (t) => t.includes('"ohms": 4700') && t.includes('"maxRiseTime": 3e-7') },
+    {
+      name: 'two-space indentation',
+      holds: (t) => t.includes('\n  "version": 2,\n') && t.includes('\n    {\n      "id": "5v0",'),
+    },
+    {
+      name: 'plain arrays on one line',
+      holds: (t) => t.includes('"pins": ["U3.B1", "U1.PROBE_IN", "U4.DRDY"]') && t.includes('"vddRange": [4.5, 5.5]'),
+    },
+    {
+      name: 'route pairs one per line',
+      holds: (t) =>
+        t.includes('"route": [\n        ["U3.B1", "U1.PROBE_IN"],\n        ["U1.PROBE_IN", "U4.DRDY"]\n      ]'),
+    },
+    {
+      name: 'numbers as JSON numbers (SI, no engineering notation)',
+      holds: (t) => t.includes('"ohms": 4700') && t.includes('"maxRiseTime": 3e-7'),
+    },
     { name: 'no tabs, no trailing spaces', holds: (t) => !/\t| \n/.test(t) },
   ];
   it.each(cases)('$name', ({ holds }) => {
@@ -117,7 +232,14 @@ describe('writeDesign layout', () => {
     g.nets.reverse();
     const r = readDesign(writeDesign(g));
     expect(r.ok && Object.is(r.design.parts[0]!.position!.x, -0)).toBe(true);
-    expect(r.ok && r.design.nets.map((n) => n.id)).toEqual(['PROBE_BUF', 'PROBE', 'ALARM', 'VALVE_EN', 'I2C_SCL', 'I2C_SDA']);
+    expect(r.ok && r.design.nets.map((n) => n.id)).toEqual([
+      'PROBE_BUF',
+      'PROBE',
+      'ALARM',
+      'VALVE_EN',
+      'I2C_SCL',
+      'I2C_SDA',
+    ]);
   });
 
   it('escapes text so that it reads back the same', () => {
@@ -141,14 +263,19 @@ describe('writeDesign round trip', () => {
 
   it('a design written with its keys in another order gives the same text', () => {
     const d = greenhouse();
-    const reordered = JSON.parse(JSON.stringify(d, Object.keys(d).reverse().concat(collectKeys(d).reverse()))) as Design;
+    const reordered = JSON.parse(
+      JSON.stringify(d, Object.keys(d).reverse().concat(collectKeys(d).reverse())),
+    ) as Design;
     expect(Object.keys(reordered)[0]).toBe('nets');
     expect(writeDesign(reordered)).toBe(writeDesign(d));
   });
 });
 
 function collectKeys(value: unknown, into = new Set<string>()): string[] {
-  if (Array.isArray(value)) value.forEach((v) => collectKeys(v, into));
+  if (Array.isArray(value))
+    value.forEach((v) => {
+      collectKeys(v, into);
+    });
   else if (typeof value === 'object' && value !== null) {
     for (const [k, v] of Object.entries(value)) {
       into.add(k);

@@ -9,23 +9,47 @@
 import { describe, expect, it } from 'vitest';
 import { ProfileSchema, type Params } from '../../rules/model/schema.ts';
 import { BUILTIN_PROFILE_IDS as IDS_MODULE } from '../../rules/model/profileIds.ts';
-import {
-  BUILTIN_PROFILE_IDS,
-  BUILTIN_PROFILES,
-  builtinProfile,
-  resolveProfile,
-} from '../../rules/profiles/index.ts';
+import { BUILTIN_PROFILE_IDS, BUILTIN_PROFILES, builtinProfile, resolveProfile } from '../../rules/profiles/index.ts';
 
 /** design-format.md v1, "Built-in profile ids", in its order. */
 const V1_IDS = [
-  'ttl', '74ls', '74ls-oc', '74hc', '74hct', '74ac', '74act', '74ahc', '74ahct', '74lvc',
-  'lvttl33', 'lvcmos33', 'lvcmos25', 'lvcmos18', 'lvcmos15', 'lvcmos12', 'cmos4000', 'i2c',
-  'i2c-lv', 'mcu-gpio', 'off-board',
+  'ttl',
+  '74ls',
+  '74ls-oc',
+  '74hc',
+  '74hct',
+  '74ac',
+  '74act',
+  '74ahc',
+  '74ahct',
+  '74lvc',
+  'lvttl33',
+  'lvcmos33',
+  'lvcmos25',
+  'lvcmos18',
+  'lvcmos15',
+  'lvcmos12',
+  'cmos4000',
+  'i2c',
+  'i2c-lv',
+  'mcu-gpio',
+  'off-board',
 ];
 
 /** Ids the library added after the v1 list, in the library's order. */
 const ADDED_IDS = [
-  'xlat-side', 'xlat-od', 'i2c-fm', 'smbus', 'cmos4000-ub', '74lvc-18', '74lvc-25', '74lvc-od', '74lvt', '74abt', '74avc', '74auc',
+  'xlat-side',
+  'xlat-od',
+  'i2c-fm',
+  'smbus',
+  'cmos4000-ub',
+  '74lvc-18',
+  '74lvc-25',
+  '74lvc-od',
+  '74lvt',
+  '74abt',
+  '74avc',
+  '74auc',
 ];
 
 const ALL_IDS = [...V1_IDS, ...ADDED_IDS];
@@ -36,120 +60,312 @@ const mA = 1e-3;
 /** builtin-profiles.md, row by row. A key absent here is a dash in the table. */
 const TABLE: Record<string, Params> = {
   ttl: {
-    vddRange: [4.75, 5.25], vih: 2, vil: 0.8,
-    voh: [{ v: 2.4, i: 400 * µA }], vol: [{ v: 0.4, i: 16 * mA }],
-    iih: 40 * µA, iil: 1.6 * mA, cin: 5e-12, viMax: 5.5, // cin from memory (issue 16)
+    vddRange: [4.75, 5.25],
+    vih: 2,
+    vil: 0.8,
+    voh: [{ v: 2.4, i: 400 * µA }],
+    vol: [{ v: 0.4, i: 16 * mA }],
+    iih: 40 * µA,
+    iil: 1.6 * mA,
+    cin: 5e-12,
+    viMax: 5.5, // cin from memory (issue 16)
   },
   '74ls': {
-    vddRange: [4.75, 5.25], vih: 2, vil: 0.8,
-    voh: [{ v: 2.7, i: 400 * µA }], vol: [{ v: 0.4, i: 4 * mA }, { v: 0.5, i: 8 * mA }],
-    iih: 20 * µA, iil: 400 * µA, cin: 5e-12, viMax: 7, // cin from memory (issue 16)
+    vddRange: [4.75, 5.25],
+    vih: 2,
+    vil: 0.8,
+    voh: [{ v: 2.7, i: 400 * µA }],
+    vol: [
+      { v: 0.4, i: 4 * mA },
+      { v: 0.5, i: 8 * mA },
+    ],
+    iih: 20 * µA,
+    iil: 400 * µA,
+    cin: 5e-12,
+    viMax: 7, // cin from memory (issue 16)
   },
   '74ls-oc': {
-    vddRange: [4.75, 5.25], vol: [{ v: 0.5, i: 8 * mA }], iih: 100 * µA, viMax: 5.5,
+    vddRange: [4.75, 5.25],
+    vol: [{ v: 0.5, i: 8 * mA }],
+    iih: 100 * µA,
+    viMax: 5.5,
   },
   '74hc': {
     // issue 16: the whole 2–6 V of JESD7 (as restated), each heavier row from the supply it is tabulated at
-    vddRange: [2, 6], vih: '0.675*VDD+0.15', vil: '0.325*VDD-0.15',
-    voh: [{ v: 'VDD-0.1', i: 20 * µA }, { v: 'VDD-0.66', i: 4 * mA, vddMin: 4.5 }, { v: 'VDD-0.66', i: 5.2 * mA, vddMin: 6 }],
-    vol: [{ v: 0.1, i: 20 * µA }, { v: 0.33, i: 4 * mA, vddMin: 4.5 }, { v: 0.33, i: 5.2 * mA, vddMin: 6 }],
-    iih: 1 * µA, iil: 1 * µA, cin: 10e-12, viMax: 'VDD+0.5',
+    vddRange: [2, 6],
+    vih: '0.675*VDD+0.15',
+    vil: '0.325*VDD-0.15',
+    voh: [
+      { v: 'VDD-0.1', i: 20 * µA },
+      { v: 'VDD-0.66', i: 4 * mA, vddMin: 4.5 },
+      { v: 'VDD-0.66', i: 5.2 * mA, vddMin: 6 },
+    ],
+    vol: [
+      { v: 0.1, i: 20 * µA },
+      { v: 0.33, i: 4 * mA, vddMin: 4.5 },
+      { v: 0.33, i: 5.2 * mA, vddMin: 6 },
+    ],
+    iih: 1 * µA,
+    iil: 1 * µA,
+    cin: 10e-12,
+    viMax: 'VDD+0.5',
   },
   '74hct': {
-    vddRange: [4.5, 5.5], vih: 2, vil: 0.8,
-    voh: [{ v: 'VDD-0.1', i: 20 * µA }, { v: 'VDD-0.66', i: 4 * mA }],
-    vol: [{ v: 0.1, i: 20 * µA }, { v: 0.33, i: 4 * mA }],
-    iih: 1 * µA, iil: 1 * µA, cin: 10e-12, deltaIcc: 0.5 * mA, deltaIccDrop: 2.1, viMax: 'VDD+0.5',
+    vddRange: [4.5, 5.5],
+    vih: 2,
+    vil: 0.8,
+    voh: [
+      { v: 'VDD-0.1', i: 20 * µA },
+      { v: 'VDD-0.66', i: 4 * mA },
+    ],
+    vol: [
+      { v: 0.1, i: 20 * µA },
+      { v: 0.33, i: 4 * mA },
+    ],
+    iih: 1 * µA,
+    iil: 1 * µA,
+    cin: 10e-12,
+    deltaIcc: 0.5 * mA,
+    deltaIccDrop: 2.1,
+    viMax: 'VDD+0.5',
   },
   '74ac': {
-    vddRange: [4.5, 6], vih: '0.7*VDD', vil: '0.3*VDD',
-    voh: [{ v: 'VDD-0.1', i: 50 * µA }, { v: 'VDD-0.74', i: 24 * mA }],
-    vol: [{ v: 0.1, i: 50 * µA }, { v: 0.44, i: 24 * mA }],
-    iih: 1 * µA, iil: 1 * µA, cin: 10e-12, viMax: 'VDD+0.5', // cin from memory (issue 16)
+    vddRange: [4.5, 6],
+    vih: '0.7*VDD',
+    vil: '0.3*VDD',
+    voh: [
+      { v: 'VDD-0.1', i: 50 * µA },
+      { v: 'VDD-0.74', i: 24 * mA },
+    ],
+    vol: [
+      { v: 0.1, i: 50 * µA },
+      { v: 0.44, i: 24 * mA },
+    ],
+    iih: 1 * µA,
+    iil: 1 * µA,
+    cin: 10e-12,
+    viMax: 'VDD+0.5', // cin from memory (issue 16)
   },
   '74act': {
-    vddRange: [4.5, 5.5], vih: 2, vil: 0.8,
-    voh: [{ v: 'VDD-0.1', i: 50 * µA }, { v: 'VDD-0.74', i: 24 * mA }],
-    vol: [{ v: 0.1, i: 50 * µA }, { v: 0.44, i: 24 * mA }],
-    iih: 1 * µA, iil: 1 * µA, cin: 10e-12, deltaIcc: 1.5 * mA, deltaIccDrop: 2.1, viMax: 'VDD+0.5', // cin from memory (issue 16)
+    vddRange: [4.5, 5.5],
+    vih: 2,
+    vil: 0.8,
+    voh: [
+      { v: 'VDD-0.1', i: 50 * µA },
+      { v: 'VDD-0.74', i: 24 * mA },
+    ],
+    vol: [
+      { v: 0.1, i: 50 * µA },
+      { v: 0.44, i: 24 * mA },
+    ],
+    iih: 1 * µA,
+    iil: 1 * µA,
+    cin: 10e-12,
+    deltaIcc: 1.5 * mA,
+    deltaIccDrop: 2.1,
+    viMax: 'VDD+0.5', // cin from memory (issue 16)
   },
   '74ahc': {
-    vddRange: [4.5, 5.5], vih: '0.7*VDD', vil: '0.3*VDD',
+    vddRange: [4.5, 5.5],
+    vih: '0.7*VDD',
+    vil: '0.3*VDD',
     // VOH at 8 mA: VDD − 0.70, the −40…85 °C figure of a family datasheet's DC table (issue 16's review)
-    voh: [{ v: 'VDD-0.1', i: 50 * µA }, { v: 'VDD-0.7', i: 8 * mA }],
-    vol: [{ v: 0.1, i: 50 * µA }, { v: 0.44, i: 8 * mA }],
-    iih: 1 * µA, iil: 1 * µA, cin: 10e-12, viMax: 5.5, // cin from memory
+    voh: [
+      { v: 'VDD-0.1', i: 50 * µA },
+      { v: 'VDD-0.7', i: 8 * mA },
+    ],
+    vol: [
+      { v: 0.1, i: 50 * µA },
+      { v: 0.44, i: 8 * mA },
+    ],
+    iih: 1 * µA,
+    iil: 1 * µA,
+    cin: 10e-12,
+    viMax: 5.5, // cin from memory
   },
   '74ahct': {
-    vddRange: [4.5, 5.5], vih: 2, vil: 0.8,
+    vddRange: [4.5, 5.5],
+    vih: 2,
+    vil: 0.8,
     // VOH at 8 mA: VDD − 0.70, the −40…85 °C figure of a family datasheet's DC table (issue 16's review)
-    voh: [{ v: 'VDD-0.1', i: 50 * µA }, { v: 'VDD-0.7', i: 8 * mA }],
-    vol: [{ v: 0.1, i: 50 * µA }, { v: 0.44, i: 8 * mA }],
-    iih: 1 * µA, iil: 1 * µA, cin: 10e-12, deltaIcc: 1.5 * mA, deltaIccDrop: 2.1, viMax: 5.5, // cin from memory
+    voh: [
+      { v: 'VDD-0.1', i: 50 * µA },
+      { v: 'VDD-0.7', i: 8 * mA },
+    ],
+    vol: [
+      { v: 0.1, i: 50 * µA },
+      { v: 0.44, i: 8 * mA },
+    ],
+    iih: 1 * µA,
+    iil: 1 * µA,
+    cin: 10e-12,
+    deltaIcc: 1.5 * mA,
+    deltaIccDrop: 2.1,
+    viMax: 5.5, // cin from memory
   },
   '74lvc': {
-    vddRange: [2.7, 3.6], vih: 2, vil: 0.8,
-    voh: [{ v: 'VDD-0.2', i: 100 * µA }, { v: 'VDD-0.6', i: 12 * mA }],
-    vol: [{ v: 0.2, i: 100 * µA }, { v: 0.4, i: 12 * mA }],
-    iih: 5 * µA, iil: 5 * µA, cin: 5e-12, viMax: 5.5, unpoweredSafe: true, viMaxOff: 5.5, // currents and cin from memory
+    vddRange: [2.7, 3.6],
+    vih: 2,
+    vil: 0.8,
+    voh: [
+      { v: 'VDD-0.2', i: 100 * µA },
+      { v: 'VDD-0.6', i: 12 * mA },
+    ],
+    vol: [
+      { v: 0.2, i: 100 * µA },
+      { v: 0.4, i: 12 * mA },
+    ],
+    iih: 5 * µA,
+    iil: 5 * µA,
+    cin: 5e-12,
+    viMax: 5.5,
+    unpoweredSafe: true,
+    viMaxOff: 5.5, // currents and cin from memory
   },
   lvttl33: {
-    vddRange: [3, 3.6], vih: 2, vil: 0.8,
-    voh: [{ v: 2.4, i: 2 * mA }], vol: [{ v: 0.4, i: 2 * mA }], iih: 5 * µA, iil: 5 * µA, cin: 5e-12, viMax: 'VDD+0.5',
+    vddRange: [3, 3.6],
+    vih: 2,
+    vil: 0.8,
+    voh: [{ v: 2.4, i: 2 * mA }],
+    vol: [{ v: 0.4, i: 2 * mA }],
+    iih: 5 * µA,
+    iil: 5 * µA,
+    cin: 5e-12,
+    viMax: 'VDD+0.5',
   },
   lvcmos33: {
-    vddRange: [3, 3.6], vih: 2, vil: 0.8,
-    voh: [{ v: 'VDD-0.2', i: 100 * µA }], vol: [{ v: 0.2, i: 100 * µA }], iih: 5 * µA, iil: 5 * µA, cin: 5e-12, viMax: 'VDD+0.5',
+    vddRange: [3, 3.6],
+    vih: 2,
+    vil: 0.8,
+    voh: [{ v: 'VDD-0.2', i: 100 * µA }],
+    vol: [{ v: 0.2, i: 100 * µA }],
+    iih: 5 * µA,
+    iil: 5 * µA,
+    cin: 5e-12,
+    viMax: 'VDD+0.5',
   },
   lvcmos25: {
-    vddRange: [2.3, 2.7], vih: 1.7, vil: 0.7,
-    voh: [{ v: 'VDD-0.2', i: 100 * µA }, { v: 2, i: 1 * mA }, { v: 1.7, i: 2 * mA }],
-    vol: [{ v: 0.2, i: 100 * µA }, { v: 0.4, i: 1 * mA }, { v: 0.7, i: 2 * mA }],
-    iih: 5 * µA, iil: 5 * µA, cin: 5e-12, // from memory (issue 16)
+    vddRange: [2.3, 2.7],
+    vih: 1.7,
+    vil: 0.7,
+    voh: [
+      { v: 'VDD-0.2', i: 100 * µA },
+      { v: 2, i: 1 * mA },
+      { v: 1.7, i: 2 * mA },
+    ],
+    vol: [
+      { v: 0.2, i: 100 * µA },
+      { v: 0.4, i: 1 * mA },
+      { v: 0.7, i: 2 * mA },
+    ],
+    iih: 5 * µA,
+    iil: 5 * µA,
+    cin: 5e-12, // from memory (issue 16)
     viMax: 'VDD+0.5',
   },
   lvcmos18: {
-    vddRange: [1.65, 1.95], vih: '0.65*VDD', vil: '0.35*VDD',
-    voh: [{ v: 'VDD-0.2', i: 100 * µA }, { v: 'VDD-0.45', i: 2 * mA }],
-    vol: [{ v: 0.2, i: 100 * µA }, { v: 0.45, i: 2 * mA }],
-    iih: 5 * µA, iil: 5 * µA, cin: 5e-12, // from memory (issue 16)
+    vddRange: [1.65, 1.95],
+    vih: '0.65*VDD',
+    vil: '0.35*VDD',
+    voh: [
+      { v: 'VDD-0.2', i: 100 * µA },
+      { v: 'VDD-0.45', i: 2 * mA },
+    ],
+    vol: [
+      { v: 0.2, i: 100 * µA },
+      { v: 0.45, i: 2 * mA },
+    ],
+    iih: 5 * µA,
+    iil: 5 * µA,
+    cin: 5e-12, // from memory (issue 16)
     viMax: 'VDD+0.5',
   },
   lvcmos15: {
-    vddRange: [1.4, 1.6], vih: '0.65*VDD', vil: '0.35*VDD',
-    voh: [{ v: 'VDD-0.2', i: 100 * µA }, { v: '0.75*VDD', i: 2 * mA }],
-    vol: [{ v: 0.2, i: 100 * µA }, { v: '0.25*VDD', i: 2 * mA }],
-    iih: 5 * µA, iil: 5 * µA, cin: 5e-12, // from memory (issue 16)
+    vddRange: [1.4, 1.6],
+    vih: '0.65*VDD',
+    vil: '0.35*VDD',
+    voh: [
+      { v: 'VDD-0.2', i: 100 * µA },
+      { v: '0.75*VDD', i: 2 * mA },
+    ],
+    vol: [
+      { v: 0.2, i: 100 * µA },
+      { v: '0.25*VDD', i: 2 * mA },
+    ],
+    iih: 5 * µA,
+    iil: 5 * µA,
+    cin: 5e-12, // from memory (issue 16)
     viMax: 'VDD+0.5',
   },
   lvcmos12: {
-    vddRange: [1.1, 1.3], vih: '0.65*VDD', vil: '0.35*VDD',
-    voh: [{ v: 'VDD-0.1', i: 100 * µA }, { v: '0.75*VDD', i: 2 * mA }],
-    vol: [{ v: 0.1, i: 100 * µA }, { v: '0.25*VDD', i: 2 * mA }],
-    iih: 5 * µA, iil: 5 * µA, cin: 5e-12, // from memory (issue 16)
+    vddRange: [1.1, 1.3],
+    vih: '0.65*VDD',
+    vil: '0.35*VDD',
+    voh: [
+      { v: 'VDD-0.1', i: 100 * µA },
+      { v: '0.75*VDD', i: 2 * mA },
+    ],
+    vol: [
+      { v: 0.1, i: 100 * µA },
+      { v: '0.25*VDD', i: 2 * mA },
+    ],
+    iih: 5 * µA,
+    iil: 5 * µA,
+    cin: 5e-12, // from memory (issue 16)
     viMax: 'VDD+0.5',
   },
   cmos4000: {
-    vddRange: [5, 15], vih: '0.75*VDD-0.25', vil: '0.25*VDD+0.25',
-    voh: [{ v: 'VDD-0.05', i: 1 * µA }, { v: 'VDD-0.4', i: 360 * µA }],
-    vol: [{ v: 0.05, i: 1 * µA }, { v: 0.4, i: 360 * µA }],
-    iih: 1 * µA, iil: 1 * µA, viMax: 'VDD+0.5',
+    vddRange: [5, 15],
+    vih: '0.75*VDD-0.25',
+    vil: '0.25*VDD+0.25',
+    voh: [
+      { v: 'VDD-0.05', i: 1 * µA },
+      { v: 'VDD-0.4', i: 360 * µA },
+    ],
+    vol: [
+      { v: 0.05, i: 1 * µA },
+      { v: 0.4, i: 360 * µA },
+    ],
+    iih: 1 * µA,
+    iil: 1 * µA,
+    viMax: 'VDD+0.5',
   },
   i2c: {
-    vddRange: [2, 5.5], vih: '0.7*VDD', vil: '0.3*VDD',
+    vddRange: [2, 5.5],
+    vih: '0.7*VDD',
+    vil: '0.3*VDD',
     vol: [{ v: 0.4, i: 3 * mA }],
-    iih: 10 * µA, iil: 10 * µA, cin: 10e-12, viMax: 'VDD+0.5',
+    iih: 10 * µA,
+    iil: 10 * µA,
+    cin: 10e-12,
+    viMax: 'VDD+0.5',
   },
   'i2c-lv': {
-    vddRange: [1.65, 2], vih: '0.7*VDD', vil: '0.3*VDD',
+    vddRange: [1.65, 2],
+    vih: '0.7*VDD',
+    vil: '0.3*VDD',
     vol: [{ v: '0.2*VDD', i: 3 * mA }],
-    iih: 10 * µA, iil: 10 * µA, cin: 10e-12, viMax: 'VDD+0.5',
+    iih: 10 * µA,
+    iil: 10 * µA,
+    cin: 10e-12,
+    viMax: 'VDD+0.5',
   },
   'mcu-gpio': {
-    vih: '0.7*VDD', vil: '0.3*VDD',
+    vih: '0.7*VDD',
+    vil: '0.3*VDD',
     // 8 mA rows, ±1 µA and 5 pF from memory (issue 16)
-    voh: [{ v: 'VDD-0.2', i: 100 * µA }, { v: 'VDD-0.4', i: 8 * mA }], vol: [{ v: 0.2, i: 100 * µA }, { v: 0.4, i: 8 * mA }],
-    iih: 1 * µA, iil: 1 * µA, cin: 5e-12, viMax: 'VDD+0.5',
+    voh: [
+      { v: 'VDD-0.2', i: 100 * µA },
+      { v: 'VDD-0.4', i: 8 * mA },
+    ],
+    vol: [
+      { v: 0.2, i: 100 * µA },
+      { v: 0.4, i: 8 * mA },
+    ],
+    iih: 1 * µA,
+    iil: 1 * µA,
+    cin: 5e-12,
+    viMax: 'VDD+0.5',
   },
   'off-board': {},
 };
@@ -161,84 +377,209 @@ const TABLE: Record<string, Params> = {
 const ADDED: Record<string, Params> = {
   'xlat-side': {
     vddRange: [1.65, 5.5], // from memory: the usual span of either supply of such parts
-    vih: '0.65*VDD', vil: '0.35*VDD', // JESD8-7's scaled thresholds, over the whole range (from memory)
+    vih: '0.65*VDD',
+    vil: '0.35*VDD', // JESD8-7's scaled thresholds, over the whole range (from memory)
     // JESD8-7 rows: 2 mA restated, 100 µA from memory; carried up the supply unchanged
-    voh: [{ v: 'VDD-0.2', i: 100 * µA }, { v: 'VDD-0.45', i: 2 * mA }],
-    vol: [{ v: 0.2, i: 100 * µA }, { v: 0.45, i: 2 * mA }],
-    iih: 1 * µA, iil: 1 * µA, // from memory
+    voh: [
+      { v: 'VDD-0.2', i: 100 * µA },
+      { v: 'VDD-0.45', i: 2 * mA },
+    ],
+    vol: [
+      { v: 0.2, i: 100 * µA },
+      { v: 0.45, i: 2 * mA },
+    ],
+    iih: 1 * µA,
+    iil: 1 * µA, // from memory
     viMax: 'VDD+0.5', // common practice: clamp to the side's own supply
-    unpoweredSafe: true, viMaxOff: 5.5, // common practice: partial power-down; 5.5 V from memory
+    unpoweredSafe: true,
+    viMaxOff: 5.5, // common practice: partial power-down; 5.5 V from memory
   },
   'xlat-od': {
     vddRange: [1.65, 5.5], // from memory
-    vih: '0.65*VDD', vil: '0.35*VDD', // from memory
-    vol: [{ v: 0.15, i: 1 * mA }, { v: 0.3, i: 3 * mA }], // from memory
-    iih: 1 * µA, iil: 1 * µA, // from memory
+    vih: '0.65*VDD',
+    vil: '0.35*VDD', // from memory
+    vol: [
+      { v: 0.15, i: 1 * mA },
+      { v: 0.3, i: 3 * mA },
+    ], // from memory
+    iih: 1 * µA,
+    iil: 1 * µA, // from memory
     viMax: 'VDD+0.5', // common practice
-    unpoweredSafe: true, viMaxOff: 5.5, // common practice: partial power-down; 5.5 V from memory
+    unpoweredSafe: true,
+    viMaxOff: 5.5, // common practice: partial power-down; 5.5 V from memory
   },
   'i2c-fm': {
-    vddRange: [2, 5.5], vih: '0.7*VDD', vil: '0.3*VDD',
-    vol: [{ v: 0.4, i: 3 * mA }, { v: 0.6, i: 6 * mA }], // I2C-bus specification: fast-mode 0.6 V @ 6 mA
-    iih: 10 * µA, iil: 10 * µA, cin: 10e-12, viMax: 'VDD+0.5',
+    vddRange: [2, 5.5],
+    vih: '0.7*VDD',
+    vil: '0.3*VDD',
+    vol: [
+      { v: 0.4, i: 3 * mA },
+      { v: 0.6, i: 6 * mA },
+    ], // I2C-bus specification: fast-mode 0.6 V @ 6 mA
+    iih: 10 * µA,
+    iil: 10 * µA,
+    cin: 10e-12,
+    viMax: 'VDD+0.5',
   },
   smbus: {
     // SMBus specification 2.0, from memory: fixed 0.8 / 2.1 V thresholds, 0.4 V @ 4 mA
-    vddRange: [3, 5.5], vih: 2.1, vil: 0.8, vol: [{ v: 0.4, i: 4 * mA }],
-    iih: 5 * µA, iil: 5 * µA, cin: 10e-12, viMax: 'VDD+0.5',
+    vddRange: [3, 5.5],
+    vih: 2.1,
+    vil: 0.8,
+    vol: [{ v: 0.4, i: 4 * mA }],
+    iih: 5 * µA,
+    iil: 5 * µA,
+    cin: 10e-12,
+    viMax: 'VDD+0.5',
   },
   'cmos4000-ub': {
     // JESD13 UB: 4.0 / 1.0 V at 5 V (restated), 12.5 / 2.5 V at 15 V (from memory): lines exact at both
-    vddRange: [5, 15], vih: '0.85*VDD-0.25', vil: '0.15*VDD+0.25',
-    voh: [{ v: 'VDD-0.05', i: 1 * µA }, { v: 'VDD-0.4', i: 360 * µA }],
-    vol: [{ v: 0.05, i: 1 * µA }, { v: 0.4, i: 360 * µA }],
-    iih: 1 * µA, iil: 1 * µA, viMax: 'VDD+0.5',
+    vddRange: [5, 15],
+    vih: '0.85*VDD-0.25',
+    vil: '0.15*VDD+0.25',
+    voh: [
+      { v: 'VDD-0.05', i: 1 * µA },
+      { v: 'VDD-0.4', i: 360 * µA },
+    ],
+    vol: [
+      { v: 0.05, i: 1 * µA },
+      { v: 0.4, i: 360 * µA },
+    ],
+    iih: 1 * µA,
+    iil: 1 * µA,
+    viMax: 'VDD+0.5',
   },
   '74lvc-18': {
     // JESD8-7 thresholds; 4 mA rows at 1.65 V from memory
-    vddRange: [1.65, 1.95], vih: '0.65*VDD', vil: '0.35*VDD',
-    voh: [{ v: 'VDD-0.2', i: 100 * µA }, { v: 'VDD-0.45', i: 4 * mA }],
-    vol: [{ v: 0.2, i: 100 * µA }, { v: 0.45, i: 4 * mA }],
-    iih: 5 * µA, iil: 5 * µA, cin: 5e-12, viMax: 5.5, unpoweredSafe: true, viMaxOff: 5.5,
+    vddRange: [1.65, 1.95],
+    vih: '0.65*VDD',
+    vil: '0.35*VDD',
+    voh: [
+      { v: 'VDD-0.2', i: 100 * µA },
+      { v: 'VDD-0.45', i: 4 * mA },
+    ],
+    vol: [
+      { v: 0.2, i: 100 * µA },
+      { v: 0.45, i: 4 * mA },
+    ],
+    iih: 5 * µA,
+    iil: 5 * µA,
+    cin: 5e-12,
+    viMax: 5.5,
+    unpoweredSafe: true,
+    viMaxOff: 5.5,
   },
   '74lvc-25': {
     // JESD8-5 thresholds; 8 mA rows at 2.3 V from memory
-    vddRange: [2.3, 2.7], vih: 1.7, vil: 0.7,
-    voh: [{ v: 'VDD-0.2', i: 100 * µA }, { v: 'VDD-0.6', i: 8 * mA }],
-    vol: [{ v: 0.2, i: 100 * µA }, { v: 0.6, i: 8 * mA }],
-    iih: 5 * µA, iil: 5 * µA, cin: 5e-12, viMax: 5.5, unpoweredSafe: true, viMaxOff: 5.5,
+    vddRange: [2.3, 2.7],
+    vih: 1.7,
+    vil: 0.7,
+    voh: [
+      { v: 'VDD-0.2', i: 100 * µA },
+      { v: 'VDD-0.6', i: 8 * mA },
+    ],
+    vol: [
+      { v: 0.2, i: 100 * µA },
+      { v: 0.6, i: 8 * mA },
+    ],
+    iih: 5 * µA,
+    iil: 5 * µA,
+    cin: 5e-12,
+    viMax: 5.5,
+    unpoweredSafe: true,
+    viMaxOff: 5.5,
   },
   '74lvc-od': {
     // as 74LVC, sink rows only
-    vddRange: [2.7, 3.6], vih: 2, vil: 0.8, vol: [{ v: 0.2, i: 100 * µA }, { v: 0.4, i: 12 * mA }],
-    iih: 5 * µA, iil: 5 * µA, cin: 5e-12, viMax: 5.5, unpoweredSafe: true, viMaxOff: 5.5,
+    vddRange: [2.7, 3.6],
+    vih: 2,
+    vil: 0.8,
+    vol: [
+      { v: 0.2, i: 100 * µA },
+      { v: 0.4, i: 12 * mA },
+    ],
+    iih: 5 * µA,
+    iil: 5 * µA,
+    cin: 5e-12,
+    viMax: 5.5,
+    unpoweredSafe: true,
+    viMaxOff: 5.5,
   },
   '74lvt': {
     // from memory: TTL levels, 32 mA rows at 3.0 V
-    vddRange: [3, 3.6], vih: 2, vil: 0.8,
-    voh: [{ v: 'VDD-0.2', i: 100 * µA }, { v: 2, i: 32 * mA }],
-    vol: [{ v: 0.2, i: 100 * µA }, { v: 0.5, i: 32 * mA }, { v: 0.55, i: 64 * mA }],
-    iih: 1 * µA, iil: 1 * µA, cin: 5e-12, viMax: 5.5, unpoweredSafe: true, viMaxOff: 5.5,
+    vddRange: [3, 3.6],
+    vih: 2,
+    vil: 0.8,
+    voh: [
+      { v: 'VDD-0.2', i: 100 * µA },
+      { v: 2, i: 32 * mA },
+    ],
+    vol: [
+      { v: 0.2, i: 100 * µA },
+      { v: 0.5, i: 32 * mA },
+      { v: 0.55, i: 64 * mA },
+    ],
+    iih: 1 * µA,
+    iil: 1 * µA,
+    cin: 5e-12,
+    viMax: 5.5,
+    unpoweredSafe: true,
+    viMaxOff: 5.5,
   },
   '74abt': {
     // from memory: TTL levels at 4.5 V
-    vddRange: [4.5, 5.5], vih: 2, vil: 0.8,
-    voh: [{ v: 2.5, i: 3 * mA }, { v: 2, i: 32 * mA }], vol: [{ v: 0.55, i: 64 * mA }],
-    iih: 1 * µA, iil: 1 * µA, cin: 5e-12, viMax: 5.5,
+    vddRange: [4.5, 5.5],
+    vih: 2,
+    vil: 0.8,
+    voh: [
+      { v: 2.5, i: 3 * mA },
+      { v: 2, i: 32 * mA },
+    ],
+    vol: [{ v: 0.55, i: 64 * mA }],
+    iih: 1 * µA,
+    iil: 1 * µA,
+    cin: 5e-12,
+    viMax: 5.5,
   },
   '74avc': {
     // JESD8-7 thresholds; 4 mA rows at 1.65 V from memory
-    vddRange: [1.65, 1.95], vih: '0.65*VDD', vil: '0.35*VDD',
-    voh: [{ v: 'VDD-0.2', i: 100 * µA }, { v: 'VDD-0.45', i: 4 * mA }],
-    vol: [{ v: 0.2, i: 100 * µA }, { v: 0.45, i: 4 * mA }],
-    iih: 2.5 * µA, iil: 2.5 * µA, cin: 5e-12, viMax: 3.6, unpoweredSafe: true, viMaxOff: 3.6,
+    vddRange: [1.65, 1.95],
+    vih: '0.65*VDD',
+    vil: '0.35*VDD',
+    voh: [
+      { v: 'VDD-0.2', i: 100 * µA },
+      { v: 'VDD-0.45', i: 4 * mA },
+    ],
+    vol: [
+      { v: 0.2, i: 100 * µA },
+      { v: 0.45, i: 4 * mA },
+    ],
+    iih: 2.5 * µA,
+    iil: 2.5 * µA,
+    cin: 5e-12,
+    viMax: 3.6,
+    unpoweredSafe: true,
+    viMaxOff: 3.6,
   },
   '74auc': {
     // JESD8-12 thresholds; 3 mA rows at 1.1 V from memory
-    vddRange: [1.1, 1.3], vih: '0.65*VDD', vil: '0.35*VDD',
-    voh: [{ v: 'VDD-0.1', i: 100 * µA }, { v: 'VDD-0.3', i: 3 * mA }],
-    vol: [{ v: 0.1, i: 100 * µA }, { v: 0.3, i: 3 * mA }],
-    iih: 5 * µA, iil: 5 * µA, cin: 5e-12, viMax: 3.6, unpoweredSafe: true, viMaxOff: 3.6,
+    vddRange: [1.1, 1.3],
+    vih: '0.65*VDD',
+    vil: '0.35*VDD',
+    voh: [
+      { v: 'VDD-0.1', i: 100 * µA },
+      { v: 'VDD-0.3', i: 3 * mA },
+    ],
+    vol: [
+      { v: 0.1, i: 100 * µA },
+      { v: 0.3, i: 3 * mA },
+    ],
+    iih: 5 * µA,
+    iil: 5 * µA,
+    cin: 5e-12,
+    viMax: 3.6,
+    unpoweredSafe: true,
+    viMaxOff: 3.6,
   },
 };
 
@@ -361,12 +702,14 @@ describe('lookup', () => {
     expect(builtinProfile(id)?.id).toBe(expectedId);
   });
 
-  it.each([['an unknown id', 'nosuch'], ['an empty id', ''], ['a prototype key', '__proto__'], ['a wrong case', '74HC']])(
-    'builtinProfile refuses %s',
-    (_name, id) => {
-      expect(builtinProfile(id)).toBeUndefined();
-    },
-  );
+  it.each([
+    ['an unknown id', 'nosuch'],
+    ['an empty id', ''],
+    ['a prototype key', '__proto__'],
+    ['a wrong case', '74HC'],
+  ])('builtinProfile refuses %s', (_name, id) => {
+    expect(builtinProfile(id)).toBeUndefined();
+  });
 
   it.each([
     ['a built-in with no design profiles', {}, '74hct', '74hct', 'builtin'],
@@ -379,7 +722,7 @@ describe('lookup', () => {
     expect(p === builtinProfile(id)).toBe(origin === 'builtin');
   });
 
-  it('resolveProfile: the shadowing profile is the design\'s own object', () => {
+  it("resolveProfile: the shadowing profile is the design's own object", () => {
     expect(resolveProfile({ profiles: [local] }, '74hc')).toBe(local);
   });
 

@@ -39,7 +39,7 @@ function expectConservative(key: 'vih' | 'vil', line: number, table: number): vo
   else expect(line).toBeLessThanOrEqual(table + TOL);
 }
 
-describe('74HC input thresholds: JESD7, as restated in parts\' DC tables', () => {
+describe("74HC input thresholds: JESD7, as restated in parts' DC tables", () => {
   // [VDD, key, table value, exact?]: exact at 2 V and 6 V, never optimistic at 4.5 V.
   it.each([
     [2, 'vih', 1.5, true],
@@ -65,7 +65,7 @@ describe('74HC input thresholds: JESD7, as restated in parts\' DC tables', () =>
   });
 });
 
-describe('74HC/HCT outputs: JESD7, as restated in parts\' DC tables', () => {
+describe("74HC/HCT outputs: JESD7, as restated in parts' DC tables", () => {
   // 4 mA rows at 4.5 V, −40…85 °C: VOH 3.84 V, VOL 0.33 V; 20 µA rows VDD−0.1 / 0.1 V.
   it.each([
     ['74hc', 'voh', 4 * mA, 4.5, 3.84],
@@ -111,7 +111,7 @@ describe('4000B thresholds: JESD13, as restated', () => {
   });
 });
 
-describe('3.3 V LVTTL / LVCMOS: JESD8C, as restated in parts\' DC tables', () => {
+describe("3.3 V LVTTL / LVCMOS: JESD8C, as restated in parts' DC tables", () => {
   const supplies = [3.0, 3.3, 3.6];
   // [id, key, current (outputs) or null (inputs), expected level as a function of VDD]
   const cases: [string, 'vih' | 'vil' | 'voh' | 'vol', number | null, (vdd: number) => number][] = [
@@ -134,7 +134,7 @@ describe('3.3 V LVTTL / LVCMOS: JESD8C, as restated in parts\' DC tables', () =>
   });
 });
 
-describe('74LVC 12 mA rows, as restated in parts\' DC tables', () => {
+describe("74LVC 12 mA rows, as restated in parts' DC tables", () => {
   // VOH 2.2 V @ 12 mA at 2.7 V, 2.4 V at 3.0 V; VOL 0.4 V @ 12 mA at 2.7 V
   it.each([
     ['voh', 2.7, 2.2, false],
@@ -260,7 +260,7 @@ describe('bipolar TTL, 5 V ± 5 %: handbook tables', () => {
 });
 
 describe('5 V levels as the trade quotes them (common practice)', () => {
-  it('TTL noise margin is 0.4 V on both sides, from the ttl profile\'s own numbers', () => {
+  it("TTL noise margin is 0.4 V on both sides, from the ttl profile's own numbers", () => {
     const vdd = 5;
     const high = output('ttl', 'voh', 0.4 * mA, vdd) - input('ttl', 'vih', vdd);
     const low = input('ttl', 'vil', vdd) - output('ttl', 'vol', 16 * mA, vdd);
@@ -275,14 +275,17 @@ describe('5 V levels as the trade quotes them (common practice)', () => {
     ['ttl', 0.4 * mA, 16 * mA, '74hc', false, true],
     ['ttl', 0.4 * mA, 16 * mA, 'cmos4000', false, true],
     ['ttl', 0.4 * mA, 16 * mA, '74hct', true, true], // HCT inputs exist for this case (JESD7, VIH 2.0 V)
-  ] as const)('%s (@ %s A high, %s A low) driving %s at 5 V: high passes %s, low passes %s', (driver, ioh, iol, receiver, high, low) => {
-    const vdd = 5;
-    expect(output(driver, 'voh', ioh, vdd) - input(receiver, 'vih', vdd) >= 0).toBe(high);
-    expect(input(receiver, 'vil', vdd) - output(driver, 'vol', iol, vdd) >= 0).toBe(low);
-  });
+  ] as const)(
+    '%s (@ %s A high, %s A low) driving %s at 5 V: high passes %s, low passes %s',
+    (driver, ioh, iol, receiver, high, low) => {
+      const vdd = 5;
+      expect(output(driver, 'voh', ioh, vdd) - input(receiver, 'vih', vdd) >= 0).toBe(high);
+      expect(input(receiver, 'vil', vdd) - output(driver, 'vol', iol, vdd) >= 0).toBe(low);
+    },
+  );
 });
 
-describe('issue 16: the profiles\' added rows and families', () => {
+describe("issue 16: the profiles' added rows and families", () => {
   it.each([
     // 74AHC/AHCT at 8 mA: 3.8 V at 4.5 V over −40…85 °C (a family datasheet's DC table, from the
     // review; the 3.94 V of the 25 °C column is not the worst case).
@@ -333,15 +336,25 @@ describe('issue 16: the profiles\' added rows and families', () => {
   });
 
   // Rise-time bounds need the pins' capacitance: the families that lacked it now carry it.
-  it.each(['74lvc', 'lvttl33', 'lvcmos33', 'lvcmos25', 'lvcmos18', '74ac', '74act', '74ahc', '74ahct', 'ttl', '74ls', 'mcu-gpio'])(
-    '%s has an input capacitance and input currents',
-    (id) => {
-      const p = profile(id).params;
-      expect(p.cin).toBeGreaterThan(0);
-      expect(p.iih).toBeGreaterThan(0);
-      expect(p.iil).toBeGreaterThan(0);
-    },
-  );
+  it.each([
+    '74lvc',
+    'lvttl33',
+    'lvcmos33',
+    'lvcmos25',
+    'lvcmos18',
+    '74ac',
+    '74act',
+    '74ahc',
+    '74ahct',
+    'ttl',
+    '74ls',
+    'mcu-gpio',
+  ])('%s has an input capacitance and input currents', (id) => {
+    const p = profile(id).params;
+    expect(p.cin).toBeGreaterThan(0);
+    expect(p.iih).toBeGreaterThan(0);
+    expect(p.iil).toBeGreaterThan(0);
+  });
 
   it('the microcontroller starting point has an 8 mA row each way (from memory)', () => {
     expect(output('mcu-gpio', 'voh', 8 * mA, 3.3)).toBeCloseTo(2.9, 12);
@@ -349,9 +362,12 @@ describe('issue 16: the profiles\' added rows and families', () => {
   });
 
   // Every number has a temperature basis: each built-in profile states it in its source.
-  it.each(BUILTIN_PROFILES.filter((p) => p.id !== 'off-board').map((p) => p.id))('%s names its temperature range', (id) => {
-    expect(profile(id).source).toMatch(/(−40…85|0…70) °C/);
-  });
+  it.each(BUILTIN_PROFILES.filter((p) => p.id !== 'off-board').map((p) => p.id))(
+    '%s names its temperature range',
+    (id) => {
+      expect(profile(id).source).toMatch(/(−40…85|0…70) °C/);
+    },
+  );
 
   it.each([
     ['xlat-side', /direction-controlled/],
@@ -362,7 +378,7 @@ describe('issue 16: the profiles\' added rows and families', () => {
   });
 });
 
-describe('74HC over its whole 2–6 V: JESD7 (JESD7A test points), as restated in parts\' DC tables', () => {
+describe("74HC over its whole 2–6 V: JESD7 (JESD7A test points), as restated in parts' DC tables", () => {
   const hc = () => profile('74hc').params;
   it.each([
     // [supply, load, sense, level, guaranteed]
@@ -386,7 +402,10 @@ describe('74HC over its whole 2–6 V: JESD7 (JESD7A test points), as restated i
     expect(largestTestCurrent(hc().vol, 5.0)).toBeCloseTo(4 * mA, 12);
   });
 
-  it.each([[2, 1.5, 0.5], [6, 4.2, 1.8]])('at %s V the threshold lines are exact: VIH %s V, VIL %s V', (vdd, vih, vil) => {
+  it.each([
+    [2, 1.5, 0.5],
+    [6, 4.2, 1.8],
+  ])('at %s V the threshold lines are exact: VIH %s V, VIL %s V', (vdd, vih, vil) => {
     expect(Math.abs(input('74hc', 'vih', vdd) - vih)).toBeLessThanOrEqual(TOL);
     expect(Math.abs(input('74hc', 'vil', vdd) - vil)).toBeLessThanOrEqual(TOL);
   });

@@ -56,12 +56,18 @@ function report(d: Design, scenarioId?: string) {
   });
 }
 
-const row = (rows: readonly Crossing[], netId: string, state = 'all-on') => rows.find((c) => c.net === netId && c.scenario === state);
+const row = (rows: readonly Crossing[], netId: string, state = 'all-on') =>
+  rows.find((c) => c.net === netId && c.scenario === state);
 
 describe('crossings', () => {
   it('list one row per crossing net and power state, in state then net order', () => {
     expect(report(crossingDesign()).crossings.map((c) => `${c.scenario}/${c.net}`)).toEqual([
-      'all-on/UP', 'all-on/DOWN', 'all-on/NOPAIR', 'io-off/UP', 'io-off/DOWN', 'io-off/NOPAIR',
+      'all-on/UP',
+      'all-on/DOWN',
+      'all-on/NOPAIR',
+      'io-off/UP',
+      'io-off/DOWN',
+      'io-off/NOPAIR',
     ]);
   });
 
@@ -75,8 +81,8 @@ describe('crossings', () => {
 
   it.each([
     ['no driver/receiver pair', 'NOPAIR', 'all-on'],
-    ['the driver\'s rail is off', 'UP', 'io-off'],
-    ['the receiver\'s rail is off', 'DOWN', 'io-off'],
+    ["the driver's rail is off", 'UP', 'io-off'],
+    ["the receiver's rail is off", 'DOWN', 'io-off'],
   ])('have null margins when %s', (_name, netId, state) => {
     const c = row(report(crossingDesign()).crossings, netId, state)!;
     expect([c.marginHigh, c.marginLow]).toEqual([null, null]);
@@ -86,27 +92,50 @@ describe('crossings', () => {
     ['info only (rail-crossing) counts as ok', {}, 'UP', 'all-on', 'ok'],
     ['an over-voltage error, margins passing', {}, 'DOWN', 'all-on', 'error'],
     ['a level-low warning (NML 0.6 V < minMargin 0.7 V)', { minMargin: 0.7 }, 'UP', 'all-on', 'warning'],
-    ['the error waived: ok', { downWaivers: [{ rule: 'overvoltage', note: 'series 1 kΩ limits the clamp current' }] }, 'DOWN', 'all-on', 'ok'],
-    ['a waiver of another rule leaves the error', { downWaivers: [{ rule: 'level-high', note: 'n/a' }] }, 'DOWN', 'all-on', 'error'],
-    ['a waiver for another power state leaves the error', { downWaivers: [{ rule: 'overvoltage', scenario: 'io-off', note: 'n/a' }] }, 'DOWN', 'all-on', 'error'],
+    [
+      'the error waived: ok',
+      { downWaivers: [{ rule: 'overvoltage', note: 'series 1 kΩ limits the clamp current' }] },
+      'DOWN',
+      'all-on',
+      'ok',
+    ],
+    [
+      'a waiver of another rule leaves the error',
+      { downWaivers: [{ rule: 'level-high', note: 'n/a' }] },
+      'DOWN',
+      'all-on',
+      'error',
+    ],
+    [
+      'a waiver for another power state leaves the error',
+      { downWaivers: [{ rule: 'overvoltage', scenario: 'io-off', note: 'n/a' }] },
+      'DOWN',
+      'all-on',
+      'error',
+    ],
   ])('worst: %s', (_name, extra, netId, state, worst) => {
     expect(row(report(crossingDesign(extra)).crossings, netId, state)!.worst).toBe(worst);
   });
 
   it('the example: DISP_RX passes its margins yet is worst "error" (its over-voltage)', () => {
     const d = greenhouse();
-    const c = row(buildReport(d, check(d, undefined, RULES), { failOn: 'error', generatedAt: FIXED_TIME }).crossings, 'DISP_RX')!;
+    const c = row(
+      buildReport(d, check(d, undefined, RULES), { failOn: 'error', generatedAt: FIXED_TIME }).crossings,
+      'DISP_RX',
+    )!;
     expect(c.marginHigh! > 0 && c.marginLow! > 0).toBe(true);
     expect(c.worst).toBe('error');
   });
 });
 
 describe('findings and summary', () => {
-  const waived = crossingDesign({ downWaivers: [{ rule: 'overvoltage', note: 'series 1 kΩ limits the clamp current' }] });
+  const waived = crossingDesign({
+    downWaivers: [{ rule: 'overvoltage', note: 'series 1 kΩ limits the clamp current' }],
+  });
   const result = check(waived, undefined, RULES);
   const r = buildReport(waived, result, { failOn: 'warning', generatedAt: FIXED_TIME });
 
-  it('keeps the engine\'s findings in its order, without the message id', () => {
+  it("keeps the engine's findings in its order, without the message id", () => {
     expect(r.findings.map((f) => f.id)).toEqual(result.findings.map((f) => f.id));
     expect(r.findings.filter((f) => 'messageId' in f)).toEqual([]);
   });
@@ -183,12 +212,19 @@ describe('profiles used', () => {
     expect(r.profiles.map((p) => p.id)).toEqual(['mcu-gpio', 'lvcmos33', '74hc', 'lvcmos18', '74ls']);
   });
 
-  it.each([['mcu-gpio'], ['lvcmos33'], ['lvcmos18'], ['74ls']])('built-in %s with the library\'s label and source', (id) => {
-    const p = builtinProfile(id)!;
-    expect(r.profiles.find((x) => x.id === id)).toEqual({ id, label: p.label, source: p.source });
-  });
+  it.each([['mcu-gpio'], ['lvcmos33'], ['lvcmos18'], ['74ls']])(
+    "built-in %s with the library's label and source",
+    (id) => {
+      const p = builtinProfile(id)!;
+      expect(r.profiles.find((x) => x.id === id)).toEqual({ id, label: p.label, source: p.source });
+    },
+  );
 
   it('a design-local profile shadows the built-in one of its id', () => {
-    expect(r.profiles.find((p) => p.id === '74hc')).toEqual({ id: '74hc', label: 'Local buffer', source: 'datasheet of the chosen buffer' });
+    expect(r.profiles.find((p) => p.id === '74hc')).toEqual({
+      id: '74hc',
+      label: 'Local buffer',
+      source: 'datasheet of the chosen buffer',
+    });
   });
 });

@@ -8,15 +8,26 @@ import { check } from '../../rules/check/check.ts';
 import type { Design, Net } from '../../rules/model/schema.ts';
 import { baselineOf, baselineVerdict, inBaseline } from '../../rules/report/baseline.ts';
 import { buildReport } from '../../rules/report/buildReport.ts';
-import { changeText, diffReports, renderDiffJson, renderDiffMarkdown, renderDiffText, type ReportDiff } from '../../rules/report/diff.ts';
+import {
+  changeText,
+  diffReports,
+  renderDiffJson,
+  renderDiffMarkdown,
+  renderDiffText,
+  type ReportDiff,
+} from '../../rules/report/diff.ts';
 import type { FailOn, Report } from '../../rules/report/reportSchema.ts';
 import { FIXED_TIME, greenhouse } from './fixtures.ts';
 
-const reportOf = (d: Design, failOn: FailOn = 'error'): Report => buildReport(d, check(d), { failOn, generatedAt: FIXED_TIME });
+const reportOf = (d: Design, failOn: FailOn = 'error'): Report =>
+  buildReport(d, check(d), { failOn, generatedAt: FIXED_TIME });
 const base = greenhouse();
 
-const onNet = (id: string, change: (n: Net) => Net) => (d: Design): Design => ({ ...d, nets: d.nets.map((n) => (n.id === id ? change(n) : n)) });
-const waive = (d: Design) => onNet('VALVE_EN', (n) => ({ ...n, waivers: [{ rule: 'level-high', note: 'a buffer is fitted' }] }))(d);
+const onNet =
+  (id: string, change: (n: Net) => Net) =>
+  (d: Design): Design => ({ ...d, nets: d.nets.map((n) => (n.id === id ? change(n) : n)) });
+const waive = (d: Design) =>
+  onNet('VALVE_EN', (n) => ({ ...n, waivers: [{ rule: 'level-high', note: 'a buffer is fitted' }] }))(d);
 /**
  * FLOW has only the controller pin's own 40 kΩ pull-up, above the 7.84 kΩ its 10 µs rise time
  * allows (the example's planted pull-range error, with an edge-rate warning). The report's
@@ -26,14 +37,26 @@ const waive = (d: Design) => onNet('VALVE_EN', (n) => ({ ...n, waivers: [{ rule:
 const flowFixed = onNet('FLOW', (n) => ({ ...n, pull: { to: '3v3', ohms: 4700 } }));
 const STATES = ['all-on', 'standby', 'reset'];
 /** The pull-range change of the FLOW fix in each power state: its severity and the pull it sees. */
-const flowChanged: [string, string[]][] = STATES.map((s) => [`pull-range:FLOW:${s}`, ['severity', 'values.ohms', 'values.ohmsMax', 'values.ohmsMin']]);
+const flowChanged: [string, string[]][] = STATES.map((s) => [
+  `pull-range:FLOW:${s}`,
+  ['severity', 'values.ohms', 'values.ohmsMax', 'values.ohmsMin'],
+]);
 
 /** Edits that touch no net: every id and finding stays. */
 const untouched: [string, (d: Design) => Design][] = [
   ['the same design', (d) => d],
-  ['every part moved', (d) => ({ ...d, parts: d.parts.map((p) => ({ ...p, position: { x: (p.position?.x ?? 0) + 120, y: (p.position?.y ?? 0) - 40 } })) })],
+  [
+    'every part moved',
+    (d) => ({
+      ...d,
+      parts: d.parts.map((p) => ({ ...p, position: { x: (p.position?.x ?? 0) + 120, y: (p.position?.y ?? 0) - 40 } })),
+    }),
+  ],
   ['a new title', (d) => ({ ...d, title: 'Greenhouse controller, rev B' })],
-  ['a part renamed in its label only', (d) => ({ ...d, parts: d.parts.map((p) => (p.id === 'U1' ? { ...p, label: 'Main controller' } : p)) })],
+  [
+    'a part renamed in its label only',
+    (d) => ({ ...d, parts: d.parts.map((p) => (p.id === 'U1' ? { ...p, label: 'Main controller' } : p)) }),
+  ],
   ['the nets listed in reverse', (d) => ({ ...d, nets: [...d.nets].reverse() })],
 ];
 
@@ -47,7 +70,7 @@ const edits: [string, (d: Design) => Design, Expected][] = [
     { new: [], gone: STATES.map((s) => `edge-rate:FLOW:${s}`), changed: flowChanged, regressions: 0 },
   ],
   [
-    'FLOW back to its pin\'s pull-up alone: the same change reversed is a regression in every state',
+    "FLOW back to its pin's pull-up alone: the same change reversed is a regression in every state",
     (d) => d,
     // the edge-rate findings come back as warnings: new, but no regression at fail-on error
     { new: STATES.map((s) => `edge-rate:FLOW:${s}`), gone: [], changed: flowChanged, regressions: 3 },
@@ -65,7 +88,15 @@ const edits: [string, (d: Design) => Design, Expected][] = [
   [
     'a waiver on VALVE_EN: its level-high findings change by their waiver alone',
     waive,
-    { new: [], gone: [], changed: [['level-high:VALVE_EN:all-on:U1.VALVE_EN>U3.EN', ['waived']], ['level-high:VALVE_EN:standby:U1.VALVE_EN>U3.EN', ['waived']]], regressions: 0 },
+    {
+      new: [],
+      gone: [],
+      changed: [
+        ['level-high:VALVE_EN:all-on:U1.VALVE_EN>U3.EN', ['waived']],
+        ['level-high:VALVE_EN:standby:U1.VALVE_EN>U3.EN', ['waived']],
+      ],
+      regressions: 0,
+    },
   ],
 ];
 
@@ -77,7 +108,12 @@ function ids(d: ReportDiff) {
     regressions: d.summary.regressions,
   };
 }
-const sorted = (e: Expected) => ({ new: [...e.new].sort(), gone: [...e.gone].sort(), changed: [...e.changed].sort(), regressions: e.regressions });
+const sorted = (e: Expected) => ({
+  new: [...e.new].sort(),
+  gone: [...e.gone].sort(),
+  changed: [...e.changed].sort(),
+  regressions: e.regressions,
+});
 
 describe('finding ids are stable across edits that touch no net', () => {
   const before = reportOf(base);
@@ -93,7 +129,7 @@ describe('finding ids are stable across edits that touch no net', () => {
     expect(d.summary).toEqual({ new: 0, gone: 0, changed: 0, unchanged: a.size, regressions: 0 });
   });
 
-  it('an edit of one net leaves every other net\'s findings as they were', () => {
+  it("an edit of one net leaves every other net's findings as they were", () => {
     const after = reportOf(flowFixed(base));
     const others = (r: Report) => r.findings.filter((f) => f.net !== 'FLOW');
     expect(others(after)).toEqual(others(before));
@@ -125,13 +161,23 @@ describe('diff OLD NEW', () => {
     ['error', 0],
     ['warning', 2],
   ])('a new warning is a regression only with --fail-on warning (%s)', (failOn, regressions) => {
-    const d = diffReports(reportOf(base, failOn), reportOf(onNet('SDA', (n) => ({ ...n, pull: { to: '3v3', ohms: 2200 } }))(base), failOn), { from: 'a', to: 'b' }, failOn);
+    const d = diffReports(
+      reportOf(base, failOn),
+      reportOf(onNet('SDA', (n) => ({ ...n, pull: { to: '3v3', ohms: 2200 } }))(base), failOn),
+      { from: 'a', to: 'b' },
+      failOn,
+    );
     expect(d.new.map((f) => f.id)).toEqual(['level-low:SDA:all-on:U1.SDA>U2.SDA', 'level-low:SDA:reset:U1.SDA>U2.SDA']);
     expect(d.summary.regressions).toBe(regressions);
   });
 
   describe('renderings', () => {
-    const d = diffReports(reportOf(base), reportOf(flowFixed(base)), { from: 'old.json', to: 'new | rev.json' }, 'error');
+    const d = diffReports(
+      reportOf(base),
+      reportOf(flowFixed(base)),
+      { from: 'old.json', to: 'new | rev.json' },
+      'error',
+    );
     it('text names each change with its numbers in engineering notation', () => {
       const text = renderDiffText(d);
       expect(text).toContain('0 new, 3 gone, 3 changed');
@@ -140,7 +186,9 @@ describe('diff OLD NEW', () => {
     it('Markdown escapes a file name in a code span and keeps tables', () => {
       const md = renderDiffMarkdown(d);
       expect(md).toContain('`new \\| rev.json`');
-      expect(md).toMatch(/^\| info \| `pull-range` \| `FLOW` \| `all-on` \| severity error → info; ohms 40 kΩ → 4\.21 kΩ[;|]/m);
+      expect(md).toMatch(
+        /^\| info \| `pull-range` \| `FLOW` \| `all-on` \| severity error → info; ohms 40 kΩ → 4\.21 kΩ[;|]/m,
+      );
     });
     it('JSON carries the summary and every change', () => {
       const json = JSON.parse(renderDiffJson(d)) as ReportDiff;
@@ -169,16 +217,39 @@ describe('--baseline', () => {
   // The baseline's own counts, from its report: every error (and, at fail-on warning, every warning) is already known.
   const { error: errors, warning: warnings } = reportOf(base, 'warning').summary;
   it.each<[string, (d: Design) => Design, FailOn, boolean, RegExp]>([
-    ['the same design passes though it has errors', (d) => d, 'error', false, new RegExp(`^PASS: .* beyond the baseline; ${errors} findings at that level already in the baseline\\.$`)],
+    [
+      'the same design passes though it has errors',
+      (d) => d,
+      'error',
+      false,
+      new RegExp(`^PASS: .* beyond the baseline; ${errors} findings at that level already in the baseline\\.$`),
+    ],
     ['a fixed finding still passes', flowFixed, 'error', false, /^PASS/],
-    ['a new warning passes at fail-on error', onNet('SDA', (n) => ({ ...n, pull: { to: '3v3', ohms: 2200 } })), 'error', false, /^PASS/],
+    [
+      'a new warning passes at fail-on error',
+      onNet('SDA', (n) => ({ ...n, pull: { to: '3v3', ohms: 2200 } })),
+      'error',
+      false,
+      /^PASS/,
+    ],
     // the SDA warning of all-on and reset (see above) is new; the example's errors and warnings are known
-    ['a new warning fails at fail-on warning', onNet('SDA', (n) => ({ ...n, pull: { to: '3v3', ohms: 2200 } })), 'warning', true, new RegExp(`^FAIL: .* not in the baseline: 2 warnings; ${errors + warnings} findings at that level already in the baseline\\.$`)],
+    [
+      'a new warning fails at fail-on warning',
+      onNet('SDA', (n) => ({ ...n, pull: { to: '3v3', ohms: 2200 } })),
+      'warning',
+      true,
+      new RegExp(
+        `^FAIL: .* not in the baseline: 2 warnings; ${errors + warnings} findings at that level already in the baseline\\.$`,
+      ),
+    ],
     [
       'a new error fails: a 5 V push-pull output added to the 3.3 V-only DISP_TX net',
       (d) => ({
         ...d,
-        parts: [...d.parts, { id: 'X1', label: 'Extra', rail: '5v0', profile: 'hc', pins: [{ id: 'Y', role: 'output' }] }],
+        parts: [
+          ...d.parts,
+          { id: 'X1', label: 'Extra', rail: '5v0', profile: 'hc', pins: [{ id: 'Y', role: 'output' }] },
+        ],
         nets: d.nets.map((n) => (n.id === 'DISP_TX' ? { ...n, pins: [...n.pins, 'X1.Y'] } : n)),
       }),
       'error',

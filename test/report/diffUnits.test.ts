@@ -17,7 +17,8 @@ describe('diff units', () => {
     for (const d of designs) {
       for (const f of check(d).findings) {
         for (const [k, v] of Object.entries(f.values as Readonly<Record<string, unknown>>)) {
-          if (typeof v === 'number' && unitOfValue(k) === undefined && !UNITLESS_VALUE_KEYS.has(k)) missing.add(`${f.rule}.${k}`);
+          if (typeof v === 'number' && unitOfValue(k) === undefined && !UNITLESS_VALUE_KEYS.has(k))
+            missing.add(`${f.rule}.${k}`);
         }
       }
     }
@@ -25,6 +26,8 @@ describe('diff units', () => {
   });
 
   it('a changed resistance prints in engineering notation', () => {
-    expect(changeText({ key: 'values.ohmsMin', before: 40e3, after: 4205.816554809843 })).toBe('ohmsMin 40 kΩ → 4.21 kΩ');
+    expect(changeText({ key: 'values.ohmsMin', before: 40e3, after: 4205.816554809843 })).toBe(
+      'ohmsMin 40 kΩ → 4.21 kΩ',
+    );
   });
 });

@@ -31,10 +31,12 @@ function hostile(over: { title?: string; netId?: string; label?: string; note?: 
       part('D', '5v0', '74hc', [output('Y')], { label: over.partLabel ?? 'driver' }),
       part('R', '3v3', 'lvcmos33', [input('A')]),
     ],
-    nets: [net(netId, ['D.Y', 'R.A'], {
-      ...(over.label === undefined ? {} : { label: over.label }),
-      ...(over.note === undefined ? {} : { waivers: [{ rule: 'rail-crossing', note: over.note }] }),
-    })],
+    nets: [
+      net(netId, ['D.Y', 'R.A'], {
+        ...(over.label === undefined ? {} : { label: over.label }),
+        ...(over.note === undefined ? {} : { waivers: [{ rule: 'rail-crossing', note: over.note }] }),
+      }),
+    ],
   });
 }
 
@@ -91,7 +93,9 @@ describe('backticks', () => {
 
 describe('long unbroken names, right-to-left text and combining marks', () => {
   const long = 'W'.repeat(10_000);
-  const { report, text, md } = render(hostile({ label: `${long}|*${RTL}${COMBINING}`, note: `${long}_${RTL}${COMBINING}<b>`, partLabel: long }));
+  const { report, text, md } = render(
+    hostile({ label: `${long}|*${RTL}${COMBINING}`, note: `${long}_${RTL}${COMBINING}<b>`, partLabel: long }),
+  );
 
   it('the report keeps them whole', () => {
     expect(report.crossings[0]!.label).toBe(`${long}|*${RTL}${COMBINING}`);

@@ -18,10 +18,7 @@ const board = design({
     part('H', '5v0', '74hct', [input('A'), input('B')]),
     part('K', '5v0', '74ahct', [input('A')]),
   ],
-  nets: [
-    net('N1', ['D.Y', 'H.A', 'H.B']),
-    net('N2', ['D.Z', 'K.A'], { waivers: [] }),
-  ],
+  nets: [net('N1', ['D.Y', 'H.A', 'H.B']), net('N2', ['D.Z', 'K.A'], { waivers: [] })],
   scenarios: [scenario('io-off', ['3v3'])],
 });
 
@@ -34,18 +31,26 @@ describe('interface power per rail', () => {
   });
 
   it('leaves a waived finding out of the sum', () => {
-    const waived = { ...board, nets: board.nets.map((n) => (n.id === 'N2' ? { ...n, waivers: [{ rule: 'interface-power' as const, note: 'budgeted' }] } : n)) };
+    const waived = {
+      ...board,
+      nets: board.nets.map((n) =>
+        n.id === 'N2' ? { ...n, waivers: [{ rule: 'interface-power' as const, note: 'budgeted' }] } : n,
+      ),
+    };
     const rows = interfacePowerRows(check(waived).findings);
     expect(rows).toHaveLength(1);
     expect(rows[0]!.current).toBeCloseTo(1e-3, 12);
     expect(rows[0]!.pins).toEqual(['H.A', 'H.B']);
   });
 
-  it('the example: the controller\'s 3.3 V output into the display\'s 74HCT input costs 0.5 mA from 5v0 in each power state', () => {
+  it("the example: the controller's 3.3 V output into the display's 74HCT input costs 0.5 mA from 5v0 in each power state", () => {
     const text = readFileSync(new URL('../../rules/examples/greenhouse.json', import.meta.url), 'utf8');
     const read = readDesign(text);
     if (!read.ok) throw new Error('example unreadable');
-    const report = buildReport(read.design, check(read.design), { failOn: 'error', generatedAt: '2026-01-01T00:00:00.000Z' });
+    const report = buildReport(read.design, check(read.design), {
+      failOn: 'error',
+      generatedAt: '2026-01-01T00:00:00.000Z',
+    });
     expect(report.interfacePower).toEqual([
       { scenario: 'all-on', rail: '5v0', current: 0.5e-3, pins: ['U4.RX'] },
       { scenario: 'standby', rail: '5v0', current: 0.5e-3, pins: ['U4.RX'] },

@@ -12,7 +12,8 @@ import type { FailOn, Report } from '../../rules/report/reportSchema.ts';
 import { parseXml, type XmlElement } from '../support/xml.ts';
 import { FIXED_TIME, greenhouse } from './fixtures.ts';
 
-const reportOf = (d: Design, failOn: FailOn = 'error'): Report => buildReport(d, check(d), { failOn, generatedAt: FIXED_TIME });
+const reportOf = (d: Design, failOn: FailOn = 'error'): Report =>
+  buildReport(d, check(d), { failOn, generatedAt: FIXED_TIME });
 const nets = (d: Design) => d.nets.map((n) => n.id);
 const cases = (root: XmlElement) => root.children.flatMap((s) => s.children.map((c) => ({ suite: s, c })));
 const failure = (c: XmlElement) => c.children.find((e) => e.name === 'failure');
@@ -22,7 +23,11 @@ function waivedAndOdd(): Design {
   return {
     ...d,
     title: 'Greenhouse <rev B> & "C" \u0001',
-    nets: d.nets.map((n) => (n.id === 'VALVE_EN' ? { ...n, waivers: [{ rule: 'level-high' as const, note: 'fixed by a buffer & a <note>' }] } : n)),
+    nets: d.nets.map((n) =>
+      n.id === 'VALVE_EN'
+        ? { ...n, waivers: [{ rule: 'level-high' as const, note: 'fixed by a buffer & a <note>' }] }
+        : n,
+    ),
   };
 }
 
@@ -31,21 +36,31 @@ describe('JUnit XML of the example', () => {
   const report = reportOf(d);
   const root = parseXml(renderJunit(report, { nets: nets(d) }));
 
-  it('has a suite per power state and a case per net in each, in the file\'s order', () => {
+  it("has a suite per power state and a case per net in each, in the file's order", () => {
     expect(root.name).toBe('testsuites');
     expect(root.children.map((s) => s.name)).toEqual(['testsuite', 'testsuite', 'testsuite']);
-    expect(root.children.map((s) => s.attrs['name'])).toEqual(['all-on (All rails on)', 'standby (Standby: sensor rail off)', 'reset (Reset: controller pins are inputs)']);
+    expect(root.children.map((s) => s.attrs.name)).toEqual([
+      'all-on (All rails on)',
+      'standby (Standby: sensor rail off)',
+      'reset (Reset: controller pins are inputs)',
+    ]);
     for (const s of root.children) {
-      const names = s.children.map((c) => c.attrs['name']);
+      const names = s.children.map((c) => c.attrs.name);
       expect(names.slice(0, d.nets.length)).toEqual(d.nets.map((n) => `net ${n.id}`));
     }
   });
 
   it('fails exactly the cases holding an unwaived error, with each such finding in the failure', () => {
     for (const { suite, c } of cases(root)) {
-      const state = suite.attrs['name']!.split(' ')[0]!;
-      const net = c.attrs['name']!.replace(/^net /, '');
-      const errors = report.findings.filter((f) => f.scenario === state && (f.net ?? 'pins on no net and rails') === net && f.severity === 'error' && f.waived === undefined);
+      const state = suite.attrs.name!.split(' ')[0]!;
+      const net = c.attrs.name!.replace(/^net /, '');
+      const errors = report.findings.filter(
+        (f) =>
+          f.scenario === state &&
+          (f.net ?? 'pins on no net and rails') === net &&
+          f.severity === 'error' &&
+          f.waived === undefined,
+      );
       const fail = failure(c);
       expect(fail !== undefined, `${state} ${net}`).toBe(errors.length > 0);
       for (const f of errors) expect(fail!.text).toContain(f.id);
@@ -54,14 +69,17 @@ describe('JUnit XML of the example', () => {
 
   it('counts tests and failures in the attributes', () => {
     const all = cases(root);
-    expect(Number(root.attrs['tests'])).toBe(all.length);
-    expect(Number(root.attrs['failures'])).toBe(all.filter(({ c }) => failure(c) !== undefined).length);
-    for (const s of root.children) expect(Number(s.attrs['failures'])).toBe(s.children.filter((c) => failure(c) !== undefined).length);
-    expect(Number(root.attrs['failures'])).toBeGreaterThan(0);
+    expect(Number(root.attrs.tests)).toBe(all.length);
+    expect(Number(root.attrs.failures)).toBe(all.filter(({ c }) => failure(c) !== undefined).length);
+    for (const s of root.children)
+      expect(Number(s.attrs.failures)).toBe(s.children.filter((c) => failure(c) !== undefined).length);
+    expect(Number(root.attrs.failures)).toBeGreaterThan(0);
   });
 
   it('lists the findings that do not fail in system-out: nothing is hidden', () => {
-    const text = cases(root).map(({ c }) => c.children.map((e) => e.text).join('\n')).join('\n');
+    const text = cases(root)
+      .map(({ c }) => c.children.map((e) => e.text).join('\n'))
+      .join('\n');
     for (const f of report.findings) expect(text).toContain(f.id);
   });
 });
@@ -69,7 +87,14 @@ describe('JUnit XML of the example', () => {
 /** The example with FLOW's planted pull-range error waived: only its edge-rate warning is left to fail it. */
 function flowWaived(): Design {
   const d = greenhouse();
-  return { ...d, nets: d.nets.map((n) => (n.id === 'FLOW' ? { ...n, waivers: [{ rule: 'pull-range' as const, note: 'a pull-up is fitted on the sensor' }] } : n)) };
+  return {
+    ...d,
+    nets: d.nets.map((n) =>
+      n.id === 'FLOW'
+        ? { ...n, waivers: [{ rule: 'pull-range' as const, note: 'a pull-up is fitted on the sensor' }] }
+        : n,
+    ),
+  };
 }
 
 describe('JUnit XML details', () => {
@@ -79,20 +104,24 @@ describe('JUnit XML details', () => {
     // PUMP_EN once the controller's pin is an input). edge-rate warns on FLOW in all three; SCL2_L (the planted FET-shifter pull-up) fails in all-on and at reset.
     ['fail on error', greenhouse, 'error', 28],
     ['fail on warning: FLOW fails already by its error', greenhouse, 'warning', 28],
-    ['fail on error, FLOW\'s error waived: FLOW passes', flowWaived, 'error', 25],
-    ['fail on warning, FLOW\'s error waived: its warning fails it again', flowWaived, 'warning', 28],
+    ["fail on error, FLOW's error waived: FLOW passes", flowWaived, 'error', 25],
+    ["fail on warning, FLOW's error waived: its warning fails it again", flowWaived, 'warning', 28],
   ])('%s', (_name, make, failOn, expected) => {
     const d = make();
     const root = parseXml(renderJunit(reportOf(d, failOn), { nets: nets(d) }));
-    expect(Number(root.attrs['failures'])).toBe(expected);
+    expect(Number(root.attrs.failures)).toBe(expected);
   });
 
   it('a waived finding does not fail its case; markup and control characters are escaped', () => {
     const d = waivedAndOdd();
     const xml = renderJunit(reportOf(d), { nets: nets(d) });
     const root = parseXml(xml);
-    expect(root.attrs['name']).toBe('railcross check: Greenhouse <rev B> & "C" \uFFFD');
-    const valve = new Map(cases(root).filter(({ c }) => c.attrs['name'] === 'net VALVE_EN').map(({ suite, c }) => [suite.attrs['name']!.split(' ')[0]!, c]));
+    expect(root.attrs.name).toBe('railcross check: Greenhouse <rev B> & "C" \uFFFD');
+    const valve = new Map(
+      cases(root)
+        .filter(({ c }) => c.attrs.name === 'net VALVE_EN')
+        .map(({ suite, c }) => [suite.attrs.name!.split(' ')[0]!, c]),
+    );
     expect([...valve.keys()]).toEqual(['all-on', 'standby', 'reset']);
     for (const state of ['all-on', 'standby']) {
       const c = valve.get(state)!;
@@ -110,8 +139,8 @@ describe('JUnit XML details', () => {
     const d = greenhouse();
     const report = reportOf(d);
     const root = parseXml(renderJunit(report, { nets: nets(d), baseline: baselineOf(report) }));
-    expect(root.attrs['failures']).toBe('0');
-    expect(Number(root.attrs['tests'])).toBeGreaterThan(0);
+    expect(root.attrs.failures).toBe('0');
+    expect(Number(root.attrs.tests)).toBeGreaterThan(0);
   });
 
   it.each([

@@ -16,7 +16,9 @@ import { ladderAxis, ladderFor, type Ladder } from '../../rules/report/ladder.ts
 
 const result = check(exampleDesign());
 const views: { state: string; net: string; view: NetView; power: PowerState }[] = [];
-for (const [state, nets] of result.nets) for (const [net, r] of nets) views.push({ state, net, view: r.view, power: result.states.find((s) => s.id === state)! });
+for (const [state, nets] of result.nets)
+  for (const [net, r] of nets)
+    views.push({ state, net, view: r.view, power: result.states.find((s) => s.id === state)! });
 
 const close = (a: number, b: number) => Math.abs(a - b) <= 1e-12 * Math.max(1, Math.abs(a), Math.abs(b));
 
@@ -33,10 +35,44 @@ describe('ladderFor: the same numbers as the analysis, on every net of the examp
     const l = ladderFor(view, power);
     // Each pair side is one margin, with the analysis' own numbers.
     const expected = view.analysis.pairs.flatMap((p) => [
-      ...(p.high === null ? [] : [{ kind: 'nmh', driver: p.driver, receiver: p.receiver, upper: p.high.out, lower: p.high.threshold, margin: p.high.margin, status: p.high.status }]),
-      ...(p.low === null ? [] : [{ kind: 'nml', driver: p.driver, receiver: p.receiver, upper: p.low.threshold, lower: p.low.out, margin: p.low.margin, status: p.low.status }]),
+      ...(p.high === null
+        ? []
+        : [
+            {
+              kind: 'nmh',
+              driver: p.driver,
+              receiver: p.receiver,
+              upper: p.high.out,
+              lower: p.high.threshold,
+              margin: p.high.margin,
+              status: p.high.status,
+            },
+          ]),
+      ...(p.low === null
+        ? []
+        : [
+            {
+              kind: 'nml',
+              driver: p.driver,
+              receiver: p.receiver,
+              upper: p.low.threshold,
+              lower: p.low.out,
+              margin: p.low.margin,
+              status: p.low.status,
+            },
+          ]),
     ]);
-    expect(l.margins.map(({ kind, driver, receiver, upper, lower, margin, status }) => ({ kind, driver, receiver, upper, lower, margin, status }))).toEqual(expected);
+    expect(
+      l.margins.map(({ kind, driver, receiver, upper, lower, margin, status }) => ({
+        kind,
+        driver,
+        receiver,
+        upper,
+        lower,
+        margin,
+        status,
+      })),
+    ).toEqual(expected);
     // Drivers and receivers at their worst pair.
     for (const d of l.drivers) {
       const highs = view.analysis.pairs.filter((p) => p.driver === d.pin && p.high !== null).map((p) => p.high!);
@@ -54,7 +90,8 @@ describe('ladderFor: the same numbers as the analysis, on every net of the examp
     expect(l.unpowered.map((p) => p.pin)).toEqual(view.unpowered.map((p) => p.key));
     // The axis holds everything drawn.
     const drawn = [
-      ...l.rails.map((r) => r.max), ...l.drivers.flatMap((d) => [d.high?.to ?? 0, d.low?.to ?? 0]),
+      ...l.rails.map((r) => r.max),
+      ...l.drivers.flatMap((d) => [d.high?.to ?? 0, d.low?.to ?? 0]),
       ...l.receivers.flatMap((r) => [r.viMax?.volts ?? 0, r.vih?.volts ?? 0]),
     ];
     expect(Math.max(...drawn)).toBeLessThan(l.top);

@@ -24,7 +24,9 @@ import { FIXED_TIME, greenhouse, quantitiesIn } from './fixtures.ts';
 
 const HAVE_POPPLER = spawnSync('pdftotext', ['-v']).error === undefined;
 if (!HAVE_POPPLER) {
-  console.warn('test/report/pdf.test.ts: pdftotext (poppler-utils) is not installed: the PDF text tests are SKIPPED. Install poppler-utils to run them.');
+  console.warn(
+    'test/report/pdf.test.ts: pdftotext (poppler-utils) is not installed: the PDF text tests are SKIPPED. Install poppler-utils to run them.',
+  );
 }
 
 const fonts = loadDejaVuFonts();
@@ -49,14 +51,19 @@ function make(d: Design, paper: Paper = 'a4'): Made {
 }
 
 const textOf = (file: string): string => execFileSync('pdftotext', ['-layout', file, '-'], { encoding: 'utf8' });
-const pagesOf = (file: string): number => Number(/^Pages:\s+(\d+)/m.exec(execFileSync('pdfinfo', [file], { encoding: 'utf8' }))![1]);
+const pagesOf = (file: string): number =>
+  Number(/^Pages:\s+(\d+)/m.exec(execFileSync('pdfinfo', [file], { encoding: 'utf8' }))![1]);
 const latin1 = (bytes: Uint8Array): string => Array.from(bytes, (b) => String.fromCharCode(b)).join('');
 
 /**
  * Words of `text`: split at white space and at the en dash of a range (`1.04 kΩ–18.2 kΩ`),
  * with brackets and the punctuation that may end a sentence dropped.
  */
-const words = (text: string): string[] => text.split(/[\s–]+/).filter((w) => w !== '').map((w) => w.replace(/^\(|[.,;:)]+$/g, ''));
+const words = (text: string): string[] =>
+  text
+    .split(/[\s–]+/)
+    .filter((w) => w !== '')
+    .map((w) => w.replace(/^\(|[.,;:)]+$/g, ''));
 
 /**
  * Whether every word of `phrase` occurs in `text` in order. A table cell's lines come out of
@@ -85,7 +92,7 @@ function section(text: string, from: RegExp, to?: RegExp): string {
 
 const escapeRe = (s: string) => s.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
 
-describe.skipIf(!HAVE_POPPLER)('the example\'s PDF, read back with pdftotext', () => {
+describe.skipIf(!HAVE_POPPLER)("the example's PDF, read back with pdftotext", () => {
   const made = make(greenhouse());
   const text = textOf(made.file);
   const findings = section(text, /^Findings \(\d+\)$/m, /^Rail crossings \(\d+\)$/m);
@@ -94,12 +101,14 @@ describe.skipIf(!HAVE_POPPLER)('the example\'s PDF, read back with pdftotext', (
     expect(latin1(made.bytes.subarray(0, 5))).toBe('%PDF-');
   });
 
-  it('has a finding row for every finding: severity, rule, net and power state on one line, in the report\'s order', () => {
+  it("has a finding row for every finding: severity, rule, net and power state on one line, in the report's order", () => {
     expect(made.report.findings.length).toBeGreaterThan(20);
     const lines = findings.split('\n');
     let at = 0;
     for (const f of made.report.findings) {
-      const row = new RegExp(`^\\s*${f.severity}\\s+${escapeRe(f.rule)}\\s+${escapeRe(f.net ?? '—')}\\s+${escapeRe(f.scenario)}\\s`);
+      const row = new RegExp(
+        `^\\s*${f.severity}\\s+${escapeRe(f.rule)}\\s+${escapeRe(f.net ?? '—')}\\s+${escapeRe(f.scenario)}\\s`,
+      );
       const k = lines.findIndex((l, i) => i >= at && row.test(l));
       expect(k, `row of ${f.id}`).toBeGreaterThanOrEqual(0);
       // The row's block runs to the next finding's row; its message and hint are in it, every number too.
@@ -112,7 +121,7 @@ describe.skipIf(!HAVE_POPPLER)('the example\'s PDF, read back with pdftotext', (
     }
   });
 
-  it('gives each rule\'s title beside its id', () => {
+  it("gives each rule's title beside its id", () => {
     for (const rule of new Set(made.report.findings.map((f) => f.rule))) {
       const title = RULES.find((r) => r.id === rule)!.meta.title;
       expect(wordsInOrder(findings, `${rule} ${title}`), rule).toBe(true);
@@ -136,7 +145,9 @@ describe.skipIf(!HAVE_POPPLER)('the example\'s PDF, read back with pdftotext', (
     const margins = section(text, /^Noise margins per net$/m, /^Method and sources$/m);
     for (const state of made.report.scenarios) {
       for (const n of made.design.nets) {
-        expect(margins, `${n.id} in ${state.id}`).toMatch(new RegExp(`^\\s*${escapeRe(n.id)}\\s+\\S.*\\s${escapeRe(state.id)}\\s+\\d+\\s`, 'm'));
+        expect(margins, `${n.id} in ${state.id}`).toMatch(
+          new RegExp(`^\\s*${escapeRe(n.id)}\\s+\\S.*\\s${escapeRe(state.id)}\\s+\\d+\\s`, 'm'),
+        );
       }
     }
     // SLEEP has receivers and no driver: no pair, so both of its margins are "—" (the example's planted floating input).
@@ -163,9 +174,17 @@ describe.skipIf(!HAVE_POPPLER)('the example\'s PDF, read back with pdftotext', (
     expect(rows.map((r) => `${r.net}@${r.scenario}`)).toEqual(expect.arrayContaining(['SDA@standby', 'SCL@standby']));
     for (const row of rows) {
       const state = made.report.scenarios.find((s) => s.id === row.scenario)!;
-      expect(ladders, `${row.net} in ${row.scenario}`).toMatch(new RegExp(`${escapeRe(row.label)}\\s+· ${escapeRe(state.label)} \\(${escapeRe(row.scenario)}\\)`));
-      const ladder = ladderFor(result.nets.get(row.scenario)!.get(row.net)!.view, result.states.find((s) => s.id === row.scenario)!);
-      for (const m of ladder.margins) expect(ladders, `${m.kind} ${m.driver} → ${m.receiver}`).toContain(`${m.kind.toUpperCase()} ${marginVolts(m.margin)}`);
+      expect(ladders, `${row.net} in ${row.scenario}`).toMatch(
+        new RegExp(`${escapeRe(row.label)}\\s+· ${escapeRe(state.label)} \\(${escapeRe(row.scenario)}\\)`),
+      );
+      const ladder = ladderFor(
+        result.nets.get(row.scenario)!.get(row.net)!.view,
+        result.states.find((s) => s.id === row.scenario)!,
+      );
+      for (const m of ladder.margins)
+        expect(ladders, `${m.kind} ${m.driver} → ${m.receiver}`).toContain(
+          `${m.kind.toUpperCase()} ${marginVolts(m.margin)}`,
+        );
     }
     // The example's planted level-high error: VOH 2.935 V against VIH 3.694 V is NMH -0.759 V, marked FAIL in words.
     expect(ladders).toContain('NMH -0.759 V');
@@ -181,7 +200,13 @@ describe.skipIf(!HAVE_POPPLER)('the example\'s PDF, read back with pdftotext', (
 
   it('explains the worst-case method', () => {
     const method = section(text, /^Method and sources$/m, /^Profiles used/m);
-    for (const phrase of ['every combination of those rails\' ends', 'share one supply voltage', 'smallest test current', 'NMH = VOH − VIH', '1e-9']) {
+    for (const phrase of [
+      "every combination of those rails' ends",
+      'share one supply voltage',
+      'smallest test current',
+      'NMH = VOH − VIH',
+      '1e-9',
+    ]) {
       expect(wordsInOrder(method, phrase), phrase).toBe(true);
     }
   });
@@ -210,7 +235,7 @@ describe.skipIf(!HAVE_POPPLER)('the example\'s PDF, read back with pdftotext', (
     expect(text.split('Railcross report: Greenhouse irrigation controller').length - 1).toBe(pages - 1);
   });
 
-  it('draws the diagram from the design: every part\'s designator and every net name is on it', () => {
+  it("draws the diagram from the design: every part's designator and every net name is on it", () => {
     const diagram = section(text, /^Block diagram$/m, /^Findings \(\d+\)$/m);
     for (const p of made.design.parts) expect(diagram, p.id).toMatch(new RegExp(`\\b${escapeRe(p.id)}\\b`));
     for (const n of made.design.nets) expect(diagram, n.id).toMatch(new RegExp(`\\b${escapeRe(n.id)}\\b`));
@@ -219,14 +244,18 @@ describe.skipIf(!HAVE_POPPLER)('the example\'s PDF, read back with pdftotext', (
 
   it('prints Ω, µ, ≤, – and → from the embedded fonts, and uses no other font', () => {
     for (const ch of ['kΩ', 'µs', 'VDD ≤ 2 V', 'kΩ–', '→']) expect(text, ch).toContain(ch);
-    const fontsList = execFileSync('pdffonts', [made.file], { encoding: 'utf8' }).split('\n').slice(2).filter((l) => l.trim() !== '');
+    const fontsList = execFileSync('pdffonts', [made.file], { encoding: 'utf8' })
+      .split('\n')
+      .slice(2)
+      .filter((l) => l.trim() !== '');
     expect(fontsList.length).toBeGreaterThan(0);
     for (const line of fontsList) expect(line, line).toMatch(/\sIdentity-H\s+yes\s/);
   });
 });
 
 describe.skipIf(!HAVE_POPPLER)('names with markup and unusual characters come out as text', () => {
-  const LONG = 'a very long label for the relay coil supply enable line that runs from the controller across the whole board to the far connector';
+  const LONG =
+    'a very long label for the relay coil supply enable line that runs from the controller across the whole board to the far connector';
   const TITLE = 'Bench rig "B" <rev 2> & Ω-meter µC test';
   const d = design({
     title: TITLE,
@@ -234,10 +263,13 @@ describe.skipIf(!HAVE_POPPLER)('names with markup and unusual characters come ou
     scenarios: [scenario('sleep', ['5v0'], 'Sleep: 5 V off ≤ 1 s')],
     parts: [
       part('U1', '3v3', 'lvcmos33', [output('Y'), output('Z')], { label: '<b>x</b> µC “main”' }),
-      part('U2', '5v0', '74hct', [input('A'), input('B')], { label: 'Driver \'Ω\' stage', position: { x: 400, y: 0 } }),
+      part('U2', '5v0', '74hct', [input('A'), input('B')], { label: "Driver 'Ω' stage", position: { x: 400, y: 0 } }),
     ],
     nets: [
-      net('EN', ['U1.Y', 'U2.A'], { label: LONG, waivers: [{ rule: 'back-power', note: 'Reviewed: U2 <i>sleeps</i> — 10 kΩ series' }] }),
+      net('EN', ['U1.Y', 'U2.A'], {
+        label: LONG,
+        waivers: [{ rule: 'back-power', note: 'Reviewed: U2 <i>sleeps</i> — 10 kΩ series' }],
+      }),
       net('N_2', ['U1.Z', 'U2.B']),
     ],
   });
@@ -247,7 +279,7 @@ describe.skipIf(!HAVE_POPPLER)('names with markup and unusual characters come ou
   it.each([
     ['the title with quotes, angle brackets and &', TITLE],
     ['a label that looks like markup', '<b>x</b> µC “main”'],
-    ['a label with Ω and quotes', 'Driver \'Ω\' stage'],
+    ['a label with Ω and quotes', "Driver 'Ω' stage"],
     ['a power state label with ≤', 'Sleep: 5 V off ≤ 1 s'],
   ])('%s', (_name, expected) => {
     expect(text).toContain(expected);
@@ -268,7 +300,11 @@ describe.skipIf(!HAVE_POPPLER)('names with markup and unusual characters come ou
 describe.skipIf(!HAVE_POPPLER)('page size', { timeout: 120_000 }, () => {
   /** Every distinct MediaBox of the file, `w×h` in points to 0.01 pt. */
   const boxes = (bytes: Uint8Array) => [
-    ...new Set([...latin1(bytes).matchAll(/\/MediaBox \[0 0 ([\d.]+) ([\d.]+)\]/g)].map((m) => `${Number(Number(m[1]).toFixed(2))}×${Number(Number(m[2]).toFixed(2))}`)),
+    ...new Set(
+      [...latin1(bytes).matchAll(/\/MediaBox \[0 0 ([\d.]+) ([\d.]+)\]/g)].map(
+        (m) => `${Number(Number(m[1]).toFixed(2))}×${Number(Number(m[2]).toFixed(2))}`,
+      ),
+    ),
   ];
 
   it.each([
@@ -300,7 +336,10 @@ describe('writeReportPdf', { timeout: 120_000 }, () => {
 
   it.each([
     ['a design without parts', design({ title: 'empty', parts: [] })],
-    ['parts without positions or nets', design({ parts: [part('A', '3v3', 'lvcmos33', [input('X')]), part('B', '3v3', 'lvcmos33', [])] })],
+    [
+      'parts without positions or nets',
+      design({ parts: [part('A', '3v3', 'lvcmos33', [input('X')]), part('B', '3v3', 'lvcmos33', [])] }),
+    ],
   ])('writes %s', (_name, d) => {
     const made = make(d);
     expect(latin1(made.bytes.subarray(0, 5))).toBe('%PDF-');
@@ -336,7 +375,7 @@ describe('toBase64', () => {
     expect(toBase64(new TextEncoder().encode(plain))).toBe(encoded);
   });
 
-  it('matches Node\'s encoder on a font file', () => {
+  it("matches Node's encoder on a font file", () => {
     expect(toBase64(fonts.bold)).toBe(Buffer.from(fonts.bold).toString('base64'));
   });
 });
@@ -344,12 +383,16 @@ describe('toBase64', () => {
 describe('toBinaryString', () => {
   it.each([
     ['empty', [], ''],
-    ['every byte value keeps its code (0x00, 0x7F, 0x80, 0x9F, 0xFF)', [0, 0x7f, 0x80, 0x9f, 0xff], '\u0000\u007f\u0080\u009f\u00ff'],
+    [
+      'every byte value keeps its code (0x00, 0x7F, 0x80, 0x9F, 0xFF)',
+      [0, 0x7f, 0x80, 0x9f, 0xff],
+      '\u0000\u007f\u0080\u009f\u00ff',
+    ],
   ])('%s', (_name, bytes, text) => {
     expect(toBinaryString(new Uint8Array(bytes))).toBe(text);
   });
 
-  it('matches Node\'s latin1 decoding on a font file longer than one slice', () => {
+  it("matches Node's latin1 decoding on a font file longer than one slice", () => {
     expect(fonts.regular.length).toBeGreaterThan(8192 * 2);
     expect(toBinaryString(fonts.regular)).toBe(Buffer.from(fonts.regular).toString('latin1'));
   });
@@ -360,13 +403,37 @@ describe('toBinaryString', () => {
 });
 
 describe('ladderRows', () => {
-  const row = (net: string, scenario: string, worst: Crossing['worst'], marginHigh: number | null, marginLow: number | null): Crossing =>
-    ({ net, label: net, rails: ['a', 'b'], scenario, marginHigh, marginLow, worst });
+  const row = (
+    net: string,
+    scenario: string,
+    worst: Crossing['worst'],
+    marginHigh: number | null,
+    marginLow: number | null,
+  ): Crossing => ({ net, label: net, rails: ['a', 'b'], scenario, marginHigh, marginLow, worst });
   it.each([
-    ['an unchanged second state is left out', [row('N1', 'all-on', 'ok', 1, 1), row('N1', 'off', 'ok', 1, 1)], 40, ['N1@all-on']],
-    ['a changed second state is kept', [row('N1', 'all-on', 'ok', 1, 1), row('N1', 'off', 'error', null, null)], 40, ['N1@all-on', 'N1@off']],
-    ['over the cap, errors then the smallest margins, in the report\'s order',
-      [row('A', 's', 'ok', 0.1, 0.2), row('B', 's', 'error', 0.5, 0.5), row('C', 's', 'warning', 0.05, 1), row('D', 's', 'ok', 0.01, 1)], 2, ['B@s', 'C@s']],
+    [
+      'an unchanged second state is left out',
+      [row('N1', 'all-on', 'ok', 1, 1), row('N1', 'off', 'ok', 1, 1)],
+      40,
+      ['N1@all-on'],
+    ],
+    [
+      'a changed second state is kept',
+      [row('N1', 'all-on', 'ok', 1, 1), row('N1', 'off', 'error', null, null)],
+      40,
+      ['N1@all-on', 'N1@off'],
+    ],
+    [
+      "over the cap, errors then the smallest margins, in the report's order",
+      [
+        row('A', 's', 'ok', 0.1, 0.2),
+        row('B', 's', 'error', 0.5, 0.5),
+        row('C', 's', 'warning', 0.05, 1),
+        row('D', 's', 'ok', 0.01, 1),
+      ],
+      2,
+      ['B@s', 'C@s'],
+    ],
   ] as const)('%s', (_name, rows, cap, want) => {
     expect(ladderRows(rows, cap).rows.map((r) => `${r.net}@${r.scenario}`)).toEqual(want);
   });

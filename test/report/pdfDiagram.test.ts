@@ -21,7 +21,7 @@ const dir = mkdtempSync(join(tmpdir(), 'railcross-diagram-'));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 
 describe('the PDF diagram', () => {
-  it.skipIf(!HAVE_POPPLER)('prints each pull resistor\'s value beside its net or pin', { timeout: 60_000 }, () => {
+  it.skipIf(!HAVE_POPPLER)("prints each pull resistor's value beside its net or pin", { timeout: 60_000 }, () => {
     const d = greenhouse();
     const result = check(d);
     const report = buildReport(d, result, { failOn: 'error', generatedAt: FIXED_TIME });

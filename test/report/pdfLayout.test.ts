@@ -7,7 +7,18 @@
 import { describe, expect, it } from 'vitest';
 import type { Net, Part, Pin } from '../../rules/model/schema.ts';
 import {
-  BoxIndex, STUB, layoutDiagram, netWires, partBox, routePoints, routeWire, sideOf, spreadChannels, type PartBox, type PinPlace, type Point,
+  BoxIndex,
+  STUB,
+  layoutDiagram,
+  netWires,
+  partBox,
+  routePoints,
+  routeWire,
+  sideOf,
+  spreadChannels,
+  type PartBox,
+  type PinPlace,
+  type Point,
 } from '../../rules/report/pdf/diagramLayout.ts';
 import { netStatus } from '../../rules/report/pdf/diagram.ts';
 import type { Report, ReportFinding } from '../../rules/report/reportSchema.ts';
@@ -33,9 +44,23 @@ describe('partBox', () => {
     // 44 + 4 + 1 row × 20 + 4 (a part without pins keeps one row)
     ['no pins', part('A', '3v3', 'lvcmos33', [], at(0, 0)), { width: 208, height: 72, headerTop: 0 }],
     // rows = max(2 left, 1 right) = 2: 44 + 4 + 40 + 4
-    ['two inputs and an output', part('A', '3v3', 'lvcmos33', [input('A'), input('B'), output('Y')], at(10, 20)), { width: 208, height: 92, headerTop: 20 }],
+    [
+      'two inputs and an output',
+      part('A', '3v3', 'lvcmos33', [input('A'), input('B'), output('Y')], at(10, 20)),
+      { width: 208, height: 92, headerTop: 20 },
+    ],
     // a top strip (30) above the header, a bottom strip (30) below the rows
-    ['pins on every side', part('A', '3v3', 'lvcmos33', [input('T', { side: 'top' }), input('L'), output('R'), output('B', { side: 'bottom' })], at(0, 100)), { width: 208, height: 132, headerTop: 130 }],
+    [
+      'pins on every side',
+      part(
+        'A',
+        '3v3',
+        'lvcmos33',
+        [input('T', { side: 'top' }), input('L'), output('R'), output('B', { side: 'bottom' })],
+        at(0, 100),
+      ),
+      { width: 208, height: 132, headerTop: 130 },
+    ],
   ])('%s', (_name, p, expected) => {
     const box = partBox(p);
     expect({ width: box.width, height: box.height, headerTop: box.headerTop }).toEqual(expected);
@@ -50,7 +75,15 @@ describe('partBox', () => {
   });
 
   it('spreads top and bottom pins evenly across the width', () => {
-    const box = partBox(part('U1', '3v3', 'lvcmos33', [input('P', { side: 'top' }), input('Q', { side: 'top' }), output('Z', { side: 'bottom' })], at(0, 0)));
+    const box = partBox(
+      part(
+        'U1',
+        '3v3',
+        'lvcmos33',
+        [input('P', { side: 'top' }), input('Q', { side: 'top' }), output('Z', { side: 'bottom' })],
+        at(0, 0),
+      ),
+    );
     expect(place(box, 'P').at).toEqual({ x: 52, y: 0 });
     expect(place(box, 'Q').at).toEqual({ x: 156, y: 0 });
     expect(place(box, 'Z').at).toEqual({ x: 104, y: box.height });
@@ -64,12 +97,49 @@ describe('partBox', () => {
 describe('netWires', () => {
   const pins = ['A.Y', 'B.X', 'C.X', 'D.X'];
   it.each<[string, Net, [string, string][]]>([
-    ['no route: a chain in the net\'s order', net('N', pins), [['A.Y', 'B.X'], ['B.X', 'C.X'], ['C.X', 'D.X']]],
-    ['a route that reaches every pin', net('N', pins, { route: [['A.Y', 'B.X'], ['A.Y', 'C.X'], ['A.Y', 'D.X']] }), [['A.Y', 'B.X'], ['A.Y', 'C.X'], ['A.Y', 'D.X']]],
-    ['a partial route, the rest chained on', net('N', pins, { route: [['A.Y', 'C.X']] }), [['A.Y', 'C.X'], ['A.Y', 'B.X'], ['C.X', 'D.X']]],
+    [
+      "no route: a chain in the net's order",
+      net('N', pins),
+      [
+        ['A.Y', 'B.X'],
+        ['B.X', 'C.X'],
+        ['C.X', 'D.X'],
+      ],
+    ],
+    [
+      'a route that reaches every pin',
+      net('N', pins, {
+        route: [
+          ['A.Y', 'B.X'],
+          ['A.Y', 'C.X'],
+          ['A.Y', 'D.X'],
+        ],
+      }),
+      [
+        ['A.Y', 'B.X'],
+        ['A.Y', 'C.X'],
+        ['A.Y', 'D.X'],
+      ],
+    ],
+    [
+      'a partial route, the rest chained on',
+      net('N', pins, { route: [['A.Y', 'C.X']] }),
+      [
+        ['A.Y', 'C.X'],
+        ['A.Y', 'B.X'],
+        ['C.X', 'D.X'],
+      ],
+    ],
     [
       'route pairs off the net, to itself, or repeated are ignored',
-      net('N', ['A.Y', 'B.X'], { route: [['A.Y', 'Z.Q'], ['A.Y', 'A.Y'], ['B.X', 'A.Y'], ['A.Y', 'B.X']] }),
+      net('N', ['A.Y', 'B.X'], {
+        route: [
+          ['A.Y', 'Z.Q'],
+          ['A.Y', 'A.Y'],
+          ['B.X', 'A.Y'],
+          ['A.Y', 'B.X'],
+        ],
+      }),
       [['B.X', 'A.Y']],
     ],
     ['one pin: no wire', net('N', ['A.Y']), []],
@@ -95,14 +165,29 @@ function expectOrthogonal(points: readonly Point[]): void {
 describe('routes', () => {
   const driver = partBox(part('D', '3v3', 'lvcmos33', [output('Y')], at(0, 0)));
   const receiver = partBox(part('R', '3v3', 'lvcmos33', [input('A')], at(400, 200)));
-  const wall = partBox(part('W', '3v3', 'lvcmos33', [input('A'), input('B'), input('C'), input('D'), input('E'), input('F'), input('G'), input('H')], at(250, 0)));
+  const wall = partBox(
+    part(
+      'W',
+      '3v3',
+      'lvcmos33',
+      [input('A'), input('B'), input('C'), input('D'), input('E'), input('F'), input('G'), input('H')],
+      at(250, 0),
+    ),
+  );
 
   it('facing pins with nothing between: out of each pin by the stub, turning half-way', () => {
     const points = routePoints(routeWire(place(driver, 'Y'), place(receiver, 'A')));
     const a = place(driver, 'Y').at;
     const b = place(receiver, 'A').at;
     const half = (a.x + STUB + (b.x - STUB)) / 2;
-    expect(points).toEqual([a, { x: a.x + STUB, y: a.y }, { x: half, y: a.y }, { x: half, y: b.y }, { x: b.x - STUB, y: b.y }, b]);
+    expect(points).toEqual([
+      a,
+      { x: a.x + STUB, y: a.y },
+      { x: half, y: a.y },
+      { x: half, y: b.y },
+      { x: b.x - STUB, y: b.y },
+      b,
+    ]);
   });
 
   it.each<[string, PartBox[]]>([
@@ -115,7 +200,8 @@ describe('routes', () => {
     expect(points[0]).toEqual(place(driver, 'Y').at);
     expect(points.at(-1)).toEqual(place(receiver, 'A').at);
     for (const box of boxes) {
-      for (let k = 1; k < points.length; k++) expect(throughBox(points[k - 1]!, points[k]!, box), `segment ${k} through ${box.part.id}`).toBe(false);
+      for (let k = 1; k < points.length; k++)
+        expect(throughBox(points[k - 1]!, points[k]!, box), `segment ${k} through ${box.part.id}`).toBe(false);
     }
   });
 
@@ -130,7 +216,8 @@ describe('routes', () => {
     const boxes = [left, right];
     const points = routePoints(routeWire(place(left, 'Y'), place(right, 'Z'), new BoxIndex(boxes)));
     expectOrthogonal(points);
-    for (const box of boxes) for (let k = 1; k < points.length; k++) expect(throughBox(points[k - 1]!, points[k]!, box)).toBe(false);
+    for (const box of boxes)
+      for (let k = 1; k < points.length; k++) expect(throughBox(points[k - 1]!, points[k]!, box)).toBe(false);
   });
 });
 
@@ -150,7 +237,10 @@ describe('spreadChannels', () => {
     ['wires of different nets are set 6 apart, about the channel', 'N2', 6],
     ['wires of one net may share the line', 'N1', 0],
   ])('%s', (_name, secondNet, gap) => {
-    const offsets = spreadChannels([{ route: r1, net: 'N1' }, { route: r2, net: secondNet }]);
+    const offsets = spreadChannels([
+      { route: r1, net: 'N1' },
+      { route: r2, net: secondNet },
+    ]);
     expect(Math.abs(offsets[1]! - offsets[0]!)).toBe(gap);
     // Centred on the channel line either way.
     expect(offsets[0]! + offsets[1]!).toBe(0);
@@ -168,7 +258,10 @@ describe('layoutDiagram', () => {
 
   it('the bounds hold every box with room for stubs and net names', () => {
     const d = design({
-      parts: [part('A', '3v3', 'lvcmos33', [output('Y')], at(-50, 10)), part('B', '3v3', 'lvcmos33', [input('X')], at(600, 400))],
+      parts: [
+        part('A', '3v3', 'lvcmos33', [output('Y')], at(-50, 10)),
+        part('B', '3v3', 'lvcmos33', [input('X')], at(600, 400)),
+      ],
       nets: [net('N', ['A.Y', 'B.X', 'C.Q'])],
     });
     const layout = layoutDiagram(d);
@@ -186,13 +279,33 @@ describe('layoutDiagram', () => {
 });
 
 describe('netStatus', () => {
-  const f = (net: string | null, severity: ReportFinding['severity'], scenario = 'all-on', waived?: string): ReportFinding => ({
-    id: `x:${net}:${scenario}:${severity}`, rule: 'level-high', severity, scenario, net, pins: [], parts: [], message: '', values: {}, hint: '',
+  const f = (
+    net: string | null,
+    severity: ReportFinding['severity'],
+    scenario = 'all-on',
+    waived?: string,
+  ): ReportFinding => ({
+    id: `x:${net}:${scenario}:${severity}`,
+    rule: 'level-high',
+    severity,
+    scenario,
+    net,
+    pins: [],
+    parts: [],
+    message: '',
+    values: {},
+    hint: '',
     ...(waived === undefined ? {} : { waived }),
   });
   const report = {
     findings: [
-      f('A', 'warning'), f('A', 'error'), f('B', 'info'), f('C', 'error', 'all-on', 'reviewed'), f('C', 'warning'), f('D', 'error', 'standby'), f(null, 'error'),
+      f('A', 'warning'),
+      f('A', 'error'),
+      f('B', 'info'),
+      f('C', 'error', 'all-on', 'reviewed'),
+      f('C', 'warning'),
+      f('D', 'error', 'standby'),
+      f(null, 'error'),
     ],
   } as unknown as Report;
 

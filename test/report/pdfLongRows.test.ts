@@ -20,7 +20,8 @@ import { design, input, net, output, part, rail3v3, rail5v0 } from '../support/b
 import { FIXED_TIME } from './fixtures.ts';
 
 const HAVE_POPPLER = spawnSync('pdftotext', ['-v']).error === undefined;
-if (!HAVE_POPPLER) console.warn('test/report/pdfLongRows.test.ts: pdftotext (poppler-utils) is not installed: SKIPPED.');
+if (!HAVE_POPPLER)
+  console.warn('test/report/pdfLongRows.test.ts: pdftotext (poppler-utils) is not installed: SKIPPED.');
 
 const fonts = loadDejaVuFonts();
 const dir = mkdtempSync(join(tmpdir(), 'railcross-pdf-rows-'));
@@ -56,12 +57,16 @@ describe.skipIf(!HAVE_POPPLER)('a findings row taller than a page', () => {
     ['a 3,000-character label without spaces', LABEL, 'short note', 'Ж', 3000],
     ['a 5,000-character waiver note', 'short label', NOTE, 'Щ', 5000],
     ['both at once', LABEL, NOTE, 'Щ', 5000],
-  ])('%s: the PDF is made, the row continues with its mark, no character lost', (name, label, note, ch, n) => {
-    const text = pdfText(longRows(label, note), `${name.replace(/\W+/g, '-')}.pdf`);
-    expect(text).toContain(CONTINUED.split(' ')[0]);
-    expect(text.replace(/\s+/g, ' ')).toContain(CONTINUED);
-    // The row's own text, whole: at least as many of its letters as it has (the label is
-    // also printed in the crossing and margin tables and the diagram).
-    expect(count(text, ch)).toBeGreaterThanOrEqual(n);
-  }, 60_000); // a PDF of a dozen pages: generous on a loaded machine, never a speed assertion
+  ])(
+    '%s: the PDF is made, the row continues with its mark, no character lost',
+    (name, label, note, ch, n) => {
+      const text = pdfText(longRows(label, note), `${name.replace(/\W+/g, '-')}.pdf`);
+      expect(text).toContain(CONTINUED.split(' ')[0]);
+      expect(text.replace(/\s+/g, ' ')).toContain(CONTINUED);
+      // The row's own text, whole: at least as many of its letters as it has (the label is
+      // also printed in the crossing and margin tables and the diagram).
+      expect(count(text, ch)).toBeGreaterThanOrEqual(n);
+    },
+    60_000,
+  ); // a PDF of a dozen pages: generous on a loaded machine, never a speed assertion
 });

@@ -19,26 +19,32 @@ import { designArb } from '../support/arbitraries.ts';
 import { FIXED_TIME } from './fixtures.ts';
 
 const ajv = new Ajv2020({ allErrors: true, strict: true, validateFormats: false });
-const validateJson = ajv.compile(JSON.parse(readFileSync(new URL('../../rules/schema/report.schema.json', import.meta.url), 'utf8')) as object);
+const validateJson = ajv.compile(
+  JSON.parse(readFileSync(new URL('../../rules/schema/report.schema.json', import.meta.url), 'utf8')) as object,
+);
 
 describe('the report of any valid design', () => {
   it('holds to its schemas, counts what it lists, and renders as text and Markdown', () => {
     fc.assert(
-      fc.property(designArb(), fc.constantFrom('error', 'warning') as fc.Arbitrary<'error' | 'warning'>, (design, failOn) => {
-        const report = buildReport(design, check(design), { failOn, generatedAt: FIXED_TIME });
-        expect(ReportSchema.safeParse(report).success).toBe(true);
-        const json = JSON.parse(JSON.stringify(report)) as unknown;
-        expect(validateJson(json), JSON.stringify(validateJson.errors?.slice(0, 3))).toBe(true);
+      fc.property(
+        designArb(),
+        fc.constantFrom('error', 'warning') as fc.Arbitrary<'error' | 'warning'>,
+        (design, failOn) => {
+          const report = buildReport(design, check(design), { failOn, generatedAt: FIXED_TIME });
+          expect(ReportSchema.safeParse(report).success).toBe(true);
+          const json = JSON.parse(JSON.stringify(report)) as unknown;
+          expect(validateJson(json), JSON.stringify(validateJson.errors?.slice(0, 3))).toBe(true);
 
-        const tally = { error: 0, warning: 0, info: 0, waived: 0 };
-        for (const f of report.findings) tally[f.waived !== undefined ? 'waived' : f.severity]++;
-        expect(report.summary).toMatchObject(tally);
+          const tally = { error: 0, warning: 0, info: 0, waived: 0 };
+          for (const f of report.findings) tally[f.waived !== undefined ? 'waived' : f.severity]++;
+          expect(report.summary).toMatchObject(tally);
 
-        const text = renderText(report, { verbose: true });
-        const markdown = renderMarkdown(report);
-        for (const f of report.findings) expect(text).toContain(f.message);
-        expect(markdown.length).toBeGreaterThan(0);
-      }),
+          const text = renderText(report, { verbose: true });
+          const markdown = renderMarkdown(report);
+          for (const f of report.findings) expect(text).toContain(f.message);
+          expect(markdown.length).toBeGreaterThan(0);
+        },
+      ),
       { numRuns: 60 },
     );
   });

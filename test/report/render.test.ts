@@ -17,9 +17,7 @@ function variant(): Design {
     title: 'Greenhouse | rev B',
     scenarios: [{ id: 'valves-off', label: 'Valve supply off', off: ['5v0'] }],
     nets: d.nets.map((n) =>
-      n.id === 'VALVE_EN'
-        ? { ...n, label: 'VALVE|EN', waivers: [{ rule: 'level-high' as const, note: NOTE }] }
-        : n,
+      n.id === 'VALVE_EN' ? { ...n, label: 'VALVE|EN', waivers: [{ rule: 'level-high' as const, note: NOTE }] } : n,
     ),
   };
 }
@@ -47,12 +45,15 @@ describe.each(renderers)('%s rendering', (kind, render) => {
       expect(report.findings.flatMap((f) => quantitiesIn(f.message)).length).toBeGreaterThan(10);
     });
 
-    it.each(report.findings.map((f) => [f.id, f] as const))('carries %s: rule, net and every number of its message', (_id, f) => {
-      expect(out).toContain(f.rule);
-      if (f.net !== null) expect(out).toContain(f.net);
-      expect(out).toContain(prose(f.message));
-      for (const q of quantitiesIn(f.message)) expect(out).toContain(q);
-    });
+    it.each(report.findings.map((f) => [f.id, f] as const))(
+      'carries %s: rule, net and every number of its message',
+      (_id, f) => {
+        expect(out).toContain(f.rule);
+        if (f.net !== null) expect(out).toContain(f.net);
+        expect(out).toContain(prose(f.message));
+        for (const q of quantitiesIn(f.message)) expect(out).toContain(q);
+      },
+    );
 
     it('carries every profile and its source, and the cautions', () => {
       for (const p of report.profiles) {
@@ -97,7 +98,12 @@ describe('text grouping', () => {
 
   it('groups by severity, errors first, waived after warnings, info last as a count', () => {
     const s = report.summary;
-    expect(headings).toEqual([`Errors (${s.error})`, `Warnings (${s.warning})`, `Waived (${s.waived})`, `Info: ${s.info} findings, not listed (--verbose lists them)`]);
+    expect(headings).toEqual([
+      `Errors (${s.error})`,
+      `Warnings (${s.warning})`,
+      `Waived (${s.waived})`,
+      `Info: ${s.info} findings, not listed (--verbose lists them)`,
+    ]);
     expect(s.error > 0 && s.warning > 0 && s.waived > 0 && s.info > 0).toBe(true);
   });
 
@@ -108,17 +114,26 @@ describe('text grouping', () => {
     }
   });
 
-  it('says each rule\'s hint once per group, under the rule\'s heading', () => {
+  it("says each rule's hint once per group, under the rule's heading", () => {
     const errors = text.slice(text.indexOf('Errors ('), text.indexOf('Warnings ('));
-    for (const rule of new Set(report.findings.filter((f) => f.severity === 'error' && f.waived === undefined).map((f) => f.rule))) {
-      const hints = new Set(report.findings.filter((f) => f.rule === rule && f.severity === 'error' && f.waived === undefined).map((f) => f.hint));
+    for (const rule of new Set(
+      report.findings.filter((f) => f.severity === 'error' && f.waived === undefined).map((f) => f.rule),
+    )) {
+      const hints = new Set(
+        report.findings
+          .filter((f) => f.rule === rule && f.severity === 'error' && f.waived === undefined)
+          .map((f) => f.hint),
+      );
       for (const hint of hints) expect(errors.split(`Hint: ${hint}`).length - 1, rule).toBe(1);
     }
   });
 
   it('orders rules within a group by the catalogue (level-high before overvoltage before floating-input)', () => {
     // Within one group: the errors (a rule may also head the warnings or the waived group).
-    const errors = lines.slice(lines.findIndex((l) => l.startsWith('Errors (')), lines.findIndex((l) => l.startsWith('Warnings (')));
+    const errors = lines.slice(
+      lines.findIndex((l) => l.startsWith('Errors (')),
+      lines.findIndex((l) => l.startsWith('Warnings (')),
+    );
     const at = (rule: string) => errors.findIndex((l) => l.startsWith(`  ${rule}: `));
     expect(at('level-low') < 0 || at('level-high') < at('level-low')).toBe(true);
     expect(at('overvoltage')).toBeLessThan(at('floating-input'));
@@ -131,8 +146,9 @@ describe('text grouping', () => {
     for (const f of report.findings.filter((x) => x.severity === 'info')) expect(verbose).toContain(f.message);
   });
 
-  it('prints the verdict it is given (a baseline\'s) instead of the report\'s own', () => {
-    const line = 'PASS: no unwaived finding at the fail-on level (error) beyond the baseline; 3 findings at that level already in the baseline.';
+  it("prints the verdict it is given (a baseline's) instead of the report's own", () => {
+    const line =
+      'PASS: no unwaived finding at the fail-on level (error) beyond the baseline; 3 findings at that level already in the baseline.';
     expect(renderText(report, { verdict: { fails: false, count: 0, line } }).split('\n')).toContain(line);
   });
 });

@@ -17,7 +17,9 @@ import { FIXED_TIME, greenhouse } from './fixtures.ts';
 
 const NOTE = 'U3 reads EN through a 5 V-tolerant buffer fitted later | rev C';
 
-const schema = JSON.parse(readFileSync(new URL('../support/schemas/sarif-2.1.0-rtm.5.json', import.meta.url), 'utf8')) as Record<string, unknown>;
+const schema = JSON.parse(
+  readFileSync(new URL('../support/schemas/sarif-2.1.0-rtm.5.json', import.meta.url), 'utf8'),
+) as Record<string, unknown>;
 // A draft-04 schema: ajv reads it as draft-07 once `id` is spelled `$id` and the draft-04
 // meta-schema reference is dropped (its keywords are otherwise the same for this schema).
 const { id, $schema: _draft04, ...rest } = schema;
@@ -25,14 +27,22 @@ const { id, $schema: _draft04, ...rest } = schema;
 // ECMA-262 patterns allow but JavaScript's `u` flag refuses.
 const ajv = new Ajv({ allErrors: true, strict: false, unicodeRegExp: false });
 // The schema's formats, checked as the standard defines them (RFC 3339 date-time, RFC 3986 URIs).
-ajv.addFormat('date-time', (s: string) => /^\d{4}-\d\d-\d\dT\d\d:\d\d:\d\d(\.\d+)?(Z|[+-]\d\d:\d\d)$/.test(s) && !Number.isNaN(Date.parse(s)));
+ajv.addFormat(
+  'date-time',
+  (s: string) => /^\d{4}-\d\d-\d\dT\d\d:\d\d:\d\d(\.\d+)?(Z|[+-]\d\d:\d\d)$/.test(s) && !Number.isNaN(Date.parse(s)),
+);
 ajv.addFormat('uri', (s: string) => /^[A-Za-z][A-Za-z0-9+.-]*:[^\s]*$/.test(s));
 ajv.addFormat('uri-reference', (s: string) => /^[^\s%]*(%[0-9A-Fa-f]{2}[^\s%]*)*$/.test(s));
 const validate = ajv.compile({ ...rest, $id: id as string });
 
 function waived(): Design {
   const d = greenhouse();
-  return { ...d, nets: d.nets.map((n) => (n.id === 'VALVE_EN' ? { ...n, waivers: [{ rule: 'level-high' as const, note: NOTE }] } : n)) };
+  return {
+    ...d,
+    nets: d.nets.map((n) =>
+      n.id === 'VALVE_EN' ? { ...n, waivers: [{ rule: 'level-high' as const, note: NOTE }] } : n,
+    ),
+  };
 }
 const reportOf = (d: Design): Report => buildReport(d, check(d), { failOn: 'error', generatedAt: FIXED_TIME });
 
@@ -41,19 +51,31 @@ interface SarifResult {
   ruleIndex: number;
   level: string;
   message: { text: string };
-  locations: { physicalLocation: { artifactLocation: { uri: string } }; logicalLocations: { name: string; kind: string }[] }[];
+  locations: {
+    physicalLocation: { artifactLocation: { uri: string } };
+    logicalLocations: { name: string; kind: string }[];
+  }[];
   partialFingerprints: Record<string, string>;
   suppressions?: { kind: string; status: string; justification: string }[];
   baselineState?: string;
 }
 interface SarifLog {
   version: string;
-  runs: { tool: { driver: { name: string; rules: { id: string; help: { text: string }; fullDescription: { text: string } }[] } }; results: SarifResult[] }[];
+  runs: {
+    tool: {
+      driver: { name: string; rules: { id: string; help: { text: string }; fullDescription: { text: string } }[] };
+    };
+    results: SarifResult[];
+  }[];
 }
 
 const cases: [string, Report, Parameters<typeof toSarif>[1]][] = [
   ['the example', reportOf(greenhouse()), { file: 'greenhouse.json' }],
-  ['the example with a waiver, from a path with spaces', reportOf(waived()), { file: 'boards/rev b/green house#2.json' }],
+  [
+    'the example with a waiver, from a path with spaces',
+    reportOf(waived()),
+    { file: 'boards/rev b/green house#2.json' },
+  ],
   ['against a baseline', reportOf(waived()), { file: 'a.json', baseline: baselineOf(reportOf(greenhouse())) }],
 ];
 
@@ -67,9 +89,11 @@ describe.each(cases)('SARIF of %s', (_name, report, options) => {
     expect(log.version).toBe('2.1.0');
   });
 
-  it('has one result per finding, in the report\'s order, with its id as fingerprint', () => {
+  it("has one result per finding, in the report's order, with its id as fingerprint", () => {
     expect(run.results.length).toBe(report.findings.length);
-    expect(run.results.map((r) => r.partialFingerprints['railcrossFindingId/v1'])).toEqual(report.findings.map((f) => f.id));
+    expect(run.results.map((r) => r.partialFingerprints['railcrossFindingId/v1'])).toEqual(
+      report.findings.map((f) => f.id),
+    );
     expect(run.results.map((r) => r.message.text)).toEqual(report.findings.map((f) => f.message));
   });
 
@@ -109,7 +133,7 @@ describe.each(cases)('SARIF of %s', (_name, report, options) => {
 });
 
 describe('SARIF details', () => {
-  it('the waiver case is not vacuous: VALVE_EN\'s level-high findings are suppressed with the note', () => {
+  it("the waiver case is not vacuous: VALVE_EN's level-high findings are suppressed with the note", () => {
     const log = toSarif(reportOf(waived()), { file: 'a.json' }) as unknown as SarifLog;
     const suppressed = log.runs[0]!.results.filter((r) => r.suppressions !== undefined);
     expect(suppressed.length).toBe(2); // all-on and standby

@@ -17,16 +17,23 @@ const validateJson = ajv.compile(committed);
 
 function exampleReport(scenario?: string): Report {
   const design = greenhouse();
-  return buildReport(design, check(design), { failOn: 'error', generatedAt: FIXED_TIME, ...(scenario ? { scenario } : {}) });
+  return buildReport(design, check(design), {
+    failOn: 'error',
+    generatedAt: FIXED_TIME,
+    ...(scenario ? { scenario } : {}),
+  });
 }
 
 /** A report after a JSON round trip, as a file holds it. */
 const asJson = (r: unknown) => JSON.parse(JSON.stringify(r)) as Record<string, unknown>;
 
 describe('the committed JSON Schema files', () => {
-  it.each(SCHEMA_FILES.map((f) => [f.file, f] as const))('%s is current: `npm run schema` would write the same text', (file, { build }) => {
-    expect(readFileSync(new URL(`../../rules/schema/${file}`, import.meta.url), 'utf8')).toBe(schemaText(build()));
-  });
+  it.each(SCHEMA_FILES.map((f) => [f.file, f] as const))(
+    '%s is current: `npm run schema` would write the same text',
+    (file, { build }) => {
+      expect(readFileSync(new URL(`../../rules/schema/${file}`, import.meta.url), 'utf8')).toBe(schemaText(build()));
+    },
+  );
 
   it('include report.schema.json', () => {
     expect(committedText).toBe(schemaText(reportJsonSchema()));
@@ -35,7 +42,7 @@ describe('the committed JSON Schema files', () => {
 
 describe('report.schema.json', () => {
   it('identifies itself', () => {
-    expect([committed['$id'], committed['$schema']]).toEqual([
+    expect([committed.$id, committed.$schema]).toEqual([
       'urn:railcross:schema:report:1',
       'https://json-schema.org/draft/2020-12/schema',
     ]);
@@ -53,12 +60,13 @@ describe('the example report validates', () => {
   });
 
   it('and is not vacuous: the example has findings and crossings', () => {
-    expect((report['findings'] as unknown[]).length).toBeGreaterThan(0);
-    expect((report['crossings'] as unknown[]).length).toBeGreaterThan(0);
+    expect((report.findings as unknown[]).length).toBeGreaterThan(0);
+    expect((report.crossings as unknown[]).length).toBeGreaterThan(0);
   });
 });
 
-type Mutation = (r: Record<string, any>) => void; // eslint-disable-line @typescript-eslint/no-explicit-any
+// biome-ignore lint/suspicious/noExplicitAny: mutations reach into any part of a report on purpose
+type Mutation = (r: Record<string, any>) => void;
 
 describe('both schemas refuse what report-format.md does not allow', () => {
   const cases: [string, Mutation][] = [

@@ -5,7 +5,18 @@
  * IEC 60617 and IEEE Std 315, from memory).
  */
 import { describe, expect, it } from 'vitest';
-import { crossIndex, hopPolyline, hopsOf, HOP, junctionsOf, markRoutes, MAX_HOPS, pathPoints, svgPath, type Route } from '../../rules/routing/index.ts';
+import {
+  crossIndex,
+  hopPolyline,
+  hopsOf,
+  HOP,
+  junctionsOf,
+  markRoutes,
+  MAX_HOPS,
+  pathPoints,
+  svgPath,
+  type Route,
+} from '../../rules/routing/index.ts';
 
 const route = (id: string, net: string, ...xy: number[]): Route => {
   const points = [];
@@ -15,9 +26,21 @@ const route = (id: string, net: string, ...xy: number[]): Route => {
 
 describe('junctions', () => {
   it.each([
-    ['a T: a second wire of the net leaves the first one\'s run', [route('a', 'N', 0, 0, 100, 0), route('b', 'N', 50, 0, 50, 40)], [{ x: 50, y: 0 }]],
-    ['a wire that follows another and parts from it', [route('a', 'N', 0, 0, 100, 0), route('b', 'N', 0, 0, 60, 0, 60, 30)], [{ x: 60, y: 0 }]],
-    ['a cross of four runs of one net', [route('a', 'N', 0, 0, 100, 0), route('b', 'N', 50, -20, 50, 0, 50, 20)], [{ x: 50, y: 0 }]],
+    [
+      "a T: a second wire of the net leaves the first one's run",
+      [route('a', 'N', 0, 0, 100, 0), route('b', 'N', 50, 0, 50, 40)],
+      [{ x: 50, y: 0 }],
+    ],
+    [
+      'a wire that follows another and parts from it',
+      [route('a', 'N', 0, 0, 100, 0), route('b', 'N', 0, 0, 60, 0, 60, 30)],
+      [{ x: 60, y: 0 }],
+    ],
+    [
+      'a cross of four runs of one net',
+      [route('a', 'N', 0, 0, 100, 0), route('b', 'N', 50, -20, 50, 0, 50, 20)],
+      [{ x: 50, y: 0 }],
+    ],
   ])('%s: one dot', (_name, routes, dots) => {
     expect(junctionsOf(routes).map((j) => j.at)).toEqual(dots);
   });
@@ -37,7 +60,7 @@ describe('hops', () => {
     ['a vertical run of another net across it', route('v', 'B', 40, 0, 40, 30), [40]],
     ['a vertical run of the same net (a join, not a hop)', route('v', 'A', 40, 0, 40, 30), []],
     ['a run of another net that ends on its line (a T, not a crossing)', route('v', 'B', 40, 0, 40, 10), []],
-    ['a crossing too near the run\'s end for an arc', route('v', 'B', HOP, 0, HOP, 30), []],
+    ["a crossing too near the run's end for an arc", route('v', 'B', HOP, 0, HOP, 30), []],
   ])('%s', (_name, other, xs) => {
     expect(hopsOf(across, crossIndex([across, other])).map((h) => h.x)).toEqual(xs);
   });

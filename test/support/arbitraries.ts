@@ -7,7 +7,18 @@
  */
 import fc from 'fast-check';
 import { RULE_IDS } from '../../rules/model/ruleIds.ts';
-import type { Design, Net, Params, Part, Pin, Profile, Pull, Rail, Scenario, Settings } from '../../rules/model/schema.ts';
+import type {
+  Design,
+  Net,
+  Params,
+  Part,
+  Pin,
+  Profile,
+  Pull,
+  Rail,
+  Scenario,
+  Settings,
+} from '../../rules/model/schema.ts';
 import type { Level } from '../../rules/levels/level.ts';
 import { BUILTIN_PROFILE_IDS } from '../../rules/model/profileIds.ts';
 
@@ -33,7 +44,18 @@ const decimal = fc.integer({ min: 0, max: 999 }).map((n) => String(n / 100));
 /** A Level: volts, a common form, or a generated linear expression of VDD. */
 export const levelArb: fc.Arbitrary<Level> = fc.oneof(
   voltsArb,
-  fc.constantFrom('0.7*VDD', '0.3*VDD', 'VDD-0.45', '0.65*VDD+0.1', '2.0', '0.8', 'VDD', ' 0.5 * VDD - 0.1 ', '-0.2+VDD*0.9', '.5*VDD'),
+  fc.constantFrom(
+    '0.7*VDD',
+    '0.3*VDD',
+    'VDD-0.45',
+    '0.65*VDD+0.1',
+    '2.0',
+    '0.8',
+    'VDD',
+    ' 0.5 * VDD - 0.1 ',
+    '-0.2+VDD*0.9',
+    '.5*VDD',
+  ),
   fc.tuple(decimal, fc.constantFrom('+', '-'), decimal).map(([b, op, a]) => `${b}*VDD${op}${a}`),
 );
 
@@ -99,15 +121,23 @@ const railArb = (base: (typeof RAIL_POOL)[number]): fc.Arbitrary<Rail> =>
 
 // Pulls exact as typed, with a tolerance, or with a datasheet's min/max around their value.
 const pullArb = (railIds: readonly string[]): fc.Arbitrary<Pull> =>
-  fc.record({
-    to: fc.constantFrom('ground', ...railIds),
-    ohms: fc.double({ min: 1, max: 1e7, noNaN: true }),
-    spread: fc.option(fc.tuple(fc.constantFrom('tolerance', 'ends'), fc.double({ min: 0, max: 0.5, noNaN: true })), { nil: undefined }),
-  }, { noNullPrototype: true }).map(({ to, ohms, spread }): Pull => {
-    if (spread === undefined) return { to, ohms };
-    const [kind, t] = spread;
-    return kind === 'tolerance' ? { to, ohms, tolerance: t } : { to, ohms, min: ohms * (1 - t), max: ohms * (1 + t) };
-  });
+  fc
+    .record(
+      {
+        to: fc.constantFrom('ground', ...railIds),
+        ohms: fc.double({ min: 1, max: 1e7, noNaN: true }),
+        spread: fc.option(
+          fc.tuple(fc.constantFrom('tolerance', 'ends'), fc.double({ min: 0, max: 0.5, noNaN: true })),
+          { nil: undefined },
+        ),
+      },
+      { noNullPrototype: true },
+    )
+    .map(({ to, ohms, spread }): Pull => {
+      if (spread === undefined) return { to, ohms };
+      const [kind, t] = spread;
+      return kind === 'tolerance' ? { to, ohms, tolerance: t } : { to, ohms, min: ohms * (1 - t), max: ohms * (1 + t) };
+    });
 
 const PIN_IDS = ['A', 'B', 'Y', 'EN', 'TX', 'RX', 'SDA', 'SCL', 'IRQ_N', 'D0', 'D-1'];
 const PART_IDS = ['U1', 'U2', 'U3', 'U4', 'U5', 'J1', 'J2', 'Q7'];
@@ -134,7 +164,13 @@ const pinArb = (id: string, railIds: readonly string[], profileIds: readonly str
       }),
   );
 
-const partArb = (id: string, pinIds: readonly string[], railIds: readonly string[], profileIds: readonly string[], maxPins: number): fc.Arbitrary<Part> =>
+const partArb = (
+  id: string,
+  pinIds: readonly string[],
+  railIds: readonly string[],
+  profileIds: readonly string[],
+  maxPins: number,
+): fc.Arbitrary<Part> =>
   fc
     .tuple(
       fc.record(
@@ -143,7 +179,10 @@ const partArb = (id: string, pinIds: readonly string[], railIds: readonly string
           rail: fc.constantFrom(...railIds),
           profile: fc.constantFrom(...profileIds),
           params: paramsArb,
-          position: fc.record({ x: fc.double({ noNaN: true, noDefaultInfinity: true }), y: fc.integer() }, { noNullPrototype: true }),
+          position: fc.record(
+            { x: fc.double({ noNaN: true, noDefaultInfinity: true }), y: fc.integer() },
+            { noNullPrototype: true },
+          ),
         },
         { requiredKeys: ['label', 'rail', 'profile'], noNullPrototype: true },
       ),
@@ -164,15 +203,28 @@ const partArb = (id: string, pinIds: readonly string[], railIds: readonly string
       }),
     );
 
-const SOURCES = ['invented for a test', 'measured on the bench', 'from memory', 'datasheet of the chosen part, table 4'];
+const SOURCES = [
+  'invented for a test',
+  'measured on the bench',
+  'from memory',
+  'datasheet of the chosen part, table 4',
+];
 
 const profileArb = (id: string): fc.Arbitrary<Profile> =>
-  fc.record({ id: fc.constant(id), label: textArb, source: fc.constantFrom(...SOURCES), params: paramsArb }, { noNullPrototype: true });
+  fc.record(
+    { id: fc.constant(id), label: textArb, source: fc.constantFrom(...SOURCES), params: paramsArb },
+    { noNullPrototype: true },
+  );
 
 const scenarioArb = (id: string, railIds: readonly string[]): fc.Arbitrary<Scenario> =>
   fc.record({ id: fc.constant(id), label: textArb, off: fc.subarray([...railIds]) }, { noNullPrototype: true });
 
-const netArb = (id: string, pins: readonly string[], railIds: readonly string[], scenarioIds: readonly string[]): fc.Arbitrary<Net> =>
+const netArb = (
+  id: string,
+  pins: readonly string[],
+  railIds: readonly string[],
+  scenarioIds: readonly string[],
+): fc.Arbitrary<Net> =>
   fc
     .record(
       {
@@ -223,7 +275,10 @@ export function designArb(options: DesignArbOptions = {}): fc.Arbitrary<Design> 
     const headArb = fc.record(
       {
         title: textArb,
-        settings: fc.record({ minMargin: fc.double({ min: 0, max: 1, noNaN: true }), defaultWiringCapacitance: magnitude(50e-12) }, optional) as fc.Arbitrary<Settings>,
+        settings: fc.record(
+          { minMargin: fc.double({ min: 0, max: 1, noNaN: true }), defaultWiringCapacitance: magnitude(50e-12) },
+          optional,
+        ) as fc.Arbitrary<Settings>,
         scenarios: fc
           .uniqueArray(fc.constantFrom('standby', 'sleep', 'sensors-off', 'v1.boot'), { maxLength: 3 })
           .chain((ids) => fc.tuple(...ids.map((id) => scenarioArb(id, railIds)))),
@@ -249,17 +304,19 @@ export function designArb(options: DesignArbOptions = {}): fc.Arbitrary<Design> 
           )
           .map(([picked, sizes]) => chunk(picked, sizes));
         return groupsArb.chain((groups) =>
-          fc.tuple(...groups.map((pins, i) => netArb(`N${i + 1}`, pins, railIds, scenarioIds))).map((nets): Design => ({
-            format: 'railcross.design',
-            version: 2,
-            title: head.title,
-            ...(head.settings === undefined ? {} : { settings: head.settings }),
-            rails,
-            ...(head.scenarios === undefined ? {} : { scenarios: head.scenarios }),
-            ...(head.profiles === undefined ? {} : { profiles: head.profiles }),
-            parts,
-            nets,
-          })),
+          fc.tuple(...groups.map((pins, i) => netArb(`N${i + 1}`, pins, railIds, scenarioIds))).map(
+            (nets): Design => ({
+              format: 'railcross.design',
+              version: 2,
+              title: head.title,
+              ...(head.settings === undefined ? {} : { settings: head.settings }),
+              rails,
+              ...(head.scenarios === undefined ? {} : { scenarios: head.scenarios }),
+              ...(head.profiles === undefined ? {} : { profiles: head.profiles }),
+              parts,
+              nets,
+            }),
+          ),
         );
       });
     });

@@ -75,7 +75,11 @@ export function link(
 }
 
 /** A resistor part; `tie` sends an end to a rail or ground instead of a net. */
-export function resistor(id: string, ohms: number, extra: Partial<Extract<Discrete, { kind: 'resistor' }>> = {}): Discrete {
+export function resistor(
+  id: string,
+  ohms: number,
+  extra: Partial<Extract<Discrete, { kind: 'resistor' }>> = {},
+): Discrete {
   return { id, kind: 'resistor', ohms, ...extra };
 }
 

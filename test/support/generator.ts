@@ -52,7 +52,13 @@ function makePin(r: Rand, id: string): Pin {
 
 const DEFAULT_GRID = { columns: 50, dx: 220, dy: 180 };
 
-function makePart(r: Rand, n: number, rails: readonly Rail[], faultRate: number, grid: { columns: number; dx: number; dy: number } = DEFAULT_GRID): Part {
+function makePart(
+  r: Rand,
+  n: number,
+  rails: readonly Rail[],
+  faultRate: number,
+  grid: { columns: number; dx: number; dy: number } = DEFAULT_GRID,
+): Part {
   const rail = pick(r, rails).id;
   const families = r() < faultRate ? ODD_FAMILIES : (FAMILIES[rail] ?? ODD_FAMILIES);
   const pins: Pin[] = [];
@@ -112,12 +118,24 @@ function makeDiscrete(r: Rand, a: Net, b: Net, rails: readonly Rail[], id: strin
   }
   if (roll < 0.65) {
     a.pins.push(`${id}.1`);
-    return { id, kind: 'resistor', ohms: pick(r, [1000, 4700, 10000]), tolerance, tie: { '2': r() < 0.3 ? 'ground' : pick(r, rails).id } };
+    return {
+      id,
+      kind: 'resistor',
+      ohms: pick(r, [1000, 4700, 10000]),
+      tolerance,
+      tie: { '2': r() < 0.3 ? 'ground' : pick(r, rails).id },
+    };
   }
   if (roll < 0.85) {
     a.pins.push(`${id}.S`);
     b.pins.push(`${id}.D`);
-    return { id, kind: 'fet-shifter', gate: pick(r, rails).id, vgsThMax: pick(r, [0.9, 1.5]), rdsOnMax: pick(r, [2, 10]) };
+    return {
+      id,
+      kind: 'fet-shifter',
+      gate: pick(r, rails).id,
+      vgsThMax: pick(r, [0.9, 1.5]),
+      rdsOnMax: pick(r, [2, 10]),
+    };
   }
   a.pins.push(`${id}.K`);
   b.pins.push(`${id}.A`);
@@ -130,14 +148,21 @@ function sprinkleParams(r: Rand, parts: Part[]): void {
     for (const pin of part.pins) {
       if (pin.role !== 'input' || r() >= 0.1) continue;
       const roll = r();
-      pin.params = roll < 0.4 ? { injectionMax: pick(r, [1e-3, 5e-3]) }
-        : roll < 0.7 ? { viMin: -0.5 }
-          : { busHold: { hold: 75e-6, overdrive: 500e-6 } };
+      pin.params =
+        roll < 0.4
+          ? { injectionMax: pick(r, [1e-3, 5e-3]) }
+          : roll < 0.7
+            ? { viMin: -0.5 }
+            : { busHold: { hold: 75e-6, overdrive: 500e-6 } };
     }
   }
 }
 
-interface Dealt { key: string; pin: Pin; rail: string }
+interface Dealt {
+  key: string;
+  pin: Pin;
+  rail: string;
+}
 
 /** Nets of 2–6 pins dealt at random. */
 function randomNets(r: Rand, pool: Dealt[]): Net[] {
@@ -201,7 +226,8 @@ export function generateDesign(seed: number, options: GeneratorOptions): Design 
 
   const pool: Dealt[] = [];
   for (const p of parts) {
-    for (const pin of p.pins) if (r() >= loneRate) pool.push({ key: `${p.id}.${pin.id}`, pin, rail: pin.rail ?? p.rail });
+    for (const pin of p.pins)
+      if (r() >= loneRate) pool.push({ key: `${p.id}.${pin.id}`, pin, rail: pin.rail ?? p.rail });
   }
   let nets: Net[];
   if (options.cluster === undefined) {
@@ -249,9 +275,21 @@ export function generateDesign(seed: number, options: GeneratorOptions): Design 
 }
 
 export const EDIT_KINDS = [
-  'add-part', 'remove-part', 'connect', 'disconnect', 'move-part', 'rail-voltage',
-  'switch-profile', 'add-waiver', 'rail-off', 'net-pull', 'pin-state',
-  'add-discrete', 'remove-discrete', 'discrete-value', 'move-discrete',
+  'add-part',
+  'remove-part',
+  'connect',
+  'disconnect',
+  'move-part',
+  'rail-voltage',
+  'switch-profile',
+  'add-waiver',
+  'rail-off',
+  'net-pull',
+  'pin-state',
+  'add-discrete',
+  'remove-discrete',
+  'discrete-value',
+  'move-discrete',
 ] as const;
 export type EditKind = (typeof EDIT_KINDS)[number];
 
@@ -286,7 +324,8 @@ export function applyEdit(design: Design, kind: EditKind, r: Rand): Design {
         const k = Math.floor(r() * d.parts.length);
         const part = d.parts[k]!;
         for (const pin of part.pins) unplug(d, `${part.id}.${pin.id}`);
-        for (const sc of d.scenarios ?? []) if (sc.pins !== undefined) sc.pins = sc.pins.filter((p) => !p.pin.startsWith(`${part.id}.`));
+        for (const sc of d.scenarios ?? [])
+          if (sc.pins !== undefined) sc.pins = sc.pins.filter((p) => !p.pin.startsWith(`${part.id}.`));
         d.parts.splice(k, 1);
         return;
       }
@@ -326,7 +365,14 @@ export function applyEdit(design: Design, kind: EditKind, r: Rand): Design {
       case 'add-waiver': {
         if (d.nets.length === 0) return;
         const net = pick(r, d.nets);
-        const rule = pick(r, ['level-high', 'level-low', 'overvoltage', 'contention', 'floating-input', 'rail-crossing'] as const);
+        const rule = pick(r, [
+          'level-high',
+          'level-low',
+          'overvoltage',
+          'contention',
+          'floating-input',
+          'rail-crossing',
+        ] as const);
         net.waivers = [...(net.waivers ?? []), { rule, note: 'reviewed' }];
         return;
       }
@@ -389,7 +435,10 @@ export function applyEdit(design: Design, kind: EditKind, r: Rand): Design {
         const pins = scenario.pins ?? [];
         scenario.pins = pins.some((p) => p.pin === key)
           ? pins.filter((p) => p.pin !== key)
-          : [...pins, r() < 0.5 ? { pin: key, role: 'input' } : { pin: key, role: 'input', pull: { to: 'ground', ohms: 40e3 } }];
+          : [
+              ...pins,
+              r() < 0.5 ? { pin: key, role: 'input' } : { pin: key, role: 'input', pull: { to: 'ground', ohms: 40e3 } },
+            ];
         return;
       }
       case 'net-pull': {

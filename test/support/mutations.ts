@@ -9,8 +9,32 @@ import fc from 'fast-check';
 
 /** Numbers JSON can carry that lie at or beyond every limit of the format. */
 export const EXTREME_NUMBERS: readonly number[] = [
-  1e307, -1e307, 3.6e307, Number.MAX_VALUE, -Number.MAX_VALUE, 5e-324, -5e-324, 1e-300, -0, 0, 1, -1,
-  0.999999, 1e12, 1.0000001e12, 1e-3, 0.99e-3, 1e4, 10001, -10001, 1e3, 1001, 1e-15, 1e-16, 1e-18, 2,
+  1e307,
+  -1e307,
+  3.6e307,
+  Number.MAX_VALUE,
+  -Number.MAX_VALUE,
+  5e-324,
+  -5e-324,
+  1e-300,
+  -0,
+  0,
+  1,
+  -1,
+  0.999999,
+  1e12,
+  1.0000001e12,
+  1e-3,
+  0.99e-3,
+  1e4,
+  10001,
+  -10001,
+  1e3,
+  1001,
+  1e-15,
+  1e-16,
+  1e-18,
+  2,
 ];
 
 /** What JSON cannot carry: for designs that bypass the reader. */
@@ -22,7 +46,16 @@ const hostileStringArb: fc.Arbitrary<string> = fc.oneof(
   fc.integer({ min: 1, max: 5_000 }).map((n) => '`'.repeat(n)),
   fc.integer({ min: 1, max: 5_000 }).map((n) => 'a`'.repeat(n)),
   fc.integer({ min: 1, max: 10_000 }).map((n) => 'W'.repeat(n)),
-  fc.constantFrom('\u05e9\u05e2\u05d5\u05df', 'e\u0301\u0302\u0303', '|*_<b>&amp;', 'url(x)', '', '#abc', 'red', 'VDD*1000000'),
+  fc.constantFrom(
+    '\u05e9\u05e2\u05d5\u05df',
+    'e\u0301\u0302\u0303',
+    '|*_<b>&amp;',
+    'url(x)',
+    '',
+    '#abc',
+    'red',
+    'VDD*1000000',
+  ),
   fc.string({ unit: 'binary', maxLength: 40 }),
 );
 
@@ -39,11 +72,15 @@ function paths(doc: unknown, want: (v: unknown) => boolean, keysOnly = false): P
   const walk = (v: unknown, at: Path) => {
     if (!keysOnly && want(v)) out.push(at);
     if (v === null || typeof v !== 'object') return;
-    if (Array.isArray(v)) v.forEach((x, k) => walk(x, [...at, k]));
-    else for (const [k, x] of Object.entries(v)) {
-      if (keysOnly) out.push([...at, k]);
-      walk(x, [...at, k]);
-    }
+    if (Array.isArray(v))
+      v.forEach((x, k) => {
+        walk(x, [...at, k]);
+      });
+    else
+      for (const [k, x] of Object.entries(v)) {
+        if (keysOnly) out.push([...at, k]);
+        walk(x, [...at, k]);
+      }
   };
   walk(doc, []);
   return out;
@@ -73,7 +110,9 @@ export function mutate<T>(doc: T, mutations: readonly Mutation[], spare: (path: 
       if (keys.length > 0) remove(copy, keys[m.pick % keys.length]!);
       continue;
     }
-    const targets = paths(copy, (v) => typeof v === (m.kind === 'number' ? 'number' : 'string')).filter((p) => !spare(p));
+    const targets = paths(copy, (v) => typeof v === (m.kind === 'number' ? 'number' : 'string')).filter(
+      (p) => !spare(p),
+    );
     if (targets.length > 0) set(copy, targets[m.pick % targets.length]!, m.value);
   }
   return copy;
@@ -85,7 +124,10 @@ const pick = fc.nat({ max: 1_000_000 });
 export function mutationsArb(numbers: readonly number[] = EXTREME_NUMBERS): fc.Arbitrary<Mutation[]> {
   return fc.array(
     fc.oneof(
-      { weight: 5, arbitrary: fc.record({ kind: fc.constant('number' as const), pick, value: fc.constantFrom(...numbers) }) },
+      {
+        weight: 5,
+        arbitrary: fc.record({ kind: fc.constant('number' as const), pick, value: fc.constantFrom(...numbers) }),
+      },
       { weight: 2, arbitrary: fc.record({ kind: fc.constant('string' as const), pick, value: hostileStringArb }) },
       { weight: 1, arbitrary: fc.record({ kind: fc.constant('delete' as const), pick }) },
     ),
@@ -95,5 +137,8 @@ export function mutationsArb(numbers: readonly number[] = EXTREME_NUMBERS): fc.A
 
 /** Number mutations only (for designs that skip the reader, whose shape must stay whole). */
 export function numberMutationsArb(numbers: readonly number[]): fc.Arbitrary<Mutation[]> {
-  return fc.array(fc.record({ kind: fc.constant('number' as const), pick, value: fc.constantFrom(...numbers) }), { minLength: 1, maxLength: 4 });
+  return fc.array(fc.record({ kind: fc.constant('number' as const), pick, value: fc.constantFrom(...numbers) }), {
+    minLength: 1,
+    maxLength: 4,
+  });
 }

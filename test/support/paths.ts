@@ -4,7 +4,21 @@
  * case whose source the test that uses it names.
  */
 import type { Design, Profile } from '../../rules/model/schema.ts';
-import { bidir, design, input, net, output, part, rail, rail1v8, rail3v3, rail5v0, resistor, fetShifter, diodeShifter } from './build.ts';
+import {
+  bidir,
+  design,
+  input,
+  net,
+  output,
+  part,
+  rail,
+  rail1v8,
+  rail3v3,
+  rail5v0,
+  resistor,
+  fetShifter,
+  diodeShifter,
+} from './build.ts';
 
 /**
  * A 5 V CMOS driver guaranteeing VDD − 0.1 V and 0.1 V up to 2 mA (the form of the JESD7 / 74HC
@@ -12,7 +26,9 @@ import { bidir, design, input, net, output, part, rail, rail1v8, rail3v3, rail5v
  * only thing between the driver and the receiver.
  */
 export const cmos5: Profile = {
-  id: 'cmos5', label: '5 V CMOS driver', source: 'JESD7 light-load row, from memory',
+  id: 'cmos5',
+  label: '5 V CMOS driver',
+  source: 'JESD7 light-load row, from memory',
   params: { voh: [{ v: 'VDD-0.1', i: 2e-3 }], vol: [{ v: 0.1, i: 2e-3 }] },
 };
 
@@ -33,7 +49,10 @@ export function divider(extra: { r1?: number; r2?: number; tolerance?: number; m
     nets: [
       net('TX5', ['U1.Y', 'R1.1']),
       // 5 pF of wiring and the input's 5 pF (lvcmos33): the issue's 10 pF on the divided net.
-      net('RX33', ['R1.2', 'R2.1', 'U2.A'], { wiringCapacitance: 5e-12, ...(extra.maxRiseTime === undefined ? {} : { maxRiseTime: extra.maxRiseTime }) }),
+      net('RX33', ['R1.2', 'R2.1', 'U2.A'], {
+        wiringCapacitance: 5e-12,
+        ...(extra.maxRiseTime === undefined ? {} : { maxRiseTime: extra.maxRiseTime }),
+      }),
     ],
   });
 }
@@ -42,24 +61,43 @@ export function divider(extra: { r1?: number; r2?: number; tolerance?: number; m
  * The issue's series resistor: a 5 V 74HC output through 1 kΩ ±5 % into a clamped 3.3 V LVCMOS
  * input (viMax VDD + 0.5 V), whose injection limit and rail's minimum load a case may state.
  */
-export function seriesClamp(extra: { ohms?: number; injectionMax?: number; minLoad?: number; inputs?: number } = {}): Design {
+export function seriesClamp(
+  extra: { ohms?: number; injectionMax?: number; minLoad?: number; inputs?: number } = {},
+): Design {
   const n = extra.inputs ?? 1;
   const inputs = Array.from({ length: n }, (_, k) => `A${k + 1}`);
   return design({
     rails: [rail5v0, { ...rail3v3, ...(extra.minLoad === undefined ? {} : { minLoad: extra.minLoad }) }],
     parts: [
-      part('U1', '5v0', '74hc', inputs.map((a, k) => output(`Y${k + 1}`))),
-      part('U2', '3v3', 'lvcmos33', inputs.map((a) => input(a, extra.injectionMax === undefined ? {} : { params: { injectionMax: extra.injectionMax } }))),
+      part(
+        'U1',
+        '5v0',
+        '74hc',
+        inputs.map((_a, k) => output(`Y${k + 1}`)),
+      ),
+      part(
+        'U2',
+        '3v3',
+        'lvcmos33',
+        inputs.map((a) =>
+          input(a, extra.injectionMax === undefined ? {} : { params: { injectionMax: extra.injectionMax } }),
+        ),
+      ),
     ],
     discretes: inputs.map((_, k) => resistor(`R${k + 1}`, extra.ohms ?? 1000)),
-    nets: inputs.flatMap((a, k) => [net(`TX${k + 1}`, [`U1.Y${k + 1}`, `R${k + 1}.1`]), net(`RX${k + 1}`, [`R${k + 1}.2`, `U2.${a}`])]),
+    nets: inputs.flatMap((a, k) => [
+      net(`TX${k + 1}`, [`U1.Y${k + 1}`, `R${k + 1}.1`]),
+      net(`RX${k + 1}`, [`R${k + 1}.2`, `U2.${a}`]),
+    ]),
   });
 }
 
 /** Two-wire bus pins with a stated VOL at a rated sink current (invented, in the I2C-bus specification's form: VOL 0.4 V at 3 mA). */
 function busPins(id: string, rated: number): Profile {
   return {
-    id, label: `bus pin ${id}`, source: 'I2C-bus specification form (0.3/0.7 VDD, VOL 0.4 V at the rated IOL); rating invented',
+    id,
+    label: `bus pin ${id}`,
+    source: 'I2C-bus specification form (0.3/0.7 VDD, VOL 0.4 V at the rated IOL); rating invented',
     params: { vih: '0.7*VDD', vil: '0.3*VDD', vol: [{ v: 0.4, i: rated }], viMax: 'VDD+0.5' },
   };
 }
@@ -68,16 +106,26 @@ function busPins(id: string, rated: number): Profile {
  * The issue's 3.3 V controller and 1.8 V two-wire sensor joined by a bidirectional N-MOSFET
  * shifter (source on the 1.8 V side, gate on 1.8 V): a pull-up on each side as resistor parts.
  */
-export function fetBus(extra: {
-  vgsThMax?: number; rdsOnMax?: number; lowPull?: number; highPull?: number | null; tolerance?: number;
-  sensorRated?: number; gate?: string; highRail?: string;
-} = {}): Design {
+export function fetBus(
+  extra: {
+    vgsThMax?: number;
+    rdsOnMax?: number;
+    lowPull?: number;
+    highPull?: number | null;
+    tolerance?: number;
+    sensorRated?: number;
+    gate?: string;
+    highRail?: string;
+  } = {},
+): Design {
   const tol = extra.tolerance ?? 0.01;
   const highRail = extra.highRail ?? '3v3';
   const discretes = [
     fetShifter('Q1', extra.gate ?? '1v8', extra.vgsThMax ?? 1.0, extra.rdsOnMax ?? 6),
     resistor('RL', extra.lowPull ?? 4700, { tolerance: tol, tie: { '2': '1v8' } }),
-    ...(extra.highPull === null ? [] : [resistor('RH', extra.highPull ?? 4700, { tolerance: tol, tie: { '2': highRail } })]),
+    ...(extra.highPull === null
+      ? []
+      : [resistor('RH', extra.highPull ?? 4700, { tolerance: tol, tie: { '2': highRail } })]),
   ];
   return design({
     rails: [rail5v0, rail3v3, rail1v8],
@@ -98,14 +146,26 @@ export function fetBus(extra: {
  * A Schottky diode shifter: a 3.3 V 74LVC output (cathode side) into a 5 V input pulled up to
  * 5 V on the anode side.
  */
-export function diodeLink(extra: { vfMax?: number; leakageMax?: number; pull?: number; vih?: number; vil?: number } = {}): Design {
+export function diodeLink(
+  extra: { vfMax?: number; leakageMax?: number; pull?: number; vih?: number; vil?: number } = {},
+): Design {
   return design({
     rails: [rail5v0, rail3v3],
     parts: [
       part('U1', '3v3', '74lvc', [output('Y')]),
-      part('U2', '5v0', '74hct', [input('A', { params: { ...(extra.vih === undefined ? {} : { vih: extra.vih }), ...(extra.vil === undefined ? {} : { vil: extra.vil }) } })]),
+      part('U2', '5v0', '74hct', [
+        input('A', {
+          params: {
+            ...(extra.vih === undefined ? {} : { vih: extra.vih }),
+            ...(extra.vil === undefined ? {} : { vil: extra.vil }),
+          },
+        }),
+      ]),
     ],
-    discretes: [diodeShifter('D1', extra.vfMax ?? 0.45, extra.leakageMax ?? 5e-6), resistor('RP', extra.pull ?? 10e3, { tolerance: 0.01, tie: { '2': '5v0' } })],
+    discretes: [
+      diodeShifter('D1', extra.vfMax ?? 0.45, extra.leakageMax ?? 5e-6),
+      resistor('RP', extra.pull ?? 10e3, { tolerance: 0.01, tie: { '2': '5v0' } }),
+    ],
     nets: [net('TX', ['U1.Y', 'D1.K']), net('RX', ['D1.A', 'RP.1', 'U2.A'])],
   });
 }

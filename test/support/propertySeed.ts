@@ -8,6 +8,6 @@ import fc from 'fast-check';
 
 const FIXED_SEED = 20_261_202;
 
-const replay = process.env['RAILCROSS_SEED'];
+const replay = process.env.RAILCROSS_SEED;
 if (replay !== undefined && replay !== '') fc.configureGlobal({ seed: Number(replay) });
-else if (!process.env['RAILCROSS_FUZZ']) fc.configureGlobal({ seed: FIXED_SEED });
+else if (!process.env.RAILCROSS_FUZZ) fc.configureGlobal({ seed: FIXED_SEED });

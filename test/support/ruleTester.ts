@@ -47,7 +47,9 @@ function expectValue(actual: unknown, expected: unknown, path: string): void {
   } else if (Array.isArray(expected)) {
     expect(Array.isArray(actual), path).toBe(true);
     expect((actual as unknown[]).length, path).toBe(expected.length);
-    expected.forEach((e, k) => expectValue((actual as unknown[])[k], e, `${path}[${k}]`));
+    expected.forEach((e, k) => {
+      expectValue((actual as unknown[])[k], e, `${path}[${k}]`);
+    });
   } else {
     expect(actual, path).toEqual(expected);
   }
@@ -65,11 +67,16 @@ export function freezeView<T>(value: T, seen = new Set<unknown>()): T {
   if (value === null || typeof value !== 'object' || seen.has(value)) return value;
   seen.add(value);
   if (value instanceof Map) {
-    for (const [k, v] of value) { freezeView(k, seen); freezeView(v, seen); }
-    if (!Object.isFrozen(value)) for (const m of ['set', 'delete', 'clear']) Object.defineProperty(value, m, { value: refuse('Map') });
+    for (const [k, v] of value) {
+      freezeView(k, seen);
+      freezeView(v, seen);
+    }
+    if (!Object.isFrozen(value))
+      for (const m of ['set', 'delete', 'clear']) Object.defineProperty(value, m, { value: refuse('Map') });
   } else if (value instanceof Set) {
     for (const v of value) freezeView(v, seen);
-    if (!Object.isFrozen(value)) for (const m of ['add', 'delete', 'clear']) Object.defineProperty(value, m, { value: refuse('Set') });
+    if (!Object.isFrozen(value))
+      for (const m of ['add', 'delete', 'clear']) Object.defineProperty(value, m, { value: refuse('Set') });
   }
   Object.freeze(value);
   for (const key of Object.keys(value)) freezeView((value as Record<string, unknown>)[key], seen);
@@ -82,17 +89,27 @@ export function freezeView<T>(value: T, seen = new Set<unknown>()): T {
  */
 export function guarded(rule: AnyRule): AnyRule {
   const declared = new Set(declaredSeverities(rule.meta.severity));
-  const guard = <D extends { severity: Severity }>(report: (d: D) => void) => (draft: D) => {
-    if (!declared.has(draft.severity)) {
-      throw new Error(`${rule.id} reported severity '${draft.severity}', which its meta does not declare (${[...declared].join(', ')})`);
-    }
-    report(draft);
-  };
+  const guard =
+    <D extends { severity: Severity }>(report: (d: D) => void) =>
+    (draft: D) => {
+      if (!declared.has(draft.severity)) {
+        throw new Error(
+          `${rule.id} reported severity '${draft.severity}', which its meta does not declare (${[...declared].join(', ')})`,
+        );
+      }
+      report(draft);
+    };
   return {
     ...rule,
-    ...(rule.checkNet === undefined ? {} : { checkNet: (view, report) => rule.checkNet!(freezeView(view), guard(report)) }),
-    ...(rule.checkPin === undefined ? {} : { checkPin: (view, report) => rule.checkPin!(freezeView(view), guard(report)) }),
-    ...(rule.checkRail === undefined ? {} : { checkRail: (view, report) => rule.checkRail!(freezeView(view), guard(report)) }),
+    ...(rule.checkNet === undefined
+      ? {}
+      : { checkNet: (view, report) => rule.checkNet!(freezeView(view), guard(report)) }),
+    ...(rule.checkPin === undefined
+      ? {}
+      : { checkPin: (view, report) => rule.checkPin!(freezeView(view), guard(report)) }),
+    ...(rule.checkRail === undefined
+      ? {}
+      : { checkRail: (view, report) => rule.checkRail!(freezeView(view), guard(report)) }),
   };
 }
 
@@ -109,7 +126,8 @@ export function ruleTester(rule: AnyRule, table: { valid: ValidCase[]; invalid: 
       expect(new Set(names).size, `duplicate case names in ${names.join(' | ')}`).toBe(names.length);
       for (const c of table.invalid) expect(c.findings.length, `${c.name} expects no finding`).toBeGreaterThan(0);
       const used = new Set(table.invalid.flatMap((c) => c.findings.map((f) => f.messageId)));
-      for (const id of Object.keys(rule.meta.messages)) expect(used.has(id), `message ${id} is used by no case`).toBe(true);
+      for (const id of Object.keys(rule.meta.messages))
+        expect(used.has(id), `message ${id} is used by no case`).toBe(true);
     });
 
     for (const c of table.valid) {
@@ -140,7 +158,8 @@ export function ruleTester(rule: AnyRule, table: { valid: ValidCase[]; invalid: 
           if (e.id !== undefined) expect(f.id).toBe(e.id);
           if (e.pins !== undefined) expect(f.pins).toEqual(e.pins);
           if (e.waived !== undefined) expect(f.waived).toBe(e.waived);
-          for (const [key, v] of Object.entries(e.values ?? {})) expectValue((f.values as Readonly<Record<string, unknown>>)[key], v, `${f.id} values.${key}`);
+          for (const [key, v] of Object.entries(e.values ?? {}))
+            expectValue((f.values as Readonly<Record<string, unknown>>)[key], v, `${f.id} values.${key}`);
         });
       });
     }

@@ -15,7 +15,7 @@ const ENTITIES: Record<string, string> = { amp: '&', lt: '<', gt: '>', quot: '"'
 
 function decode(raw: string, where: number): string {
   if (/[<]/.test(raw)) throw new Error(`"<" in character data at ${where}`);
-  return raw.replace(/&([^;]*);|&/g, (m, ref: string | undefined) => {
+  return raw.replace(/&([^;]*);|&/g, (_m, ref: string | undefined) => {
     if (ref === undefined) throw new Error(`a bare "&" at ${where}`);
     if (ref in ENTITIES) return ENTITIES[ref]!;
     const num = /^#(x[0-9A-Fa-f]+|\d+)$/.exec(ref);

@@ -54,45 +54,85 @@ export function ChipDialog({ partId }: { partId: string | null }) {
   const { part } = draft;
   const partOverrides = Object.keys(part.params ?? {}).length;
   return (
-    <Modal title={draft.orig === null ? 'New chip' : `Edit ${draft.orig}`} onClose={close} wide testId="chip-dialog"
+    <Modal
+      title={draft.orig === null ? 'New chip' : `Edit ${draft.orig}`}
+      onClose={close}
+      wide
+      testId="chip-dialog"
       footer={
         <>
-          {error !== null && <span className="rc-field-error rc-modal-error" role="alert" data-testid="chip-error">{error}</span>}
-          <button type="button" onClick={close}>Cancel</button>
-          <button type="button" className="rc-primary" data-testid="chip-commit" onClick={commit}>{draft.orig === null ? 'Place chip' : 'Apply changes'}</button>
+          {error !== null && (
+            <span className="rc-field-error rc-modal-error" role="alert" data-testid="chip-error">
+              {error}
+            </span>
+          )}
+          <button type="button" onClick={close}>
+            Cancel
+          </button>
+          <button type="button" className="rc-primary" data-testid="chip-commit" onClick={commit}>
+            {draft.orig === null ? 'Place chip' : 'Apply changes'}
+          </button>
         </>
-      }>
+      }
+    >
       <div className="rc-chip-form">
         <label className="rc-field">
           <span className="rc-field-label">Designator</span>
-          <input type="text" value={part.id} data-testid="chip-id" spellCheck={false} data-autofocus
-            onChange={(e) => change(setPartFields(draft, { id: e.target.value.trim() }))} />
+          <input
+            type="text"
+            value={part.id}
+            data-testid="chip-id"
+            spellCheck={false}
+            data-autofocus
+            onChange={(e) => change(setPartFields(draft, { id: e.target.value.trim() }))}
+          />
         </label>
         <label className="rc-field rc-chip-form-label">
           <span className="rc-field-label">Label</span>
-          <input type="text" value={part.label} data-testid="chip-label" onChange={(e) => change(setPartFields(draft, { label: e.target.value }))} />
+          <input
+            type="text"
+            value={part.label}
+            data-testid="chip-label"
+            onChange={(e) => change(setPartFields(draft, { label: e.target.value }))}
+          />
         </label>
         <label className="rc-field">
           <span className="rc-field-label">Rail</span>
-          <select value={part.rail} data-testid="chip-rail" onChange={(e) => change(setPartFields(draft, { rail: e.target.value }))}>
-            {design.rails.map((r) => <option key={r.id} value={r.id}>{r.label} ({r.nominal} V)</option>)}
+          <select
+            value={part.rail}
+            data-testid="chip-rail"
+            onChange={(e) => change(setPartFields(draft, { rail: e.target.value }))}
+          >
+            {design.rails.map((r) => (
+              <option key={r.id} value={r.id}>
+                {r.label} ({r.nominal} V)
+              </option>
+            ))}
           </select>
         </label>
         <label className="rc-field">
           <span className="rc-field-label">Profile</span>
-          <select value={part.profile} data-testid="chip-profile" onChange={(e) => change(setPartFields(draft, { profile: e.target.value }))}>
+          <select
+            value={part.profile}
+            data-testid="chip-profile"
+            onChange={(e) => change(setPartFields(draft, { profile: e.target.value }))}
+          >
             <ProfileOptions local={design.profiles} />
           </select>
         </label>
       </div>
       <details className="rc-fold">
         <summary>Overrides for every pin{partOverrides > 0 ? ` (${partOverrides})` : ''}</summary>
-        <ParamEditor params={part.params} label="Overrides for every pin of the part" testId="part-param"
+        <ParamEditor
+          params={part.params}
+          label="Overrides for every pin of the part"
+          testId="part-param"
           fallback={(key) => profileParam(design, part.profile, key)}
           onChange={(key, value) => {
             change(setPartFields(draft, { params: withParam(part.params, key, value) }));
             return { ok: true, changed: true };
-          }} />
+          }}
+        />
       </details>
       <h3 className="rc-modal-sub">Pins</h3>
       <PinTable design={design} draft={draft} onChange={change} />

@@ -31,7 +31,15 @@ export function newChipDraft(design: Design): ChipDraft {
   const rail = design.rails.find((r) => Math.abs(r.nominal - 3.3) < 0.05) ?? design.rails[0];
   return {
     orig: null,
-    part: { id: freshId('U', design.parts.map((p) => p.id)), label: 'Custom chip', rail: rail?.id ?? '', profile: 'mcu-gpio' },
+    part: {
+      id: freshId(
+        'U',
+        design.parts.map((p) => p.id),
+      ),
+      label: 'Custom chip',
+      rail: rail?.id ?? '',
+      profile: 'mcu-gpio',
+    },
     rows: [],
     origPins: [],
   };
@@ -49,7 +57,10 @@ export function draftOf(part: Part): ChipDraft {
 
 /** A new row: the next free `P<k>`, an input. */
 export function addRow(draft: ChipDraft): ChipDraft {
-  const id = freshId('P', draft.rows.map((r) => r.pin.id));
+  const id = freshId(
+    'P',
+    draft.rows.map((r) => r.pin.id),
+  );
   return { ...draft, rows: [...draft.rows, { key: nextKey(), orig: null, pin: { id, role: 'input' } }] };
 }
 

@@ -7,7 +7,12 @@ import type { Fallback } from '../ParamEditor.tsx';
  * What a pin gets for `key` without its own override: the part's override, else its profile's
  * value (design-format.md, "Params": each key from the first that has it).
  */
-export function inheritedParam(design: Design, partParams: Params | undefined, profileId: string, key: ParamKey): Fallback | undefined {
+export function inheritedParam(
+  design: Design,
+  partParams: Params | undefined,
+  profileId: string,
+  key: ParamKey,
+): Fallback | undefined {
   const fromPart = partParams?.[key];
   if (fromPart !== undefined) return { text: formatParam(key, fromPart), from: 'part override' };
   return profileParam(design, profileId, key);

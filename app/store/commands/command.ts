@@ -13,7 +13,7 @@ export interface Refusal {
  */
 export interface Command {
   readonly name: string;
-  readonly recipe: (draft: Draft<Design>) => Refusal | Design | void;
+  readonly recipe: (draft: Draft<Design>) => Refusal | Design | undefined;
 }
 
 export function refuse(reason: string): Refusal {

@@ -22,7 +22,9 @@ function mergeInto(design: Draft<Design>, keep: Draft<Net>, gone: Net, pair: Pai
   if (keep.wiringCapacitance !== undefined || gone.wiringCapacitance !== undefined) {
     const dflt = design.settings?.defaultWiringCapacitance ?? DEFAULT_WIRING_CAPACITANCE;
     // Twelve digits: a sum of two picofarad values keeps no binary dust (5.5000000000000004e-11).
-    keep.wiringCapacitance = Number(((keep.wiringCapacitance ?? dflt) + (gone.wiringCapacitance ?? dflt)).toPrecision(12));
+    keep.wiringCapacitance = Number(
+      ((keep.wiringCapacitance ?? dflt) + (gone.wiringCapacitance ?? dflt)).toPrecision(12),
+    );
   }
   if (gone.maxRiseTime !== undefined) {
     keep.maxRiseTime = Math.min(keep.maxRiseTime ?? Infinity, gone.maxRiseTime);
@@ -60,7 +62,10 @@ export function connectPins(from: string, to: string): Command {
         net.route = [...wires.map(([a, b]): [string, string] => [a, b]), [from, to]];
         net.pins.push(netA === undefined ? from : to);
       } else {
-        const id = freshId('N', design.nets.map((n) => n.id));
+        const id = freshId(
+          'N',
+          design.nets.map((n) => n.id),
+        );
         design.nets.push({ id, pins: [from, to], route: [[from, to]] });
       }
     },

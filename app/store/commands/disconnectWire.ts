@@ -41,11 +41,15 @@ export function regroupNet(design: Draft<Design>, net: Draft<Net>, wires: readon
 }
 
 /** Remove the wire between `a` and `b` from whatever net holds it, splitting that net if it falls apart. */
-export function removeWire(design: Draft<Design>, a: string, b: string): Refusal | void {
+export function removeWire(design: Draft<Design>, a: string, b: string): Refusal | undefined {
   const net = design.nets.find((n) => n.pins.includes(a) && n.pins.includes(b));
   const wires = net === undefined ? [] : netWires(net);
   if (net === undefined || !wires.some((w) => samePair(w, a, b))) return refuse(`No wire joins ${a} and ${b}.`);
-  regroupNet(design, net, wires.filter((w) => !samePair(w, a, b)));
+  regroupNet(
+    design,
+    net,
+    wires.filter((w) => !samePair(w, a, b)),
+  );
 }
 
 /** Delete the wire between pins `a` and `b` (see `regroupNet` for how a net splits). */

@@ -7,7 +7,11 @@ import { DISCRETE_PINS, type Design, type Discrete, type DiscreteKind } from '..
 import { freshId, refuse, type Command } from './command.ts';
 
 /** The designator prefix of each kind (common practice: R for resistors, Q for transistors, D for diodes). */
-export const DISCRETE_PREFIX: Readonly<Record<DiscreteKind, string>> = { resistor: 'R', 'fet-shifter': 'Q', 'diode-shifter': 'D' };
+export const DISCRETE_PREFIX: Readonly<Record<DiscreteKind, string>> = {
+  resistor: 'R',
+  'fet-shifter': 'Q',
+  'diode-shifter': 'D',
+};
 
 /** Every id of parts and discretes: they share one namespace. */
 export function takenIds(design: Design): string[] {
@@ -23,7 +27,15 @@ export function newDiscrete(design: Design, kind: DiscreteKind, at: { x: number;
   const id = freshId(DISCRETE_PREFIX[kind], takenIds(design));
   const position = { x: Math.round(at.x), y: Math.round(at.y) };
   if (kind === 'resistor') return { id, kind, ohms: 10e3, tolerance: 0.05, position };
-  if (kind === 'fet-shifter') return { id, kind, gate: gate ?? design.rails[design.rails.length - 1]?.id ?? '', vgsThMax: 1, rdsOnMax: 5, position };
+  if (kind === 'fet-shifter')
+    return {
+      id,
+      kind,
+      gate: gate ?? design.rails[design.rails.length - 1]?.id ?? '',
+      vgsThMax: 1,
+      rdsOnMax: 5,
+      position,
+    };
   return { id, kind, vfMax: 0.45, leakageMax: 5e-6, position };
 }
 
@@ -33,7 +45,8 @@ export function addDiscrete(part: Discrete): Command {
     name: `Add ${part.id}`,
     recipe(design) {
       if (takenIds(design as Design).includes(part.id)) return refuse(`${part.id} is already taken.`);
-      if (part.kind === 'fet-shifter' && !design.rails.some((r) => r.id === part.gate)) return refuse(`There is no rail ${part.gate} for ${part.id}'s gate.`);
+      if (part.kind === 'fet-shifter' && !design.rails.some((r) => r.id === part.gate))
+        return refuse(`There is no rail ${part.gate} for ${part.id}'s gate.`);
       design.discretes = [...(design.discretes ?? []), structuredClone(part)];
     },
   };
@@ -60,7 +73,8 @@ export function setDiscrete(id: string, change: Readonly<Record<string, unknown>
           for (const end of Object.keys(v as object)) {
             const key = `${id}.${end}`;
             const on = design.nets.find((n) => n.pins.includes(key));
-            if (on !== undefined) return refuse(`${key} is on net ${on.label ?? on.id}: take it off the net before tying it to a rail.`);
+            if (on !== undefined)
+              return refuse(`${key} is on net ${on.label ?? on.id}: take it off the net before tying it to a rail.`);
           }
         }
         if (v === undefined) delete rec[k];

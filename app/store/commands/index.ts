@@ -7,9 +7,23 @@ export { editPart, renamePart, partProblem, designatorProblem } from './partEdit
 export { insertParts } from './paste.ts';
 export { setNetLabel, setNetPull, setNetWiringCapacitance, setNetMaxRiseTime } from './nets.ts';
 export { addWaiver, removeWaiverFor, removeWaiverAt, covers, type WaiverTarget } from './waivers.ts';
-export { addProfile, setProfileLabel, setProfileSource, setProfileParam, deleteProfile, localProfileId } from './profiles.ts';
+export {
+  addProfile,
+  setProfileLabel,
+  setProfileSource,
+  setProfileParam,
+  deleteProfile,
+  localProfileId,
+} from './profiles.ts';
 export { addRail, setRailLabel, setRailVoltage, setRailTolerance, setRailColour, deleteRail } from './rails.ts';
-export { addPowerState, setPowerStateLabel, setRailOff, deletePowerState, setResetState, RESET_STATE_ID } from './powerStates.ts';
+export {
+  addPowerState,
+  setPowerStateLabel,
+  setRailOff,
+  deletePowerState,
+  setResetState,
+  RESET_STATE_ID,
+} from './powerStates.ts';
 export { setTitle, replaceDesign, deleteSelection, type Deletion } from './design.ts';
 export { netWires, wireGroups, wireId, parseWireId, type Pair } from './netGraph.ts';
 export { addDiscrete, setDiscrete, removeDiscrete, newDiscrete, takenIds, DISCRETE_PREFIX } from './discretes.ts';

@@ -27,8 +27,10 @@ export function setNetPull(id: string, pull: Pull | null): Command {
         delete net.pull;
         return;
       }
-      if (!(pull.ohms >= MIN_OHMS && pull.ohms <= MAX_OHMS)) return refuse('A pull resistor needs a positive value in Ω, from 1 mΩ to 1 TΩ.');
-      if (pull.to !== GROUND && !design.rails.some((r) => r.id === pull.to)) return refuse(`There is no rail ${pull.to}.`);
+      if (!(pull.ohms >= MIN_OHMS && pull.ohms <= MAX_OHMS))
+        return refuse('A pull resistor needs a positive value in Ω, from 1 mΩ to 1 TΩ.');
+      if (pull.to !== GROUND && !design.rails.some((r) => r.id === pull.to))
+        return refuse(`There is no rail ${pull.to}.`);
       net.pull = { to: pull.to, ohms: pull.ohms };
     },
   };
@@ -45,7 +47,8 @@ export function setNetWiringCapacitance(id: string, farads: number | undefined):
         delete net.wiringCapacitance;
         return;
       }
-      if (!(farads === 0 || (farads >= MIN_FARADS && farads <= MAX_FARADS))) return refuse('A capacitance is 0 F or more: 0, or from 1 aF to 1 F.');
+      if (!(farads === 0 || (farads >= MIN_FARADS && farads <= MAX_FARADS)))
+        return refuse('A capacitance is 0 F or more: 0, or from 1 aF to 1 F.');
       net.wiringCapacitance = farads;
     },
   };
@@ -62,7 +65,8 @@ export function setNetMaxRiseTime(id: string, seconds: number | undefined): Comm
         delete net.maxRiseTime;
         return;
       }
-      if (!(seconds >= MIN_SECONDS && seconds <= MAX_SECONDS)) return refuse('A rise-time limit is a time above 0 s, from 1 fs to 1 s.');
+      if (!(seconds >= MIN_SECONDS && seconds <= MAX_SECONDS))
+        return refuse('A rise-time limit is a time above 0 s, from 1 fs to 1 s.');
       net.maxRiseTime = seconds;
     },
   };

@@ -35,7 +35,8 @@ export function partProblem(design: Design, part: Part, replacing?: string): str
   const bad = designatorProblem(part.id);
   if (bad !== undefined) return bad;
   if (part.id !== replacing && design.parts.some((p) => p.id === part.id)) return `There is already a part ${part.id}.`;
-  if ((design.discretes ?? []).some((d) => d.id === part.id)) return `There is already a part ${part.id} (between chips).`;
+  if ((design.discretes ?? []).some((d) => d.id === part.id))
+    return `There is already a part ${part.id} (between chips).`;
   const read = PartSchema.safeParse(part);
   if (!read.success) {
     const issue = read.error.issues[0]!;
@@ -51,8 +52,10 @@ export function partProblem(design: Design, part: Part, replacing?: string): str
   if (resolveProfile(design, part.profile) === undefined) return `There is no profile ${part.profile}.`;
   for (const pin of part.pins) {
     if (pin.rail !== undefined && !hasRail(pin.rail)) return `Pin ${pin.id}: there is no rail ${pin.rail}.`;
-    if (pin.profile !== undefined && resolveProfile(design, pin.profile) === undefined) return `Pin ${pin.id}: there is no profile ${pin.profile}.`;
-    if (pin.pull !== undefined && pin.pull.to !== GROUND && !hasRail(pin.pull.to)) return `Pin ${pin.id}: there is no rail ${pin.pull.to} for its pull.`;
+    if (pin.profile !== undefined && resolveProfile(design, pin.profile) === undefined)
+      return `Pin ${pin.id}: there is no profile ${pin.profile}.`;
+    if (pin.pull !== undefined && pin.pull.to !== GROUND && !hasRail(pin.pull.to))
+      return `Pin ${pin.id}: there is no rail ${pin.pull.to} for its pull.`;
   }
   return undefined;
 }
@@ -62,7 +65,12 @@ export function partProblem(design: Design, part: Part, replacing?: string): str
  * their net where `pinMap` gives null. A net left with one pin goes; a net losing pins keeps
  * the wires that remain (as deleting a part does).
  */
-export function rewirePart(design: Draft<Design>, from: string, to: string, pinMap: (pin: string) => string | null): void {
+export function rewirePart(
+  design: Draft<Design>,
+  from: string,
+  to: string,
+  pinMap: (pin: string) => string | null,
+): void {
   const prefix = `${from}.`;
   const mapKey = (key: string): string | null => {
     if (!key.startsWith(prefix)) return key;
@@ -92,7 +100,9 @@ export function rewirePart(design: Draft<Design>, from: string, to: string, pinM
     const lost = pins.length < net.pins.length;
     // A net drawn by its pin order needs no route while it loses nothing; otherwise keep the wires that remain.
     const source = lost || net.route !== undefined ? netWires(net) : [];
-    const route = source.map(([a, b]) => [mapKey(a), mapKey(b)]).filter((w): w is [string, string] => w[0] !== null && w[1] !== null);
+    const route = source
+      .map(([a, b]) => [mapKey(a), mapKey(b)])
+      .filter((w): w is [string, string] => w[0] !== null && w[1] !== null);
     net.pins = pins;
     if (route.length > 0) net.route = route;
     else delete net.route;
@@ -148,7 +158,8 @@ export function renamePart(id: string, to: string): Command {
       if (target === id) return;
       const bad = designatorProblem(target);
       if (bad !== undefined) return refuse(bad);
-      if (design.parts.some((p) => p.id === target) || (design.discretes ?? []).some((d) => d.id === target)) return refuse(`There is already a part ${target}.`);
+      if (design.parts.some((p) => p.id === target) || (design.discretes ?? []).some((d) => d.id === target))
+        return refuse(`There is already a part ${target}.`);
       part.id = target;
       rewirePart(design, id, target, (pin) => pin);
     },

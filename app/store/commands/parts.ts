@@ -109,7 +109,7 @@ export function removeParts(design: Draft<Design>, ids: readonly string[]): void
   const isGone = (key: string) => gone.has(partOfPin(key));
   design.parts = design.parts.filter((p) => !gone.has(p.id));
   // Parts between chips go the same way.
-  if (design.discretes !== undefined && design.discretes.some((d) => gone.has(d.id))) {
+  if (design.discretes?.some((d) => gone.has(d.id))) {
     design.discretes = design.discretes.filter((d) => !gone.has(d.id));
     if (design.discretes.length === 0) delete design.discretes;
   }

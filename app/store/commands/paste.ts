@@ -8,7 +8,11 @@ import { partProblem } from './partEdit.ts';
  * Add parts and the nets among them in one step (a paste, a duplicate). Refused whole when a
  * part names a rail or profile this design lacks (a clip taken from another design).
  */
-export function insertParts(parts: readonly Part[], nets: readonly Net[], name = `Paste ${parts.length} ${parts.length === 1 ? 'part' : 'parts'}`): Command {
+export function insertParts(
+  parts: readonly Part[],
+  nets: readonly Net[],
+  name = `Paste ${parts.length} ${parts.length === 1 ? 'part' : 'parts'}`,
+): Command {
   return {
     name,
     recipe(design) {
@@ -27,7 +31,8 @@ export function insertParts(parts: readonly Part[], nets: readonly Net[], name =
         if (net.pull !== undefined && net.pull.to !== GROUND && !design.rails.some((r) => r.id === net.pull!.to)) {
           return refuse(`There is no rail ${net.pull.to} for the pull of a pasted net.`);
         }
-        if (!net.pins.every((k) => ids.has(partOfPin(k)))) return refuse(`Net ${net.id} names a pin outside the pasted parts.`);
+        if (!net.pins.every((k) => ids.has(partOfPin(k))))
+          return refuse(`Net ${net.id} names a pin outside the pasted parts.`);
       }
       design.parts.push(...structuredClone(parts as Part[]));
       design.nets.push(...structuredClone(nets as Net[]));

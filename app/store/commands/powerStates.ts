@@ -85,7 +85,9 @@ export function setResetState(partId: string): Command {
         state = design.scenarios[design.scenarios.length - 1]!;
       }
       const set = new Set((state.pins ?? []).map((p) => p.pin));
-      const added: PinState[] = outputs.filter((p) => !set.has(`${partId}.${p.id}`)).map((p) => ({ pin: `${partId}.${p.id}`, role: 'input' }));
+      const added: PinState[] = outputs
+        .filter((p) => !set.has(`${partId}.${p.id}`))
+        .map((p) => ({ pin: `${partId}.${p.id}`, role: 'input' }));
       if (added.length === 0) return;
       state.pins = [...(state.pins ?? []), ...added];
     },

@@ -31,9 +31,15 @@ export function addProfile(base: string, id: string, label: string, source: stri
     recipe(design) {
       const from = builtinProfile(base);
       if (from === undefined) return refuse(`There is no built-in profile ${base}.`);
-      if (source.trim() === '') return refuse('Say where the numbers come from (a datasheet table, a measurement, "from memory").');
+      if (source.trim() === '')
+        return refuse('Say where the numbers come from (a datasheet table, a measurement, "from memory").');
       if (design.profiles?.some((p) => p.id === id)) return refuse(`This design already has a profile ${id}.`);
-      const profile: Profile = { id, label: label.trim() === '' ? `${from.label} (this design)` : label.trim(), source: source.trim(), params: structuredClone(from.params) };
+      const profile: Profile = {
+        id,
+        label: label.trim() === '' ? `${from.label} (this design)` : label.trim(),
+        source: source.trim(),
+        params: structuredClone(from.params),
+      };
       const read = ProfileSchema.safeParse(profile);
       if (!read.success) return refuse(`${read.error.issues[0]!.path.join(' ')}: ${read.error.issues[0]!.message}.`);
       if (design.profiles === undefined) design.profiles = [profile];

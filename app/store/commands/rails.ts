@@ -5,7 +5,6 @@ import { isRailColour } from '../../../rules/model/colour.ts';
 import { MAX_VOLTS } from '../../../rules/model/limits.ts';
 import { freshId, refuse, type Command } from './command.ts';
 
-
 function findRail(design: Draft<Design>, id: string) {
   return design.rails.find((r) => r.id === id);
 }
@@ -15,7 +14,13 @@ export function addRail(id: string = '', colour = '#5b6b7f'): Command {
   return {
     name: 'Add a rail',
     recipe(design) {
-      const railId = id === '' ? freshId('rail', design.rails.map((r) => r.id)) : id;
+      const railId =
+        id === ''
+          ? freshId(
+              'rail',
+              design.rails.map((r) => r.id),
+            )
+          : id;
       if (design.rails.some((r) => r.id === railId)) return refuse(`There is already a rail ${railId}.`);
       const rail: Rail = { id: railId, label: 'New rail', nominal: 3.3, tolerance: 0.05, colour };
       design.rails.push(rail);
@@ -41,10 +46,13 @@ export function setRailVoltage(id: string, nominal: number): Command {
     recipe(design) {
       const rail = findRail(design, id);
       if (rail === undefined) return refuse(`There is no rail ${id}.`);
-      if (!(nominal > 0 && nominal <= MAX_VOLTS)) return refuse('A rail needs a nominal voltage above 0 V, up to 10 kV.');
+      if (!(nominal > 0 && nominal <= MAX_VOLTS))
+        return refuse('A rail needs a nominal voltage above 0 V, up to 10 kV.');
       const range = railRange({ ...rail, nominal });
       if (range.min > range.max) {
-        return refuse(`With an explicit ${rail.min !== undefined ? 'minimum' : 'maximum'} of ${rail.min ?? rail.max} V, rail ${id} cannot be ${nominal} V.`);
+        return refuse(
+          `With an explicit ${rail.min !== undefined ? 'minimum' : 'maximum'} of ${rail.min ?? rail.max} V, rail ${id} cannot be ${nominal} V.`,
+        );
       }
       rail.nominal = nominal;
     },
@@ -74,7 +82,8 @@ export function setRailColour(id: string, colour: string): Command {
     recipe(design) {
       const rail = findRail(design, id);
       if (rail === undefined) return refuse(`There is no rail ${id}.`);
-      if (!isRailColour(colour)) return refuse(`"${colour}" is not a colour such as #2f8f6b or #2f8 (only hexadecimal colours are allowed).`);
+      if (!isRailColour(colour))
+        return refuse(`"${colour}" is not a colour such as #2f8f6b or #2f8 (only hexadecimal colours are allowed).`);
       rail.colour = colour;
     },
   };
@@ -89,7 +98,11 @@ export function deleteRail(id: string): Command {
       const user =
         design.parts.find((p) => p.rail === id || p.pins.some((q) => q.rail === id || q.pull?.to === id))?.id ??
         design.nets.find((n) => n.pull?.to === id)?.id ??
-        design.discretes?.find((d) => (d.kind === 'fet-shifter' && d.gate === id) || (d.kind === 'resistor' && (d.tie?.['1'] === id || d.tie?.['2'] === id)))?.id ??
+        design.discretes?.find(
+          (d) =>
+            (d.kind === 'fet-shifter' && d.gate === id) ||
+            (d.kind === 'resistor' && (d.tie?.['1'] === id || d.tie?.['2'] === id)),
+        )?.id ??
         design.scenarios?.find((s) => s.pins?.some((p) => p.pull?.to === id))?.id;
       if (user !== undefined) return refuse(`Rail ${id} is still used by ${user}.`);
       design.rails = design.rails.filter((r) => r.id !== id);

@@ -32,7 +32,8 @@ export function tidyPositions(design: Design): Map<string, { x: number; y: numbe
       if (role === 'output' || role === 'bidir') drivers.add(part);
       if (role === 'input' || role === 'bidir') receivers.add(part);
     }
-    for (const d of drivers) for (const r of receivers) if (d !== r && !g.hasEdge(d, r) && !g.hasEdge(r, d)) g.setEdge(d, r);
+    for (const d of drivers)
+      for (const r of receivers) if (d !== r && !g.hasEdge(d, r) && !g.hasEdge(r, d)) g.setEdge(d, r);
   }
   layout(g);
   const out = new Map<string, { x: number; y: number }>();

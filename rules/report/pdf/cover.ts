@@ -11,8 +11,24 @@ import { designLine, settingsLine } from '../describe.ts';
 import { verdict } from '../verdict.ts';
 import { contentWidth, displayTime, type Ctx } from './page.ts';
 import {
-  ACCENT, ERROR_SOFT, HAIRLINE, INK, INK_2, MARGIN, MUTED, PANEL, RAIL_DEFAULT, SIZE, STATUS_COLOUR, WHITE,
-  drawSeverityMark, parseHexColour, setDraw, setFill, setText, type Rgb,
+  ACCENT,
+  ERROR_SOFT,
+  HAIRLINE,
+  INK,
+  INK_2,
+  MARGIN,
+  MUTED,
+  PANEL,
+  RAIL_DEFAULT,
+  SIZE,
+  STATUS_COLOUR,
+  WHITE,
+  drawSeverityMark,
+  parseHexColour,
+  setDraw,
+  setFill,
+  setText,
+  type Rgb,
 } from './theme.ts';
 
 const rgb = (c: Rgb): [number, number, number] => [c[0], c[1], c[2]];
@@ -41,7 +57,10 @@ export function drawCover(ctx: Ctx, report: Report, design: Design, sectionCount
 
   doc.setFontSize(SIZE.title);
   setText(doc, INK);
-  const title = doc.splitTextToSize(report.design.title === '' ? '(untitled design)' : report.design.title, width) as string[];
+  const title = doc.splitTextToSize(
+    report.design.title === '' ? '(untitled design)' : report.design.title,
+    width,
+  ) as string[];
   for (const line of title.slice(0, 4)) {
     doc.text(line, left, y);
     y += SIZE.title * 1.2;
@@ -62,7 +81,9 @@ export function drawCover(ctx: Ctx, report: Report, design: Design, sectionCount
     doc.setFont(ctx.fonts.sans, 'normal');
     setText(doc, INK);
     const lines = doc.splitTextToSize(value, width - 70) as string[];
-    lines.forEach((line, k) => doc.text(line, left + 70, y + k * 12));
+    lines.forEach((line, k) => {
+      doc.text(line, left + 70, y + k * 12);
+    });
     y += 12 * lines.length + 3;
   }
   y += 10;
@@ -85,7 +106,9 @@ export function drawCover(ctx: Ctx, report: Report, design: Design, sectionCount
     doc.line(left + 17, y + 18, left + 24, y + 9);
   }
   setText(doc, v.fails ? STATUS_COLOUR.error : PASS);
-  lines.forEach((line, k) => doc.text(line, left + 32, y + 8 + 10 + k * 14));
+  lines.forEach((line, k) => {
+    doc.text(line, left + 32, y + 8 + 10 + k * 14);
+  });
   y += boxH + 14;
 
   // Counts of unwaived findings, and the waived ones.
@@ -121,7 +144,13 @@ export function drawCover(ctx: Ctx, report: Report, design: Design, sectionCount
   const contentsY = y;
   y += 18 + sectionCount * 14 + 14;
 
-  const table = (title: string, head: string[], body: string[][], widths: Record<number, number | 'auto'>, swatches?: (Rgb | undefined)[]) => {
+  const table = (
+    title: string,
+    head: string[],
+    body: string[][],
+    widths: Record<number, number | 'auto'>,
+    swatches?: (Rgb | undefined)[],
+  ) => {
     doc.setFont(ctx.fonts.sans, 'bold');
     doc.setFontSize(SIZE.h2);
     setText(doc, INK);
@@ -132,11 +161,22 @@ export function drawCover(ctx: Ctx, report: Report, design: Design, sectionCount
       margin: { left, right: MARGIN.right, top: MARGIN.top, bottom: MARGIN.bottom },
       head: [head],
       body,
-      styles: { font: ctx.fonts.sans, fontSize: SIZE.table, textColor: rgb(INK), cellPadding: 3, lineColor: rgb(HAIRLINE), lineWidth: { bottom: 0.4 }, overflow: 'linebreak' },
+      styles: {
+        font: ctx.fonts.sans,
+        fontSize: SIZE.table,
+        textColor: rgb(INK),
+        cellPadding: 3,
+        lineColor: rgb(HAIRLINE),
+        lineWidth: { bottom: 0.4 },
+        overflow: 'linebreak',
+      },
       headStyles: { fontStyle: 'bold', fillColor: rgb(PANEL), lineColor: rgb(INK_2), lineWidth: { bottom: 0.7 } },
-      columnStyles: Object.fromEntries(Object.entries(widths).map(([k, w]) => [k, { cellWidth: w, ...(k === '0' ? { font: ctx.fonts.mono } : {}) }])),
+      columnStyles: Object.fromEntries(
+        Object.entries(widths).map(([k, w]) => [k, { cellWidth: w, ...(k === '0' ? { font: ctx.fonts.mono } : {}) }]),
+      ),
       didParseCell: (data) => {
-        if (swatches !== undefined && data.section === 'body' && data.column.index === 0) data.cell.styles.cellPadding = { top: 3, bottom: 3, left: 14, right: 3 };
+        if (swatches !== undefined && data.section === 'body' && data.column.index === 0)
+          data.cell.styles.cellPadding = { top: 3, bottom: 3, left: 14, right: 3 };
       },
       didDrawCell: (data) => {
         const colour = swatches?.[data.row.index];
@@ -160,7 +200,12 @@ export function drawCover(ctx: Ctx, report: Report, design: Design, sectionCount
       ['Id', 'Label', 'Nominal', 'Range checked'],
       design.rails.map((r) => {
         const range = railRange(r);
-        return [r.id, r.label, formatQuantity(r.nominal, 'V'), `${formatQuantity(range.min, 'V')} to ${formatQuantity(range.max, 'V')}`];
+        return [
+          r.id,
+          r.label,
+          formatQuantity(r.nominal, 'V'),
+          `${formatQuantity(range.min, 'V')} to ${formatQuantity(range.max, 'V')}`,
+        ];
       }),
       { 0: 90, 1: 'auto', 2: 60, 3: 110 },
       design.rails.map((r) => parseHexColour(r.colour) ?? RAIL_DEFAULT),

@@ -10,10 +10,35 @@ import { formatQuantity } from '../../levels/units.ts';
 import type { Report } from '../reportSchema.ts';
 import { pullLabel } from '../pullLabel.ts';
 import { addPage, contentWidth, fitText, pageHeight, sectionHeading, type Ctx } from './page.ts';
-import { CHIP, layoutDiagram, normalOf, type DiagramLayout, type PartBox, type PinPlace, type Point } from './diagramLayout.ts';
 import {
-  ERROR_SOFT, HAIRLINE, INK, INK_2, MARGIN, MUTED, PANEL, PAPER, RAIL_DEFAULT, SIZE, STATUS_COLOUR, WHITE,
-  drawSeverityMark, parseHexColour, setDraw, setFill, setText, type Rgb, type Status,
+  CHIP,
+  layoutDiagram,
+  normalOf,
+  type DiagramLayout,
+  type PartBox,
+  type PinPlace,
+  type Point,
+} from './diagramLayout.ts';
+import {
+  ERROR_SOFT,
+  HAIRLINE,
+  INK,
+  INK_2,
+  MARGIN,
+  MUTED,
+  PANEL,
+  PAPER,
+  RAIL_DEFAULT,
+  SIZE,
+  STATUS_COLOUR,
+  WHITE,
+  drawSeverityMark,
+  parseHexColour,
+  setDraw,
+  setFill,
+  setText,
+  type Rgb,
+  type Status,
 } from './theme.ts';
 
 const RANK: Readonly<Record<Status, number>> = { clean: 0, warning: 1, error: 2 };
@@ -44,7 +69,8 @@ const clamp = (v: number, lo: number, hi: number) => Math.min(hi, Math.max(lo, v
  */
 function pen(status: Status, s: number): { width: number; dash: number[]; casing: number } {
   if (status === 'error') return { width: clamp(1.9 * s, 0.2, 1.7), dash: [], casing: clamp(4.2 * s, 0.4, 3.6) };
-  if (status === 'warning') return { width: clamp(1.4 * s, 0.15, 1.3), dash: [clamp(6 * s, 0.6, 5), clamp(3.5 * s, 0.4, 3)], casing: 0 };
+  if (status === 'warning')
+    return { width: clamp(1.4 * s, 0.15, 1.3), dash: [clamp(6 * s, 0.6, 5), clamp(3.5 * s, 0.4, 3)], casing: 0 };
   return { width: clamp(0.9 * s, 0.1, 0.8), dash: [], casing: 0 };
 }
 
@@ -94,7 +120,10 @@ function drawPinMark(doc: jsPDF, v: View, place: PinPlace): void {
   const half = 3.2;
   const { x, y } = place.at;
   // Along the inward direction d = -n, across it t.
-  const at = (along: number, across: number) => ({ x: v.x(x - n.x * along + -n.y * across), y: v.y(y - n.y * along + n.x * across) });
+  const at = (along: number, across: number) => ({
+    x: v.x(x - n.x * along + -n.y * across),
+    y: v.y(y - n.y * along + n.x * across),
+  });
   let shape: { x: number; y: number }[];
   if (kind === 'output') shape = [at(0, 0), at(len, half), at(len, -half)];
   else if (kind === 'input') shape = [at(len, 0), at(0, half), at(0, -half)];
@@ -112,7 +141,14 @@ function railColour(rails: ReadonlyMap<string, Rail>, id: string): Rgb {
   return parseHexColour(rails.get(id)?.colour) ?? RAIL_DEFAULT;
 }
 
-function drawPinName(ctx: Ctx, v: View, box: PartBox, place: PinPlace, count: number, rails: ReadonlyMap<string, Rail>): void {
+function drawPinName(
+  ctx: Ctx,
+  v: View,
+  box: PartBox,
+  place: PinPlace,
+  count: number,
+  rails: ReadonlyMap<string, Rail>,
+): void {
   const { doc } = ctx;
   const size = 9 * v.s;
   doc.setFont(ctx.fonts.mono, 'normal');
@@ -190,7 +226,13 @@ function drawBox(ctx: Ctx, v: View, box: PartBox, rails: ReadonlyMap<string, Rai
   }
 }
 
-function drawNetLabels(ctx: Ctx, v: View, layout: DiagramLayout, status: ReadonlyMap<string, Status>, rails: readonly Rail[]): void {
+function drawNetLabels(
+  ctx: Ctx,
+  v: View,
+  layout: DiagramLayout,
+  status: ReadonlyMap<string, Status>,
+  rails: readonly Rail[],
+): void {
   const { doc } = ctx;
   const size = 8.5 * v.s;
   doc.setFont(ctx.fonts.mono, 'normal');
@@ -305,10 +347,15 @@ export interface DiagramOptions {
 }
 
 /** The largest scale at which the drawing fits the page in this orientation, and the area. */
-function fit(ctx: Ctx, layout: DiagramLayout, orientation: 'portrait' | 'landscape') {
+function fitOnPage(ctx: Ctx, layout: DiagramLayout, orientation: 'portrait' | 'landscape') {
   const [a, b] = PAPER[ctx.paper];
   const [w, h] = orientation === 'portrait' ? [a, b] : [b, a];
-  const area = { x: MARGIN.left, y: MARGIN.top + 44, w: w - MARGIN.left - MARGIN.right, h: h - MARGIN.top - 44 - MARGIN.bottom - LEGEND_HEIGHT - 6 };
+  const area = {
+    x: MARGIN.left,
+    y: MARGIN.top + 44,
+    w: w - MARGIN.left - MARGIN.right,
+    h: h - MARGIN.top - 44 - MARGIN.bottom - LEGEND_HEIGHT - 6,
+  };
   const bounds = layout.bounds;
   if (bounds === null) return { scale: 1, area };
   const scale = Math.min(0.85, area.w / (bounds.maxX - bounds.minX), area.h / (bounds.maxY - bounds.minY));
@@ -319,8 +366,8 @@ function fit(ctx: Ctx, layout: DiagramLayout, orientation: 'portrait' | 'landsca
 export function drawDiagram(ctx: Ctx, design: Design, report: Report, options: DiagramOptions): void {
   const { doc } = ctx;
   const layout = layoutDiagram(design);
-  const portrait = fit(ctx, layout, 'portrait');
-  const landscape = fit(ctx, layout, 'landscape');
+  const portrait = fitOnPage(ctx, layout, 'portrait');
+  const landscape = fitOnPage(ctx, layout, 'landscape');
   const orientation = landscape.scale > portrait.scale ? 'landscape' : 'portrait';
   const { scale, area } = orientation === 'landscape' ? landscape : portrait;
   let y = addPage(ctx, orientation);
@@ -349,5 +396,10 @@ export function drawDiagram(ctx: Ctx, design: Design, report: Report, options: D
     for (const box of layout.boxes) drawBox(ctx, view, box, rails, options.family);
     drawNetLabels(ctx, view, layout, status, design.rails);
   }
-  drawLegend(ctx, pageHeight(doc) - MARGIN.bottom - LEGEND_HEIGHT, design.rails, `${options.state.label} (${options.state.id})`);
+  drawLegend(
+    ctx,
+    pageHeight(doc) - MARGIN.bottom - LEGEND_HEIGHT,
+    design.rails,
+    `${options.state.label} (${options.state.id})`,
+  );
 }

@@ -10,13 +10,20 @@ import { hopPolyline, markRoutes } from '../../routing/marks.ts';
 import type { Box, WireSpec } from '../../routing/types.ts';
 import { routeOnce } from '../../routing/wireRouter.ts';
 
-export { BoxIndex, normalOf, routePoints, routeWire, spreadChannels, STUB, type Route } from '../../routing/channels.ts';
+export {
+  BoxIndex,
+  normalOf,
+  routePoints,
+  routeWire,
+  spreadChannels,
+  STUB,
+  type Route,
+} from '../../routing/channels.ts';
 
 export type Side = NonNullable<Pin['side']>;
 
 /** The editor's chip measures, canvas units. */
 export const CHIP = { width: 208, header: 44, row: 20, strip: 30, pad: 4 } as const;
-
 
 export type { Point } from '../../routing/types.ts';
 import type { Point } from '../../routing/types.ts';
@@ -53,7 +60,6 @@ export function sideOf(pin: Pin): Side {
   return pin.side ?? (pin.role === 'input' ? 'left' : 'right');
 }
 
-
 /**
  * How far from the origin the diagram places a part: a design may put one anywhere a finite
  * number allows, but a box at 1e308 would overflow its own far edge to Infinity, and with it the
@@ -79,10 +85,18 @@ export function partBox(part: Part): PartBox {
   const spread = (k: number, n: number) => x + (width * (k + 0.5)) / n;
   const pins: PinPlace[] = [];
   const place = (pin: Pin, side: Side, at: Point) => pins.push({ key: `${part.id}.${pin.id}`, pin, side, at });
-  by.left.forEach((pin, k) => place(pin, 'left', { x, y: rowY(k) }));
-  by.right.forEach((pin, k) => place(pin, 'right', { x: x + width, y: rowY(k) }));
-  by.top.forEach((pin, k) => place(pin, 'top', { x: spread(k, by.top.length), y }));
-  by.bottom.forEach((pin, k) => place(pin, 'bottom', { x: spread(k, by.bottom.length), y: y + height }));
+  by.left.forEach((pin, k) => {
+    place(pin, 'left', { x, y: rowY(k) });
+  });
+  by.right.forEach((pin, k) => {
+    place(pin, 'right', { x: x + width, y: rowY(k) });
+  });
+  by.top.forEach((pin, k) => {
+    place(pin, 'top', { x: spread(k, by.top.length), y });
+  });
+  by.bottom.forEach((pin, k) => {
+    place(pin, 'bottom', { x: spread(k, by.bottom.length), y: y + height });
+  });
   return { part, x, y, width, height, headerTop: y + topStrip, pins };
 }
 
@@ -149,7 +163,14 @@ const LABEL_ROOM = { x: 70, y: 24 };
 export function layoutDiagram(design: Design): DiagramLayout {
   const boxes = design.parts.map(partBox);
   // The editor's router (rules/routing): the same routes, runs of different nets kept apart.
-  const bodies: Box[] = boxes.map((b) => ({ id: b.part.id, x: b.x, y: b.y, width: b.width, height: b.height, pins: b.pins.map((p) => ({ key: p.key, side: p.side, x: p.at.x, y: p.at.y })) }));
+  const bodies: Box[] = boxes.map((b) => ({
+    id: b.part.id,
+    x: b.x,
+    y: b.y,
+    width: b.width,
+    height: b.height,
+    pins: b.pins.map((p) => ({ key: p.key, side: p.side, x: p.at.x, y: p.at.y })),
+  }));
   const anchors = new Map<string, PinPlace>();
   for (const box of boxes) for (const p of box.pins) anchors.set(p.key, p);
   const specs: WireSpec[] = [];
@@ -159,14 +180,21 @@ export function layoutDiagram(design: Design): DiagramLayout {
     netOf.set(net.id, net);
     const first = net.pins.map((k) => anchors.get(k)).find((p) => p !== undefined);
     if (first !== undefined) netLabels.push({ net, pin: first });
-    netWires(net).forEach(([a, b], k) => specs.push({ id: `${net.id}\u0000${k}`, net: net.id, a, b }));
+    netWires(net).forEach(([a, b], k) => {
+      specs.push({ id: `${net.id}\u0000${k}`, net: net.id, a, b });
+    });
   }
   const routes = routeOnce(bodies, specs);
   const marks = markRoutes(routes.values());
   const wires: Wire[] = [];
   for (const spec of specs) {
     const r = routes.get(spec.id);
-    if (r !== undefined) wires.push({ net: netOf.get(spec.net)!, points: r.points, drawn: hopPolyline(r.points, marks.hops.get(spec.id)) });
+    if (r !== undefined)
+      wires.push({
+        net: netOf.get(spec.net)!,
+        points: r.points,
+        drawn: hopPolyline(r.points, marks.hops.get(spec.id)),
+      });
   }
   const junctions = marks.junctions.map((j) => ({ net: netOf.get(j.net)!, at: j.at }));
   if (boxes.length === 0) return { boxes, wires, junctions, netLabels, bounds: null };

@@ -44,7 +44,7 @@ export function toBase64(bytes: Uint8Array): string {
   }
   if (k < n) {
     const v = (bytes[k]! << 16) | ((k + 1 < n ? bytes[k + 1]! : 0) << 8);
-    chunk.push(ALPHABET[v >>> 18]! + ALPHABET[(v >>> 12) & 63]! + (k + 1 < n ? ALPHABET[(v >>> 6) & 63]! : '=') + '=');
+    chunk.push(`${ALPHABET[v >>> 18]! + ALPHABET[(v >>> 12) & 63]! + (k + 1 < n ? ALPHABET[(v >>> 6) & 63]! : '=')}=`);
   }
   out.push(chunk.join(''));
   return out.join('');

@@ -12,8 +12,22 @@ import { marginVolts, onAxis, separate, STATUS_TEXT, volts } from '../ladderLayo
 import type { Crossing, Report } from '../reportSchema.ts';
 import { addPage, bottomLimit, contentWidth, fitText, paragraph, sectionHeading, type Ctx } from './page.ts';
 import {
-  ACCENT, ERROR_SOFT, HAIRLINE, INK, INK_2, MARGIN, MUTED, PANEL, STATUS_COLOUR, WARNING_SOFT, WHITE,
-  drawSeverityMark, setDraw, setFill, setText, type Rgb,
+  ACCENT,
+  ERROR_SOFT,
+  HAIRLINE,
+  INK,
+  INK_2,
+  MARGIN,
+  MUTED,
+  PANEL,
+  STATUS_COLOUR,
+  WARNING_SOFT,
+  WHITE,
+  drawSeverityMark,
+  setDraw,
+  setFill,
+  setText,
+  type Rgb,
 } from './theme.ts';
 
 /** At most this many ladders: a large design's section stays a few pages (the margin table lists every net). */
@@ -88,7 +102,10 @@ function drawLabels(ctx: Ctx, x: number, width: number, labels: readonly Label[]
   // Two-line labels need room for both lines: separate by the tallest block.
   const tallest = Math.max(1, ...labels.map((l) => l.lines.length));
   const gap = step * tallest + 1;
-  const ys = separate(labels.map((l) => Math.max(l.y, top)), gap);
+  const ys = separate(
+    labels.map((l) => Math.max(l.y, top)),
+    gap,
+  );
   // Pushed below the plot: move the lowest back up, each keeping its gap to the next.
   const last = bottom - step * (tallest - 1);
   let limit = last;
@@ -106,7 +123,8 @@ function drawLabels(ctx: Ctx, x: number, width: number, labels: readonly Label[]
   });
 }
 
-const marginStatus = (m: LadderMargin): 'clean' | 'warning' | 'error' => (m.status === 'pass' ? 'clean' : m.status === 'fail' ? 'error' : 'warning');
+const marginStatus = (m: LadderMargin): 'clean' | 'warning' | 'error' =>
+  m.status === 'pass' ? 'clean' : m.status === 'fail' ? 'error' : 'warning';
 
 function marginBar(doc: jsPDF, m: LadderMargin, x: number, yTop: number, yBottom: number): void {
   const h = Math.max(1, yBottom - yTop);
@@ -129,18 +147,37 @@ type YOf = (volts: number) => number;
 function driverLabels(d: LadderDriver, pre: string, yOf: YOf): Label[] {
   const out: Label[] = [];
   if (d.high !== null) {
-    out.push({ y: yOf(d.high.to) + 2, lines: [{ text: `${pre}${d.high.vpull === undefined ? 'VDD' : 'Vpull'} ${volts(d.high.to)}`, colour: MUTED }] });
-    out.push({ y: yOf(d.high.from) + 2, lines: [{ text: `${pre}VOH ≥ ${volts(d.high.from)}${d.high.estimate ? ' est.' : ''}`, colour: INK }] });
+    out.push({
+      y: yOf(d.high.to) + 2,
+      lines: [{ text: `${pre}${d.high.vpull === undefined ? 'VDD' : 'Vpull'} ${volts(d.high.to)}`, colour: MUTED }],
+    });
+    out.push({
+      y: yOf(d.high.from) + 2,
+      lines: [{ text: `${pre}VOH ≥ ${volts(d.high.from)}${d.high.estimate ? ' est.' : ''}`, colour: INK }],
+    });
   }
-  if (d.low !== null) out.push({ y: yOf(d.low.to) + 2, lines: [{ text: `${pre}VOL ≤ ${volts(d.low.to)}${d.low.estimate ? ' est.' : ''}`, colour: INK }] });
+  if (d.low !== null)
+    out.push({
+      y: yOf(d.low.to) + 2,
+      lines: [{ text: `${pre}VOL ≤ ${volts(d.low.to)}${d.low.estimate ? ' est.' : ''}`, colour: INK }],
+    });
   return out;
 }
 
 function receiverLabels(r: LadderReceiver, pre: string, yOf: YOf): Label[] {
   const out: Label[] = [];
-  if (r.viMax !== null) out.push({ y: yOf(r.viMax.volts) + 2, lines: [{ text: `${pre}max ${volts(r.viMax.volts)}`, colour: INK_2 }] });
-  if (r.vih !== null) out.push({ y: yOf(r.vih.volts) + 2, lines: [{ text: `${pre}${r.schmitt ? 'VT+' : 'VIH'} ${volts(r.vih.volts)}`, colour: INK }] });
-  if (r.vil !== null) out.push({ y: yOf(r.vil.volts) + 2, lines: [{ text: `${pre}${r.schmitt ? 'VT−' : 'VIL'} ${volts(r.vil.volts)}`, colour: INK }] });
+  if (r.viMax !== null)
+    out.push({ y: yOf(r.viMax.volts) + 2, lines: [{ text: `${pre}max ${volts(r.viMax.volts)}`, colour: INK_2 }] });
+  if (r.vih !== null)
+    out.push({
+      y: yOf(r.vih.volts) + 2,
+      lines: [{ text: `${pre}${r.schmitt ? 'VT+' : 'VIH'} ${volts(r.vih.volts)}`, colour: INK }],
+    });
+  if (r.vil !== null)
+    out.push({
+      y: yOf(r.vil.volts) + 2,
+      lines: [{ text: `${pre}${r.schmitt ? 'VT−' : 'VIL'} ${volts(r.vil.volts)}`, colour: INK }],
+    });
   return out;
 }
 
@@ -194,8 +231,28 @@ function drawLadder(ctx: Ctx, ladder: Ladder, row: Crossing, x0: number, y0: num
   pairs.sort((a, b) => worstOf(a) - worstOf(b));
   const lanes = pairs.slice(0, MAX_LANES);
   const first = (pin: string, ends: readonly string[]) => (ends.includes(pin) ? 0 : 1);
-  const allDrivers = [...ladder.drivers].sort((a, b) => first(a.pin, lanes.map((l) => l.driver)) - first(b.pin, lanes.map((l) => l.driver)));
-  const allReceivers = [...ladder.receivers].sort((a, b) => first(a.pin, lanes.map((l) => l.receiver)) - first(b.pin, lanes.map((l) => l.receiver)));
+  const allDrivers = [...ladder.drivers].sort(
+    (a, b) =>
+      first(
+        a.pin,
+        lanes.map((l) => l.driver),
+      ) -
+      first(
+        b.pin,
+        lanes.map((l) => l.driver),
+      ),
+  );
+  const allReceivers = [...ladder.receivers].sort(
+    (a, b) =>
+      first(
+        a.pin,
+        lanes.map((l) => l.receiver),
+      ) -
+      first(
+        b.pin,
+        lanes.map((l) => l.receiver),
+      ),
+  );
   const drivers = allDrivers.slice(0, MAX_DRIVERS);
   const receivers = allReceivers.slice(0, MAX_RECEIVERS);
   const many = { d: ladder.drivers.length > 1, r: ladder.receivers.length > 1, l: pairs.length > 1 };
@@ -207,26 +264,44 @@ function drawLadder(ctx: Ctx, ladder: Ladder, row: Crossing, x0: number, y0: num
   const key: { text: string; colour: Rgb }[] = [];
   const driverLine = (k: number) => {
     const d = allDrivers[k]!;
-    return { text: `D${k + 1}  ${d.pin} · drives · ${d.rail} · ${d.drive}${k >= MAX_DRIVERS ? ' (not drawn)' : ''}`, colour: INK_2 };
+    return {
+      text: `D${k + 1}  ${d.pin} · drives · ${d.rail} · ${d.drive}${k >= MAX_DRIVERS ? ' (not drawn)' : ''}`,
+      colour: INK_2,
+    };
   };
   const receiverLine = (k: number) => {
     const r = allReceivers[k]!;
     const range = `${volts(r.railRange.min)}–${volts(r.railRange.max)}`;
-    return { text: `R${k + 1}  ${r.pin} · receives · ${r.rail} ${range}${r.schmitt ? ' · Schmitt' : ''}${k >= MAX_RECEIVERS ? ' (not drawn)' : ''}`, colour: INK_2 };
+    return {
+      text: `R${k + 1}  ${r.pin} · receives · ${r.rail} ${range}${r.schmitt ? ' · Schmitt' : ''}${k >= MAX_RECEIVERS ? ' (not drawn)' : ''}`,
+      colour: INK_2,
+    };
   };
-  drivers.forEach((_, k) => key.push(driverLine(k)));
-  receivers.forEach((_, k) => key.push(receiverLine(k)));
+  drivers.forEach((_, k) => {
+    key.push(driverLine(k));
+  });
+  receivers.forEach((_, k) => {
+    key.push(receiverLine(k));
+  });
   if (many.l) {
     pairs.forEach((p, k) => {
-      const text = p.margins.map((m) => `${m.kind === 'nmh' ? 'NMH' : 'NML'} ${marginVolts(m.margin)} ${STATUS_TEXT[m.status]}`).join(', ');
-      key.push({ text: `${k < MAX_LANES ? laneName(k) : '(not drawn)'}  ${dName(p.driver)} → ${rName(p.receiver)}: ${text}`, colour: INK_2 });
+      const text = p.margins
+        .map((m) => `${m.kind === 'nmh' ? 'NMH' : 'NML'} ${marginVolts(m.margin)} ${STATUS_TEXT[m.status]}`)
+        .join(', ');
+      key.push({
+        text: `${k < MAX_LANES ? laneName(k) : '(not drawn)'}  ${dName(p.driver)} → ${rName(p.receiver)}: ${text}`,
+        colour: INK_2,
+      });
     });
   }
   for (let k = drivers.length; k < allDrivers.length; k++) key.push(driverLine(k));
   for (let k = receivers.length; k < allReceivers.length; k++) key.push(receiverLine(k));
   for (const p of ladder.unpowered) key.push({ text: `unpowered: ${p.pin} (${p.rail} off)`, colour: MUTED });
   if (ladder.drivers.length === 0) key.push({ text: 'no powered driver: no margin to draw', colour: MUTED });
-  const shown = key.length > MAX_KEY_LINES ? [...key.slice(0, MAX_KEY_LINES - 1), { text: `+ ${key.length - MAX_KEY_LINES + 1} more lines`, colour: MUTED }] : key;
+  const shown =
+    key.length > MAX_KEY_LINES
+      ? [...key.slice(0, MAX_KEY_LINES - 1), { text: `+ ${key.length - MAX_KEY_LINES + 1} more lines`, colour: MUTED }]
+      : key;
 
   const plotTop = y0 + 40;
   const plotBottom = y0 + CELL_H - 10 - shown.length * KEY_STEP - 6;
@@ -236,18 +311,27 @@ function drawLadder(ctx: Ctx, ladder: Ladder, row: Crossing, x0: number, y0: num
   const dLabels = drivers.flatMap((d, k) => driverLabels(d, many.d ? `D${k + 1} ` : '', yOf));
   const rLabels = receivers.flatMap((r, k) => receiverLabels(r, many.r ? `R${k + 1} ` : '', yOf));
   const worstLabelled = (kind: LadderMargin['kind']) =>
-    lanes.flatMap((l) => l.margins).filter((m) => m.kind === kind).reduce<LadderMargin | undefined>((a, m) => (a === undefined || m.margin < a.margin ? m : a), undefined);
+    lanes
+      .flatMap((l) => l.margins)
+      .filter((m) => m.kind === kind)
+      .reduce<LadderMargin | undefined>((a, m) => (a === undefined || m.margin < a.margin ? m : a), undefined);
   const shownWorst = [worstLabelled('nmh'), worstLabelled('nml')];
   const labelled = (m: LadderMargin) => lanes.length <= 2 || shownWorst.includes(m);
   // Beyond two lanes only the worst NMH and NML are labelled in the plot; the key gives every pair's.
   const mLabels = lanes.flatMap((lane, k) =>
-    lane.margins.filter(labelled).map((m) => marginLabel(m, many.l ? `${laneName(k)} ` : '', yOf)));
+    lane.margins.filter(labelled).map((m) => marginLabel(m, many.l ? `${laneName(k)} ` : '', yOf)),
+  );
   doc.setFontSize(FONT);
   const widest = (labels: readonly Label[], least: number) =>
-    Math.max(least, ...labels.flatMap((l) => l.lines.map((line) => {
-      doc.setFont(ctx.fonts.sans, line.bold === true ? 'bold' : 'normal');
-      return doc.getTextWidth(line.text);
-    }))) + 3;
+    Math.max(
+      least,
+      ...labels.flatMap((l) =>
+        l.lines.map((line) => {
+          doc.setFont(ctx.fonts.sans, line.bold === true ? 'bold' : 'normal');
+          return doc.getTextWidth(line.text);
+        }),
+      ),
+    ) + 3;
 
   // Columns, left to right; the receivers' labels take what is left.
   const ax = x0 + 30;
@@ -267,9 +351,18 @@ function drawLadder(ctx: Ctx, ladder: Ladder, row: Crossing, x0: number, y0: num
   doc.text('margins', lx, plotTop - 9);
   doc.text('receivers', rx, plotTop - 9);
   doc.setFont(ctx.fonts.sans, 'normal');
-  if (many.d) drivers.forEach((_, k) => doc.text(`D${k + 1}`, dx + k * 11, plotTop - 2));
-  if (many.l) lanes.forEach((_, k) => doc.text(laneName(k), lx + k * 10 + 1.5, plotTop - 2));
-  if (many.r) receivers.forEach((_, k) => doc.text(`R${k + 1}`, rx + k * 11, plotTop - 2));
+  if (many.d)
+    drivers.forEach((_, k) => {
+      doc.text(`D${k + 1}`, dx + k * 11, plotTop - 2);
+    });
+  if (many.l)
+    lanes.forEach((_, k) => {
+      doc.text(laneName(k), lx + k * 10 + 1.5, plotTop - 2);
+    });
+  if (many.r)
+    receivers.forEach((_, k) => {
+      doc.text(`R${k + 1}`, rx + k * 11, plotTop - 2);
+    });
 
   // The axis and its grid.
   doc.setFontSize(FONT);
@@ -377,16 +470,18 @@ export function laddersSection(ctx: Ctx, y: number, report: Report, result: Chec
     return paragraph(ctx, at, 'No net joins pins of different rails: there is no ladder to draw.', { colour: INK_2 });
   }
   let at = sectionHeading(ctx, addPage(ctx), 'Voltage ladders');
-  const capped = total > rows.length
-    ? ` This design has ${total} such ladders; the ${rows.length} with the worst findings and the smallest margins are drawn, in net order (the margin table lists every net).`
-    : '';
+  const capped =
+    total > rows.length
+      ? ` This design has ${total} such ladders; the ${rows.length} with the worst findings and the smallest margins are drawn, in net order (the margin table lists every net).`
+      : '';
   at = paragraph(
     ctx,
     at,
     'One ladder for each net that joins pins of different rails, in the first power state and again in any other state where its worst finding or margins change. ' +
-      'On one voltage axis: each powered driver\'s guaranteed bands (VOH up to its supply or pull-up, 0 V up to VOL), each powered receiver\'s thresholds ' +
-      '(VIH and VIL, the undefined zone between them hatched, its rail\'s range as a grey bar, its highest allowed input dashed), and between them the noise margin ' +
-      'of every driver/receiver pair at its worst corner: a plain bar passes, a hatched bar is a warning, a cross-hatched bar fails, each with its word.' + capped,
+      "On one voltage axis: each powered driver's guaranteed bands (VOH up to its supply or pull-up, 0 V up to VOL), each powered receiver's thresholds " +
+      "(VIH and VIL, the undefined zone between them hatched, its rail's range as a grey bar, its highest allowed input dashed), and between them the noise margin " +
+      'of every driver/receiver pair at its worst corner: a plain bar passes, a hatched bar is a warning, a cross-hatched bar fails, each with its word.' +
+      capped,
     { colour: INK_2 },
   );
   const w = (contentWidth(doc) - GAP) / 2;

@@ -18,10 +18,10 @@ export function methodSentences(report: Report): string[] {
   const wiring = formatQuantity(report.settings.defaultWiringCapacitance, 'F');
   return [
     'Each rail is taken over its whole range: nominal ± tolerance, or the minimum and maximum the design gives (the cover lists the ranges).',
-    'A check that involves several rails is worked out at every combination of those rails\' ends, and the worst combination is reported. ' +
+    "A check that involves several rails is worked out at every combination of those rails' ends, and the worst combination is reported. " +
       'Levels are linear in the supply, so the worst case always lies at one of these corners.',
     'All pins on one rail share one supply voltage in each combination: a driver and a receiver on the same rail are judged at the same VDD, ' +
-      'never at opposite ends of that rail\'s range.',
+      "never at opposite ends of that rail's range.",
     'Output levels are the guaranteed ones. The other pins and the pull resistors on a net set the load current on each driver, and the level used ' +
       'is the one guaranteed at the smallest test current that covers that load. A load beyond the largest test current has no guarantee: it is a ' +
       'drive-load error, and the level is extrapolated from the last two test points and marked as an estimate.',
@@ -50,7 +50,12 @@ export function drawMethod(ctx: Ctx, y: number, report: Report): number {
   });
 
   at = subHeading(ctx, at + 6, `Profiles used (${report.profiles.length})`);
-  at = paragraph(ctx, at, 'Every number in a profile names its source; these are the profiles this design\'s pins resolve to.', { colour: INK_2 });
+  at = paragraph(
+    ctx,
+    at,
+    "Every number in a profile names its source; these are the profiles this design's pins resolve to.",
+    { colour: INK_2 },
+  );
   if (report.profiles.length === 0) at = paragraph(ctx, at, 'None: the design has no pins yet.');
   else {
     at = table(ctx, at, {
@@ -64,16 +69,26 @@ export function drawMethod(ctx: Ctx, y: number, report: Report): number {
   return table(ctx, at, {
     head: [['Rule', 'Checks that', 'Severity']],
     body: RULES.map((r) => [r.id, r.meta.title, r.meta.severity]),
-    columnStyles: { 0: { cellWidth: 80, font: ctx.fonts.mono }, 1: { cellWidth: 170 }, 2: { cellWidth: 'auto', textColor: rgb(INK_2) } },
+    columnStyles: {
+      0: { cellWidth: 80, font: ctx.fonts.mono },
+      1: { cellWidth: 170 },
+      2: { cellWidth: 'auto', textColor: rgb(INK_2) },
+    },
   });
 }
 
 /** The cautions, always, as the report's last section. */
 export function drawCautions(ctx: Ctx, y: number, report: Report): number {
   let at = sectionHeading(ctx, y, 'Cautions', 60);
-  for (const caution of report.cautions) at = paragraph(ctx, at, caution, { indent: 16, bullet: '!', colour: INK, after: 5 });
-  return paragraph(ctx, at + 4, 'Nothing in this report replaces the datasheets of the parts chosen or the judgement of the engineer responsible for the design.', {
-    colour: STATUS_COLOUR.info,
-    size: SIZE.small,
-  });
+  for (const caution of report.cautions)
+    at = paragraph(ctx, at, caution, { indent: 16, bullet: '!', colour: INK, after: 5 });
+  return paragraph(
+    ctx,
+    at + 4,
+    'Nothing in this report replaces the datasheets of the parts chosen or the judgement of the engineer responsible for the design.',
+    {
+      colour: STATUS_COLOUR.info,
+      size: SIZE.small,
+    },
+  );
 }

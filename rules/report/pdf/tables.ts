@@ -12,7 +12,20 @@ import type { Report, ReportFinding } from '../reportSchema.ts';
 import { plural } from '../verdict.ts';
 import { paragraph, sectionHeading, type Ctx } from './page.ts';
 import {
-  ERROR_SOFT, HAIRLINE, INK, INK_2, MARGIN, MUTED, PANEL, SIZE, STATUS_COLOUR, WARNING_SOFT, drawSeverityMark, setText, type Rgb, type Status,
+  ERROR_SOFT,
+  HAIRLINE,
+  INK,
+  INK_2,
+  MARGIN,
+  MUTED,
+  PANEL,
+  SIZE,
+  STATUS_COLOUR,
+  WARNING_SOFT,
+  drawSeverityMark,
+  setText,
+  type Rgb,
+  type Status,
 } from './theme.ts';
 
 const rgb = (c: Rgb): [number, number, number] => [c[0], c[1], c[2]];
@@ -36,7 +49,14 @@ export function baseTableOptions(ctx: Ctx, startY: number): UserOptions {
       lineColor: rgb(HAIRLINE),
       lineWidth: { bottom: 0.4 },
     },
-    headStyles: { font: ctx.fonts.sans, fontStyle: 'bold', fillColor: rgb(PANEL), textColor: rgb(INK), lineColor: rgb(INK_2), lineWidth: { bottom: 0.7 } },
+    headStyles: {
+      font: ctx.fonts.sans,
+      fontStyle: 'bold',
+      fillColor: rgb(PANEL),
+      textColor: rgb(INK),
+      lineColor: rgb(INK_2),
+      lineWidth: { bottom: 0.7 },
+    },
   };
 }
 
@@ -155,7 +175,9 @@ function drawRuleCell(ctx: Ctx, data: CellHookData, rule: string, isContinued: b
   doc.setFont(ctx.fonts.sans, 'normal');
   setText(doc, MUTED);
   const title = doc.splitTextToSize(isContinued ? CONTINUED : (TITLES.get(rule) ?? ''), width) as string[];
-  title.forEach((line, k) => doc.text(line, x, y + step * (k + 1)));
+  title.forEach((line, k) => {
+    doc.text(line, x, y + step * (k + 1));
+  });
 }
 
 const marginText = (m: number | null): string => (m === null ? '—' : formatQuantity(m, 'V'));
@@ -191,12 +213,20 @@ export function crossingsTable(ctx: Ctx, y: number, report: Report, result: Chec
     at,
     rows.length === 0
       ? 'No net joins pins of different rails.'
-      : 'Every net that joins pins of different rails (a pull resistor\'s rail does not count), in every power state checked, with its worst noise margins and its worst unwaived finding.',
+      : "Every net that joins pins of different rails (a pull resistor's rail does not count), in every power state checked, with its worst noise margins and its worst unwaived finding.",
     { colour: INK_2 },
   );
   if (rows.length === 0) return at;
   const worst = (w: 'error' | 'warning' | 'ok'): Status => (w === 'ok' ? 'clean' : w);
-  const body: RowInput[] = rows.map((c) => [c.net, c.label, c.rails.join(', '), c.scenario, marginText(c.marginHigh), marginText(c.marginLow), c.worst]);
+  const body: RowInput[] = rows.map((c) => [
+    c.net,
+    c.label,
+    c.rails.join(', '),
+    c.scenario,
+    marginText(c.marginHigh),
+    marginText(c.marginLow),
+    c.worst,
+  ]);
   const rowOf = rowIndexer(body);
   return run(ctx, {
     ...baseTableOptions(ctx, at),
@@ -238,7 +268,17 @@ function worstPair(pairs: readonly PairAnalysis[], side: 'high' | 'low', worst: 
 /** Worst high and low margin of every net in every power state reported, from the engine's analysis. */
 export function marginsTable(ctx: Ctx, y: number, report: Report, design: Design, result: CheckResult): number {
   const minMargin = report.settings.minMargin;
-  type Row = { net: string; label: string; state: string; pairs: number; high: number | null; low: number | null; atHigh: string; atLow: string; analysis: NetAnalysis };
+  type Row = {
+    net: string;
+    label: string;
+    state: string;
+    pairs: number;
+    high: number | null;
+    low: number | null;
+    atHigh: string;
+    atLow: string;
+    analysis: NetAnalysis;
+  };
   const rows: Row[] = [];
   for (const state of report.scenarios) {
     const perNet = result.nets.get(state.id);
@@ -273,7 +313,16 @@ export function marginsTable(ctx: Ctx, y: number, report: Report, design: Design
   return run(ctx, {
     ...baseTableOptions(ctx, at),
     head: [['Net', 'Label', 'Power state', 'Pairs', 'Worst NMH', 'Set by', 'Worst NML', 'Set by']],
-    body: rows.map((r) => [r.net, r.label, r.state, String(r.pairs), marginText(r.high), r.atHigh, marginText(r.low), r.atLow]),
+    body: rows.map((r) => [
+      r.net,
+      r.label,
+      r.state,
+      String(r.pairs),
+      marginText(r.high),
+      r.atHigh,
+      marginText(r.low),
+      r.atLow,
+    ]),
     columnStyles: {
       0: { cellWidth: 56, ...mono(ctx) },
       1: { cellWidth: 'auto' },

@@ -12,7 +12,6 @@
 import { describe, expect, it } from 'vitest';
 import { exampleDesign } from '../../../app/example.ts';
 import { CONTENTION_NOTE } from '../../../app/store/commands/fixes/index.ts';
-import type { Design } from '../../../rules/model/schema.ts';
 import { design, input, net, output, part, rail3v3, rail5v0 } from '../../support/build.ts';
 import { applyAndUndo, type FixCase, netOf, offered, pinOf } from './support.ts';
 
@@ -28,10 +27,11 @@ const E12 = [1.0, 1.2, 1.5, 1.8, 2.2, 2.7, 3.3, 3.9, 4.7, 5.6, 6.8, 8.2];
 function nearestMiddleE12(lo: number, hi: number): number {
   const middle = Math.sqrt(lo * hi);
   const inside: number[] = [];
-  for (let decade = 1; decade <= 6; decade++) for (const m of E12) {
-    const v = Number((m * 10 ** decade).toPrecision(2));
-    if (v >= lo && v <= hi) inside.push(v);
-  }
+  for (let decade = 1; decade <= 6; decade++)
+    for (const m of E12) {
+      const v = Number((m * 10 ** decade).toPrecision(2));
+      if (v >= lo && v <= hi) inside.push(v);
+    }
   return inside.reduce((a, b) => (Math.abs(Math.log(b / middle)) <= Math.abs(Math.log(a / middle)) ? b : a));
 }
 
@@ -70,63 +70,86 @@ const unused = design({
 const cases: FixCase[] = [
   {
     name: `greenhouse TANK_LOW (missing-pull): ${tankLow} Ω to 3v3`,
-    start: greenhouse, finding: 'missing-pull:TANK_LOW:all-on', fix: 'pull-up',
+    start: greenhouse,
+    finding: 'missing-pull:TANK_LOW:all-on',
+    fix: 'pull-up',
     expect: (d) => expect(netOf(d, 'TANK_LOW').pull).toEqual({ to: '3v3', ohms: tankLow }),
   },
   {
     name: `greenhouse FLOW (pull-range, the internal pull too weak): add ${flow} Ω`,
-    start: greenhouse, finding: 'pull-range:FLOW:all-on', fix: 'pull-value',
+    start: greenhouse,
+    finding: 'pull-range:FLOW:all-on',
+    fix: 'pull-value',
     expect: (d) => expect(netOf(d, 'FLOW').pull).toEqual({ to: '3v3', ohms: flow }),
   },
   {
     // The net's own 100 kΩ with too little left by a 10 µs rise limit: the advice of the rule.
     name: 'a pull-up too large is changed to the advised value',
-    start: { ...greenhouse, nets: greenhouse.nets.map((n) => (n.id === 'FROST' ? { ...n, wiringCapacitance: 1e-9, maxRiseTime: 10e-6 } : n)) },
-    finding: 'pull-range:FROST:all-on', fix: 'pull-value',
+    start: {
+      ...greenhouse,
+      nets: greenhouse.nets.map((n) => (n.id === 'FROST' ? { ...n, wiringCapacitance: 1e-9, maxRiseTime: 10e-6 } : n)),
+    },
+    finding: 'pull-range:FROST:all-on',
+    fix: 'pull-value',
     // C = 1 nF + 5 pF; Rmax = 10 µs / (ln(7/3) × 1.005 nF) = 11.74 kΩ; Rmin = (3.465 − 0.4) /
     // (1 mA − 1 µA); beside the controller's 30–50 kΩ: [1/(1/Rmin − 1/30 k)/0.95,
     // 1/(1/(0.7·Rmax) − 1/50 k)/1.05], √ ≈ 5.34 kΩ → 5.6 kΩ.
-    expect: (d) => expect(netOf(d, 'FROST').pull).toEqual({
-      to: '3v3',
-      ohms: nearestMiddleE12(
-        1 / (1 / flowRMin - 1 / 30e3) / 0.95,
-        1 / (1 / (0.7 * 10e-6 / (Math.log(7 / 3) * 1.005e-9)) - 1 / 50e3) / 1.05,
-      ),
-    }),
+    expect: (d) =>
+      expect(netOf(d, 'FROST').pull).toEqual({
+        to: '3v3',
+        ohms: nearestMiddleE12(
+          1 / (1 / flowRMin - 1 / 30e3) / 0.95,
+          1 / (1 / ((0.7 * 10e-6) / (Math.log(7 / 3) * 1.005e-9)) - 1 / 50e3) / 1.05,
+        ),
+      }),
   },
   {
-    name: 'greenhouse BOARD_SLEEP (no driver): 10 kΩ up to the receivers\' 5v0',
-    start: greenhouse, finding: 'floating-input:SLEEP:all-on', fix: 'pull-up',
+    name: "greenhouse BOARD_SLEEP (no driver): 10 kΩ up to the receivers' 5v0",
+    start: greenhouse,
+    finding: 'floating-input:SLEEP:all-on',
+    fix: 'pull-up',
     expect: (d) => expect(netOf(d, 'SLEEP').pull).toEqual({ to: '5v0', ohms: 10e3 }),
   },
   {
     name: 'greenhouse BOARD_SLEEP (no driver): 10 kΩ down to ground',
-    start: greenhouse, finding: 'floating-input:SLEEP:all-on', fix: 'pull-down',
+    start: greenhouse,
+    finding: 'floating-input:SLEEP:all-on',
+    fix: 'pull-down',
     expect: (d) => expect(netOf(d, 'SLEEP').pull).toEqual({ to: 'ground', ohms: 10e3 }),
   },
   {
     name: `three-state drivers only: pull-up of ${sharedUp} Ω, within the drivers' rating`,
-    start: shared, finding: 'floating-input:BUS:all-on', fix: 'pull-up',
+    start: shared,
+    finding: 'floating-input:BUS:all-on',
+    fix: 'pull-up',
     expect: (d) => expect(netOf(d, 'BUS').pull).toEqual({ to: '3v3', ohms: sharedUp }),
   },
   {
     name: `three-state drivers only: pull-down of ${sharedDown} Ω`,
-    start: shared, finding: 'floating-input:BUS:all-on', fix: 'pull-down',
+    start: shared,
+    finding: 'floating-input:BUS:all-on',
+    fix: 'pull-down',
     expect: (d) => expect(netOf(d, 'BUS').pull).toEqual({ to: 'ground', ohms: sharedDown }),
   },
   {
     name: 'an unused input tied high by its own pull',
-    start: unused, finding: 'floating-input:U.SPARE:all-on', fix: 'pull-up',
+    start: unused,
+    finding: 'floating-input:U.SPARE:all-on',
+    fix: 'pull-up',
     expect: (d) => expect(pinOf(d, 'U.SPARE').pull).toEqual({ to: '3v3', ohms: 10e3 }),
   },
   {
     name: 'an unused input tied low by its own pull',
-    start: unused, finding: 'floating-input:U.SPARE:all-on', fix: 'pull-down',
+    start: unused,
+    finding: 'floating-input:U.SPARE:all-on',
+    fix: 'pull-down',
     expect: (d) => expect(pinOf(d, 'U.SPARE').pull).toEqual({ to: 'ground', ohms: 10e3 }),
   },
   {
     name: 'shared three-state enables: a waiver with a note to complete',
-    start: shared, finding: 'contention:BUS:all-on', fix: 'waive-contention',
+    start: shared,
+    finding: 'contention:BUS:all-on',
+    fix: 'waive-contention',
     expect: (d) => expect(netOf(d, 'BUS').waivers).toEqual([{ rule: 'contention', note: CONTENTION_NOTE }]),
   },
 ];
@@ -156,7 +179,10 @@ describe('resistor fixes and the enables waiver', () => {
   });
 
   it('offers nothing for a waived finding', () => {
-    const waived = { ...shared, nets: [{ ...shared.nets[0]!, waivers: [{ rule: 'contention' as const, note: 'one enable at a time' }] }] };
+    const waived = {
+      ...shared,
+      nets: [{ ...shared.nets[0]!, waivers: [{ rule: 'contention' as const, note: 'one enable at a time' }] }],
+    };
     expect(offered(waived, 'contention:BUS:all-on')).toEqual([]);
   });
 });

@@ -17,11 +17,15 @@ import { exampleDesign } from '../../../app/example.ts';
 /** The issue's case before the remedy: one net, one pull-up to 3.3 V. */
 function oneNet(): Design {
   const d = fetBus();
-  return { ...d, discretes: undefined, nets: [net('SDA', ['U1.SDA', 'U2.SDA'], { pull: { to: '3v3', ohms: 4700 } })] } as unknown as Design;
+  return {
+    ...d,
+    discretes: undefined,
+    nets: [net('SDA', ['U1.SDA', 'U2.SDA'], { pull: { to: '3v3', ohms: 4700 } })],
+  } as unknown as Design;
 }
 
 describe('FET shifter fix', () => {
-  it('is offered for the sensor\'s over-voltage and leaves a passing shifted bus', () => {
+  it("is offered for the sensor's over-voltage and leaves a passing shifted bus", () => {
     const d = JSON.parse(JSON.stringify(oneNet())) as Design;
     const before = check(d);
     const over = before.findings.find((f) => f.id === 'overvoltage:SDA:all-on:U2.SDA');
@@ -40,7 +44,9 @@ describe('FET shifter fix', () => {
       ['SDA', ['Q1.D', 'R2.1', 'U1.SDA']],
       ['SDA_1v8', ['Q1.S', 'R1.1', 'U2.SDA']],
     ]);
-    const ties = (after.design.discretes ?? []).map((x) => (x.kind === 'resistor' ? `${x.id}→${x.tie?.['2']}` : `${x.id} gate ${x.kind === 'fet-shifter' ? x.gate : ''}`));
+    const ties = (after.design.discretes ?? []).map((x) =>
+      x.kind === 'resistor' ? `${x.id}→${x.tie?.['2']}` : `${x.id} gate ${x.kind === 'fet-shifter' ? x.gate : ''}`,
+    );
     expect(ties.sort()).toEqual(['Q1 gate 1v8', 'R1→1v8', 'R2→3v3']);
     // Each pull-up is inside its pull-range (info, not error).
     expect(result.findings.filter((f) => f.rule === 'pull-range').map((f) => f.severity)).toEqual(['info', 'info']);
@@ -53,7 +59,7 @@ describe('FET shifter fix', () => {
     expect(fixesFor(f, d, r).map((x) => x.id)).not.toContain('fet-shifter');
   });
 
-  it('is offered on the example\'s 1.8 V soil sensor bus', () => {
+  it("is offered on the example's 1.8 V soil sensor bus", () => {
     const d = exampleDesign();
     const r = check(d);
     const f = r.findings.find((x) => x.id === 'overvoltage:SDA:all-on:U2.SDA')!;

@@ -49,7 +49,8 @@ export function offered(design: Design, findingId: string): string[] {
   const h = harness(design);
   const { result } = h.store.getState();
   const finding = result.findings.find((f) => f.id === findingId);
-  if (finding === undefined) throw new Error(`no finding ${findingId}; have ${result.findings.map((f) => f.id).join(', ')}`);
+  if (finding === undefined)
+    throw new Error(`no finding ${findingId}; have ${result.findings.map((f) => f.id).join(', ')}`);
   return fixesFor(finding, h.design, result).map((x) => x.id);
 }
 
@@ -64,11 +65,13 @@ export function applyAndUndo(start: Design, findingId: string, fixId: string, in
   const copy = structuredClone(original);
   const { result } = h.store.getState();
   const finding = result.findings.find((f) => f.id === findingId);
-  if (finding === undefined) throw new Error(`no finding ${findingId}; have ${result.findings.map((f) => f.id).join(', ')}`);
+  if (finding === undefined)
+    throw new Error(`no finding ${findingId}; have ${result.findings.map((f) => f.id).join(', ')}`);
   const before = result.findings;
   const fixes = fixesFor(finding, original, result);
   const fix = fixes.find((x) => x.id === fixId);
-  if (fix === undefined) throw new Error(`no fix ${fixId} for ${findingId}; offered ${fixes.map((x) => x.id).join(', ')}`);
+  if (fix === undefined)
+    throw new Error(`no fix ${fixId} for ${findingId}; offered ${fixes.map((x) => x.id).join(', ')}`);
 
   const outcome = h.apply(applyFix(fix));
   expect(outcome).toEqual({ ok: true, changed: true });

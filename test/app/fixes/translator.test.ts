@@ -20,7 +20,6 @@ import { deleteSelection } from '../../../app/store/commands/index.ts';
 
 const greenhouse = exampleDesign();
 
-
 const cases: Omit<FixCase, 'fix'>[] = [
   {
     name: 'greenhouse VALVE_EN (level-high, 3.3 V MCU into 5 V 74HC): one-way, A on 3v3',
@@ -34,15 +33,25 @@ const cases: Omit<FixCase, 'fix'>[] = [
       const box = (p: Part) => ({ ...p.position!, ...chipSize(p) });
       const t = box(partById(d, 'U8')!);
       for (const other of d.parts.filter((p) => p.id !== 'U8').map(box)) {
-        const apart = t.x + t.width <= other.x || other.x + other.width <= t.x || t.y + t.height <= other.y || other.y + other.height <= t.y;
+        const apart =
+          t.x + t.width <= other.x ||
+          other.x + other.width <= t.x ||
+          t.y + t.height <= other.y ||
+          other.y + other.height <= t.y;
         expect(apart).toBe(true);
       }
       expect(partById(d, 'U8')).toEqual({
-        id: 'U8', label: 'Dual-rail translator for VALVE_EN', rail: '3v3', profile: 'xlat-side',
+        id: 'U8',
+        label: 'Dual-rail translator for VALVE_EN',
+        rail: '3v3',
+        profile: 'xlat-side',
         // Halfway between U1 (360, 160) and U3 (720, 80) is (540, 120), on top of U1: the nearest
         // spot clear of every chip by 24 px, searched in rings of 40 px steps, is (460, 40).
         position: { x: 460, y: 40 },
-        pins: [{ id: 'A', role: 'input', side: 'left' }, { id: 'B', role: 'output', rail: '5v0', side: 'right' }],
+        pins: [
+          { id: 'A', role: 'input', side: 'left' },
+          { id: 'B', role: 'output', rail: '5v0', side: 'right' },
+        ],
       });
     },
   },
@@ -54,7 +63,10 @@ const cases: Omit<FixCase, 'fix'>[] = [
       expect(netOf(d, 'DISP_RX')?.pins).toEqual(['U4.TX', 'U8.A']);
       expect(netOf(d, 'DISP_RX_3v3')?.pins).toEqual(['U8.B', 'U1.DISP_RX']);
       expect(partById(d, 'U8')).toMatchObject({ rail: '5v0', profile: 'xlat-side' });
-      expect(partById(d, 'U8')?.pins.map((p) => [p.id, p.role, p.rail])).toEqual([['A', 'input', undefined], ['B', 'output', '3v3']]);
+      expect(partById(d, 'U8')?.pins.map((p) => [p.id, p.role, p.rail])).toEqual([
+        ['A', 'input', undefined],
+        ['B', 'output', '3v3'],
+      ]);
     },
   },
   {
@@ -63,15 +75,26 @@ const cases: Omit<FixCase, 'fix'>[] = [
     finding: 'overvoltage:SDA:all-on:U2.SDA',
     expect(d) {
       expect(netOf(d, 'SDA')).toEqual({
-        id: 'SDA', label: 'SDA', pins: ['U1.SDA', 'U8.A'], pull: { to: '3v3', ohms: 4700 },
-        wiringCapacitance: 5e-11, maxRiseTime: 1e-6,
+        id: 'SDA',
+        label: 'SDA',
+        pins: ['U1.SDA', 'U8.A'],
+        pull: { to: '3v3', ohms: 4700 },
+        wiringCapacitance: 5e-11,
+        maxRiseTime: 1e-6,
       });
       expect(netOf(d, 'SDA_1v8')).toEqual({
-        id: 'SDA_1v8', label: 'SDA_1v8', pins: ['U8.B', 'U2.SDA'], pull: { to: '1v8', ohms: 4700 },
-        wiringCapacitance: 5e-11, maxRiseTime: 1e-6,
+        id: 'SDA_1v8',
+        label: 'SDA_1v8',
+        pins: ['U8.B', 'U2.SDA'],
+        pull: { to: '1v8', ohms: 4700 },
+        wiringCapacitance: 5e-11,
+        maxRiseTime: 1e-6,
       });
       expect(partById(d, 'U8')).toMatchObject({ rail: '3v3', profile: 'xlat-od' });
-      expect(partById(d, 'U8')?.pins.map((p) => [p.id, p.role, p.drive])).toEqual([['A', 'bidir', 'open-drain'], ['B', 'bidir', 'open-drain']]);
+      expect(partById(d, 'U8')?.pins.map((p) => [p.id, p.role, p.drive])).toEqual([
+        ['A', 'bidir', 'open-drain'],
+        ['B', 'bidir', 'open-drain'],
+      ]);
     },
   },
   {
@@ -93,19 +116,39 @@ const cases: Omit<FixCase, 'fix'>[] = [
         part('S', '1v8', 'lvcmos18', [input('A')], { position: { x: 400, y: 200 } }),
         part('M', '3v3', 'lvcmos33', [input('A')], { position: { x: 0, y: 200 } }),
       ],
-      nets: [net('N', ['D.Y', 'R.A', 'S.A', 'M.A'], {
-        label: 'CLK',
-        route: [['D.Y', 'R.A'], ['R.A', 'S.A'], ['D.Y', 'M.A']],
-        waivers: [{ rule: 'back-power', scenario: 'sleep', note: 'reviewed' }],
-      })],
+      nets: [
+        net('N', ['D.Y', 'R.A', 'S.A', 'M.A'], {
+          label: 'CLK',
+          route: [
+            ['D.Y', 'R.A'],
+            ['R.A', 'S.A'],
+            ['D.Y', 'M.A'],
+          ],
+          waivers: [{ rule: 'back-power', scenario: 'sleep', note: 'reviewed' }],
+        }),
+      ],
     }),
     finding: 'level-low:N:all-on:D.Y>R.A',
     expect(d) {
       expect(netOf(d, 'N')).toEqual({
-        id: 'N', label: 'CLK', pins: ['D.Y', 'M.A', 'U1.A'], route: [['D.Y', 'U1.A'], ['D.Y', 'M.A']],
+        id: 'N',
+        label: 'CLK',
+        pins: ['D.Y', 'M.A', 'U1.A'],
+        route: [
+          ['D.Y', 'U1.A'],
+          ['D.Y', 'M.A'],
+        ],
         waivers: [{ rule: 'back-power', scenario: 'sleep', note: 'reviewed' }],
       });
-      expect(netOf(d, 'N_1v8')).toEqual({ id: 'N_1v8', label: 'CLK_1v8', pins: ['U1.B', 'R.A', 'S.A'], route: [['U1.B', 'R.A'], ['R.A', 'S.A']] });
+      expect(netOf(d, 'N_1v8')).toEqual({
+        id: 'N_1v8',
+        label: 'CLK_1v8',
+        pins: ['U1.B', 'R.A', 'S.A'],
+        route: [
+          ['U1.B', 'R.A'],
+          ['R.A', 'S.A'],
+        ],
+      });
       // Halfway between D and M (0, 100) and R and S (400, 100).
       expect(partById(d, 'U1')?.position).toEqual({ x: 200, y: 100 });
     },
@@ -142,11 +185,15 @@ describe('insert a translator', () => {
   });
 
   it.each([
-    ['a net on one rail (no crossing to split)', design({
-      rails: [rail5v0],
-      parts: [part('D', '5v0', 'ttl', [output('Y')]), part('R', '5v0', '74hc', [input('A')])],
-      nets: [net('N', ['D.Y', 'R.A'])],
-    }), 'level-high:N:all-on:D.Y>R.A'],
+    [
+      'a net on one rail (no crossing to split)',
+      design({
+        rails: [rail5v0],
+        parts: [part('D', '5v0', 'ttl', [output('Y')]), part('R', '5v0', '74hc', [input('A')])],
+        nets: [net('N', ['D.Y', 'R.A'])],
+      }),
+      'level-high:N:all-on:D.Y>R.A',
+    ],
   ])('is not offered for %s', (_name, start, finding) => {
     expect(offered(start, finding)).not.toContain('translator');
   });
@@ -162,7 +209,12 @@ function withSdaTranslator(): Design {
 describe('a channel of a translator already there', () => {
   it('SCL takes channel 2 of the SDA translator: one part, two channels, each side pulled to its rail', () => {
     const start = withSdaTranslator();
-    expect(offered(start, 'overvoltage:SCL:all-on:U2.SCL')).toEqual(['translator-channel', 'translator', 'fet-shifter', 'mark-tolerant']);
+    expect(offered(start, 'overvoltage:SCL:all-on:U2.SCL')).toEqual([
+      'translator-channel',
+      'translator',
+      'fet-shifter',
+      'mark-tolerant',
+    ]);
     applyAndUndo(start, 'overvoltage:SCL:all-on:U2.SCL', 'translator-channel', ({ design: d, fix }) => {
       expect(fix.title).toBe('Use channel 2 of translator U8 on SCL');
       expect(d.parts.filter((p) => p.profile === 'xlat-od').map((p) => p.id)).toEqual(['U8']);
@@ -206,7 +258,10 @@ describe('a channel of a translator already there', () => {
         const d = structuredClone(withSdaTranslator());
         const u8 = d.parts.find((p) => p.id === 'U8')!;
         for (let k = 2; k <= MAX_CHANNELS; k++) {
-          u8.pins.push({ id: `A${k}`, role: 'bidir', drive: 'open-drain', side: 'left' }, { id: `B${k}`, role: 'bidir', drive: 'open-drain', rail: '1v8', side: 'right' });
+          u8.pins.push(
+            { id: `A${k}`, role: 'bidir', drive: 'open-drain', side: 'left' },
+            { id: `B${k}`, role: 'bidir', drive: 'open-drain', rail: '1v8', side: 'right' },
+          );
         }
         return d;
       },
@@ -225,7 +280,10 @@ describe('a channel of a translator already there', () => {
     const fix = fixesFor(f, h.design, result).find((x) => x.id === 'translator-channel')!;
     h.apply(deleteSelection({ parts: ['U8'], wires: [] }));
     const before = h.design;
-    expect(h.apply(applyFix(fix))).toEqual({ ok: false, reason: 'Translator U8 has no free channel between 3v3 and 1v8 for this net.' });
+    expect(h.apply(applyFix(fix))).toEqual({
+      ok: false,
+      reason: 'Translator U8 has no free channel between 3v3 and 1v8 for this net.',
+    });
     expect(h.design).toBe(before);
   });
 });

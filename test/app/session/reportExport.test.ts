@@ -8,9 +8,14 @@ import { ReportSchema } from '../../../rules/report/reportSchema.ts';
 
 const AT = new Date(Date.UTC(2026, 11, 1, 12, 0, 0));
 
-describe('the editor\'s JSON report', () => {
+describe("the editor's JSON report", () => {
   it.each([
-    { name: 'the example, with its planted faults', design: exampleDesign(), finding: 'level-high:VALVE_EN:all-on:U1.VALVE_EN>U3.EN', parts: 12 },
+    {
+      name: 'the example, with its planted faults',
+      design: exampleDesign(),
+      finding: 'level-high:VALVE_EN:all-on:U1.VALVE_EN>U3.EN',
+      parts: 12,
+    },
     { name: 'an empty design', design: newDesign('Empty board'), finding: undefined, parts: 0 },
   ])('$name: holds to the report schema', ({ design, finding, parts }) => {
     const built = buildEditorReport(design, check(design), AT);
@@ -20,7 +25,9 @@ describe('the editor\'s JSON report', () => {
     expect(built.report.generatedAt).toBe('2026-12-01T12:00:00.000Z');
     expect(built.report.settings.failOn).toBe('error');
     expect(built.report.design).toMatchObject({ title: design.title, parts });
-    expect(built.report.findings.find((f) => f.id === finding)?.severity).toBe(finding === undefined ? undefined : 'error');
+    expect(built.report.findings.find((f) => f.id === finding)?.severity).toBe(
+      finding === undefined ? undefined : 'error',
+    );
   });
 
   it('says why when the check result does not belong to the design (no throw)', () => {
@@ -31,8 +38,8 @@ describe('the editor\'s JSON report', () => {
   });
 });
 
-describe('the editor\'s Markdown report', () => {
-  it('is the command line\'s Markdown of the same report, named after the design', () => {
+describe("the editor's Markdown report", () => {
+  it("is the command line's Markdown of the same report, named after the design", () => {
     const design = exampleDesign();
     const made = editorReportMarkdown(design, check(design), AT);
     const built = buildEditorReport(design, check(design), AT);

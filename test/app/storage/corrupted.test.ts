@@ -10,9 +10,24 @@ const zero = { errors: 0, warnings: 0 };
 
 describe('a corrupted record is skipped with a message; the others open', () => {
   it.each([
-    { name: 'a title that is a number', record: { id: 'bad', title: 42, rev: 1, createdAt: 0, updatedAt: 0, deletedAt: null, errors: 0, warnings: 0 }, where: 'designs["bad"].title', message: 'expected a string, found 42' },
-    { name: 'no revision number', record: { id: 'bad', title: 'x', createdAt: 0, updatedAt: 0, deletedAt: null, errors: 0, warnings: 0 }, where: 'designs["bad"].rev', message: 'expected a whole number ≥ 1, found nothing' },
-    { name: 'a negative count', record: { id: 'bad', title: 'x', rev: 1, createdAt: 0, updatedAt: 0, deletedAt: null, errors: -1, warnings: 0 }, where: 'designs["bad"].errors', message: 'expected a whole number ≥ 0, found -1' },
+    {
+      name: 'a title that is a number',
+      record: { id: 'bad', title: 42, rev: 1, createdAt: 0, updatedAt: 0, deletedAt: null, errors: 0, warnings: 0 },
+      where: 'designs["bad"].title',
+      message: 'expected a string, found 42',
+    },
+    {
+      name: 'no revision number',
+      record: { id: 'bad', title: 'x', createdAt: 0, updatedAt: 0, deletedAt: null, errors: 0, warnings: 0 },
+      where: 'designs["bad"].rev',
+      message: 'expected a whole number ≥ 1, found nothing',
+    },
+    {
+      name: 'a negative count',
+      record: { id: 'bad', title: 'x', rev: 1, createdAt: 0, updatedAt: 0, deletedAt: null, errors: -1, warnings: 0 },
+      where: 'designs["bad"].errors',
+      message: 'expected a whole number ≥ 0, found -1',
+    },
   ])('in the list: $name', async ({ record, where, message }) => {
     const library = new Library(freshDb());
     await library.create(newDesign('Good one'), zero);
@@ -26,7 +41,12 @@ describe('a corrupted record is skipped with a message; the others open', () => 
     const library = new Library(freshDb());
     const record = await library.create(newDesign('Pump board'), zero);
     await library.save(record.id, 1, newDesign('Pump board, second save'), zero);
-    await library.db.documents.put({ designId: record.id, rev: 2, formatVersion: 1, doc: { ...newDesign(), rails: [{ id: 'r', label: '', nominal: 'five' }] } });
+    await library.db.documents.put({
+      designId: record.id,
+      rev: 2,
+      formatVersion: 1,
+      doc: { ...newDesign(), rails: [{ id: 'r', label: '', nominal: 'five' }] },
+    });
     const opened = await library.open(record.id);
     expect(opened.ok && [opened.rev, opened.record.rev, opened.design.title]).toEqual([1, 2, 'Pump board']);
     expect(opened.ok && opened.refused.map((r) => [r.rev, r.errors[0]?.path])).toEqual([[2, 'rails[0].nominal']]);
@@ -48,6 +68,8 @@ describe('a corrupted record is skipped with a message; the others open', () => 
     expect(session.editor.getState().design.title).toBe('Readable');
     const notices = session.state.getState().notices;
     expect(notices.find((n) => n.key === `unreadable-${bad.id}`)?.title).toContain('“Unreadable” could not be read');
-    expect(notices.find((n) => n.key === 'skipped')?.lines).toEqual(['designs["broken"].title: expected a string, found null']);
+    expect(notices.find((n) => n.key === 'skipped')?.lines).toEqual([
+      'designs["broken"].title: expected a string, found null',
+    ]);
   });
 });

@@ -34,7 +34,10 @@ describe('when storage fails, the design stays in memory and export is offered',
   it.each([
     {
       name: 'the storage quota is used up',
-      fail: (s: Session) => vi.spyOn(s.library!, 'save').mockRejectedValue(new DOMException('The quota has been exceeded.', 'QuotaExceededError')),
+      fail: (s: Session) =>
+        vi
+          .spyOn(s.library!, 'save')
+          .mockRejectedValue(new DOMException('The quota has been exceeded.', 'QuotaExceededError')),
       why: "the browser's storage for this site is full",
     },
     {
@@ -58,10 +61,14 @@ describe('when storage fails, the design stays in memory and export is offered',
 
   it('"Try again" stores the kept design once storage works again, and the message goes', async () => {
     const session = await tab(dbName());
-    const spy = vi.spyOn(session.library!, 'save').mockRejectedValueOnce(new DOMException('full', 'QuotaExceededError'));
+    const spy = vi
+      .spyOn(session.library!, 'save')
+      .mockRejectedValueOnce(new DOMException('full', 'QuotaExceededError'));
     await edit(session, 'Stored at the second try');
     expect(notice(session, 'save')).toBeDefined();
-    notice(session, 'save')?.actions?.find((a) => a.label === 'Try again')?.run();
+    notice(session, 'save')
+      ?.actions?.find((a) => a.label === 'Try again')
+      ?.run();
     await session.flush();
     expect(spy).toHaveBeenCalledTimes(2);
     expect(session.state.getState().open.saver.status).toEqual({ state: 'saved' });

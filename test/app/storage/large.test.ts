@@ -25,16 +25,19 @@ beforeAll(() => {
 const file = (body: string, name = 'big-board.railcross.json') => new File([body], name, { type: 'application/json' });
 
 describe('the checking jobs (run in the worker, or inline)', () => {
-  it('reads and checks a file, naming each stage as it starts; the counts are the engine\'s', () => {
+  it("reads and checks a file, naming each stage as it starts; the counts are the engine's", () => {
     const stages: string[] = [];
     const { reply } = readJob(text, (s) => stages.push(s));
     expect(stages).toEqual(['reading', 'checking']);
     expect(reply.ok && [reply.parts, reply.counts]).toEqual([LARGE_DESIGN_PARTS + 1, counts]);
   });
 
-  it('refuses a bad file with the reader\'s place and reason, checking nothing', () => {
+  it("refuses a bad file with the reader's place and reason, checking nothing", () => {
     const stages: string[] = [];
-    const { reply } = readJob('{"format":"railcross.design","version":1,"title":"x","rails":[],"parts":[{"id":"U1"}],"nets":[]}', (s) => stages.push(s));
+    const { reply } = readJob(
+      '{"format":"railcross.design","version":1,"title":"x","rails":[],"parts":[{"id":"U1"}],"nets":[]}',
+      (s) => stages.push(s),
+    );
     expect(stages).toEqual(['reading']);
     expect(!reply.ok && reply.errors[0]?.path).toMatch(/^parts\[0\]/);
   });
@@ -60,7 +63,11 @@ describe('a design too large to edit comfortably opens with a choice', () => {
     expect(offered).toMatchObject({ title: large.title, parts: LARGE_DESIGN_PARTS + 1, counts, source: 'import' });
     expect(a.openId).toBe(openBefore);
     const stored = await a.library!.list();
-    expect(stored.designs.map((d) => [d.title, d.errors, d.warnings])).toContainEqual([large.title, counts.errors, counts.warnings]);
+    expect(stored.designs.map((d) => [d.title, d.errors, d.warnings])).toContainEqual([
+      large.title,
+      counts.errors,
+      counts.warnings,
+    ]);
 
     // The record keeps the part count, so that the next start need not read the document to know it.
     const id = offered!.id;

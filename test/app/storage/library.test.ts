@@ -78,12 +78,16 @@ describe('the design library', () => {
     expect(await titles(library)).toEqual(expected);
   });
 
-  it('a rename keeps the design\'s content and moves its revision on', async () => {
+  it("a rename keeps the design's content and moves its revision on", async () => {
     const { library } = setup();
     const record = await library.create(newDesign('Pump board'));
     await library.rename(record.id, 'Pump board, rev B');
     const opened = await library.open(record.id);
-    expect(opened.ok && [opened.design.title, opened.design.rails.length, opened.record.rev]).toEqual(['Pump board, rev B', 3, 2]);
+    expect(opened.ok && [opened.design.title, opened.design.rails.length, opened.record.rev]).toEqual([
+      'Pump board, rev B',
+      3,
+      2,
+    ]);
   });
 
   it('purges designs deleted more than 30 days ago, with their revisions, and keeps younger ones', async () => {
@@ -130,7 +134,11 @@ describe('saving', () => {
   });
 
   it.each([
-    { name: 'another tab saved first', prepare: (l: Library, id: string) => l.save(id, 1, newDesign('theirs'), { errors: 0, warnings: 0 }), reason: 'changed' },
+    {
+      name: 'another tab saved first',
+      prepare: (l: Library, id: string) => l.save(id, 1, newDesign('theirs'), { errors: 0, warnings: 0 }),
+      reason: 'changed',
+    },
     { name: 'another tab deleted it', prepare: (l: Library, id: string) => l.remove(id), reason: 'deleted' },
     { name: 'another tab purged it', prepare: (l: Library, id: string) => l.purge(id), reason: 'missing' },
   ])('refuses to write over a newer state ($name) and changes nothing', async ({ prepare, reason }) => {

@@ -29,7 +29,9 @@ describe('upgrading the issue-7 database (schema 1) to the library', () => {
     expect(db.tables.map((t) => t.name).sort()).toEqual(['designs', 'documents', 'prefs', 'revisions']);
     const library = new Library(db);
     const { designs } = await library.list();
-    expect(designs.map((d) => [d.title, d.rev, d.createdAt, d.deletedAt])).toEqual([['Greenhouse controller', 1, SAVED_AT, null]]);
+    expect(designs.map((d) => [d.title, d.rev, d.createdAt, d.deletedAt])).toEqual([
+      ['Greenhouse controller', 1, SAVED_AT, null],
+    ]);
     const opened = await library.open(designs[0]!.id);
     expect(opened.ok && opened.design).toEqual(design);
     expect(await library.lastOpened()).toBe(designs[0]!.id);
@@ -39,7 +41,9 @@ describe('upgrading the issue-7 database (schema 1) to the library', () => {
     { name: 'an empty version-1 database', records: [], designs: [] },
     {
       name: 'a stored value the reader refuses (moved as it is, reported on opening)',
-      records: [{ id: 'current', design: { format: 'railcross.design', version: 1, title: 'Half-written' }, savedAt: SAVED_AT }],
+      records: [
+        { id: 'current', design: { format: 'railcross.design', version: 1, title: 'Half-written' }, savedAt: SAVED_AT },
+      ],
       designs: ['Half-written'],
     },
     {

@@ -21,18 +21,32 @@ afterEach(() => {
 });
 
 describe('autosave timing', () => {
-  it('stores a change within 500 ms of the last edit (the issue\'s bound)', () => {
+  it("stores a change within 500 ms of the last edit (the issue's bound)", () => {
     expect(SAVE_DELAY_MS).toBeLessThanOrEqual(400);
   });
 
   it.each([
     { name: 'one edit', edits: [0], expected: [{ value: 'e0', at: SAVE_DELAY_MS }] },
-    { name: 'a burst within the quiet spell is one write, of the last value', edits: [0, 100, 200], expected: [{ value: 'e200', at: 200 + SAVE_DELAY_MS }] },
-    { name: 'two edits a long pause apart are two writes', edits: [0, 1000], expected: [{ value: 'e0', at: SAVE_DELAY_MS }, { value: 'e1000', at: 1000 + SAVE_DELAY_MS }] },
+    {
+      name: 'a burst within the quiet spell is one write, of the last value',
+      edits: [0, 100, 200],
+      expected: [{ value: 'e200', at: 200 + SAVE_DELAY_MS }],
+    },
+    {
+      name: 'two edits a long pause apart are two writes',
+      edits: [0, 1000],
+      expected: [
+        { value: 'e0', at: SAVE_DELAY_MS },
+        { value: 'e1000', at: 1000 + SAVE_DELAY_MS },
+      ],
+    },
     {
       name: 'edits that never pause are still written by the longest wait',
       edits: Array.from({ length: 30 }, (_, k) => k * 100),
-      expected: [{ value: `e${SAVE_MAX_WAIT_MS - 100}`, at: SAVE_MAX_WAIT_MS }, { value: 'e2900', at: 2900 + SAVE_DELAY_MS }],
+      expected: [
+        { value: `e${SAVE_MAX_WAIT_MS - 100}`, at: SAVE_MAX_WAIT_MS },
+        { value: 'e2900', at: 2900 + SAVE_DELAY_MS },
+      ],
     },
   ])('$name', async ({ edits, expected }) => {
     const { saver, writes } = recorder();
@@ -96,7 +110,10 @@ describe('autosave timing', () => {
   it('tells what is not yet stored: the pending value, else the one being written (what page-hide stages)', async () => {
     let release: () => void = () => {};
     let fail = false;
-    const saver = new Saver<string>({ write: () => new Promise<void>((resolve, reject) => (release = () => (fail ? reject(new Error('disk full')) : resolve()))) });
+    const saver = new Saver<string>({
+      write: () =>
+        new Promise<void>((resolve, reject) => (release = () => (fail ? reject(new Error('disk full')) : resolve()))),
+    });
     expect([saver.unstored, saver.inFlight]).toEqual([undefined, undefined]);
     saver.save('a');
     expect([saver.unstored, saver.inFlight]).toEqual(['a', undefined]);

@@ -20,7 +20,11 @@ const titleOf = async (session: Session) => session.editor.getState().design.tit
 
 describe('an edit staged on page-hide is there after the next start', () => {
   it.each([
-    { name: 'a title typed and committed', edit: (s: Session) => s.editor.getState().apply(setTitle('Rev C')), expected: (d: Design) => d.title === 'Rev C' },
+    {
+      name: 'a title typed and committed',
+      edit: (s: Session) => s.editor.getState().apply(setTitle('Rev C')),
+      expected: (d: Design) => d.title === 'Rev C',
+    },
     {
       name: 'ten arrow-key nudges of a chip',
       edit: (s: Session) => {
@@ -84,7 +88,16 @@ async function setup() {
   const record = await library.create(base);
   const store = new MemoryStore();
   const put = (entry: Partial<Staged> & { design: Design }) => {
-    const staged: Staged = { tab: 'tab-1', id: record.id, baseRev: 1, inFlight: null, errors: 1, warnings: 2, at: 1, ...entry };
+    const staged: Staged = {
+      tab: 'tab-1',
+      id: record.id,
+      baseRev: 1,
+      inFlight: null,
+      errors: 1,
+      warnings: 2,
+      at: 1,
+      ...entry,
+    };
     store.setItem(STAGE_PREFIX + staged.tab, JSON.stringify(staged));
   };
   const titles = async () => (await library.list()).designs.map((d) => `${d.title}@${d.rev}`).sort();
@@ -97,31 +110,39 @@ describe('replaying staged entries at start: never over a revision they did not 
       name: 'nothing was saved after it: it becomes the next revision',
       before: async () => {},
       staged: (base: Design) => ({ design: { ...base, title: 'B' } }),
-      outcome: 'saved', titles: ['B@2'],
+      outcome: 'saved',
+      titles: ['B@2'],
     },
     {
       name: 'its save landed before the page went: nothing more is written',
-      before: async (l: Library, id: string, base: Design) => void (await l.save(id, 1, { ...base, title: 'B' }, { errors: 0, warnings: 0 })),
+      before: async (l: Library, id: string, base: Design) =>
+        void (await l.save(id, 1, { ...base, title: 'B' }, { errors: 0, warnings: 0 })),
       staged: (base: Design) => ({ design: { ...base, title: 'B' } }),
-      outcome: 'stored-already', titles: ['B@2'],
+      outcome: 'stored-already',
+      titles: ['B@2'],
     },
     {
       name: 'the save under way (A) landed, the pending one (B) did not: B goes on top of A',
-      before: async (l: Library, id: string, base: Design) => void (await l.save(id, 1, { ...base, title: 'A' }, { errors: 0, warnings: 0 })),
+      before: async (l: Library, id: string, base: Design) =>
+        void (await l.save(id, 1, { ...base, title: 'A' }, { errors: 0, warnings: 0 })),
       staged: (base: Design) => ({ design: { ...base, title: 'B' }, inFlight: fingerprint({ ...base, title: 'A' }) }),
-      outcome: 'saved', titles: ['B@3'],
+      outcome: 'saved',
+      titles: ['B@3'],
     },
     {
       name: 'another tab saved something else meanwhile: kept as a recovered copy beside it',
-      before: async (l: Library, id: string, base: Design) => void (await l.save(id, 1, { ...base, title: 'Other tab' }, { errors: 0, warnings: 0 })),
+      before: async (l: Library, id: string, base: Design) =>
+        void (await l.save(id, 1, { ...base, title: 'Other tab' }, { errors: 0, warnings: 0 })),
       staged: (base: Design) => ({ design: { ...base, title: 'B' }, inFlight: fingerprint({ ...base, title: 'A' }) }),
-      outcome: 'recovered', titles: ['B (recovered)@1', 'Other tab@2'],
+      outcome: 'recovered',
+      titles: ['B (recovered)@1', 'Other tab@2'],
     },
     {
       name: 'the design was deleted meanwhile: kept as a recovered copy',
       before: async (l: Library, id: string) => l.remove(id),
       staged: (base: Design) => ({ design: { ...base, title: 'B' } }),
-      outcome: 'recovered', titles: ['B (recovered)@1'],
+      outcome: 'recovered',
+      titles: ['B (recovered)@1'],
     },
   ])('$name', async ({ before, staged, outcome, titles }) => {
     const s = await setup();
@@ -145,7 +166,20 @@ describe('replaying staged entries at start: never over a revision they did not 
   it.each([
     { name: 'not JSON', text: '{"tab":', why: /JSON/ },
     { name: 'not an entry', text: '{"tab":"x"}', why: /not a staged design entry/ },
-    { name: 'a design the reader refuses', text: JSON.stringify({ tab: 'x', id: 'y', baseRev: 1, inFlight: null, design: { format: 'railcross.design', version: 1, parts: 3 }, errors: 0, warnings: 0, at: 0 }), why: /parts|title|rails/ },
+    {
+      name: 'a design the reader refuses',
+      text: JSON.stringify({
+        tab: 'x',
+        id: 'y',
+        baseRev: 1,
+        inFlight: null,
+        design: { format: 'railcross.design', version: 1, parts: 3 },
+        errors: 0,
+        warnings: 0,
+        at: 0,
+      }),
+      why: /parts|title|rails/,
+    },
   ])('drops an unreadable entry ($name) and says why, writing nothing', async ({ text, why }) => {
     const s = await setup();
     s.store.setItem(`${STAGE_PREFIX}x`, text);

@@ -19,12 +19,16 @@ afterEach(async () => {
 /** Every table's records, as one text: equal texts mean nothing stored changed. */
 export async function dump(db: RailcrossDb): Promise<string> {
   const out: Record<string, unknown[]> = {};
-  for (const table of [...db.tables].sort((a, b) => a.name.localeCompare(b.name))) out[table.name] = await table.toArray();
+  for (const table of [...db.tables].sort((a, b) => a.name.localeCompare(b.name)))
+    out[table.name] = await table.toArray();
   return JSON.stringify(out);
 }
 
 /** A clock the test moves by hand. */
-export function manualClock(start = Date.UTC(2026, 0, 15, 12, 0, 0)): { now: () => number; advance: (ms: number) => void } {
+export function manualClock(start = Date.UTC(2026, 0, 15, 12, 0, 0)): {
+  now: () => number;
+  advance: (ms: number) => void;
+} {
   let t = start;
   return { now: () => t, advance: (ms) => void (t += ms) };
 }

@@ -18,12 +18,30 @@ import type { QuickFix } from './types.ts';
 const volts = (v: number) => formatQuantity(v, 'V');
 
 /** Each CMOS-input family and its variant with TTL-level inputs and the same outputs (common practice). */
-export const TTL_INPUT_VARIANT: Readonly<Record<string, string>> = { '74hc': '74hct', '74ac': '74act', '74ahc': '74ahct' };
+export const TTL_INPUT_VARIANT: Readonly<Record<string, string>> = {
+  '74hc': '74hct',
+  '74ac': '74act',
+  '74ahc': '74ahct',
+};
 
 /** Library ids that name a logic family, so that swapping the chip for another family is a real choice. */
 const FAMILIES = new Set([
-  'ttl', '74ls', '74hc', '74hct', '74ac', '74act', '74ahc', '74ahct', '74lvc', 'lvttl33', 'lvcmos33', 'lvcmos25',
-  'lvcmos18', 'lvcmos15', 'lvcmos12', 'cmos4000',
+  'ttl',
+  '74ls',
+  '74hc',
+  '74hct',
+  '74ac',
+  '74act',
+  '74ahc',
+  '74ahct',
+  '74lvc',
+  'lvttl33',
+  'lvcmos33',
+  'lvcmos25',
+  'lvcmos18',
+  'lvcmos15',
+  'lvcmos12',
+  'cmos4000',
 ]);
 
 /** Families whose inputs tolerate more than their own supply, in the library (74LVC, 74AHC/AHCT: 5.5 V). */
@@ -38,7 +56,13 @@ function profileTarget(r: ResolvedPin): 'pin' | 'part' {
 }
 
 /** Switch the profile of a part, or of one pin, in a draft. */
-function switchProfile(draft: Draft<Design>, key: string, target: 'pin' | 'part', from: string, to: string): Refusal | void {
+function switchProfile(
+  draft: Draft<Design>,
+  key: string,
+  target: 'pin' | 'part',
+  from: string,
+  to: string,
+): Refusal | undefined {
   const at = pinAt(draft as Design, key);
   if (at === undefined) return refuse(`There is no pin ${key}.`);
   const part = draft.parts.find((p) => p.id === at.part.id)!;
@@ -161,7 +185,13 @@ export function markUnpoweredSafeFix(design: Design, finding: FindingOf<'back-po
   const { pin: key, vNet } = finding.values;
   if (vNet === null) return undefined;
   const r = resolvedPin(design, key);
-  if (r === undefined || r.params.viMaxOff !== undefined || r.params.unpoweredSafe === true || r.params.viMax === undefined) return undefined;
+  if (
+    r === undefined ||
+    r.params.viMaxOff !== undefined ||
+    r.params.unpoweredSafe === true ||
+    r.params.viMax === undefined
+  )
+    return undefined;
   const range = rangeOfRail(design, r.rail);
   if (range === undefined) return undefined;
   const limit = levelAt(r.params.viMax, range.min);

@@ -17,7 +17,13 @@ import type { QuickFix } from './types.ts';
 
 export type { QuickFix } from './types.ts';
 export { previewFix, findingsAdded, newErrors, type FixPreview } from './preview.ts';
-export { layoutTranslator, insertTranslator, TRANSLATOR_OPEN_DRAIN, TRANSLATOR_PUSH_PULL, type TranslatorPlan } from './translator.ts';
+export {
+  layoutTranslator,
+  insertTranslator,
+  TRANSLATOR_OPEN_DRAIN,
+  TRANSLATOR_PUSH_PULL,
+  type TranslatorPlan,
+} from './translator.ts';
 export { pullValueFrom } from './pulls.ts';
 
 /** The placeholder note of a contention waiver: the user completes it with how the enables are kept apart. */
@@ -34,7 +40,12 @@ function levelTranslator(design: Design, f: FindingOf<'level-high'> | FindingOf<
   const railA = railOf(design, f.values.driver);
   const railB = railOf(design, f.values.receiver);
   if (f.net === null || railA === undefined || railB === undefined || railA === railB) return [];
-  return translatorFixes(design, f.id, { net: f.net, railA, railB }, `${f.values.receiver} is driven from its own rail`);
+  return translatorFixes(
+    design,
+    f.id,
+    { net: f.net, railA, railB },
+    `${f.values.receiver} is driven from its own rail`,
+  );
 }
 
 /**
@@ -50,9 +61,8 @@ function exposureTranslator(design: Design, f: FindingOf<'overvoltage'> | Findin
   const railB = railOf(design, pin);
   const railA = source === 'net' ? findNet(design, f.net)?.pull?.to : sourceRail(design, source);
   if (railA === undefined || railB === undefined || railA === GROUND || railA === railB) return [];
-  const why = f.rule === 'back-power'
-    ? `${pin} is isolated while ${railB} is off`
-    : `${pin} only sees its own rail's levels`;
+  const why =
+    f.rule === 'back-power' ? `${pin} is isolated while ${railB} is off` : `${pin} only sees its own rail's levels`;
   return translatorFixes(design, f.id, { net: f.net, railA, railB }, why);
 }
 
@@ -95,9 +105,18 @@ export function fixesFor(finding: Finding, design: Design, result: CheckResult):
     case 'level-low':
       return levelTranslator(design, finding);
     case 'overvoltage':
-      return [...tolerantFamilyFixes(design, finding), ...exposureTranslator(design, finding), fetShifterFix(design, finding), markTolerantFix(design, finding)].filter(present);
+      return [
+        ...tolerantFamilyFixes(design, finding),
+        ...exposureTranslator(design, finding),
+        fetShifterFix(design, finding),
+        markTolerantFix(design, finding),
+      ].filter(present);
     case 'back-power':
-      return [...exposureTranslator(design, finding), fetShifterFix(design, finding), markUnpoweredSafeFix(design, finding)].filter(present);
+      return [
+        ...exposureTranslator(design, finding),
+        fetShifterFix(design, finding),
+        markUnpoweredSafeFix(design, finding),
+      ].filter(present);
     case 'missing-pull':
       return [addPullFix(design, finding)].filter(present);
     case 'pull-range':

@@ -23,7 +23,7 @@ const TIE_VALUES = [10e3, 22e3, 47e3, 100e3];
 /** A tie for an input: 10 kΩ, a usual general-purpose value (common practice). */
 export const TIE_OHMS = 10e3;
 
-function setNetPull(draft: Draft<Design>, netId: string, pull: Pull): Refusal | void {
+function setNetPull(draft: Draft<Design>, netId: string, pull: Pull): Refusal | undefined {
   const net = draft.nets.find((n) => n.id === netId);
   if (net === undefined) return refuse(`There is no net ${netId}.`);
   net.pull = { to: pull.to, ohms: pull.ohms };
@@ -37,7 +37,10 @@ function setNetPull(draft: Draft<Design>, netId: string, pull: Pull): Refusal | 
  * leaves no value (a range empty, or the pins' own pulls already too strong), or the ranges
  * leave none together.
  */
-export function pullValueFrom(findings: readonly Finding[], net: string): { ohms: number; rMin: number; rMax: number | null; to: string | null } | undefined {
+export function pullValueFrom(
+  findings: readonly Finding[],
+  net: string,
+): { ohms: number; rMin: number; rMax: number | null; to: string | null } | undefined {
   let lo = 0;
   let hi = Infinity;
   let seen = false;
@@ -105,9 +108,10 @@ export function pullValueFix(design: Design, finding: Finding, result: CheckResu
   return {
     id: 'pull-value',
     finding: finding.id,
-    title: pull === undefined
-      ? `Pull ${netName(net)} up to ${to} with ${ohms(value.ohms)}`
-      : `Change the pull-up of ${netName(net)} to ${ohms(value.ohms)}`,
+    title:
+      pull === undefined
+        ? `Pull ${netName(net)} up to ${to} with ${ohms(value.ohms)}`
+        : `Change the pull-up of ${netName(net)} to ${ohms(value.ohms)}`,
     sentence:
       `${pull === undefined ? `Adds a ${ohms(value.ohms)} pull-up to ${to} beside the pins' own pulls` : `Replaces the ${ohms(pull.ohms)} pull-up to ${pull.to} by ${ohms(value.ohms)}`}, ` +
       `the standard value nearest the middle of ${rangeText(value)}, the range its drivers, receivers and rise time allow within its tolerance.`,
@@ -137,16 +141,21 @@ export function tieNetFixes(design: Design, finding: Finding, result: CheckResul
   ];
   const fixes: QuickFix[] = [];
   for (const end of ends) {
-    const value = drivers === 0 ? TIE_OHMS : TIE_VALUES.find((r) => {
-      const trial = tryOn(design, (d) => setNetPull(d, net.id, { to: end.to, ohms: r }));
-      return newErrors(result.findings, check(trial.design).findings).length === 0;
-    });
+    const value =
+      drivers === 0
+        ? TIE_OHMS
+        : TIE_VALUES.find((r) => {
+            const trial = tryOn(design, (d) => setNetPull(d, net.id, { to: end.to, ohms: r }));
+            return newErrors(result.findings, check(trial.design).findings).length === 0;
+          });
     if (value === undefined) continue;
     const pull: Pull = { to: end.to, ohms: value };
     fixes.push({
       id: end.id,
       finding: finding.id,
-      title: end.up ? `Pull ${netName(net)} up to ${end.to} with ${ohms(value)}` : `Pull ${netName(net)} down with ${ohms(value)}`,
+      title: end.up
+        ? `Pull ${netName(net)} up to ${end.to} with ${ohms(value)}`
+        : `Pull ${netName(net)} down with ${ohms(value)}`,
       sentence: end.up
         ? `Adds a ${ohms(value)} pull-up from ${netName(net)} to ${end.to}, so that its inputs read high whenever nothing drives the net.`
         : `Adds a ${ohms(value)} pull-down from ${netName(net)} to ground, so that its inputs read low whenever nothing drives the net.`,

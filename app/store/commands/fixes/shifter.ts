@@ -37,21 +37,43 @@ interface Plan {
   readonly at: { x: number; y: number };
 }
 
-function split(draft: Draft<Design>, plan: Plan, lowOhms: number, highOhms: number): Refusal | void {
+function split(draft: Draft<Design>, plan: Plan, lowOhms: number, highOhms: number): Refusal | undefined {
   const net = draft.nets.find((n) => n.id === plan.net);
   if (net === undefined) return refuse(`There is no net ${plan.net}.`);
-  if (takenIds(draft as Design).some((id) => id === plan.fet || id === plan.lowPull || id === plan.highPull)) return refuse('The designators the fix would take are in use.');
+  if (takenIds(draft as Design).some((id) => id === plan.fet || id === plan.lowPull || id === plan.highPull))
+    return refuse('The designators the fix would take are in use.');
   if (draft.nets.some((n) => n.id === plan.lowNet)) return refuse(`There is already a net ${plan.lowNet}.`);
   const low = new Set(plan.lowPins);
-  if (!plan.lowPins.every((k) => net.pins.includes(k))) return refuse(`${plan.net} has changed since the fix was offered.`);
+  if (!plan.lowPins.every((k) => net.pins.includes(k)))
+    return refuse(`${plan.net} has changed since the fix was offered.`);
   net.pins = [...net.pins.filter((k) => !low.has(k)), `${plan.fet}.D`, `${plan.highPull}.1`];
   delete net.pull;
   delete net.route;
-  draft.nets.push({ id: plan.lowNet, ...(net.label === undefined ? {} : { label: `${net.label}_${plan.low}` }), pins: [...plan.lowPins, `${plan.fet}.S`, `${plan.lowPull}.1`] });
+  draft.nets.push({
+    id: plan.lowNet,
+    ...(net.label === undefined ? {} : { label: `${net.label}_${plan.low}` }),
+    pins: [...plan.lowPins, `${plan.fet}.S`, `${plan.lowPull}.1`],
+  });
   const parts: Discrete[] = [
     { id: plan.fet, kind: 'fet-shifter', label: `${netName(net)} shifter`, gate: plan.low, ...FET, position: plan.at },
-    { id: plan.highPull, kind: 'resistor', label: `${netName(net)} pull-up, ${plan.high} side`, ohms: highOhms, tolerance: PULL_TOLERANCE, tie: { '2': plan.high }, position: { x: plan.at.x + 140, y: plan.at.y } },
-    { id: plan.lowPull, kind: 'resistor', label: `${netName(net)} pull-up, ${plan.low} side`, ohms: lowOhms, tolerance: PULL_TOLERANCE, tie: { '2': plan.low }, position: { x: plan.at.x - 140, y: plan.at.y } },
+    {
+      id: plan.highPull,
+      kind: 'resistor',
+      label: `${netName(net)} pull-up, ${plan.high} side`,
+      ohms: highOhms,
+      tolerance: PULL_TOLERANCE,
+      tie: { '2': plan.high },
+      position: { x: plan.at.x + 140, y: plan.at.y },
+    },
+    {
+      id: plan.lowPull,
+      kind: 'resistor',
+      label: `${netName(net)} pull-up, ${plan.low} side`,
+      ohms: lowOhms,
+      tolerance: PULL_TOLERANCE,
+      tie: { '2': plan.low },
+      position: { x: plan.at.x - 140, y: plan.at.y },
+    },
   ];
   draft.discretes = [...(draft.discretes ?? []), ...parts];
 }
@@ -86,9 +108,21 @@ export function fetShifterFix(design: Design, finding: Finding): QuickFix | unde
   const lowPull = freshId('R', taken);
   const highPull = freshId('R', [...taken, lowPull]);
   const plan: Plan = {
-    net: net.id, lowNet: uniqueId(`${net.id}_${low}`, design.nets.map((n) => n.id)), low, high, lowPins: rails.get(low)!,
-    fet, lowPull, highPull,
-    at: { x: Math.round(xs.reduce((a, b) => a + b, 0) / xs.length), y: Math.round(ys.reduce((a, b) => a + b, 0) / ys.length) + 120 },
+    net: net.id,
+    lowNet: uniqueId(
+      `${net.id}_${low}`,
+      design.nets.map((n) => n.id),
+    ),
+    low,
+    high,
+    lowPins: rails.get(low)!,
+    fet,
+    lowPull,
+    highPull,
+    at: {
+      x: Math.round(xs.reduce((a, b) => a + b, 0) / xs.length),
+      y: Math.round(ys.reduce((a, b) => a + b, 0) / ys.length) + 120,
+    },
   };
   // Size both pull-ups by pull-range on a trial with the usual value.
   const trial = tryOn(design, (d) => split(d, plan, TRIAL_OHMS, TRIAL_OHMS));
@@ -99,7 +133,12 @@ export function fetShifterFix(design: Design, finding: Finding): QuickFix | unde
   if (lowValue === undefined || highValue === undefined) return undefined;
   // Offered only when the sized circuit itself passes: each driver sinks both pull-ups, the FET turns on.
   const sized = tryOn(design, (d) => split(d, plan, lowValue.ohms, highValue.ohms));
-  if (check(sized.design).findings.some((f) => f.rule === 'fet-shifter' && f.severity === 'error' && f.parts.includes(fet))) return undefined;
+  if (
+    check(sized.design).findings.some(
+      (f) => f.rule === 'fet-shifter' && f.severity === 'error' && f.parts.includes(fet),
+    )
+  )
+    return undefined;
   const ohms = (r: number) => formatQuantity(r, 'Ω');
   return {
     id: 'fet-shifter',

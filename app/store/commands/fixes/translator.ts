@@ -52,7 +52,8 @@ export interface TranslatorLayout {
   readonly newNetLabel: string;
 }
 
-const profileFor = (direction: Direction) => (direction === 'open-drain' ? TRANSLATOR_OPEN_DRAIN : TRANSLATOR_PUSH_PULL);
+const profileFor = (direction: Direction) =>
+  direction === 'open-drain' ? TRANSLATOR_OPEN_DRAIN : TRANSLATOR_PUSH_PULL;
 
 /** How many channels a translator part has: its pins `A`, `A2`, `A3`, … */
 function channelsOf(part: Part): number {
@@ -101,16 +102,31 @@ export function layoutTranslator(design: Design, plan: TranslatorPlan, into?: st
     if (onB) bDrives = true;
     else aDrives = true;
   }
-  if (aPins.length === 0 || bPins.length === 0) return refuse(`Net ${plan.net} has no pins on both sides of the crossing.`);
+  if (aPins.length === 0 || bPins.length === 0)
+    return refuse(`Net ${plan.net} has no pins on both sides of the crossing.`);
   const direction: Direction =
     drivers > 0 && openDrain === drivers ? 'open-drain' : aDrives && bDrives ? 'both' : bDrives ? 'b-to-a' : 'a-to-b';
-  const newNetId = uniqueId(`${net.id}_${plan.railB}`, design.nets.map((n) => n.id));
+  const newNetId = uniqueId(
+    `${net.id}_${plan.railB}`,
+    design.nets.map((n) => n.id),
+  );
   const halves = { net, aPins, bPins, direction, newNetId, newNetLabel: `${netName(net)}_${plan.railB}` };
   if (into === undefined) {
-    return { ...halves, partId: freshId('U', design.parts.map((p) => p.id)), a: 'A', b: 'B', channel: 1, existing: false };
+    return {
+      ...halves,
+      partId: freshId(
+        'U',
+        design.parts.map((p) => p.id),
+      ),
+      a: 'A',
+      b: 'B',
+      channel: 1,
+      existing: false,
+    };
   }
   const host = translatorWithRoom(design, plan, direction);
-  if (host === undefined || host.id !== into) return refuse(`Translator ${into} has no free channel between ${plan.railA} and ${plan.railB} for this net.`);
+  if (host === undefined || host.id !== into)
+    return refuse(`Translator ${into} has no free channel between ${plan.railA} and ${plan.railB} for this net.`);
   const channel = channelsOf(host) + 1;
   return { ...halves, partId: host.id, a: `A${channel}`, b: `B${channel}`, channel, existing: true };
 }
@@ -136,14 +152,22 @@ function centre(design: Design, keys: readonly string[]): { x: number; y: number
 /** The two pins of one channel: A on the part's rail, B on rail B; roles from the direction. */
 function channelPins(layout: TranslatorLayout, railB: string, aSide: Pin['side'], bSide: Pin['side']): [Pin, Pin] {
   const pin = (id: string, onB: boolean, role: Pin['role'], drive?: Pin['drive']): Pin => ({
-    id, role, ...(drive === undefined ? {} : { drive }), ...(onB ? { rail: railB } : {}), side: onB ? bSide : aSide,
+    id,
+    role,
+    ...(drive === undefined ? {} : { drive }),
+    ...(onB ? { rail: railB } : {}),
+    side: onB ? bSide : aSide,
   });
   const { a, b } = layout;
   switch (layout.direction) {
-    case 'open-drain': return [pin(a, false, 'bidir', 'open-drain'), pin(b, true, 'bidir', 'open-drain')];
-    case 'both': return [pin(a, false, 'bidir'), pin(b, true, 'bidir')];
-    case 'b-to-a': return [pin(a, false, 'output'), pin(b, true, 'input')];
-    default: return [pin(a, false, 'input'), pin(b, true, 'output')];
+    case 'open-drain':
+      return [pin(a, false, 'bidir', 'open-drain'), pin(b, true, 'bidir', 'open-drain')];
+    case 'both':
+      return [pin(a, false, 'bidir'), pin(b, true, 'bidir')];
+    case 'b-to-a':
+      return [pin(a, false, 'output'), pin(b, true, 'input')];
+    default:
+      return [pin(a, false, 'input'), pin(b, true, 'output')];
   }
 }
 
@@ -182,7 +206,12 @@ function addChannel(part: Draft<Part>, plan: TranslatorPlan, layout: TranslatorL
  * The route of each half: wires within a side stay; a wire that crossed now ends on the
  * translator's pin of each side. None when the net had no route (the editor then draws a chain).
  */
-function splitRoute(net: Net, bSet: ReadonlySet<string>, xa: string, xb: string): { a?: [string, string][]; b?: [string, string][] } {
+function splitRoute(
+  net: Net,
+  bSet: ReadonlySet<string>,
+  xa: string,
+  xb: string,
+): { a?: [string, string][]; b?: [string, string][] } {
   if (net.route === undefined) return {};
   const a: [string, string][] = [];
   const b: [string, string][] = [];
@@ -217,7 +246,7 @@ function splitPulls(net: Net, plan: TranslatorPlan, direction: Direction): { a?:
 }
 
 /** Split the net and insert the translator (or, with `into`, a new channel of that one) into a draft. */
-export function insertTranslator(draft: Draft<Design>, plan: TranslatorPlan, into?: string): Refusal | void {
+export function insertTranslator(draft: Draft<Design>, plan: TranslatorPlan, into?: string): Refusal | undefined {
   const design = draft as Design;
   const layout = layoutTranslator(design, plan, into);
   if (isRefusal(layout)) return layout;

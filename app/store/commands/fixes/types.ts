@@ -27,5 +27,5 @@ export interface QuickFix {
    * The panel opens that waiver for editing.
    */
   readonly followUp?: { readonly kind: 'complete-waiver-note'; readonly net: string; readonly rule: string };
-  apply(draft: Draft<Design>): Refusal | void;
+  apply(draft: Draft<Design>): Refusal | undefined;
 }
