@@ -7,13 +7,14 @@
 import { memo } from 'react';
 import type { Pin } from '../../rules/model/schema.ts';
 import type { Side } from './chipLayout.ts';
+import { driveOf } from '../../rules/model/pinDefaults.ts';
 
 export type GlyphKind = 'in' | 'out-pp' | 'out-ts' | 'out-od' | 'bi-ts' | 'bi-pp' | 'bi-od';
 
 /** The glyph of a pin, with the format's defaults for `drive` (push-pull for outputs, three-state for bidir). */
 export function glyphKind(pin: Pick<Pin, 'role' | 'drive'>): GlyphKind {
   if (pin.role === 'input') return 'in';
-  const drive = pin.drive ?? (pin.role === 'output' ? 'push-pull' : 'three-state');
+  const drive = driveOf(pin);
   const head = pin.role === 'output' ? 'out' : 'bi';
   return `${head}-${drive === 'push-pull' ? 'pp' : drive === 'three-state' ? 'ts' : 'od'}` as GlyphKind;
 }

@@ -1,12 +1,9 @@
 /** Where a chip's pins go, and how big the chip is drawn (the CSS in styles.css follows these numbers). */
 import type { Part, Pin } from '../../rules/model/schema.ts';
 
-export type Side = NonNullable<Pin['side']>;
+import { sideOf, type Side } from '../../rules/model/pinDefaults.ts';
 
-/** The side the design gives, else inputs left and outputs and bidir pins right. */
-export function sideOf(pin: Pin): Side {
-  return pin.side ?? (pin.role === 'input' ? 'left' : 'right');
-}
+export { sideOf, type Side };
 
 export interface PinLayout {
   readonly left: readonly Pin[];

@@ -1,4 +1,4 @@
 /** The rule engine's public face. */
 export { ALL_ON, ALL_ON_LABEL, powerStates, railStates, effectiveSettings } from './powerStates.ts';
-export { resolvePin, lookupProfile } from './resolve.ts';
+export { resolvePin } from './resolve.ts';
 export type * from './types.ts';

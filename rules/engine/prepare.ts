@@ -2,6 +2,7 @@
  * Preparing a net once per power state: its pins resolved, drivers and receivers by kind, pulls,
  * capacitance, load currents and the level analysis. Every rule reads this one view.
  */
+import { driveOf } from '../model/pinDefaults.ts';
 import type { Design, Discrete, Net, PinState, Pull } from '../model/schema.ts';
 import { pullEnds } from '../model/pullRange.ts';
 import { analyseNet } from './analyse.ts';
@@ -38,11 +39,12 @@ export function pinView(at: PinEntry, rails: RailStates, state?: PowerState): Pi
 
 function withState(view: PinView, set: PinState): PinView {
   const role = set.role ?? view.role;
+  // A state that gives only a drive keeps the role; one that gives a role takes the format's
+  // default drive for it unless it names one.
   const drive =
     role === 'input'
       ? undefined
-      : (set.drive ??
-        (set.role === undefined ? view.drive : (view.pin.drive ?? (role === 'output' ? 'push-pull' : 'three-state'))));
+      : (set.drive ?? (set.role === undefined ? view.drive : driveOf({ role, drive: view.pin.drive })));
   const pull = set.pull === undefined ? view.pull : set.pull === null ? undefined : set.pull;
   return { ...view, role, drive, pull };
 }

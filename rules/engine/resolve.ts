@@ -4,7 +4,8 @@
  * Results are cached by the identity of the objects they came from, outside the document.
  */
 import type { Design, Params, Part, Pin, Profile } from '../model/schema.ts';
-import { builtinProfile } from '../profiles/index.ts';
+import { resolveProfile } from '../profiles/index.ts';
+import { driveOf, profileIdOf, railOf } from '../model/pinDefaults.ts';
 import type { ParamOrigin, PinView, ResolvedPin } from './types.ts';
 
 const PARAM_KEYS: readonly (keyof Params)[] = [
@@ -31,23 +32,6 @@ const PARAM_KEYS: readonly (keyof Params)[] = [
   'minExternalPull',
   'maxLoadCapacitance',
 ];
-
-const localProfileMaps = new WeakMap<readonly Profile[], ReadonlyMap<string, Profile>>();
-
-/** The profile an id names in this design: a design-local one shadows a built-in one. */
-export function lookupProfile(design: Design, id: string): Profile | undefined {
-  const local = design.profiles;
-  if (local !== undefined && local.length > 0) {
-    let map = localProfileMaps.get(local);
-    if (map === undefined) {
-      map = new Map(local.map((p) => [p.id, p]));
-      localProfileMaps.set(local, map);
-    }
-    const hit = map.get(id);
-    if (hit !== undefined) return hit;
-  }
-  return builtinProfile(id);
-}
 
 /**
  * A pin's resolution and its views in the two power conditions, made once each. The engine's
@@ -145,7 +129,7 @@ function mergeParams(pin: Params | undefined, part: Params | undefined, profile:
 }
 
 function entryOf(design: Design, part: Part, pin: Pin): CacheEntry {
-  const profileId = pin.profile ?? part.profile;
+  const profileId = profileIdOf(part, pin);
   const hit = cache.get(pin);
   if (
     hit !== undefined &&
@@ -156,10 +140,10 @@ function entryOf(design: Design, part: Part, pin: Pin): CacheEntry {
   ) {
     // The built-in library never changes: with the same local profiles the lookup is the same.
     if (hit.localProfiles === design.profiles) return hit;
-    const profile = lookupProfile(design, profileId);
+    const profile = resolveProfile(design, profileId);
     if (hit.profile === profile) return hit;
   }
-  const profile = lookupProfile(design, profileId);
+  const profile = resolveProfile(design, profileId);
 
   let params: Record<string, unknown>;
   let origin: Partial<Record<keyof Params, ParamOrigin>>;
@@ -170,14 +154,14 @@ function entryOf(design: Design, part: Part, pin: Pin): CacheEntry {
   } else {
     ({ params, origin } = mergeParams(pin.params, part.params, profile?.params));
   }
-  const drive = pin.role === 'input' ? undefined : (pin.drive ?? (pin.role === 'bidir' ? 'three-state' : 'push-pull'));
+  const drive = driveOf(pin);
   const resolved: ResolvedPin = {
     key: `${part.id}.${pin.id}`,
     partId: part.id,
     pin,
     role: pin.role,
     drive,
-    rail: pin.rail ?? part.rail,
+    rail: railOf(part, pin),
     profileId,
     profile,
     params: params as Params,

@@ -24,5 +24,7 @@ export function resolveProfile(
   design: { readonly profiles?: readonly Profile[] | undefined },
   id: string,
 ): Profile | undefined {
+  // A design holds few local profiles (a handful): a scan costs less than keeping an index of
+  // them in step with edits, and reads an editor's draft as it is now.
   return design.profiles?.find((p) => p.id === id) ?? byId.get(id);
 }

@@ -7,7 +7,8 @@ import type { Design } from '../model/schema.ts';
 import { crossingRails } from '../engine/paths.ts';
 import type { CheckResult, Finding, PowerState, Severity } from '../engine/types.ts';
 import { summarize } from '../engine/findings.ts';
-import { lookupProfile } from '../engine/resolve.ts';
+import { resolveProfile } from '../profiles/index.ts';
+import { profileIdOf } from '../model/pinDefaults.ts';
 import { effectiveSettings } from '../engine/powerStates.ts';
 import { CAUTIONS } from './cautions.ts';
 import type { Crossing, FailOn, Report, ReportFinding } from './reportSchema.ts';
@@ -95,10 +96,10 @@ function usedProfiles(design: Design): Report['profiles'] {
   };
   for (const part of design.parts) {
     if (part.pins.length === 0) use(part.profile);
-    for (const pin of part.pins) use(pin.profile ?? part.profile);
+    for (const pin of part.pins) use(profileIdOf(part, pin));
   }
   return ids.flatMap((id) => {
-    const p = lookupProfile(design, id);
+    const p = resolveProfile(design, id);
     return p === undefined ? [] : [{ id: p.id, label: p.label, source: p.source }];
   });
 }

@@ -114,3 +114,50 @@ describe('the folder structure', () => {
     ]);
   });
 });
+
+/**
+ * What the format says once, said once: each of these defaults or derivations has one home in
+ * rules/model/ that the engine, the report and the editor import. A copy elsewhere drifts (the
+ * canvas once drew a bidir pin's default drive differently from the engine's).
+ */
+const SAID_ONCE: readonly { what: string; home: string; pattern: RegExp }[] = [
+  {
+    what: "a pin's default drive",
+    home: 'rules/model/pinDefaults.ts',
+    pattern: /'three-state'\s*:\s*'push-pull'|'push-pull'\s*:\s*'three-state'/,
+  },
+  { what: "a pin's default side", home: 'rules/model/pinDefaults.ts', pattern: /'input'\s*\?\s*'left'\s*:\s*'right'/ },
+  {
+    what: "a pin's rail from its part",
+    home: 'rules/model/pinDefaults.ts',
+    pattern: /\bpin\.rail\s*\?\?\s*[\w.]*part\.rail\b/,
+  },
+  {
+    what: "a pin's profile from its part",
+    home: 'rules/model/pinDefaults.ts',
+    pattern: /\bpin\.profile\s*\?\?\s*[\w.]*part\.profile\b/,
+  },
+  {
+    what: "a net's wires from its route",
+    home: 'rules/model/wiring.ts',
+    pattern: /for \(const \[a, b\] of net\.route \?\? \[\]\)/,
+  },
+  {
+    what: 'a profile looked up by id',
+    home: 'rules/profiles/index.ts',
+    pattern: /profiles\?\.find\(\(p\) => p\.id === id\)\s*\?\?/,
+  },
+];
+
+describe('shared model helpers', () => {
+  const files = [...rulesFiles, ...sources('app')];
+  it.each(SAID_ONCE)('$what lives in $home only', ({ home, pattern }) => {
+    const at = files.filter((f) => pattern.test(readFileSync(join(root, f), 'utf8')));
+    expect(at).toEqual([home]);
+  });
+
+  it('a planted copy is found', () => {
+    const planted = "const drive = pin.drive ?? (pin.role === 'output' ? 'push-pull' : 'three-state');";
+    expect(SAID_ONCE[0]!.pattern.test(planted)).toBe(true);
+  });
+});

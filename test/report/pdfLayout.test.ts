@@ -6,15 +6,15 @@
  */
 import { describe, expect, it } from 'vitest';
 import type { Net, Part, Pin } from '../../rules/model/schema.ts';
+import { sideOf } from '../../rules/model/pinDefaults.ts';
+import { netWires } from '../../rules/model/wiring.ts';
 import {
   BoxIndex,
   STUB,
   layoutDiagram,
-  netWires,
   partBox,
   routePoints,
   routeWire,
-  sideOf,
   spreadChannels,
   type PartBox,
   type PinPlace,

@@ -9,6 +9,7 @@ import { ParamEditor } from '../ParamEditor.tsx';
 import { ProfileOptions } from '../ProfileOptions.tsx';
 import { addRow, moveRow, removeRow, rowProblems, setRow, type ChipDraft } from './chipDraft.ts';
 import { inheritedParam } from './inherited.ts';
+import { profileIdOf } from '../../../rules/model/pinDefaults.ts';
 
 const DRIVE_DEFAULT: Readonly<Record<Pin['role'], string>> = { input: '—', output: 'push-pull', bidir: 'three-state' };
 
@@ -191,9 +192,7 @@ export function PinTable({
                         params={pin.params}
                         label={`Overrides of pin ${name}`}
                         testId={`pin-${k}-param`}
-                        fallback={(key) =>
-                          inheritedParam(design, draft.part.params, pin.profile ?? draft.part.profile, key)
-                        }
+                        fallback={(key) => inheritedParam(design, draft.part.params, profileIdOf(draft.part, pin), key)}
                         onChange={(key, value) => {
                           set(row.key, { params: withParam(pin.params, key, value) });
                           return { ok: true, changed: true };

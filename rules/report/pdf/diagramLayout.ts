@@ -5,6 +5,8 @@
  * import app/), so that parts the editor shows apart are apart on paper too. Pure: no jsPDF.
  */
 import type { Design, Net, Part, Pin } from '../../model/schema.ts';
+import { sideOf, type Side } from '../../model/pinDefaults.ts';
+import { netWires } from '../../model/wiring.ts';
 import { STUB } from '../../routing/channels.ts';
 import { hopPolyline, markRoutes } from '../../routing/marks.ts';
 import type { Box, WireSpec } from '../../routing/types.ts';
@@ -19,8 +21,6 @@ export {
   STUB,
   type Route,
 } from '../../routing/channels.ts';
-
-export type Side = NonNullable<Pin['side']>;
 
 /** The editor's chip measures, canvas units. */
 export const CHIP = { width: 208, header: 44, row: 20, strip: 30, pad: 4 } as const;
@@ -53,11 +53,6 @@ export interface Bounds {
   readonly minY: number;
   readonly maxX: number;
   readonly maxY: number;
-}
-
-/** The side the design gives, else inputs left and outputs and bidir pins right (as the editor). */
-export function sideOf(pin: Pin): Side {
-  return pin.side ?? (pin.role === 'input' ? 'left' : 'right');
 }
 
 /**
@@ -98,41 +93,6 @@ export function partBox(part: Part): PartBox {
     place(pin, 'bottom', { x: spread(k, by.bottom.length), y: y + height });
   });
   return { part, x, y, width, height, headerTop: y + topStrip, pins };
-}
-
-/**
- * The pin pairs drawn as wires: the net's `route` pairs that name two different pins of the
- * net (each pair once), then, for pins that the route leaves unconnected, a chain through
- * the pins in the net's order. So a net without a route is a chain, and every pin is reached.
- */
-export function netWires(net: Net): [string, string][] {
-  const on = new Set(net.pins);
-  const parent = new Map<string, string>(net.pins.map((p) => [p, p]));
-  const find = (p: string): string => {
-    let r = p;
-    while (parent.get(r) !== r) r = parent.get(r)!;
-    parent.set(p, r);
-    return r;
-  };
-  const wires: [string, string][] = [];
-  const seen = new Set<string>();
-  for (const [a, b] of net.route ?? []) {
-    if (a === b || !on.has(a) || !on.has(b)) continue;
-    const key = a < b ? `${a}\u0000${b}` : `${b}\u0000${a}`;
-    if (seen.has(key)) continue;
-    seen.add(key);
-    wires.push([a, b]);
-    parent.set(find(a), find(b));
-  }
-  const first = net.pins[0];
-  for (let k = 1; k < net.pins.length; k++) {
-    const p = net.pins[k]!;
-    if (first !== undefined && find(p) !== find(first)) {
-      wires.push([net.pins[k - 1]!, p]);
-      parent.set(find(p), find(first));
-    }
-  }
-  return wires;
 }
 
 /** One wire of a net, ready to draw. */

@@ -9,7 +9,7 @@ import type { Design } from '../../../../rules/model/schema.ts';
 import { levelAt, type Level } from '../../../../rules/levels/level.ts';
 import { below } from '../../../../rules/levels/compare.ts';
 import { formatQuantity } from '../../../../rules/levels/units.ts';
-import { lookupProfile } from '../../../../rules/engine/resolve.ts';
+import { resolveProfile } from '../../../../rules/profiles/index.ts';
 import type { FindingOf, ResolvedPin } from '../../../../rules/engine/types.ts';
 import { refuse, type Refusal } from '../command.ts';
 import { pinAt, rangeOfRail, resolvedPin } from './lookup.ts';
@@ -94,7 +94,7 @@ export function ttlInputsFix(design: Design, finding: FindingOf<'level-high'>): 
   const r = resolvedPin(design, key);
   if (r === undefined || r.params.schmitt !== undefined || r.origin.vih !== 'profile') return undefined;
   const to = TTL_INPUT_VARIANT[r.profileId];
-  const variant = to === undefined ? undefined : lookupProfile(design, to);
+  const variant = to === undefined ? undefined : resolveProfile(design, to);
   const vih = variant?.params.vih;
   if (to === undefined || variant === undefined || vih === undefined) return undefined;
   if (!railFits(design, r.rail, variant.params.vddRange)) return undefined;
@@ -130,7 +130,7 @@ export function tolerantFamilyFixes(design: Design, finding: FindingOf<'overvolt
   if (range === undefined) return [];
   const fixed = fixedThreshold(r.params.vih);
   const candidates = TOLERANT_FAMILIES.filter((id) => id !== r.profileId)
-    .map((id) => lookupProfile(design, id))
+    .map((id) => resolveProfile(design, id))
     .filter((p) => p !== undefined && p.params.viMax !== undefined && railFits(design, r.rail, p.params.vddRange))
     .filter((p) => !below(levelAt(p!.params.viMax!, range.min), vNet))
     .sort((p, q) => Number(fixedThreshold(q!.params.vih) === fixed) - Number(fixedThreshold(p!.params.vih) === fixed));

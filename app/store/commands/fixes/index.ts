@@ -9,7 +9,8 @@ import { GROUND } from '../../../../rules/model/references.ts';
 import type { Command } from '../command.ts';
 import { addWaiver } from '../waivers.ts';
 import { markTolerantFix, markUnpoweredSafeFix, tolerantFamilyFixes, ttlInputsFix } from './family.ts';
-import { driveOfPin, findNet, pinAt, railOfPin } from './lookup.ts';
+import { findNet, pinAt, railOfPin } from './lookup.ts';
+import { driveOf } from '../../../../rules/model/pinDefaults.ts';
 import { addPullFix, pullValueFix, tieNetFixes, tiePinFixes } from './pulls.ts';
 import { translatorFixes } from './translator.ts';
 import { fetShifterFix } from './shifter.ts';
@@ -86,7 +87,7 @@ function contentionWaiver(f: FindingOf<'contention'>): QuickFix | undefined {
 function sourceRail(design: Design, key: string): string | undefined {
   const at = pinAt(design, key);
   if (at === undefined) return undefined;
-  const drive = driveOfPin(at.pin);
+  const drive = driveOf(at.pin);
   return drive !== undefined && drive !== 'open-drain' ? railOfPin(at) : at.pin.pull?.to;
 }
 

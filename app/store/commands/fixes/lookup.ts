@@ -1,9 +1,10 @@
 /** Reading a design (or a draft of one) by id: what the fixes need to find their targets. */
-import type { Design, Net, Part, Pin, PinDrive } from '../../../../rules/model/schema.ts';
+import type { Design, Net, Part, Pin } from '../../../../rules/model/schema.ts';
 import { railRange, type Range } from '../../../../rules/levels/rails.ts';
 import { resolvePin } from '../../../../rules/engine/resolve.ts';
 import type { ResolvedPin } from '../../../../rules/engine/types.ts';
 import { splitPinKey } from '../command.ts';
+import { railOf } from '../../../../rules/model/pinDefaults.ts';
 
 export interface PinAt {
   readonly part: Part;
@@ -26,13 +27,7 @@ export function resolvedPin(design: Design, key: string): ResolvedPin | undefine
 
 /** The rail a pin sits on: its own, else its part's. */
 export function railOfPin(at: PinAt): string {
-  return at.pin.rail ?? at.part.rail;
-}
-
-/** The drive of an output or bidir pin, defaults filled in (design-format.md, "Pin"); undefined for inputs. */
-export function driveOfPin(pin: Pin): PinDrive | undefined {
-  if (pin.role === 'input') return undefined;
-  return pin.drive ?? (pin.role === 'bidir' ? 'three-state' : 'push-pull');
+  return railOf(at.part, at.pin);
 }
 
 /** The net with this id. */

@@ -13,7 +13,8 @@ import { formatQuantity } from '../../../../rules/levels/units.ts';
 import type { Design, Discrete } from '../../../../rules/model/schema.ts';
 import { freshId, refuse, type Refusal } from '../command.ts';
 import { takenIds } from '../discretes.ts';
-import { driveOfPin, findNet, lowestRail, netName, pinAt, railOfPin, uniqueId } from './lookup.ts';
+import { findNet, lowestRail, netName, pinAt, railOfPin, uniqueId } from './lookup.ts';
+import { driveOf } from '../../../../rules/model/pinDefaults.ts';
 import { tryOn } from './preview.ts';
 import { pullValueFrom } from './pulls.ts';
 import type { QuickFix } from './types.ts';
@@ -92,7 +93,7 @@ export function fetShifterFix(design: Design, finding: Finding): QuickFix | unde
   for (const key of net.pins) {
     const at = pinAt(design, key);
     if (at === undefined) return undefined; // already joined to a part between chips
-    const drive = driveOfPin(at.pin);
+    const drive = driveOf(at.pin);
     if (drive !== undefined && drive !== 'open-drain') return undefined;
     if (drive === 'open-drain') openDrain++;
     const rail = railOfPin(at);

@@ -7,7 +7,8 @@ import type { Draft } from 'immer';
 import type { Design, Net, Part, Pin, Pull } from '../../../../rules/model/schema.ts';
 import { GROUND } from '../../../../rules/model/references.ts';
 import { freshId, refuse, splitPinKey, type Refusal } from '../command.ts';
-import { driveOfPin, findNet, netName, pinAt, railOfPin, uniqueId } from './lookup.ts';
+import { findNet, netName, pinAt, railOfPin, uniqueId } from './lookup.ts';
+import { driveOf } from '../../../../rules/model/pinDefaults.ts';
 import { chipSize, freePlace } from '../../../canvas/chipLayout.ts';
 import type { QuickFix } from './types.ts';
 
@@ -95,7 +96,7 @@ export function layoutTranslator(design: Design, plan: TranslatorPlan, into?: st
     if (at === undefined) return refuse(`Net ${plan.net} names a pin that does not exist: ${key}.`);
     const onB = railOfPin(at) === plan.railB;
     (onB ? bPins : aPins).push(key);
-    const drive = driveOfPin(at.pin);
+    const drive = driveOf(at.pin);
     if (drive === undefined) continue;
     drivers++;
     if (drive === 'open-drain') openDrain++;
