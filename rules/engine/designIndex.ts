@@ -6,7 +6,7 @@
  */
 import type { Design, Discrete, Net, Part, Pin } from '../model/schema.ts';
 import { DISCRETE_PINS } from '../model/schema.ts';
-import { resolution, type Resolution } from './resolve.ts';
+import { makeResolution, type Resolution } from './resolve.ts';
 
 /** What the index remembers of a pin, to take it out again when the pin changes. */
 export interface PinEntry {
@@ -74,6 +74,8 @@ export class DesignIndex {
   readonly discretes = new Map<string, Discrete>();
   /** Net id → the ids of the discretes with a pin on it. */
   readonly linksOfNet = new Map<string, Set<string>>();
+
+  private lastGroup: { rail: string; profile: string; key: string } | undefined;
 
   /** An index of every part and net. */
   static build(design: Design): DesignIndex {
@@ -149,7 +151,7 @@ export class DesignIndex {
   }
 
   addPin(design: Design, part: Part, pin: Pin): void {
-    const res = resolution(design, part, pin);
+    const res = makeResolution(design, part, pin);
     const key = res.resolved.key;
     const vddRange = res.resolved.params.vddRange;
     const entry: PinEntry = {
@@ -163,7 +165,13 @@ export class DesignIndex {
     };
     this.pins.set(key, entry);
     if (!this.netOfPin.has(key)) this.lone.add(key);
-    const gk = groupKey(entry.rail, entry.profile);
+    // Pins of one part nearly always share its rail and profile: reuse the last group's key.
+    const last = this.lastGroup;
+    const gk =
+      last !== undefined && last.rail === entry.rail && last.profile === entry.profile
+        ? last.key
+        : groupKey(entry.rail, entry.profile);
+    if (last === undefined || last.key !== gk) this.lastGroup = { rail: entry.rail, profile: entry.profile, key: gk };
     let group = this.groups.get(gk);
     if (group === undefined) {
       group = { pins: new Set(), ranges: new Map() };

@@ -2,7 +2,7 @@
 import type { Net } from '../model/schema.ts';
 import type { Draft, MessageFns, Rule } from './rule.ts';
 import { RULE_IDS, type RuleId } from '../model/ruleIds.ts';
-import type { Finding, FindingOf, PowerState, Summary } from './types.ts';
+import type { Finding, FindingOf, PowerState, Severity, Summary } from './types.ts';
 import type { FindingValues } from './values.ts';
 import { finiteOrNull, UNDECIDABLE, UNDECIDABLE_HINT, undecidableMessage, undecidablePaths } from './undecidable.ts';
 
@@ -26,40 +26,60 @@ export function completeFinding<M extends MessageFns>(
   const at = net?.id ?? draft.subject ?? place;
   const id = findingId(rule.id, at, state.id, draft.suffix);
   const bad = undecidablePaths(draft.values, draft.data);
-  const judged =
+  // One object literal per finding, its optional keys last, and no spreads: a check makes tens
+  // of thousands of these, and spreads cost a copy each.
+  const out: {
+    id: string;
+    rule: string;
+    scenario: string;
+    net: string | null;
+    place: string;
+    suffix?: string;
+    pins: readonly string[];
+    parts: readonly string[];
+    severity: Severity;
+    message: string;
+    messageId: string;
+    values: unknown;
+    hint: string;
+    waived?: string;
+  } =
     bad.length === 0
       ? {
+          id,
+          rule: rule.id,
+          scenario: state.id,
+          net: net?.id ?? null,
+          place: at,
+          pins: draft.pins,
+          parts: draft.parts,
           severity: draft.severity,
           message: rule.meta.messages[draft.messageId]!(draft.data),
           messageId: draft.messageId,
           values: draft.values,
           hint: draft.hint ?? rule.meta.hint,
-          // A finding that could not be decided is never waived: a waiver accepts a known risk.
-          waived: net === null ? undefined : waiverNote(net, rule.id, state.id),
         }
       : {
-          severity: 'error' as const,
+          id,
+          rule: rule.id,
+          scenario: state.id,
+          net: net?.id ?? null,
+          place: at,
+          pins: draft.pins,
+          parts: draft.parts,
+          severity: 'error',
           message: undecidableMessage(rule.meta.title, undecidableSubject(draft, net), bad, draft.values, draft.data),
           messageId: UNDECIDABLE,
           values: { ...finiteOrNull(draft.values), undecidable: bad },
           hint: UNDECIDABLE_HINT,
-          waived: undefined,
         };
-  const { waived, ...rest } = judged;
+  if (draft.suffix !== undefined) out.suffix = draft.suffix;
+  // A finding that could not be decided is never waived: a waiver accepts a known risk.
+  const waived = bad.length === 0 && net !== null ? waiverNote(net, rule.id, state.id) : undefined;
+  if (waived !== undefined) out.waived = waived;
   // The one place a finding is made: its rule and values come from one typed rule, which the
   // union of findings by rule cannot see through a generic rule.
-  return {
-    id,
-    rule: rule.id,
-    scenario: state.id,
-    net: net?.id ?? null,
-    place: at,
-    ...(draft.suffix === undefined ? {} : { suffix: draft.suffix }),
-    pins: draft.pins,
-    parts: draft.parts,
-    ...rest,
-    ...(waived === undefined ? {} : { waived }),
-  } as Finding;
+  return out as Finding;
 }
 
 /** What an undecided finding names in its message: the pin pair or pin, else the net (or the rail). */
@@ -93,15 +113,25 @@ function waiverNote(net: Net, rule: string, state: string): string | undefined {
  * `net` is the net it is on (null for a lone pin: no waivers).
  */
 export function restampFinding(f: Finding, state: PowerState, net: Net | null): Finding {
-  const { waived: _old, ...rest } = f;
+  const out = {
+    id: findingId(f.rule, f.place, state.id, f.suffix),
+    rule: f.rule,
+    scenario: state.id,
+    net: f.net,
+    place: f.place,
+    pins: f.pins,
+    parts: f.parts,
+    severity: f.severity,
+    message: f.message,
+    messageId: f.messageId,
+    values: f.values,
+    hint: f.hint,
+  } as { -readonly [K in keyof Finding]: Finding[K] };
+  if (f.suffix !== undefined) out.suffix = f.suffix;
   // A finding that could not be decided is never waived: a waiver accepts a known risk.
   const waived = net === null || f.messageId === UNDECIDABLE ? undefined : waiverNote(net, f.rule, state.id);
-  return {
-    ...rest,
-    id: findingId(f.rule, f.place, state.id, f.suffix),
-    scenario: state.id,
-    ...(waived === undefined ? {} : { waived }),
-  };
+  if (waived !== undefined) out.waived = waived;
+  return out as Finding;
 }
 
 const ruleOrder = new Map<string, number>(RULE_IDS.map((id, k) => [id, k]));

@@ -38,9 +38,10 @@ const PARAM_KEYS: readonly (keyof Params)[] = [
  * index keeps it per pin, so that preparing a net reaches a pin's view without a cache lookup.
  */
 export interface Resolution {
-  readonly resolved: ResolvedPin;
-  /** The resolved pin as seen powered [1] and unpowered [0], made when first asked for. */
-  readonly views: [PinView | undefined, PinView | undefined];
+  /** The resolved pin, which is also its view when powered. */
+  readonly resolved: PinView;
+  /** The resolved pin as seen unpowered [0], made when first asked for. */
+  readonly views: [PinView | undefined];
 }
 
 interface CacheEntry extends Resolution {
@@ -70,11 +71,13 @@ export function resolution(design: Design, part: Part, pin: Pin): Resolution {
 
 /** A resolution's view in a power state, powered or not: made once, then the same object while nothing it depends on changes. */
 export function viewOf(entry: Resolution, powered: boolean): PinView {
-  const k = powered ? 1 : 0;
-  let view = entry.views[k];
+  // The resolved pin is its own powered view (made with `powered: true`): one object per pin
+  // where most pins of a board are powered in every state.
+  if (powered) return entry.resolved;
+  let view = entry.views[0];
   if (view === undefined) {
-    // A literal of one fixed shape: every view shares a hidden class, which keeps the hot loops
-    // over pins monomorphic (an object spread does not).
+    // A literal of the resolved pin's own shape: every view shares a hidden class, which keeps
+    // the hot loops over pins monomorphic (an object spread does not).
     const r = entry.resolved;
     view = {
       key: r.key,
@@ -88,9 +91,9 @@ export function viewOf(entry: Resolution, powered: boolean): PinView {
       params: r.params,
       origin: r.origin,
       pull: r.pull,
-      powered,
+      powered: false,
     };
-    entry.views[k] = view;
+    entry.views[0] = view;
   }
   return view;
 }
@@ -140,11 +143,24 @@ function entryOf(design: Design, part: Part, pin: Pin): CacheEntry {
   ) {
     // The built-in library never changes: with the same local profiles the lookup is the same.
     if (hit.localProfiles === design.profiles) return hit;
-    const profile = resolveProfile(design, profileId);
-    if (hit.profile === profile) return hit;
+    if (hit.profile === resolveProfile(design, profileId)) return hit;
   }
-  const profile = resolveProfile(design, profileId);
+  const entry = makeEntry(design, part, pin, profileId);
+  cache.set(pin, entry);
+  return entry;
+}
 
+/**
+ * A pin's resolution made afresh, not cached: the engine's index keeps each pin's own and makes
+ * it again when the pin, its part or its profile changes, so a cache there would only cost (a
+ * weak map of every pin, which the garbage collector walks).
+ */
+export function makeResolution(design: Design, part: Part, pin: Pin): Resolution {
+  return makeEntry(design, part, pin, profileIdOf(part, pin));
+}
+
+function makeEntry(design: Design, part: Part, pin: Pin, profileId: string): CacheEntry {
+  const profile = resolveProfile(design, profileId);
   let params: Record<string, unknown>;
   let origin: Partial<Record<keyof Params, ParamOrigin>>;
   if (pin.params === undefined && part.params === undefined) {
@@ -155,7 +171,7 @@ function entryOf(design: Design, part: Part, pin: Pin): CacheEntry {
     ({ params, origin } = mergeParams(pin.params, part.params, profile?.params));
   }
   const drive = driveOf(pin);
-  const resolved: ResolvedPin = {
+  const resolved: PinView = {
     key: `${part.id}.${pin.id}`,
     partId: part.id,
     pin,
@@ -167,9 +183,10 @@ function entryOf(design: Design, part: Part, pin: Pin): CacheEntry {
     params: params as Params,
     origin,
     pull: pin.pull,
+    powered: true,
   };
   const entry: CacheEntry = {
-    views: [undefined, undefined],
+    views: [undefined],
     partId: part.id,
     partRail: part.rail,
     partParams: part.params,
@@ -178,7 +195,6 @@ function entryOf(design: Design, part: Part, pin: Pin): CacheEntry {
     profile,
     resolved,
   };
-  cache.set(pin, entry);
   return entry;
 }
 
