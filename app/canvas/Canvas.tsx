@@ -36,7 +36,7 @@ import { CANVAS_ID, fitViewOptions, TEMPLATE_MIME, usePlacePart } from './placem
 import { WireEdge } from './WireEdge.tsx';
 import { createRouteKeeper, type RouteKeeper } from './routes.ts';
 import { RouteContext } from './routeContext.ts';
-import { useCanvasKeys } from './useCanvasKeys.ts';
+import { useKeys } from '../keys/useKeys.ts';
 import { Dialogs } from '../panels/Dialogs.tsx';
 
 const nodeTypes = { chip: ChipNode, discrete: DiscreteNode };
@@ -147,7 +147,7 @@ export function Canvas() {
   useLayoutEffect(() => routes.update(parts, nets, discreteParts ?? []), [routes, parts, nets, discreteParts]);
   useEffect(() => () => routes.dispose(), [routes]);
   const place = usePlacePart();
-  useCanvasKeys();
+  useKeys();
 
   const onNodesChange = useCallback(
     (changes: NodeChange<AnyNode>[]) => {

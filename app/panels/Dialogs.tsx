@@ -7,5 +7,6 @@ export function Dialogs() {
   const dialog = useEditor((s) => s.dialog);
   if (dialog === null) return null;
   if (dialog.kind === 'chip') return <ChipDialog key={dialog.part ?? '(new)'} partId={dialog.part} />;
-  return <ShortcutsDialog />;
+  if (dialog.kind === 'keys') return <ShortcutsDialog />;
+  return null;
 }
