@@ -394,3 +394,10 @@ export function shortcutList(): { group: string; items: { keys: string[]; does: 
     ],
   }));
 }
+
+/** A command's keys as the list shows them, for a button's tooltip: `/ or Ctrl+K`. */
+export function keysOf(id: string): string {
+  const command = KEY_COMMANDS.find((c) => c.id === id);
+  if (command === undefined) throw new Error(`No key command "${id}"`);
+  return command.keys.map(keyLabel).join(' or ');
+}
