@@ -1,5 +1,5 @@
 /**
- * The search box at 1440 × 900: opened with its key from the canvas, a part, a net and a
+ * The search box at 1440 × 900: opened with its key from the canvas, a part, a pin, a net and a
  * finding found by part of a name, chosen (Enter, a click), and each then selected, with its
  * details open, and in view on the canvas although the view had been moved away from it.
  */
@@ -118,4 +118,22 @@ test('a query that matches nothing says so', async ({ page }) => {
   await expect(dialog.getByRole('status')).toHaveText('No part, pin, net or finding matches “nothing-by-this-name”.');
   await page.keyboard.press('Escape');
   await expect(dialog).toHaveCount(0);
+});
+
+test('a pin found by PART.PIN is centred in view, its chip selected', async ({ page }) => {
+  await page.goto('/');
+  await expect(page.locator('.rc-wire').first()).toBeVisible();
+  const pin = page.locator('.react-flow__node[data-id="U4"] [data-pin="BUSY"]');
+  await panAway(page, pin);
+  const dialog = await openSearch(page, '/');
+  await page.keyboard.type('u4.bus');
+  await expect(dialog.getByRole('option')).toHaveText([/U4\.BUSY/]);
+  await page.keyboard.press('Enter');
+  await expect(dialog).toHaveCount(0);
+  await expect(page.locator('.react-flow__node[data-id="U4"]')).toHaveClass(/selected/);
+  await expect.poll(() => inView(page, pin)).toBe(true);
+  // Centred: the pin is within a fifth of the canvas's width of its middle.
+  const canvas = (await page.locator('.react-flow').boundingBox())!;
+  const box = (await pin.boundingBox())!;
+  expect(Math.abs(box.x + box.width / 2 - (canvas.x + canvas.width / 2))).toBeLessThan(canvas.width / 5);
 });
