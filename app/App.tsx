@@ -13,10 +13,8 @@ import type { CSSProperties } from 'react';
 import type { SaveIndicator } from './storage/saver.ts';
 import { EditorProvider } from './store/EditorProvider.tsx';
 import type { EditorStore } from './store/editorStore.ts';
-import { useShortcuts } from './useShortcuts.ts';
 
 export function App({ store, saver }: { store: EditorStore; saver: SaveIndicator }) {
-  useShortcuts(store);
   const [sideWidth, setSideWidth] = useSideWidth();
   return (
     <EditorProvider store={store}>

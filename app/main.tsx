@@ -5,9 +5,12 @@
  */
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
+import { setMeasureVars } from './canvas/chipLayout.ts';
 import { Root } from './session/Root.tsx';
 import { startSession } from './session/start.ts';
 
+// The chips' measures, from the numbers the canvas lays out and routes by (styles.css reads them).
+setMeasureVars(document.documentElement);
 const element = document.getElementById('root');
 if (element === null) throw new Error('index.html has no #root element');
 const root = createRoot(element);

@@ -36,7 +36,8 @@ import { CANVAS_ID, fitViewOptions, TEMPLATE_MIME, usePlacePart } from './placem
 import { WireEdge } from './WireEdge.tsx';
 import { createRouteKeeper, type RouteKeeper } from './routes.ts';
 import { RouteContext } from './routeContext.ts';
-import { useCanvasKeys } from './useCanvasKeys.ts';
+import { useKeys } from '../keys/useKeys.ts';
+import { keysOf } from '../keys/registry.ts';
 import { Dialogs } from '../panels/Dialogs.tsx';
 
 const nodeTypes = { chip: ChipNode, discrete: DiscreteNode };
@@ -147,7 +148,7 @@ export function Canvas() {
   useLayoutEffect(() => routes.update(parts, nets, discreteParts ?? []), [routes, parts, nets, discreteParts]);
   useEffect(() => () => routes.dispose(), [routes]);
   const place = usePlacePart();
-  useCanvasKeys();
+  useKeys();
 
   const onNodesChange = useCallback(
     (changes: NodeChange<AnyNode>[]) => {
@@ -301,9 +302,18 @@ export function Canvas() {
             <TidyButton />
             <button
               type="button"
+              className="rc-tidy-btn"
+              data-testid="search-button"
+              title={`Find a part, pin, net or finding (${keysOf('search')})`}
+              onClick={() => store.getState().openDialog({ kind: 'search' })}
+            >
+              Find…
+            </button>
+            <button
+              type="button"
               className="rc-keys-btn"
               aria-label="Keyboard shortcuts"
-              title="Keyboard shortcuts (?)"
+              title={`Keyboard shortcuts (${keysOf('shortcuts')})`}
               data-testid="shortcuts-button"
               onClick={() => store.getState().openDialog({ kind: 'keys' })}
             >

@@ -1,5 +1,10 @@
-/** Where a chip's pins go, and how big the chip is drawn (the CSS in styles.css follows these numbers). */
+/**
+ * Where a chip's pins go, and how big the chip and the parts between chips are drawn. These
+ * numbers are the one source of the measures: styles.css draws with them through the custom
+ * properties of `MEASURE_VARS` (set on the page's root at start), never with numbers of its own.
+ */
 import type { Part, Pin } from '../../rules/model/schema.ts';
+import { CHIP_WIDTH, HEADER_HEIGHT, ROW_HEIGHT, STRIP_HEIGHT, TOP_BORDER } from '../../rules/routing/chipMeasures.ts';
 
 import { sideOf, type Side } from '../../rules/model/pinDefaults.ts';
 
@@ -23,16 +28,41 @@ export function pinLayout(pins: readonly Pin[]): PinLayout {
   return out;
 }
 
-export const CHIP_WIDTH = 208;
-/** Room around the chip inside its node, where the outer half of each handle sits (styles.css, .rc-chip). */
+// Shared with the PDF diagram (rules/ cannot import app/), so kept in rules/.
+export { CHIP_WIDTH, HEADER_HEIGHT, ROW_HEIGHT, STRIP_HEIGHT, TOP_BORDER };
+/** Room around the chip inside its node, where the outer half of each handle sits. */
 export const NODE_MARGIN = 6;
-/** The rail-coloured top border and the header (styles.css: border-top 3px, .rc-chip-head 41px). */
-export const HEADER_HEIGHT = 44;
-export const ROW_HEIGHT = 20;
-/** Padding above and below the pin rows (.rc-chip-body). */
+/** Padding above and below the pin rows together (half above, half below). */
 export const BODY_PADDING = 6;
-export const STRIP_HEIGHT = 30;
+/** Space between the pins of a top or bottom row. */
+export const STRIP_GAP = 10;
+/** The chip's other borders (sides and bottom). */
 export const BOTTOM_BORDER = 1;
+/** A pin's handle, square; its centre sits on the chip's edge. */
+export const HANDLE_SIZE = 9;
+/** The drawn size of a part between chips: its symbol, designator and value. */
+export const DISCRETE_SIZE = { width: 120, height: 64 } as const;
+
+/** The measures as the CSS custom properties styles.css draws with. */
+export const MEASURE_VARS: Readonly<Record<string, string>> = {
+  '--chip-margin': `${NODE_MARGIN}px`,
+  '--chip-width': `${CHIP_WIDTH}px`,
+  '--chip-top-border': `${TOP_BORDER}px`,
+  '--chip-head-height': `${HEADER_HEIGHT - TOP_BORDER}px`,
+  '--chip-row-height': `${ROW_HEIGHT}px`,
+  '--chip-body-padding': `${BODY_PADDING / 2}px`,
+  '--chip-strip-height': `${STRIP_HEIGHT}px`,
+  '--chip-strip-gap': `${STRIP_GAP}px`,
+  '--chip-border': `${BOTTOM_BORDER}px`,
+  '--handle-size': `${HANDLE_SIZE}px`,
+  '--discrete-width': `${DISCRETE_SIZE.width}px`,
+  '--discrete-height': `${DISCRETE_SIZE.height}px`,
+};
+
+/** Set the measures on an element (the page's root), for styles.css to read. */
+export function setMeasureVars(el: { readonly style: { setProperty(name: string, value: string): void } }): void {
+  for (const [name, value] of Object.entries(MEASURE_VARS)) el.style.setProperty(name, value);
+}
 
 /**
  * The chip's drawn size, exactly as styles.css draws it: the node is given this size (plus its

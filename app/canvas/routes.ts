@@ -8,7 +8,6 @@
  */
 import { createStore } from 'zustand/vanilla';
 import type { Discrete, Net, Part } from '../../rules/model/schema.ts';
-import { DISCRETE_SIZE } from './deriveFlow.ts';
 import {
   WireRouter,
   type Anchor,
@@ -24,11 +23,15 @@ import {
   BODY_PADDING,
   CHIP_WIDTH,
   chipSize,
+  DISCRETE_SIZE,
+  HANDLE_SIZE,
   HEADER_HEIGHT,
   NODE_MARGIN,
   pinLayout,
   ROW_HEIGHT,
+  STRIP_GAP,
   STRIP_HEIGHT,
+  TOP_BORDER,
 } from './chipLayout.ts';
 
 export interface RouteState {
@@ -41,11 +44,9 @@ export interface RouteState {
 
 const EMPTY: RouteState = { routes: new Map(), hops: new Map(), junctions: new Map() };
 
-/** The border above the header (styles.css: border-top 3px), inside HEADER_HEIGHT. */
-const TOP_BORDER = 3;
 /** A side handle's centre sits on the chip's edge; React Flow ends a wire on the handle's outer edge. */
-const HANDLE_HALF = 4.5;
-/** Width of a top or bottom pin's cell in its strip (styles.css .rc-strip: centred, 10 apart). */
+const HANDLE_HALF = HANDLE_SIZE / 2;
+/** Width of a top or bottom pin's cell in its strip (its text's width: centred, STRIP_GAP apart). */
 const STRIP_PIN = 34;
 
 const boxCache = new WeakMap<object, WeakMap<object, Box>>();
@@ -66,7 +67,7 @@ export function chipBox(part: Part): Box {
   const top = l.top.length > 0 ? STRIP_HEIGHT : 0;
   const rowY = (k: number) =>
     y + TOP_BORDER + top + (HEADER_HEIGHT - TOP_BORDER) + BODY_PADDING / 2 + (k + 0.5) * ROW_HEIGHT;
-  const spread = (k: number, n: number) => x + CHIP_WIDTH / 2 + (k - (n - 1) / 2) * (STRIP_PIN + 10);
+  const spread = (k: number, n: number) => x + CHIP_WIDTH / 2 + (k - (n - 1) / 2) * (STRIP_PIN + STRIP_GAP);
   const pins: Anchor[] = [];
   const key = (id: string) => `${part.id}.${id}`;
   l.left.forEach((p, k) => {

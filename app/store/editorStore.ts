@@ -40,8 +40,11 @@ export interface StatusNote {
   readonly text: string;
 }
 
-/** An open dialog: the pin table of a new chip (`part` null) or of a part, or the list of shortcuts. */
-export type Dialog = { readonly kind: 'chip'; readonly part: string | null } | { readonly kind: 'keys' };
+/** An open dialog: the pin table of a new chip (`part` null) or of a part, the list of shortcuts, or the search box. */
+export type Dialog =
+  | { readonly kind: 'chip'; readonly part: string | null }
+  | { readonly kind: 'keys' }
+  | { readonly kind: 'search' };
 
 export interface XY {
   readonly x: number;

@@ -4,10 +4,14 @@
  * quick fixes) with undo and redo mixed in, on the greenhouse example and on a generated board.
  * After every step the design is still a file the reader accepts, the store's result equals a
  * full check of it, and at the end undoing everything gives the starting design back exactly.
+ * Every key command of the registry (app/keys/registry.ts) is a kind of step too, pressed
+ * through the listener's own entry after a selection drawn at random: a command added there is
+ * exercised here without a line written for it.
  */
 import fc from 'fast-check';
 import { afterAll, describe, expect, it } from 'vitest';
 import { exampleDesign } from '../../app/example.ts';
+import { KEY_COMMANDS, keyDown, pressOf, type KeyContext } from '../../app/keys/registry.ts';
 import {
   addPowerState,
   addProfile,
@@ -31,6 +35,7 @@ import {
   setRailVoltage,
   setResetState,
   tidyLayout,
+  wireId,
   addDiscrete,
   newDiscrete,
   setDiscrete,
@@ -57,7 +62,39 @@ const pinsOf = (d: Design) => [
 ];
 const KINDS = ['resistor', 'fet-shifter', 'diode-shifter'] as const;
 
-type Step = (h: Harness, n: number, m: number) => Command | 'undo' | 'redo' | undefined;
+/** A key step acted (its command ran and took the key): the edit is already made. */
+type Step = (h: Harness, n: number, m: number) => Command | 'undo' | 'redo' | 'pressed' | undefined;
+
+/** Each harness's key context: the clipboard lives between presses, as in the listener. */
+const keyContexts = new WeakMap<Harness, KeyContext>();
+const noView = { fitAll: () => {}, focus: () => {} };
+
+/**
+ * A step per key command: select something first (a part, a net's wire, or leave the selection
+ * as it is), then press one of the command's keys, on the canvas or, now and then, elsewhere.
+ */
+const KEY_STEPS: readonly [string, Step][] = KEY_COMMANDS.map((c): [string, Step] => [
+  `key ${c.id}`,
+  (h, n, m) => {
+    let ctx = keyContexts.get(h);
+    if (ctx === undefined) keyContexts.set(h, (ctx = { store: h.store, view: noView, clipboard: null }));
+    const s = h.store.getState();
+    if (n % 3 === 0) {
+      const ids = [...h.design.parts.map((p) => p.id), ...(h.design.discretes ?? []).map((d) => d.id)];
+      const id = nth(ids, m);
+      if (id !== undefined) s.select({ parts: [id], wires: [], net: null });
+    } else if (n % 3 === 1) {
+      const net = nth(h.design.nets, m);
+      const wire = net && nth(netWires(net), n);
+      if (net && wire) s.select({ parts: [], wires: [wireId(net.id, wire[0], wire[1])], net: net.id });
+    }
+    const key = nth(c.keys, m)!;
+    const pressed = keyDown(ctx, pressOf(key, m % 2 === 0), m % 7 !== 0);
+    // A dialog a key opened is closed again, as the user would, so that the next keys act.
+    s.openDialog(null);
+    return pressed ? 'pressed' : undefined;
+  },
+]);
 
 /** One maker per kind of edit: each reads the design as it is now and picks its targets with n and m. */
 const STEPS: readonly [string, Step][] = [
@@ -266,19 +303,26 @@ const STEPS: readonly [string, Step][] = [
   ],
 ];
 
-const stepArb = fc.tuple(fc.nat(STEPS.length - 1), fc.nat(1000), fc.nat(1000));
+const ALL_STEPS: readonly [string, Step][] = [...STEPS, ...KEY_STEPS];
+
+const stepArb = fc.tuple(fc.nat(ALL_STEPS.length - 1), fc.nat(1000), fc.nat(1000));
 
 /** How often each kind of edit changed the design, over a property's runs: none may be idle. */
 const changed = new Map<string, number>();
+/** How often each key command acted (some, such as the view's, never change the design): none may be idle. */
+const pressed = new Map<string, number>();
 
 function run(start: Design, steps: readonly [number, number, number][]): void {
   const h = harness(start);
   const original = structuredClone(h.design);
   for (const [kind, n, m] of steps) {
-    const [name, make] = STEPS[kind]!;
+    const [name, make] = ALL_STEPS[kind]!;
+    const start = h.design;
     const command = make(h, n, m);
-    const before = h.design;
-    if (command === 'undo') h.undo();
+    // A key step has made its edit already; the redo step undoes first, and its redo is the change.
+    const before = command === 'pressed' ? start : h.design;
+    if (command === 'pressed') pressed.set(name, (pressed.get(name) ?? 0) + 1);
+    else if (command === 'undo') h.undo();
     else if (command === 'redo') h.redo();
     else if (command !== undefined) h.apply(command);
     if (h.design !== before) changed.set(name, (changed.get(name) ?? 0) + 1);
@@ -310,6 +354,7 @@ describe('the commands under random use', () => {
   afterAll(() => {
     if (ran < 2 || process.env.RAILCROSS_FUZZ) return;
     expect(STEPS.map(([name]) => name).filter((name) => (changed.get(name) ?? 0) === 0)).toEqual([]);
+    expect(KEY_STEPS.map(([name]) => name).filter((name) => (pressed.get(name) ?? 0) === 0)).toEqual([]);
   });
 
   it('on the greenhouse example: always a valid design, always the full check, undone to the start', {

@@ -10,6 +10,7 @@ import { netWires } from '../../model/wiring.ts';
 import { STUB } from '../../routing/channels.ts';
 import { hopPolyline, markRoutes } from '../../routing/marks.ts';
 import type { Box, WireSpec } from '../../routing/types.ts';
+import { CHIP_WIDTH, HEADER_HEIGHT, ROW_HEIGHT, STRIP_HEIGHT } from '../../routing/chipMeasures.ts';
 import { routeOnce } from '../../routing/wireRouter.ts';
 
 export {
@@ -22,8 +23,11 @@ export {
   type Route,
 } from '../../routing/channels.ts';
 
-/** The editor's chip measures, canvas units. */
-export const CHIP = { width: 208, header: 44, row: 20, strip: 30, pad: 4 } as const;
+/**
+ * The editor's chip measures, canvas units (rules/routing/chipMeasures.ts). `pad`, above and
+ * below the pin rows, is the paper's own (4; the editor's is 3).
+ */
+export const CHIP = { width: CHIP_WIDTH, header: HEADER_HEIGHT, row: ROW_HEIGHT, strip: STRIP_HEIGHT, pad: 4 } as const;
 
 export type { Point } from '../../routing/types.ts';
 import type { Point } from '../../routing/types.ts';
