@@ -2,11 +2,13 @@
  * Copy and paste of parts with the nets among them. A copy keeps the parts and, of each net,
  * the pins on copied parts when there are two or more of them (the wires between those kept
  * as drawn); a connection to a part left out is not copied. A paste gives every part a fresh
- * designator of the same letters and every net a fresh id.
+ * designator of the same letters and every net a fresh id, and lands the copies together on
+ * the nearest spot where they cover no chip and no part between chips.
  */
 import type { Design, Net, Part } from '../../rules/model/schema.ts';
 import { freshId, splitPinKey } from './commands/command.ts';
 import { netWires } from './commands/netGraph.ts';
+import { bodiesOf, nearestFreeOffset, partRect } from '../canvas/freeSpot.ts';
 
 export interface Clip {
   readonly parts: readonly Part[];
@@ -49,7 +51,10 @@ export function designatorPrefix(id: string): string {
   return letters === '' ? 'U' : letters;
 }
 
-/** The clip as it would land in `design`, moved by `offset`: fresh designators and net ids. */
+/**
+ * The clip as it would land in `design`: fresh designators and net ids, moved by `offset`, then
+ * as a whole by the shortest step that keeps every copy clear of every body already placed.
+ */
 export function planPaste(
   design: Design,
   clip: Clip,
@@ -66,14 +71,13 @@ export function planPaste(
     const { part, pin } = splitPinKey(k);
     return `${renamed.get(part) ?? part}.${pin}`;
   };
-  const parts = clip.parts.map((p): Part => {
+  const moved = (p: Part, by: { x: number; y: number }): Part => {
     const at = p.position ?? { x: 0, y: 0 };
-    return {
-      ...structuredClone(p),
-      id: renamed.get(p.id)!,
-      position: { x: Math.round(at.x + offset.x), y: Math.round(at.y + offset.y) },
-    };
-  });
+    return { ...p, position: { x: Math.round(at.x + by.x), y: Math.round(at.y + by.y) } };
+  };
+  const asked = clip.parts.map((p) => moved(p, offset));
+  const { dx, dy } = nearestFreeOffset(bodiesOf(design), asked.map(partRect));
+  const parts = asked.map((p): Part => ({ ...structuredClone(moved(p, { x: dx, y: dy })), id: renamed.get(p.id)! }));
   const takenNets = design.nets.map((n) => n.id);
   const nets = clip.nets.map((n): Net => {
     const id = freshId('N', takenNets);

@@ -8,7 +8,8 @@ import type { Design, Net, Part, Pin, Pull } from '../../../../rules/model/schem
 import { GROUND } from '../../../../rules/model/references.ts';
 import { freshId, refuse, splitPinKey, type Refusal } from '../command.ts';
 import { driveOfPin, findNet, netName, pinAt, railOfPin, uniqueId } from './lookup.ts';
-import { chipSize, freePlace } from '../../../canvas/chipLayout.ts';
+import { chipSize } from '../../../canvas/chipLayout.ts';
+import { freePlace } from '../../../canvas/freeSpot.ts';
 import type { QuickFix } from './types.ts';
 
 /** Built-in translator side profiles (rules/profiles/translators.ts). */
@@ -189,7 +190,7 @@ function translatorPart(design: Design, plan: TranslatorPlan, layout: Translator
     label: `${LABEL_PREFIX}${netName(layout.net)}`,
     rail: plan.railA,
     profile: profileFor(layout.direction),
-    position: freePlace(design.parts, middle, chipSize({ id: layout.partId, label: '', rail: '', profile: '', pins })),
+    position: freePlace(design, middle, chipSize({ id: layout.partId, label: '', rail: '', profile: '', pins })),
     pins,
   };
 }
