@@ -24,7 +24,7 @@ test('each revision says what changed: the names of its commands', async ({ page
   const all = (await changes.allInnerTexts()).join('\n');
   expect(all).toContain('Waive level-high on net VALVE_EN');
   // The column is wide enough to read a command's name on one or two lines.
-  expect((await changes.first().boundingBox())?.width ?? 0).toBeGreaterThan(200);
-  await page.screenshot({ path: 'test-results/revisions.png' });
+  expect((await changes.first().boundingBox())?.width ?? 0).toBeGreaterThan(180);
+  await page.screenshot({ path: 'e2e/screenshots/revisions.png' });
   expect(problems).toEqual([]);
 });
