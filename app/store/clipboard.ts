@@ -18,7 +18,10 @@ export interface Clip {
 /** The parts `ids` of `design` and the nets among them, or undefined when none of them exists. */
 export function copyParts(design: Design, ids: readonly string[]): Clip | undefined {
   const chosen = new Set(ids);
-  const parts = design.parts.filter((p) => chosen.has(p.id)).map((p) => structuredClone(p));
+  // A pin's waivers judged that part's unused input: like a net's, they do not go with a copy.
+  const parts = design.parts
+    .filter((p) => chosen.has(p.id))
+    .map((p) => structuredClone({ ...p, pins: p.pins.map(({ waivers: _w, ...pin }) => pin) }));
   if (parts.length === 0) return undefined;
   const inside = (key: string) => chosen.has(splitPinKey(key).part);
   const nets: Net[] = [];

@@ -36,6 +36,25 @@ describe('copy and paste', () => {
     expect(copyParts(start, ['Q'])).toBeUndefined();
   });
 
+  it("a copy leaves a pin's waivers behind, as it leaves a net's", () => {
+    const waived = {
+      ...start,
+      parts: start.parts.map((p) =>
+        p.id === 'H'
+          ? {
+              ...p,
+              pins: p.pins.map((q) =>
+                q.id === 'C' ? { ...q, waivers: [{ rule: 'floating-input' as const, note: 'spare' }] } : q,
+              ),
+            }
+          : p,
+      ),
+    };
+    const clip = copyParts(waived, ['H'])!;
+    expect(clip.parts[0]!.pins.find((q) => q.id === 'C')).toEqual({ id: 'C', role: 'input' });
+    expect(waived.parts[1]!.pins.find((q) => q.id === 'C')?.waivers).toHaveLength(1);
+  });
+
   it('pastes with fresh designators and net ids, moved by the offset, in one undo step', () => {
     const h = harness(start);
     const planned = planPaste(h.design, copyParts(h.design, ['H', 'T'])!, { x: 40, y: 40 });
