@@ -35,6 +35,7 @@ test('the unused inputs of a 16-pin controller: one waived in every state, the r
   await expect(in1.getByTestId('waive-this-state')).not.toBeChecked();
   await expect(in1.getByTestId('waive-scope')).toContainText('in every power state');
   await in1.getByTestId('waive-note').fill('Spare input, test point only');
+  await page.screenshot({ path: 'e2e/screenshots/waive-form.png' });
   await in1.getByTestId('waive-accept').click();
   const in1Row = page.locator('.rc-finding[data-rule="floating-input"]', { hasText: `${part}.IN1 ` });
   await expect(in1Row).toHaveAttribute('data-waived', 'true');
@@ -63,5 +64,15 @@ test('the unused inputs of a 16-pin controller: one waived in every state, the r
   await page.locator('.react-flow__pane').click({ position: { x: 12, y: 12 } });
   await page.keyboard.press('Control+z');
   await expect(loneRows(page, part)).toHaveCount(14);
+
+  // The part's details list the waiver kept in its pin; withdrawn there, IN1 floats again.
+  await page.locator(`[data-part="${part}"] .rc-chip-head`).click();
+  const kept = page.getByTestId('pin-waivers');
+  await expect(kept).toContainText('IN1');
+  await expect(kept).toContainText('every power state');
+  await expect(kept).toContainText('Spare input, test point only');
+  await kept.getByRole('button', { name: `Withdraw the waiver of floating-input on IN1` }).click();
+  await expect(kept).toHaveCount(0);
+  await expect(page.locator('.rc-finding[data-rule="floating-input"][data-waived="true"]')).toHaveCount(0);
   expect(problems).toEqual([]);
 });

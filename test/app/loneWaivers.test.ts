@@ -8,6 +8,7 @@ import {
   addPowerState,
   addWaiver,
   connectPins,
+  removeWaiverAt,
   removeWaiverFor,
   type Command,
 } from '../../app/store/commands/index.ts';
@@ -109,6 +110,20 @@ describe('waivers of a pin on no net', () => {
     expect(h.store.getState().result.findings.filter((f) => f.waived !== undefined)).toEqual([]);
     const read = validateDesign(h.design);
     expect(read.ok ? [] : read.errors).toEqual([]);
+  });
+
+  it('a waiver left in a pin that joined a net can still be withdrawn, by its place', () => {
+    const h = harness(start);
+    h.apply(addWaiver({ pin: 'H.B', rule: 'floating-input' }, 'spare'));
+    h.apply(addWaiver({ pin: 'H.B', rule: 'overvoltage', scenario: 'S1' }, 'clamped'));
+    h.apply(connectPins('D.Y2', 'H.B'));
+    expect(h.apply(removeWaiverAt({ pin: 'H.B' }, 0))).toEqual({ ok: true, changed: true });
+    const pin = () => h.design.parts.find((p) => p.id === 'H')!.pins.find((p) => p.id === 'B')!;
+    expect(pin().waivers).toEqual([{ rule: 'overvoltage', scenario: 'S1', note: 'clamped' }]);
+    h.apply(removeWaiverAt({ pin: 'H.B' }, 0));
+    expect(pin().waivers).toBeUndefined();
+    const out = h.apply(removeWaiverAt({ pin: 'H.B' }, 0));
+    expect(out.ok ? '' : out.reason).toMatch(/Pin H\.B has no waiver 1/);
   });
 
   const refusals: { name: string; command: Command; reason: RegExp }[] = [

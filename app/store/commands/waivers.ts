@@ -36,13 +36,14 @@ export function waiverPlaceOf(f: { readonly net: string | null; readonly place: 
 const placeText = (p: WaiverPlace) => (p.net !== undefined ? `net ${p.net}` : `pin ${p.pin}`);
 
 /** The draft object holding the waivers of `place` (a net, or a pin on no net), or why there is none. */
-function holderOf(design: Draft<Design>, place: WaiverPlace): { waivers?: Waiver[] } | Refusal {
+function holderOf(design: Draft<Design>, place: WaiverPlace, adding = true): { waivers?: Waiver[] } | Refusal {
   if (place.net !== undefined)
     return design.nets.find((n) => n.id === place.net) ?? refuse(`There is no net ${place.net}.`);
   const { part, pin } = splitPinKey(place.pin);
   const found = design.parts.find((p) => p.id === part)?.pins.find((q) => q.id === pin);
   if (found === undefined) return refuse(`There is no pin ${place.pin}.`);
-  if (design.nets.some((n) => n.pins.includes(place.pin)))
+  // A waiver is added only where it holds; one left in a pin that joined a net may still go.
+  if (adding && design.nets.some((n) => n.pins.includes(place.pin)))
     return refuse(`Pin ${place.pin} is on a net: its findings are waived on the net.`);
   return found;
 }
@@ -85,7 +86,7 @@ export function removeWaiverFor(place: string | WaiverPlace, rule: string, state
   return {
     name: `Withdraw the waiver of ${rule} on ${placeText(where)}`,
     recipe(design) {
-      const holder = holderOf(design, where);
+      const holder = holderOf(design, where, false);
       const k = isRefused(holder) ? -1 : (holder.waivers?.findIndex((w) => covers(w, rule, state)) ?? -1);
       if (isRefused(holder) || k < 0)
         return refuse(`No waiver of ${rule} on ${placeText(where)} covers this power state.`);
@@ -95,15 +96,18 @@ export function removeWaiverFor(place: string | WaiverPlace, rule: string, state
   };
 }
 
-/** Withdraw a net's waiver by its place in the list. */
-export function removeWaiverAt(net: string, index: number): Command {
+/** Withdraw a waiver of a net (by id) or of a lone pin (`{pin}`) by its place in the list. */
+export function removeWaiverAt(place: string | WaiverPlace, index: number): Command {
+  const where: WaiverPlace = typeof place === 'string' ? { net: place } : place;
+  const text = where.net !== undefined ? `Net ${where.net}` : `Pin ${where.pin}`;
   return {
-    name: `Withdraw a waiver on net ${net}`,
+    name: `Withdraw a waiver on ${placeText(where)}`,
     recipe(design) {
-      const n = design.nets.find((x) => x.id === net);
-      if (n?.waivers?.[index] === undefined) return refuse(`Net ${net} has no waiver ${index + 1}.`);
-      n.waivers.splice(index, 1);
-      if (n.waivers.length === 0) delete n.waivers;
+      const holder = holderOf(design, where, false);
+      if (isRefused(holder) || holder.waivers?.[index] === undefined)
+        return refuse(`${text} has no waiver ${index + 1}.`);
+      holder.waivers.splice(index, 1);
+      if (holder.waivers.length === 0) delete holder.waivers;
     },
   };
 }
