@@ -81,36 +81,3 @@ export function chipSize(part: Part): { width: number; height: number } {
 }
 
 const sizes = new WeakMap<readonly Pin[], { width: number; height: number }>();
-
-/**
- * The first place near `at` where a chip of `size` overlaps no part, trying a widening ring
- * of grid points around it.
- */
-export function freePlace(
-  parts: readonly Part[],
-  at: { x: number; y: number },
-  size: { width: number; height: number },
-): { x: number; y: number } {
-  const gap = 24;
-  const boxes = parts.map((p) => ({ ...(p.position ?? { x: 0, y: 0 }), ...chipSize(p) }));
-  const free = (x: number, y: number) =>
-    boxes.every(
-      (b) =>
-        x + size.width + gap <= b.x ||
-        b.x + b.width + gap <= x ||
-        y + size.height + gap <= b.y ||
-        b.y + b.height + gap <= y,
-    );
-  const step = 40;
-  for (let ring = 0; ring < 30; ring++) {
-    for (let dx = -ring; dx <= ring; dx++) {
-      for (let dy = -ring; dy <= ring; dy++) {
-        if (Math.max(Math.abs(dx), Math.abs(dy)) !== ring) continue;
-        const x = at.x + dx * step;
-        const y = at.y + dy * step;
-        if (free(x, y)) return { x, y };
-      }
-    }
-  }
-  return at;
-}

@@ -8,7 +8,8 @@ import { DISCRETE_SIZE } from './deriveFlow.ts';
 import type { EditorStore, Outcome } from '../store/editorStore.ts';
 import { useEditorStore } from '../store/EditorProvider.tsx';
 import { templateById } from '../store/templates.ts';
-import { chipSize, freePlace } from './chipLayout.ts';
+import { chipSize } from './chipLayout.ts';
+import { freePlace } from './freeSpot.ts';
 
 export const CANVAS_ID = 'rc-canvas';
 export const TEMPLATE_MIME = 'application/x-railcross-template';
@@ -36,7 +37,7 @@ function placeBuilt(store: EditorStore, built: Part, centre: { x: number; y: num
   const s = store.getState();
   const size = chipSize(built);
   const corner = { x: centre.x - size.width / 2, y: centre.y - size.height / 2 };
-  const at = exact ? corner : freePlace(s.design.parts, corner, size);
+  const at = exact ? corner : freePlace(s.design, corner, size);
   const part = { ...built, position: { x: Math.round(at.x), y: Math.round(at.y) } };
   const out = s.apply(addPart(part));
   if (out.ok) s.select({ parts: [part.id], wires: [], net: null });

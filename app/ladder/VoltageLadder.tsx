@@ -24,6 +24,11 @@ export interface VoltageLadderProps {
   /** Height of the drawing in px; the width follows from the number of pins and pairs. */
   readonly height?: number;
   readonly className?: string;
+  /**
+   * Scale the drawing down to the width of its container (never up), so that a narrow column
+   * shows the whole ladder; by default it is drawn at its own size.
+   */
+  readonly fit?: boolean;
 }
 
 type Patterns = Readonly<Record<'undefined' | 'warning' | 'fail', string>>;
@@ -311,7 +316,12 @@ function PatternDefs({ ids }: { ids: Patterns }) {
 }
 
 /** Draws a {@link Ladder}. Pure: the same model gives the same drawing. */
-export const VoltageLadder = memo(function VoltageLadder({ ladder, height = 420, className }: VoltageLadderProps) {
+export const VoltageLadder = memo(function VoltageLadder({
+  ladder,
+  height = 420,
+  className,
+  fit = false,
+}: VoltageLadderProps) {
   const base = useId().replace(/[^A-Za-z0-9_-]/g, '');
   const patterns: Patterns = {
     undefined: `ladder-${base}-undef`,
@@ -326,9 +336,12 @@ export const VoltageLadder = memo(function VoltageLadder({ ladder, height = 420,
       className={['voltage-ladder', className].filter(Boolean).join(' ')}
       role="img"
       aria-label={caption}
-      width={at.width}
-      height={at.height}
+      width={fit ? '100%' : at.width}
+      height={fit ? undefined : at.height}
+      // Scaled, the viewBox keeps the proportions: the height follows the width.
+      style={fit ? { maxWidth: at.width, height: 'auto', aspectRatio: `${at.width} / ${at.height}` } : undefined}
       viewBox={`0 0 ${at.width} ${at.height}`}
+      data-width={at.width}
       data-net={ladder.net}
       data-state={ladder.state.id}
       data-min-margin={ladder.minMargin}

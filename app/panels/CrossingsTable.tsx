@@ -1,7 +1,8 @@
 /**
  * Every net that crosses rails, one row per power state, with both worst margins: sortable by
  * any column. A click selects the net in that power state, which opens its voltage ladder in
- * the details panel.
+ * the details panel. The table fits the panel at its default width; narrower, it scrolls inside
+ * a frame of its own, never beyond the panel.
  */
 import { useMemo, useState } from 'react';
 import { crossingRows } from '../../rules/report/buildReport.ts';
@@ -70,54 +71,56 @@ export function CrossingsTable() {
         Worst high (NMH) and low (NML) noise margins of every net that joins pins of different rails, per power state.
         Click a row for its voltage ladder.
       </p>
-      <table className="rc-crossings" data-testid="crossings">
-        <thead>
-          <tr>
-            {COLUMNS.map((c) => (
-              <th
-                key={c.key}
-                scope="col"
-                aria-sort={sort.key === c.key ? (sort.up ? 'ascending' : 'descending') : 'none'}
-              >
-                <button
-                  type="button"
-                  className="rc-link"
-                  onClick={() => setSort({ key: c.key, up: sort.key === c.key ? !sort.up : true })}
+      <div className="rc-table-frame" data-testid="crossings-frame">
+        <table className="rc-crossings" data-testid="crossings">
+          <thead>
+            <tr>
+              {COLUMNS.map((c) => (
+                <th
+                  key={c.key}
+                  scope="col"
+                  aria-sort={sort.key === c.key ? (sort.up ? 'ascending' : 'descending') : 'none'}
                 >
-                  {c.title}
-                  {sort.key === c.key ? (sort.up ? ' ▲' : ' ▼') : ''}
-                </button>
-              </th>
-            ))}
-          </tr>
-        </thead>
-        <tbody>
-          {rows.map((r) => (
-            <tr
-              key={`${r.scenario}:${r.net}`}
-              data-net={r.net}
-              data-severity={r.worst}
-              data-scenario={r.scenario}
-              tabIndex={0}
-              onClick={() => open(r)}
-              onKeyDown={(e) => {
-                if (e.key === 'Enter') open(r);
-              }}
-            >
-              <td>{r.label}</td>
-              <td>{r.rails.join(' ')}</td>
-              <td>{r.scenario}</td>
-              <td className="rc-num" data-margin={r.marginHigh ?? ''}>
-                {margin(r.marginHigh)}
-              </td>
-              <td className="rc-num" data-margin={r.marginLow ?? ''}>
-                {margin(r.marginLow)}
-              </td>
-              <td className={`rc-worst rc-worst--${r.worst}`}>{r.worst}</td>
+                  <button
+                    type="button"
+                    className="rc-link"
+                    onClick={() => setSort({ key: c.key, up: sort.key === c.key ? !sort.up : true })}
+                  >
+                    {c.title}
+                    {sort.key === c.key ? (sort.up ? ' ▲' : ' ▼') : ''}
+                  </button>
+                </th>
+              ))}
             </tr>
-          ))}
-        </tbody>
-      </table>
+          </thead>
+          <tbody>
+            {rows.map((r) => (
+              <tr
+                key={`${r.scenario}:${r.net}`}
+                data-net={r.net}
+                data-severity={r.worst}
+                data-scenario={r.scenario}
+                tabIndex={0}
+                onClick={() => open(r)}
+                onKeyDown={(e) => {
+                  if (e.key === 'Enter') open(r);
+                }}
+              >
+                <td>{r.label}</td>
+                <td>{r.rails.join(' ')}</td>
+                <td>{r.scenario}</td>
+                <td className="rc-num" data-margin={r.marginHigh ?? ''}>
+                  {margin(r.marginHigh)}
+                </td>
+                <td className="rc-num" data-margin={r.marginLow ?? ''}>
+                  {margin(r.marginLow)}
+                </td>
+                <td className={`rc-worst rc-worst--${r.worst}`}>{r.worst}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
     </>
   );
 }

@@ -1,12 +1,13 @@
 /**
  * One finding in the list: a button that selects its net (or part), and beside it what can be
- * done: accept it with a note (a waiver written into the net, undoable), or withdraw the
- * waiver that covers it. A finding with no net cannot be waived in version 1 of the format.
+ * done: accept it with a note (a waiver written into the net, or into the pin for a pin on no
+ * net; undoable), or withdraw the waiver that covers it. A new waiver covers every power state
+ * unless the engineer chooses only this one, so that a power state added later keeps it.
  */
 import { memo, useId, useState } from 'react';
 import type { Finding } from '../../rules/engine/types.ts';
 import { ALL_ON } from '../../rules/engine/powerStates.ts';
-import { addWaiver, removeWaiverFor } from '../store/commands/index.ts';
+import { addWaiver, removeWaiverFor, waiverPlaceOf } from '../store/commands/index.ts';
 import { useEditorStore } from '../store/EditorProvider.tsx';
 import { FixMenu } from './FixMenu.tsx';
 
@@ -16,17 +17,28 @@ export interface RowText {
   readonly state: string;
 }
 
+/** Whether a new waiver covers every power state (the default) or only the finding's own. */
+export type WaiverScope = 'every' | 'this';
+export const DEFAULT_WAIVER_SCOPE: WaiverScope = 'every';
+
+/** Findings that have a place to keep a waiver: on a net, or on a lone pin; a rail's findings have none. */
+function waivable(f: Finding): boolean {
+  return f.net !== null || (f.pins.length === 1 && f.place === f.pins[0]);
+}
+
 function WaiverForm({ finding, state, onDone }: { finding: Finding; state: string; onDone: () => void }) {
   const store = useEditorStore();
   const noteId = useId();
+  const scopeName = useId();
   const [note, setNote] = useState('');
-  const [everywhere, setEverywhere] = useState(false);
+  const [scope, setScope] = useState<WaiverScope>(DEFAULT_WAIVER_SCOPE);
   const [error, setError] = useState<string | null>(null);
+  const place = waiverPlaceOf(finding);
   const accept = () => {
     const out = store
       .getState()
       .apply(
-        addWaiver({ net: finding.net!, rule: finding.rule, scenario: everywhere ? undefined : finding.scenario }, note),
+        addWaiver({ ...place, rule: finding.rule, scenario: scope === 'every' ? undefined : finding.scenario }, note),
       );
     if (out.ok) onDone();
     else setError(out.reason);
@@ -34,7 +46,7 @@ function WaiverForm({ finding, state, onDone }: { finding: Finding; state: strin
   return (
     <form
       className="rc-waive-form"
-      aria-label={`Accept ${finding.rule} on ${finding.net}`}
+      aria-label={`Accept ${finding.rule} on ${place.net ?? place.pin}`}
       data-testid="waive-form"
       onSubmit={(e) => {
         e.preventDefault();
@@ -60,15 +72,29 @@ function WaiverForm({ finding, state, onDone }: { finding: Finding; state: strin
           if (e.key === 'Escape') onDone();
         }}
       />
-      <label className="rc-toggle">
-        <input
-          type="checkbox"
-          checked={everywhere}
-          onChange={(e) => setEverywhere(e.target.checked)}
-          data-testid="waive-everywhere"
-        />
-        in every power state, not only “{state}”
-      </label>
+      <fieldset className="rc-waive-scope" data-testid="waive-scope">
+        <legend className="rc-field-label">Applies</legend>
+        <label className="rc-toggle">
+          <input
+            type="radio"
+            name={scopeName}
+            checked={scope === 'every'}
+            onChange={() => setScope('every')}
+            data-testid="waive-every-state"
+          />
+          in every power state, those added later too
+        </label>
+        <label className="rc-toggle">
+          <input
+            type="radio"
+            name={scopeName}
+            checked={scope === 'this'}
+            onChange={() => setScope('this')}
+            data-testid="waive-this-state"
+          />
+          only in “{state}”
+        </label>
+      </fieldset>
       {error !== null && (
         <span className="rc-field-error" role="alert">
           {error}
@@ -126,16 +152,16 @@ function FindingRowView({ finding: f, text, showState, onPick }: RowProps) {
         )}
       </button>
       <div className="rc-finding-actions">
-        {f.net === null ? (
-          <span className="rc-muted" title="A waiver belongs to a net in version 1 of the design format">
-            On no net: cannot be waived in this version.
+        {!waivable(f) ? (
+          <span className="rc-muted" title="A waiver is kept in a net or in a pin">
+            On no net or pin: cannot be waived.
           </span>
         ) : waived ? (
           <button
             type="button"
             className="rc-link"
             data-testid="unwaive"
-            onClick={() => store.getState().apply(removeWaiverFor(f.net!, f.rule, f.scenario))}
+            onClick={() => store.getState().apply(removeWaiverFor(waiverPlaceOf(f), f.rule, f.scenario))}
           >
             Withdraw the waiver
           </button>

@@ -12,6 +12,7 @@ export function Modal({
   children,
   footer,
   wide,
+  width,
   testId,
 }: {
   title: string;
@@ -19,6 +20,8 @@ export function Modal({
   children: ReactNode;
   footer?: ReactNode;
   wide?: boolean;
+  /** The width its content needs, px: the dialog takes it, up to the window's width less a margin. */
+  width?: number;
   testId?: string;
 }) {
   const headingId = useId();
@@ -27,6 +30,7 @@ export function Modal({
       className={`rc-modal${wide === true ? ' rc-modal--wide' : ''}`}
       labelledBy={headingId}
       onClose={onClose}
+      {...(width === undefined ? {} : { style: { width: `min(${Math.ceil(width)}px, calc(100vw - 40px))` } })}
       {...(testId === undefined ? {} : { testId })}
     >
       <header className="rc-modal-head">

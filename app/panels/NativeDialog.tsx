@@ -1,4 +1,4 @@
-import { useEffect, useRef, type ReactNode } from 'react';
+import { useEffect, useRef, type CSSProperties, type ReactNode } from 'react';
 
 interface NativeDialogProps {
   readonly className: string;
@@ -6,6 +6,7 @@ interface NativeDialogProps {
   readonly describedBy?: string;
   readonly role?: 'dialog' | 'alertdialog';
   readonly testId?: string;
+  readonly style?: CSSProperties;
   /** Escape or a click outside; absent: the user must choose inside. */
   readonly onClose?: () => void;
   readonly children: ReactNode;
@@ -21,6 +22,7 @@ export function NativeDialog({
   describedBy,
   role,
   testId,
+  style,
   onClose,
   children,
 }: NativeDialogProps) {
@@ -39,6 +41,7 @@ export function NativeDialog({
       aria-labelledby={labelledBy}
       aria-describedby={describedBy}
       data-testid={testId}
+      style={style}
       // Keys pressed in a dialog are the dialog's: the editor's shortcuts (Delete, Ctrl+Z) listen on the window.
       onKeyDown={(e) => e.stopPropagation()}
       onCancel={(e) => {

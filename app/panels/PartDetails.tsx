@@ -3,7 +3,14 @@ import type { Part } from '../../rules/model/schema.ts';
 import { resolveProfile } from '../../rules/profiles/index.ts';
 import { glyphKind, GLYPH_TEXT, PinGlyph } from '../canvas/PinGlyph.tsx';
 import { sideOf } from '../canvas/chipLayout.ts';
-import { renamePart, setPartLabel, setPartProfile, setPartRail, setResetState } from '../store/commands/index.ts';
+import {
+  removeWaiverAt,
+  renamePart,
+  setPartLabel,
+  setPartProfile,
+  setPartRail,
+  setResetState,
+} from '../store/commands/index.ts';
 import { useEditor, useEditorStore } from '../store/EditorProvider.tsx';
 import { TextField } from './Field.tsx';
 import { PinEffective } from './PinEffective.tsx';
@@ -121,6 +128,44 @@ export function PartDetails({ part }: { part: Part }) {
           );
         })}
       </ul>
+      <PinWaivers part={part} />
     </div>
+  );
+}
+
+/** The waivers kept in the part's pins (findings of inputs on no net that were accepted), each withdrawable. */
+function PinWaivers({ part }: { part: Part }) {
+  const store = useEditorStore();
+  const scenarios = useEditor((s) => s.design.scenarios);
+  const stateLabel = (id: string | undefined) =>
+    id === undefined
+      ? 'every power state'
+      : id === 'all-on'
+        ? 'All rails on'
+        : ((scenarios ?? []).find((s) => s.id === id)?.label ?? id);
+  const rows = part.pins.flatMap((pin) => (pin.waivers ?? []).map((w, k) => ({ pin: pin.id, w, k })));
+  if (rows.length === 0) return null;
+  return (
+    <>
+      <h4 className="rc-sub">Waivers of unused pins</h4>
+      <ul className="rc-waivers" data-testid="pin-waivers">
+        {rows.map(({ pin, w, k }) => (
+          <li key={`${pin}:${k}`} data-pin={pin} data-rule={w.rule}>
+            <span className="rc-waiver-what">
+              <b>{pin}</b> · {w.rule} · {stateLabel(w.scenario)}
+            </span>
+            <span className="rc-waiver-note">{w.note}</span>
+            <button
+              type="button"
+              className="rc-icon-btn"
+              aria-label={`Withdraw the waiver of ${w.rule} on ${pin}`}
+              onClick={() => store.getState().apply(removeWaiverAt({ pin: `${part.id}.${pin}` }, k))}
+            >
+              ×
+            </button>
+          </li>
+        ))}
+      </ul>
+    </>
   );
 }

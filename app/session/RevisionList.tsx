@@ -1,4 +1,8 @@
-/** The saved revisions of the open design: restore one as its current state (undoable) or as a new design. */
+/**
+ * The saved revisions of the open design, each with what changed (the commands since the one
+ * before): restore one as its current state (undoable) or as a new design.
+ */
+import { changesOf } from '../storage/changes.ts';
 import { useSession, useLive, useSessionState } from './SessionProvider.tsx';
 import { fullWhen, shortWhen } from './when.ts';
 
@@ -29,6 +33,7 @@ export function RevisionList() {
             <th>Revision</th>
             <th className="rc-lib-when">Saved</th>
             <th className="rc-lib-title-col">Title</th>
+            <th className="rc-lib-changes">What changed</th>
             <th className="rc-lib-num">Errors</th>
             <th className="rc-lib-num">Warnings</th>
             <th className="rc-lib-acts">
@@ -53,7 +58,12 @@ export function RevisionList() {
               <td className="rc-lib-when" title={fullWhen(r.savedAt)}>
                 {shortWhen(r.savedAt)}
               </td>
-              <td className="rc-lib-title">{r.title}</td>
+              <td className="rc-lib-title" title={r.title}>
+                {r.title}
+              </td>
+              <td className="rc-lib-changes" data-testid="revision-changes">
+                <Changes list={changesOf(r.changes)} first={r.rev === 1} />
+              </td>
               <td className={`rc-lib-num${r.errors > 0 ? ' rc-lib-num--error' : ''}`}>{r.errors}</td>
               <td className={`rc-lib-num${r.warnings > 0 ? ' rc-lib-num--warning' : ''}`}>{r.warnings}</td>
               <td className="rc-lib-acts">
@@ -77,6 +87,38 @@ export function RevisionList() {
           ))}
         </tbody>
       </table>
+    </>
+  );
+}
+
+/** How many changes a row shows before the rest fold away. */
+const SHOWN = 3;
+
+/** A revision's commands: the first few, the rest on request. */
+function Changes({ list, first }: { list: readonly string[] | undefined; first: boolean }) {
+  if (list === undefined || list.length === 0)
+    return <span className="rc-muted">{first ? 'Created' : 'Not recorded'}</span>;
+  const head = list.slice(0, SHOWN);
+  const rest = list.slice(SHOWN);
+  return (
+    <>
+      <ul className="rc-lib-change-list">
+        {head.map((name, k) => (
+          // biome-ignore lint/suspicious/noArrayIndexKey: the same command may appear twice in one revision
+          <li key={k}>{name}</li>
+        ))}
+      </ul>
+      {rest.length > 0 && (
+        <details className="rc-lib-more-changes">
+          <summary>{rest.length} more</summary>
+          <ul className="rc-lib-change-list">
+            {rest.map((name, k) => (
+              // biome-ignore lint/suspicious/noArrayIndexKey: the same command may appear twice in one revision
+              <li key={k}>{name}</li>
+            ))}
+          </ul>
+        </details>
+      )}
     </>
   );
 }

@@ -8,13 +8,16 @@ import type { Design } from '../../rules/model/schema.ts';
 import { createEditorStore, type EditorStore } from '../store/editorStore.ts';
 import { storageProblem } from '../storage/errors.ts';
 import type { Library } from '../storage/library.ts';
+import { summarizeChanges } from '../storage/changes.ts';
 import { Saver } from '../storage/saver.ts';
 
-/** What autosave writes: the design and its counts for the list. */
+/** What autosave writes: the design, its counts for the list and the commands that made it. */
 export interface Entry {
   readonly design: Design;
   readonly errors: number;
   readonly warnings: number;
+  /** The names of the commands (and undos, redos) since the last stored revision, in order. */
+  readonly changes?: readonly string[];
 }
 
 export type Conflict =
@@ -46,6 +49,8 @@ export class Editing {
   baseRev: number;
   /** The design object last stored or loaded: an editor holding it has nothing to save. */
   private saved: Design | undefined;
+  /** The names of the commands since the last stored revision (the revision list's "what changed"). */
+  private changes: string[] = [];
   private readonly off: () => void;
 
   constructor(
@@ -61,8 +66,16 @@ export class Editing {
     this.saved = this.store.getState().design;
     this.saver = new Saver<Entry>({ write: (entry) => this.write(entry) });
     const offStore = this.store.subscribe((s, prev) => {
-      if (s.design === prev.design || s.design === this.saved) return;
-      this.saver.save({ design: s.design, errors: s.result.summary.error, warnings: s.result.summary.warning });
+      if (s.design === prev.design) return;
+      // Every change of the design is a command, an undo or a redo, named in `lastCheck`.
+      this.changes.push(s.lastCheck.action);
+      if (s.design === this.saved) return;
+      this.saver.save({
+        design: s.design,
+        errors: s.result.summary.error,
+        warnings: s.result.summary.warning,
+        changes: summarizeChanges(this.changes),
+      });
     });
     const offSaver = this.saver.subscribe(() => hooks.onStatus(this));
     this.off = () => {
@@ -76,6 +89,7 @@ export class Editing {
     this.baseRev = rev;
     apply();
     this.saved = this.store.getState().design;
+    this.changes = [];
     this.saver.discard();
   }
 
@@ -93,6 +107,7 @@ export class Editing {
     }
     if (this.hooks.isHeld(this)) throw new Error(HELD);
     const start = performance.now();
+    const written = this.changes.length;
     let outcome: Awaited<ReturnType<typeof library.save>>;
     try {
       outcome = await library.save(id, this.baseRev, entry.design, entry);
@@ -102,6 +117,9 @@ export class Editing {
     if (outcome.ok) {
       this.baseRev = outcome.rev;
       this.saved = entry.design;
+      // The commands written with it; those made while it was written go with the next revision.
+      if (entry.design === this.store.getState().design) this.changes = [];
+      else this.changes = this.changes.slice(written);
       performance.measure('railcross:save', { start });
       return;
     }

@@ -42,6 +42,11 @@ export interface RevisionRecord {
   readonly title: string;
   readonly errors: number;
   readonly warnings: number;
+  /**
+   * What changed since the revision before: the commands' names (changes.ts); absent in
+   * revisions written before they were kept and in a design's first one.
+   */
+  readonly changes?: readonly string[];
 }
 
 /** The document of one revision. */

@@ -21,6 +21,11 @@ export interface Counts {
   readonly warnings: number;
 }
 
+/** What a save stores beside the design: its counts and, where known, the commands since the last save. */
+export interface SaveInfo extends Counts {
+  readonly changes?: readonly string[];
+}
+
 export interface Listing {
   /** The library, the most recently changed first. */
   readonly designs: readonly DesignRecord[];
@@ -165,7 +170,7 @@ export class Library {
    * Save `design` as the next revision of `id`, provided its newest revision is still
    * `baseRev`; drop revisions beyond the last `KEPT_REVISIONS`. One transaction.
    */
-  async save(id: string, baseRev: number, design: Design, counts: Counts): Promise<SaveOutcome> {
+  async save(id: string, baseRev: number, design: Design, counts: SaveInfo): Promise<SaveOutcome> {
     const { designs, revisions, documents } = this.db;
     const outcome = await this.db.transaction('rw', designs, revisions, documents, async (): Promise<SaveOutcome> => {
       const current = await designs.get(id);
@@ -175,7 +180,7 @@ export class Library {
         return { ok: false, reason: 'changed', rev: current.rev, savedAt: current.updatedAt };
       const rev = baseRev + 1;
       const at = this.now();
-      await this.writeRevision(id, rev, at, design, counts);
+      await this.writeRevision(id, rev, at, design, counts, counts.changes);
       await designs.put({
         ...current,
         title: design.title,
@@ -205,7 +210,12 @@ export class Library {
   async rename(id: string, title: string): Promise<SaveOutcome | OpenOutcome> {
     const opened = await this.open(id);
     if (!opened.ok) return opened;
-    return this.save(id, opened.record.rev, { ...opened.design, title }, opened.record);
+    return this.save(
+      id,
+      opened.record.rev,
+      { ...opened.design, title },
+      { ...pick(opened.record), changes: [`Rename the design to “${title}”`] },
+    );
   }
 
   /** A new design holding the newest readable state of `id`, titled "… (copy)". */
@@ -295,8 +305,22 @@ export class Library {
     await this.db.prefs.put({ key: 'lastOpened', value: id });
   }
 
-  private async writeRevision(id: string, rev: number, at: number, design: Design, counts: Counts): Promise<void> {
-    await this.db.revisions.add({ designId: id, rev, savedAt: at, title: design.title, ...pick(counts) });
+  private async writeRevision(
+    id: string,
+    rev: number,
+    at: number,
+    design: Design,
+    counts: Counts,
+    changes?: readonly string[],
+  ): Promise<void> {
+    await this.db.revisions.add({
+      designId: id,
+      rev,
+      savedAt: at,
+      title: design.title,
+      ...pick(counts),
+      ...(changes === undefined || changes.length === 0 ? {} : { changes: [...changes] }),
+    });
     await this.db.documents.add({ designId: id, rev, formatVersion: design.version, doc: design });
   }
 

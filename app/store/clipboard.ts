@@ -2,11 +2,13 @@
  * Copy and paste of parts with the nets among them. A copy keeps the parts and, of each net,
  * the pins on copied parts when there are two or more of them (the wires between those kept
  * as drawn); a connection to a part left out is not copied. A paste gives every part a fresh
- * designator of the same letters and every net a fresh id.
+ * designator of the same letters and every net a fresh id, and lands the copies together on
+ * the nearest spot where they cover no chip and no part between chips.
  */
 import type { Design, Net, Part } from '../../rules/model/schema.ts';
 import { freshId, splitPinKey } from './commands/command.ts';
 import { netWires } from './commands/netGraph.ts';
+import { bodiesOf, nearestFreeOffset, partRect } from '../canvas/freeSpot.ts';
 
 export interface Clip {
   readonly parts: readonly Part[];
@@ -16,7 +18,10 @@ export interface Clip {
 /** The parts `ids` of `design` and the nets among them, or undefined when none of them exists. */
 export function copyParts(design: Design, ids: readonly string[]): Clip | undefined {
   const chosen = new Set(ids);
-  const parts = design.parts.filter((p) => chosen.has(p.id)).map((p) => structuredClone(p));
+  // A pin's waivers judged that part's unused input: like a net's, they do not go with a copy.
+  const parts = design.parts
+    .filter((p) => chosen.has(p.id))
+    .map((p) => structuredClone({ ...p, pins: p.pins.map(({ waivers: _w, ...pin }) => pin) }));
   if (parts.length === 0) return undefined;
   const inside = (key: string) => chosen.has(splitPinKey(key).part);
   const nets: Net[] = [];
@@ -49,7 +54,10 @@ export function designatorPrefix(id: string): string {
   return letters === '' ? 'U' : letters;
 }
 
-/** The clip as it would land in `design`, moved by `offset`: fresh designators and net ids. */
+/**
+ * The clip as it would land in `design`: fresh designators and net ids, moved by `offset`, then
+ * as a whole by the shortest step that keeps every copy clear of every body already placed.
+ */
 export function planPaste(
   design: Design,
   clip: Clip,
@@ -66,14 +74,13 @@ export function planPaste(
     const { part, pin } = splitPinKey(k);
     return `${renamed.get(part) ?? part}.${pin}`;
   };
-  const parts = clip.parts.map((p): Part => {
+  const moved = (p: Part, by: { x: number; y: number }): Part => {
     const at = p.position ?? { x: 0, y: 0 };
-    return {
-      ...structuredClone(p),
-      id: renamed.get(p.id)!,
-      position: { x: Math.round(at.x + offset.x), y: Math.round(at.y + offset.y) },
-    };
-  });
+    return { ...p, position: { x: Math.round(at.x + by.x), y: Math.round(at.y + by.y) } };
+  };
+  const asked = clip.parts.map((p) => moved(p, offset));
+  const { dx, dy } = nearestFreeOffset(bodiesOf(design), asked.map(partRect));
+  const parts = asked.map((p): Part => ({ ...structuredClone(moved(p, { x: dx, y: dy })), id: renamed.get(p.id)! }));
   const takenNets = design.nets.map((n) => n.id);
   const nets = clip.nets.map((n): Net => {
     const id = freshId('N', takenNets);

@@ -205,7 +205,7 @@ function checkLonePin(ctx: StateContext, pin: PinView): Finding[] {
   for (const rule of ctx.rules) {
     if (rule.checkPin === undefined) continue;
     rule.checkPin({ pin, settings: ctx.settings, rails: loneRails(ctx.rails, pin) }, (draft) =>
-      found.push(completeFinding(rule, draft, ctx.state, null, pin.key)),
+      found.push(completeFinding(rule, draft, ctx.state, null, pin.key, pin.pin.waivers)),
     );
   }
   return found;
@@ -230,7 +230,7 @@ function judgeLonePin(
     (at.pullTo === undefined || !off.has(at.pullTo)) &&
     !ctx.state.pins.has(key)
   ) {
-    return (allOn.get(key) ?? []).map((f) => restampFinding(f, ctx.state, null));
+    return (allOn.get(key) ?? []).map((f) => restampFinding(f, ctx.state, null, at.pin.waivers));
   }
   return checkLonePin(ctx, pinView(at, ctx.rails, ctx.state));
 }

@@ -1,5 +1,5 @@
 /** Turning rule drafts into findings: ids, waivers, and the report's order. */
-import type { Net } from '../model/schema.ts';
+import type { Net, Waiver } from '../model/schema.ts';
 import type { Draft, MessageFns, Rule } from './rule.ts';
 import { RULE_IDS, type RuleId } from '../model/ruleIds.ts';
 import type { Finding, FindingOf, PowerState, Severity, Summary } from './types.ts';
@@ -15,6 +15,7 @@ export function findingId(rule: string, place: string, state: string, suffix: st
  * Completes a draft. `place` is where the finding sits when the draft names no `subject`: the
  * net's id, or the pin's key for a pin on no net. A draft that carries a number that is not
  * finite becomes an unwaivable "cannot be guaranteed" error (undecidable.ts), whatever the rule said.
+ * A finding on a net is waived by the net's waivers; one on a lone pin by `pinWaivers`, that pin's.
  */
 export function completeFinding<M extends MessageFns>(
   rule: Rule<M>,
@@ -22,6 +23,7 @@ export function completeFinding<M extends MessageFns>(
   state: PowerState,
   net: Net | null,
   place: string = net?.id ?? '',
+  pinWaivers?: readonly Waiver[],
 ): Finding {
   const at = net?.id ?? draft.subject ?? place;
   const id = findingId(rule.id, at, state.id, draft.suffix);
@@ -75,7 +77,7 @@ export function completeFinding<M extends MessageFns>(
         };
   if (draft.suffix !== undefined) out.suffix = draft.suffix;
   // A finding that could not be decided is never waived: a waiver accepts a known risk.
-  const waived = bad.length === 0 && net !== null ? waiverNote(net, rule.id, state.id) : undefined;
+  const waived = bad.length === 0 ? waiverNote(net === null ? pinWaivers : net.waivers, rule.id, state.id) : undefined;
   if (waived !== undefined) out.waived = waived;
   // The one place a finding is made: its rule and values come from one typed rule, which the
   // union of findings by rule cannot see through a generic rule.
@@ -99,10 +101,13 @@ export function valuesOf<I extends RuleId>(f: Finding, rule: I): FindingValues<I
   return f.values as FindingValues<I>;
 }
 
-/** The note of the first waiver of the net that names this rule in this power state. */
-function waiverNote(net: Net, rule: string, state: string): string | undefined {
-  if (net.waivers === undefined) return undefined;
-  for (const w of net.waivers) if (w.rule === rule && (w.scenario === undefined || w.scenario === state)) return w.note;
+/**
+ * The note of the first waiver (of a net, or of a lone pin) that names this rule in this power
+ * state; one without a `scenario` covers every state, those added later included.
+ */
+function waiverNote(waivers: readonly Waiver[] | undefined, rule: string, state: string): string | undefined {
+  if (waivers === undefined) return undefined;
+  for (const w of waivers) if (w.rule === rule && (w.scenario === undefined || w.scenario === state)) return w.note;
   return undefined;
 }
 
@@ -110,9 +115,14 @@ function waiverNote(net: Net, rule: string, state: string): string | undefined {
  * The same finding in another power state: a net (or a lone pin) none of whose rails is off
  * there is judged exactly as in `all-on`, so its findings are re-stamped rather than computed
  * again. Its place and suffix are data, so the id is built again, never cut out of the old one;
- * `net` is the net it is on (null for a lone pin: no waivers).
+ * `net` is the net it is on (null for a lone pin, whose own waivers are `pinWaivers`).
  */
-export function restampFinding(f: Finding, state: PowerState, net: Net | null): Finding {
+export function restampFinding(
+  f: Finding,
+  state: PowerState,
+  net: Net | null,
+  pinWaivers?: readonly Waiver[],
+): Finding {
   const out = {
     id: findingId(f.rule, f.place, state.id, f.suffix),
     rule: f.rule,
@@ -129,7 +139,8 @@ export function restampFinding(f: Finding, state: PowerState, net: Net | null): 
   } as { -readonly [K in keyof Finding]: Finding[K] };
   if (f.suffix !== undefined) out.suffix = f.suffix;
   // A finding that could not be decided is never waived: a waiver accepts a known risk.
-  const waived = net === null || f.messageId === UNDECIDABLE ? undefined : waiverNote(net, f.rule, state.id);
+  const waived =
+    f.messageId === UNDECIDABLE ? undefined : waiverNote(net === null ? pinWaivers : net.waivers, f.rule, state.id);
   if (waived !== undefined) out.waived = waived;
   return out as Finding;
 }

@@ -149,6 +149,7 @@ function checkParts(
   ctx: Context,
   parts: readonly unknown[],
   profileIds: ReadonlySet<string> | undefined,
+  scenarioIds: ReadonlySet<string> | undefined,
 ): Map<string, Set<string>> {
   const pinsOf = new Map<string, Set<string>>();
   parts.forEach((item, i) => {
@@ -173,6 +174,7 @@ function checkParts(
       checkRailRef(ctx, own(pin, 'rail'), [...at, 'pins', j, 'rail']);
       checkProfileRef(ctx, own(pin, 'profile'), [...at, 'pins', j, 'profile'], profileIds);
       checkPull(ctx, own(pin, 'pull'), [...at, 'pins', j, 'pull']);
+      checkWaivers(ctx, own(pin, 'waivers'), [...at, 'pins', j, 'waivers'], scenarioIds);
     });
   });
   return pinsOf;
@@ -316,17 +318,27 @@ function checkNets(
         }
       });
     });
-    asList(own(net, 'waivers')).forEach((w, k) => {
-      const waiver = asRecord(w);
-      const scenario = waiver && asString(own(waiver, 'scenario'));
-      if (scenarioIds !== undefined && scenario !== undefined && !scenarioIds.has(scenario)) {
-        fail(
-          ctx,
-          [...at, 'waivers', k, 'scenario'],
-          `unknown scenario ${JSON.stringify(scenario)}: expected "all-on" or a scenario id of this design (${listIds(scenarioIds)})`,
-        );
-      }
-    });
+    checkWaivers(ctx, own(net, 'waivers'), [...at, 'waivers'], scenarioIds);
+  });
+}
+
+/** A waiver's power state (a net's or a lone pin's) must be `all-on` or a scenario of the design. */
+function checkWaivers(
+  ctx: Context,
+  waivers: unknown,
+  at: readonly PathSegment[],
+  scenarioIds: ReadonlySet<string> | undefined,
+): void {
+  asList(waivers).forEach((w, k) => {
+    const waiver = asRecord(w);
+    const scenario = waiver && asString(own(waiver, 'scenario'));
+    if (scenarioIds !== undefined && scenario !== undefined && !scenarioIds.has(scenario)) {
+      fail(
+        ctx,
+        [...at, k, 'scenario'],
+        `unknown scenario ${JSON.stringify(scenario)}: expected "all-on" or a scenario id of this design (${listIds(scenarioIds)})`,
+      );
+    }
   });
 }
 
@@ -373,7 +385,7 @@ export function checkReferences(doc: unknown, builtinProfileIds: ReadonlySet<str
   let pinsOf: Map<string, Set<string>> | undefined;
   if (parts !== undefined) {
     uniqueIds(ctx, parts, ['parts'], 'part', 'among parts');
-    pinsOf = checkParts(ctx, parts, profileIds);
+    pinsOf = checkParts(ctx, parts, profileIds, scenarioIds);
   }
   const discretes = listOr('discretes', true);
   const tied =

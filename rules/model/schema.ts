@@ -261,6 +261,14 @@ export const ProfileSchema = z
   })
   .meta({ id: 'Profile', description: 'A design-local logic-family profile' });
 
+export const WaiverSchema = z
+  .strictObject({
+    rule: z.enum(RULE_IDS, { message: `expected a rule id: ${RULE_IDS.join(', ')}` }),
+    scenario: z.string().optional(),
+    note: z.string(),
+  })
+  .meta({ id: 'Waiver', description: 'A finding the engineer has reviewed and accepted, with the reason' });
+
 export const PinSchema = z
   .strictObject({
     id: id('pin', false),
@@ -271,6 +279,9 @@ export const PinSchema = z
     params: ParamsSchema.optional(),
     pull: PullSchema.optional(),
     side: z.enum(['left', 'right', 'top', 'bottom']).optional(),
+    // Findings on this pin while it is on no net (an unused input), accepted with the reason;
+    // a pin on a net is judged with its net, whose waivers hold.
+    waivers: z.array(WaiverSchema).optional(),
   })
   .meta({ id: 'Pin', description: 'A signal pin; nets name it PART.PIN' });
 
@@ -346,14 +357,6 @@ export const DiscreteSchema = z
         : `expected "resistor", "fet-shifter" or "diode-shifter", found ${describeValue(iss.input)}`,
   })
   .meta({ id: 'Discrete', description: 'A part between chips: a resistor, a FET shifter or a diode shifter' });
-
-export const WaiverSchema = z
-  .strictObject({
-    rule: z.enum(RULE_IDS, { message: `expected a rule id: ${RULE_IDS.join(', ')}` }),
-    scenario: z.string().optional(),
-    note: z.string(),
-  })
-  .meta({ id: 'Waiver', description: 'A finding the engineer has reviewed and accepted, with the reason' });
 
 export const NetSchema = z
   .strictObject({

@@ -67,8 +67,8 @@ export const KEY_ORDER = {
           params: PARAMS,
           position: leaf('x', 'y'),
           pins: {
-            keys: ['id', 'role', 'drive', 'rail', 'profile', 'params', 'pull', 'side'],
-            children: { params: PARAMS, pull: PULL },
+            keys: ['id', 'role', 'drive', 'rail', 'profile', 'params', 'pull', 'side', 'waivers'],
+            children: { params: PARAMS, pull: PULL, waivers: leaf('rule', 'scenario', 'note') },
           },
         },
       },

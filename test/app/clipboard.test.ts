@@ -36,12 +36,34 @@ describe('copy and paste', () => {
     expect(copyParts(start, ['Q'])).toBeUndefined();
   });
 
+  it("a copy leaves a pin's waivers behind, as it leaves a net's", () => {
+    const waived = {
+      ...start,
+      parts: start.parts.map((p) =>
+        p.id === 'H'
+          ? {
+              ...p,
+              pins: p.pins.map((q) =>
+                q.id === 'C' ? { ...q, waivers: [{ rule: 'floating-input' as const, note: 'spare' }] } : q,
+              ),
+            }
+          : p,
+      ),
+    };
+    const clip = copyParts(waived, ['H'])!;
+    expect(clip.parts[0]!.pins.find((q) => q.id === 'C')).toEqual({ id: 'C', role: 'input' });
+    expect(waived.parts[1]!.pins.find((q) => q.id === 'C')?.waivers).toHaveLength(1);
+  });
+
   it('pastes with fresh designators and net ids, moved by the offset, in one undo step', () => {
     const h = harness(start);
     const planned = planPaste(h.design, copyParts(h.design, ['H', 'T'])!, { x: 40, y: 40 });
+    // Asked for 40 px down and right, the copies would cover H and T (131 px tall: 44 header,
+    // 4 rows of 20, 6 padding, 1 border): they land 120 px lower, the nearest step of 20 px that
+    // leaves 24 px between bodies (106 + 131 + 24 = 261 ≤ 266).
     expect(planned.parts.map((p) => [p.id, p.position])).toEqual([
-      ['H1', { x: 340, y: 140 }],
-      ['T1', { x: 640, y: 140 }],
+      ['H1', { x: 340, y: 260 }],
+      ['T1', { x: 640, y: 260 }],
     ]);
     expect(planned.nets.map((n) => [n.id, n.pins, n.route])).toEqual([
       ['N1', ['H1.A', 'T1.A'], [['H1.A', 'T1.A']]],

@@ -600,6 +600,19 @@ const refusals: Refusal[] = [
     path: 'nets[3].waivers[1].note',
     says: 'missing',
   },
+  // a lone pin's waiver, held by the pin, refused as a net's is
+  {
+    name: "a pin's waiver in an unknown scenario",
+    breakIt: (d) => void (d.parts[0].pins[0].waivers = [{ rule: 'floating-input', scenario: 'stand-by', note: 'x' }]),
+    path: 'parts[0].pins[0].waivers[0].scenario',
+    says: 'unknown scenario "stand-by"',
+  },
+  {
+    name: "a pin's waiver of an unknown rule",
+    breakIt: (d) => void (d.parts[0].pins[0].waivers = [{ rule: 'floating', note: 'x' }]),
+    path: 'parts[0].pins[0].waivers[0].rule',
+    says: 'expected a rule id',
+  },
 ];
 
 interface Accepted {
@@ -609,6 +622,15 @@ interface Accepted {
 
 const accepted: Accepted[] = [
   { name: 'the design as it is', change: () => {} },
+  {
+    name: "a pin's waiver in every power state and in one",
+    change: (d) => {
+      d.parts[0].pins[0].waivers = [
+        { rule: 'floating-input', note: 'spare input, tied on the next board revision' },
+        { rule: 'overvoltage', scenario: d.scenarios[0].id, note: 'x' },
+      ];
+    },
+  },
   {
     name: 'rail, scenario and profile ids may contain "."',
     change: (d) => {

@@ -62,7 +62,7 @@ const TABLE_ORDER: { name: string; order: KeyOrder | undefined; schema: z.ZodObj
     name: 'pin',
     order: KEY_ORDER.design.children.parts.children.pins,
     schema: PinSchema,
-    keys: ['id', 'role', 'drive', 'rail', 'profile', 'params', 'pull', 'side'],
+    keys: ['id', 'role', 'drive', 'rail', 'profile', 'params', 'pull', 'side', 'waivers'],
   },
   {
     name: 'params',

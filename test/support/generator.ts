@@ -363,6 +363,13 @@ export function applyEdit(design: Design, kind: EditKind, r: Rand): Design {
         return;
       }
       case 'add-waiver': {
+        // Now and then a lone pin's own waiver (kept in the pin; judged only while it is on no net).
+        if (d.parts.length > 0 && r() < 0.3) {
+          const pin = pick(r, pick(r, d.parts).pins);
+          const scenario = r() < 0.5 ? { scenario: 'standby' } : {};
+          pin.waivers = [...(pin.waivers ?? []), { rule: 'floating-input', ...scenario, note: 'spare' }];
+          return;
+        }
         if (d.nets.length === 0) return;
         const net = pick(r, d.nets);
         const rule = pick(r, [

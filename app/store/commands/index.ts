@@ -6,7 +6,15 @@ export { addPart, moveParts, nudgeParts, setPartLabel, setPartRail, setPartProfi
 export { editPart, renamePart, partProblem, designatorProblem } from './partEdit.ts';
 export { insertParts } from './paste.ts';
 export { setNetLabel, setNetPull, setNetWiringCapacitance, setNetMaxRiseTime } from './nets.ts';
-export { addWaiver, removeWaiverFor, removeWaiverAt, covers, type WaiverTarget } from './waivers.ts';
+export {
+  addWaiver,
+  removeWaiverFor,
+  removeWaiverAt,
+  covers,
+  waiverPlaceOf,
+  type WaiverPlace,
+  type WaiverTarget,
+} from './waivers.ts';
 export {
   addProfile,
   setProfileLabel,

@@ -46,8 +46,9 @@ const cases: Omit<FixCase, 'fix'>[] = [
         rail: '3v3',
         profile: 'xlat-side',
         // Halfway between U1 (360, 160) and U3 (720, 80) is (540, 120), on top of U1: the nearest
-        // spot clear of every chip by 24 px, searched in rings of 40 px steps, is (460, 40).
-        position: { x: 460, y: 40 },
+        // spot on the 20 px grid clear of every chip and part between chips by 24 px is 60 px
+        // up and left, (480, 60) (freeSpot.test.ts holds the search's own cases).
+        position: { x: 480, y: 60 },
         pins: [
           { id: 'A', role: 'input', side: 'left' },
           { id: 'B', role: 'output', rail: '5v0', side: 'right' },

@@ -11,7 +11,7 @@ import { addWaiver } from '../waivers.ts';
 import { markTolerantFix, markUnpoweredSafeFix, tolerantFamilyFixes, ttlInputsFix } from './family.ts';
 import { findNet, pinAt, railOfPin } from './lookup.ts';
 import { driveOf } from '../../../../rules/model/pinDefaults.ts';
-import { addPullFix, pullValueFix, tieNetFixes, tiePinFixes } from './pulls.ts';
+import { addPullFix, pullValueFix, tieNetFixes, tiePinFixes, tieUnusedInputsFix } from './pulls.ts';
 import { translatorFixes } from './translator.ts';
 import { fetShifterFix } from './shifter.ts';
 import type { QuickFix } from './types.ts';
@@ -123,7 +123,9 @@ export function fixesFor(finding: Finding, design: Design, result: CheckResult):
     case 'pull-range':
       return [pullValueFix(design, finding, result)].filter(present);
     case 'floating-input':
-      return finding.net === null ? tiePinFixes(design, finding) : tieNetFixes(design, finding, result);
+      return finding.net === null
+        ? [tieUnusedInputsFix(design, finding), ...tiePinFixes(design, finding)].filter(present)
+        : tieNetFixes(design, finding, result);
     case 'contention':
       return [contentionWaiver(finding)].filter(present);
     default:

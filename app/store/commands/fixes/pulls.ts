@@ -187,3 +187,71 @@ export function tiePinFixes(design: Design, finding: Finding): QuickFix[] {
     },
   }));
 }
+
+/** An input named active-low (`RESET_N`, `CS#`): tied high, so that an unused one never asserts. */
+export function isActiveLowName(pinId: string): boolean {
+  return /(_N|#)$/i.test(pinId);
+}
+
+/**
+ * The part's inputs that are on no net and have no pull of their own: the ones that float
+ * unused; an input whose floating the engineer has accepted (a waiver in the pin) is left be.
+ */
+export function unusedInputsOf(design: Design, partId: string): string[] {
+  const part = design.parts.find((p) => p.id === partId);
+  if (part === undefined) return [];
+  const onNets = new Set<string>();
+  for (const n of design.nets) for (const k of n.pins) onNets.add(k);
+  return part.pins
+    .filter(
+      (p) =>
+        p.role === 'input' &&
+        p.pull === undefined &&
+        !onNets.has(`${part.id}.${p.id}`) &&
+        !(p.waivers ?? []).some((w) => w.rule === 'floating-input'),
+    )
+    .map((p) => p.id);
+}
+
+/**
+ * floating-input on an unused input: tie every unused input of its part at once (one undo
+ * step), each through its own pull as the single tie does. Unused CMOS inputs go to a defined
+ * level, low to ground, except inputs named active-low, which go high to the part's rail so
+ * that they never assert (common practice). Offered when the part has two or more.
+ */
+export function tieUnusedInputsFix(design: Design, finding: Finding): QuickFix | undefined {
+  const key = finding.pins[0];
+  const at = key === undefined ? undefined : pinAt(design, key);
+  if (at === undefined) return undefined;
+  const partId = at.part.id;
+  const pins = unusedInputsOf(design, partId);
+  if (pins.length < 2) return undefined;
+  const rail = at.part.rail;
+  const railLabel = design.rails.find((r) => r.id === rail)?.label ?? rail;
+  const high = pins.filter(isActiveLowName);
+  const low = pins.filter((p) => !isActiveLowName(p));
+  const list = (ids: string[]) => ids.join(', ');
+  const partName = at.part.label === '' ? partId : `${at.part.label} (${partId})`;
+  return {
+    id: 'tie-unused-inputs',
+    finding: finding.id,
+    title: `Tie all ${pins.length} unused inputs of ${partId} to defined levels`,
+    sentence:
+      `Gives each unused input of ${partName} a ${ohms(TIE_OHMS)} pull of its own, in one step: ` +
+      (low.length > 0 ? `${list(low)} low to ground` : '') +
+      (low.length > 0 && high.length > 0 ? '; ' : '') +
+      (high.length > 0 ? `${list(high)} (active-low) high to ${railLabel}` : '') +
+      '. An unused CMOS input left open drifts and draws current; tied, it reads a fixed level.',
+    apply(draft: Draft<Design>) {
+      const part = draft.parts.find((p) => p.id === partId);
+      if (part === undefined) return refuse(`There is no part ${partId}.`);
+      const now = unusedInputsOf(draft as Design, partId);
+      if (now.length === 0) return refuse(`${partId} has no unused input left to tie.`);
+      for (const id of now) {
+        const pin = part.pins.find((p) => p.id === id)!;
+        const to = isActiveLowName(id) ? (pin.rail ?? part.rail) : GROUND;
+        pin.pull = { to, ohms: TIE_OHMS };
+      }
+    },
+  };
+}

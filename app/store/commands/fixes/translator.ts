@@ -9,7 +9,8 @@ import { GROUND } from '../../../../rules/model/references.ts';
 import { freshId, refuse, splitPinKey, type Refusal } from '../command.ts';
 import { findNet, netName, pinAt, railOfPin, uniqueId } from './lookup.ts';
 import { driveOf } from '../../../../rules/model/pinDefaults.ts';
-import { chipSize, freePlace } from '../../../canvas/chipLayout.ts';
+import { chipSize } from '../../../canvas/chipLayout.ts';
+import { freePlace } from '../../../canvas/freeSpot.ts';
 import type { QuickFix } from './types.ts';
 
 /** Built-in translator side profiles (rules/profiles/translators.ts). */
@@ -190,7 +191,7 @@ function translatorPart(design: Design, plan: TranslatorPlan, layout: Translator
     label: `${LABEL_PREFIX}${netName(layout.net)}`,
     rail: plan.railA,
     profile: profileFor(layout.direction),
-    position: freePlace(design.parts, middle, chipSize({ id: layout.partId, label: '', rail: '', profile: '', pins })),
+    position: freePlace(design, middle, chipSize({ id: layout.partId, label: '', rail: '', profile: '', pins })),
     pins,
   };
 }
