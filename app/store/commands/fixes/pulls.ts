@@ -14,6 +14,7 @@ import { findNet, lowestRail, netName, pinAt, railOfPin } from './lookup.ts';
 import { newErrors, tryOn } from './preview.ts';
 import { DEFAULT_PULL_OHMS } from './translator.ts';
 import type { QuickFix } from './types.ts';
+import { railOf } from '../../../../rules/model/pinDefaults.ts';
 
 const ohms = (r: number) => formatQuantity(r, 'Ω');
 
@@ -249,7 +250,7 @@ export function tieUnusedInputsFix(design: Design, finding: Finding): QuickFix |
       if (now.length === 0) return refuse(`${partId} has no unused input left to tie.`);
       for (const id of now) {
         const pin = part.pins.find((p) => p.id === id)!;
-        const to = isActiveLowName(id) ? (pin.rail ?? part.rail) : GROUND;
+        const to = isActiveLowName(id) ? railOf(part, pin) : GROUND;
         pin.pull = { to, ohms: TIE_OHMS };
       }
     },
