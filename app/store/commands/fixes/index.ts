@@ -13,9 +13,10 @@ import { driveOfPin, findNet, pinAt, railOfPin } from './lookup.ts';
 import { addPullFix, pullValueFix, tieNetFixes, tiePinFixes } from './pulls.ts';
 import { translatorFixes } from './translator.ts';
 import { fetShifterFix } from './shifter.ts';
+import { seriesResistorFix } from './series.ts';
 import type { QuickFix } from './types.ts';
 
-export type { QuickFix } from './types.ts';
+export type { FixFigure, QuickFix } from './types.ts';
 export { previewFix, findingsAdded, newErrors, type FixPreview } from './preview.ts';
 export {
   layoutTranslator,
@@ -109,6 +110,7 @@ export function fixesFor(finding: Finding, design: Design, result: CheckResult):
         ...tolerantFamilyFixes(design, finding),
         ...exposureTranslator(design, finding),
         fetShifterFix(design, finding),
+        seriesResistorFix(design, finding),
         markTolerantFix(design, finding),
       ].filter(present);
     case 'back-power':
