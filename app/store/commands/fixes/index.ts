@@ -14,6 +14,7 @@ import { addPullFix, pullValueFix, tieNetFixes, tiePinFixes } from './pulls.ts';
 import { translatorFixes } from './translator.ts';
 import { fetShifterFix } from './shifter.ts';
 import { seriesResistorFix } from './series.ts';
+import { dividerFix } from './divider.ts';
 import type { QuickFix } from './types.ts';
 
 export type { FixFigure, QuickFix } from './types.ts';
@@ -111,6 +112,7 @@ export function fixesFor(finding: Finding, design: Design, result: CheckResult):
         ...exposureTranslator(design, finding),
         fetShifterFix(design, finding),
         seriesResistorFix(design, finding),
+        dividerFix(design, finding, result),
         markTolerantFix(design, finding),
       ].filter(present);
     case 'back-power':
