@@ -4,7 +4,7 @@
  * The box geometry takes the editor's chip measures (app/canvas/chipLayout.ts; rules/ cannot
  * import app/), so that parts the editor shows apart are apart on paper too. Pure: no jsPDF.
  */
-import type { Design, Net, Part, Pin } from '../../model/schema.ts';
+import type { Design, Discrete, Net, Part, Pin } from '../../model/schema.ts';
 import { STUB } from '../../routing/channels.ts';
 import { hopPolyline, markRoutes } from '../../routing/marks.ts';
 import type { Box, WireSpec } from '../../routing/types.ts';
@@ -22,8 +22,11 @@ export {
 
 export type Side = NonNullable<Pin['side']>;
 
-/** The editor's chip measures, canvas units. */
-export const CHIP = { width: 208, header: 44, row: 20, strip: 30, pad: 4 } as const;
+/**
+ * The editor's chip measures, canvas units (app/canvas/chipLayout.ts: the body's padding of 6
+ * split above and below the rows, a 1-unit bottom border).
+ */
+export const CHIP = { width: 208, header: 44, row: 20, strip: 30, pad: 3, border: 1 } as const;
 
 export type { Point } from '../../routing/types.ts';
 import type { Point } from '../../routing/types.ts';
@@ -55,6 +58,48 @@ export interface Bounds {
   readonly maxY: number;
 }
 
+/**
+ * The editor's measures of a part between chips (app/canvas/deriveFlow.ts DISCRETE_SIZE), canvas
+ * units. Placed at its position as a chip's box is (the editor's node margin shifts both alike).
+ */
+export const DISCRETE = { width: 120, height: 64 } as const;
+
+/** The two pins of each kind, left then right, as the canvas draws them. */
+export const DISCRETE_ENDS: Readonly<Record<Discrete['kind'], readonly [string, string]>> = {
+  resistor: ['1', '2'],
+  'fet-shifter': ['S', 'D'],
+  'diode-shifter': ['K', 'A'],
+};
+
+/** A part between chips: its box and the anchors of its untied pins (at mid-height on each side). */
+export interface DiscreteBox {
+  readonly discrete: Discrete;
+  readonly x: number;
+  readonly y: number;
+  readonly width: number;
+  readonly height: number;
+  readonly pins: readonly PinPlace[];
+}
+
+/** A part between chips' box and pin anchors; a resistor's end tied to a rail or ground has none. */
+export function discreteBox(d: Discrete): DiscreteBox {
+  const x = onCanvas(d.position?.x ?? 0);
+  const y = onCanvas(d.position?.y ?? 0);
+  const mid = y + DISCRETE.height / 2;
+  const pins: PinPlace[] = [];
+  DISCRETE_ENDS[d.kind].forEach((id, k) => {
+    if (d.kind === 'resistor' && d.tie?.[id as '1' | '2'] !== undefined) return;
+    const side: Side = k === 0 ? 'left' : 'right';
+    pins.push({
+      key: `${d.id}.${id}`,
+      pin: { id, role: 'bidir' },
+      side,
+      at: { x: k === 0 ? x : x + DISCRETE.width, y: mid },
+    });
+  });
+  return { discrete: d, x, y, width: DISCRETE.width, height: DISCRETE.height, pins };
+}
+
 /** The side the design gives, else inputs left and outputs and bidir pins right (as the editor). */
 export function sideOf(pin: Pin): Side {
   return pin.side ?? (pin.role === 'input' ? 'left' : 'right');
@@ -80,7 +125,7 @@ export function partBox(part: Part): PartBox {
   const x = onCanvas(part.position?.x ?? 0);
   const y = onCanvas(part.position?.y ?? 0);
   const width = CHIP.width;
-  const height = topStrip + CHIP.header + CHIP.pad + rows * CHIP.row + CHIP.pad + bottomStrip;
+  const height = topStrip + CHIP.header + CHIP.pad + rows * CHIP.row + CHIP.pad + CHIP.border + bottomStrip;
   const rowY = (k: number) => y + topStrip + CHIP.header + CHIP.pad + (k + 0.5) * CHIP.row;
   const spread = (k: number, n: number) => x + (width * (k + 0.5)) / n;
   const pins: PinPlace[] = [];
@@ -147,6 +192,8 @@ export interface Wire {
 /** Everything the diagram draws, in canvas units. */
 export interface DiagramLayout {
   readonly boxes: readonly PartBox[];
+  /** The parts between chips (design format version 2). */
+  readonly discretes: readonly DiscreteBox[];
   readonly wires: readonly Wire[];
   /** Where a net branches: a dot is drawn there. */
   readonly junctions: readonly { net: Net; at: Point }[];
@@ -162,9 +209,14 @@ const LABEL_ROOM = { x: 70, y: 24 };
 /** Lays out the design's parts and wires. Pins a net names that do not exist are skipped. */
 export function layoutDiagram(design: Design): DiagramLayout {
   const boxes = design.parts.map(partBox);
+  const discretes = (design.discretes ?? []).map(discreteBox);
+  const all: { id: string; x: number; y: number; width: number; height: number; pins: readonly PinPlace[] }[] = [
+    ...boxes.map((b) => ({ ...b, id: b.part.id })),
+    ...discretes.map((b) => ({ ...b, id: b.discrete.id })),
+  ];
   // The editor's router (rules/routing): the same routes, runs of different nets kept apart.
-  const bodies: Box[] = boxes.map((b) => ({
-    id: b.part.id,
+  const bodies: Box[] = all.map((b) => ({
+    id: b.id,
     x: b.x,
     y: b.y,
     width: b.width,
@@ -172,7 +224,7 @@ export function layoutDiagram(design: Design): DiagramLayout {
     pins: b.pins.map((p) => ({ key: p.key, side: p.side, x: p.at.x, y: p.at.y })),
   }));
   const anchors = new Map<string, PinPlace>();
-  for (const box of boxes) for (const p of box.pins) anchors.set(p.key, p);
+  for (const box of all) for (const p of box.pins) anchors.set(p.key, p);
   const specs: WireSpec[] = [];
   const netOf = new Map<string, Net>();
   const netLabels: { net: Net; pin: PinPlace }[] = [];
@@ -197,16 +249,16 @@ export function layoutDiagram(design: Design): DiagramLayout {
       });
   }
   const junctions = marks.junctions.map((j) => ({ net: netOf.get(j.net)!, at: j.at }));
-  if (boxes.length === 0) return { boxes, wires, junctions, netLabels, bounds: null };
+  if (all.length === 0) return { boxes, discretes, wires, junctions, netLabels, bounds: null };
   let minX = Infinity;
   let minY = Infinity;
   let maxX = -Infinity;
   let maxY = -Infinity;
-  for (const b of boxes) {
+  for (const b of all) {
     minX = Math.min(minX, b.x - STUB - LABEL_ROOM.x);
     minY = Math.min(minY, b.y - STUB - LABEL_ROOM.y);
     maxX = Math.max(maxX, b.x + b.width + STUB + LABEL_ROOM.x);
     maxY = Math.max(maxY, b.y + b.height + STUB + LABEL_ROOM.y);
   }
-  return { boxes, wires, junctions, netLabels, bounds: { minX, minY, maxX, maxY } };
+  return { boxes, discretes, wires, junctions, netLabels, bounds: { minX, minY, maxX, maxY } };
 }
