@@ -30,6 +30,9 @@ export const CHIP_WIDTH = 208;
 /** Room around the chip inside its node, where the outer half of each handle sits (styles.css, .rc-chip). */
 export const NODE_MARGIN = 6;
 /** The rail-coloured top border and the header (styles.css: border-top 3px, .rc-chip-head 41px). */
+/** The drawn size of a part between chips: its symbol, designator and value (styles.css .rc-discrete). */
+export const DISCRETE_SIZE = { width: 120, height: 64 } as const;
+
 export const HEADER_HEIGHT = 44;
 export const ROW_HEIGHT = 20;
 /** Padding above and below the pin rows (.rc-chip-body). */

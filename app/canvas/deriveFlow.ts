@@ -10,15 +10,14 @@ import type { Edge, Node } from '@xyflow/react';
 import type { Design, Discrete, Net, Part } from '../../rules/model/schema.ts';
 import { netWires, splitPinKey, wireId } from '../store/commands/index.ts';
 import type { XY } from '../store/editorStore.ts';
-import { chipSize, NODE_MARGIN } from './chipLayout.ts';
+import { chipSize, DISCRETE_SIZE, NODE_MARGIN } from './chipLayout.ts';
 
 export type ChipNode = Node<{ readonly part: string }, 'chip'>;
 export type WireEdge = Edge<{ net: string; label: string | null; pull: Net['pull'] | null }, 'wire'>;
 /** A part between chips (version 2) as a node. */
 export type DiscreteNode = Node<{ readonly discrete: string }, 'discrete'>;
 
-/** The drawn size of a part between chips: its symbol, designator and value. */
-export const DISCRETE_SIZE = { width: 120, height: 64 } as const;
+export { DISCRETE_SIZE } from './chipLayout.ts';
 
 /**
  * Class names of a chip being dragged and of the wires that end on it. styles.css gives those
