@@ -43,6 +43,7 @@ import type {
   ResistorPath,
   SeriesResistor,
   ShifterLink,
+  UnjudgedChain,
 } from './types.ts';
 
 /** More resistors with a tolerance than this in one path are judged at their ends all together. */
@@ -822,3 +823,63 @@ export function crossingRails(view: NetView): readonly string[] | undefined {
 }
 
 export type { FetShifter, DiodeShifter };
+
+// ---------------------------------------------------------------------------------------------
+// Chains the analysis does not solve.
+
+/**
+ * How a net was reached, walking out from the net being judged: through series resistors only
+ * (`R`, solved by nodal analysis), across one shifter next to it (`S`, solved per shifter), or
+ * otherwise (`X`: a shifter beyond a resistor, two shifters, a resistor beyond a shifter).
+ */
+type Reach = 'R' | 'S' | 'X';
+
+/**
+ * Every powered driver that reaches `net` through parts between chips by a chain that mixes
+ * series resistors and shifters, or crosses more than one shifter: the pair analysis solves a
+ * path of resistors and one shifter next to the receiver's net, nothing more, so such a driver's
+ * pairs would otherwise go unjudged. A FET passes while its gate rail is on; a diode passes from
+ * its cathode's net to its anode's. Each driver once, with the first chain found (breadth first).
+ */
+export function unjudgedChains(net: Net, src: PathSource, rails: RailStates): UnjudgedChain[] {
+  const seen = new Set<string>();
+  const out: UnjudgedChain[] = [];
+  const reported = new Set<string>();
+  const queue: { net: string; reach: Reach | 'start'; via: string[]; gates: string[] }[] = [
+    { net: net.id, reach: 'start', via: [], gates: [] },
+  ];
+  seen.add(`${net.id}\u0000start`);
+  for (let k = 0; k < queue.length; k++) {
+    const at = queue[k]!;
+    if (at.reach === 'X') {
+      for (const p of src.pinsOf(src.nets.get(at.net)!)) {
+        if (!p.powered || p.role === 'input' || reported.has(p.key)) continue;
+        reported.add(p.key);
+        out.push({ driver: p.key, via: at.via, rails: [p.rail, ...at.gates] });
+      }
+    }
+    for (const id of [...(src.linksOfNet.get(at.net) ?? [])].sort()) {
+      const d = src.discretes.get(id);
+      if (d === undefined || at.via.includes(id)) continue;
+      const x = across(d, at.net, src);
+      if (x === undefined || !src.nets.has(x.other)) continue;
+      let reach: Reach;
+      const gates = [...at.gates];
+      if (d.kind === 'resistor') reach = at.reach === 'start' || at.reach === 'R' ? 'R' : 'X';
+      else {
+        if (d.kind === 'fet-shifter') {
+          if (!fetOn(d, rails)) continue;
+          gates.push(d.gate);
+        }
+        // A diode passes towards its anode: this net must be on A.
+        if (d.kind === 'diode-shifter' && x.pin !== 'A') continue;
+        reach = at.reach === 'start' ? 'S' : 'X';
+      }
+      const key = `${x.other}\u0000${reach}`;
+      if (seen.has(key) || x.other === net.id) continue;
+      seen.add(key);
+      queue.push({ net: x.other, reach, via: [id, ...at.via], gates });
+    }
+  }
+  return out;
+}

@@ -12,6 +12,7 @@ import {
   pathEdgeOf,
   pathLoad,
   remoteDriversOf,
+  unjudgedChains,
   remotePairs,
   shifterLoad,
   type PathSource,
@@ -127,6 +128,7 @@ export function prepareNet(ctx: PrepareContext, net: Net): NetView {
     shifters: NONE,
     remoteDrivers: NONE,
     pathRails: pinRails,
+    unjudged: NONE,
   };
 }
 
@@ -156,6 +158,8 @@ function prepareLinkedNet(ctx: PrepareContext, net: Net): NetView {
   for (const p of pins) if (!ids.includes(p.rail)) ids.push(p.rail);
   for (const p of pulls) if (p.to !== GROUND && !ids.includes(p.to)) ids.push(p.to);
   for (const id of linkedRails(path, shifters)) if (!ids.includes(id)) ids.push(id);
+  const chains = receivers.length === 0 ? NONE : unjudgedChains(net, src, ctx.rails);
+  for (const c of chains) for (const id of c.rails) if (!ids.includes(id)) ids.push(id);
   const rails = railsOf(ctx.rails, ids);
 
   const loads = new Map<string, DriverLoad>();
@@ -219,6 +223,7 @@ function prepareLinkedNet(ctx: PrepareContext, net: Net): NetView {
     remoteDrivers: remoteDriversOf(path, shifters, rails),
     ...(pathEdge === undefined ? {} : { pathEdge }),
     pathRails,
+    unjudged: chains,
   };
 }
 

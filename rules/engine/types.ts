@@ -174,6 +174,19 @@ export interface NetView {
   readonly pathEdge?: PathEdge;
   /** Distinct rails of the pins on this net and on every net joined to it (for the crossing table). */
   readonly pathRails: readonly string[];
+  /**
+   * Powered drivers that reach this net only through a chain the pair analysis does not solve
+   * (series resistors and shifters mixed, or more than one shifter), with the parts on the way.
+   */
+  readonly unjudged: readonly UnjudgedChain[];
+}
+
+/** A driver reaching a net through a chain of parts between chips that is not solved (paths.ts). */
+export interface UnjudgedChain {
+  readonly driver: string;
+  readonly via: readonly string[];
+  /** The driver's rail and the gate rails of the FETs on the way. */
+  readonly rails: readonly string[];
 }
 
 export interface DriverLoad {
