@@ -191,7 +191,7 @@ function prepareLinkedNet(ctx: PrepareContext, net: Net): NetView {
   const pinRails: string[] = [];
   for (const p of pins) if (!pinRails.includes(p.rail)) pinRails.push(p.rail);
   const pathRails = [...pinRails];
-  for (const n of [...(path?.nodes ?? []), ...shifters.map((s) => s.other)]) {
+  for (const n of [...(path?.nodes ?? []), ...shifters.flatMap((s) => [s.other, ...(s.otherPath?.nodes ?? [])])]) {
     for (const p of n.pins) if (!pathRails.includes(p.rail)) pathRails.push(p.rail);
   }
 

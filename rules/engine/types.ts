@@ -113,6 +113,11 @@ export interface ShifterLink {
   /** The net on its other pin; this net's own node is `self`. */
   readonly other: PathNode;
   readonly self: PathNode;
+  /**
+   * The nets joined to the other side by series resistors, with the other side as its `self`:
+   * a driver on them reaches this net through the resistors and then the shifter.
+   */
+  readonly otherPath?: ResistorPath;
 }
 
 /** The 10–90 % edge at a net reached through series resistors from a driver on another net. */
