@@ -1,7 +1,7 @@
 /**
  * mixed-path: a driver that reaches a net's receivers only through a chain of parts between
- * chips that the pair analysis does not solve (version 2): series resistors and shifters mixed,
- * or more than one shifter. Its pairs are not judged, and that is said as an error rather than
+ * chips that the pair analysis does not solve (version 2): a series resistor between a shifter
+ * and the receiver, or more than one shifter. Its pairs are not judged, and that is said as an error rather than
  * passed in silence (paths.ts `unjudgedChains`).
  */
 import { defineRule } from './defineRule.ts';
@@ -20,10 +20,11 @@ export default defineRule({
     title: 'Chains of resistors and shifters are reported, not passed',
     severity: { error: '' },
     explanation:
-      'The pair analysis solves a signal path of series resistors by nodal analysis, and a shifter ' +
-      "next to the receiver's net with the driver on its other side. A driver that reaches a " +
-      'receiver only through more than that (a series resistor and a shifter in one chain, in either ' +
-      'order, or two shifters) is not solved, so none of its levels, margins or loads at that ' +
+      'The pair analysis solves a signal path of series resistors by nodal analysis, a shifter next to ' +
+      "the receiver's net with the driver on its other side, and series resistors before such a shifter " +
+      "(the shifter's near side solved with the far side's pull-up current fed in). A driver that reaches " +
+      'a receiver only through more than that (a series resistor beyond the shifter, between it and the ' +
+      'receiver, or two shifters) is not solved, so none of its levels, margins or loads at that ' +
       'receiver is judged. Each such driver is reported once per receiving net with the parts on the ' +
       'way, as an error: a check that could not decide must not pass. A FET shifter counts while its ' +
       "gate rail is on; a diode shifter only from its cathode's net to its anode's.",
