@@ -92,7 +92,8 @@ describe('series resistor fix', () => {
           label: 'TX series resistor',
           ohms: 2400,
           tolerance: 0.05,
-          position: { x: 200, y: 0 },
+          // Midway in the gap between U1 (0…208) and U2 (400…): (208 + 400)/2 − 60 = 244, on the 10 grid 240.
+          position: { x: 240, y: 0 },
         },
       ]);
       const clamp = after.find((f) => f.rule === 'clamp-current');

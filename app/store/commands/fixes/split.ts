@@ -10,6 +10,7 @@ import { freshId, refuse, type Refusal } from '../command.ts';
 import { takenIds } from '../discretes.ts';
 import { findNet, netName, pinAt, railOfPin, uniqueId } from './lookup.ts';
 import type { FindingOf } from '../../../../rules/engine/types.ts';
+import { chipSize, DISCRETE_SIZE, freePlace } from '../../../canvas/chipLayout.ts';
 
 export interface SplitPlan {
   readonly net: string;
@@ -24,6 +25,8 @@ export interface SplitPlan {
   /** The divider's lower resistor, to ground. */
   readonly shunt?: string;
   readonly at: { x: number; y: number };
+  /** Where the divider's lower resistor goes. */
+  readonly below?: { x: number; y: number };
 }
 
 export interface SplitValues {
@@ -61,8 +64,20 @@ export function planSplit(
   const taken = takenIds(design);
   const series = freshId('R', taken);
   const lower = shunt ? freshId('R', [...taken, series]) : undefined;
-  const x = Math.round(((src.part.position?.x ?? 0) + (rx.part.position?.x ?? 0)) / 2);
-  const y = Math.round(((src.part.position?.y ?? 0) + (rx.part.position?.y ?? 0)) / 2);
+  // Midway between the driver's chip and the receiver's, clear of every chip.
+  const sx = src.part.position?.x ?? 0;
+  const rxX = rx.part.position?.x ?? 0;
+  const [left, right] = sx <= rxX ? [src.part, rx.part] : [rx.part, src.part];
+  const gapMid = ((left.position?.x ?? 0) + chipSize(left).width + (right.position?.x ?? 0)) / 2;
+  const at = freePlace(
+    design.parts,
+    {
+      x: Math.round((gapMid - DISCRETE_SIZE.width / 2) / 10) * 10,
+      y: Math.round(((src.part.position?.y ?? 0) + (rx.part.position?.y ?? 0)) / 20) * 10,
+    },
+    DISCRETE_SIZE,
+  );
+  const below = shunt ? freePlace(design.parts, { x: at.x, y: at.y + 100 }, DISCRETE_SIZE) : undefined;
   return {
     rxRail,
     plan: {
@@ -76,7 +91,8 @@ export function planSplit(
       source,
       series,
       ...(lower === undefined ? {} : { shunt: lower }),
-      at: { x, y },
+      at,
+      ...(below === undefined ? {} : { below }),
     },
   };
 }
@@ -120,7 +136,7 @@ export function applySplit(draft: Draft<Design>, plan: SplitPlan, values: SplitV
       ohms: values.shunt,
       tolerance: values.tolerance,
       tie: { '2': 'ground' },
-      position: { x: plan.at.x, y: plan.at.y + 100 },
+      position: plan.below ?? { x: plan.at.x, y: plan.at.y + 100 },
     });
   draft.discretes = [...(draft.discretes ?? []), ...parts];
 }
