@@ -6,20 +6,11 @@
 import { memo } from 'react';
 import { Handle, Position, type NodeProps } from '@xyflow/react';
 import type { Discrete } from '../../rules/model/schema.ts';
-import { formatIec60062, formatQuantity } from '../../rules/levels/units.ts';
+import { discreteValue } from '../../rules/report/discreteValue.ts';
 import { useEditor } from '../store/EditorProvider.tsx';
 import type { DiscreteNode as DiscreteNodeType } from './deriveFlow.ts';
 
-/** The value as the canvas writes it: a resistor's IEC 60062 code with a small k (`4k7`), a shifter's deciding figure. */
-export function discreteValue(d: Discrete): string {
-  if (d.kind === 'resistor') {
-    const code = formatIec60062(d.ohms).replace('K', 'k');
-    const tol = d.tolerance ?? 0.05;
-    return `${code} ±${Number((tol * 100).toPrecision(3))} %`;
-  }
-  if (d.kind === 'fet-shifter') return `VGS(th) ≤ ${formatQuantity(d.vgsThMax, 'V')}`;
-  return `Vf ≤ ${formatQuantity(d.vfMax, 'V')}`;
-}
+export { discreteValue };
 
 /** Pin names and their sides: the first on the left, the second on the right. */
 const ENDS: Readonly<Record<Discrete['kind'], readonly [string, string]>> = {

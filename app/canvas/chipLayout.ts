@@ -4,7 +4,16 @@
  * properties of `MEASURE_VARS` (set on the page's root at start), never with numbers of its own.
  */
 import type { Part, Pin } from '../../rules/model/schema.ts';
-import { CHIP_WIDTH, HEADER_HEIGHT, ROW_HEIGHT, STRIP_HEIGHT, TOP_BORDER } from '../../rules/routing/chipMeasures.ts';
+import {
+  BODY_PADDING,
+  BOTTOM_BORDER,
+  CHIP_WIDTH,
+  DISCRETE_SIZE,
+  HEADER_HEIGHT,
+  ROW_HEIGHT,
+  STRIP_HEIGHT,
+  TOP_BORDER,
+} from '../../rules/routing/chipMeasures.ts';
 
 import { sideOf, type Side } from '../../rules/model/pinDefaults.ts';
 
@@ -29,19 +38,13 @@ export function pinLayout(pins: readonly Pin[]): PinLayout {
 }
 
 // Shared with the PDF diagram (rules/ cannot import app/), so kept in rules/.
-export { CHIP_WIDTH, HEADER_HEIGHT, ROW_HEIGHT, STRIP_HEIGHT, TOP_BORDER };
+export { BODY_PADDING, BOTTOM_BORDER, CHIP_WIDTH, DISCRETE_SIZE, HEADER_HEIGHT, ROW_HEIGHT, STRIP_HEIGHT, TOP_BORDER };
 /** Room around the chip inside its node, where the outer half of each handle sits. */
 export const NODE_MARGIN = 6;
-/** Padding above and below the pin rows together (half above, half below). */
-export const BODY_PADDING = 6;
 /** Space between the pins of a top or bottom row. */
 export const STRIP_GAP = 10;
-/** The chip's other borders (sides and bottom). */
-export const BOTTOM_BORDER = 1;
 /** A pin's handle, square; its centre sits on the chip's edge. */
 export const HANDLE_SIZE = 9;
-/** The drawn size of a part between chips: its symbol, designator and value. */
-export const DISCRETE_SIZE = { width: 120, height: 64 } as const;
 
 /** The measures as the CSS custom properties styles.css draws with. */
 export const MEASURE_VARS: Readonly<Record<string, string>> = {

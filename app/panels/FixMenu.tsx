@@ -69,6 +69,23 @@ function FixOption({ fix, onApplied }: { fix: QuickFix; onApplied: (before: Summ
     <li className="rc-fix" data-fix={fix.id}>
       <strong>{fix.title}</strong>
       <p className="rc-tight">{fix.sentence}</p>
+      {fix.figures !== undefined && fix.figures.length > 0 && (
+        <table className="rc-fix-figures" data-testid="fix-figures">
+          <tbody>
+            {fix.figures.map((g) => (
+              <tr key={g.label}>
+                <th scope="row">{g.label}</th>
+                <td>{g.value}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      )}
+      {fix.unavailable !== undefined && (
+        <p className="rc-field-error" data-testid="fix-unavailable">
+          {fix.unavailable}
+        </p>
+      )}
       {fix.needsConfirmation === true && (
         <label className="rc-toggle">
           <input
@@ -86,27 +103,29 @@ function FixOption({ fix, onApplied }: { fix: QuickFix; onApplied: (before: Summ
           {error}
         </p>
       )}
-      <div className="rc-waive-buttons">
-        <button
-          type="button"
-          onClick={() => {
-            const s = store.getState();
-            setPreview(previewFix(fix, s.design, s.result));
-          }}
-          data-testid="fix-try"
-        >
-          What it changes
-        </button>
-        <button
-          type="button"
-          className="rc-primary"
-          onClick={apply}
-          disabled={fix.needsConfirmation === true && !confirmed}
-          data-testid="fix-apply"
-        >
-          Apply
-        </button>
-      </div>
+      {fix.unavailable === undefined && (
+        <div className="rc-waive-buttons">
+          <button
+            type="button"
+            onClick={() => {
+              const s = store.getState();
+              setPreview(previewFix(fix, s.design, s.result));
+            }}
+            data-testid="fix-try"
+          >
+            What it changes
+          </button>
+          <button
+            type="button"
+            className="rc-primary"
+            onClick={apply}
+            disabled={fix.needsConfirmation === true && !confirmed}
+            data-testid="fix-apply"
+          >
+            Apply
+          </button>
+        </div>
+      )}
     </li>
   );
 }

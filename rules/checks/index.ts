@@ -20,6 +20,7 @@ import floatingInput from './floating-input.ts';
 import missingPull from './missing-pull.ts';
 import pullRange from './pull-range.ts';
 import fetShifter from './fet-shifter.ts';
+import mixedPath from './mixed-path.ts';
 import translatorPull from './translator-pull.ts';
 import busHold from './bus-hold.ts';
 import railRange from './rail-range.ts';
@@ -41,6 +42,7 @@ const REGISTRY: { readonly [I in RuleId]: RuleOf<I> } = {
   'missing-pull': missingPull,
   'pull-range': pullRange,
   'fet-shifter': fetShifter,
+  'mixed-path': mixedPath,
   'translator-pull': translatorPull,
   'bus-hold': busHold,
   'rail-range': railRange,

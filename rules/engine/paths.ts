@@ -43,6 +43,7 @@ import type {
   ResistorPath,
   SeriesResistor,
   ShifterLink,
+  UnjudgedChain,
 } from './types.ts';
 
 /** More resistors with a tolerance than this in one path are judged at their ends all together. */
@@ -123,15 +124,8 @@ function across(d: Discrete, netId: string, src: PathSource): { pin: string; oth
   return undefined;
 }
 
-/**
- * The resistor path and the shifters of a net: undefined path when no series resistor joins it
- * to another net. `self` is the net's own node, made by the caller.
- */
-export function linksOf(
-  net: Net,
-  self: PathNode,
-  src: PathSource,
-): { path: ResistorPath | undefined; shifters: ShifterLink[] } {
+/** The nets joined to `net` (whose node is `self`) by series resistors; undefined when none is. */
+function resistorPathOf(net: Net, self: PathNode, src: PathSource): ResistorPath | undefined {
   const nodes: PathNode[] = [self];
   const index = new Map<string, number>([[net.id, 0]]);
   const resistors: SeriesResistor[] = [];
@@ -157,6 +151,19 @@ export function linksOf(
       resistors.push({ id, a: k, b, ohms: d.ohms, tolerance: d.tolerance ?? DEFAULT_RESISTOR_TOLERANCE });
     }
   }
+  return resistors.length === 0 ? undefined : { nodes, resistors, self: 0 };
+}
+
+/**
+ * The resistor path and the shifters of a net: undefined path when no series resistor joins it
+ * to another net. `self` is the net's own node, made by the caller.
+ */
+export function linksOf(
+  net: Net,
+  self: PathNode,
+  src: PathSource,
+): { path: ResistorPath | undefined; shifters: ShifterLink[] } {
+  const path = resistorPathOf(net, self, src);
   const shifters: ShifterLink[] = [];
   for (const id of [...(src.linksOfNet.get(net.id) ?? [])].sort()) {
     const d = src.discretes.get(id);
@@ -165,9 +172,12 @@ export function linksOf(
     if (x === undefined || !src.nets.has(x.other)) continue;
     // Only what the rules read: a shifter that moved on the canvas leaves its nets' views alone.
     const { position: _p, label: _l, ...core } = d;
-    shifters.push({ part: core, pin: x.pin, other: nodeOf(src.nets.get(x.other)!, src), self });
+    const otherNet = src.nets.get(x.other)!;
+    const other = nodeOf(otherNet, src);
+    const otherPath = resistorPathOf(otherNet, other, src);
+    shifters.push({ part: core, pin: x.pin, other, self, ...(otherPath === undefined ? {} : { otherPath }) });
   }
-  return { path: resistors.length === 0 ? undefined : { nodes, resistors, self: 0 }, shifters };
+  return { path, shifters };
 }
 
 /** Rails a path and its shifters depend on: pins' rails, pulls' rails, FET gates. */
@@ -180,6 +190,7 @@ export function linkedRails(path: ResistorPath | undefined, shifters: readonly S
   for (const n of path?.nodes ?? []) addNode(n);
   for (const s of shifters) {
     addNode(s.other);
+    for (const n of s.otherPath?.nodes ?? []) addNode(n);
     if (s.part.kind === 'fet-shifter' && !ids.includes(s.part.gate)) ids.push(s.part.gate);
   }
   return ids;
@@ -602,6 +613,112 @@ function shifterPairs(
       out.push({ driver: driver.key, receiver: rx.key, via: part.id, high: strip(high), low: strip(low) });
     }
   }
+  if (link.otherPath !== undefined) throughPathPairs(link, link.otherPath, receivers, rails, settings, out);
+}
+
+/** The network with `i` more current fed into node `k`. */
+function withInjected(net: Network, k: number, i: number): Network {
+  return { ...net, inject: net.inject.map((x, j) => (j === k ? x + i : x)) };
+}
+
+/**
+ * Drivers that reach the shifter's other side through series resistors, receivers on this side.
+ * The other side's low is solved by nodal analysis with the driver at its VOL and this side's
+ * pull-up current flowing in through the shifter, taken at 0 V (its largest: a bound); the
+ * driver's VOL is read at the current it sinks with its pin at 0 V (its largest, again a bound).
+ * A FET must then turn on, VGS = Vgate − V_other ≥ VGS(th),max; where it is not guaranteed to, the
+ * receiver's side stays at its pulled-up level and the low fails. This side's low is V_other +
+ * I·RDS(on) (FET) or V_other + Vf (diode); its high is its own pull-up's, as for a driver on the
+ * other side. Worst over the rails' corners and the resistors' tolerance ends.
+ */
+function throughPathPairs(
+  link: ShifterLink,
+  path: ResistorPath,
+  receivers: readonly PinView[],
+  rails: RailStates,
+  settings: EffectiveSettings,
+  out: PairAnalysis[],
+): void {
+  const { part } = link;
+  const near = path.self;
+  const via = [...path.resistors.map((r) => r.id), part.id].join('+');
+  const railIds = [...pathRails(path), ...nodePullRails(link.self)];
+  if (part.kind === 'fet-shifter' && !railIds.includes(part.gate)) railIds.push(part.gate);
+  const cases = casesOf(path);
+  path.nodes.forEach((node, k) => {
+    if (k === near) return;
+    for (const driver of node.pins) {
+      if (!driver.powered || driver.role === 'input') continue;
+      for (const rx of receivers) {
+        if (rx.partId === driver.partId) continue;
+        const vih = highThreshold(rx);
+        const vil = lowThreshold(rx);
+        let high: Scored | undefined;
+        let low: Scored | undefined;
+        for (const c of corners([driver.rail, rx.rail, ...railIds], rails.ranges)) {
+          const driverVdd = c.get(driver.rail) ?? 0;
+          const receiverVdd = c.get(rx.rail) ?? 0;
+          const leakage = part.kind === 'diode-shifter' ? part.leakageMax : 0;
+          const pulled = pulledHigh(link.self, c, leakage);
+          if (vih !== undefined && pulled !== undefined) {
+            const threshold = levelAt(vih, receiverVdd);
+            high = keepWorst(high, {
+              out: pulled.v,
+              threshold,
+              margin: pulled.v - threshold,
+              driverVdd: null,
+              receiverVdd,
+              vpull: pulled.vpull,
+              estimate: false,
+              status: judge(pulled.v, threshold, settings.minMargin),
+              load: 0,
+              detail: { pullResistance: pulled.r },
+              score: pulled.v - threshold,
+            });
+          }
+          if (vil === undefined || driver.params.vol === undefined || driver.params.vol.length === 0) continue;
+          const iFar = pullCurrentAt(link.self, c, 0);
+          const threshold = levelAt(vil, receiverVdd);
+          for (const ohms of cases) {
+            const fixed: (number | undefined)[] = path.nodes.map(() => undefined);
+            fixed[k] = 0;
+            const atZero = withInjected(network(path, c, ohms, fixed, 'low', driver), near, iFar);
+            const load = -currentOut(atZero, solve(atZero), k);
+            const vol = outputLevel(driver.params.vol, load, driverVdd, 'low');
+            if (vol === undefined) continue;
+            fixed[k] = vol.v;
+            const net = withInjected(network(path, c, ohms, fixed, 'low', driver), near, iFar);
+            const vNear = solve(net)[near] ?? Number.NaN;
+            let v: number;
+            let detail: Record<string, number> = { vol: vol.v, vNear, iFar, ...seriesDetail(path, ohms) };
+            if (part.kind === 'fet-shifter') {
+              const vgs = (c.get(part.gate) ?? 0) - vNear;
+              detail = { ...detail, vgs, rdsOn: part.rdsOnMax };
+              // Not guaranteed to turn on: this side keeps its pulled-up level.
+              v = below(vgs, part.vgsThMax) ? (pulled?.v ?? Number.NaN) : vNear + iFar * part.rdsOnMax;
+            } else {
+              v = vNear + part.vfMax;
+              detail = { ...detail, vf: part.vfMax };
+            }
+            low = keepWorst(low, {
+              out: v,
+              threshold,
+              margin: threshold - v,
+              driverVdd,
+              receiverVdd,
+              estimate: vol.estimate,
+              status: judge(threshold, v, settings.minMargin),
+              load,
+              detail,
+              score: threshold - v,
+            });
+          }
+        }
+        if (high === undefined && low === undefined) continue;
+        out.push({ driver: driver.key, receiver: rx.key, via, high: strip(high), low: strip(low) });
+      }
+    }
+  });
 }
 
 /** Pairs whose driver sits on another net of the path or across a shifter, receiver on this net. */
@@ -632,6 +749,8 @@ export function remoteDriversOf(
     if (s.part.kind === 'fet-shifter' && !fetOn(s.part, rails)) continue;
     if (s.part.kind === 'diode-shifter' && s.pin !== 'A') continue;
     for (const p of s.other.pins) if (p.powered && p.role !== 'input' && !out.includes(p)) out.push(p);
+    for (const n of s.otherPath?.nodes ?? [])
+      for (const p of n.pins) if (p.powered && p.role !== 'input' && !out.includes(p)) out.push(p);
   }
   return out;
 }
@@ -822,3 +941,65 @@ export function crossingRails(view: NetView): readonly string[] | undefined {
 }
 
 export type { FetShifter, DiodeShifter };
+
+// ---------------------------------------------------------------------------------------------
+// Chains the analysis does not solve.
+
+/**
+ * How a net was reached, walking out from the net being judged: through series resistors only
+ * (`R`, solved by nodal analysis), across one shifter next to it (`S`, solved per shifter), across
+ * that shifter and then series resistors (`SR`: the shifter's near side solved by nodal analysis
+ * with the far side's pull-up current), or otherwise (`X`: a shifter beyond a resistor, two
+ * shifters).
+ */
+type Reach = 'R' | 'S' | 'SR' | 'X';
+
+/**
+ * Every powered driver that reaches `net` through parts between chips by a chain that mixes
+ * series resistors and shifters other than resistors before one shifter next to the receiver's
+ * net, or crosses more than one shifter: the pair analysis solves nothing else, so such a
+ * driver's pairs would otherwise go unjudged. A FET passes while its gate rail is on; a diode passes from
+ * its cathode's net to its anode's. Each driver once, with the first chain found (breadth first).
+ */
+export function unjudgedChains(net: Net, src: PathSource, rails: RailStates): UnjudgedChain[] {
+  const seen = new Set<string>();
+  const out: UnjudgedChain[] = [];
+  const reported = new Set<string>();
+  const queue: { net: string; reach: Reach | 'start'; via: string[]; gates: string[] }[] = [
+    { net: net.id, reach: 'start', via: [], gates: [] },
+  ];
+  seen.add(`${net.id}\u0000start`);
+  for (let k = 0; k < queue.length; k++) {
+    const at = queue[k]!;
+    if (at.reach === 'X') {
+      for (const p of src.pinsOf(src.nets.get(at.net)!)) {
+        if (!p.powered || p.role === 'input' || reported.has(p.key)) continue;
+        reported.add(p.key);
+        out.push({ driver: p.key, via: at.via, rails: [p.rail, ...at.gates] });
+      }
+    }
+    for (const id of [...(src.linksOfNet.get(at.net) ?? [])].sort()) {
+      const d = src.discretes.get(id);
+      if (d === undefined || at.via.includes(id)) continue;
+      const x = across(d, at.net, src);
+      if (x === undefined || !src.nets.has(x.other)) continue;
+      let reach: Reach;
+      const gates = [...at.gates];
+      if (d.kind === 'resistor') reach = at.reach === 'start' || at.reach === 'R' ? 'R' : at.reach === 'X' ? 'X' : 'SR';
+      else {
+        if (d.kind === 'fet-shifter') {
+          if (!fetOn(d, rails)) continue;
+          gates.push(d.gate);
+        }
+        // A diode passes towards its anode: this net must be on A.
+        if (d.kind === 'diode-shifter' && x.pin !== 'A') continue;
+        reach = at.reach === 'start' ? 'S' : 'X';
+      }
+      const key = `${x.other}\u0000${reach}`;
+      if (seen.has(key) || x.other === net.id) continue;
+      seen.add(key);
+      queue.push({ net: x.other, reach, via: [id, ...at.via], gates });
+    }
+  }
+  return out;
+}

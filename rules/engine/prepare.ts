@@ -13,6 +13,7 @@ import {
   pathEdgeOf,
   pathLoad,
   remoteDriversOf,
+  unjudgedChains,
   remotePairs,
   shifterLoad,
   type PathSource,
@@ -129,6 +130,7 @@ export function prepareNet(ctx: PrepareContext, net: Net): NetView {
     shifters: NONE,
     remoteDrivers: NONE,
     pathRails: pinRails,
+    unjudged: NONE,
   };
 }
 
@@ -158,6 +160,8 @@ function prepareLinkedNet(ctx: PrepareContext, net: Net): NetView {
   for (const p of pins) if (!ids.includes(p.rail)) ids.push(p.rail);
   for (const p of pulls) if (p.to !== GROUND && !ids.includes(p.to)) ids.push(p.to);
   for (const id of linkedRails(path, shifters)) if (!ids.includes(id)) ids.push(id);
+  const chains = receivers.length === 0 ? NONE : unjudgedChains(net, src, ctx.rails);
+  for (const c of chains) for (const id of c.rails) if (!ids.includes(id)) ids.push(id);
   const rails = railsOf(ctx.rails, ids);
 
   const loads = new Map<string, DriverLoad>();
@@ -189,7 +193,7 @@ function prepareLinkedNet(ctx: PrepareContext, net: Net): NetView {
   const pinRails: string[] = [];
   for (const p of pins) if (!pinRails.includes(p.rail)) pinRails.push(p.rail);
   const pathRails = [...pinRails];
-  for (const n of [...(path?.nodes ?? []), ...shifters.map((s) => s.other)]) {
+  for (const n of [...(path?.nodes ?? []), ...shifters.flatMap((s) => [s.other, ...(s.otherPath?.nodes ?? [])])]) {
     for (const p of n.pins) if (!pathRails.includes(p.rail)) pathRails.push(p.rail);
   }
 
@@ -221,6 +225,7 @@ function prepareLinkedNet(ctx: PrepareContext, net: Net): NetView {
     remoteDrivers: remoteDriversOf(path, shifters, rails),
     ...(pathEdge === undefined ? {} : { pathEdge }),
     pathRails,
+    unjudged: chains,
   };
 }
 

@@ -113,6 +113,11 @@ export interface ShifterLink {
   /** The net on its other pin; this net's own node is `self`. */
   readonly other: PathNode;
   readonly self: PathNode;
+  /**
+   * The nets joined to the other side by series resistors, with the other side as its `self`:
+   * a driver on them reaches this net through the resistors and then the shifter.
+   */
+  readonly otherPath?: ResistorPath;
 }
 
 /** The 10–90 % edge at a net reached through series resistors from a driver on another net. */
@@ -174,6 +179,19 @@ export interface NetView {
   readonly pathEdge?: PathEdge;
   /** Distinct rails of the pins on this net and on every net joined to it (for the crossing table). */
   readonly pathRails: readonly string[];
+  /**
+   * Powered drivers that reach this net only through a chain the pair analysis does not solve
+   * (series resistors and shifters mixed, or more than one shifter), with the parts on the way.
+   */
+  readonly unjudged: readonly UnjudgedChain[];
+}
+
+/** A driver reaching a net through a chain of parts between chips that is not solved (paths.ts). */
+export interface UnjudgedChain {
+  readonly driver: string;
+  readonly via: readonly string[];
+  /** The driver's rail and the gate rails of the FETs on the way. */
+  readonly rails: readonly string[];
 }
 
 export interface DriverLoad {

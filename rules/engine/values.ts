@@ -245,6 +245,14 @@ export interface BusHoldValues {
   readonly toward: 'high' | 'low';
 }
 
+export interface MixedPathValues {
+  readonly driver: string;
+  /** The parts between chips from the driver's net to this one, in order. */
+  readonly via: readonly string[];
+  /** The powered receivers on this net whose pairs with the driver are not judged. */
+  readonly receivers: readonly string[];
+}
+
 export interface InterfacePowerValues {
   readonly pin: string;
   readonly driver: string;
@@ -274,6 +282,7 @@ export interface RuleValues {
   readonly 'missing-pull': MissingPullValues;
   readonly 'pull-range': PullRangeValues;
   readonly 'fet-shifter': FetTurnOnValues | FetSinkValues | FetSideValues | FetGateValues;
+  readonly 'mixed-path': MixedPathValues;
   readonly 'translator-pull': TranslatorPullValues | TranslatorLowValues | TranslatorLoadValues;
   readonly 'bus-hold': BusHoldValues;
   readonly 'rail-range': RailRangeValues;

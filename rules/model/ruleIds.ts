@@ -19,6 +19,7 @@ export const RULE_IDS = [
   'missing-pull',
   'pull-range',
   'fet-shifter',
+  'mixed-path',
   'translator-pull',
   'bus-hold',
   'rail-range',

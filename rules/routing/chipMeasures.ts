@@ -14,3 +14,9 @@ export const TOP_BORDER = 3;
 export const ROW_HEIGHT = 20;
 /** A row of top or bottom pins. */
 export const STRIP_HEIGHT = 30;
+/** Padding above and below the pin rows together (half above, half below). */
+export const BODY_PADDING = 6;
+/** The chip's other borders (sides and bottom). */
+export const BOTTOM_BORDER = 1;
+/** The drawn size of a part between chips: its symbol, designator and value. */
+export const DISCRETE_SIZE = { width: 120, height: 64 } as const;

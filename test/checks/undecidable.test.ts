@@ -189,7 +189,7 @@ const NUMERIC = [
   'bus-hold',
 ];
 /** The rules that judge only how pins are connected. */
-const STRUCTURAL = ['contention', 'floating-input', 'missing-pull'];
+const STRUCTURAL = ['contention', 'floating-input', 'missing-pull', 'mixed-path'];
 
 describe('a non-finite number is an error, never silence', () => {
   it('every rule is in one of the two lists, and every numeric rule has a case', () => {

@@ -41,13 +41,13 @@ describe('sideOf', () => {
 
 describe('partBox', () => {
   it.each<[string, Part, { width: number; height: number; headerTop: number }]>([
-    // 44 + 4 + 1 row × 20 + 4 (a part without pins keeps one row)
-    ['no pins', part('A', '3v3', 'lvcmos33', [], at(0, 0)), { width: 208, height: 72, headerTop: 0 }],
-    // rows = max(2 left, 1 right) = 2: 44 + 4 + 40 + 4
+    // 44 + 3 + 1 row × 20 + 3 + 1 (a part without pins keeps one row)
+    ['no pins', part('A', '3v3', 'lvcmos33', [], at(0, 0)), { width: 208, height: 71, headerTop: 0 }],
+    // rows = max(2 left, 1 right) = 2: 44 + 3 + 40 + 3 + 1 (the editor's padding of 6 split, its 1-unit border)
     [
       'two inputs and an output',
       part('A', '3v3', 'lvcmos33', [input('A'), input('B'), output('Y')], at(10, 20)),
-      { width: 208, height: 92, headerTop: 20 },
+      { width: 208, height: 91, headerTop: 20 },
     ],
     // a top strip (30) above the header, a bottom strip (30) below the rows
     [
@@ -59,7 +59,7 @@ describe('partBox', () => {
         [input('T', { side: 'top' }), input('L'), output('R'), output('B', { side: 'bottom' })],
         at(0, 100),
       ),
-      { width: 208, height: 132, headerTop: 130 },
+      { width: 208, height: 131, headerTop: 130 },
     ],
   ])('%s', (_name, p, expected) => {
     const box = partBox(p);
@@ -68,9 +68,9 @@ describe('partBox', () => {
 
   it('anchors left pins on the left edge and right pins on the right, one row (20) apart, below the header', () => {
     const box = partBox(part('U1', '3v3', 'lvcmos33', [input('A'), input('B'), output('Y')], at(100, 50)));
-    expect(place(box, 'A').at).toEqual({ x: 100, y: 50 + 44 + 4 + 10 });
-    expect(place(box, 'B').at).toEqual({ x: 100, y: 50 + 44 + 4 + 30 });
-    expect(place(box, 'Y').at).toEqual({ x: 308, y: 50 + 44 + 4 + 10 });
+    expect(place(box, 'A').at).toEqual({ x: 100, y: 50 + 44 + 3 + 10 });
+    expect(place(box, 'B').at).toEqual({ x: 100, y: 50 + 44 + 3 + 30 });
+    expect(place(box, 'Y').at).toEqual({ x: 308, y: 50 + 44 + 3 + 10 });
     expect(place(box, 'A').key).toBe('U1.A');
   });
 

@@ -9,9 +9,12 @@ import type { Design, Part, Pin, Rail } from '../../model/schema.ts';
 import { formatQuantity } from '../../levels/units.ts';
 import type { Report } from '../reportSchema.ts';
 import { pullLabel } from '../pullLabel.ts';
+import { discreteValue } from '../discreteValue.ts';
 import { addPage, contentWidth, fitText, pageHeight, sectionHeading, type Ctx } from './page.ts';
 import {
   CHIP,
+  DISCRETE_ENDS,
+  type DiscreteBox,
   layoutDiagram,
   normalOf,
   type DiagramLayout,
@@ -226,6 +229,106 @@ function drawBox(ctx: Ctx, v: View, box: PartBox, rails: ReadonlyMap<string, Rai
   }
 }
 
+/**
+ * The symbols of the parts between chips, as the canvas draws them (DiscreteNode.tsx), in its
+ * 64 × 24 units: line segments, a capsule (the resistor's body) and a filled wedge (the diode's).
+ */
+const SYMBOL: Readonly<
+  Record<DiscreteBox['discrete']['kind'], { lines: readonly (readonly number[])[]; capsule?: boolean; wedge?: boolean }>
+> = {
+  resistor: {
+    lines: [
+      [0, 12, 14, 12],
+      [50, 12, 64, 12],
+      [24, 6, 24, 18],
+      [32, 6, 32, 18],
+      [40, 6, 40, 18],
+    ],
+    capsule: true,
+  },
+  'fet-shifter': {
+    lines: [
+      [0, 14, 20, 14],
+      [44, 14, 64, 14],
+      [20, 14, 20, 10],
+      [20, 10, 44, 10],
+      [44, 10, 44, 14],
+      [32, 10, 32, 2],
+      [24, 20, 40, 20],
+      [24, 20, 27, 18],
+      [24, 20, 27, 22],
+      [40, 20, 37, 18],
+      [40, 20, 37, 22],
+    ],
+  },
+  'diode-shifter': {
+    lines: [
+      [0, 12, 24, 12],
+      [40, 12, 64, 12],
+      [24, 5, 24, 19],
+    ],
+    wedge: true,
+  },
+};
+
+/** A part between chips: its box, designator, symbol, value, and the rail of a tied end or a gate. */
+function drawDiscrete(ctx: Ctx, v: View, box: DiscreteBox): void {
+  const { doc } = ctx;
+  const s = v.s;
+  const d = box.discrete;
+  setFill(doc, WHITE);
+  setDraw(doc, INK_2);
+  doc.setLineWidth(clamp(0.7 * s, 0.1, 0.6));
+  doc.roundedRect(v.x(box.x), v.y(box.y), box.width * s, box.height * s, 6 * s, 6 * s, 'FD');
+  // The symbol, centred, from the box's two pin anchors inwards.
+  const sx = box.x + (box.width - 64) / 2;
+  const sy = box.y + 20;
+  const mid = box.y + box.height / 2;
+  const sym = SYMBOL[d.kind];
+  doc.setLineWidth(clamp(1.4 * s, 0.15, 1.2));
+  doc.setLineCap('round');
+  const seg = (x1: number, y1: number, x2: number, y2: number) => doc.line(v.x(x1), v.y(y1), v.x(x2), v.y(y2));
+  for (const [x1, y1, x2, y2] of sym.lines) seg(sx + x1!, sy + y1!, sx + x2!, sy + y2!);
+  // The leads from the box's edges to the symbol, so that a wire (or a tied end's rail) visibly ends on the part.
+  const leadY = sy + (d.kind === 'fet-shifter' ? 14 : 12);
+  for (const side of ['left', 'right'] as const) {
+    if (side === 'left') {
+      seg(box.x, mid, sx, mid);
+      if (mid !== leadY) seg(sx, mid, sx, leadY);
+    } else {
+      seg(sx + 64, mid, box.x + box.width, mid);
+      if (mid !== leadY) seg(sx + 64, mid, sx + 64, leadY);
+    }
+  }
+  if (sym.capsule === true) doc.roundedRect(v.x(sx + 14), v.y(sy + 6), 36 * s, 12 * s, 6 * s, 6 * s, 'S');
+  if (sym.wedge === true) {
+    setFill(doc, INK_2);
+    doc.triangle(v.x(sx + 40), v.y(sy + 5), v.x(sx + 25), v.y(sy + 12), v.x(sx + 40), v.y(sy + 19), 'F');
+  }
+  doc.setLineCap('butt');
+  const room = (box.width - 8) * s;
+  doc.setFont(ctx.fonts.sans, 'bold');
+  doc.setFontSize(9 * s);
+  setText(doc, INK);
+  const head = d.kind === 'fet-shifter' ? `${d.id}  gate ${d.gate}` : d.id;
+  doc.text(fitText(doc, head, room), v.x(box.x + box.width / 2), v.y(box.y + 14), { align: 'center' });
+  doc.setFont(ctx.fonts.mono, 'normal');
+  doc.setFontSize(8.5 * s);
+  doc.text(fitText(doc, discreteValue(d), room), v.x(box.x + box.width / 2), v.y(box.y + 56), { align: 'center' });
+  // A resistor's end tied to a rail or ground: the rail's name where its wire would be.
+  if (d.kind === 'resistor') {
+    doc.setFont(ctx.fonts.sans, 'normal');
+    doc.setFontSize(8 * s);
+    setText(doc, MUTED);
+    DISCRETE_ENDS.resistor.forEach((end, k) => {
+      const to = d.tie?.[end as '1' | '2'];
+      if (to === undefined) return;
+      const x = k === 0 ? box.x - 3 : box.x + box.width + 3;
+      doc.text(to, v.x(x), v.y(mid + 3), { align: k === 0 ? 'right' : 'left' });
+    });
+  }
+}
+
 function drawNetLabels(
   ctx: Ctx,
   v: View,
@@ -381,7 +484,11 @@ export function drawDiagram(ctx: Ctx, design: Design, report: Report, options: D
   const caption =
     bounds === null
       ? 'The design has no parts yet.'
-      : `${design.parts.length} part${design.parts.length === 1 ? '' : 's'} at their positions in the design, ${layout.wires.length} wire${layout.wires.length === 1 ? '' : 's'}` +
+      : `${design.parts.length} part${design.parts.length === 1 ? '' : 's'}` +
+        (layout.discretes.length === 0
+          ? ''
+          : ` and ${layout.discretes.length} between them (resistors with their IEC 60062 values, shifters)`) +
+        ` at their positions in the design, ${layout.wires.length} wire${layout.wires.length === 1 ? '' : 's'}` +
         (small ? '. Drawn small to fit one page: it is a vector drawing, so zoom in to read the names.' : '.');
   doc.text(caption, MARGIN.left, y + 2);
   setDraw(doc, HAIRLINE);
@@ -394,6 +501,7 @@ export function drawDiagram(ctx: Ctx, design: Design, report: Report, options: D
     const status = netStatus(report, options.state.id);
     drawWires(doc, view, layout, status);
     for (const box of layout.boxes) drawBox(ctx, view, box, rails, options.family);
+    for (const box of layout.discretes) drawDiscrete(ctx, view, box);
     drawNetLabels(ctx, view, layout, status, design.rails);
   }
   drawLegend(

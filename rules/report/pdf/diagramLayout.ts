@@ -4,13 +4,21 @@
  * The box geometry takes the editor's chip measures (app/canvas/chipLayout.ts; rules/ cannot
  * import app/), so that parts the editor shows apart are apart on paper too. Pure: no jsPDF.
  */
-import type { Design, Net, Part, Pin } from '../../model/schema.ts';
+import { DISCRETE_PINS, type Design, type Discrete, type Net, type Part, type Pin } from '../../model/schema.ts';
 import { sideOf, type Side } from '../../model/pinDefaults.ts';
 import { netWires } from '../../model/wiring.ts';
 import { STUB } from '../../routing/channels.ts';
 import { hopPolyline, markRoutes } from '../../routing/marks.ts';
 import type { Box, WireSpec } from '../../routing/types.ts';
-import { CHIP_WIDTH, HEADER_HEIGHT, ROW_HEIGHT, STRIP_HEIGHT } from '../../routing/chipMeasures.ts';
+import {
+  BODY_PADDING,
+  BOTTOM_BORDER,
+  CHIP_WIDTH,
+  DISCRETE_SIZE,
+  HEADER_HEIGHT,
+  ROW_HEIGHT,
+  STRIP_HEIGHT,
+} from '../../routing/chipMeasures.ts';
 import { routeOnce } from '../../routing/wireRouter.ts';
 
 export {
@@ -24,10 +32,17 @@ export {
 } from '../../routing/channels.ts';
 
 /**
- * The editor's chip measures, canvas units (rules/routing/chipMeasures.ts). `pad`, above and
- * below the pin rows, is the paper's own (4; the editor's is 3).
+ * The editor's chip measures, canvas units (rules/routing/chipMeasures.ts: the body's padding
+ * split above and below the rows, the bottom border).
  */
-export const CHIP = { width: CHIP_WIDTH, header: HEADER_HEIGHT, row: ROW_HEIGHT, strip: STRIP_HEIGHT, pad: 4 } as const;
+export const CHIP = {
+  width: CHIP_WIDTH,
+  header: HEADER_HEIGHT,
+  row: ROW_HEIGHT,
+  strip: STRIP_HEIGHT,
+  pad: BODY_PADDING / 2,
+  border: BOTTOM_BORDER,
+} as const;
 
 export type { Point } from '../../routing/types.ts';
 import type { Point } from '../../routing/types.ts';
@@ -60,6 +75,44 @@ export interface Bounds {
 }
 
 /**
+ * The editor's measures of a part between chips (app/canvas/deriveFlow.ts DISCRETE_SIZE), canvas
+ * units. Placed at its position as a chip's box is (the editor's node margin shifts both alike).
+ */
+export const DISCRETE = DISCRETE_SIZE;
+
+/** The two pins of each kind, left then right, as the canvas draws them. */
+export const DISCRETE_ENDS = DISCRETE_PINS as Readonly<Record<Discrete['kind'], readonly [string, string]>>;
+
+/** A part between chips: its box and the anchors of its untied pins (at mid-height on each side). */
+export interface DiscreteBox {
+  readonly discrete: Discrete;
+  readonly x: number;
+  readonly y: number;
+  readonly width: number;
+  readonly height: number;
+  readonly pins: readonly PinPlace[];
+}
+
+/** A part between chips' box and pin anchors; a resistor's end tied to a rail or ground has none. */
+export function discreteBox(d: Discrete): DiscreteBox {
+  const x = onCanvas(d.position?.x ?? 0);
+  const y = onCanvas(d.position?.y ?? 0);
+  const mid = y + DISCRETE.height / 2;
+  const pins: PinPlace[] = [];
+  DISCRETE_ENDS[d.kind].forEach((id, k) => {
+    if (d.kind === 'resistor' && d.tie?.[id as '1' | '2'] !== undefined) return;
+    const side: Side = k === 0 ? 'left' : 'right';
+    pins.push({
+      key: `${d.id}.${id}`,
+      pin: { id, role: 'bidir' },
+      side,
+      at: { x: k === 0 ? x : x + DISCRETE.width, y: mid },
+    });
+  });
+  return { discrete: d, x, y, width: DISCRETE.width, height: DISCRETE.height, pins };
+}
+
+/**
  * How far from the origin the diagram places a part: a design may put one anywhere a finite
  * number allows, but a box at 1e308 would overflow its own far edge to Infinity, and with it the
  * drawing's scale. Such a part is drawn at this distance instead (a billion canvas units: far
@@ -79,7 +132,7 @@ export function partBox(part: Part): PartBox {
   const x = onCanvas(part.position?.x ?? 0);
   const y = onCanvas(part.position?.y ?? 0);
   const width = CHIP.width;
-  const height = topStrip + CHIP.header + CHIP.pad + rows * CHIP.row + CHIP.pad + bottomStrip;
+  const height = topStrip + CHIP.header + CHIP.pad + rows * CHIP.row + CHIP.pad + CHIP.border + bottomStrip;
   const rowY = (k: number) => y + topStrip + CHIP.header + CHIP.pad + (k + 0.5) * CHIP.row;
   const spread = (k: number, n: number) => x + (width * (k + 0.5)) / n;
   const pins: PinPlace[] = [];
@@ -111,6 +164,8 @@ export interface Wire {
 /** Everything the diagram draws, in canvas units. */
 export interface DiagramLayout {
   readonly boxes: readonly PartBox[];
+  /** The parts between chips (design format version 2). */
+  readonly discretes: readonly DiscreteBox[];
   readonly wires: readonly Wire[];
   /** Where a net branches: a dot is drawn there. */
   readonly junctions: readonly { net: Net; at: Point }[];
@@ -126,9 +181,14 @@ const LABEL_ROOM = { x: 70, y: 24 };
 /** Lays out the design's parts and wires. Pins a net names that do not exist are skipped. */
 export function layoutDiagram(design: Design): DiagramLayout {
   const boxes = design.parts.map(partBox);
+  const discretes = (design.discretes ?? []).map(discreteBox);
+  const all: { id: string; x: number; y: number; width: number; height: number; pins: readonly PinPlace[] }[] = [
+    ...boxes.map((b) => ({ ...b, id: b.part.id })),
+    ...discretes.map((b) => ({ ...b, id: b.discrete.id })),
+  ];
   // The editor's router (rules/routing): the same routes, runs of different nets kept apart.
-  const bodies: Box[] = boxes.map((b) => ({
-    id: b.part.id,
+  const bodies: Box[] = all.map((b) => ({
+    id: b.id,
     x: b.x,
     y: b.y,
     width: b.width,
@@ -136,7 +196,7 @@ export function layoutDiagram(design: Design): DiagramLayout {
     pins: b.pins.map((p) => ({ key: p.key, side: p.side, x: p.at.x, y: p.at.y })),
   }));
   const anchors = new Map<string, PinPlace>();
-  for (const box of boxes) for (const p of box.pins) anchors.set(p.key, p);
+  for (const box of all) for (const p of box.pins) anchors.set(p.key, p);
   const specs: WireSpec[] = [];
   const netOf = new Map<string, Net>();
   const netLabels: { net: Net; pin: PinPlace }[] = [];
@@ -161,16 +221,16 @@ export function layoutDiagram(design: Design): DiagramLayout {
       });
   }
   const junctions = marks.junctions.map((j) => ({ net: netOf.get(j.net)!, at: j.at }));
-  if (boxes.length === 0) return { boxes, wires, junctions, netLabels, bounds: null };
+  if (all.length === 0) return { boxes, discretes, wires, junctions, netLabels, bounds: null };
   let minX = Infinity;
   let minY = Infinity;
   let maxX = -Infinity;
   let maxY = -Infinity;
-  for (const b of boxes) {
+  for (const b of all) {
     minX = Math.min(minX, b.x - STUB - LABEL_ROOM.x);
     minY = Math.min(minY, b.y - STUB - LABEL_ROOM.y);
     maxX = Math.max(maxX, b.x + b.width + STUB + LABEL_ROOM.x);
     maxY = Math.max(maxY, b.y + b.height + STUB + LABEL_ROOM.y);
   }
-  return { boxes, wires, junctions, netLabels, bounds: { minX, minY, maxX, maxY } };
+  return { boxes, discretes, wires, junctions, netLabels, bounds: { minX, minY, maxX, maxY } };
 }

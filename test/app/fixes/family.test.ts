@@ -116,7 +116,8 @@ describe('which receiver fixes are offered', () => {
       name: 'library families are switched, never marked tolerant (74HC on 3.3 V fed 5 V)',
       start: link({ rail: '5v0', profile: '74hct' }, { rail: '3v3', profile: '74hc' }),
       finding: 'overvoltage:N:all-on:R.A',
-      fixes: ['tolerant-family:74lvc', 'translator'],
+      // The series resistor is offered too, saying it needs the input's injection limit, and a divider.
+      fixes: ['tolerant-family:74lvc', 'translator', 'series-resistor', 'divider'],
     },
     {
       name: 'no tolerant family above 5.5 V (a 12 V source), and no common tolerance covers it',
@@ -126,7 +127,7 @@ describe('which receiver fixes are offered', () => {
         { rails: [rail3v3, rail('12v', 12)] },
       ),
       finding: 'overvoltage:N:all-on:R.A',
-      fixes: ['translator'],
+      fixes: ['translator', 'series-resistor', 'divider'],
     },
     {
       name: 'greenhouse back-power on the 1.8 V sensor: its powered limit (1.71 + 0.5 V) is below 3.465 V, so no marking',

@@ -14,9 +14,11 @@ import { driveOf } from '../../../../rules/model/pinDefaults.ts';
 import { addPullFix, pullValueFix, tieNetFixes, tiePinFixes, tieUnusedInputsFix } from './pulls.ts';
 import { translatorFixes } from './translator.ts';
 import { fetShifterFix } from './shifter.ts';
+import { seriesResistorFix } from './series.ts';
+import { dividerFix } from './divider.ts';
 import type { QuickFix } from './types.ts';
 
-export type { QuickFix } from './types.ts';
+export type { FixFigure, QuickFix } from './types.ts';
 export { previewFix, findingsAdded, newErrors, type FixPreview } from './preview.ts';
 export {
   layoutTranslator,
@@ -110,6 +112,8 @@ export function fixesFor(finding: Finding, design: Design, result: CheckResult):
         ...tolerantFamilyFixes(design, finding),
         ...exposureTranslator(design, finding),
         fetShifterFix(design, finding),
+        seriesResistorFix(design, finding),
+        dividerFix(design, finding, result),
         markTolerantFix(design, finding),
       ].filter(present);
     case 'back-power':

@@ -27,5 +27,21 @@ export interface QuickFix {
    * The panel opens that waiver for editing.
    */
   readonly followUp?: { readonly kind: 'complete-waiver-note'; readonly net: string; readonly rule: string };
+  /**
+   * The figures the fix was worked out from and those its circuit gives (values, margins, edge
+   * time), shown with the fix before it is applied.
+   */
+  readonly figures?: readonly FixFigure[];
+  /**
+   * The fix cannot be worked out from what the design states: what it would need. The menu shows
+   * it instead of Apply, and `apply` refuses with it.
+   */
+  readonly unavailable?: string;
   apply(draft: Draft<Design>): Refusal | undefined;
+}
+
+/** One figure of a fix: `label` says what it is and at which corner, `value` is formatted with its unit. */
+export interface FixFigure {
+  readonly label: string;
+  readonly value: string;
 }
