@@ -39,7 +39,12 @@ export default defineRule({
     const keys = view.pins.map((p) => p.key);
     report({
       messageId: 'crosses',
-      data: { net: view.net.label ?? view.net.id, rails: [...rails], marginHigh: worstHigh, marginLow: worstLow },
+      data: {
+        net: view.names.net(view.net.id),
+        rails: rails.map((r) => view.names.rail(r)),
+        marginHigh: worstHigh,
+        marginLow: worstLow,
+      },
       severity: 'info',
       pins: keys,
       parts: partsOf(...keys),

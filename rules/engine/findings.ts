@@ -1,5 +1,6 @@
 /** Turning rule drafts into findings: ids, waivers, and the report's order. */
 import type { Net } from '../model/schema.ts';
+import { netLabel } from './names.ts';
 import type { Draft, MessageFns, Rule } from './rule.ts';
 import { RULE_IDS, type RuleId } from '../model/ruleIds.ts';
 import type { Finding, FindingOf, PowerState, Summary } from './types.ts';
@@ -64,7 +65,7 @@ export function completeFinding<M extends MessageFns>(
 
 /** What an undecided finding names in its message: the pin pair or pin, else the net (or the rail). */
 function undecidableSubject<M extends MessageFns>(draft: Draft<M>, net: Net | null): string {
-  const where = net === null ? [draft.subject, draft.suffix] : [draft.suffix ?? `net ${net.id}`];
+  const where = net === null ? [draft.subject, draft.suffix] : [draft.suffix ?? `net ${netLabel(net)}`];
   return [...new Set(where.filter((w): w is string => w !== undefined && w !== ''))].join(', ');
 }
 
