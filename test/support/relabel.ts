@@ -18,7 +18,7 @@ export function relabelled(design: Design): Design {
   };
 }
 
-function escape(s: string): string {
+function escapeRegExp(s: string): string {
   return s.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
 }
 
@@ -48,7 +48,7 @@ export function labelledIds(design: Design): { kind: string; id: string }[] {
 export function idsWhereLabelsBelong(text: string, design: Design): string[] {
   const found: string[] = [];
   for (const { kind, id } of labelledIds(design)) {
-    const token = new RegExp(`(?<![\\w.\\-])${escape(id)}(?![\\w\\-]|\\.\\w)`);
+    const token = new RegExp(`(?<![\\w.\\-])${escapeRegExp(id)}(?![\\w\\-]|\\.\\w)`);
     if (token.test(text)) found.push(`${kind} ${id}`);
   }
   return found;
