@@ -67,7 +67,7 @@ const CASES: Case[] = [
     name: '5 V into 3.3 V through a 2.2 kΩ / 3.3 kΩ divider is no over-voltage',
     file: 'divider.railcross.json',
     exit: 0,
-    has: [['rail-crossing', 'info', /RX33 joins rails 3v3, 5v0: worst NMH 0\.761 V, worst NML 0\.733 V/]],
+    has: [['rail-crossing', 'info', /RX33 joins rails 3\.3 V, 5 V: worst NMH 0\.761 V, worst NML 0\.733 V/]],
     noErrorFrom: ['overvoltage', 'level-high', 'level-low'],
   },
   {
@@ -77,7 +77,7 @@ const CASES: Case[] = [
     exit: 0,
     has: [
       ['clamp-current', 'info', /clamp carries at most 2\.23 mA, within its 5 mA limit/],
-      ['rail-injection', 'info', /2\.23 mA of clamp current flows into 3v3/],
+      ['rail-injection', 'info', /2\.23 mA of clamp current flows into 3\.3 V/],
     ],
     noErrorFrom: ['overvoltage'],
   },
