@@ -20,7 +20,7 @@ const design = relabelled(example as Design);
 const report = buildReport(design, check(design), { failOn: 'error', generatedAt: FIXED_TIME });
 
 /** The text before a heading line that starts `marker` (the profiles' list gives ids on purpose). */
-const before = (text: string, marker: string) => text.slice(0, text.indexOf(marker));
+const textBefore = (text: string, marker: string) => text.slice(0, text.indexOf(marker));
 
 describe('the relabelled example', () => {
   it('has findings that name nets and rails, so that the checks below can fail', () => {
@@ -31,7 +31,7 @@ describe('the relabelled example', () => {
   });
 
   it('text: findings, crossings and supply currents name nets and rails by label', () => {
-    const text = before(renderText(report, { verbose: true }), '\nProfiles used');
+    const text = textBefore(renderText(report, { verbose: true }), '\nProfiles used');
     // The crossings table's first column is the net's id, beside its label: what the file says.
     const lines = text.split('\n').map((line) => {
       const crossing = report.crossings.find((c) => line.startsWith(`  ${c.net} `));
@@ -42,7 +42,7 @@ describe('the relabelled example', () => {
   });
 
   it('Markdown: the same', () => {
-    const md = before(renderMarkdown(report), '\n## Profiles');
+    const md = textBefore(renderMarkdown(report), '\n## Profiles');
     const lines = md.split('\n').map((line) => line.replace(/^\| `[^`]*` \|/, '|'));
     const bad = lines.flatMap((line) => idsWhereLabelsBelong(line, design).map((id) => `${id}: ${line}`));
     expect(bad).toEqual([]);
