@@ -7,6 +7,7 @@ import { useMemo, useState } from 'react';
 import { crossingRows } from '../../rules/report/buildReport.ts';
 import type { Crossing } from '../../rules/report/reportSchema.ts';
 import { formatQuantity } from '../../rules/levels/units.ts';
+import { labelOr } from '../../rules/engine/names.ts';
 import { useFocus } from '../canvas/placement.ts';
 import { useEditor, useEditorStore } from '../store/EditorProvider.tsx';
 import './explain.css';
@@ -48,6 +49,12 @@ export function CrossingsTable() {
   const result = useEditor((s) => s.result);
   const focus = useFocus();
   const [sort, setSort] = useState<{ key: Column; up: boolean }>({ key: 'marginHigh', up: true });
+  const railList = useEditor((s) => s.design.rails);
+  // Rails by the labels the editor shows everywhere else (one name for one thing).
+  const railName = useMemo(() => {
+    const labels = new Map(railList.map((r) => [r.id, labelOr(r.label, r.id)]));
+    return (id: string) => labels.get(id) ?? id;
+  }, [railList]);
   const rows = useMemo(() => {
     const all = crossingRows(result);
     const dir = sort.up ? 1 : -1;
@@ -105,7 +112,14 @@ export function CrossingsTable() {
               }}
             >
               <td>{r.label}</td>
-              <td>{r.rails.join(' ')}</td>
+              <td data-rails={r.rails.join(' ')}>
+                {r.rails.map((id, k) => (
+                  <span key={id} className="rc-rail-name">
+                    {k > 0 ? ', ' : ''}
+                    {railName(id)}
+                  </span>
+                ))}
+              </td>
               <td>{r.scenario}</td>
               <td className="rc-num" data-margin={r.marginHigh ?? ''}>
                 {margin(r.marginHigh)}

@@ -35,6 +35,10 @@ export function RailsEditor() {
               testId={`rail-label-${r.id}`}
               onCommit={(t) => apply(setRailLabel(r.id, t))}
             />
+            {/* The id the file and the other rails' references use: shown, since a person editing the file needs it. */}
+            <code className="rc-rail-id" title="This rail's id in the design file" data-testid={`rail-id-${r.id}`}>
+              {r.id}
+            </code>
             <button
               type="button"
               className="rc-icon-btn"
