@@ -6,7 +6,7 @@
 import { useMemo, useState } from 'react';
 import { crossingRows } from '../../rules/report/buildReport.ts';
 import type { Crossing } from '../../rules/report/reportSchema.ts';
-import { formatQuantity } from '../../rules/levels/units.ts';
+import { formatMargin } from '../../rules/levels/units.ts';
 import { labelOr } from '../../rules/engine/names.ts';
 import { useFocus } from '../canvas/placement.ts';
 import { useEditor, useEditorStore } from '../store/EditorProvider.tsx';
@@ -42,7 +42,7 @@ function sortValue(row: Crossing, key: Column): number | string {
   }
 }
 
-const margin = (m: number | null) => (m === null ? '—' : formatQuantity(m, 'V'));
+const margin = (m: number | null) => (m === null ? '—' : formatMargin(m));
 
 export function CrossingsTable() {
   const store = useEditorStore();

@@ -4,7 +4,7 @@
  */
 import { crossingRails } from '../engine/paths.ts';
 import { defineRule } from './defineRule.ts';
-import { volts } from './format.ts';
+import { marginVolts } from './format.ts';
 import { partsOfPins as partsOf } from '../model/pinKeys.ts';
 
 interface Data {
@@ -14,7 +14,7 @@ interface Data {
   marginLow: number | null;
 }
 
-const margin = (m: number | null) => (m === null ? 'no driver/receiver pair' : volts(m));
+const margin = (m: number | null) => (m === null ? 'no driver/receiver pair' : marginVolts(m));
 
 export default defineRule({
   id: 'rail-crossing',

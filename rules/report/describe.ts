@@ -1,11 +1,11 @@
 /** Wording shared by the text and Markdown renderings. */
-import { formatQuantity } from '../levels/units.ts';
+import { formatMargin, formatQuantity } from '../levels/units.ts';
 import { railNameIn } from './reportNames.ts';
 import type { Report, ReportFinding } from './reportSchema.ts';
 
 /** A margin in engineering notation; `—` when the net has no driver/receiver pair. */
 export function marginText(margin: number | null): string {
-  return margin === null ? '—' : formatQuantity(margin, 'V');
+  return margin === null ? '—' : formatMargin(margin);
 }
 
 /** `5 parts, 7 nets, 3 rails`. */

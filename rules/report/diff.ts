@@ -3,7 +3,7 @@
  * gone, or changed (a severity, a waiver, a margin or another number that moved), matched by
  * their stable ids. Renders as text, Markdown for a review comment, and JSON.
  */
-import { formatQuantity } from '../levels/units.ts';
+import { formatMargin, formatQuantity } from '../levels/units.ts';
 import { reaches } from './baseline.ts';
 import { codeSpan, escapeMarkdown } from './renderMarkdown.ts';
 import type { FailOn, Report, ReportFinding } from './reportSchema.ts';
@@ -202,7 +202,11 @@ export function unitOfValue(key: string): string | undefined {
 function valueText(key: string, value: unknown): string {
   if (value === null || value === undefined) return '—';
   const unit = UNITS[key.replace(/^values\./, '')];
-  if (typeof value === 'number') return unit === undefined ? String(value) : formatQuantity(value, unit);
+  if (typeof value === 'number') {
+    if (unit === undefined) return String(value);
+    // A margin is a difference of two levels: three digits, as everywhere else.
+    return /^values\.margin/.test(key) ? formatMargin(value) : formatQuantity(value, unit);
+  }
   return typeof value === 'string' ? value : JSON.stringify(value);
 }
 

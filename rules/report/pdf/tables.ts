@@ -8,7 +8,7 @@ import { autoTable, type CellHookData, type RowInput, type Styles, type UserOpti
 import type { Design } from '../../model/schema.ts';
 import type { CheckResult, LevelSide, NetAnalysis, PairAnalysis } from '../../engine/types.ts';
 import { RULES } from '../../checks/index.ts';
-import { formatQuantity } from '../../levels/units.ts';
+import { formatMargin, formatQuantity } from '../../levels/units.ts';
 import type { Report, ReportFinding } from '../reportSchema.ts';
 import { plural } from '../verdict.ts';
 import { paragraph, sectionHeading, type Ctx } from './page.ts';
@@ -181,7 +181,7 @@ function drawRuleCell(ctx: Ctx, data: CellHookData, rule: string, isContinued: b
   });
 }
 
-const marginText = (m: number | null): string => (m === null ? '—' : formatQuantity(m, 'V'));
+const marginText = (m: number | null): string => (m === null ? '—' : formatMargin(m));
 
 /**
  * The engine's own judgement of a net's worst pair on one side (it compares the levels with
