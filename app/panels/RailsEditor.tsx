@@ -58,12 +58,13 @@ export function RailsEditor() {
               onCommit={(v) => apply(setRailVoltage(r.id, v))}
             />
             <QuantityField
-              label="Tolerance ±"
+              label="Tolerance"
+              // Shown and typed in percent (± 5 %), kept as a fraction in the file: format and parse say so.
               unit="V"
               value={r.tolerance ?? DEFAULT_TOLERANCE}
               testId={`rail-tolerance-${r.id}`}
               format={formatPercent}
-              parse={parsePercent}
+              parse={(text) => parsePercent(text, r.nominal)}
               onCommit={(v) => apply(setRailTolerance(r.id, v))}
             />
           </div>

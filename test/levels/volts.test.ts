@@ -33,7 +33,7 @@ describe('volts with the digits the corner needs', () => {
   });
 
   it("a rail's corners as the range makes them: 3.3 V ± 5 % spans 3.135 V–3.465 V", () => {
-    const r = railRange({ id: '3v3', label: '3.3 V', nominal: 3.3, tolerance: 0.05 });
+    const r = railRange({ nominal: 3.3, tolerance: 0.05 });
     expect(`${volts(r.min)}–${volts(r.max)}`).toBe('3.135 V–3.465 V');
   });
 
