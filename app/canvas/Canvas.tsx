@@ -316,8 +316,8 @@ export function Canvas() {
           {parts.length === 0 && (discreteParts ?? []).length === 0 && (
             <Panel position="top-center" className="rc-start-hint" data-testid="start-hint">
               <strong>An empty board.</strong> Set its supplies under Rails on the right, then drag a chip from the
-              palette onto the canvas (or pick one and press Enter). Join two pins by dragging from one to the other: every
-              net is checked as you draw it.
+              palette onto the canvas (or pick one and press Enter). Join two pins by dragging from one to the other:
+              every net is checked as you draw it.
             </Panel>
           )}
           <Panel position="top-right">
