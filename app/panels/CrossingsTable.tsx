@@ -113,9 +113,8 @@ export function CrossingsTable() {
             >
               <td>{r.label}</td>
               <td data-rails={r.rails.join(' ')}>
-                {r.rails.map((id, k) => (
-                  <span key={id} className="rc-rail-name">
-                    {k > 0 ? ', ' : ''}
+                {r.rails.map((id) => (
+                  <span key={id} className="rc-rail-name" title={railName(id)}>
                     {railName(id)}
                   </span>
                 ))}
