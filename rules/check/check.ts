@@ -134,7 +134,7 @@ function injectionFindings(ctx: StateContext, index: DesignIndex, nets: NetTable
     const injected = [...list].sort((a, b) => (a.pin < b.pin ? -1 : a.pin > b.pin ? 1 : 0));
     for (const rule of rules) {
       rule.checkInjection!({ rail, names: ctx.names, injected, state: ctx.state, settings: ctx.settings }, (draft) =>
-        found.push(completeFinding(rule, draft, ctx.state, null)),
+        found.push(completeFinding(rule, draft, ctx.state, null, undefined, ctx.names)),
       );
     }
   }
@@ -207,7 +207,7 @@ function checkLonePin(ctx: StateContext, pin: PinView): Finding[] {
   for (const rule of ctx.rules) {
     if (rule.checkPin === undefined) continue;
     rule.checkPin({ pin, names: ctx.names, settings: ctx.settings, rails: loneRails(ctx.rails, pin) }, (draft) =>
-      found.push(completeFinding(rule, draft, ctx.state, null, pin.key)),
+      found.push(completeFinding(rule, draft, ctx.state, null, pin.key, ctx.names)),
     );
   }
   return found;
@@ -248,7 +248,7 @@ function checkGroup(ctx: StateContext, index: DesignIndex, rail: Rail, profile: 
   for (const rule of ctx.rules) {
     if (rule.checkRail === undefined) continue;
     rule.checkRail({ rail, names: ctx.names, range, profile, vddRanges, pinKeys, settings: ctx.settings }, (draft) =>
-      found.push(completeFinding(rule, draft, ctx.state, null)),
+      found.push(completeFinding(rule, draft, ctx.state, null, undefined, ctx.names)),
     );
   }
   return found;

@@ -1,6 +1,6 @@
 /** Turning rule drafts into findings: ids, waivers, and the report's order. */
 import type { Net } from '../model/schema.ts';
-import { netLabel } from './names.ts';
+import { type Names, netLabel } from './names.ts';
 import type { Draft, MessageFns, Rule } from './rule.ts';
 import { RULE_IDS, type RuleId } from '../model/ruleIds.ts';
 import type { Finding, FindingOf, PowerState, Summary } from './types.ts';
@@ -23,6 +23,7 @@ export function completeFinding<M extends MessageFns>(
   state: PowerState,
   net: Net | null,
   place: string = net?.id ?? '',
+  names?: Names,
 ): Finding {
   const at = net?.id ?? draft.subject ?? place;
   const id = findingId(rule.id, at, state.id, draft.suffix);
@@ -40,7 +41,13 @@ export function completeFinding<M extends MessageFns>(
         }
       : {
           severity: 'error' as const,
-          message: undecidableMessage(rule.meta.title, undecidableSubject(draft, net), bad, draft.values, draft.data),
+          message: undecidableMessage(
+            rule.meta.title,
+            undecidableSubject(draft, net, names),
+            bad,
+            draft.values,
+            draft.data,
+          ),
           messageId: UNDECIDABLE,
           values: { ...finiteOrNull(draft.values), undecidable: bad },
           hint: UNDECIDABLE_HINT,
@@ -64,8 +71,11 @@ export function completeFinding<M extends MessageFns>(
 }
 
 /** What an undecided finding names in its message: the pin pair or pin, else the net (or the rail). */
-function undecidableSubject<M extends MessageFns>(draft: Draft<M>, net: Net | null): string {
-  const where = net === null ? [draft.subject, draft.suffix] : [draft.suffix ?? `net ${netLabel(net)}`];
+function undecidableSubject<M extends MessageFns>(draft: Draft<M>, net: Net | null, names?: Names): string {
+  // A rail (rail-range, rail-injection) and a profile (rail-range's suffix) by their labels;
+  // a pin key is neither, and stays as it is.
+  const label = (s: string | undefined) => (s === undefined || names === undefined ? s : names.profile(names.rail(s)));
+  const where = net === null ? [label(draft.subject), label(draft.suffix)] : [draft.suffix ?? `net ${netLabel(net)}`];
   return [...new Set(where.filter((w): w is string => w !== undefined && w !== ''))].join(', ');
 }
 
