@@ -4,7 +4,7 @@
  * edited in engineering notation, and the check sees the path it makes.
  */
 import { expect, test } from '@playwright/test';
-import { wire } from './gestures.ts';
+import { fitAll, wire } from './gestures.ts';
 
 test('parts between chips: drawn with their values, placed, wired and edited', async ({ page }) => {
   const problems: string[] = [];
@@ -13,6 +13,7 @@ test('parts between chips: drawn with their values, placed, wired and edited', a
     if (m.type() === 'error') problems.push(m.text());
   });
   await page.goto('/');
+  await fitAll(page);
   // The example's divider and the FET shifters, values on the canvas (IEC 60062 code, small k).
   await expect(page.getByTestId('value-R5')).toHaveText('1k8 ±1 %');
   await expect(page.getByTestId('value-R3')).toHaveText('1k0 ±1 %');

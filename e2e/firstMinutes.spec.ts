@@ -58,7 +58,9 @@ test("a newcomer's first minutes", async ({ page }) => {
   const row = page.locator(`.rc-finding[data-net="${net}"][data-rule="level-high"][data-severity="error"]`);
   await expect(row).toBeVisible();
   await expect(row).toContainText('NMH -0.759 V');
-  await expect(row).toContainText('3.69 V');
+  await expect(row).toContainText('needs 3.694 V to read high');
+  // The driver's corner shows whole (four digits where the value has them): 2.935 V, not 2.94 V.
+  await expect(row).toContainText('guarantees 2.935 V high');
   await expect(row).toContainText('High level reaches the receiver');
 
   // Hovering the wire shows its worst high margin.

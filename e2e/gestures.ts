@@ -64,3 +64,13 @@ export async function uncoveredPoint(edge: Locator): Promise<{ x: number; y: num
     throw new Error('the wire is covered everywhere');
   });
 }
+
+/**
+ * The whole board in view (the fit button: F does the same). The example opens on its errors at a
+ * readable zoom, and the canvas draws only what is in view: a test that reads every chip or wire
+ * of it fits first.
+ */
+export async function fitAll(page: Page): Promise<void> {
+  await page.locator('.react-flow__controls-fitview').click();
+  await page.waitForTimeout(300);
+}

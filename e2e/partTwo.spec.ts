@@ -4,7 +4,7 @@
  * found by their data attributes (net, severity, rule), never by their look.
  */
 import { expect, test, type Page } from '@playwright/test';
-import { handle, wire } from './gestures.ts';
+import { fitAll, handle, wire } from './gestures.ts';
 
 const wireOf = (page: Page, net: string) => page.locator(`.rc-wire[data-net="${net}"]`);
 
@@ -109,6 +109,7 @@ test('a finding accepted with a note: the wire loses its colour, the row keeps t
 test('copy and paste of two connected chips brings the net between them, not the ones outside', async ({ page }) => {
   await page.goto('/');
   await expect(page.locator('.rc-wire').first()).toBeVisible();
+  await fitAll(page);
   const nodes = page.locator('.react-flow__node');
   const before = await nodes.count();
   const wiresBefore = await page.locator('.rc-wire').count();
@@ -154,6 +155,7 @@ test('every chip is drawn exactly at the size its node is given (the canvas cont
 }) => {
   await page.goto('/');
   await expect(page.locator('.rc-wire').first()).toBeVisible();
+  await fitAll(page);
   const sizes = await page.locator('.react-flow__node').evaluateAll((nodes) =>
     nodes.map((n) => {
       const chip = n.firstElementChild as HTMLElement;

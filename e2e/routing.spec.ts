@@ -6,6 +6,7 @@
 import { expect, test, type Page } from '@playwright/test';
 import { bodyCrossings, pathPoints, sharedTracks, type DrawnWire, type Rect } from '../rules/routing/measure.ts';
 import { generateDesign } from '../test/support/generator.ts';
+import { fitAll } from './gestures.ts';
 
 /** The heaviest wire drawn (a selected one) is 3 units wide (styles.css, .rc-wire). */
 const WIRE_WIDTH = 3;
@@ -54,6 +55,7 @@ function judge(d: Drawing) {
 test('the example: no shared track, no wire through a chip, dots at branches, hops at crossings', async ({ page }) => {
   await page.goto('/');
   await expect(page.locator('.rc-wire[data-net="VALVE_EN"]').first()).toBeVisible();
+  await fitAll(page);
   const d = await drawing(page);
   expect(d.wires.length).toBeGreaterThan(10);
   expect(d.chips.length).toBeGreaterThan(5);
@@ -79,6 +81,9 @@ test('a generated 200-part board: no shared track, no wire through a chip', asyn
     ).__railcrossBench;
     await bench.session.createAndOpen(JSON.parse(json));
   }, JSON.stringify(design));
+  // It opens on its errors at a readable zoom: the whole board in view to judge every wire.
+  await expect(page.locator('.react-flow__node').first()).toBeVisible();
+  await fitAll(page);
   await expect(page.locator('.react-flow__node')).toHaveCount(200, { timeout: 30_000 });
   const d = await drawing(page);
   const wires = design.nets.reduce((n, net) => n + net.pins.length - 1, 0);
@@ -91,6 +96,7 @@ test('a generated 200-part board: no shared track, no wire through a chip', asyn
 test('Tidy layout arranges the example by signal flow, routes it clean, and is one undo step', async ({ page }) => {
   await page.goto('/');
   await expect(page.locator('.rc-wire[data-net="VALVE_EN"]').first()).toBeVisible();
+  await fitAll(page);
   const where = () =>
     page.evaluate(() =>
       [...document.querySelectorAll<HTMLElement>('.react-flow__node')]

@@ -151,6 +151,8 @@ test('a deleted design is restored from Recently deleted', async ({ page }) => {
 
   await page.locator(`[data-testid="library-row"][data-title="${EXAMPLE_TITLE}"] [data-action="delete"]`).click();
   await expect(rows(page)).toHaveCount(1);
+  const notice = page.getByTestId('notices').getByText('moved to Recently deleted');
+  await expect(notice).toBeVisible();
   await page.locator('.rc-tab[data-view="deleted"]').click();
   const deleted = page.getByTestId('deleted-row');
   await expect(deleted).toHaveCount(1);
@@ -159,6 +161,8 @@ test('a deleted design is restored from Recently deleted', async ({ page }) => {
 
   await deleted.locator('[data-action="restore"]').click();
   await expect(deleted).toHaveCount(0);
+  // Restored from the list rather than from the notice's own button: the notice goes too (issue 18).
+  await expect(notice).toHaveCount(0);
   await page.locator('.rc-tab[data-view="designs"]').click();
   await expect(rows(page)).toHaveCount(2);
   await page.locator(`[data-testid="library-row"][data-title="${EXAMPLE_TITLE}"] .rc-link`).click();
@@ -199,7 +203,7 @@ test('Export: the Markdown report, as the command line prints it', async ({ page
   const text = (await bytesOf(download)).toString('utf8');
   expect(text).toMatch(/^# Railcross check: Greenhouse irrigation controller\n/);
   expect(text).toMatch(/^\*\*FAIL\*\*:/m);
-  expect(text).toMatch(/^\| error \| `level-high` \| `VALVE_EN` \| `all-on` \|/m);
+  expect(text).toMatch(/^\| error \| `level-high` \| VALVE_EN \| `all-on` \|/m);
   expect(problems).toEqual([]);
 });
 

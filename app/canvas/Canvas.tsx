@@ -3,6 +3,7 @@
  * the design; it turns React Flow's events into commands (connect, move, select).
  */
 import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState, type DragEvent } from 'react';
+import { ALL_ON } from '../../rules/engine/powerStates.ts';
 import { useStore } from 'zustand';
 import { createStore } from 'zustand/vanilla';
 import {
@@ -60,6 +61,9 @@ function sameKeys(set: ReadonlySet<string> | null, map: ReadonlyMap<string, unkn
   for (const k of map.keys()) if (!set.has(k)) return false;
   return true;
 }
+
+/** The least zoom at which a chip's pin names (11 px in styles.css) show at their size. */
+export const READABLE_ZOOM = 1;
 
 /** Where a large design's view starts: at its top-left chip, at a readable size. */
 function largeViewport(
@@ -256,6 +260,18 @@ export function Canvas() {
     const { parts: all } = store.getState().design;
     return all.length > LARGE_DESIGN_PARTS ? largeViewport(all) : null;
   });
+  // The opening view: readable (pin names at their 11 px, zoom 1 or more), on the chips with
+  // errors when the whole board would not fit at that size. F and the fit button still fit all.
+  const [openingFit] = useState(() => {
+    if (large !== null) return fitViewOptions;
+    const { result } = store.getState();
+    const errorParts = new Set<string>();
+    for (const f of result.findings)
+      if (f.severity === 'error' && f.waived === undefined && f.scenario === ALL_ON)
+        for (const p of f.parts) errorParts.add(p);
+    const nodes = [...errorParts].map((id) => ({ id }));
+    return { ...fitViewOptions, minZoom: READABLE_ZOOM, ...(nodes.length === 0 ? {} : { nodes }) };
+  });
   return (
     <RouteContext.Provider value={routes.store}>
       {/* biome-ignore lint/a11y/noStaticElementInteractions: the canvas is the drop target of palette drags; the palette's Enter key places a part without one */}
@@ -288,7 +304,7 @@ export function Canvas() {
           // is what the page waits on (press F to fit it all).
           fitView={large === null}
           defaultViewport={large ?? undefined}
-          fitViewOptions={fitViewOptions}
+          fitViewOptions={openingFit}
           minZoom={0.05}
           proOptions={proOptions}
           aria-label="Canvas: chips and the wires between them"
@@ -298,6 +314,13 @@ export function Canvas() {
           <Panel position="bottom-left">
             <Legend />
           </Panel>
+          {parts.length === 0 && (discreteParts ?? []).length === 0 && (
+            <Panel position="top-center" className="rc-start-hint" data-testid="start-hint">
+              <strong>An empty board.</strong> Set its supplies under Rails on the right, then drag a chip from the
+              palette onto the canvas (or pick one and press Enter). Join two pins by dragging from one to the other:
+              every net is checked as you draw it.
+            </Panel>
+          )}
           <Panel position="top-right">
             <TidyButton />
             <button

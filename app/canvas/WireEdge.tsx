@@ -17,7 +17,7 @@ import {
   useStore as useFlowStore,
   type EdgeProps,
 } from '@xyflow/react';
-import { formatQuantity } from '../../rules/levels/units.ts';
+import { formatMargin } from '../../rules/levels/units.ts';
 import type { Pull } from '../../rules/model/schema.ts';
 import type { Finding, Severity } from '../../rules/engine/types.ts';
 import { RULES } from '../../rules/checks/index.ts';
@@ -30,7 +30,7 @@ import { SeverityGlyph } from './SeverityGlyph.tsx';
 import { zoomTier } from './farZoom.ts';
 
 function margin(v: number | null | undefined): string {
-  return v === null || v === undefined ? 'no pair' : formatQuantity(v, 'V');
+  return v === null || v === undefined ? 'no pair' : formatMargin(v);
 }
 
 const RANK: Readonly<Record<Severity, number>> = { error: 3, warning: 2, info: 1 };

@@ -7,7 +7,8 @@
 import { useMemo, useState } from 'react';
 import { crossingRows } from '../../rules/report/buildReport.ts';
 import type { Crossing } from '../../rules/report/reportSchema.ts';
-import { formatQuantity } from '../../rules/levels/units.ts';
+import { formatMargin } from '../../rules/levels/units.ts';
+import { labelOr } from '../../rules/engine/names.ts';
 import { useFocus } from '../canvas/placement.ts';
 import { useEditor, useEditorStore } from '../store/EditorProvider.tsx';
 import './explain.css';
@@ -42,13 +43,19 @@ function sortValue(row: Crossing, key: Column): number | string {
   }
 }
 
-const margin = (m: number | null) => (m === null ? '—' : formatQuantity(m, 'V'));
+const margin = (m: number | null) => (m === null ? '—' : formatMargin(m));
 
 export function CrossingsTable() {
   const store = useEditorStore();
   const result = useEditor((s) => s.result);
   const focus = useFocus();
   const [sort, setSort] = useState<{ key: Column; up: boolean }>({ key: 'marginHigh', up: true });
+  const railList = useEditor((s) => s.design.rails);
+  // Rails by the labels the editor shows everywhere else (one name for one thing).
+  const railName = useMemo(() => {
+    const labels = new Map(railList.map((r) => [r.id, labelOr(r.label, r.id)]));
+    return (id: string) => labels.get(id) ?? id;
+  }, [railList]);
   const rows = useMemo(() => {
     const all = crossingRows(result);
     const dir = sort.up ? 1 : -1;
@@ -107,7 +114,13 @@ export function CrossingsTable() {
                 }}
               >
                 <td>{r.label}</td>
-                <td>{r.rails.join(' ')}</td>
+                <td data-rails={r.rails.join(' ')}>
+                  {r.rails.map((id) => (
+                    <span key={id} className="rc-rail-name" title={railName(id)}>
+                      {railName(id)}
+                    </span>
+                  ))}
+                </td>
                 <td>{r.scenario}</td>
                 <td className="rc-num" data-margin={r.marginHigh ?? ''}>
                   {margin(r.marginHigh)}

@@ -1,6 +1,6 @@
 /** The details of the selection (a part, or a net), then the rails and the power states. */
-import { memo } from 'react';
-import { useEditor } from '../store/EditorProvider.tsx';
+import { memo, useState } from 'react';
+import { useEditor, useEditorStore } from '../store/EditorProvider.tsx';
 import { partById } from '../store/lookup.ts';
 import { NetDetails } from './NetDetails.tsx';
 import { PartDetails } from './PartDetails.tsx';
@@ -25,6 +25,10 @@ export function DetailsPanel() {
     s.selection.net === null ? undefined : s.design.nets.find((n) => n.id === s.selection.net),
   );
   const many = useEditor((s) => s.selection.parts.length + s.selection.wires.length);
+  // A design opened with no parts (a new one) shows its rails, the first thing to set; the panel
+  // mounts afresh with each design opened, so this is read once, and the fold is the user's after.
+  const store = useEditorStore();
+  const [railsOpen] = useState(() => store.getState().design.parts.length === 0);
   return (
     <section className="rc-details" aria-label="Details">
       <h2 className="rc-panel-head">Details</h2>
@@ -42,7 +46,7 @@ export function DetailsPanel() {
               : 'Select a chip or a wire to edit it.'}
           </p>
         )}
-        <details className="rc-fold">
+        <details className="rc-fold" open={railsOpen} data-testid="rails-fold">
           <summary>Rails</summary>
           <RailsEditor />
         </details>

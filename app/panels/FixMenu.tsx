@@ -6,6 +6,7 @@
  */
 import { useMemo, useState } from 'react';
 import type { Finding, Summary } from '../../rules/engine/types.ts';
+import { namesOf } from '../../rules/engine/names.ts';
 import { SeverityGlyph } from '../canvas/SeverityGlyph.tsx';
 import {
   applyFix,
@@ -23,6 +24,9 @@ function counts(s: Summary): string {
 }
 
 function Changes({ preview }: { preview: FixPreview }) {
+  // Nets by label, as the fix's design names them (a fix may add a net of its own).
+  const names = useMemo(() => namesOf(preview.design), [preview.design]);
+  const place = (f: Finding) => (f.net === null ? f.pins.join(', ') : names.net(f.net));
   if (preview.refused !== undefined)
     return (
       <p className="rc-field-error" role="alert">
@@ -39,13 +43,13 @@ function Changes({ preview }: { preview: FixPreview }) {
           <li key={`g-${f.id}`} className="rc-fix-gone">
             <SeverityGlyph severity={f.severity} />{' '}
             <s>
-              {f.rule} · {f.net ?? f.pins.join(', ')}
+              {f.rule} · {place(f)}
             </s>
           </li>
         ))}
         {preview.added.map((f) => (
           <li key={`a-${f.id}`} className="rc-fix-added" data-severity={f.severity}>
-            <SeverityGlyph severity={f.severity} /> {f.rule} · {f.net ?? f.pins.join(', ')}
+            <SeverityGlyph severity={f.severity} /> {f.rule} · {place(f)}
             {f.waived !== undefined && ' (waived)'}
           </li>
         ))}

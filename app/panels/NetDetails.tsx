@@ -1,6 +1,6 @@
 import type { Net } from '../../rules/model/schema.ts';
 import { DEFAULT_WIRING_CAPACITANCE } from '../../rules/model/schema.ts';
-import { formatQuantity } from '../../rules/levels/units.ts';
+import { formatMargin, formatQuantity } from '../../rules/levels/units.ts';
 import {
   removeWaiverAt,
   setNetLabel,
@@ -17,7 +17,7 @@ import { NetLadder } from './NetLadder.tsx';
 const FIRST_PULL_OHMS = 10e3;
 
 function margin(v: number | null | undefined): string {
-  return v === null || v === undefined ? '—' : formatQuantity(v, 'V');
+  return v === null || v === undefined ? '—' : formatMargin(v);
 }
 
 /** A net's label, pull resistor, wiring capacitance, rise-time limit, waivers, pins and level analysis. */

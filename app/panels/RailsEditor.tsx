@@ -35,6 +35,10 @@ export function RailsEditor() {
               testId={`rail-label-${r.id}`}
               onCommit={(t) => apply(setRailLabel(r.id, t))}
             />
+            {/* The id the file and the other rails' references use: shown, since a person editing the file needs it. */}
+            <code className="rc-rail-id" title="This rail's id in the design file" data-testid={`rail-id-${r.id}`}>
+              {r.id}
+            </code>
             <button
               type="button"
               className="rc-icon-btn"
@@ -54,12 +58,13 @@ export function RailsEditor() {
               onCommit={(v) => apply(setRailVoltage(r.id, v))}
             />
             <QuantityField
-              label="Tolerance ±"
+              label="Tolerance"
+              // Shown and typed in percent (± 5 %), kept as a fraction in the file: format and parse say so.
               unit="V"
               value={r.tolerance ?? DEFAULT_TOLERANCE}
               testId={`rail-tolerance-${r.id}`}
               format={formatPercent}
-              parse={parsePercent}
+              parse={(text) => parsePercent(text, r.nominal)}
               onCommit={(v) => apply(setRailTolerance(r.id, v))}
             />
           </div>

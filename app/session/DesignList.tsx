@@ -2,6 +2,7 @@
 import { useState } from 'react';
 import type { DesignRecord } from '../storage/db.ts';
 import { useSession } from './SessionProvider.tsx';
+import { deletedNoticeKey } from './session.ts';
 import { fullWhen, shortWhen } from './when.ts';
 
 function RenameField({ record, onDone }: { record: DesignRecord; onDone: () => void }) {
@@ -48,7 +49,7 @@ function DesignRow({ record, isOpen }: { record: DesignRecord; isOpen: boolean }
   const remove = async () => {
     await session.remove(record.id);
     session.notify({
-      key: `deleted-${record.id}`,
+      key: deletedNoticeKey(record.id),
       tone: 'info',
       title: `“${record.title}” moved to Recently deleted`,
       lines: ['It can be restored for 30 days.'],
@@ -57,7 +58,6 @@ function DesignRow({ record, isOpen }: { record: DesignRecord; isOpen: boolean }
           label: 'Restore',
           run: () => {
             void session.restore(record.id);
-            session.dismiss(`deleted-${record.id}`);
           },
         },
       ],

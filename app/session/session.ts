@@ -104,6 +104,11 @@ export interface SessionState {
   readonly large: LargeChoice | null;
 }
 
+/** The key of the notice that says a design went to Recently deleted: one per design. */
+export function deletedNoticeKey(id: string): string {
+  return `deleted-${id}`;
+}
+
 export function errorLines(errors: readonly DesignError[], max = 6): string[] {
   const lines = errors.slice(0, max).map((e) => `${e.path}: ${e.message}`);
   if (errors.length > max) lines.push(`… and ${errors.length - max} more`);
@@ -491,7 +496,9 @@ export class Session {
   }
 
   async restore(id: string): Promise<void> {
-    await this.guard('The design could not be restored', async () => this.library?.restore(id));
+    const ok = await this.guard('The design could not be restored', async () => this.library?.restore(id));
+    // The notice that said it was deleted is no longer true, whichever way it came back.
+    if (ok) this.dismiss(deletedNoticeKey(id));
   }
 
   async purge(id: string): Promise<void> {
@@ -592,6 +599,7 @@ export class Session {
     }
     if (choice === 'restore') {
       await library.restore(ctx.id);
+      this.dismiss(deletedNoticeKey(ctx.id));
       this.state.setState({ conflict: null });
       await this.flush();
       return;

@@ -17,6 +17,7 @@ import type { Design, Discrete, Net, Part, Rail } from '../model/schema.ts';
 import { RULES } from '../checks/index.ts';
 import type { AnyRule } from '../engine/rule.ts';
 import { ALL_ON, effectiveSettings, powerStates, railStates } from '../engine/powerStates.ts';
+import { namesOf } from '../engine/names.ts';
 import { loneRails, pinView, prepareNet, type PrepareContext } from '../engine/prepare.ts';
 import { completeFinding, restampFinding, sortFindings } from '../engine/findings.ts';
 import { DesignIndex, groupKey, splitGroupKey } from '../engine/designIndex.ts';
@@ -132,8 +133,8 @@ function injectionFindings(ctx: StateContext, index: DesignIndex, nets: NetTable
     if (list === undefined || list.length === 0) continue;
     const injected = [...list].sort((a, b) => (a.pin < b.pin ? -1 : a.pin > b.pin ? 1 : 0));
     for (const rule of rules) {
-      rule.checkInjection!({ rail, injected, state: ctx.state, settings: ctx.settings }, (draft) =>
-        found.push(completeFinding(rule, draft, ctx.state, null)),
+      rule.checkInjection!({ rail, names: ctx.names, injected, state: ctx.state, settings: ctx.settings }, (draft) =>
+        found.push(completeFinding(rule, draft, ctx.state, null, undefined, ctx.names)),
       );
     }
   }
@@ -155,6 +156,7 @@ function contextFor(design: Design, state: PowerState, index: DesignIndex, rules
     rails: railStates(design, state),
     settings: effectiveSettings(design),
     pinIndex: index.pins,
+    names: namesOf(design, index.nets),
     rules,
     ...(index.discretes.size === 0 ? {} : { links: index }),
   };
@@ -204,8 +206,8 @@ function checkLonePin(ctx: StateContext, pin: PinView): Finding[] {
   const found: Finding[] = [];
   for (const rule of ctx.rules) {
     if (rule.checkPin === undefined) continue;
-    rule.checkPin({ pin, settings: ctx.settings, rails: loneRails(ctx.rails, pin) }, (draft) =>
-      found.push(completeFinding(rule, draft, ctx.state, null, pin.key, pin.pin.waivers)),
+    rule.checkPin({ pin, names: ctx.names, settings: ctx.settings, rails: loneRails(ctx.rails, pin) }, (draft) =>
+      found.push(completeFinding(rule, draft, ctx.state, null, pin.key, ctx.names, pin.pin.waivers)),
     );
   }
   return found;
@@ -245,8 +247,8 @@ function checkGroup(ctx: StateContext, index: DesignIndex, rail: Rail, profile: 
   const found: Finding[] = [];
   for (const rule of ctx.rules) {
     if (rule.checkRail === undefined) continue;
-    rule.checkRail({ rail, range, profile, vddRanges, pinKeys, settings: ctx.settings }, (draft) =>
-      found.push(completeFinding(rule, draft, ctx.state, null)),
+    rule.checkRail({ rail, names: ctx.names, range, profile, vddRanges, pinKeys, settings: ctx.settings }, (draft) =>
+      found.push(completeFinding(rule, draft, ctx.state, null, undefined, ctx.names)),
     );
   }
   return found;

@@ -8,6 +8,7 @@ import { exceeds } from '../levels/compare.ts';
 import { netSources, worstExposure, type NetSource } from '../engine/netMath.ts';
 import { pathExposure } from '../engine/paths.ts';
 import type { PinView, RailStates } from '../engine/types.ts';
+import type { Names } from '../engine/names.ts';
 import { defineRule } from './defineRule.ts';
 import { amps, volts } from './format.ts';
 import { partsOfPins as partsOf } from '../model/pinKeys.ts';
@@ -44,9 +45,11 @@ function unpoweredLimit(pin: PinView, rails: RailStates): Limit | undefined {
   return { kind: 'viMax', v: levelAt(viMax, on.min), railMin: on.min };
 }
 
-function sourceText(source: NetSource): string {
+function sourceText(source: NetSource, names: Names): string {
   if (source.kind === 'driver') return source.from;
-  return source.from === 'net' ? `The net's pull-up to ${source.rail}` : `${source.from}'s internal pull-up`;
+  return source.from === 'net'
+    ? `The net's pull-up to ${names.rail(source.rail)}`
+    : `${source.from}'s internal pull-up`;
 }
 
 const MESSAGE_OF = { viMaxOff: 'aboveOffLimit', viMax: 'abovePoweredLimit', clamp: 'clampConducts' } as const;
@@ -88,7 +91,12 @@ export default defineRule({
       let worst: { vNet: number; limit: number; from: string; source: string; current?: number } | undefined =
         direct === undefined
           ? undefined
-          : { vNet: direct.vNet, limit: direct.limit, from: sourceText(direct.source), source: direct.source.from };
+          : {
+              vNet: direct.vNet,
+              limit: direct.limit,
+              from: sourceText(direct.source, view.names),
+              source: direct.source.from,
+            };
       if ((worst === undefined || !exceeds(worst.vNet, worst.limit)) && view.path !== undefined) {
         const far = pathExposure(view.path, pin, view.rails, () => limit.v, 'high');
         if (far !== undefined) {
@@ -104,7 +112,7 @@ export default defineRule({
       if (worst === undefined || !exceeds(worst.vNet, worst.limit)) continue;
       const data: Data = {
         pin: pin.key,
-        rail: pin.rail,
+        rail: view.names.rail(pin.rail),
         vNet: worst.vNet,
         viMax: limit.v,
         from: worst.from,

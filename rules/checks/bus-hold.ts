@@ -39,7 +39,7 @@ export default defineRule({
     hint: 'Use a smaller strap resistor (at most the bound), or drive the net actively.',
     messages: {
       strapTooWeak: (d: Data) =>
-        `The strap ${d.pull} (${ohms(d.ohms)}) cannot overdrive the bus-hold inputs on ${d.net} (${amps(d.overdrive)} in all) ${d.toward}: it must be at most ${ohms(d.rMax)}.`,
+        `The strap (${d.pull}, ${ohms(d.ohms)}) cannot overdrive the bus-hold inputs on ${d.net} (${amps(d.overdrive)} in all) ${d.toward}: it must be at most ${ohms(d.rMax)}.`,
     },
   },
   checkNet(view, report) {
@@ -69,14 +69,21 @@ export default defineRule({
       if (Number.isFinite(rMax) && Number.isFinite(high) && !exceeds(high, rMax)) continue;
       const pull =
         p.origin === 'net'
-          ? `the net's pull to ${p.to}`
+          ? `the net's pull to ${view.names.rail(p.to)}`
           : p.resistor === true
             ? p.origin
             : `${p.origin}'s internal pull`;
       const keys = holders.map((h) => h.key);
       report({
         messageId: 'strapTooWeak',
-        data: { net: view.net.id, pull, ohms: high, rMax: Math.max(0, rMax), overdrive, toward: up ? 'high' : 'low' },
+        data: {
+          net: view.names.net(view.net.id),
+          pull,
+          ohms: high,
+          rMax: Math.max(0, rMax),
+          overdrive,
+          toward: up ? 'high' : 'low',
+        },
         severity: 'error',
         pins: keys,
         parts: partsOf(...keys),

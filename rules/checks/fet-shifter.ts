@@ -114,7 +114,7 @@ export default defineRule({
         if (node.pulls.some((p) => p.to !== GROUND)) continue;
         report({
           messageId: 'sideWithoutPull',
-          data: { fet: fet.id, side, net: node.netId },
+          data: { fet: fet.id, side, net: view.names.net(node.netId) },
           severity: 'error',
           pins: keys,
           parts: [fet.id],
@@ -128,7 +128,13 @@ export default defineRule({
         if (g === undefined || r === undefined || rail === fet.gate || !exceeds(g.max, r.min)) continue;
         report({
           messageId: 'gateAboveHighSide',
-          data: { fet: fet.id, gate: fet.gate, gateMax: g.max, pullRail: rail, pullMin: r.min },
+          data: {
+            fet: fet.id,
+            gate: view.names.rail(fet.gate),
+            gateMax: g.max,
+            pullRail: view.names.rail(rail),
+            pullMin: r.min,
+          },
           severity: 'error',
           pins: keys,
           parts: [fet.id],

@@ -54,7 +54,7 @@ export default defineRule({
     const driverKeys = drivers.map((d) => d.key);
     report({
       messageId: allThreeState ? 'allThreeState' : 'noDriver',
-      data: { net: view.net.label ?? view.net.id, pins, drivers: driverKeys },
+      data: { net: view.names.net(view.net.id), pins, drivers: driverKeys },
       severity: allThreeState ? 'warning' : 'error',
       pins,
       parts: partsOf(...pins),

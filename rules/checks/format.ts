@@ -1,7 +1,9 @@
 /** Numbers in findings' messages, in engineering notation (the file itself keeps SI numbers). */
-import { formatQuantity } from '../levels/units.ts';
+import { formatMargin, formatQuantity } from '../levels/units.ts';
 
 export const volts = (v: number) => formatQuantity(v, 'V');
+/** A noise margin: a difference of two levels, to three digits. */
+export const marginVolts = (v: number) => formatMargin(v);
 export const amps = (i: number) => formatQuantity(i, 'A');
 export const ohms = (r: number) => formatQuantity(r, 'Ω');
 export const farads = (c: number) => formatQuantity(c, 'F');

@@ -85,7 +85,7 @@ export default defineRule({
           high: worst.high,
           threshold: worst.threshold,
           current: deltaIcc,
-          rail: receiver.rail,
+          rail: view.names.rail(receiver.rail),
         },
         severity: 'info',
         pins: [receiver.key, worst.driver],

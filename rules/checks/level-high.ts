@@ -3,7 +3,7 @@
  * driver/receiver pair on different parts (rules-catalogue.md).
  */
 import { defineRule } from './defineRule.ts';
-import { cornerText, volts } from './format.ts';
+import { cornerText, marginVolts, volts } from './format.ts';
 import { partsOfPins as partsOf } from '../model/pinKeys.ts';
 
 interface Data {
@@ -38,9 +38,9 @@ export default defineRule({
       "driver's supply; for an open-drain net, pull up to the receiver's rail.",
     messages: {
       highFails: (d: Data) =>
-        `${source(d)} but ${d.receiver} needs ${volts(d.vih)} to read high: NMH ${volts(d.margin)} (${cornerText(d.driverVdd, d.receiverVdd)}).`,
+        `${source(d)} but ${d.receiver} needs ${volts(d.vih)} to read high: NMH ${marginVolts(d.margin)} (${cornerText(d.driverVdd, d.receiverVdd)}).`,
       highMarginLow: (d: Data) =>
-        `${source(d)} against ${d.receiver}'s VIH of ${volts(d.vih)}: NMH ${volts(d.margin)} is below the ${volts(d.minMargin)} wanted (${cornerText(d.driverVdd, d.receiverVdd)}).`,
+        `${source(d)} against ${d.receiver}'s VIH of ${volts(d.vih)}: NMH ${marginVolts(d.margin)} is below the ${volts(d.minMargin)} wanted (${cornerText(d.driverVdd, d.receiverVdd)}).`,
     },
   },
   checkNet(view, report) {

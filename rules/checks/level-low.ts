@@ -3,7 +3,7 @@
  * driver/receiver pair on different parts (rules-catalogue.md).
  */
 import { defineRule } from './defineRule.ts';
-import { cornerText, volts } from './format.ts';
+import { cornerText, marginVolts, volts } from './format.ts';
 import { partsOfPins as partsOf } from '../model/pinKeys.ts';
 
 interface Data {
@@ -34,9 +34,9 @@ export default defineRule({
       'level translator whose outputs suit the receiver.',
     messages: {
       lowFails: (d: Data) =>
-        `${lead(d)} but ${d.receiver} reads low only below ${volts(d.vil)}: NML ${volts(d.margin)} (${cornerText(d.driverVdd, d.receiverVdd)}).`,
+        `${lead(d)} but ${d.receiver} reads low only below ${volts(d.vil)}: NML ${marginVolts(d.margin)} (${cornerText(d.driverVdd, d.receiverVdd)}).`,
       lowMarginLow: (d: Data) =>
-        `${lead(d)} against ${d.receiver}'s VIL of ${volts(d.vil)}: NML ${volts(d.margin)} is below the ${volts(d.minMargin)} wanted (${cornerText(d.driverVdd, d.receiverVdd)}).`,
+        `${lead(d)} against ${d.receiver}'s VIL of ${volts(d.vil)}: NML ${marginVolts(d.margin)} is below the ${volts(d.minMargin)} wanted (${cornerText(d.driverVdd, d.receiverVdd)}).`,
     },
   },
   checkNet(view, report) {

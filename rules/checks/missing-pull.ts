@@ -44,7 +44,7 @@ export default defineRule({
     const groundPulls = view.pulls.length;
     report({
       messageId: groundPulls === 0 ? 'noPull' : 'onlyGroundPulls',
-      data: { net: view.net.id, drivers, groundPulls },
+      data: { net: view.names.net(view.net.id), drivers, groundPulls },
       severity: 'error',
       pins: drivers,
       parts: partsOf(...drivers),

@@ -94,7 +94,7 @@ export default defineRule({
         worst.source.kind === 'driver'
           ? worst.source.from
           : worst.source.from === 'net'
-            ? `The net's pull-up to ${worst.source.rail}`
+            ? `The net's pull-up to ${view.names.rail(worst.source.rail)}`
             : `${worst.source.from}'s internal pull-up`;
       report({
         messageId: 'tooHigh',

@@ -27,6 +27,7 @@ import { defineRule } from './defineRule.ts';
 import { amps, ohms as fmtOhms, seconds, volts } from './format.ts';
 import { partsOfPins as partsOf } from '../model/pinKeys.ts';
 import type { PullAdviceValues } from '../engine/values.ts';
+import type { Names } from '../engine/names.ts';
 
 interface Data {
   net: string;
@@ -162,14 +163,15 @@ function outcome(view: NetView, drivers: readonly PinView[], ups: readonly PullS
 }
 
 /** The pulls judged, in words: the net's own alone as before, or every one with their parallel value. */
-function describePulls(ups: readonly PullSource[], together: number): string {
+function describePulls(ups: readonly PullSource[], together: number, names: Names): string {
   const one = ups[0]!;
+  const to = names.rail(one.to);
   // A resistor part (version 2) is an external pull-up, named by its designator.
   if (ups.length === 1) {
     return one.origin === 'net'
-      ? `The ${fmtOhms(one.ohms)} pull-up to ${one.to}`
+      ? `The ${fmtOhms(one.ohms)} pull-up to ${to}`
       : one.resistor === true
-        ? `The ${fmtOhms(one.ohms)} pull-up ${one.origin} to ${one.to}`
+        ? `The ${fmtOhms(one.ohms)} pull-up ${one.origin} to ${to}`
         : `The ${fmtOhms(one.ohms)} pull-up inside ${one.origin}`;
   }
   const parts = ups.map((p) =>
@@ -265,7 +267,7 @@ function advise(
     suggestedLow: result.low,
     suggestedSink: result.sink,
   };
-  return { text: adviceText(values, to, othersTooStrong, own !== undefined), values };
+  return { text: adviceText(values, view.names.rail(to), othersTooStrong, own !== undefined), values };
 }
 
 function adviceText(
@@ -398,8 +400,8 @@ export default defineRule({
     report({
       messageId,
       data: {
-        net: view.net.id,
-        pulls: describePulls(ups, together),
+        net: view.names.net(view.net.id),
+        pulls: describePulls(ups, together, view.names),
         verb: ups.length === 1 ? 'is' : 'are',
         ohms: together,
         rMin,

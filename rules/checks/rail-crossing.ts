@@ -4,7 +4,7 @@
  */
 import { crossingRails } from '../engine/paths.ts';
 import { defineRule } from './defineRule.ts';
-import { volts } from './format.ts';
+import { marginVolts } from './format.ts';
 import { partsOfPins as partsOf } from '../model/pinKeys.ts';
 
 interface Data {
@@ -14,7 +14,7 @@ interface Data {
   marginLow: number | null;
 }
 
-const margin = (m: number | null) => (m === null ? 'no driver/receiver pair' : volts(m));
+const margin = (m: number | null) => (m === null ? 'no driver/receiver pair' : marginVolts(m));
 
 export default defineRule({
   id: 'rail-crossing',
@@ -39,7 +39,12 @@ export default defineRule({
     const keys = view.pins.map((p) => p.key);
     report({
       messageId: 'crosses',
-      data: { net: view.net.label ?? view.net.id, rails: [...rails], marginHigh: worstHigh, marginLow: worstLow },
+      data: {
+        net: view.names.net(view.net.id),
+        rails: rails.map((r) => view.names.rail(r)),
+        marginHigh: worstHigh,
+        marginLow: worstLow,
+      },
       severity: 'info',
       pins: keys,
       parts: partsOf(...keys),

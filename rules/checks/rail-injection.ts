@@ -54,7 +54,12 @@ export default defineRule({
           : 'absorbed';
     report({
       messageId,
-      data: { rail: rail.id, total, count: pins.length, ...(minLoad === undefined ? {} : { minLoad }) },
+      data: {
+        rail: view.names.rail(rail.id),
+        total,
+        count: pins.length,
+        ...(minLoad === undefined ? {} : { minLoad }),
+      },
       severity: messageId === 'absorbed' ? 'info' : 'error',
       pins,
       parts: partsOf(...pins),

@@ -49,8 +49,8 @@ export default defineRule({
     report({
       messageId: 'outside',
       data: {
-        rail: rail.id,
-        profile,
+        rail: view.names.rail(rail.id),
+        profile: view.names.profile(profile),
         railMin: range.min,
         railMax: range.max,
         profileMin,

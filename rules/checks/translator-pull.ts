@@ -14,6 +14,7 @@ import { lowThreshold } from '../engine/resolve.ts';
 import { pullEndVoltage } from '../engine/netMath.ts';
 import { GROUND } from '../engine/powerStates.ts';
 import type { PullSource } from '../engine/types.ts';
+import type { Names } from '../engine/names.ts';
 import { defineRule } from './defineRule.ts';
 import { farads, ohms, volts } from './format.ts';
 import { partsOfPins as partsOf } from '../model/pinKeys.ts';
@@ -44,7 +45,8 @@ interface CapData {
 /** External pulls: the net's own and resistor parts, not pins' internal ones. */
 const external = (p: PullSource) => p.origin === 'net' || p.resistor === true;
 const lowEnd = (p: PullSource) => p.min;
-const pullName = (p: PullSource) => (p.origin === 'net' ? `the net's pull to ${p.to}` : `${p.origin} to ${p.to}`);
+const pullName = (p: PullSource, names: Names) =>
+  p.origin === 'net' ? `the net's pull to ${names.rail(p.to)}` : `${p.origin} to ${names.rail(p.to)}`;
 
 export default defineRule({
   id: 'translator-pull',
@@ -85,7 +87,7 @@ export default defineRule({
             continue;
           report({
             messageId: 'pullTooStrong',
-            data: { pin: pin.key, pull: pullName(p), ohms: lowEnd(p), minExternalPull },
+            data: { pin: pin.key, pull: pullName(p, view.names), ohms: lowEnd(p), minExternalPull },
             severity: 'error',
             pins: [pin.key],
             parts: partsOf(pin.key),

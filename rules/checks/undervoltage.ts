@@ -59,7 +59,8 @@ export default defineRule({
       }
       for (const p of view.pulls) {
         const rails = p.to === GROUND ? [pin.rail] : [p.to, pin.rail];
-        const from = p.origin === 'net' ? `The net's pull to ${p.to}` : `The pull of ${p.origin} to ${p.to}`;
+        const to = view.names.rail(p.to);
+        const from = p.origin === 'net' ? `The net's pull to ${to}` : `The pull of ${p.origin} to ${to}`;
         for (const c of corners(rails, view.rails.ranges)) consider(pullEndVoltage(p, c), c.get(pin.rail) ?? 0, from);
       }
       if (view.path !== undefined) {

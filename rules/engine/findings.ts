@@ -1,5 +1,6 @@
 /** Turning rule drafts into findings: ids, waivers, and the report's order. */
 import type { Net, Waiver } from '../model/schema.ts';
+import { type Names, netLabel } from './names.ts';
 import type { Draft, MessageFns, Rule } from './rule.ts';
 import { RULE_IDS, type RuleId } from '../model/ruleIds.ts';
 import type { Finding, FindingOf, PowerState, Severity, Summary } from './types.ts';
@@ -23,6 +24,7 @@ export function completeFinding<M extends MessageFns>(
   state: PowerState,
   net: Net | null,
   place: string = net?.id ?? '',
+  names?: Names,
   pinWaivers?: readonly Waiver[],
 ): Finding {
   const at = net?.id ?? draft.subject ?? place;
@@ -70,7 +72,13 @@ export function completeFinding<M extends MessageFns>(
           pins: draft.pins,
           parts: draft.parts,
           severity: 'error',
-          message: undecidableMessage(rule.meta.title, undecidableSubject(draft, net), bad, draft.values, draft.data),
+          message: undecidableMessage(
+            rule.meta.title,
+            undecidableSubject(draft, net, names),
+            bad,
+            draft.values,
+            draft.data,
+          ),
           messageId: UNDECIDABLE,
           values: { ...finiteOrNull(draft.values), undecidable: bad },
           hint: UNDECIDABLE_HINT,
@@ -85,8 +93,11 @@ export function completeFinding<M extends MessageFns>(
 }
 
 /** What an undecided finding names in its message: the pin pair or pin, else the net (or the rail). */
-function undecidableSubject<M extends MessageFns>(draft: Draft<M>, net: Net | null): string {
-  const where = net === null ? [draft.subject, draft.suffix] : [draft.suffix ?? `net ${net.id}`];
+function undecidableSubject<M extends MessageFns>(draft: Draft<M>, net: Net | null, names?: Names): string {
+  // A rail (rail-range, rail-injection) and a profile (rail-range's suffix) by their labels;
+  // a pin key is neither, and stays as it is.
+  const label = (s: string | undefined) => (s === undefined || names === undefined ? s : names.profile(names.rail(s)));
+  const where = net === null ? [label(draft.subject), label(draft.suffix)] : [draft.suffix ?? `net ${netLabel(net)}`];
   return [...new Set(where.filter((w): w is string => w !== undefined && w !== ''))].join(', ');
 }
 

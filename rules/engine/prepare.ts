@@ -22,6 +22,7 @@ import { driverLoad } from './netMath.ts';
 import { GROUND } from './powerStates.ts';
 import { viewOf } from './resolve.ts';
 import type { PinEntry } from './designIndex.ts';
+import type { Names } from './names.ts';
 import type { Range } from '../levels/rails.ts';
 import type { DriverLoad, EffectiveSettings, NetView, PinView, PowerState, PullSource, RailStates } from './types.ts';
 
@@ -56,6 +57,7 @@ export interface PrepareContext {
   readonly rails: RailStates;
   readonly settings: EffectiveSettings;
   readonly pinIndex: PinIndex;
+  readonly names: Names;
   /** The design's discretes and nets, for nets joined by them (version 2). */
   readonly links?: {
     readonly discretes: ReadonlyMap<string, Discrete>;
@@ -115,6 +117,7 @@ export function prepareNet(ctx: PrepareContext, net: Net): NetView {
   const analysis = analyseNet({ pins, drivers, receivers, pulls, highFromPull, loads, rails, settings });
   return {
     net,
+    names: ctx.names,
     settings,
     rails,
     pins,
@@ -208,6 +211,7 @@ function prepareLinkedNet(ctx: PrepareContext, net: Net): NetView {
   const pathEdge = path === undefined ? undefined : pathEdgeOf(path, rails);
   return {
     net,
+    names: ctx.names,
     settings,
     rails,
     pins,

@@ -22,6 +22,7 @@ import type {
 import type { RuleId } from '../model/ruleIds.ts';
 import type { Range } from '../levels/rails.ts';
 import type { FindingValues } from './values.ts';
+import type { Names } from './names.ts';
 
 export type Severity = 'error' | 'warning' | 'info';
 
@@ -148,6 +149,8 @@ export interface EffectiveSettings {
 /** One net prepared once per power state: what every net rule receives. */
 export interface NetView {
   readonly net: Net;
+  /** How messages name nets, rails and profiles: by their labels. */
+  readonly names: Names;
   readonly settings: EffectiveSettings;
   readonly rails: RailStates;
   /** Every pin on the net, powered or not, in the net's order. */
@@ -202,6 +205,7 @@ export interface DriverLoad {
 /** A pin on no net, in one power state (`floating-input` judges unused inputs). */
 export interface LonePinView {
   readonly pin: PinView;
+  readonly names: Names;
   readonly settings: EffectiveSettings;
   /** The states of the pin's own rail and of its internal pull's rail: nothing else. */
   readonly rails: RailStates;
@@ -210,6 +214,7 @@ export interface LonePinView {
 /** The pins on one rail that use one profile (`rail-range`, judged once, in `all-on`). */
 export interface RailView {
   readonly rail: Rail;
+  readonly names: Names;
   /** The rail's range with every rail on. */
   readonly range: Range;
   readonly profile: string;
@@ -223,6 +228,7 @@ export interface RailView {
 /** The clamp currents into one rail in one power state (`rail-injection`). */
 export interface InjectionView {
   readonly rail: Rail;
+  readonly names: Names;
   /** Each input's clamp current, sorted by pin key. */
   readonly injected: readonly { readonly pin: string; readonly net: string; readonly current: number }[];
   readonly state: PowerState;

@@ -226,13 +226,27 @@ function join(number: string, prefix: string, unit: string): string {
 }
 
 /**
+ * Significant digits of a voltage: as many as it needs, up to four, so that a supply's corner
+ * shows whole (3.3 V − 5 % is 3.135 V, not 3.13 V; 1.71 V, 5.25 V and 0.4 V keep their digits,
+ * trailing zeros being trimmed).
+ */
+export const VOLT_DIGITS = 4;
+
+/** A noise margin (a difference of two levels): three significant digits are enough, `-0.759 V`. */
+export function formatMargin(volts: number): string {
+  return formatQuantity(volts, 'V', 3);
+}
+
+/**
  * Format an SI value for display: `4.7 kΩ`, `100 nF`, `2.4 V`, `16 mA`, `-0.3 V`, `300 ns`,
  * `0 V`. Rounds to `digits` significant digits (1–21), trims trailing zeros, and uses the
  * prefixes p n µ m k M G (µ is U+00B5). Magnitudes from 0.1 to 1 keep no prefix (`0.4 V`,
  * `0.47 Ω`), as engineers write them. Infinite values print as `∞`; NaN prints as `—`.
- * The output parses back with {@link parseQuantity}.
+ * The output parses back with {@link parseQuantity}. Volts take up to four digits by default
+ * ({@link VOLT_DIGITS}); a margin, a difference of two levels, is written with three
+ * ({@link formatMargin}).
  */
-export function formatQuantity(value: number, unit: string, digits = 3): string {
+export function formatQuantity(value: number, unit: string, digits = unit === 'V' ? VOLT_DIGITS : 3): string {
   if (Number.isNaN(value)) return '—';
   if (!Number.isFinite(value)) return join(value < 0 ? '-∞' : '∞', '', unit);
   if (value === 0) return join('0', '', unit);

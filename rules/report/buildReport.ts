@@ -9,6 +9,7 @@ import type { CheckResult, Finding, PowerState, Severity } from '../engine/types
 import { summarize } from '../engine/findings.ts';
 import { resolveProfile } from '../profiles/index.ts';
 import { profileIdOf } from '../model/pinDefaults.ts';
+import { labelOr, netLabel } from '../engine/names.ts';
 import { effectiveSettings } from '../engine/powerStates.ts';
 import { CAUTIONS } from './cautions.ts';
 import type { Crossing, FailOn, Report, ReportFinding } from './reportSchema.ts';
@@ -104,6 +105,18 @@ function usedProfiles(design: Design): Report['profiles'] {
   });
 }
 
+/** Labels by id: every rail, and the nets whose label differs from their id (most do not). */
+function reportNames(design: Design): NonNullable<Report['names']> {
+  const nets: Record<string, string> = {};
+  for (const n of design.nets) {
+    const label = netLabel(n);
+    if (label !== n.id) nets[n.id] = label;
+  }
+  const rails: Record<string, string> = {};
+  for (const r of design.rails) rails[r.id] = labelOr(r.label, r.id);
+  return { nets, rails };
+}
+
 /** The power states of a result, or the one a `scenario` option names. Undefined when it names none. */
 export function selectStates(result: CheckResult, scenario?: string): readonly PowerState[] | undefined {
   if (scenario === undefined) return result.states;
@@ -145,5 +158,6 @@ export function buildReport(design: Design, result: CheckResult, options: Report
     interfacePower: interfacePowerRows(findings).map((r) => ({ ...r, pins: [...r.pins] })),
     profiles: usedProfiles(design),
     cautions: [...CAUTIONS],
+    names: reportNames(design),
   };
 }

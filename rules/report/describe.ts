@@ -1,10 +1,11 @@
 /** Wording shared by the text and Markdown renderings. */
-import { formatQuantity } from '../levels/units.ts';
+import { formatMargin, formatQuantity } from '../levels/units.ts';
+import { railNameIn } from './reportNames.ts';
 import type { Report, ReportFinding } from './reportSchema.ts';
 
 /** A margin in engineering notation; `—` when the net has no driver/receiver pair. */
 export function marginText(margin: number | null): string {
-  return margin === null ? '—' : formatQuantity(margin, 'V');
+  return margin === null ? '—' : formatMargin(margin);
 }
 
 /** `5 parts, 7 nets, 3 rails`. */
@@ -21,8 +22,9 @@ export function settingsLine(report: Report): string {
 }
 
 /** `all-on (All rails on)`, `pump-off (Pump off; off: 5v0)`. */
-export function stateText(s: Report['scenarios'][number]): string {
-  return s.off.length === 0 ? `${s.id} (${s.label})` : `${s.id} (${s.label}; off: ${s.off.join(', ')})`;
+export function stateText(s: Report['scenarios'][number], report: Pick<Report, 'names'>): string {
+  const off = s.off.map((r) => railNameIn(report, r)).join(', ');
+  return s.off.length === 0 ? `${s.id} (${s.label})` : `${s.id} (${s.label}; off: ${off})`;
 }
 
 /** `error`, or `error, waived` for a waived finding. */

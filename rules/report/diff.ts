@@ -3,11 +3,12 @@
  * gone, or changed (a severity, a waiver, a margin or another number that moved), matched by
  * their stable ids. Renders as text, Markdown for a review comment, and JSON.
  */
-import { formatQuantity } from '../levels/units.ts';
+import { formatMargin, formatQuantity } from '../levels/units.ts';
 import { reaches } from './baseline.ts';
 import { codeSpan, escapeMarkdown } from './renderMarkdown.ts';
 import type { FailOn, Report, ReportFinding } from './reportSchema.ts';
 import { plural } from './verdict.ts';
+import { netNameIn } from './reportNames.ts';
 
 export const DIFF_FORMAT_ID = 'railcross.diff';
 export const DIFF_FORMAT_VERSION = 1;
@@ -30,6 +31,8 @@ export interface DiffSide {
   readonly file: string;
   readonly title: string;
   readonly tool: string;
+  /** The report's labels by id, when it carries them: the text names nets by them. */
+  readonly names?: Report['names'];
 }
 
 export interface ReportDiff {
@@ -105,7 +108,12 @@ export function diffReports(from: Report, to: Report, files: { from: string; to:
     else changed.push({ id: f.id, before: old, after: f, changes });
   }
   const gone = from.findings.filter((f) => !after.has(f.id));
-  const side = (r: Report, file: string): DiffSide => ({ file, title: r.design.title, tool: r.tool });
+  const side = (r: Report, file: string): DiffSide => ({
+    file,
+    title: r.design.title,
+    tool: r.tool,
+    ...(r.names === undefined ? {} : { names: r.names }),
+  });
   return {
     format: DIFF_FORMAT_ID,
     version: DIFF_FORMAT_VERSION,
@@ -202,7 +210,11 @@ export function unitOfValue(key: string): string | undefined {
 function valueText(key: string, value: unknown): string {
   if (value === null || value === undefined) return '—';
   const unit = UNITS[key.replace(/^values\./, '')];
-  if (typeof value === 'number') return unit === undefined ? String(value) : formatQuantity(value, unit);
+  if (typeof value === 'number') {
+    if (unit === undefined) return String(value);
+    // A margin is a difference of two levels: three digits, as everywhere else.
+    return /^values\.margin/.test(key) ? formatMargin(value) : formatQuantity(value, unit);
+  }
   return typeof value === 'string' ? value : JSON.stringify(value);
 }
 
@@ -211,7 +223,8 @@ export function changeText(c: FieldChange): string {
   return `${c.key.replace(/^values\./, '')} ${valueText(c.key, c.before)} → ${valueText(c.key, c.after)}`;
 }
 
-const where = (f: ReportFinding) => `${f.net === null ? '(no net)' : `net ${f.net}`} [${f.scenario}]`;
+const where = (f: ReportFinding, side: DiffSide) =>
+  `${f.net === null ? '(no net)' : `net ${netNameIn(side, f.net)}`} [${f.scenario}]`;
 const severityOf = (f: ReportFinding) => (f.waived === undefined ? f.severity : `${f.severity}, waived`);
 
 function summaryLine(d: ReportDiff): string {
@@ -231,19 +244,20 @@ export function renderDiffText(d: ReportDiff): string {
     '',
     summaryLine(d),
   ];
-  const list = (heading: string, findings: readonly ReportFinding[]) => {
+  // A gone finding is named as the older report named it; the others as the newer one does.
+  const list = (heading: string, findings: readonly ReportFinding[], side: DiffSide) => {
     if (findings.length === 0) return;
     out.push('', `${heading} (${findings.length})`);
     for (const f of findings)
-      out.push(`  ${severityOf(f).toUpperCase()}  ${f.rule}  ${where(f)}`, `      ${f.message}`);
+      out.push(`  ${severityOf(f).toUpperCase()}  ${f.rule}  ${where(f, side)}`, `      ${f.message}`);
   };
-  list('New', d.new);
-  list('Gone', d.gone);
+  list('New', d.new, d.to);
+  list('Gone', d.gone, d.from);
   if (d.changed.length > 0) {
     out.push('', `Changed (${d.changed.length})`);
     for (const c of d.changed)
       out.push(
-        `  ${severityOf(c.after).toUpperCase()}  ${c.after.rule}  ${where(c.after)}`,
+        `  ${severityOf(c.after).toUpperCase()}  ${c.after.rule}  ${where(c.after, d.to)}`,
         `      ${c.changes.map(changeText).join('; ')}`,
         `      ${c.after.message}`,
       );
@@ -259,7 +273,7 @@ export function renderDiffMarkdown(d: ReportDiff): string {
     `${codeSpan(d.from.file)} → ${codeSpan(d.to.file)}. ${escapeMarkdown(summaryLine(d))}`,
   ];
   const row = (cells: readonly string[]) => `| ${cells.join(' | ')} |`;
-  const table = (heading: string, findings: readonly ReportFinding[]) => {
+  const table = (heading: string, findings: readonly ReportFinding[], side: DiffSide) => {
     if (findings.length === 0) return;
     out.push(
       '',
@@ -273,14 +287,14 @@ export function renderDiffMarkdown(d: ReportDiff): string {
         row([
           severityOf(f),
           codeSpan(f.rule),
-          f.net === null ? '—' : codeSpan(f.net),
+          f.net === null ? '—' : escapeMarkdown(netNameIn(side, f.net)),
           codeSpan(f.scenario),
           escapeMarkdown(f.message),
         ]),
       );
   };
-  table('New', d.new);
-  table('Gone', d.gone);
+  table('New', d.new, d.to);
+  table('Gone', d.gone, d.from);
   if (d.changed.length > 0) {
     out.push(
       '',
@@ -295,7 +309,7 @@ export function renderDiffMarkdown(d: ReportDiff): string {
         row([
           severityOf(f),
           codeSpan(f.rule),
-          f.net === null ? '—' : codeSpan(f.net),
+          f.net === null ? '—' : escapeMarkdown(netNameIn(d.to, f.net)),
           codeSpan(f.scenario),
           escapeMarkdown(c.changes.map(changeText).join('; ')),
           escapeMarkdown(f.message),

@@ -4,6 +4,7 @@
  * or start emphasis.
  */
 import { formatQuantity } from '../levels/units.ts';
+import { netNameIn, railNameIn } from './reportNames.ts';
 import { designLine, marginText, settingsLine, severityText, stateText } from './describe.ts';
 import type { Report } from './reportSchema.ts';
 import { verdict, type Verdict } from './verdict.ts';
@@ -89,7 +90,7 @@ export function renderMarkdown(report: Report, options: { readonly verdict?: Ver
     `${escapeMarkdown(report.tool)}, generated ${escapeMarkdown(report.generatedAt)}. ${escapeMarkdown(designLine(report))}; ${escapeMarkdown(settingsLine(report))}.`,
     '',
   );
-  out.push(`Power states: ${report.scenarios.map((s) => escapeMarkdown(stateText(s))).join(', ')}.`, '');
+  out.push(`Power states: ${report.scenarios.map((s) => escapeMarkdown(stateText(s, report))).join(', ')}.`, '');
   const [word, ...rest] = v.line.split(':');
   out.push(`**${word}**:${escapeMarkdown(rest.join(':'))}`, '');
   const s = report.summary;
@@ -112,7 +113,7 @@ export function renderMarkdown(report: Report, options: { readonly verdict?: Ver
         report.findings.map((f) => [
           severityText(f),
           codeSpan(f.rule),
-          f.net === null ? '—' : codeSpan(f.net),
+          f.net === null ? '—' : escapeMarkdown(netNameIn(report, f.net)),
           codeSpan(f.scenario),
           escapeMarkdown(f.message),
           escapeMarkdown(f.hint),
@@ -132,7 +133,7 @@ export function renderMarkdown(report: Report, options: { readonly verdict?: Ver
         report.crossings.map((c) => [
           codeSpan(c.net),
           escapeMarkdown(c.label),
-          c.rails.map(codeSpan).join(', '),
+          c.rails.map((r) => escapeMarkdown(railNameIn(report, r))).join(', '),
           codeSpan(c.scenario),
           marginText(c.marginHigh),
           marginText(c.marginLow),
@@ -151,7 +152,7 @@ export function renderMarkdown(report: Report, options: { readonly verdict?: Ver
         ['Power state', 'Rail', 'Current', 'Inputs'],
         report.interfacePower.map((r) => [
           codeSpan(r.scenario),
-          codeSpan(r.rail),
+          escapeMarkdown(railNameIn(report, r.rail)),
           formatQuantity(r.current, 'A'),
           r.pins.map(codeSpan).join(', '),
         ]),

@@ -5,6 +5,7 @@
  * unless asked for. Every finding shown keeps its full message (the numbers are never cut).
  */
 import { RULES } from '../checks/index.ts';
+import { netNameIn, railNameIn } from './reportNames.ts';
 import { formatQuantity } from '../levels/units.ts';
 import { designLine, marginText, settingsLine, stateText } from './describe.ts';
 import type { Report, ReportFinding } from './reportSchema.ts';
@@ -59,15 +60,21 @@ const GROUPS: readonly [Group, string][] = [
 const groupOf = (f: ReportFinding): Group => (f.waived === undefined ? f.severity : 'waived');
 
 /** `net SDA [standby]` or `(no net) [all-on]`, with the pins when the rule names some. */
-function where(f: ReportFinding): string {
-  return `${f.net === null ? '(no net)' : `net ${f.net}`} [${f.scenario}]`;
+function where(f: ReportFinding, report: Report): string {
+  return `${f.net === null ? '(no net)' : `net ${netNameIn(report, f.net)}`} [${f.scenario}]`;
 }
 
 /**
  * One rule's findings of one group: its title and count, its usual remedy once, then a line per
  * finding. A finding whose hint differs from the group's shared one keeps its own.
  */
-function ruleLines(rule: string, findings: readonly ReportFinding[], group: Group, options: TextOptions): string[] {
+function ruleLines(
+  report: Report,
+  rule: string,
+  findings: readonly ReportFinding[],
+  group: Group,
+  options: TextOptions,
+): string[] {
   const counts = new Map<string, number>();
   for (const f of findings) counts.set(f.hint, (counts.get(f.hint) ?? 0) + 1);
   const shared = [...counts].sort((a, b) => b[1] - a[1])[0]![0];
@@ -75,7 +82,7 @@ function ruleLines(rule: string, findings: readonly ReportFinding[], group: Grou
   for (const f of findings) {
     const mark = options.isNew?.(f) ? 'NEW ' : '';
     const severity = group === 'waived' ? `${f.severity}, ` : '';
-    out.push(`    ${mark}${severity}${where(f)}: ${f.message}`);
+    out.push(`    ${mark}${severity}${where(f, report)}: ${f.message}`);
     if (f.waived !== undefined) out.push(`      Waived: ${f.waived}`);
     if (f.hint !== shared) out.push(`      Hint: ${f.hint}`);
   }
@@ -108,7 +115,7 @@ function findingLines(report: Report, options: TextOptions): string[] {
     }
     // The report's own order within a rule: power state, then net in the file's order.
     const rules = [...byRule.keys()].sort((a, b) => (RULE_ORDER.get(a) ?? 0) - (RULE_ORDER.get(b) ?? 0));
-    for (const rule of rules) out.push(...ruleLines(rule, byRule.get(rule)!, group, options));
+    for (const rule of rules) out.push(...ruleLines(report, rule, byRule.get(rule)!, group, options));
   }
   return out;
 }
@@ -119,7 +126,7 @@ export function renderText(report: Report, options: TextOptions = {}): string {
   out.push(`Railcross check: ${report.design.title}`);
   out.push(`${report.tool}, ${report.generatedAt}`);
   out.push(`${designLine(report)}; ${settingsLine(report)}`);
-  out.push(`Power states: ${report.scenarios.map(stateText).join(', ')}`);
+  out.push(`Power states: ${report.scenarios.map((s) => stateText(s, report)).join(', ')}`);
   out.push('');
   const s = report.summary;
   out.push(
@@ -143,7 +150,7 @@ export function renderText(report: Report, options: TextOptions = {}): string {
         report.crossings.map((c) => [
           c.net,
           c.label,
-          c.rails.join(', '),
+          c.rails.map((r) => railNameIn(report, r)).join(', '),
           c.scenario,
           marginText(c.marginHigh),
           marginText(c.marginLow),
@@ -159,7 +166,12 @@ export function renderText(report: Report, options: TextOptions = {}): string {
     out.push(
       ...table(
         ['state', 'rail', 'current', 'inputs'],
-        report.interfacePower.map((r) => [r.scenario, r.rail, formatQuantity(r.current, 'A'), r.pins.join(', ')]),
+        report.interfacePower.map((r) => [
+          r.scenario,
+          railNameIn(report, r.rail),
+          formatQuantity(r.current, 'A'),
+          r.pins.join(', '),
+        ]),
         new Set([2]),
       ),
     );

@@ -105,6 +105,16 @@ export const ReportSchema = z.strictObject({
     .array(z.strictObject({ id: z.string(), label: z.string(), source: z.string() }))
     .meta({ description: 'The profiles the design uses (built-in or design-local) and where their numbers come from' }),
   cautions: z.array(z.string()).min(1),
+  names: z
+    .strictObject({
+      nets: z.record(z.string(), z.string()).meta({ description: 'Net id → label, for the nets whose label differs' }),
+      rails: z.record(z.string(), z.string()).meta({ description: 'Rail id → label' }),
+    })
+    .optional()
+    .meta({
+      description:
+        'The labels people read, by id: the text, Markdown and PDF name nets and rails by them (ids stay in the machine fields); absent from reports written before it',
+    }),
 });
 
 export type Report = z.infer<typeof ReportSchema>;

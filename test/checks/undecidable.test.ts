@@ -15,6 +15,7 @@ import { nonFinitePaths } from '../../rules/engine/undecidable.ts';
 import type { Design } from '../../rules/model/schema.ts';
 import { bidir, design, input, net, output, part, rail, rail3v3, rail5v0, scenario } from '../support/build.ts';
 import { findingsOf } from '../support/ruleTester.ts';
+import { idsWhereLabelsBelong, relabelled } from '../support/relabel.ts';
 import { fetBus, seriesClamp } from '../support/paths.ts';
 
 const rule = (id: string): AnyRule => RULES.find((r) => r.id === id)!;
@@ -213,6 +214,14 @@ describe('a non-finite number is an error, never silence', () => {
       expect((f.values.undecidable as string[]).length).toBeGreaterThan(0);
     }
     for (const f of found) expect(nonFinitePaths(f), f.message).toEqual([]);
+  });
+
+  // One name for one thing (issue 18): "cannot be guaranteed" names the net, rail or profile by label too.
+  it.each(cases)('$rule: $name, named by labels', (c) => {
+    const d = relabelled(c.design);
+    const undecided = findingsOf(rule(c.rule), d).filter((f) => f.messageId === 'undecidable');
+    expect(undecided.length).toBeGreaterThan(0);
+    for (const f of undecided) expect(idsWhereLabelsBelong(f.message, d), f.message).toEqual([]);
   });
 
   it.each(cases)('$rule: $name, with a waiver of the rule on the net, still counts', (c) => {

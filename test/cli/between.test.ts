@@ -67,7 +67,7 @@ const CASES: Case[] = [
     name: '5 V into 3.3 V through a 2.2 kΩ / 3.3 kΩ divider is no over-voltage',
     file: 'divider.railcross.json',
     exit: 0,
-    has: [['rail-crossing', 'info', /RX33 joins rails 3v3, 5v0: worst NMH 0\.761 V, worst NML 0\.733 V/]],
+    has: [['rail-crossing', 'info', /RX33 joins rails 3\.3 V, 5 V: worst NMH 0\.761 V, worst NML 0\.733 V/]],
     noErrorFrom: ['overvoltage', 'level-high', 'level-low'],
   },
   {
@@ -77,7 +77,7 @@ const CASES: Case[] = [
     exit: 0,
     has: [
       ['clamp-current', 'info', /clamp carries at most 2\.23 mA, within its 5 mA limit/],
-      ['rail-injection', 'info', /2\.23 mA of clamp current flows into 3v3/],
+      ['rail-injection', 'info', /2\.23 mA of clamp current flows into 3\.3 V/],
     ],
     noErrorFrom: ['overvoltage'],
   },
@@ -104,7 +104,7 @@ const CASES: Case[] = [
     name: 'a weak push-pull translator under a 4.7 kΩ pull-up loses its low',
     file: 'translator-pullup.railcross.json',
     exit: 1,
-    has: [['translator-pull', 'error', /= 1\.69 V, above U6\.A's VIL of 0\.8 V/]],
+    has: [['translator-pull', 'error', /= 1\.695 V, above U6\.A's VIL of 0\.8 V/]],
   },
   {
     // (3.135 − 2.0)/500 µA = 2.27 kΩ < 4.7 kΩ.

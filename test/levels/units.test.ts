@@ -131,8 +131,9 @@ describe('formatQuantity', () => {
     [2950.6, 'Ω', 4, '2.951 kΩ'],
     [2950.6, 'Ω', 1, '3 kΩ'],
     [999.96, 'Ω', undefined, '1 kΩ'], // rounding carries into the next prefix
-    [0.09996, 'V', undefined, '0.1 V'], // rounds to 0.1, which takes no prefix
-    [0.0999, 'V', undefined, '99.9 mV'],
+    [0.09996, 'A', undefined, '0.1 A'], // rounds to 0.1, which takes no prefix
+    [0.0999, 'A', undefined, '99.9 mA'],
+    [0.09996, 'V', undefined, '99.96 mV'], // volts keep up to four digits
     [4.7e6, 'Ω', undefined, '4.7 MΩ'],
     [1.5e9, 'Ω', undefined, '1.5 GΩ'],
     [1e12, 'Ω', undefined, '1000 GΩ'], // beyond G the number grows
@@ -140,7 +141,8 @@ describe('formatQuantity', () => {
     [1e-21, 'F', undefined, '1e-21 F'], // too small for any prefix
     [5e-3, 's', undefined, '5 ms'],
     [10e-9, 's/V', undefined, '10 ns/V'],
-    [1 / 3, 'V', undefined, '0.333 V'],
+    [1 / 3, 'V', undefined, '0.3333 V'],
+    [1 / 3, 'A', undefined, '0.333 A'],
     [3.3, '', undefined, '3.3'],
     [4700, '', undefined, '4.7 k'],
     [Infinity, 'Ω', undefined, '∞ Ω'],
@@ -192,7 +194,7 @@ describe('formatQuantity output parses back', () => {
     fc.assert(
       fc.property(fc.double({ min: -1e4, max: 1e4, noNaN: true }), (value) => {
         const r = parseQuantity(formatQuantity(value, 'V'), 'V');
-        const expected = Number(value.toPrecision(3)) + 0; // + 0 turns -0 into 0
+        const expected = Number(value.toPrecision(4)) + 0; // + 0 turns -0 into 0
         return r.ok && Math.abs(r.value - expected) <= 1e-12 * Math.abs(expected);
       }),
     );

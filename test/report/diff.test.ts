@@ -187,7 +187,7 @@ describe('diff OLD NEW', () => {
       const md = renderDiffMarkdown(d);
       expect(md).toContain('`new \\| rev.json`');
       expect(md).toMatch(
-        /^\| info \| `pull-range` \| `FLOW` \| `all-on` \| severity error → info; ohms 40 kΩ → 4\.21 kΩ[;|]/m,
+        /^\| info \| `pull-range` \| FLOW_PULSE \| `all-on` \| severity error → info; ohms 40 kΩ → 4\.21 kΩ[;|]/m,
       );
     });
     it('JSON carries the summary and every change', () => {

@@ -56,6 +56,6 @@ describe('interface power per rail', () => {
       { scenario: 'standby', rail: '5v0', current: 0.5e-3, pins: ['U4.RX'] },
       { scenario: 'reset', rail: '5v0', current: 0.5e-3, pins: ['U4.RX'] },
     ]);
-    expect(renderText(report)).toMatch(/all-on\s+5v0\s+500 µA\s+U4\.RX/);
+    expect(renderText(report)).toMatch(/all-on\s+5 V valve and display supply\s+500 µA\s+U4\.RX/);
   });
 });

@@ -290,6 +290,8 @@ export const EDIT_KINDS = [
   'remove-discrete',
   'discrete-value',
   'move-discrete',
+  'relabel-net',
+  'relabel-rail',
 ] as const;
 export type EditKind = (typeof EDIT_KINDS)[number];
 
@@ -446,6 +448,16 @@ export function applyEdit(design: Design, kind: EditKind, r: Rand): Design {
               ...pins,
               r() < 0.5 ? { pin: key, role: 'input' } : { pin: key, role: 'input', pull: { to: 'ground', ohms: 40e3 } },
             ];
+        return;
+      }
+      // Messages name nets and rails by their labels: a new label must reach every finding that names it.
+      case 'relabel-net': {
+        if (d.nets.length === 0) return;
+        pick(r, d.nets).label = `SIG_${Math.floor(r() * 1e6)}`;
+        return;
+      }
+      case 'relabel-rail': {
+        pick(r, d.rails).label = `Supply ${Math.floor(r() * 1e6)}`;
         return;
       }
       case 'net-pull': {

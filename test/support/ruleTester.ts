@@ -13,6 +13,7 @@ import type { Finding, Severity } from '../../rules/engine/types.ts';
 import { check } from '../../rules/check/check.ts';
 import { validateDesign } from '../../rules/model/reader.ts';
 import { deepFreeze } from '../../rules/profiles/define.ts';
+import { idsWhereLabelsBelong, relabelled } from './relabel.ts';
 
 export { deepFreeze };
 
@@ -161,6 +162,18 @@ export function ruleTester(rule: AnyRule, table: { valid: ValidCase[]; invalid: 
           for (const [key, v] of Object.entries(e.values ?? {}))
             expectValue((f.values as Readonly<Record<string, unknown>>)[key], v, `${f.id} values.${key}`);
         });
+      });
+
+      // One name for one thing (issue 18): with every net, rail and profile labelled apart from
+      // its id, the same findings name them by label; ids stay in the machine fields.
+      it(`labels: ${c.name}`, () => {
+        const d = deepFreeze(relabelled(c.design));
+        const found = findingsOf(rule, d);
+        expect(found.map((f) => f.id)).toEqual(findingsOf(rule, deepFreeze(c.design)).map((f) => f.id));
+        for (const f of found) {
+          expect(idsWhereLabelsBelong(f.message, d), `message: ${f.message}`).toEqual([]);
+          expect(idsWhereLabelsBelong(f.hint, d), `hint: ${f.hint}`).toEqual([]);
+        }
       });
     }
   });

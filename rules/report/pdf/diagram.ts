@@ -218,7 +218,8 @@ function drawBox(ctx: Ctx, v: View, box: PartBox, rails: ReadonlyMap<string, Rai
   doc.text(fitText(doc, box.part.label, room - idWidth - 6 * s), v.x(left) + idWidth + 6 * s, v.y(box.headerTop + 19));
   doc.setFontSize(8.5 * s);
   setText(doc, MUTED);
-  const railText = rail === undefined ? box.part.rail : `${formatQuantity(rail.nominal, 'V')} (${rail.id})`;
+  // The rail as the canvas's badge gives it, by its nominal voltage (the id is the file's business).
+  const railText = rail === undefined ? box.part.rail : formatQuantity(rail.nominal, 'V');
   doc.text(fitText(doc, `${railText} · ${family(box.part)}`, room), v.x(left), v.y(box.headerTop + 35));
 
   const counts = { left: 0, right: 0, top: 0, bottom: 0 };

@@ -6,6 +6,7 @@
  * fail differ by pattern and by word as well as by colour, so that a greyscale print reads.
  */
 import type { jsPDF } from 'jspdf';
+import { railNameIn } from '../reportNames.ts';
 import type { CheckResult } from '../../engine/types.ts';
 import { ladderFor, type Ladder, type LadderDriver, type LadderMargin, type LadderReceiver } from '../ladder.ts';
 import { marginVolts, onAxis, separate, STATUS_TEXT, volts } from '../ladderLayout.ts';
@@ -194,7 +195,8 @@ function marginLabel(m: LadderMargin, pre: string, yOf: YOf): Label {
 }
 
 /** Draws one ladder in the cell at (x0, y0), `w` wide and {@link CELL_H} tall. */
-function drawLadder(ctx: Ctx, ladder: Ladder, row: Crossing, x0: number, y0: number, w: number): void {
+function drawLadder(ctx: Ctx, report: Report, ladder: Ladder, row: Crossing, x0: number, y0: number, w: number): void {
+  const rail = (id: string) => railNameIn(report, id);
   const { doc } = ctx;
   setDraw(doc, HAIRLINE);
   doc.setLineWidth(0.5);
@@ -218,7 +220,7 @@ function drawLadder(ctx: Ctx, ladder: Ladder, row: Crossing, x0: number, y0: num
   setText(doc, MUTED);
   const worstText = row.worst === 'ok' ? 'no finding' : `worst finding: ${row.worst}`;
   const netId = ladder.label === ladder.net ? '' : `net ${ladder.net} · `;
-  doc.text(fitText(doc, `${netId}rails ${row.rails.join(', ')} · ${worstText}`, w - 12), x0 + 6, y0 + 22);
+  doc.text(fitText(doc, `${netId}rails ${row.rails.map(rail).join(', ')} · ${worstText}`, w - 12), x0 + 6, y0 + 22);
 
   // The worst pairs get the lanes; the pins of those pairs are drawn first.
   const pairs: { driver: string; receiver: string; margins: LadderMargin[] }[] = [];
@@ -265,7 +267,7 @@ function drawLadder(ctx: Ctx, ladder: Ladder, row: Crossing, x0: number, y0: num
   const driverLine = (k: number) => {
     const d = allDrivers[k]!;
     return {
-      text: `D${k + 1}  ${d.pin} · drives · ${d.rail} · ${d.drive}${k >= MAX_DRIVERS ? ' (not drawn)' : ''}`,
+      text: `D${k + 1}  ${d.pin} · drives · ${rail(d.rail)} · ${d.drive}${k >= MAX_DRIVERS ? ' (not drawn)' : ''}`,
       colour: INK_2,
     };
   };
@@ -273,7 +275,7 @@ function drawLadder(ctx: Ctx, ladder: Ladder, row: Crossing, x0: number, y0: num
     const r = allReceivers[k]!;
     const range = `${volts(r.railRange.min)}–${volts(r.railRange.max)}`;
     return {
-      text: `R${k + 1}  ${r.pin} · receives · ${r.rail} ${range}${r.schmitt ? ' · Schmitt' : ''}${k >= MAX_RECEIVERS ? ' (not drawn)' : ''}`,
+      text: `R${k + 1}  ${r.pin} · receives · ${rail(r.rail)} ${range}${r.schmitt ? ' · Schmitt' : ''}${k >= MAX_RECEIVERS ? ' (not drawn)' : ''}`,
       colour: INK_2,
     };
   };
@@ -296,7 +298,7 @@ function drawLadder(ctx: Ctx, ladder: Ladder, row: Crossing, x0: number, y0: num
   }
   for (let k = drivers.length; k < allDrivers.length; k++) key.push(driverLine(k));
   for (let k = receivers.length; k < allReceivers.length; k++) key.push(receiverLine(k));
-  for (const p of ladder.unpowered) key.push({ text: `unpowered: ${p.pin} (${p.rail} off)`, colour: MUTED });
+  for (const p of ladder.unpowered) key.push({ text: `unpowered: ${p.pin} (${rail(p.rail)} off)`, colour: MUTED });
   if (ladder.drivers.length === 0) key.push({ text: 'no powered driver: no margin to draw', colour: MUTED });
   const shown =
     key.length > MAX_KEY_LINES
@@ -492,7 +494,7 @@ export function laddersSection(ctx: Ctx, y: number, report: Report, result: Chec
     const view = result.nets.get(row.scenario)?.get(row.net)?.view;
     const state = result.states.find((s) => s.id === row.scenario);
     if (view === undefined || state === undefined) return;
-    drawLadder(ctx, ladderFor(view, state), row, MARGIN.left + column * (w + GAP), at, w);
+    drawLadder(ctx, report, ladderFor(view, state), row, MARGIN.left + column * (w + GAP), at, w);
   });
   return at + CELL_H + GAP;
 }

@@ -3,11 +3,12 @@
  * noise margins. Long names wrap inside their cells; the head repeats on every page.
  */
 import type { jsPDF } from 'jspdf';
+import { netNameIn, railNameIn } from '../reportNames.ts';
 import { autoTable, type CellHookData, type RowInput, type Styles, type UserOptions } from 'jspdf-autotable';
 import type { Design } from '../../model/schema.ts';
 import type { CheckResult, LevelSide, NetAnalysis, PairAnalysis } from '../../engine/types.ts';
 import { RULES } from '../../checks/index.ts';
-import { formatQuantity } from '../../levels/units.ts';
+import { formatMargin, formatQuantity } from '../../levels/units.ts';
 import type { Report, ReportFinding } from '../reportSchema.ts';
 import { plural } from '../verdict.ts';
 import { paragraph, sectionHeading, type Ctx } from './page.ts';
@@ -122,7 +123,7 @@ export function findingsTable(ctx: Ctx, y: number, report: Report): number {
   const body: RowInput[] = findings.map((f) => [
     f.waived === undefined ? f.severity : `${f.severity}\nwaived`,
     `${f.rule}\n${TITLES.get(f.rule) ?? ''}`,
-    f.net ?? '—',
+    f.net === null ? '—' : netNameIn(report, f.net),
     f.scenario,
     f.waived === undefined ? f.message : `${f.message}\nWaived: ${f.waived}`,
     f.hint,
@@ -135,7 +136,7 @@ export function findingsTable(ctx: Ctx, y: number, report: Report): number {
     columnStyles: {
       0: { cellWidth: 50, cellPadding: { top: 3, bottom: 3, left: 3.5 + MARK_ROOM, right: 2 } },
       1: { cellWidth: 84 },
-      2: { cellWidth: 56, ...mono(ctx) },
+      2: { cellWidth: 72, ...mono(ctx) },
       3: { cellWidth: 44, ...mono(ctx) },
       4: { cellWidth: 158 },
       5: { cellWidth: 'auto', textColor: rgb(INK_2) },
@@ -180,7 +181,7 @@ function drawRuleCell(ctx: Ctx, data: CellHookData, rule: string, isContinued: b
   });
 }
 
-const marginText = (m: number | null): string => (m === null ? '—' : formatQuantity(m, 'V'));
+const marginText = (m: number | null): string => (m === null ? '—' : formatMargin(m));
 
 /**
  * The engine's own judgement of a net's worst pair on one side (it compares the levels with
@@ -218,10 +219,10 @@ export function crossingsTable(ctx: Ctx, y: number, report: Report, result: Chec
   );
   if (rows.length === 0) return at;
   const worst = (w: 'error' | 'warning' | 'ok'): Status => (w === 'ok' ? 'clean' : w);
+  // The net by its label (its id beneath when the file calls it otherwise); the rails by label, one a line.
   const body: RowInput[] = rows.map((c) => [
-    c.net,
-    c.label,
-    c.rails.join(', '),
+    c.label === c.net ? c.net : `${c.label}\n(${c.net})`,
+    c.rails.map((r) => railNameIn(report, r)).join('\n'),
     c.scenario,
     marginText(c.marginHigh),
     marginText(c.marginLow),
@@ -230,30 +231,29 @@ export function crossingsTable(ctx: Ctx, y: number, report: Report, result: Chec
   const rowOf = rowIndexer(body);
   return run(ctx, {
     ...baseTableOptions(ctx, at),
-    head: [['Net', 'Label', 'Rails', 'Power state', 'Worst NMH', 'Worst NML', 'Worst']],
+    head: [['Net', 'Rails', 'Power state', 'Worst NMH', 'Worst NML', 'Worst']],
     body,
     columnStyles: {
-      0: { cellWidth: 70, ...mono(ctx) },
+      0: { cellWidth: 100, ...mono(ctx) },
       1: { cellWidth: 'auto' },
-      2: { cellWidth: 62, ...mono(ctx) },
-      3: { cellWidth: 56, ...mono(ctx) },
+      2: { cellWidth: 56, ...mono(ctx) },
+      3: { cellWidth: 56, halign: 'right' },
       4: { cellWidth: 56, halign: 'right' },
-      5: { cellWidth: 56, halign: 'right' },
-      6: { cellWidth: 58, cellPadding: { top: 3, bottom: 3, left: 3.5 + MARK_ROOM, right: 3.5 } },
+      5: { cellWidth: 58, cellPadding: { top: 3, bottom: 3, left: 3.5 + MARK_ROOM, right: 3.5 } },
     },
     didParseCell: (data) => {
       if (data.section !== 'body') return;
       const c = rows[data.row.index]!;
-      if (data.column.index === 4) tint(data, sideStatus(analysis[data.row.index], 'high'));
-      if (data.column.index === 5) tint(data, sideStatus(analysis[data.row.index], 'low'));
-      if (data.column.index === 6 && c.worst !== 'ok') {
+      if (data.column.index === 3) tint(data, sideStatus(analysis[data.row.index], 'high'));
+      if (data.column.index === 4) tint(data, sideStatus(analysis[data.row.index], 'low'));
+      if (data.column.index === 5 && c.worst !== 'ok') {
         data.cell.styles.textColor = rgb(STATUS_COLOUR[c.worst]);
         data.cell.styles.fontStyle = 'bold';
       }
     },
     didDrawCell: (data) => {
       const c = rows[rowOf(data)];
-      if (data.section === 'body' && data.column.index === 6 && c !== undefined) markCell(data, worst(c.worst));
+      if (data.section === 'body' && data.column.index === 5 && c !== undefined) markCell(data, worst(c.worst));
     },
   });
 }

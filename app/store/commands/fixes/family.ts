@@ -5,6 +5,7 @@
  * user confirms from the datasheet.
  */
 import type { Draft } from 'immer';
+import { namesOf } from '../../../../rules/engine/names.ts';
 import type { Design } from '../../../../rules/model/schema.ts';
 import { levelAt, type Level } from '../../../../rules/levels/level.ts';
 import { below } from '../../../../rules/levels/compare.ts';
@@ -102,12 +103,13 @@ export function ttlInputsFix(design: Design, finding: FindingOf<'level-high'>): 
   if (below(voh, newVih)) return undefined;
   const target = profileTarget(r);
   const what = target === 'pin' ? key : r.partId;
+  const name = namesOf(design);
   return {
     id: 'ttl-inputs',
     finding: finding.id,
-    title: `Use ${to} for ${what}`,
+    title: `Use ${name.profile(to)} for ${what}`,
     sentence:
-      `Changes ${what} from ${r.profileId} to ${to}, the same family with TTL-level inputs: its VIH of ` +
+      `Changes ${what} from ${name.profile(r.profileId)} to ${name.profile(to)}, the same family with TTL-level inputs: its VIH of ` +
       `${volts(newVih)} is below the ${volts(voh)} that ${finding.values.driver} guarantees.`,
     apply: (draft) => switchProfile(draft, key, target, r.profileId, to),
   };
@@ -136,12 +138,13 @@ export function tolerantFamilyFixes(design: Design, finding: FindingOf<'overvolt
     .sort((p, q) => Number(fixedThreshold(q!.params.vih) === fixed) - Number(fixedThreshold(p!.params.vih) === fixed));
   const target = profileTarget(r);
   const what = target === 'pin' ? key : r.partId;
+  const name = namesOf(design);
   return candidates.map((p) => ({
     id: `tolerant-family:${p!.id}`,
     finding: finding.id,
-    title: `Use ${p!.id} for ${what}`,
+    title: `Use ${name.profile(p!.id)} for ${what}`,
     sentence:
-      `Changes ${what} from ${r.profileId} to ${p!.id}, whose inputs tolerate ` +
+      `Changes ${what} from ${name.profile(r.profileId)} to ${name.profile(p!.id)}, whose inputs tolerate ` +
       `${volts(levelAt(p!.params.viMax!, range.min))} on this rail, above the ${volts(vNet)} that ${key} can see.`,
     apply: (draft: Draft<Design>) => switchProfile(draft, key, target, r.profileId, p!.id),
   }));
@@ -201,7 +204,7 @@ export function markUnpoweredSafeFix(design: Design, finding: FindingOf<'back-po
     finding: finding.id,
     title: `Mark ${key} as specified for partial power-down`,
     sentence:
-      `Records that ${key} may carry voltage while ${r.rail} is off (partial power-down), holding it to its ` +
+      `Records that ${key} may carry voltage while ${namesOf(design).rail(r.rail)} is off (partial power-down), holding it to its ` +
       `${volts(limit)} limit instead of 0.5 V; confirm in the part's datasheet that it is specified so before applying.`,
     needsConfirmation: true,
     apply(draft) {

@@ -9,7 +9,7 @@ import { GROUND } from '../../../../rules/model/references.ts';
 import type { Command } from '../command.ts';
 import { addWaiver } from '../waivers.ts';
 import { markTolerantFix, markUnpoweredSafeFix, tolerantFamilyFixes, ttlInputsFix } from './family.ts';
-import { findNet, pinAt, railOfPin } from './lookup.ts';
+import { findNet, netName, pinAt, railName, railOfPin } from './lookup.ts';
 import { driveOf } from '../../../../rules/model/pinDefaults.ts';
 import { addPullFix, pullValueFix, tieNetFixes, tiePinFixes, tieUnusedInputsFix } from './pulls.ts';
 import { translatorFixes } from './translator.ts';
@@ -65,20 +65,24 @@ function exposureTranslator(design: Design, f: FindingOf<'overvoltage'> | Findin
   const railA = source === 'net' ? findNet(design, f.net)?.pull?.to : sourceRail(design, source);
   if (railA === undefined || railB === undefined || railA === GROUND || railA === railB) return [];
   const why =
-    f.rule === 'back-power' ? `${pin} is isolated while ${railB} is off` : `${pin} only sees its own rail's levels`;
+    f.rule === 'back-power'
+      ? `${pin} is isolated while ${railName(design, railB)} is off`
+      : `${pin} only sees its own rail's levels`;
   return translatorFixes(design, f.id, { net: f.net, railA, railB }, why);
 }
 
-function contentionWaiver(f: FindingOf<'contention'>): QuickFix | undefined {
+function contentionWaiver(design: Design, f: FindingOf<'contention'>): QuickFix | undefined {
   if (f.net === null || f.messageId !== 'enablesNeeded') return undefined;
   const net = f.net;
+  const found = findNet(design, net);
+  const label = found === undefined ? net : netName(found);
   const command = addWaiver({ net, rule: 'contention' }, CONTENTION_NOTE);
   return {
     id: 'waive-contention',
     finding: f.id,
-    title: `Waive the shared enables on ${net}`,
+    title: `Waive the shared enables on ${label}`,
     sentence:
-      `Adds a waiver of contention on ${net} with a note to complete, for when the design guarantees that ` +
+      `Adds a waiver of contention on ${label} with a note to complete, for when the design guarantees that ` +
       `at most one of ${f.values.drivers.join(', ')} is enabled at a time.`,
     followUp: { kind: 'complete-waiver-note', net, rule: 'contention' },
     apply: (draft) => command.recipe(draft) as ReturnType<QuickFix['apply']>,
@@ -131,7 +135,7 @@ export function fixesFor(finding: Finding, design: Design, result: CheckResult):
         ? [tieUnusedInputsFix(design, finding), ...tiePinFixes(design, finding)].filter(present)
         : tieNetFixes(design, finding, result);
     case 'contention':
-      return [contentionWaiver(finding)].filter(present);
+      return [contentionWaiver(design, finding)].filter(present);
     default:
       return [];
   }

@@ -2,6 +2,7 @@
 import type { Design, Net, Part, Pin } from '../../../../rules/model/schema.ts';
 import { railRange, type Range } from '../../../../rules/levels/rails.ts';
 import { resolvePin } from '../../../../rules/engine/resolve.ts';
+import { namesOf, netLabel } from '../../../../rules/engine/names.ts';
 import type { ResolvedPin } from '../../../../rules/engine/types.ts';
 import { splitPinKey } from '../command.ts';
 import { railOf } from '../../../../rules/model/pinDefaults.ts';
@@ -58,7 +59,12 @@ export function uniqueId(base: string, taken: Iterable<string>): string {
   for (let k = 2; ; k++) if (!used.has(`${base}${k}`)) return `${base}${k}`;
 }
 
+/** A rail's display name: its label (ids stay in the file). */
+export function railName(design: Design, id: string): string {
+  return namesOf(design).rail(id);
+}
+
 /** The net's display name. */
 export function netName(net: Net): string {
-  return net.label ?? net.id;
+  return netLabel(net);
 }

@@ -10,7 +10,7 @@ import { formatQuantity } from '../../../../rules/levels/units.ts';
 import { GROUND } from '../../../../rules/model/references.ts';
 import type { Design, Pull } from '../../../../rules/model/schema.ts';
 import { refuse, type Refusal } from '../command.ts';
-import { findNet, lowestRail, netName, pinAt, railOfPin } from './lookup.ts';
+import { findNet, lowestRail, netName, pinAt, railName, railOfPin } from './lookup.ts';
 import { newErrors, tryOn } from './preview.ts';
 import { DEFAULT_PULL_OHMS } from './translator.ts';
 import type { QuickFix } from './types.ts';
@@ -85,9 +85,9 @@ export function addPullFix(design: Design, finding: Finding): QuickFix | undefin
   return {
     id: 'pull-up',
     finding: finding.id,
-    title: `Pull ${netName(net)} up to ${to} with ${ohms(value.ohms)}`,
+    title: `Pull ${netName(net)} up to ${railName(design, to)} with ${ohms(value.ohms)}`,
     sentence:
-      `Adds a ${ohms(value.ohms)} pull-up from ${netName(net)} to ${to}, the standard value nearest the middle of ` +
+      `Adds a ${ohms(value.ohms)} pull-up from ${netName(net)} to ${railName(design, to)}, the standard value nearest the middle of ` +
       `${rangeText(value)} (the allowed range within its tolerance), so that the open-drain drivers have a high level to release to.`,
     apply: (draft) => setNetPull(draft, net.id, pull),
   };
@@ -111,10 +111,10 @@ export function pullValueFix(design: Design, finding: Finding, result: CheckResu
     finding: finding.id,
     title:
       pull === undefined
-        ? `Pull ${netName(net)} up to ${to} with ${ohms(value.ohms)}`
+        ? `Pull ${netName(net)} up to ${railName(design, to)} with ${ohms(value.ohms)}`
         : `Change the pull-up of ${netName(net)} to ${ohms(value.ohms)}`,
     sentence:
-      `${pull === undefined ? `Adds a ${ohms(value.ohms)} pull-up to ${to} beside the pins' own pulls` : `Replaces the ${ohms(pull.ohms)} pull-up to ${pull.to} by ${ohms(value.ohms)}`}, ` +
+      `${pull === undefined ? `Adds a ${ohms(value.ohms)} pull-up to ${railName(design, to)} beside the pins' own pulls` : `Replaces the ${ohms(pull.ohms)} pull-up to ${railName(design, pull.to)} by ${ohms(value.ohms)}`}, ` +
       `the standard value nearest the middle of ${rangeText(value)}, the range its drivers, receivers and rise time allow within its tolerance.`,
     apply: (draft) => setNetPull(draft, net.id, next),
   };
@@ -155,10 +155,10 @@ export function tieNetFixes(design: Design, finding: Finding, result: CheckResul
       id: end.id,
       finding: finding.id,
       title: end.up
-        ? `Pull ${netName(net)} up to ${end.to} with ${ohms(value)}`
+        ? `Pull ${netName(net)} up to ${railName(design, end.to)} with ${ohms(value)}`
         : `Pull ${netName(net)} down with ${ohms(value)}`,
       sentence: end.up
-        ? `Adds a ${ohms(value)} pull-up from ${netName(net)} to ${end.to}, so that its inputs read high whenever nothing drives the net.`
+        ? `Adds a ${ohms(value)} pull-up from ${netName(net)} to ${railName(design, end.to)}, so that its inputs read high whenever nothing drives the net.`
         : `Adds a ${ohms(value)} pull-down from ${netName(net)} to ground, so that its inputs read low whenever nothing drives the net.`,
       apply: (draft) => setNetPull(draft, net.id, pull),
     });
@@ -173,7 +173,7 @@ export function tiePinFixes(design: Design, finding: Finding): QuickFix[] {
   if (key === undefined || at === undefined) return [];
   const rail = railOfPin(at);
   return [
-    { id: 'pull-up', to: rail, text: `high to ${rail}` },
+    { id: 'pull-up', to: rail, text: `high to ${railName(design, rail)}` },
     { id: 'pull-down', to: GROUND, text: 'low to ground' },
   ].map((end) => ({
     id: end.id,

@@ -13,7 +13,7 @@ import { formatQuantity } from '../../../../rules/levels/units.ts';
 import type { Design, Discrete } from '../../../../rules/model/schema.ts';
 import { freshId, refuse, type Refusal } from '../command.ts';
 import { takenIds } from '../discretes.ts';
-import { findNet, lowestRail, netName, pinAt, railOfPin, uniqueId } from './lookup.ts';
+import { findNet, lowestRail, netName, pinAt, railName, railOfPin, uniqueId } from './lookup.ts';
 import { driveOf } from '../../../../rules/model/pinDefaults.ts';
 import { tryOn } from './preview.ts';
 import { pullValueFrom } from './pulls.ts';
@@ -141,13 +141,15 @@ export function fetShifterFix(design: Design, finding: Finding): QuickFix | unde
   )
     return undefined;
   const ohms = (r: number) => formatQuantity(r, 'Ω');
+  const lowName = railName(design, low);
+  const highName = railName(design, high);
   return {
     id: 'fet-shifter',
     finding: finding.id,
     title: `Insert FET shifter ${fet} on ${netName(net)}`,
     sentence:
-      `Splits ${netName(net)} at a bidirectional N-MOSFET shifter ${fet} (gate on ${low}, VGS(th) ≤ 1 V, RDS(on) ≤ 5 Ω to be checked against the chosen part): ` +
-      `${plan.lowPins.join(', ')} on the ${low} side with ${lowPull} ${ohms(lowValue.ohms)} to ${low}, the rest on the ${high} side with ${highPull} ${ohms(highValue.ohms)} to ${high} ` +
+      `Splits ${netName(net)} at a bidirectional N-MOSFET shifter ${fet} (gate on ${lowName}, VGS(th) ≤ 1 V, RDS(on) ≤ 5 Ω to be checked against the chosen part): ` +
+      `${plan.lowPins.join(', ')} on the ${lowName} side with ${lowPull} ${ohms(lowValue.ohms)} to ${lowName}, the rest on the ${highName} side with ${highPull} ${ohms(highValue.ohms)} to ${highName} ` +
       `(each the largest E24 value pull-range allows), so that no pin sees the other rail.`,
     apply: (draft) => split(draft, plan, lowValue.ohms, highValue.ohms),
   };

@@ -7,7 +7,7 @@ import type { Draft } from 'immer';
 import type { Design, Net, Part, Pin, Pull } from '../../../../rules/model/schema.ts';
 import { GROUND } from '../../../../rules/model/references.ts';
 import { freshId, refuse, splitPinKey, type Refusal } from '../command.ts';
-import { findNet, netName, pinAt, railOfPin, uniqueId } from './lookup.ts';
+import { findNet, netName, pinAt, railName, railOfPin, uniqueId } from './lookup.ts';
 import { driveOf } from '../../../../rules/model/pinDefaults.ts';
 import { chipSize } from '../../../canvas/chipLayout.ts';
 import { freePlace } from '../../../canvas/freeSpot.ts';
@@ -305,7 +305,7 @@ export function translatorFixes(design: Design, finding: string, plan: Translato
       finding,
       title: `Use channel ${channel.channel} of translator ${host.id} on ${netName(layout.net)}`,
       sentence:
-        `Adds channel ${channel.channel} (${channel.a} on ${plan.railA}, ${channel.b} on ${plan.railB}) to ${host.id}, ` +
+        `Adds channel ${channel.channel} (${channel.a} on ${railName(design, plan.railA)}, ${channel.b} on ${railName(design, plan.railB)}) to ${host.id}, ` +
         `the ${DIRECTION_TEXT[layout.direction]} translator already between these rails, and ${moves}`,
       apply: (draft) => insertTranslator(draft, plan, host.id),
     });
@@ -315,8 +315,8 @@ export function translatorFixes(design: Design, finding: string, plan: Translato
     finding,
     title: `Insert translator ${layout.partId} on ${netName(layout.net)}`,
     sentence:
-      `Inserts ${layout.partId}, a ${DIRECTION_TEXT[layout.direction]} dual-rail translator with side A on ${plan.railA} ` +
-      `and side B on ${plan.railB}, and ${moves}`,
+      `Inserts ${layout.partId}, a ${DIRECTION_TEXT[layout.direction]} dual-rail translator with side A on ${railName(design, plan.railA)} ` +
+      `and side B on ${railName(design, plan.railB)}, and ${moves}`,
     apply: (draft) => insertTranslator(draft, plan),
   });
   return fixes;
