@@ -45,7 +45,12 @@ export default defineRule({
     for (const c of view.unjudged) {
       report({
         messageId: 'notSolved',
-        data: { driver: c.driver, via: c.via.join(' → '), net: view.net.id, receivers: receivers.join(', ') },
+        data: {
+          driver: c.driver,
+          via: c.via.join(' → '),
+          net: view.names.net(view.net.id),
+          receivers: receivers.join(', '),
+        },
         severity: 'error',
         pins: [c.driver, ...receivers],
         parts: partsOf(c.driver, ...receivers),
