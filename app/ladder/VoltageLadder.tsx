@@ -4,7 +4,7 @@
  * and fail differ by pattern and by text. Each drawn number also sits in data attributes
  * (`data-kind`, `data-volts`, `data-pin`, …) so that tests can compare it with the engine.
  */
-import { memo, useId } from 'react';
+import { createContext, memo, useContext, useId } from 'react';
 import type { Ladder, LadderDriver, LadderMargin, LadderReceiver } from '../../rules/report/ladder.ts';
 import {
   BAND_WIDTH,
@@ -29,7 +29,12 @@ export interface VoltageLadderProps {
    * shows the whole ladder; by default it is drawn at its own size.
    */
   readonly fit?: boolean;
+  /** A rail's name as people read it (its label); the id when not given. */
+  readonly railName?: (id: string) => string;
 }
+
+/** Rails by the names the editor shows (one name for one thing), for the columns' captions. */
+const RailName = createContext<(id: string) => string>((id) => id);
 
 type Patterns = Readonly<Record<'undefined' | 'warning' | 'fail', string>>;
 
@@ -78,6 +83,7 @@ function Labels({ x, items }: { x: number; items: readonly { y: number; text: st
 
 function DriverColumn({ d, x, at }: { d: LadderDriver; x: number; at: LadderLayout }) {
   const bx = x + 12;
+  const railName = useContext(RailName);
   const labels: { y: number; text: string }[] = [];
   if (d.high !== null) {
     labels.push({
@@ -90,7 +96,7 @@ function DriverColumn({ d, x, at }: { d: LadderDriver; x: number; at: LadderLayo
     labels.push({ y: at.y(d.low.to) + 4, text: `VOL ≤ ${volts(d.low.to)}${d.low.estimate ? ' (est.)' : ''}` });
   return (
     <g className="ladder-driver" data-pin={d.pin}>
-      <Header x={bx} pin={d.pin} sub={`drives · ${d.rail} · ${d.drive}`} />
+      <Header x={bx} pin={d.pin} sub={`drives · ${railName(d.rail)} · ${d.drive}`} />
       {d.high !== null && (
         <>
           <rect
@@ -152,6 +158,7 @@ function ReceiverColumn({
   patterns: Patterns;
 }) {
   const bx = x + 12;
+  const railName = useContext(RailName);
   const ceiling = Math.max(r.viMax?.volts ?? r.railRange.max, r.vih?.volts ?? 0);
   const labels: { y: number; text: string }[] = [];
   if (r.viMax !== null) labels.push({ y: at.y(r.viMax.volts) + 4, text: `max ${volts(r.viMax.volts)}` });
@@ -162,7 +169,7 @@ function ReceiverColumn({
       <Header
         x={bx}
         pin={r.pin}
-        sub={`receives · ${r.rail} ${volts(r.railRange.min)}–${volts(r.railRange.max)}${r.schmitt ? ' · Schmitt' : ''}`}
+        sub={`receives · ${railName(r.rail)} ${volts(r.railRange.min)}–${volts(r.railRange.max)}${r.schmitt ? ' · Schmitt' : ''}`}
       />
       {r.vih !== null && r.vil !== null && r.vih.volts > r.vil.volts && (
         <rect
@@ -219,7 +226,7 @@ function ReceiverColumn({
         data-max={r.railRange.max}
         data-pin={r.pin}
       >
-        <title>{`${r.rail}: ${volts(r.railRange.min)} to ${volts(r.railRange.max)}`}</title>
+        <title>{`${railName(r.rail)}: ${volts(r.railRange.min)} to ${volts(r.railRange.max)}`}</title>
       </line>
       {r.viMax !== null && (
         <line
@@ -321,6 +328,7 @@ export const VoltageLadder = memo(function VoltageLadder({
   height = 420,
   className,
   fit = false,
+  railName = (id: string) => id,
 }: VoltageLadderProps) {
   const base = useId().replace(/[^A-Za-z0-9_-]/g, '');
   const patterns: Patterns = {
@@ -330,41 +338,43 @@ export const VoltageLadder = memo(function VoltageLadder({
   };
   const at = layoutLadder(ladder, height);
   const caption = `Voltage ladder of ${ladder.label} in ${ladder.state.label}`;
-  const off = ladder.unpowered.map((p) => `${p.pin} (${p.rail} off)`).join(', ');
+  const off = ladder.unpowered.map((p) => `${p.pin} (${railName(p.rail)} off)`).join(', ');
   return (
-    <svg
-      className={['voltage-ladder', className].filter(Boolean).join(' ')}
-      role="img"
-      aria-label={caption}
-      width={fit ? '100%' : at.width}
-      height={fit ? undefined : at.height}
-      // Scaled, the viewBox keeps the proportions: the height follows the width.
-      style={fit ? { maxWidth: at.width, height: 'auto', aspectRatio: `${at.width} / ${at.height}` } : undefined}
-      viewBox={`0 0 ${at.width} ${at.height}`}
-      data-width={at.width}
-      data-net={ladder.net}
-      data-state={ladder.state.id}
-      data-min-margin={ladder.minMargin}
-    >
-      <title>{caption}</title>
-      <PatternDefs ids={patterns} />
-      <Axis ladder={ladder} at={at} />
-      {ladder.drivers.map((d, k) => (
-        <DriverColumn key={d.pin} d={d} x={at.driverX[k]!} at={at} />
-      ))}
-      {at.lanes.map((lane) => (
-        <MarginLane key={`${lane.driver}>${lane.receiver}`} lane={lane} at={at} patterns={patterns} />
-      ))}
-      {ladder.receivers.map((r, k) => (
-        <ReceiverColumn key={r.pin} r={r} x={at.receiverX[k]!} at={at} patterns={patterns} />
-      ))}
-      <text className="ladder-caption" x={8} y={at.height - 12} data-kind="state" data-state={ladder.state.id}>
-        {`${ladder.state.label}${off === '' ? '' : ` · unpowered: ${off}`}${ladder.drivers.length === 0 ? ' · no powered driver' : ''}`}
-      </text>
-      {ladder.unpowered.map((p) => (
-        <g key={p.pin} data-kind="unpowered" data-pin={p.pin} data-rail={p.rail} />
-      ))}
-    </svg>
+    <RailName.Provider value={railName}>
+      <svg
+        className={['voltage-ladder', className].filter(Boolean).join(' ')}
+        role="img"
+        aria-label={caption}
+        width={fit ? '100%' : at.width}
+        height={fit ? undefined : at.height}
+        // Scaled, the viewBox keeps the proportions: the height follows the width.
+        style={fit ? { maxWidth: at.width, height: 'auto', aspectRatio: `${at.width} / ${at.height}` } : undefined}
+        viewBox={`0 0 ${at.width} ${at.height}`}
+        data-width={at.width}
+        data-net={ladder.net}
+        data-state={ladder.state.id}
+        data-min-margin={ladder.minMargin}
+      >
+        <title>{caption}</title>
+        <PatternDefs ids={patterns} />
+        <Axis ladder={ladder} at={at} />
+        {ladder.drivers.map((d, k) => (
+          <DriverColumn key={d.pin} d={d} x={at.driverX[k]!} at={at} />
+        ))}
+        {at.lanes.map((lane) => (
+          <MarginLane key={`${lane.driver}>${lane.receiver}`} lane={lane} at={at} patterns={patterns} />
+        ))}
+        {ladder.receivers.map((r, k) => (
+          <ReceiverColumn key={r.pin} r={r} x={at.receiverX[k]!} at={at} patterns={patterns} />
+        ))}
+        <text className="ladder-caption" x={8} y={at.height - 12} data-kind="state" data-state={ladder.state.id}>
+          {`${ladder.state.label}${off === '' ? '' : ` · unpowered: ${off}`}${ladder.drivers.length === 0 ? ' · no powered driver' : ''}`}
+        </text>
+        {ladder.unpowered.map((p) => (
+          <g key={p.pin} data-kind="unpowered" data-pin={p.pin} data-rail={p.rail} />
+        ))}
+      </svg>
+    </RailName.Provider>
   );
 });
 

@@ -8,6 +8,7 @@ import { useMemo, useState } from 'react';
 import { ladderFor } from '../../rules/report/ladder.ts';
 import { ladderWidth, VoltageLadder } from '../ladder/VoltageLadder.tsx';
 import { useEditor } from '../store/EditorProvider.tsx';
+import { labelOr } from '../../rules/engine/names.ts';
 import { Modal } from './Modal.tsx';
 
 /** The dialog's padding and border around the drawing, px (styles.css .rc-modal-body). */
@@ -17,6 +18,11 @@ export function NetLadder({ net }: { net: string }) {
   const view = useEditor((s) => s.result.nets.get(s.powerState)?.get(net)?.view);
   const state = useEditor((s) => s.result.states.find((p) => p.id === s.powerState));
   const [wide, setWide] = useState(false);
+  const rails = useEditor((s) => s.design.rails);
+  const railName = useMemo(() => {
+    const labels = new Map(rails.map((r) => [r.id, labelOr(r.label, r.id)]));
+    return (id: string) => labels.get(id) ?? id;
+  }, [rails]);
   const ladder = useMemo(
     () => (view === undefined || state === undefined ? undefined : ladderFor(view, state)),
     [view, state],
@@ -38,7 +44,7 @@ export function NetLadder({ net }: { net: string }) {
         </button>
       </div>
       <div className="rc-ladder-scroll">
-        <VoltageLadder ladder={ladder} fit />
+        <VoltageLadder ladder={ladder} fit railName={railName} />
       </div>
       {wide && (
         <Modal
@@ -48,7 +54,7 @@ export function NetLadder({ net }: { net: string }) {
           wide
           width={ladderWidth(ladder) + DIALOG_FRAME}
         >
-          <VoltageLadder ladder={ladder} height={520} fit />
+          <VoltageLadder ladder={ladder} height={520} fit railName={railName} />
         </Modal>
       )}
     </section>

@@ -101,6 +101,18 @@ describe('VoltageLadder', () => {
     expect(t).toContain('Vpull 3.135 V');
   });
 
+  it('names rails by the labels it is given (one name for one thing), ids only without them', () => {
+    const rails = new Map(exampleDesign().rails.map((r) => [r.id, r.label ?? r.id]));
+    const t = text(
+      renderToStaticMarkup(
+        <VoltageLadder ladder={ladderOf('standby', 'SDA')} railName={(id) => rails.get(id) ?? id} />,
+      ),
+    );
+    expect(t).toContain('unpowered: U2.SDA (1.8 V sensor supply off)');
+    expect(t).toContain('receives · 3.3 V controller I/O');
+    expect(t).not.toMatch(/· 3v3\b|\(1v8 off\)/);
+  });
+
   it('two ladders on one page use distinct pattern ids', () => {
     const markup = renderToStaticMarkup(
       <>
