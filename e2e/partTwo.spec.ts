@@ -119,6 +119,8 @@ test('copy and paste of two connected chips brings the net between them, not the
   await expect(page.locator('.react-flow__node.selected')).toHaveCount(2);
   await page.keyboard.press('Control+c');
   await page.keyboard.press('Control+v');
+  // The copies land on the nearest free spot, which may lie outside the view: fit to count them.
+  await fitAll(page);
   await expect(nodes).toHaveCount(before + 2);
   await expect(page.locator('[data-part="U8"]')).toContainText('Valve driver board');
   await expect(page.locator('[data-part="U9"]')).toContainText('Display module');

@@ -8,6 +8,8 @@ import { createContext, memo, useContext, useId } from 'react';
 import type { Ladder, LadderDriver, LadderMargin, LadderReceiver } from '../../rules/report/ladder.ts';
 import {
   BAND_WIDTH,
+  DRIVER_WIDTH,
+  RECEIVER_WIDTH,
   LANE_WIDTH,
   layoutLadder,
   marginVolts,
@@ -55,14 +57,29 @@ function Axis({ ladder, at }: { ladder: Ladder; at: LadderLayout }) {
   );
 }
 
-function Header({ x, pin, sub }: { x: number; pin: string; sub: string }) {
+/** Characters of the small caption that fit a column (11 px text, about 6.4 px a character). */
+const fits = (width: number) => Math.floor((width - 24) / 6.4);
+
+/** A caption cut to the column with an ellipsis; the whole text stays in its tooltip. */
+function clip(text: string, width: number): string {
+  const n = fits(width);
+  return text.length <= n ? text : `${text.slice(0, Math.max(1, n - 1))}…`;
+}
+
+/** The pin, what it does, and its rail by name on a line of its own (a label can be long). */
+function Header({ x, pin, sub, rail, width }: { x: number; pin: string; sub: string; rail: string; width: number }) {
   return (
     <g className="ladder-header">
-      <text x={x} y={18}>
+      <text x={x} y={16}>
         {pin}
       </text>
-      <text className="ladder-sub" x={x} y={34}>
-        {sub}
+      <text className="ladder-sub" x={x} y={31}>
+        {clip(sub, width)}
+        <title>{sub}</title>
+      </text>
+      <text className="ladder-sub" x={x} y={45} data-kind="rail-name" data-rail-name={rail}>
+        {clip(rail, width)}
+        <title>{rail}</title>
       </text>
     </g>
   );
@@ -96,7 +113,7 @@ function DriverColumn({ d, x, at }: { d: LadderDriver; x: number; at: LadderLayo
     labels.push({ y: at.y(d.low.to) + 4, text: `VOL ≤ ${volts(d.low.to)}${d.low.estimate ? ' (est.)' : ''}` });
   return (
     <g className="ladder-driver" data-pin={d.pin}>
-      <Header x={bx} pin={d.pin} sub={`drives · ${railName(d.rail)} · ${d.drive}`} />
+      <Header x={bx} pin={d.pin} sub={`drives · ${d.drive}`} rail={railName(d.rail)} width={DRIVER_WIDTH} />
       {d.high !== null && (
         <>
           <rect
@@ -169,7 +186,9 @@ function ReceiverColumn({
       <Header
         x={bx}
         pin={r.pin}
-        sub={`receives · ${railName(r.rail)} ${volts(r.railRange.min)}–${volts(r.railRange.max)}${r.schmitt ? ' · Schmitt' : ''}`}
+        sub={`receives · ${volts(r.railRange.min)}–${volts(r.railRange.max)}${r.schmitt ? ' · Schmitt' : ''}`}
+        rail={railName(r.rail)}
+        width={RECEIVER_WIDTH}
       />
       {r.vih !== null && r.vil !== null && r.vih.volts > r.vil.volts && (
         <rect

@@ -16,8 +16,7 @@ import './explain.css';
 type Column = 'net' | 'rails' | 'scenario' | 'marginHigh' | 'marginLow' | 'worst';
 
 const COLUMNS: readonly { key: Column; title: string }[] = [
-  { key: 'net', title: 'Net' },
-  { key: 'rails', title: 'Rails' },
+  { key: 'net', title: 'Net and rails' },
   { key: 'scenario', title: 'State' },
   { key: 'marginHigh', title: 'NMH' },
   { key: 'marginLow', title: 'NML' },
@@ -113,8 +112,8 @@ export function CrossingsTable() {
                   if (e.key === 'Enter') open(r);
                 }}
               >
-                <td>{r.label}</td>
                 <td data-rails={r.rails.join(' ')}>
+                  <span className="rc-crossing-net">{r.label}</span>
                   {r.rails.map((id) => (
                     <span key={id} className="rc-rail-name" title={railName(id)}>
                       {railName(id)}

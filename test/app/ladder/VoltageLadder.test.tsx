@@ -109,7 +109,7 @@ describe('VoltageLadder', () => {
       ),
     );
     expect(t).toContain('unpowered: U2.SDA (1.8 V sensor supply off)');
-    expect(t).toContain('receives · 3.3 V controller I/O');
+    expect(t).toContain('3.3 V controller I/O');
     expect(t).not.toMatch(/· 3v3\b|\(1v8 off\)/);
   });
 
