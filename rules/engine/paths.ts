@@ -417,15 +417,31 @@ function conducts(link: ShifterLink, rails: RailStates): boolean {
 /**
  * The current a low driver on this net sinks from the far side of a shifter: a FET's far pull-ups
  * (and input currents) at the driver's VOL, a diode's anode-side pull-ups with Vf = 0 (the worst
- * case). Largest over the corners.
+ * case). Where series resistors join the far side to other nets (`otherPath`), their pull-ups
+ * count too: that path solved by nodal analysis with the far side held at the driver's VOL
+ * (RDS(on) and Vf taken as 0, the worst case), each resistor at its tolerance ends. Largest over
+ * the corners.
  */
 export function shifterLoad(link: ShifterLink, driver: PinView, rails: RailStates): number {
   if (!conducts(link, rails)) return 0;
+  const far = link.otherPath;
   let worst = 0;
-  for (const c of corners([driver.rail, ...nodePullRails(link.other)], rails.ranges)) {
+  const railIds = [driver.rail, ...(far === undefined ? nodePullRails(link.other) : pathPullRails(far))];
+  for (const c of corners(railIds, rails.ranges)) {
     const vol = volAtTop(driver, c.get(driver.rail) ?? 0);
     if (vol === undefined) continue;
-    worst = Math.max(worst, pullCurrentAt(link.other, c, vol));
+    if (far === undefined) {
+      worst = Math.max(worst, pullCurrentAt(link.other, c, vol));
+      continue;
+    }
+    let iil = 0;
+    for (const p of link.other.pins) iil += p.params.iil ?? 0;
+    for (const ohms of casesOf(far)) {
+      const fixed: (number | undefined)[] = far.nodes.map(() => undefined);
+      fixed[far.self] = vol;
+      const net = network(far, c, ohms, fixed, 'low');
+      worst = Math.max(worst, iil - currentOut(net, solve(net), far.self));
+    }
   }
   return worst;
 }

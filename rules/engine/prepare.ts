@@ -188,7 +188,17 @@ function prepareLinkedNet(ctx: PrepareContext, net: Net): NetView {
     }
     const link = shifters.find((s) => s.other === node);
     if (link !== undefined)
-      low += shifterLoad({ part: link.part, pin: OTHER_PIN[link.pin]!, other: link.self, self: link.other }, d, rails);
+      low += shifterLoad(
+        {
+          part: link.part,
+          pin: OTHER_PIN[link.pin]!,
+          other: link.self,
+          self: link.other,
+          ...(path === undefined ? {} : { otherPath: path }),
+        },
+        d,
+        rails,
+      );
     return { high, low };
   };
 

@@ -59,6 +59,29 @@ function sensorBehindResistor(rs: number, highPull = 1000) {
 const SENSOR_NODE = (1.89 / 9900 + 0.4 / 99 + (3.465 - 0.4) / 990) / (1 / 9900 + 1 / 99);
 const SENSOR_LOAD = (SENSOR_NODE - 0.4) / 99;
 
+/**
+ * The other way round: the sensor straight on the shifter's low side (SDA_L, RL 10 kΩ ±1 % to
+ * 1.8 V), and on the high side a series resistor RS before the controller's net SDA_Y, which holds
+ * the 1 kΩ ±1 % pull-up to 3.3 V.
+ */
+function resistorBeyondShifter(rs: number) {
+  const d = fetBus({ lowPull: 10e3, highPull: 1000, tolerance: 0.01, sensorRated: 3e-3 });
+  return {
+    ...d,
+    discretes: [...(d.discretes ?? []), resistor('RS', rs, { tolerance: 0.01 })],
+    nets: [
+      net('SDA_L', ['U2.SDA', 'Q1.S', 'RL.1']),
+      net('SDA_H', ['Q1.D', 'RS.1']),
+      net('SDA_Y', ['RS.2', 'U1.SDA', 'RH.1']),
+    ],
+  };
+}
+
+// The sensor at VOL 0.4 V holds SDA_H there (RDS(on) taken as 0, the worst case): it sinks
+// (1.89 − 0.4)/9900 through RL and (3.465 − 0.4)/(990 + 21.78) through RH and RS (22 Ω at −1 %),
+// 0.15051 + 3.02932 = 3.1798 mA, beyond its 3 mA. Before: only RL's 0.15051 mA, a pass.
+const BEYOND_LOAD = (1.89 - 0.4) / 9900 + (3.465 - 0.4) / (990 + 21.78);
+
 ruleTester(rule, {
   valid: [
     {
@@ -107,6 +130,19 @@ ruleTester(rule, {
     },
   ],
   invalid: [
+    {
+      name: "a shifter's far side reaching a pull-up through a series resistor loads the driver",
+      design: resistorBeyondShifter(22),
+      findings: [
+        {
+          messageId: 'lowOverload',
+          severity: 'error',
+          id: 'drive-load:SDA_L:all-on:U2.SDA',
+          pins: ['U2.SDA'],
+          values: { driver: 'U2.SDA', loadHigh: null, loadLow: BEYOND_LOAD, ratedLow: 3e-3 },
+        },
+      ],
+    },
     {
       name: "a driver beyond a series resistor sinks the shifter's far pull-up too",
       design: sensorBehindResistor(100),
