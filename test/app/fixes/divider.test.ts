@@ -215,6 +215,9 @@ describe('divider fix', () => {
     expect(fix).toBeDefined();
     const best = dividerCandidates(circuit())[0]!;
     expect(fix.figures).toEqual(dividerRows(best, 'U2.A'));
+    expect(fix.sentence).toContain(
+      "the largest pair (1 kΩ to 100 kΩ in all) whose edge is within the default 100 ns, drawing at most half the driver's rating",
+    );
     // The chosen pair's current among the figures: 5.25/(7425 + 9900) = 303 µA of the 2 mA rating.
     expect(fix.figures![2]).toEqual({
       label: 'Driver current, VDD,drv,max/(R1 + R2) at −1 % (at most 50 % of its rated 2 mA: 1 mA)',
@@ -237,6 +240,8 @@ describe('divider fix', () => {
     const fix = dividerOf(direct({ maxRiseTime: 20e-9 }))!;
     const edge = fix.figures!.at(-1)!;
     expect(edge.label).toContain('(at most 20 ns)');
+    // 20 ns is out of reach within half the 2 mA rating (see the search above): the sentence says so.
+    expect(fix.sentence).toContain("whose edge is within the net's maxRiseTime, drawing within the driver's rating");
     applyAndUndo(direct({ maxRiseTime: 20e-9 }), FINDING, 'divider', ({ design: d }) => {
       expect(d.nets.find((n) => n.id === 'TX_3v3')?.maxRiseTime).toBe(20e-9);
     });

@@ -308,6 +308,18 @@ export function dividerRows(f: DividerFigures, pin: string, maxRiseTime?: number
   return rows;
 }
 
+/** Why this pair, in the words of the header's rule (which of its branches chose it). */
+function choiceWords(f: DividerFigures, c: DividerCircuit): string {
+  const load = lightLoad(f)
+    ? "at most half the driver's rating"
+    : "within the driver's rating (no pair within half meets the edge)";
+  if (exceeds(f.edge, edgeBudget(c)))
+    return `no pair meets the default ${formatQuantity(DIVIDER_EDGE_BUDGET, 's')} edge, so the fastest whose worst margin is within 90 % of the best, drawing ${load}`;
+  const budget =
+    c.maxRiseTime === undefined ? `the default ${formatQuantity(DIVIDER_EDGE_BUDGET, 's')}` : "the net's maxRiseTime";
+  return `the largest pair (1 kΩ to 100 kΩ in all) whose edge is within ${budget}, drawing ${load}, with its worst margin within 90 % of the best`;
+}
+
 /** overvoltage on a net of one push-pull driver and inputs: a divider into the lower rail. */
 export function dividerFix(
   design: Design,
@@ -352,9 +364,8 @@ export function dividerFix(
       title: `Insert a divider before ${finding.values.pin}`,
       sentence:
         `Moves ${plan.moved.join(', ')} to a net ${plan.rxNet} fed from ${plan.source} through ${plan.series} ${OHM(f.r1)} ` +
-        `with ${plan.shunt} ${OHM(f.r2)} to ground (E24, ±${f.tolerance * 100} %): the largest pair, 1 kΩ to 100 kΩ in all, ` +
-        `whose edge is within its budget, whose current is at most half the driver's rating, whose worst margin is ` +
-        `within 90 % of the best and whose highest output stays within ${finding.values.pin}'s limit.`,
+        `with ${plan.shunt} ${OHM(f.r2)} to ground (E24, ±${f.tolerance * 100} %): ${choiceWords(f, circuit)}, ` +
+        `whose highest output stays within ${finding.values.pin}'s limit.`,
       figures: dividerRows(f, finding.values.pin, net.maxRiseTime),
       apply: (draft) => applySplit(draft, plan, values),
     };
