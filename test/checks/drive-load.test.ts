@@ -1,6 +1,18 @@
 import rule from '../../rules/checks/drive-load.ts';
 import { ruleTester } from '../support/ruleTester.ts';
-import { design, input, link, net, output, part, rail, rail5v0, resistor, scenario } from '../support/build.ts';
+import {
+  design,
+  diodeShifter,
+  input,
+  link,
+  net,
+  output,
+  part,
+  rail,
+  rail5v0,
+  resistor,
+  scenario,
+} from '../support/build.ts';
 import { fetBus } from '../support/paths.ts';
 
 // Rail ends: 5 V ± 5 % = 4.75–5.25 V; 3.3 V ± 5 % = 3.135–3.465 V.
@@ -50,6 +62,25 @@ function sensorBehindResistor(rs: number, highPull = 1000) {
   };
 }
 
+/**
+ * The same chain with a Schottky diode (Vf ≤ 0.35 V, leakage ≤ 1 µA: invented) for the FET: with its
+ * cathode on SDA_L it passes the low from there, so the sensor sinks RH's current through it (Vf taken
+ * as 0, the worst case); turned round (anode on SDA_L) it blocks that current.
+ */
+function sensorBehindResistorDiode(cathodeOnPath: boolean) {
+  const d = sensorBehindResistor(100);
+  const [near, far] = cathodeOnPath ? ['Q1.K', 'Q1.A'] : ['Q1.A', 'Q1.K'];
+  return {
+    ...d,
+    discretes: [...(d.discretes ?? []).filter((x) => x.id !== 'Q1'), diodeShifter('Q1', 0.35, 1e-6)],
+    nets: [
+      net('SDA_X', ['U2.SDA', 'RS.1']),
+      net('SDA_L', ['RS.2', near, 'RL.1']),
+      net('SDA_H', ['U1.SDA', far, 'RH.1']),
+    ],
+  };
+}
+
 // Worst case for the sensor's low load (the driver at its VOL 0.4 V, the pull rails at their highest,
 // 1.89 V and 3.465 V, each pull and RS at its low end): the far side's pull-up current through the FET,
 // (3.465 − 0.4)/990, is fed into SDA_L, which RL (9900 Ω to 1.89 V) and RS (99 Ω to the driver's
@@ -84,6 +115,11 @@ const BEYOND_LOAD = (1.89 - 0.4) / 9900 + (3.465 - 0.4) / (990 + 21.78);
 
 ruleTester(rule, {
   valid: [
+    {
+      // The diode turned round blocks the far pull-up: (1.89 − 0.4)/(9900 + 99) = 0.149 mA only.
+      name: 'a diode beyond a series resistor with its anode towards the driver adds nothing',
+      design: sensorBehindResistorDiode(false),
+    },
     {
       // The same chain with a 4.7 kΩ far pull-up: 3.065/4653 = 0.659 mA through the FET, about
       // 0.78 mA in all, well within 3 mA.
@@ -130,6 +166,19 @@ ruleTester(rule, {
     },
   ],
   invalid: [
+    {
+      // The numbers of the FET case below: SDA_L at 0.71822 V, 3.2143 mA into the sensor.
+      name: "a driver beyond a series resistor sinks a diode's anode-side pull-up through its cathode",
+      design: sensorBehindResistorDiode(true),
+      findings: [
+        {
+          messageId: 'lowOverload',
+          severity: 'error',
+          id: 'drive-load:SDA_X:all-on:U2.SDA',
+          values: { loadLow: SENSOR_LOAD, ratedLow: 3e-3 },
+        },
+      ],
+    },
     {
       name: "a shifter's far side reaching a pull-up through a series resistor loads the driver",
       design: resistorBeyondShifter(22),
