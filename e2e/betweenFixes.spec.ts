@@ -2,7 +2,7 @@
  * The parts between chips placed, wired and fixed in the browser, on a bench of our own
  * (crossingBench.ts): a FET shifter and a diode shifter from the palette wired between spare
  * pins (the check then reports pairs across them), the FET-shifter fix on the 3.3 V + 1.8 V
- * open-drain line, and the series-resistor fix with its figures shown before it is applied.
+ * open-drain line, and the series-resistor and divider fixes with their figures shown before they are applied.
  */
 import { expect, type Page, test } from '@playwright/test';
 import { CROSSING_BENCH } from './crossingBench.ts';
@@ -86,6 +86,34 @@ test('the series-resistor fix shows its figures, inserts the resistor and undoes
   await expect(row(page, 'overvoltage:TX:all-on:U4.A')).toHaveCount(0);
   await expect(page.getByTestId('value-R1')).toHaveText('2k4 ±5 %');
   await expect(page.locator('.rc-wire[data-net="TX_3v3"]').first()).toBeVisible();
+  await page.keyboard.press('Control+z');
+  await expect(row(page, 'overvoltage:TX:all-on:U4.A')).toHaveCount(1);
+  await expect(page.getByTestId('value-R1')).toHaveCount(0);
+  expect(problems).toEqual([]);
+});
+
+test('the divider fix shows the pair, its current against the rating and its edge, applies and undoes', async ({
+  page,
+}) => {
+  const problems = watch(page);
+  await openBench(page);
+  await page.getByTestId('tab-findings').click();
+  const over = row(page, 'overvoltage:TX:all-on:U4.A');
+  await over.getByTestId('fix-open').click();
+  const fix = over.locator('[data-fix="divider"]');
+  // The rule of divider.ts, worked by hand for the 74HC driver (4 mA rating) into the 3.3 V input at
+  // 10 pF: 7.5 kΩ / 11 kΩ draws 5.25/(7425 + 10890) = 287 µA (at most half of 4 mA); its edge,
+  // ln 9 · (7575‖11110 = 4504 Ω) · 10 pF = 99.0 ns, meets the default 100 ns (the unit table's rule).
+  const figures = fix.getByTestId('fix-figures');
+  await expect(figures).toContainText('7.5 kΩ / 11 kΩ');
+  await expect(figures).toContainText('287 µA');
+  await expect(figures).toContainText('at most 50 % of its rated 4 mA');
+  await expect(figures).toContainText('99 ns');
+  await figures.screenshot({ path: test.info().outputPath('divider-figures.png') });
+  await fix.getByTestId('fix-apply').click();
+  await expect(row(page, 'overvoltage:TX:all-on:U4.A')).toHaveCount(0);
+  await expect(page.getByTestId('value-R1')).toHaveText('7k5 ±1 %');
+  await expect(page.getByTestId('value-R2')).toHaveText('11k ±1 %');
   await page.keyboard.press('Control+z');
   await expect(row(page, 'overvoltage:TX:all-on:U4.A')).toHaveCount(1);
   await expect(page.getByTestId('value-R1')).toHaveCount(0);

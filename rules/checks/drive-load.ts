@@ -52,7 +52,9 @@ export default defineRule({
     severity: { error: '' },
     explanation:
       'Every other pin on a net draws its input current from the driver (iih when high, iil when low), ' +
-      "and pull resistors add what flows through them. A driver's output levels are guaranteed only up " +
+      'and pull resistors add what flows through them, also those reached through series resistors and ' +
+      "shifters (a shifter's far-side pull-ups, with RDS(on) and Vf taken as 0, the worst case). A driver's " +
+      'output levels are guaranteed only up ' +
       'to the largest test current of its voh and vol rows, and it must never carry more than its ioMax. ' +
       'A load beyond the test currents is DC fan-out exceeded: the levels the other rules use become ' +
       'estimates; a load beyond ioMax overloads the output itself. ' +

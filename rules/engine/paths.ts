@@ -180,8 +180,39 @@ export function linksOf(
   return { path, shifters };
 }
 
+/** A shifter on a node of a resistor path (`node`, its index): its far side hangs off the path. */
+export interface BeyondShifter {
+  readonly node: number;
+  readonly link: ShifterLink;
+}
+
+/**
+ * The shifters on every node of a path, each with the node it sits on: a driver on another node
+ * of the path reaches them through the series resistors and sinks their far side's pull-ups when
+ * low. A shifter whose other net is on the path itself is left out (no far side).
+ */
+export function shiftersBeyond(path: ResistorPath, src: PathSource): BeyondShifter[] {
+  const out: BeyondShifter[] = [];
+  const onPath = new Set(path.nodes.map((n) => n.netId));
+  path.nodes.forEach((node, k) => {
+    for (const id of [...(src.linksOfNet.get(node.netId) ?? [])].sort()) {
+      const d = src.discretes.get(id);
+      if (d === undefined || d.kind === 'resistor') continue;
+      const x = across(d, node.netId, src);
+      if (x === undefined || !src.nets.has(x.other) || onPath.has(x.other)) continue;
+      const { position: _p, label: _l, ...core } = d;
+      out.push({ node: k, link: { part: core, pin: x.pin, other: nodeOf(src.nets.get(x.other)!, src), self: node } });
+    }
+  });
+  return out;
+}
+
 /** Rails a path and its shifters depend on: pins' rails, pulls' rails, FET gates. */
-export function linkedRails(path: ResistorPath | undefined, shifters: readonly ShifterLink[]): string[] {
+export function linkedRails(
+  path: ResistorPath | undefined,
+  shifters: readonly ShifterLink[],
+  beyond: readonly BeyondShifter[] = [],
+): string[] {
   const ids: string[] = [];
   const addNode = (n: PathNode) => {
     for (const p of n.pins) if (!ids.includes(p.rail)) ids.push(p.rail);
@@ -192,6 +223,10 @@ export function linkedRails(path: ResistorPath | undefined, shifters: readonly S
     addNode(s.other);
     for (const n of s.otherPath?.nodes ?? []) addNode(n);
     if (s.part.kind === 'fet-shifter' && !ids.includes(s.part.gate)) ids.push(s.part.gate);
+  }
+  for (const { link } of beyond) {
+    addNode(link.other);
+    if (link.part.kind === 'fet-shifter' && !ids.includes(link.part.gate)) ids.push(link.part.gate);
   }
   return ids;
 }
@@ -308,12 +343,24 @@ function volAtTop(d: PinView, vdd: number): number | undefined {
  * The current a driver on the path's own node delivers into the series resistors when high (its
  * output at its rail's value) and takes from them when low (at its largest `vol` test point),
  * the largest over corners and tolerance ends; bounds, as the catalogue's load currents are.
+ * When low it also sinks the far side of every shifter on another node of the path (`beyond`):
+ * that side's pull-up current, taken at the driver's VOL (each pull at its low end, its rail at
+ * the corner; the node it feeds sits at VOL or above, so this is a bound), fed into the shifter's
+ * node, through the series resistors at their tolerance ends, into the driver; a FET's only when
+ * its gate rail is on, a diode's only into its cathode (Vf = 0, the worst case), as shifterLoad.
  */
-export function pathLoad(path: ResistorPath, driver: PinView, rails: RailStates): DriverLoad {
+export function pathLoad(
+  path: ResistorPath,
+  driver: PinView,
+  rails: RailStates,
+  beyond: readonly BeyondShifter[] = [],
+): DriverLoad {
   const d = path.self;
   let high = 0;
   let low = 0;
+  const far = beyond.filter((b) => b.node !== d && conducts(b.link, rails));
   const railIds = [driver.rail, ...pathPullRails(path)];
+  for (const b of far) for (const id of nodePullRails(b.link.other)) if (!railIds.includes(id)) railIds.push(id);
   for (const c of corners(railIds, rails.ranges)) {
     const vdd = c.get(driver.rail) ?? 0;
     for (const ohms of casesOf(path)) {
@@ -329,7 +376,8 @@ export function pathLoad(path: ResistorPath, driver: PinView, rails: RailStates)
       const vol = volAtTop(driver, vdd);
       if (vol !== undefined) {
         fixed[d] = vol;
-        const net = network(path, c, ohms, fixed, 'low', driver);
+        let net = network(path, c, ohms, fixed, 'low', driver);
+        for (const b of far) net = withInjected(net, b.node, pullCurrentAt(b.link.other, c, vol));
         low = Math.max(low, -currentOut(net, solve(net), d, () => true));
       }
     }
@@ -360,19 +408,40 @@ export function fetOn(part: FetShifter, rails: RailStates): boolean {
   return !rails.off.has(part.gate) && rails.ranges.has(part.gate);
 }
 
+/** Whether a shifter passes a low from the side of `link.pin` (a FET with its gate on, a diode into its cathode). */
+function conducts(link: ShifterLink, rails: RailStates): boolean {
+  if (link.part.kind === 'fet-shifter') return fetOn(link.part, rails);
+  return link.pin === 'K';
+}
+
 /**
  * The current a low driver on this net sinks from the far side of a shifter: a FET's far pull-ups
  * (and input currents) at the driver's VOL, a diode's anode-side pull-ups with Vf = 0 (the worst
- * case). Largest over the corners.
+ * case). Where series resistors join the far side to other nets (`otherPath`), their pull-ups
+ * count too: that path solved by nodal analysis with the far side held at the driver's VOL
+ * (RDS(on) and Vf taken as 0, the worst case), each resistor at its tolerance ends. Largest over
+ * the corners.
  */
 export function shifterLoad(link: ShifterLink, driver: PinView, rails: RailStates): number {
-  if (link.part.kind === 'fet-shifter' && !fetOn(link.part, rails)) return 0;
-  if (link.part.kind === 'diode-shifter' && link.pin !== 'K') return 0;
+  if (!conducts(link, rails)) return 0;
+  const far = link.otherPath;
   let worst = 0;
-  for (const c of corners([driver.rail, ...nodePullRails(link.other)], rails.ranges)) {
+  const railIds = [driver.rail, ...(far === undefined ? nodePullRails(link.other) : pathPullRails(far))];
+  for (const c of corners(railIds, rails.ranges)) {
     const vol = volAtTop(driver, c.get(driver.rail) ?? 0);
     if (vol === undefined) continue;
-    worst = Math.max(worst, pullCurrentAt(link.other, c, vol));
+    if (far === undefined) {
+      worst = Math.max(worst, pullCurrentAt(link.other, c, vol));
+      continue;
+    }
+    let iil = 0;
+    for (const p of link.other.pins) iil += p.params.iil ?? 0;
+    for (const ohms of casesOf(far)) {
+      const fixed: (number | undefined)[] = far.nodes.map(() => undefined);
+      fixed[far.self] = vol;
+      const net = network(far, c, ohms, fixed, 'low');
+      worst = Math.max(worst, iil - currentOut(net, solve(net), far.self));
+    }
   }
   return worst;
 }

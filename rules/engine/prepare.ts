@@ -16,6 +16,7 @@ import {
   unjudgedChains,
   remotePairs,
   shifterLoad,
+  shiftersBeyond,
   type PathSource,
 } from './paths.ts';
 import { driverLoad } from './netMath.ts';
@@ -162,7 +163,8 @@ function prepareLinkedNet(ctx: PrepareContext, net: Net): NetView {
   const ids: string[] = [];
   for (const p of pins) if (!ids.includes(p.rail)) ids.push(p.rail);
   for (const p of pulls) if (p.to !== GROUND && !ids.includes(p.to)) ids.push(p.to);
-  for (const id of linkedRails(path, shifters)) if (!ids.includes(id)) ids.push(id);
+  const beyond = path === undefined ? NONE : shiftersBeyond(path, src);
+  for (const id of linkedRails(path, shifters, beyond)) if (!ids.includes(id)) ids.push(id);
   const chains = receivers.length === 0 ? NONE : unjudgedChains(net, src, ctx.rails);
   for (const c of chains) for (const id of c.rails) if (!ids.includes(id)) ids.push(id);
   const rails = railsOf(ctx.rails, ids);
@@ -170,7 +172,7 @@ function prepareLinkedNet(ctx: PrepareContext, net: Net): NetView {
   const loads = new Map<string, DriverLoad>();
   for (const d of drivers) {
     const own = driverLoad(d, pins, pulls, rails);
-    const through = path === undefined ? { high: 0, low: 0 } : pathLoad(path, d, rails);
+    const through = path === undefined ? { high: 0, low: 0 } : pathLoad(path, d, rails, beyond);
     let low = own.low + through.low;
     for (const s of shifters) low += shifterLoad(s, d, rails);
     loads.set(d.key, { high: own.high + through.high, low });
@@ -183,13 +185,23 @@ function prepareLinkedNet(ctx: PrepareContext, net: Net): NetView {
     let high = own.high;
     let low = own.low;
     if (path?.nodes.includes(node)) {
-      const through = pathLoad({ ...path, self: path.nodes.indexOf(node) }, d, rails);
+      const through = pathLoad({ ...path, self: path.nodes.indexOf(node) }, d, rails, beyond);
       high += through.high;
       low += through.low;
     }
     const link = shifters.find((s) => s.other === node);
     if (link !== undefined)
-      low += shifterLoad({ part: link.part, pin: OTHER_PIN[link.pin]!, other: link.self, self: link.other }, d, rails);
+      low += shifterLoad(
+        {
+          part: link.part,
+          pin: OTHER_PIN[link.pin]!,
+          other: link.self,
+          self: link.other,
+          ...(path === undefined ? {} : { otherPath: path }),
+        },
+        d,
+        rails,
+      );
     return { high, low };
   };
 

@@ -12,6 +12,8 @@ import {
   dividerFigures,
   dividerHolds,
   dividerRows,
+  DIVIDER_EDGE_BUDGET,
+  lightLoad,
   worstMargin,
 } from '../../../app/store/commands/fixes/divider.ts';
 import { fixesFor } from '../../../app/store/commands/fixes/index.ts';
@@ -76,6 +78,10 @@ describe('divider figures', () => {
     ['low level', f.low!.v, 0.06707, 4],
     ['low margin', f.low!.margin, 0.73293, 4],
     ['driver current', f.load * 1e3, 0.9642, 4],
+    // The over-voltage headroom, the third margin of the choice: 3.635 − 3.175 = 0.4599 V.
+    ['worst of the three margins', worstMargin(f), 0.4599, 4],
+    // cmos5's rated current: its one voh row, 2 mA.
+    ['rated current', f.rated! * 1e3, 2, 9],
   ])('%s', (_name, got, want, digits) => {
     expect(got).toBeCloseTo(want, digits);
   });
@@ -98,6 +104,7 @@ describe('divider figures', () => {
     expect(dividerRows(f, 'U2.A').map((g) => g.value)).toEqual([
       '2.2 kΩ / 3.3 kΩ',
       '0.5952 … 0.6048',
+      '964 µA',
       '0.761 V',
       '0.7329 V',
       '3.175 V',
@@ -125,32 +132,80 @@ describe('divider figures', () => {
 });
 
 describe('divider search', () => {
-  it('takes the pair with the best worst margin within 1 kΩ … 100 kΩ, no worse than the reference pair', () => {
-    const all = dividerCandidates(circuit());
-    const best = all[0]!;
-    expect(best.r1 + best.r2).toBeGreaterThanOrEqual(1e3);
-    expect(best.r1 + best.r2).toBeLessThanOrEqual(100e3);
-    expect(worstMargin(best)).toBeGreaterThanOrEqual(worstMargin(dividerFigures(circuit(), 2200, 3300)));
-    for (const g of all) expect(worstMargin(g)).toBeLessThanOrEqual(worstMargin(best));
-    // The high and low margins balance near k = (0.8 + 2.0)/(4.65 + 0.1) = 0.589 (ignoring the µA terms).
-    expect(best.kMin).toBeGreaterThan(0.57);
-    expect(best.kMax).toBeLessThan(0.61);
+  // The rule (divider.ts header): of the pairs that hold, draw at most half the driver's rated
+  // current (cmos5: 2 mA, so 1 mA: R1 + R2 ≥ 5.25 V/1 mA/0.99 = 5303 Ω) and whose edge meets the
+  // budget (no maxRiseTime: 100 ns, so R1‖R2 at +1 % ≤ 100 ns/(ln 9 · 10 pF) = 4551 Ω), those whose
+  // worst of three margins (high, low, over-voltage headroom) is at least 90 % of the best; of
+  // those the largest R1 + R2.
+  const all = dividerCandidates(circuit());
+  const chosen = all[0]!;
+
+  it('lands on 7.5 kΩ / 10 kΩ, worked by hand', () => {
+    // 7.5 k/10 k at ±1 %: k_min = 9900/(7575 + 9900) = 0.56652, k_max = 10100/(7425 + 10100) = 0.57632;
+    // headroom 3.635 − 5.25 · 0.57632 = 0.6093 V; high 4.65 · 0.56652 − (7575‖9900 = 4291.4 Ω) · 5 µA
+    // = 2.6129 V, margin 0.6129 V; low 0.1 · 0.57632 + (7425‖10100 = 4279.2 Ω) · 5 µA = 0.07903 V,
+    // margin 0.7210 V; edge ln 9 · (7575‖10100 = 4328.6 Ω) · 10 pF = 95.11 ns; current
+    // 5.25/(7425 + 9900) = 0.30303 mA.
+    expect([chosen.r1, chosen.r2]).toEqual([7500, 10000]);
+    expect(chosen.kMin).toBeCloseTo(0.56652, 5);
+    expect(chosen.kMax).toBeCloseTo(0.57632, 5);
+    expect(chosen.limit - chosen.peak).toBeCloseTo(0.6093, 4);
+    expect(chosen.high!.margin).toBeCloseTo(0.6129, 4);
+    expect(chosen.low!.margin).toBeCloseTo(0.721, 4);
+    expect(worstMargin(chosen)).toBeCloseTo(0.6093, 4);
+    expect(chosen.edge * 1e9).toBeCloseTo(95.11, 2);
+    expect(chosen.load * 1e3).toBeCloseTo(0.30303, 5);
   });
 
-  it('lands on 1.2 kΩ / 1.8 kΩ, worked by hand', () => {
-    // The margins balance at k ≈ 0.589; of the E24 ratios near it 2 : 3 gives the best worst margin
-    // (0.7359 V on the low side; 3.0 k/4.3 k gives only 0.717 V high, 2.7 k/3.9 k 0.726 V). Among the
-    // 2 : 3 pairs the µA input currents favour the smallest whose current the driver's 2 mA row still
-    // covers: 1.0 k/1.5 k draws 5.25/2475 = 2.12 mA (beyond it), 1.2 k/1.8 k 5.25/2970 = 1.77 mA.
-    const best = dividerCandidates(circuit())[0]!;
-    expect([best.r1, best.r2]).toEqual([1200, 1800]);
-    expect(best.load).toBeCloseTo(1.768e-3, 6);
+  it.each([
+    // The best worst margin is the 3 : 4 ratio's headroom, 0.6093 V (2.7 k/3.6 k and 7.5 k/10 k alike),
+    // so the window is 0.9 · 0.6093 = 0.5484 V. The neighbours of 7.5 k/10 k, by hand:
+    // 8.2 k/11 k: R1‖R2 at +1 % = 8282 · 11110/19392 = 4744.9 Ω → 104.3 ns, beyond 100 ns.
+    ['8.2 kΩ / 11 kΩ: edge beyond the budget', 8200, 11000, 'edge'],
+    // 7.5 k/11 k: k_max = 11110/(7425 + 11110) = 0.59940, headroom 3.635 − 3.1469 = 0.4881 V < 0.5484 V.
+    ['7.5 kΩ / 11 kΩ: headroom outside the window', 7500, 11000, 'margin'],
+    // 8.2 k/10 k: k_min = 9900/(8282 + 9900) = 0.54449, high 4.65 · 0.54449 − (8282‖9900 = 4509.5 Ω) · 5 µA
+    // = 2.5093 V, margin 0.5093 V < 0.5484 V.
+    ['8.2 kΩ / 10 kΩ: high margin outside the window', 8200, 10000, 'margin'],
+    // 1.2 k/1.8 k (the old choice): 5.25/(1188 + 1782) = 1.768 mA, beyond half the 2 mA rating.
+    ['1.2 kΩ / 1.8 kΩ: draws more than half the rating', 1200, 1800, 'load'],
+  ])('passes over %s', (_name, r1, r2, why) => {
+    const g = dividerFigures(circuit(), r1, r2);
+    if (why === 'edge') expect(g.edge).toBeGreaterThan(DIVIDER_EDGE_BUDGET);
+    if (why === 'margin') expect(worstMargin(g)).toBeLessThan(0.9 * worstMargin(chosen));
+    if (why === 'load') expect(lightLoad(g)).toBe(false);
+    expect(all.indexOf(all.find((x) => x.r1 === r1 && x.r2 === r2)!)).not.toBe(0);
+  });
+
+  it('no larger pair meets the rule: every one either draws too much, is too slow or falls outside the window', () => {
+    const best = Math.max(...all.filter((g) => lightLoad(g) && g.edge <= DIVIDER_EDGE_BUDGET).map(worstMargin));
+    expect(best).toBeCloseTo(0.6093, 4);
+    for (const g of all) {
+      if (g.r1 + g.r2 <= chosen.r1 + chosen.r2) continue;
+      const fits = lightLoad(g) && g.edge <= DIVIDER_EDGE_BUDGET && worstMargin(g) >= 0.9 * best;
+      expect(fits, `${g.r1}/${g.r2}`).toBe(false);
+    }
   });
 
   it('keeps the edge within maxRiseTime: 20 ns at 10 pF allows R1‖R2 ≤ 20 ns/(ln 9 · 10 pF) = 910 Ω', () => {
+    // 20 ns needs R1 + R2 ≈ R1‖R2/(k(1 − k)) ≈ 3.7 kΩ, more than half the 2 mA rating (5.3 kΩ or more):
+    // the half is relaxed to the whole rating, the maxRiseTime never.
     const best = dividerCandidates(circuit({ maxRiseTime: 20e-9 }))[0]!;
     expect(best.edge).toBeLessThanOrEqual(20e-9);
     expect(best.rth).toBeLessThanOrEqual(910.3);
+    expect(lightLoad(best)).toBe(false);
+    expect(best.load).toBeLessThanOrEqual(2e-3);
+  });
+
+  it('without a pair within the default 100 ns (200 pF), takes the fastest edge near the best margin', () => {
+    // 100 ns at 200 pF needs R1‖R2 ≤ 228 Ω, R1 + R2 < 1 kΩ: outside the band, so the default is dropped.
+    const heavy = dividerCandidates(circuit({ capacitance: 200e-12 }));
+    const best = heavy[0]!;
+    expect(best.edge).toBeGreaterThan(DIVIDER_EDGE_BUDGET);
+    const top = Math.max(...heavy.map(worstMargin));
+    expect(worstMargin(best)).toBeGreaterThanOrEqual(0.9 * top);
+    for (const g of heavy) if (worstMargin(g) >= 0.9 * top) expect(g.edge).toBeGreaterThanOrEqual(best.edge);
+    expect(dividerRows(best, 'U2.A').at(-1)!.label).toContain('no pair meets the default 100 ns');
   });
 });
 
@@ -160,6 +215,14 @@ describe('divider fix', () => {
     expect(fix).toBeDefined();
     const best = dividerCandidates(circuit())[0]!;
     expect(fix.figures).toEqual(dividerRows(best, 'U2.A'));
+    expect(fix.sentence).toContain(
+      "the largest pair (1 kΩ to 100 kΩ in all) whose edge is within the default 100 ns, drawing at most half the driver's rating",
+    );
+    // The chosen pair's current among the figures: 5.25/(7425 + 9900) = 303 µA of the 2 mA rating.
+    expect(fix.figures![2]).toEqual({
+      label: 'Driver current, VDD,drv,max/(R1 + R2) at −1 % (at most 50 % of its rated 2 mA: 1 mA)',
+      value: '303 µA',
+    });
     applyAndUndo(direct(), FINDING, 'divider', ({ design: d, after }) => {
       expect(d.nets.map((n) => [n.id, n.pins])).toEqual([
         ['TX', ['U1.Y', 'R1.1']],
@@ -177,6 +240,8 @@ describe('divider fix', () => {
     const fix = dividerOf(direct({ maxRiseTime: 20e-9 }))!;
     const edge = fix.figures!.at(-1)!;
     expect(edge.label).toContain('(at most 20 ns)');
+    // 20 ns is out of reach within half the 2 mA rating (see the search above): the sentence says so.
+    expect(fix.sentence).toContain("whose edge is within the net's maxRiseTime, drawing within the driver's rating");
     applyAndUndo(direct({ maxRiseTime: 20e-9 }), FINDING, 'divider', ({ design: d }) => {
       expect(d.nets.find((n) => n.id === 'TX_3v3')?.maxRiseTime).toBe(20e-9);
     });

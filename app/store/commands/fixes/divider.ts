@@ -10,23 +10,44 @@
  *   over-voltage at VDD,drv,max · k_max against the inputs' lowest viMax
  *   10–90 % edge = ln 9 · (R1‖R2) · C, C the new net's wiring and input capacitance
  *
- * the edge's R1‖R2 at both high ends. Values from E24 at ±1 % (IEC 60063); the pair is searched
- * with each value from 100 Ω to 100 kΩ and R1 + R2 from 1 kΩ (the driver sources at most a few
- * mA) to 100 kΩ (input leakage and the edge stay small): the pair with the best worst margin
- * (the smaller of the high and low margins) that passes all of the above, ties to the faster edge.
- * Between pairs of one ratio only the inputs' µA currents differ, so the search lands on the
- * smallest such pair whose current the driver's rows still guarantee.
- * The driver's VOH is read at the current the divider draws; a pair that draws more than the
- * driver's largest test current is not taken (its level would be an estimate). The chosen pair
- * is then checked by the engine on a trial copy: a pair whose circuit brings a new error is passed
- * over for the next.
+ * the edge's R1‖R2 at both high ends. Values from E24 at ±1 % (IEC 60063), each from 100 Ω to
+ * 100 kΩ, R1 + R2 from 1 kΩ to 100 kΩ (input leakage and the edge stay small).
+ *
+ * The choice, as an engineer would make it: a divider that loads the driver lightly, with an edge
+ * fast enough and margins near the best the E24 ratios give. A pair is eligible when
+ *
+ *   - its worst high and low margins are ≥ 0 and VDD,drv,max · k_max stays within the inputs' limit;
+ *   - the driver's VOH is guaranteed at the current the divider draws, VDD,drv,max/(R1 + R2) at
+ *     the low ends, and that current is at most DIVIDER_LOAD_SHARE (half) of the driver's rated
+ *     current, the largest `voh` test current guaranteed at its rail's lowest (our rule: the rest
+ *     is left for the edge's charging current and the guarantee's corner);
+ *   - its 10–90 % edge is within the budget: the net's maxRiseTime where set, otherwise
+ *     DIVIDER_EDGE_BUDGET (100 ns: a fifth of the 500 ns input rise time a 74HC-class input accepts
+ *     at 4.5 V, JESD7's operating conditions from memory, and a tenth of a 1 MHz signal's period);
+ *     and for each non-Schmitt input with a maxInputRamp, edge/(0.8 · VDD,drv,min · k_min) within it
+ *     (the ramp edge-rate judges).
+ *
+ * Where no pair within the budget draws as little as half the rating (a tight maxRiseTime), the
+ * half is relaxed to the whole rating (the driver's guarantee still holds); the net's maxRiseTime
+ * and the inputs' maxInputRamp are never relaxed.
+ *
+ * A pair's worst margin is the smallest of three: the high margin, the low margin and the
+ * over-voltage headroom (the inputs' limit − VDD,drv,max · k_max), so that the ratio stays near
+ * the one that balances them rather than drifting to either end of what holds. Of the eligible
+ * pairs, those whose worst margin is at least DIVIDER_MARGIN_SHARE (90 %) of the best eligible
+ * worst margin are preferred, and among them the largest R1 + R2 (the lightest load);
+ * ties go to the better worst margin, then the faster edge. Where the net sets no maxRiseTime and no
+ * pair meets the 100 ns default (a heavily loaded net), the default is dropped: near the best worst
+ * margin, the fastest edge comes first instead of the largest R1 + R2.
+ * The chosen pair is then checked by the engine on a trial copy: a pair whose circuit brings a new
+ * error is passed over for the next.
  */
 import { check } from '../../../../rules/check/check.ts';
 import { highThreshold, lowThreshold } from '../../../../rules/engine/resolve.ts';
 import type { CheckResult, FindingOf, ResolvedPin } from '../../../../rules/engine/types.ts';
 import { below, exceeds } from '../../../../rules/levels/compare.ts';
 import { levelAt } from '../../../../rules/levels/level.ts';
-import { outputLevel } from '../../../../rules/levels/output.ts';
+import { largestTestCurrent, outputLevel } from '../../../../rules/levels/output.ts';
 import type { Range } from '../../../../rules/levels/rails.ts';
 import { RISE_10_90 } from '../../../../rules/levels/rc.ts';
 import { E24, seriesValuesBetween } from '../../../../rules/levels/series.ts';
@@ -44,6 +65,12 @@ export const DIVIDER_TOLERANCE = 0.01;
 export const DIVIDER_TOTAL = { min: 1e3, max: 100e3 } as const;
 /** The range each resistor is taken from, Ω. */
 const VALUE_RANGE = { min: 100, max: 100e3 } as const;
+/** The largest share of the driver's rated current the divider may draw (header: our rule). */
+export const DIVIDER_LOAD_SHARE = 0.5;
+/** The edge budget where the net sets no maxRiseTime, s (header: 100 ns). */
+export const DIVIDER_EDGE_BUDGET = 100e-9;
+/** Pairs whose worst margin is at least this share of the best are preferred (header). */
+export const DIVIDER_MARGIN_SHARE = 0.9;
 /** Pairs tried on a copy before the fix gives up (each trial is a full check). */
 const TRIALS = 5;
 
@@ -68,6 +95,13 @@ export interface DividerFigures {
   readonly rth: number;
   /** The current the driver sources into the divider at its rail's highest, both at their low ends, A. */
   readonly load: number;
+  /** The driver's rated current: its largest `voh` test current guaranteed at its rail's lowest, A. */
+  readonly rated?: number;
+  /**
+   * The longest edge the inputs' maxInputRamp allows, maxInputRamp · 0.8 · VDD,drv,min · k_min
+   * (the lowest, over the non-Schmitt inputs that state one), s; undefined without one.
+   */
+  readonly rampEdge?: number;
   /** Undefined where the driver's rows give no guaranteed level at that load. */
   readonly vohMin?: number;
   readonly volMax?: number;
@@ -111,6 +145,14 @@ export function dividerFigures(c: DividerCircuit, r1: number, r2: number, t = DI
       volMax = volMax === undefined ? l.v : Math.max(volMax, l.v);
     }
   }
+  const rated = largestTestCurrent(c.driver.params.voh, c.driverRail.min);
+  let rampEdge: number | undefined;
+  for (const p of c.receivers) {
+    const ramp = p.params.maxInputRamp;
+    if (ramp === undefined || p.params.schmitt !== undefined) continue;
+    const edge = ramp * 0.8 * c.driverRail.min * kMin;
+    rampEdge = rampEdge === undefined ? edge : Math.min(rampEdge, edge);
+  }
   let vih = Number.NEGATIVE_INFINITY;
   let vil = Number.POSITIVE_INFINITY;
   let limit = Number.POSITIVE_INFINITY;
@@ -131,6 +173,8 @@ export function dividerFigures(c: DividerCircuit, r1: number, r2: number, t = DI
     kMax,
     rth,
     load,
+    ...(rated === undefined ? {} : { rated }),
+    ...(rampEdge === undefined ? {} : { rampEdge }),
     peak: c.driverRail.max * kMax,
     limit,
     capacitance: c.capacitance,
@@ -157,33 +201,86 @@ export function dividerHolds(f: DividerFigures, maxRiseTime?: number): boolean {
   return maxRiseTime === undefined || !exceeds(f.edge, maxRiseTime);
 }
 
-/** The worst of the two margins: what the search maximises. */
+/**
+ * The worst of the three margins (header): the high and low margins and the over-voltage
+ * headroom, the inputs' limit less VDD,drv,max · k_max.
+ */
 export function worstMargin(f: DividerFigures): number {
-  return Math.min(f.high?.margin ?? Number.NEGATIVE_INFINITY, f.low?.margin ?? Number.NEGATIVE_INFINITY);
+  return Math.min(
+    f.high?.margin ?? Number.NEGATIVE_INFINITY,
+    f.low?.margin ?? Number.NEGATIVE_INFINITY,
+    f.limit - f.peak,
+  );
 }
 
-/** Every pair that holds, best first (best worst margin, then the faster edge). */
+/** Within DIVIDER_LOAD_SHARE of the driver's rated current (header). */
+export function lightLoad(f: DividerFigures): boolean {
+  return f.rated !== undefined && !exceeds(f.load, DIVIDER_LOAD_SHARE * f.rated);
+}
+
+/** The edge budget of a circuit: its net's maxRiseTime, else the documented default. */
+export function edgeBudget(c: DividerCircuit): number {
+  return c.maxRiseTime ?? DIVIDER_EDGE_BUDGET;
+}
+
+/**
+ * Near the best worst margin first, and among those the largest R1 + R2 (`fastest`: the fastest
+ * edge); then by worst margin.
+ */
+function preferred(pairs: DividerFigures[], fastest = false): DividerFigures[] {
+  const best = Math.max(...pairs.map(worstMargin));
+  const near = (f: DividerFigures) => !below(worstMargin(f), DIVIDER_MARGIN_SHARE * best);
+  return pairs.sort(
+    (a, b) =>
+      Number(near(b)) - Number(near(a)) ||
+      (near(a) ? (fastest ? a.edge - b.edge : b.r1 + b.r2 - (a.r1 + a.r2)) : 0) ||
+      worstMargin(b) - worstMargin(a) ||
+      a.edge - b.edge,
+  );
+}
+
+/**
+ * Every pair that holds (within the net's maxRiseTime and the inputs' maxInputRamp), the
+ * preferred first (header): of those drawing at most DIVIDER_LOAD_SHARE of the driver's rating
+ * with the edge in budget, near the best worst margin, the largest R1 + R2. Where none draws so
+ * little within the budget, the same among all that hold; where none meets the default budget
+ * either, near the best worst margin, the fastest edge first.
+ */
 export function dividerCandidates(c: DividerCircuit, t = DIVIDER_TOLERANCE): DividerFigures[] {
   const values = seriesValuesBetween(E24, VALUE_RANGE.min, VALUE_RANGE.max);
-  const out: DividerFigures[] = [];
+  const pool: DividerFigures[] = [];
   for (const r1 of values)
     for (const r2 of values) {
       const total = r1 + r2;
       if (total < DIVIDER_TOTAL.min || total > DIVIDER_TOTAL.max) continue;
       const f = dividerFigures(c, r1, r2, t);
-      if (dividerHolds(f, c.maxRiseTime)) out.push(f);
+      if (dividerHolds(f, c.maxRiseTime) && (f.rampEdge === undefined || !exceeds(f.edge, f.rampEdge))) pool.push(f);
     }
-  return out.sort((a, b) => worstMargin(b) - worstMargin(a) || a.edge - b.edge);
+  const budget = edgeBudget(c);
+  for (const set of [pool.filter(lightLoad), pool]) {
+    const within = set.filter((f) => !exceeds(f.edge, budget));
+    if (within.length > 0) return [...preferred(within), ...pool.filter((f) => !within.includes(f))];
+  }
+  return preferred(pool, true);
 }
 
 const V = (v: number) => formatQuantity(v, 'V', 4);
 const OHM = (r: number) => formatQuantity(r, 'Ω');
+const AMP = (i: number) => formatQuantity(i, 'A');
 
 /** The figures the fix shows, in the header's order. */
 export function dividerRows(f: DividerFigures, pin: string, maxRiseTime?: number): FixFigure[] {
   const rows: FixFigure[] = [
     { label: `R1 (upper) / R2 (lower to ground), E24 ±${f.tolerance * 100} %`, value: `${OHM(f.r1)} / ${OHM(f.r2)}` },
     { label: 'k = R2/(R1 + R2) at the tolerance ends', value: `${f.kMin.toFixed(4)} … ${f.kMax.toFixed(4)}` },
+    {
+      label:
+        `Driver current, VDD,drv,max/(R1 + R2) at −${f.tolerance * 100} %` +
+        (f.rated === undefined
+          ? ''
+          : ` (at most ${DIVIDER_LOAD_SHARE * 100} % of its rated ${AMP(f.rated)}: ${AMP(DIVIDER_LOAD_SHARE * f.rated)})`),
+      value: AMP(f.load),
+    },
   ];
   if (f.high !== undefined)
     rows.push({
@@ -200,11 +297,27 @@ export function dividerRows(f: DividerFigures, pin: string, maxRiseTime?: number
     {
       label:
         `10–90 % edge, ln 9 · ${OHM(f.rth)} (R1‖R2 at +${f.tolerance * 100} %) · ${formatQuantity(f.capacitance, 'F')}` +
-        (maxRiseTime === undefined ? '' : ` (at most ${formatQuantity(maxRiseTime, 's')})`),
+        (maxRiseTime !== undefined
+          ? ` (at most ${formatQuantity(maxRiseTime, 's')})`
+          : exceeds(f.edge, DIVIDER_EDGE_BUDGET)
+            ? ` (no pair meets the default ${formatQuantity(DIVIDER_EDGE_BUDGET, 's')}: the fastest)`
+            : ` (at most the default ${formatQuantity(DIVIDER_EDGE_BUDGET, 's')})`),
       value: formatQuantity(f.edge, 's'),
     },
   );
   return rows;
+}
+
+/** Why this pair, in the words of the header's rule (which of its branches chose it). */
+function choiceWords(f: DividerFigures, c: DividerCircuit): string {
+  const load = lightLoad(f)
+    ? "at most half the driver's rating"
+    : "within the driver's rating (no pair within half meets the edge)";
+  if (exceeds(f.edge, edgeBudget(c)))
+    return `no pair meets the default ${formatQuantity(DIVIDER_EDGE_BUDGET, 's')} edge, so the fastest whose worst margin is within 90 % of the best, drawing ${load}`;
+  const budget =
+    c.maxRiseTime === undefined ? `the default ${formatQuantity(DIVIDER_EDGE_BUDGET, 's')}` : "the net's maxRiseTime";
+  return `the largest pair (1 kΩ to 100 kΩ in all) whose edge is within ${budget}, drawing ${load}, with its worst margin within 90 % of the best`;
 }
 
 /** overvoltage on a net of one push-pull driver and inputs: a divider into the lower rail. */
@@ -251,8 +364,8 @@ export function dividerFix(
       title: `Insert a divider before ${finding.values.pin}`,
       sentence:
         `Moves ${plan.moved.join(', ')} to a net ${plan.rxNet} fed from ${plan.source} through ${plan.series} ${OHM(f.r1)} ` +
-        `with ${plan.shunt} ${OHM(f.r2)} to ground (E24, ±${f.tolerance * 100} %): the pair with the best worst margin ` +
-        `from 1 kΩ to 100 kΩ in all, whose highest output stays within ${finding.values.pin}'s limit.`,
+        `with ${plan.shunt} ${OHM(f.r2)} to ground (E24, ±${f.tolerance * 100} %): ${choiceWords(f, circuit)}, ` +
+        `whose highest output stays within ${finding.values.pin}'s limit.`,
       figures: dividerRows(f, finding.values.pin, net.maxRiseTime),
       apply: (draft) => applySplit(draft, plan, values),
     };
