@@ -6,7 +6,7 @@
  */
 import { expect, type Page, test } from '@playwright/test';
 import { CROSSING_BENCH } from './crossingBench.ts';
-import { handle, watch, wire } from './gestures.ts';
+import { fitAll, handle, watch, wire } from './gestures.ts';
 
 async function openBench(page: Page): Promise<void> {
   await page.goto('/');
@@ -18,6 +18,8 @@ async function openBench(page: Page): Promise<void> {
     buffer: Buffer.from(JSON.stringify(CROSSING_BENCH)),
   });
   await expect(page.getByTestId('design-title')).toHaveValue('Rail crossing bench');
+  // A design opens zoomed to its errors, and the canvas draws only what is in view.
+  await fitAll(page);
 }
 
 const row = (page: Page, id: string) => page.locator(`li[data-finding-row="${id}"]`);
@@ -29,6 +31,7 @@ test('FET and diode shifters from the palette, wired, and the FET-shifter fix', 
   // A FET shifter from the palette, its gate on the last rail (1.8 V), wired from the spare
   // 1.8 V port (source) to the spare 3.3 V port (drain).
   await page.getByTestId('place-fet-shifter').click();
+  await fitAll(page);
   await expect(page.getByTestId('value-Q1')).toHaveText('VGS(th) ≤ 1 V');
   await wire(page, handle(page, 'Q1', 'S'), handle(page, 'U5', 'SCL'));
   await wire(page, handle(page, 'Q1', 'D'), handle(page, 'U6', 'SCL'));
@@ -40,6 +43,7 @@ test('FET and diode shifters from the palette, wired, and the FET-shifter fix', 
 
   // A diode shifter: cathode on the 3.3 V output, anode on the 5 V input.
   await page.getByTestId('place-diode-shifter').click();
+  await fitAll(page);
   await expect(page.getByTestId('value-D1')).toHaveText('Vf ≤ 0.45 V');
   await wire(page, handle(page, 'D1', 'K'), handle(page, 'U7', 'Y'));
   await wire(page, handle(page, 'D1', 'A'), handle(page, 'U8', 'A'));
