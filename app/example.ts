@@ -1,7 +1,7 @@
 /** The example design the editor opens on a first start. */
-import example from '../rules/examples/greenhouse.json';
-import { validateDesign } from '../rules/model/reader.ts';
-import type { Design } from '../rules/model/schema.ts';
+import { greenhouse as example } from '../rules/examples/index.ts';
+import { validateDesign } from '../rules/model/index.ts';
+import type { Design } from '../rules/model/index.ts';
 
 /** The greenhouse irrigation controller, read through the reader like any other file. */
 export function exampleDesign(): Design {

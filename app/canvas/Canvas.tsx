@@ -3,7 +3,7 @@
  * the design; it turns React Flow's events into commands (connect, move, select).
  */
 import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState, type DragEvent } from 'react';
-import { ALL_ON } from '../../rules/engine/powerStates.ts';
+import { ALL_ON } from '../../rules/engine/index.ts';
 import { useStore } from 'zustand';
 import { createStore } from 'zustand/vanilla';
 import {

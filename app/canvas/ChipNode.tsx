@@ -8,9 +8,9 @@
  */
 import { memo, useEffect, useRef } from 'react';
 import { Handle, Position, useStore as useFlowStore, useUpdateNodeInternals, type NodeProps } from '@xyflow/react';
-import type { Part, Pin, Rail } from '../../rules/model/schema.ts';
-import { formatQuantity } from '../../rules/levels/units.ts';
-import { pullLabel, pullWords } from '../../rules/report/pullLabel.ts';
+import type { Part, Pin, Rail } from '../../rules/model/index.ts';
+import { formatQuantity } from '../../rules/levels/index.ts';
+import { pullLabel, pullWords } from '../../rules/report/index.ts';
 import { CHIP_LOOK } from '../store/canvasViews.ts';
 import { useEditor, useEditorStore } from '../store/EditorProvider.tsx';
 import { useKeyed } from '../store/keyedView.ts';

@@ -5,8 +5,8 @@
  */
 import { memo } from 'react';
 import { Handle, Position, type NodeProps } from '@xyflow/react';
-import type { Discrete } from '../../rules/model/schema.ts';
-import { discreteValue } from '../../rules/report/discreteValue.ts';
+import type { Discrete } from '../../rules/model/index.ts';
+import { discreteValue } from '../../rules/report/index.ts';
 import { useEditor } from '../store/EditorProvider.tsx';
 import type { DiscreteNode as DiscreteNodeType } from './deriveFlow.ts';
 

@@ -5,9 +5,9 @@
  * go (three-state), a hollow head over a ground stroke means it only pulls low (open-drain).
  */
 import { memo } from 'react';
-import type { Pin } from '../../rules/model/schema.ts';
+import type { Pin } from '../../rules/model/index.ts';
 import type { Side } from './chipLayout.ts';
-import { driveOf } from '../../rules/model/pinDefaults.ts';
+import { driveOf } from '../../rules/model/index.ts';
 
 export type GlyphKind = 'in' | 'out-pp' | 'out-ts' | 'out-od' | 'bi-ts' | 'bi-pp' | 'bi-od';
 

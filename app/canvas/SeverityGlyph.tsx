@@ -1,5 +1,5 @@
 /** Severity shown by shape as well as colour: a notched diamond for an error, a hollow triangle for a warning, a ring for information. */
-import type { Severity } from '../../rules/engine/types.ts';
+import type { Severity } from '../../rules/engine/index.ts';
 
 export function SeverityGlyph({ severity, size = 12 }: { severity: Severity | 'clean'; size?: number }) {
   if (severity === 'clean') return null;

@@ -17,11 +17,11 @@ import {
   useStore as useFlowStore,
   type EdgeProps,
 } from '@xyflow/react';
-import { formatMargin } from '../../rules/levels/units.ts';
-import type { Pull } from '../../rules/model/schema.ts';
-import type { Finding, Severity } from '../../rules/engine/types.ts';
+import { formatMargin } from '../../rules/levels/index.ts';
+import type { Pull } from '../../rules/model/index.ts';
+import type { Finding, Severity } from '../../rules/engine/index.ts';
 import { RULES } from '../../rules/checks/index.ts';
-import { pullLabel, pullWords } from '../../rules/report/pullLabel.ts';
+import { pullLabel, pullWords } from '../../rules/report/index.ts';
 import { useEditor, useEditorStore } from '../store/EditorProvider.tsx';
 import { parseWireLook, WIRE_LOOK } from '../store/canvasViews.ts';
 import { useKeyed } from '../store/keyedView.ts';

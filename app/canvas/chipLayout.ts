@@ -3,7 +3,7 @@
  * numbers are the one source of the measures: styles.css draws with them through the custom
  * properties of `MEASURE_VARS` (set on the page's root at start), never with numbers of its own.
  */
-import type { Part, Pin } from '../../rules/model/schema.ts';
+import type { Part, Pin } from '../../rules/model/index.ts';
 import {
   BODY_PADDING,
   BOTTOM_BORDER,
@@ -13,9 +13,9 @@ import {
   ROW_HEIGHT,
   STRIP_HEIGHT,
   TOP_BORDER,
-} from '../../rules/routing/chipMeasures.ts';
+} from '../../rules/routing/index.ts';
 
-import { sideOf, type Side } from '../../rules/model/pinDefaults.ts';
+import { sideOf, type Side } from '../../rules/model/index.ts';
 
 export { sideOf, type Side };
 

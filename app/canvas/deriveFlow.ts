@@ -7,7 +7,7 @@
  * its place, size or selection; a net's edges only with its wires, name or selection.
  */
 import type { Edge, Node } from '@xyflow/react';
-import type { Design, Discrete, Net, Part } from '../../rules/model/schema.ts';
+import type { Design, Discrete, Net, Part } from '../../rules/model/index.ts';
 import { netWires, splitPinKey, wireId } from '../store/commands/index.ts';
 import type { XY } from '../store/editorStore.ts';
 import { chipSize, DISCRETE_SIZE, NODE_MARGIN } from './chipLayout.ts';

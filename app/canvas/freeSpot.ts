@@ -3,7 +3,7 @@
  * move, on a grid, that leaves every body of the group clear of every body already placed (chips
  * and parts between chips), with a gap between them for the wires.
  */
-import type { Design, Discrete, Part } from '../../rules/model/schema.ts';
+import type { Design, Discrete, Part } from '../../rules/model/index.ts';
 import { chipSize, DISCRETE_SIZE, NODE_MARGIN } from './chipLayout.ts';
 
 export interface Rect {

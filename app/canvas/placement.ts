@@ -1,8 +1,8 @@
 /** Placing parts from the palette and bringing things into view: canvas actions other panels call. */
-import { partOfPin } from '../../rules/model/pinKeys.ts';
+import { partOfPin } from '../../rules/model/index.ts';
 import { useCallback } from 'react';
 import { useReactFlow } from '@xyflow/react';
-import type { DiscreteKind, Part } from '../../rules/model/schema.ts';
+import type { DiscreteKind, Part } from '../../rules/model/index.ts';
 import { addDiscrete, addPart, newDiscrete } from '../store/commands/index.ts';
 import { DISCRETE_SIZE } from './deriveFlow.ts';
 import type { EditorStore, Outcome } from '../store/editorStore.ts';

@@ -5,7 +5,7 @@
  * to the default rail colour, and the reader and the colour command refuse it with a message.
  */
 import type { CSSProperties } from 'react';
-import { isRailColour } from '../../rules/model/colour.ts';
+import { isRailColour } from '../../rules/model/index.ts';
 
 export function railStyle(colour: string | undefined): CSSProperties {
   return { '--rail': isRailColour(colour) ? colour : 'var(--rail-default)' } as CSSProperties;

@@ -7,7 +7,7 @@
  * (WireEdge), and until a route arrives a wire is drawn that way too.
  */
 import { createStore } from 'zustand/vanilla';
-import type { Discrete, Net, Part } from '../../rules/model/schema.ts';
+import type { Discrete, Net, Part } from '../../rules/model/index.ts';
 import {
   WireRouter,
   type Anchor,

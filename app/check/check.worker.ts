@@ -3,8 +3,8 @@
  * that the page keeps answering input. It keeps the last design it read and its result, so that
  * "report only" right after an import does not check it twice.
  */
-import type { CheckResult } from '../../rules/engine/types.ts';
-import type { Design } from '../../rules/model/schema.ts';
+import type { CheckResult } from '../../rules/engine/index.ts';
+import type { Design } from '../../rules/model/index.ts';
 import { readJob, reportJob, storeIfLarge, type Stage } from './jobs.ts';
 import type { Request, Response } from './protocol.ts';
 

@@ -3,8 +3,8 @@
  * promise, with its stages reported as they start. Where there is no Worker (tests under
  * Node) the same jobs run inline.
  */
-import type { CheckResult } from '../../rules/engine/types.ts';
-import type { Design } from '../../rules/model/schema.ts';
+import type { CheckResult } from '../../rules/engine/index.ts';
+import type { Design } from '../../rules/model/index.ts';
 import {
   readJob,
   reportJob,

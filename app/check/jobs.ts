@@ -4,12 +4,12 @@
  * reading a design file (the engine's reader), checking it (the engine's `check`, the same one
  * the command line runs) and writing its report. Each step says when it starts, for progress.
  */
-import { check } from '../../rules/check/check.ts';
-import type { CheckResult } from '../../rules/engine/types.ts';
-import type { DesignError } from '../../rules/model/paths.ts';
-import { readDesign } from '../../rules/model/reader.ts';
-import type { Design } from '../../rules/model/schema.ts';
-import type { Report } from '../../rules/report/reportSchema.ts';
+import { check } from '../../rules/check/index.ts';
+import type { CheckResult } from '../../rules/engine/index.ts';
+import type { DesignError } from '../../rules/model/index.ts';
+import { readDesign } from '../../rules/model/index.ts';
+import type { Design } from '../../rules/model/index.ts';
+import type { Report } from '../../rules/report/index.ts';
 import { buildEditorReport } from '../session/reportExport.ts';
 import { RailcrossDb } from '../storage/db.ts';
 import { Library, readDocument } from '../storage/library.ts';

@@ -5,7 +5,7 @@
  * (`data-kind`, `data-volts`, `data-pin`, …) so that tests can compare it with the engine.
  */
 import { createContext, memo, useContext, useId } from 'react';
-import type { Ladder, LadderDriver, LadderMargin, LadderReceiver } from '../../rules/report/ladder.ts';
+import type { Ladder, LadderDriver, LadderMargin, LadderReceiver } from '../../rules/report/index.ts';
 import {
   BAND_WIDTH,
   DRIVER_WIDTH,

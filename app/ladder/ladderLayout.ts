@@ -3,8 +3,8 @@
  * columns left to right: the axis, the drivers, one lane per driver/receiver pair for its
  * margins, the receivers.
  */
-import type { Ladder, LadderMargin } from '../../rules/report/ladder.ts';
-import { onAxis } from '../../rules/report/ladderLayout.ts';
+import type { Ladder, LadderMargin } from '../../rules/report/index.ts';
+import { onAxis } from '../../rules/report/index.ts';
 
 export const AXIS_WIDTH = 64;
 export const DRIVER_WIDTH = 180;
@@ -57,4 +57,4 @@ export function layoutLadder(ladder: Ladder, height: number): LadderLayout {
 }
 
 // The labels' text and placement are shared with the PDF report's ladders.
-export { marginVolts, separate, STATUS_TEXT, volts } from '../../rules/report/ladderLayout.ts';
+export { marginVolts, separate, STATUS_TEXT, volts } from '../../rules/report/index.ts';

@@ -5,10 +5,10 @@
  * a frame of its own, never beyond the panel.
  */
 import { useMemo, useState } from 'react';
-import { crossingRows } from '../../rules/report/buildReport.ts';
-import type { Crossing } from '../../rules/report/reportSchema.ts';
-import { formatMargin } from '../../rules/levels/units.ts';
-import { labelOr } from '../../rules/engine/names.ts';
+import { crossingRows } from '../../rules/report/index.ts';
+import type { Crossing } from '../../rules/report/index.ts';
+import { formatMargin } from '../../rules/levels/index.ts';
+import { labelOr } from '../../rules/engine/index.ts';
 import { useFocus } from '../canvas/placement.ts';
 import { useEditor, useEditorStore } from '../store/EditorProvider.tsx';
 import './explain.css';

@@ -3,9 +3,9 @@
  * gate rail, and every quantity the engine computed through it in the chosen power state, each
  * with the corner it was found at.
  */
-import type { Discrete } from '../../rules/model/schema.ts';
-import { formatQuantity } from '../../rules/levels/units.ts';
-import type { PairAnalysis, PathEdge } from '../../rules/engine/types.ts';
+import type { Discrete } from '../../rules/model/index.ts';
+import { formatQuantity } from '../../rules/levels/index.ts';
+import type { PairAnalysis, PathEdge } from '../../rules/engine/index.ts';
 import { useMemo } from 'react';
 import { useEditor, useEditorStore } from '../store/EditorProvider.tsx';
 import { removeDiscrete, setDiscrete } from '../store/commands/index.ts';

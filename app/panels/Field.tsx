@@ -5,7 +5,7 @@
  * stored.
  */
 import { useId, useLayoutEffect, useRef, useState, type KeyboardEvent } from 'react';
-import { formatQuantity, parseQuantity, type QuantityResult, type Unit } from '../../rules/levels/units.ts';
+import { formatQuantity, parseQuantity, type QuantityResult, type Unit } from '../../rules/levels/index.ts';
 import type { Outcome } from '../store/editorStore.ts';
 import { holdDraft } from './drafts.ts';
 import { useEditor } from '../store/EditorProvider.tsx';

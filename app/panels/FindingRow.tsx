@@ -5,8 +5,8 @@
  * unless the engineer chooses only this one, so that a power state added later keeps it.
  */
 import { memo, useId, useState } from 'react';
-import type { Finding } from '../../rules/engine/types.ts';
-import { ALL_ON } from '../../rules/engine/powerStates.ts';
+import type { Finding } from '../../rules/engine/index.ts';
+import { ALL_ON } from '../../rules/engine/index.ts';
 import { addWaiver, removeWaiverFor, waiverPlaceOf } from '../store/commands/index.ts';
 import { useEditorStore } from '../store/EditorProvider.tsx';
 import { FixMenu } from './FixMenu.tsx';

@@ -3,7 +3,7 @@
  * state, rule and severity. A click selects the finding's net (or part) and brings it into view.
  */
 import { useCallback, useMemo, useState, type ReactNode } from 'react';
-import type { Finding, Severity } from '../../rules/engine/types.ts';
+import type { Finding, Severity } from '../../rules/engine/index.ts';
 import { RULES } from '../../rules/checks/index.ts';
 import { SeverityGlyph } from '../canvas/SeverityGlyph.tsx';
 import { useFocus } from '../canvas/placement.ts';

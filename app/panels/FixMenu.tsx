@@ -5,8 +5,8 @@
  * to confirm it first.
  */
 import { useMemo, useState } from 'react';
-import type { Finding, Summary } from '../../rules/engine/types.ts';
-import { namesOf } from '../../rules/engine/names.ts';
+import type { Finding, Summary } from '../../rules/engine/index.ts';
+import { namesOf } from '../../rules/engine/index.ts';
 import { SeverityGlyph } from '../canvas/SeverityGlyph.tsx';
 import {
   applyFix,

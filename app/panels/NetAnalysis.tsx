@@ -3,8 +3,8 @@
  * (high, low) with the output level, the threshold, the margin and the corner (the supply
  * voltages of driver and receiver) where it is worst, as the engine found it.
  */
-import type { LevelSide, PairStatus } from '../../rules/engine/types.ts';
-import { formatQuantity } from '../../rules/levels/units.ts';
+import type { LevelSide, PairStatus } from '../../rules/engine/index.ts';
+import { formatQuantity } from '../../rules/levels/index.ts';
 import { useEditor } from '../store/EditorProvider.tsx';
 
 const STATUS_TEXT: Readonly<Record<PairStatus, string>> = { pass: 'passes', warning: 'thin', fail: 'fails' };

@@ -1,6 +1,6 @@
-import type { Net } from '../../rules/model/schema.ts';
-import { DEFAULT_WIRING_CAPACITANCE } from '../../rules/model/schema.ts';
-import { formatMargin, formatQuantity } from '../../rules/levels/units.ts';
+import type { Net } from '../../rules/model/index.ts';
+import { DEFAULT_WIRING_CAPACITANCE } from '../../rules/model/index.ts';
+import { formatMargin, formatQuantity } from '../../rules/levels/index.ts';
 import {
   removeWaiverAt,
   setNetLabel,

@@ -5,10 +5,10 @@
  * of its own, as wide as the drawing (scaled down only where the window is narrower).
  */
 import { useMemo, useState } from 'react';
-import { ladderFor } from '../../rules/report/ladder.ts';
+import { ladderFor } from '../../rules/report/index.ts';
 import { ladderWidth, VoltageLadder } from '../ladder/VoltageLadder.tsx';
 import { useEditor } from '../store/EditorProvider.tsx';
-import { labelOr } from '../../rules/engine/names.ts';
+import { labelOr } from '../../rules/engine/index.ts';
 import { Modal } from './Modal.tsx';
 
 /** The dialog's padding and border around the drawing, px (styles.css .rc-modal-body). */

@@ -8,7 +8,7 @@ import { TEMPLATE_MIME, usePlacePart } from '../canvas/placement.ts';
 import { searchTemplates, type Template } from '../store/templates.ts';
 import { useEditorStore } from '../store/EditorProvider.tsx';
 import { usePlaceDiscrete } from '../canvas/placement.ts';
-import type { DiscreteKind } from '../../rules/model/schema.ts';
+import type { DiscreteKind } from '../../rules/model/index.ts';
 
 /** The parts between chips, in the trade's words. */
 const BETWEEN: readonly { kind: DiscreteKind; name: string; title: string }[] = [

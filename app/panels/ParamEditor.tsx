@@ -3,7 +3,7 @@
  * units or as a Level of VDD; an empty field means "no override", and the last column says
  * what applies then and where it comes from.
  */
-import type { Params } from '../../rules/model/schema.ts';
+import type { Params } from '../../rules/model/index.ts';
 import type { Outcome } from '../store/editorStore.ts';
 import { formatParam, parseParam, PARAM_FIELDS, type ParamKey } from '../store/paramFields.ts';
 import { TextField } from './Field.tsx';

@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import type { Part } from '../../rules/model/schema.ts';
+import type { Part } from '../../rules/model/index.ts';
 import { resolveProfile } from '../../rules/profiles/index.ts';
 import { glyphKind, GLYPH_TEXT, PinGlyph } from '../canvas/PinGlyph.tsx';
 import { sideOf } from '../canvas/chipLayout.ts';

@@ -3,10 +3,10 @@
  * override, or the profile (named, with the source of its numbers). Levels of VDD are also
  * shown at the rail's nominal voltage.
  */
-import { resolvePin } from '../../rules/engine/resolve.ts';
-import { levelAt, type Level } from '../../rules/levels/level.ts';
-import { formatQuantity } from '../../rules/levels/units.ts';
-import type { Part, Pin } from '../../rules/model/schema.ts';
+import { resolvePin } from '../../rules/engine/index.ts';
+import { levelAt, type Level } from '../../rules/levels/index.ts';
+import { formatQuantity } from '../../rules/levels/index.ts';
+import type { Part, Pin } from '../../rules/model/index.ts';
 import { useEditor } from '../store/EditorProvider.tsx';
 import { formatParam, PARAM_FIELDS } from '../store/paramFields.ts';
 

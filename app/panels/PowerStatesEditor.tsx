@@ -1,4 +1,4 @@
-import { ALL_ON_LABEL } from '../../rules/engine/powerStates.ts';
+import { ALL_ON_LABEL } from '../../rules/engine/index.ts';
 import { addPowerState, deletePowerState, setPowerStateLabel, setRailOff } from '../store/commands/index.ts';
 import { useEditor, useEditorStore } from '../store/EditorProvider.tsx';
 import { TextField } from './Field.tsx';

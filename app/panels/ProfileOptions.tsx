@@ -1,4 +1,4 @@
-import type { Profile } from '../../rules/model/schema.ts';
+import type { Profile } from '../../rules/model/index.ts';
 import { BUILTIN_PROFILES } from '../../rules/profiles/index.ts';
 
 /** The `<option>`s of a profile choice: this design's profiles first, then the library's they do not shadow. */

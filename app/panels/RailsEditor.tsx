@@ -7,8 +7,8 @@ import {
   setRailVoltage,
 } from '../store/commands/index.ts';
 import { useEditor, useEditorStore } from '../store/EditorProvider.tsx';
-import { DEFAULT_TOLERANCE } from '../../rules/model/schema.ts';
-import { longRailColour } from '../../rules/model/colour.ts';
+import { DEFAULT_TOLERANCE } from '../../rules/model/index.ts';
+import { longRailColour } from '../../rules/model/index.ts';
 import { QuantityField, TextField } from './Field.tsx';
 import { formatPercent, parsePercent } from './percent.ts';
 

@@ -1,10 +1,10 @@
 /** The top bar: the design's title, the power state the wires show, the counts, undo/redo, new/example. */
 import { useReactFlow } from '@xyflow/react';
-import type { Finding, Severity } from '../../rules/engine/types.ts';
+import type { Finding, Severity } from '../../rules/engine/index.ts';
 import { setTitle } from '../store/commands/index.ts';
 import { useSession } from '../session/SessionProvider.tsx';
 import { useEditor, useEditorStore } from '../store/EditorProvider.tsx';
-import { newDesign } from '../../rules/model/newDesign.ts';
+import { newDesign } from '../../rules/model/index.ts';
 import { SeverityGlyph } from '../canvas/SeverityGlyph.tsx';
 import { fitViewOptions } from '../canvas/placement.ts';
 import { exampleDesign } from '../example.ts';

@@ -3,7 +3,7 @@
  * Anything typed with another unit is refused with a reason that says the field takes percent,
  * and for a voltage, what that voltage would be as a percent of the rail's nominal.
  */
-import { formatQuantity, parseQuantity, type QuantityResult, type Unit } from '../../rules/levels/units.ts';
+import { formatQuantity, parseQuantity, type QuantityResult, type Unit } from '../../rules/levels/index.ts';
 
 /** The fraction as the field shows it: `± 5 %`, `± 2.5 %`. */
 export function formatPercent(fraction: number): string {

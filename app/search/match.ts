@@ -6,8 +6,8 @@
  * it, then one containing it.
  */
 import { RULES } from '../../rules/checks/index.ts';
-import type { CheckResult, Finding } from '../../rules/engine/types.ts';
-import type { Design } from '../../rules/model/schema.ts';
+import type { CheckResult, Finding } from '../../rules/engine/index.ts';
+import type { Design } from '../../rules/model/index.ts';
 
 export type HitKind = 'part' | 'pin' | 'net' | 'finding';
 

@@ -1,5 +1,5 @@
 /** Handing a file to the user: a download of bytes or text the page made. */
-import type { Design } from '../../rules/model/schema.ts';
+import type { Design } from '../../rules/model/index.ts';
 import { designFileName, designFileText } from '../storage/designFile.ts';
 
 /** Offer `data` as a download named `name`. */

@@ -4,7 +4,7 @@
  * saver writes through `Library.save`, which refuses to write over a revision this editor
  * did not start from.
  */
-import type { Design } from '../../rules/model/schema.ts';
+import type { Design } from '../../rules/model/index.ts';
 import { createEditorStore, type EditorStore } from '../store/editorStore.ts';
 import { storageProblem } from '../storage/errors.ts';
 import type { Library } from '../storage/library.ts';

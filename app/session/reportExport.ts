@@ -4,12 +4,12 @@
  * (what `railcross check --format md` prints), and the PDF, whose writer
  * (jsPDF and the fonts, about 2 MB) is loaded only when asked for.
  */
-import type { CheckResult } from '../../rules/engine/types.ts';
-import type { Design } from '../../rules/model/schema.ts';
-import { buildReport } from '../../rules/report/buildReport.ts';
-import { reportPdfFileName } from '../../rules/report/pdf/fileName.ts';
-import { renderMarkdown } from '../../rules/report/renderMarkdown.ts';
-import { ReportSchema, type Report } from '../../rules/report/reportSchema.ts';
+import type { CheckResult } from '../../rules/engine/index.ts';
+import type { Design } from '../../rules/model/index.ts';
+import { buildReport } from '../../rules/report/index.ts';
+import { reportPdfFileName } from '../../rules/report/index.ts';
+import { renderMarkdown } from '../../rules/report/index.ts';
+import { ReportSchema, type Report } from '../../rules/report/index.ts';
 import { reportJsonFileName, reportMarkdownFileName } from '../storage/designFile.ts';
 import { downloadFile } from './download.ts';
 import type { Session } from './session.ts';

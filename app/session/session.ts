@@ -8,16 +8,16 @@
  * a revision it did not start from.
  */
 import { createStore, type StoreApi } from 'zustand/vanilla';
-import { newDesign } from '../../rules/model/newDesign.ts';
-import type { DesignError } from '../../rules/model/paths.ts';
-import type { Design } from '../../rules/model/schema.ts';
+import { newDesign } from '../../rules/model/index.ts';
+import type { DesignError } from '../../rules/model/index.ts';
+import type { Design } from '../../rules/model/index.ts';
 import { replaceDesign, setTitle } from '../store/commands/index.ts';
 import { createEditorStore, type EditorStore } from '../store/editorStore.ts';
 import type { DesignRecord } from '../storage/db.ts';
 import { MAX_DESIGN_FILE_BYTES, readDesignFile, reportJsonFileName } from '../storage/designFile.ts';
 import { makeChecker, type Checker } from '../check/checker.ts';
 import { LARGE_DESIGN_PARTS, WORKER_FILE_BYTES, type Counts, type Stage } from '../check/jobs.ts';
-import { ROOT_PATH } from '../../rules/model/paths.ts';
+import { ROOT_PATH } from '../../rules/model/index.ts';
 import { storageProblem } from '../storage/errors.ts';
 import type { Change, Library } from '../storage/library.ts';
 import type { Saver } from '../storage/saver.ts';

@@ -4,8 +4,8 @@
  * in any tab, else the most recently changed; the example on a first start. Without storage
  * the editor still works, on the example, and says that nothing will be kept.
  */
-import type { Design } from '../../rules/model/schema.ts';
-import { newDesign } from '../../rules/model/newDesign.ts';
+import type { Design } from '../../rules/model/index.ts';
+import { newDesign } from '../../rules/model/index.ts';
 import { exampleDesign } from '../example.ts';
 import { RailcrossDb } from '../storage/db.ts';
 import { storageProblem } from '../storage/errors.ts';

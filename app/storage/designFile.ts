@@ -4,11 +4,11 @@
  * text. File names are `<slug>.railcross.json`: the slug keeps a file name safe on every
  * system, and the double extension says what the JSON is while any JSON tool still opens it.
  */
-import { ROOT_PATH } from '../../rules/model/paths.ts';
-import { readDesign, type ReadResult } from '../../rules/model/reader.ts';
-import type { Design } from '../../rules/model/schema.ts';
-import { writeDesign } from '../../rules/model/writer.ts';
-import { slugOf } from '../../rules/report/pdf/fileName.ts';
+import { ROOT_PATH } from '../../rules/model/index.ts';
+import { readDesign, type ReadResult } from '../../rules/model/index.ts';
+import type { Design } from '../../rules/model/index.ts';
+import { writeDesign } from '../../rules/model/index.ts';
+import { slugOf } from '../../rules/report/index.ts';
 
 export { slugOf };
 

@@ -5,10 +5,10 @@
  * can never overwrite a newer one written by another tab.
  */
 import { Dexie } from 'dexie';
-import { migrate } from '../../rules/model/migrate.ts';
-import type { DesignError } from '../../rules/model/paths.ts';
-import { validateDesign, type ReadResult } from '../../rules/model/reader.ts';
-import type { Design } from '../../rules/model/schema.ts';
+import { migrate } from '../../rules/model/index.ts';
+import type { DesignError } from '../../rules/model/index.ts';
+import { validateDesign, type ReadResult } from '../../rules/model/index.ts';
+import type { Design } from '../../rules/model/index.ts';
 import { KEPT_REVISIONS, newDesignId, type DesignRecord, type RailcrossDb, type RevisionRecord } from './db.ts';
 import { checkDesignRecord, checkRevisionRecord, designPlace, isSkipped, type Skipped } from './records.ts';
 

@@ -10,7 +10,7 @@
  * One entry per tab (`railcross.staged.<tab>`), so that two tabs never overwrite each other's
  * entry; a tab's entry is replayed only once that tab is gone (see `tabAlive`).
  */
-import type { Design } from '../../rules/model/schema.ts';
+import type { Design } from '../../rules/model/index.ts';
 import { readDocument, type Counts, type Library } from './library.ts';
 
 export const STAGE_PREFIX = 'railcross.staged.';

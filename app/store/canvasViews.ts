@@ -1,6 +1,6 @@
 /** What each chip and each wire of the canvas shows, as keyed views of the store (keyedView.ts). */
-import type { Severity } from '../../rules/engine/types.ts';
-import type { Part, Rail } from '../../rules/model/schema.ts';
+import type { Severity } from '../../rules/engine/index.ts';
+import type { Part, Rail } from '../../rules/model/index.ts';
 import { resolveProfile } from '../../rules/profiles/index.ts';
 import type { KeyedSpec } from './keyedView.ts';
 import { partById } from './lookup.ts';

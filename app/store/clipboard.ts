@@ -5,7 +5,7 @@
  * designator of the same letters and every net a fresh id, and lands the copies together on
  * the nearest spot where they cover no chip and no part between chips.
  */
-import type { Design, Net, Part } from '../../rules/model/schema.ts';
+import type { Design, Net, Part } from '../../rules/model/index.ts';
 import { freshId, splitPinKey } from './commands/command.ts';
 import { netWires } from './commands/netGraph.ts';
 import { bodiesOf, nearestFreeOffset, partRect } from '../canvas/freeSpot.ts';

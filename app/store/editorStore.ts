@@ -6,10 +6,10 @@
  */
 import { applyPatches, enablePatches, produceWithPatches, type Patch } from 'immer';
 import { createStore, type StoreApi } from 'zustand/vanilla';
-import { check } from '../../rules/check/check.ts';
-import { ALL_ON } from '../../rules/engine/powerStates.ts';
-import type { CheckResult } from '../../rules/engine/types.ts';
-import type { Design } from '../../rules/model/schema.ts';
+import { check } from '../../rules/check/index.ts';
+import { ALL_ON } from '../../rules/engine/index.ts';
+import type { CheckResult } from '../../rules/engine/index.ts';
+import type { Design } from '../../rules/model/index.ts';
 import { isRefusal, type Command } from './commands/command.ts';
 import { netStatuses, type NetStatus } from './netStatus.ts';
 import { cleanSelection, EMPTY_SELECTION, type Selection } from './selection.ts';

@@ -1,4 +1,4 @@
-import type { Part } from '../../rules/model/schema.ts';
+import type { Part } from '../../rules/model/index.ts';
 
 const byId = new WeakMap<readonly Part[], ReadonlyMap<string, Part>>();
 

@@ -1,5 +1,5 @@
-import type { CheckResult, Finding, Severity } from '../../rules/engine/types.ts';
-import type { RuleId } from '../../rules/model/ruleIds.ts';
+import type { CheckResult, Finding, Severity } from '../../rules/engine/index.ts';
+import type { RuleId } from '../../rules/model/index.ts';
 
 /** What a wire shows: the worst unwaived severity of its net in one power state, and the rule that gave it. */
 export interface NetStatus {

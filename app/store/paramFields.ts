@@ -4,9 +4,9 @@
  * One table drives the pin table's overrides, the part's, the design-local profiles' and the
  * details panel's effective values.
  */
-import { parseLevel, type Level } from '../../rules/levels/level.ts';
-import { formatQuantity, parseQuantity, type Unit } from '../../rules/levels/units.ts';
-import type { OutputPoint, Params } from '../../rules/model/schema.ts';
+import { parseLevel, type Level } from '../../rules/levels/index.ts';
+import { formatQuantity, parseQuantity, type Unit } from '../../rules/levels/index.ts';
+import type { OutputPoint, Params } from '../../rules/model/index.ts';
 
 export type ParamKey = keyof Params;
 

@@ -1,4 +1,4 @@
-import type { Design } from '../../rules/model/schema.ts';
+import type { Design } from '../../rules/model/index.ts';
 import { netWires, parseWireId, samePair } from './commands/netGraph.ts';
 
 /** What is selected: parts, wires (by wire id), and the net the details panel shows. */

@@ -2,7 +2,7 @@
  * The parts palette: templates with generic names, built from the profile library. Each
  * template makes a part with a fresh designator on the design's best-fitting rail.
  */
-import type { Design, Part, Pin, Profile, Rail } from '../../rules/model/schema.ts';
+import type { Design, Part, Pin, Profile, Rail } from '../../rules/model/index.ts';
 import { builtinProfile } from '../../rules/profiles/index.ts';
 import { freshId } from './commands/command.ts';
 

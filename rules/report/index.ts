@@ -19,3 +19,8 @@ export {
   type FailOn,
 } from './reportSchema.ts';
 export { describeParams, describeProfile } from './describeProfile.ts';
+export { discreteValue } from './discreteValue.ts';
+export type { LadderDriver, LadderMargin, LadderReceiver } from './ladder.ts';
+export { marginVolts, onAxis, separate, STATUS_TEXT, volts } from './ladderLayout.ts';
+export { reportPdfFileName, slugOf } from './pdf/fileName.ts';
+export { pullLabel, pullWords } from './pullLabel.ts';

@@ -34,3 +34,13 @@ export {
   type BodyCrossing,
 } from './measure.ts';
 export { nudge, tidy, SPACING } from './nudge.ts';
+export {
+  BODY_PADDING,
+  BOTTOM_BORDER,
+  CHIP_WIDTH,
+  DISCRETE_SIZE,
+  HEADER_HEIGHT,
+  ROW_HEIGHT,
+  STRIP_HEIGHT,
+  TOP_BORDER,
+} from './chipMeasures.ts';

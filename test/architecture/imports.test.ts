@@ -161,3 +161,24 @@ describe('shared model helpers', () => {
     expect(SAID_ONCE[0]!.pattern.test(planted)).toBe(true);
   });
 });
+
+/** The modules of rules/ the editor may import: each folder's index, and the PDF writer's (loaded on export). */
+const isIndexModule = (path: string) => /^rules\/[a-z]+\/index\.ts$/.test(path) || path === 'rules/report/pdf/index.ts';
+
+describe('the editor and the engine', () => {
+  it('app/ imports rules/ only through the folders\u2019 index modules', () => {
+    const offending = sources('app').flatMap((f) =>
+      importsOf(f, readFileSync(join(root, f), 'utf8'))
+        .filter((t) => t.startsWith('rules/') && !isIndexModule(t))
+        .map((t) => `${f} → ${t}`),
+    );
+    expect(offending).toEqual([]);
+  });
+
+  it('a planted deep import is found', () => {
+    const text =
+      "import { check } from '../../rules/check/check.ts';\nimport { RULES } from '../../rules/checks/index.ts';";
+    const deep = importsOf('app/panels/X.tsx', text).filter((t) => t.startsWith('rules/') && !isIndexModule(t));
+    expect(deep).toEqual(['rules/check/check.ts']);
+  });
+});

@@ -3,13 +3,13 @@
  * its parameter overrides folded beneath it.
  */
 import { Fragment, useState } from 'react';
-import type { Design, Pin } from '../../../rules/model/schema.ts';
+import type { Design, Pin } from '../../../rules/model/index.ts';
 import { withParam } from '../../store/paramFields.ts';
 import { ParamEditor } from '../ParamEditor.tsx';
 import { ProfileOptions } from '../ProfileOptions.tsx';
 import { addRow, moveRow, removeRow, rowProblems, setRow, type ChipDraft } from './chipDraft.ts';
 import { inheritedParam } from './inherited.ts';
-import { profileIdOf } from '../../../rules/model/pinDefaults.ts';
+import { profileIdOf } from '../../../rules/model/index.ts';
 
 const DRIVE_DEFAULT: Readonly<Record<Pin['role'], string>> = { input: '—', output: 'push-pull', bidir: 'three-state' };
 

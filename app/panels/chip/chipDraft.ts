@@ -3,7 +3,7 @@
  * command (a new part, or an edit of one). Each row remembers the pin it came from, so that a
  * renamed pin keeps its nets.
  */
-import type { Design, Part, Pin } from '../../../rules/model/schema.ts';
+import type { Design, Part, Pin } from '../../../rules/model/index.ts';
 import { freshId } from '../../store/commands/index.ts';
 
 export interface PinRow {

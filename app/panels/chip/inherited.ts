@@ -1,4 +1,4 @@
-import type { Design, Params } from '../../../rules/model/schema.ts';
+import type { Design, Params } from '../../../rules/model/index.ts';
 import { resolveProfile } from '../../../rules/profiles/index.ts';
 import { formatParam, type ParamKey } from '../../store/paramFields.ts';
 import type { Fallback } from '../ParamEditor.tsx';

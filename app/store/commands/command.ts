@@ -1,6 +1,6 @@
 import type { Draft } from 'immer';
-import { DISCRETE_PINS, type Design } from '../../../rules/model/schema.ts';
-import { pinKey, splitPinKey } from '../../../rules/model/pinKeys.ts';
+import { DISCRETE_PINS, type Design } from '../../../rules/model/index.ts';
+import { pinKey, splitPinKey } from '../../../rules/model/index.ts';
 
 /** Why a command was refused; nothing of the design changes. */
 export interface Refusal {

@@ -1,5 +1,5 @@
 import { current, type Draft } from 'immer';
-import { DEFAULT_WIRING_CAPACITANCE, type Design, type Net, type Waiver } from '../../../rules/model/schema.ts';
+import { DEFAULT_WIRING_CAPACITANCE, type Design, type Net, type Waiver } from '../../../rules/model/index.ts';
 import { freshId, hasPin, refuse, type Command } from './command.ts';
 import { netWires, type Pair } from './netGraph.ts';
 

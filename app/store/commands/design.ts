@@ -1,5 +1,5 @@
-import { partOfPin } from '../../../rules/model/pinKeys.ts';
-import type { Design } from '../../../rules/model/schema.ts';
+import { partOfPin } from '../../../rules/model/index.ts';
+import type { Design } from '../../../rules/model/index.ts';
 import { refuse, type Command } from './command.ts';
 import { removeParts } from './parts.ts';
 import { removeWire } from './disconnectWire.ts';

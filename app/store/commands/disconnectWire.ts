@@ -1,5 +1,5 @@
 import type { Draft } from 'immer';
-import type { Design, Net } from '../../../rules/model/schema.ts';
+import type { Design, Net } from '../../../rules/model/index.ts';
 import { freshId, refuse, type Command, type Refusal } from './command.ts';
 import { netWires, samePair, wireGroups, type Pair } from './netGraph.ts';
 

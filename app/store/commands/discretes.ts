@@ -3,7 +3,7 @@
  * Each is placed with values of our own choosing as a start (the engineer edits them), and wired
  * with ordinary nets through its pins (`R1.1`, `Q1.S`, `D1.K`).
  */
-import { DISCRETE_PINS, type Design, type Discrete, type DiscreteKind } from '../../../rules/model/schema.ts';
+import { DISCRETE_PINS, type Design, type Discrete, type DiscreteKind } from '../../../rules/model/index.ts';
 import { freshId, refuse, type Command } from './command.ts';
 
 /** The designator prefix of each kind (common practice: R for resistors, Q for transistors, D for diodes). */

@@ -3,9 +3,9 @@
  * the same), cached per net object here, where an edit re-reads them on every frame.
  */
 import { isDraft } from 'immer';
-import { Components, netWires as wiresOf, type Pair } from '../../../rules/model/wiring.ts';
+import { Components, netWires as wiresOf, type Pair } from '../../../rules/model/index.ts';
 
-export { Components, samePair, type Pair } from '../../../rules/model/wiring.ts';
+export { Components, samePair, type Pair } from '../../../rules/model/index.ts';
 
 const cache = new WeakMap<object, readonly Pair[]>();
 

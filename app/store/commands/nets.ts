@@ -1,6 +1,6 @@
-import type { Pull } from '../../../rules/model/schema.ts';
-import { GROUND } from '../../../rules/model/references.ts';
-import { MAX_FARADS, MAX_OHMS, MAX_SECONDS, MIN_FARADS, MIN_OHMS, MIN_SECONDS } from '../../../rules/model/limits.ts';
+import type { Pull } from '../../../rules/model/index.ts';
+import { GROUND } from '../../../rules/model/index.ts';
+import { MAX_FARADS, MAX_OHMS, MAX_SECONDS, MIN_FARADS, MIN_OHMS, MIN_SECONDS } from '../../../rules/model/index.ts';
 import { refuse, type Command } from './command.ts';
 
 export function setNetLabel(id: string, label: string): Command {

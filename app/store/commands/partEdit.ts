@@ -4,8 +4,8 @@
  * `PART.PIN` reference, and pin renames and removals that follow the nets.
  */
 import type { Draft } from 'immer';
-import { PartSchema, type Design, type Part } from '../../../rules/model/schema.ts';
-import { GROUND } from '../../../rules/model/references.ts';
+import { PartSchema, type Design, type Part } from '../../../rules/model/index.ts';
+import { GROUND } from '../../../rules/model/index.ts';
 import { resolveProfile } from '../../../rules/profiles/index.ts';
 import { refuse, type Command } from './command.ts';
 import { netWires } from './netGraph.ts';

@@ -1,6 +1,6 @@
-import { partOfPin } from '../../../rules/model/pinKeys.ts';
+import { partOfPin } from '../../../rules/model/index.ts';
 import type { Draft } from 'immer';
-import type { Design, Part } from '../../../rules/model/schema.ts';
+import type { Design, Part } from '../../../rules/model/index.ts';
 import { resolveProfile } from '../../../rules/profiles/index.ts';
 import { partProblem } from './partEdit.ts';
 import { refuse, type Command } from './command.ts';

@@ -1,6 +1,6 @@
-import { partOfPin } from '../../../rules/model/pinKeys.ts';
-import type { Design, Net, Part } from '../../../rules/model/schema.ts';
-import { GROUND } from '../../../rules/model/references.ts';
+import { partOfPin } from '../../../rules/model/index.ts';
+import type { Design, Net, Part } from '../../../rules/model/index.ts';
+import { GROUND } from '../../../rules/model/index.ts';
 import { refuse, type Command } from './command.ts';
 import { partProblem } from './partEdit.ts';
 

@@ -1,4 +1,4 @@
-import type { PinState } from '../../../rules/model/schema.ts';
+import type { PinState } from '../../../rules/model/index.ts';
 import { refuse, type Command, freshId } from './command.ts';
 
 /** A new power state (scenario) with every rail on; id `S<k>`. */

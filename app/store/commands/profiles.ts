@@ -3,7 +3,7 @@
  * numbers come from (`source`, design-format.md "Profile"), so that a report can print it.
  */
 import type { Draft } from 'immer';
-import { ParamsSchema, ProfileSchema, type Design, type Params, type Profile } from '../../../rules/model/schema.ts';
+import { ParamsSchema, ProfileSchema, type Design, type Params, type Profile } from '../../../rules/model/index.ts';
 import { builtinProfile } from '../../../rules/profiles/index.ts';
 import { refuse, type Command } from './command.ts';
 import { withParam, type ParamKey } from '../paramFields.ts';

@@ -1,8 +1,8 @@
 import type { Draft } from 'immer';
-import type { Design, Rail } from '../../../rules/model/schema.ts';
-import { railRange } from '../../../rules/levels/rails.ts';
-import { isRailColour } from '../../../rules/model/colour.ts';
-import { MAX_VOLTS } from '../../../rules/model/limits.ts';
+import type { Design, Rail } from '../../../rules/model/index.ts';
+import { railRange } from '../../../rules/levels/index.ts';
+import { isRailColour } from '../../../rules/model/index.ts';
+import { MAX_VOLTS } from '../../../rules/model/index.ts';
 import { freshId, refuse, type Command } from './command.ts';
 
 function findRail(design: Draft<Design>, id: string) {

@@ -8,7 +8,7 @@
  * its left pin (1, S, K, as the canvas draws it) receives and its right pin drives. One undo step.
  */
 import { graphlib, layout } from '@dagrejs/dagre';
-import { DISCRETE_PINS, type Design } from '../../../rules/model/schema.ts';
+import { DISCRETE_PINS, type Design } from '../../../rules/model/index.ts';
 import { chipSize, DISCRETE_SIZE, NODE_MARGIN } from '../../canvas/chipLayout.ts';
 import { refuse, splitPinKey, type Command } from './command.ts';
 

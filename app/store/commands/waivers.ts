@@ -4,9 +4,9 @@
  * finding stays in the results, marked, and no longer colours its wire.
  */
 import type { Draft } from 'immer';
-import type { Design, Waiver } from '../../../rules/model/schema.ts';
-import { RULE_IDS, type RuleId } from '../../../rules/model/ruleIds.ts';
-import { ALL_ON } from '../../../rules/engine/powerStates.ts';
+import type { Design, Waiver } from '../../../rules/model/index.ts';
+import { RULE_IDS, type RuleId } from '../../../rules/model/index.ts';
+import { ALL_ON } from '../../../rules/engine/index.ts';
 import { refuse, splitPinKey, type Command, type Refusal } from './command.ts';
 
 /** Where a waiver is written: a net, or a pin on no net (`PART.PIN`). */

@@ -42,19 +42,19 @@
  * The chosen pair is then checked by the engine on a trial copy: a pair whose circuit brings a new
  * error is passed over for the next.
  */
-import { check } from '../../../../rules/check/check.ts';
-import { highThreshold, lowThreshold } from '../../../../rules/engine/resolve.ts';
-import type { CheckResult, FindingOf, ResolvedPin } from '../../../../rules/engine/types.ts';
-import { below, exceeds } from '../../../../rules/levels/compare.ts';
-import { levelAt } from '../../../../rules/levels/level.ts';
-import { largestTestCurrent, outputLevel } from '../../../../rules/levels/output.ts';
-import type { Range } from '../../../../rules/levels/rails.ts';
-import { RISE_10_90 } from '../../../../rules/levels/rc.ts';
-import { E24, seriesValuesBetween } from '../../../../rules/levels/series.ts';
-import { formatQuantity } from '../../../../rules/levels/units.ts';
-import { DEFAULT_WIRING_CAPACITANCE, type Design } from '../../../../rules/model/schema.ts';
+import { check } from '../../../../rules/check/index.ts';
+import { highThreshold, lowThreshold } from '../../../../rules/engine/index.ts';
+import type { CheckResult, FindingOf, ResolvedPin } from '../../../../rules/engine/index.ts';
+import { below, exceeds } from '../../../../rules/levels/index.ts';
+import { levelAt } from '../../../../rules/levels/index.ts';
+import { largestTestCurrent, outputLevel } from '../../../../rules/levels/index.ts';
+import type { Range } from '../../../../rules/levels/index.ts';
+import { RISE_10_90 } from '../../../../rules/levels/index.ts';
+import { E24, seriesValuesBetween } from '../../../../rules/levels/index.ts';
+import { formatQuantity } from '../../../../rules/levels/index.ts';
+import { DEFAULT_WIRING_CAPACITANCE, type Design } from '../../../../rules/model/index.ts';
 import { findNet, pinAt, rangeOfRail, resolvedPin } from './lookup.ts';
-import { driveOf } from '../../../../rules/model/pinDefaults.ts';
+import { driveOf } from '../../../../rules/model/index.ts';
 import { newErrors, tryOn } from './preview.ts';
 import { applySplit, planSplit } from './split.ts';
 import type { FixFigure, QuickFix } from './types.ts';

@@ -5,13 +5,13 @@
  * user confirms from the datasheet.
  */
 import type { Draft } from 'immer';
-import { namesOf } from '../../../../rules/engine/names.ts';
-import type { Design } from '../../../../rules/model/schema.ts';
-import { levelAt, type Level } from '../../../../rules/levels/level.ts';
-import { below } from '../../../../rules/levels/compare.ts';
-import { formatQuantity } from '../../../../rules/levels/units.ts';
+import { namesOf } from '../../../../rules/engine/index.ts';
+import type { Design } from '../../../../rules/model/index.ts';
+import { levelAt, type Level } from '../../../../rules/levels/index.ts';
+import { below } from '../../../../rules/levels/index.ts';
+import { formatQuantity } from '../../../../rules/levels/index.ts';
 import { resolveProfile } from '../../../../rules/profiles/index.ts';
-import type { FindingOf, ResolvedPin } from '../../../../rules/engine/types.ts';
+import type { FindingOf, ResolvedPin } from '../../../../rules/engine/index.ts';
 import { refuse, type Refusal } from '../command.ts';
 import { pinAt, rangeOfRail, resolvedPin } from './lookup.ts';
 import type { QuickFix } from './types.ts';

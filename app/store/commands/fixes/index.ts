@@ -3,14 +3,14 @@
  * pure recipe that the store applies as one undoable command (`applyFix`). `previewFix`
  * re-checks a copy so that the panel can show what a fix removes and what it brings.
  */
-import type { CheckResult, Finding, FindingOf } from '../../../../rules/engine/types.ts';
-import type { Design } from '../../../../rules/model/schema.ts';
-import { GROUND } from '../../../../rules/model/references.ts';
+import type { CheckResult, Finding, FindingOf } from '../../../../rules/engine/index.ts';
+import type { Design } from '../../../../rules/model/index.ts';
+import { GROUND } from '../../../../rules/model/index.ts';
 import type { Command } from '../command.ts';
 import { addWaiver } from '../waivers.ts';
 import { markTolerantFix, markUnpoweredSafeFix, tolerantFamilyFixes, ttlInputsFix } from './family.ts';
 import { findNet, netName, pinAt, railName, railOfPin } from './lookup.ts';
-import { driveOf } from '../../../../rules/model/pinDefaults.ts';
+import { driveOf } from '../../../../rules/model/index.ts';
 import { addPullFix, pullValueFix, tieNetFixes, tiePinFixes, tieUnusedInputsFix } from './pulls.ts';
 import { translatorFixes } from './translator.ts';
 import { fetShifterFix } from './shifter.ts';

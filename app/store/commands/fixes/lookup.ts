@@ -1,11 +1,11 @@
 /** Reading a design (or a draft of one) by id: what the fixes need to find their targets. */
-import type { Design, Net, Part, Pin } from '../../../../rules/model/schema.ts';
-import { railRange, type Range } from '../../../../rules/levels/rails.ts';
-import { resolvePin } from '../../../../rules/engine/resolve.ts';
-import { namesOf, netLabel } from '../../../../rules/engine/names.ts';
-import type { ResolvedPin } from '../../../../rules/engine/types.ts';
+import type { Design, Net, Part, Pin } from '../../../../rules/model/index.ts';
+import { railRange, type Range } from '../../../../rules/levels/index.ts';
+import { resolvePin } from '../../../../rules/engine/index.ts';
+import { namesOf, netLabel } from '../../../../rules/engine/index.ts';
+import type { ResolvedPin } from '../../../../rules/engine/index.ts';
 import { splitPinKey } from '../command.ts';
-import { railOf } from '../../../../rules/model/pinDefaults.ts';
+import { railOf } from '../../../../rules/model/index.ts';
 
 export interface PinAt {
   readonly part: Part;

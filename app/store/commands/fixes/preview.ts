@@ -3,9 +3,9 @@
  * removes and those it brings. The findings panel shows this before the user applies a fix.
  */
 import { produce } from 'immer';
-import { check } from '../../../../rules/check/check.ts';
-import type { CheckResult, Finding } from '../../../../rules/engine/types.ts';
-import type { Design } from '../../../../rules/model/schema.ts';
+import { check } from '../../../../rules/check/index.ts';
+import type { CheckResult, Finding } from '../../../../rules/engine/index.ts';
+import type { Design } from '../../../../rules/model/index.ts';
 import { isRefusal } from '../command.ts';
 import type { QuickFix } from './types.ts';
 

@@ -3,18 +3,18 @@
  * a pull-up value moved into its range, and a tie for a floating input.
  */
 import type { Draft } from 'immer';
-import { check } from '../../../../rules/check/check.ts';
-import type { CheckResult, Finding } from '../../../../rules/engine/types.ts';
-import { choosePull } from '../../../../rules/levels/pullAdvice.ts';
-import { formatQuantity } from '../../../../rules/levels/units.ts';
-import { GROUND } from '../../../../rules/model/references.ts';
-import type { Design, Pull } from '../../../../rules/model/schema.ts';
+import { check } from '../../../../rules/check/index.ts';
+import type { CheckResult, Finding } from '../../../../rules/engine/index.ts';
+import { choosePull } from '../../../../rules/levels/index.ts';
+import { formatQuantity } from '../../../../rules/levels/index.ts';
+import { GROUND } from '../../../../rules/model/index.ts';
+import type { Design, Pull } from '../../../../rules/model/index.ts';
 import { refuse, type Refusal } from '../command.ts';
 import { findNet, lowestRail, netName, pinAt, railName, railOfPin } from './lookup.ts';
 import { newErrors, tryOn } from './preview.ts';
 import { DEFAULT_PULL_OHMS } from './translator.ts';
 import type { QuickFix } from './types.ts';
-import { railOf } from '../../../../rules/model/pinDefaults.ts';
+import { railOf } from '../../../../rules/model/index.ts';
 
 const ohms = (r: number) => formatQuantity(r, 'Ω');
 

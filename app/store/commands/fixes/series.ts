@@ -10,13 +10,13 @@
  * shown with the fix are read from a trial check of the design it would make, so they are the
  * engine's own figures. A pin without an injection limit gets a fix that says what it needs.
  */
-import { check } from '../../../../rules/check/check.ts';
-import type { CheckResult, FindingOf } from '../../../../rules/engine/types.ts';
-import { exceeds } from '../../../../rules/levels/compare.ts';
-import { levelAt } from '../../../../rules/levels/level.ts';
-import { E24, seriesValuesBetween } from '../../../../rules/levels/series.ts';
-import { formatQuantity } from '../../../../rules/levels/units.ts';
-import type { Design } from '../../../../rules/model/schema.ts';
+import { check } from '../../../../rules/check/index.ts';
+import type { CheckResult, FindingOf } from '../../../../rules/engine/index.ts';
+import { exceeds } from '../../../../rules/levels/index.ts';
+import { levelAt } from '../../../../rules/levels/index.ts';
+import { E24, seriesValuesBetween } from '../../../../rules/levels/index.ts';
+import { formatQuantity } from '../../../../rules/levels/index.ts';
+import type { Design } from '../../../../rules/model/index.ts';
 import { refuse } from '../command.ts';
 import { rangeOfRail, resolvedPin } from './lookup.ts';
 import { tryOn } from './preview.ts';

@@ -7,14 +7,14 @@
  * pull-range (its largest E24 value inside the range), as the pull-up fix sizes one.
  */
 import type { Draft } from 'immer';
-import { check } from '../../../../rules/check/check.ts';
-import type { Finding } from '../../../../rules/engine/types.ts';
-import { formatQuantity } from '../../../../rules/levels/units.ts';
-import type { Design, Discrete } from '../../../../rules/model/schema.ts';
+import { check } from '../../../../rules/check/index.ts';
+import type { Finding } from '../../../../rules/engine/index.ts';
+import { formatQuantity } from '../../../../rules/levels/index.ts';
+import type { Design, Discrete } from '../../../../rules/model/index.ts';
 import { freshId, refuse, type Refusal } from '../command.ts';
 import { takenIds } from '../discretes.ts';
 import { findNet, lowestRail, netName, pinAt, railName, railOfPin, uniqueId } from './lookup.ts';
-import { driveOf } from '../../../../rules/model/pinDefaults.ts';
+import { driveOf } from '../../../../rules/model/index.ts';
 import { tryOn } from './preview.ts';
 import { pullValueFrom } from './pulls.ts';
 import type { QuickFix } from './types.ts';

@@ -5,11 +5,11 @@
  * net to ground.
  */
 import type { Draft } from 'immer';
-import type { Design, Discrete } from '../../../../rules/model/schema.ts';
+import type { Design, Discrete } from '../../../../rules/model/index.ts';
 import { freshId, refuse, type Refusal } from '../command.ts';
 import { takenIds } from '../discretes.ts';
 import { findNet, netName, pinAt, railOfPin, uniqueId } from './lookup.ts';
-import type { FindingOf } from '../../../../rules/engine/types.ts';
+import type { FindingOf } from '../../../../rules/engine/index.ts';
 import { chipSize, DISCRETE_SIZE } from '../../../canvas/chipLayout.ts';
 import { freePlace } from '../../../canvas/freeSpot.ts';
 

@@ -4,11 +4,11 @@
  * rail B gets a new net, and a translator part joins them with one pin on each rail.
  */
 import type { Draft } from 'immer';
-import type { Design, Net, Part, Pin, Pull } from '../../../../rules/model/schema.ts';
-import { GROUND } from '../../../../rules/model/references.ts';
+import type { Design, Net, Part, Pin, Pull } from '../../../../rules/model/index.ts';
+import { GROUND } from '../../../../rules/model/index.ts';
 import { freshId, refuse, splitPinKey, type Refusal } from '../command.ts';
 import { findNet, netName, pinAt, railName, railOfPin, uniqueId } from './lookup.ts';
-import { driveOf } from '../../../../rules/model/pinDefaults.ts';
+import { driveOf } from '../../../../rules/model/index.ts';
 import { chipSize } from '../../../canvas/chipLayout.ts';
 import { freePlace } from '../../../canvas/freeSpot.ts';
 import type { QuickFix } from './types.ts';

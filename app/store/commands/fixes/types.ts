@@ -1,5 +1,5 @@
 import type { Draft } from 'immer';
-import type { Design } from '../../../../rules/model/schema.ts';
+import type { Design } from '../../../../rules/model/index.ts';
 import type { Refusal } from '../command.ts';
 
 /**

@@ -1,0 +1,2 @@
+/** The public face of rules/check/ for the editor. */
+export { check } from './check.ts';
