@@ -293,6 +293,9 @@ async function main() {
       nodes: number;
       edges: number;
     };
+    // A design opens zoomed to its errors; the first measures want the whole design in view.
+    await page.locator('.react-flow__controls-fitview').click();
+    await page.waitForTimeout(800);
     const overview = await page.evaluate('window.__probe.view()');
     log('opened, fitted view:', overview);
 
