@@ -261,6 +261,11 @@ interface StateTables {
   readonly nets: NetTable;
   readonly lone: LoneTable;
   readonly checked: number;
+  /**
+   * The state's clamp-current findings when an edit could not have changed them (kept from the
+   * earlier result); undefined when they must be derived again from the net tables.
+   */
+  readonly injection?: readonly Finding[];
 }
 
 /** Every net and lone pin of one power state; `allOn` is that state's tables in a scenario. */
@@ -354,14 +359,16 @@ function judgeStates(
   const base = judge(allOnCtx, undefined);
   const nets = new Map<string, NetTable>([[ALL_ON, base.nets]]);
   const lonePins = new Map<string, LoneTable>([[ALL_ON, base.lone]]);
-  const injection = new Map<string, readonly Finding[]>([[ALL_ON, injectionFindings(allOnCtx, index, base.nets)]]);
+  const injection = new Map<string, readonly Finding[]>([
+    [ALL_ON, base.injection ?? injectionFindings(allOnCtx, index, base.nets)],
+  ]);
   let checked = base.checked;
   for (const state of scenarios) {
     const ctx = contextFor(design, state, index, rules);
     const s = judge(ctx, base);
     nets.set(state.id, s.nets);
     lonePins.set(state.id, s.lone);
-    injection.set(state.id, injectionFindings(ctx, index, s.nets));
+    injection.set(state.id, s.injection ?? injectionFindings(ctx, index, s.nets));
     checked += s.checked;
   }
   return { allOnCtx, nets, lonePins, injection, checked };
@@ -586,11 +593,17 @@ function recheckState(
   dirty: Dirty,
   was: StateTables,
   allOn: StateTables | undefined,
+  injectionWas: readonly Finding[] | undefined,
 ): StateTables {
   const netChanges: [string, NetResult | undefined][] = [];
+  // Clamp current flows only through the paths of parts between chips: an edit that re-checks
+  // no net with such a path, before or after, leaves the state's injection findings as they were.
+  let pathTouched = false;
   for (const id of dirty.nets) {
     const net = index.nets.get(id);
-    netChanges.push([id, net === undefined ? undefined : checkNet(ctx, net, allOn?.nets.get(id))]);
+    const now = net === undefined ? undefined : checkNet(ctx, net, allOn?.nets.get(id));
+    if (now?.view.path !== undefined || was.nets.get(id)?.view.path !== undefined) pathTouched = true;
+    netChanges.push([id, now]);
   }
   const loneChanges: [string, readonly Finding[] | undefined][] = [];
   for (const key of dirty.lone) {
@@ -598,7 +611,12 @@ function recheckState(
     const found = alone ? judgeLonePin(ctx, index, key, allOn?.lone) : [];
     loneChanges.push([key, found.length > 0 ? found : undefined]);
   }
-  return { nets: was.nets.with(netChanges), lone: was.lone.with(loneChanges), checked: netChanges.length };
+  return {
+    nets: was.nets.with(netChanges),
+    lone: was.lone.with(loneChanges),
+    checked: netChanges.length,
+    ...(pathTouched || injectionWas === undefined ? {} : { injection: injectionWas }),
+  };
 }
 
 function incrementalCheck(design: Design, prev: CheckResult, inner: Internals, started: number): CheckResult {
@@ -616,9 +634,11 @@ function incrementalCheck(design: Design, prev: CheckResult, inner: Internals, s
   const { allOnCtx, nets, lonePins, injection, checked } = judgeStates(design, states, index, rules, (ctx, allOn) => {
     // all-on always has tables to re-check from; a new or changed scenario is judged whole.
     const was = previous(ctx.state.id);
+    // Kept only while the rails (their minimum loads, labels and ranges) are the same objects.
+    const injectionWas = design.rails === prev.design.rails ? prev.injectionFindings.get(ctx.state.id) : undefined;
     return allOn !== undefined && (dirty.states.has(ctx.state.id) || was === undefined)
       ? checkState(ctx, index, allOn)
-      : recheckState(ctx, index, dirty, was!, allOn);
+      : recheckState(ctx, index, dirty, was!, allOn, injectionWas);
   });
   const railFindings = checkGroups(allOnCtx, index, dirty.groups, prev.railFindings as LoneTable);
   const result = makeResult(
