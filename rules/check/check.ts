@@ -425,16 +425,32 @@ function movedOnly(old: Part, now: Part): boolean {
   return old.rail === now.rail && old.profile === now.profile && old.params === now.params && old.pins === now.pins;
 }
 
+const sameStrings = (a: readonly string[], b: readonly string[]): boolean =>
+  a === b || (a.length === b.length && a.every((x, k) => x === b[k]));
+
 /** What an edit from `prev.design` to `design` changed, read against the previous index. */
 function whatChanged(design: Design, prev: CheckResult, index: DesignIndex): Change {
   const before = prev.design;
   const dirty: Dirty = { nets: new Set(), pins: new Set(), lone: new Set(), groups: new Set(), states: new Set() };
 
-  // Power states: a changed scenario is re-checked whole; states come back in the file's order.
+  // Power states: a new scenario, or one whose rails or label changed, is re-checked whole; one
+  // whose pin states alone changed re-checks the pins it sets or set (their nets, or alone) in
+  // every state. States come back in the file's order.
   const states = before.scenarios === design.scenarios ? prev.states : powerStates(design);
   if (states !== prev.states) {
     const old = new Map(prev.states.map((s) => [s.id, s]));
-    for (const s of states) if (!old.has(s.id) || old.get(s.id)!.scenario !== s.scenario) dirty.states.add(s.id);
+    for (const s of states) {
+      const was = old.get(s.id)?.scenario;
+      const now = s.scenario;
+      if (was === now) continue;
+      if (was === undefined || now === undefined || was.label !== now.label || !sameStrings(was.off, now.off)) {
+        dirty.states.add(s.id);
+        continue;
+      }
+      const unchanged = new Set(was.pins ?? []);
+      for (const p of now.pins ?? []) if (!unchanged.delete(p)) dirty.pins.add(p.pin);
+      for (const p of unchanged) dirty.pins.add(p.pin);
+    }
   }
 
   // Rails: everything on a changed rail, or pulled to it.

@@ -2,11 +2,13 @@
  * The incremental check equals a full check: random designs, random sequences of edits of
  * every kind, and after every edit the two results deep-equal.
  */
+import { readFileSync } from 'node:fs';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { check } from '../../rules/check/check.ts';
 import type { CheckResult } from '../../rules/engine/types.ts';
 import { validateDesign } from '../../rules/model/reader.ts';
+import type { Design, PinState } from '../../rules/model/schema.ts';
 import { applyEdit, EDIT_KINDS, generateDesign, rng } from '../support/generator.ts';
 
 /** The parts of a result that must agree (stats differ by design). */
@@ -79,5 +81,38 @@ describe('incremental check', () => {
     const copy = structuredClone(design);
     const next = check(copy, first);
     expect(comparable(next)).toEqual(comparable(check(copy)));
+  });
+});
+
+/**
+ * A power state whose pin states alone change re-checks the pins it sets or set, not the whole
+ * state: each case edits the example's reset state and holds the incremental result to a full
+ * check (a pin whose state is taken away must be judged again as in all-on).
+ */
+describe('incremental check: pin states of a power state', () => {
+  const example = (): Design => {
+    const read = validateDesign(
+      JSON.parse(readFileSync(new URL('../../rules/examples/greenhouse.json', import.meta.url), 'utf8')),
+    );
+    if (!read.ok) throw new Error('the example does not read');
+    return read.design;
+  };
+  const withReset = (d: Design, pins: (p: readonly PinState[]) => PinState[]): Design => ({
+    ...d,
+    scenarios: d.scenarios!.map((s) => (s.id === 'reset' ? { ...s, pins: pins(s.pins ?? []) } : s)),
+  });
+  it.each<[string, (p: readonly PinState[]) => PinState[]]>([
+    ['a pin state taken away', (p) => p.slice(1)],
+    ['every pin state taken away', () => []],
+    ['a pin state changed', (p) => p.map((x, k) => (k === 0 ? { ...x, role: 'output' as const } : x))],
+    ['a pin state added', (p) => [...p, { pin: 'U1.FAULT_N', role: 'output' as const }]],
+  ])('%s', (_name, edit) => {
+    const before = example();
+    const after = withReset(before, edit);
+    const incremental = check(after, check(before));
+    expect(incremental.stats.incremental).toBe(true);
+    expect(comparable(incremental)).toEqual(comparable(check(after)));
+    // Only the nets of the pins involved were judged again, in each power state.
+    expect(incremental.stats.netsChecked).toBeLessThan(after.nets.length);
   });
 });
