@@ -86,6 +86,67 @@ const countLists = (bucket: ReadonlyMap<string, readonly Finding[]>): Counts => 
   return c;
 };
 
+/** A bucket's counts, cached by the bucket's identity as `tallyOf` caches them. */
+function countsOf<V>(
+  bucket: ReadonlyMap<string, V>,
+  cache: WeakMap<object, Counts>,
+  measure: (bucket: ReadonlyMap<string, V>) => Counts,
+): Counts {
+  let c = cache.get(bucket);
+  if (c === undefined) {
+    c = measure(bucket);
+    cache.set(bucket, c);
+  }
+  return c;
+}
+
+/**
+ * The summary of `t` from the summary of `was`, the tables it came from: only the buckets that
+ * are not the very same objects are counted (an edit copies a few of each table's buckets). Falls
+ * back on counting everything where the two do not line up (a state added or gone, a table
+ * spread again).
+ */
+export function summariseFrom(t: Tables, was: Tables, wasSummary: Summary): Summary {
+  const total: Counts = { ...wasSummary };
+  const minus = (c: Counts) => {
+    total.error -= c.error;
+    total.warning -= c.warning;
+    total.info -= c.info;
+    total.waived -= c.waived;
+  };
+  const diff = <V>(
+    a: ChunkedMap<V>,
+    b: ChunkedMap<V>,
+    cache: WeakMap<object, Counts>,
+    measure: (bucket: ReadonlyMap<string, V>) => Counts,
+  ): boolean => {
+    const x = a.chunks();
+    const y = b.chunks();
+    if (x.length !== y.length) return false;
+    for (let k = 0; k < x.length; k++) {
+      if (x[k] === y[k]) continue;
+      minus(countsOf(x[k]!, cache, measure));
+      add(total, countsOf(y[k]!, cache, measure));
+    }
+    return true;
+  };
+  if (t.nets.size !== was.nets.size || t.lonePins.size !== was.lonePins.size) return summarise(t);
+  for (const [state, table] of t.nets) {
+    const old = was.nets.get(state);
+    if (old === undefined || !diff(old, table, netCounts, countNets)) return summarise(t);
+  }
+  for (const [state, table] of t.lonePins) {
+    const old = was.lonePins.get(state);
+    if (old === undefined || !diff(old, table, listCounts, countLists)) return summarise(t);
+  }
+  if (!diff(was.railFindings, t.railFindings, listCounts, countLists)) return summarise(t);
+  const injected = zero();
+  for (const f of was.injection.values()) countInto(injected, f);
+  minus(injected);
+  for (const f of t.injection.values()) countInto(total, f);
+  return total;
+}
+
 export function summarise(t: Tables): Summary {
   const total = zero();
   for (const table of t.nets.values()) add(total, tallyOf(table, netCounts, countNets, add, zero));
@@ -298,7 +359,13 @@ function checkGroups(
   return railFindings.with(changes);
 }
 
-function makeResult(design: Design, states: readonly PowerState[], t: Tables, stats: CheckStats): CheckResult {
+function makeResult(
+  design: Design,
+  states: readonly PowerState[],
+  t: Tables,
+  stats: CheckStats,
+  from?: { readonly tables: Tables; readonly summary: Summary },
+): CheckResult {
   let sorted: Finding[] | undefined;
   const result = {
     design,
@@ -307,7 +374,7 @@ function makeResult(design: Design, states: readonly PowerState[], t: Tables, st
     lonePins: t.lonePins,
     railFindings: t.railFindings,
     injectionFindings: t.injection,
-    summary: summarise(t),
+    summary: from === undefined ? summarise(t) : summariseFrom(t, from.tables, from.summary),
     stats,
   } as Omit<CheckResult, 'findings'> as CheckResult;
   // The ordered list is built when first read: an edit changes a few entries of the tables,
@@ -657,11 +724,18 @@ function incrementalCheck(design: Design, prev: CheckResult, inner: Internals, s
       : recheckState(ctx, index, dirty, was!, allOn, injectionWas);
   });
   const railFindings = checkGroups(allOnCtx, index, dirty.groups, prev.railFindings as LoneTable);
+  const wasTables: Tables = {
+    nets: prev.nets as ReadonlyMap<string, NetTable>,
+    lonePins: prev.lonePins as ReadonlyMap<string, LoneTable>,
+    railFindings: prev.railFindings as LoneTable,
+    injection: prev.injectionFindings,
+  };
   const result = makeResult(
     design,
     states,
     { nets, lonePins, railFindings, injection },
     { netsChecked: checked, incremental: true, ms: now() - started },
+    { tables: wasTables, summary: prev.summary },
   );
   internals.set(result, { index, rules, consumed: false });
   return result;
