@@ -587,6 +587,32 @@ function seriesDetail(path: ResistorPath, ohms: CaseOhms): Record<string, number
   return out;
 }
 
+/**
+ * A receiver's high across a shifter: its own node's pull-up level against its VIH (the driver
+ * only lets go, so the driver's supply plays no part).
+ */
+function pulledHighSide(
+  pulled: { v: number; r: number; vpull: number },
+  threshold: number,
+  receiverVdd: number,
+  minMargin: number,
+  detail: Record<string, number>,
+): Scored {
+  return {
+    out: pulled.v,
+    threshold,
+    margin: pulled.v - threshold,
+    driverVdd: null,
+    receiverVdd,
+    vpull: pulled.vpull,
+    estimate: false,
+    status: judge(pulled.v, threshold, minMargin),
+    load: 0,
+    detail,
+    score: pulled.v - threshold,
+  };
+}
+
 /** The high level a node's own pull-ups give it: Thévenin of the pulls (each at its high end) less the input currents' drop. */
 function pulledHigh(
   node: PathNode,
@@ -636,20 +662,11 @@ function shifterPairs(
         const leakage = part.kind === 'diode-shifter' ? part.leakageMax : 0;
         const pulled = pulledHigh(link.self, c, leakage);
         if (vih !== undefined && pulled !== undefined) {
-          const threshold = levelAt(vih, receiverVdd);
-          high = keepWorst(high, {
-            out: pulled.v,
-            threshold,
-            margin: pulled.v - threshold,
-            driverVdd: null,
-            receiverVdd,
-            vpull: pulled.vpull,
-            estimate: false,
-            status: judge(pulled.v, threshold, settings.minMargin),
-            load: 0,
-            detail: { pullResistance: pulled.r, ...(part.kind === 'diode-shifter' ? { leakage } : {}) },
-            score: pulled.v - threshold,
-          });
+          const detail = { pullResistance: pulled.r, ...(part.kind === 'diode-shifter' ? { leakage } : {}) };
+          high = keepWorst(
+            high,
+            pulledHighSide(pulled, levelAt(vih, receiverVdd), receiverVdd, settings.minMargin, detail),
+          );
         }
         const vol = outputLevel(driver.params.vol, load.low, driverVdd, 'low');
         if (vil !== undefined && vol !== undefined) {
@@ -730,20 +747,11 @@ function throughPathPairs(
           const leakage = part.kind === 'diode-shifter' ? part.leakageMax : 0;
           const pulled = pulledHigh(link.self, c, leakage);
           if (vih !== undefined && pulled !== undefined) {
-            const threshold = levelAt(vih, receiverVdd);
-            high = keepWorst(high, {
-              out: pulled.v,
-              threshold,
-              margin: pulled.v - threshold,
-              driverVdd: null,
-              receiverVdd,
-              vpull: pulled.vpull,
-              estimate: false,
-              status: judge(pulled.v, threshold, settings.minMargin),
-              load: 0,
-              detail: { pullResistance: pulled.r },
-              score: pulled.v - threshold,
-            });
+            const detail = { pullResistance: pulled.r };
+            high = keepWorst(
+              high,
+              pulledHighSide(pulled, levelAt(vih, receiverVdd), receiverVdd, settings.minMargin, detail),
+            );
           }
           if (vil === undefined || driver.params.vol === undefined || driver.params.vol.length === 0) continue;
           const iFar = pullCurrentAt(link.self, c, 0);

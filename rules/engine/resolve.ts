@@ -3,35 +3,10 @@
  * pin's profile (or the part's). Lists and objects are taken whole, never merged.
  * Results are cached by the identity of the objects they came from, outside the document.
  */
-import type { Design, Params, Part, Pin, Profile } from '../model/schema.ts';
+import { PARAM_KEYS, type Design, type Params, type Part, type Pin, type Profile } from '../model/schema.ts';
 import { resolveProfile } from '../profiles/index.ts';
 import { driveOf, profileIdOf, railOf } from '../model/pinDefaults.ts';
 import type { ParamOrigin, PinView, ResolvedPin } from './types.ts';
-
-const PARAM_KEYS: readonly (keyof Params)[] = [
-  'vih',
-  'vil',
-  'schmitt',
-  'iih',
-  'iil',
-  'cin',
-  'viMax',
-  'unpoweredSafe',
-  'viMaxOff',
-  'voh',
-  'vol',
-  'ioMax',
-  'maxInputRamp',
-  'vddRange',
-  'deltaIcc',
-  'deltaIccDrop',
-  'viMin',
-  'injectionMax',
-  'busHold',
-  'seriesResistance',
-  'minExternalPull',
-  'maxLoadCapacitance',
-];
 
 /**
  * A pin's resolution and its views in the two power conditions, made once each. The engine's

@@ -397,6 +397,9 @@ export type Part = z.infer<typeof PartSchema>;
 export type Pin = z.infer<typeof PinSchema>;
 export type Net = z.infer<typeof NetSchema>;
 export type Params = z.infer<typeof ParamsSchema>;
+
+/** The parameter keys in the format's order (resolution takes each whole; the writer keeps this order). */
+export const PARAM_KEYS = Object.keys(ParamsSchema.shape) as readonly (keyof Params)[];
 export type Pull = z.infer<typeof PullSchema>;
 export type Waiver = z.infer<typeof WaiverSchema>;
 export type PinState = z.infer<typeof PinStateSchema>;

@@ -4,7 +4,7 @@
  * a final newline. Keys whose value is undefined are left out. Writing twice gives the same
  * text, and reading what was written gives the same design back.
  */
-import type { Design } from './schema.ts';
+import { PARAM_KEYS, type Design } from './schema.ts';
 
 /** The key order of one kind of object, and the orders of the objects below it. */
 export interface KeyOrder {
@@ -16,30 +16,7 @@ const leaf = (...keys: string[]): KeyOrder => ({ keys });
 
 const LEVEL_POINT = leaf('v', 'i', 'vddMin');
 const PARAMS: KeyOrder = {
-  keys: [
-    'vih',
-    'vil',
-    'schmitt',
-    'iih',
-    'iil',
-    'cin',
-    'viMax',
-    'unpoweredSafe',
-    'viMaxOff',
-    'voh',
-    'vol',
-    'ioMax',
-    'maxInputRamp',
-    'vddRange',
-    'deltaIcc',
-    'deltaIccDrop',
-    'viMin',
-    'injectionMax',
-    'busHold',
-    'seriesResistance',
-    'minExternalPull',
-    'maxLoadCapacitance',
-  ],
+  keys: PARAM_KEYS,
   children: {
     schmitt: leaf('vtPlus', 'vtMinus'),
     voh: LEVEL_POINT,
