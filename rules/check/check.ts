@@ -23,7 +23,7 @@ import { completeFinding, restampFinding, sortFindings } from '../engine/finding
 import { DesignIndex, groupKey, splitGroupKey } from '../engine/designIndex.ts';
 import { changedById } from '../engine/diff.ts';
 import { ChunkedMap, tallyOf } from '../engine/chunkedMap.ts';
-import { injectionsOf } from '../engine/injection.ts';
+import { type Injection, injectionsOf } from '../engine/injection.ts';
 import type { CheckResult, CheckStats, Finding, NetResult, PinView, PowerState, Summary } from '../engine/types.ts';
 
 // The engine runs in Node and the browser alike; both have a monotonic clock here.
@@ -56,8 +56,10 @@ interface Tables {
 }
 
 // ---------------------------------------------------------------------------------------------
-// The summary, derived from the tables. Each bucket's counts are cached by the bucket's identity,
-// so a result after an edit counts again only the buckets that edit copied.
+// The summary, derived from the tables. A full check counts every finding. An edit counts only
+// the entries it replaced: each table change passes through `Tally.replace` with the entry it
+// had and the entry it has, so the summary is the earlier one plus what those entries add and
+// take away (a finding's severity and waiver are its own, so an entry kept is counted as it was).
 
 type Counts = { error: number; warning: number; info: number; waived: number };
 const zero = (): Counts => ({ error: 0, warning: 0, info: 0, waived: 0 });
@@ -67,93 +69,53 @@ const add = (into: Counts, part: Counts): void => {
   into.info += part.info;
   into.waived += part.waived;
 };
-function countInto(into: Counts, findings: readonly Finding[]): void {
+function countInto(into: Counts, findings: readonly Finding[], sign: 1 | -1 = 1): void {
   for (const f of findings) {
-    if (f.waived !== undefined) into.waived++;
-    else into[f.severity]++;
+    if (f.waived !== undefined) into.waived += sign;
+    else into[f.severity] += sign;
   }
 }
-const netCounts = new WeakMap<object, Counts>();
-const listCounts = new WeakMap<object, Counts>();
-const countNets = (bucket: ReadonlyMap<string, NetResult>): Counts => {
-  const c = zero();
-  for (const r of bucket.values()) countInto(c, r.findings);
-  return c;
-};
-const countLists = (bucket: ReadonlyMap<string, readonly Finding[]>): Counts => {
-  const c = zero();
-  for (const f of bucket.values()) countInto(c, f);
-  return c;
-};
 
-/** A bucket's counts, cached by the bucket's identity as `tallyOf` caches them. */
-function countsOf<V>(
-  bucket: ReadonlyMap<string, V>,
-  cache: WeakMap<object, Counts>,
-  measure: (bucket: ReadonlyMap<string, V>) => Counts,
-): Counts {
-  let c = cache.get(bucket);
-  if (c === undefined) {
-    c = measure(bucket);
-    cache.set(bucket, c);
+/** The counts an edit's replaced entries change the summary by. */
+class Tally {
+  readonly counts = zero();
+
+  replace(was: readonly Finding[] | undefined, now: readonly Finding[] | undefined): void {
+    if (was === now) return;
+    if (was !== undefined) countInto(this.counts, was, -1);
+    if (now !== undefined) countInto(this.counts, now, 1);
   }
-  return c;
-}
 
-/**
- * The summary of `t` from the summary of `was`, the tables it came from: only the buckets that
- * are not the very same objects are counted (an edit copies a few of each table's buckets). Falls
- * back on counting everything where the two do not line up (a state added or gone, a table
- * spread again).
- */
-export function summariseFrom(t: Tables, was: Tables, wasSummary: Summary): Summary {
-  const total: Counts = { ...wasSummary };
-  const minus = (c: Counts) => {
-    total.error -= c.error;
-    total.warning -= c.warning;
-    total.info -= c.info;
-    total.waived -= c.waived;
-  };
-  const diff = <V>(
-    a: ChunkedMap<V>,
-    b: ChunkedMap<V>,
-    cache: WeakMap<object, Counts>,
-    measure: (bucket: ReadonlyMap<string, V>) => Counts,
-  ): boolean => {
-    const x = a.chunks();
-    const y = b.chunks();
-    if (x.length !== y.length) return false;
-    for (let k = 0; k < x.length; k++) {
-      if (x[k] === y[k]) continue;
-      minus(countsOf(x[k]!, cache, measure));
-      add(total, countsOf(y[k]!, cache, measure));
+  /** A whole table replaced (a power state judged whole, added or gone). */
+  replaceTables(
+    was: Pick<StateTables, 'nets' | 'lone'> | undefined,
+    now: Pick<StateTables, 'nets' | 'lone'> | undefined,
+  ): void {
+    if (was !== undefined) {
+      for (const r of was.nets.values()) this.replace(r.findings, undefined);
+      for (const f of was.lone.values()) this.replace(f, undefined);
     }
-    return true;
-  };
-  if (t.nets.size !== was.nets.size || t.lonePins.size !== was.lonePins.size) return summarise(t);
-  for (const [state, table] of t.nets) {
-    const old = was.nets.get(state);
-    if (old === undefined || !diff(old, table, netCounts, countNets)) return summarise(t);
+    if (now !== undefined) {
+      for (const r of now.nets.values()) this.replace(undefined, r.findings);
+      for (const f of now.lone.values()) this.replace(undefined, f);
+    }
   }
-  for (const [state, table] of t.lonePins) {
-    const old = was.lonePins.get(state);
-    if (old === undefined || !diff(old, table, listCounts, countLists)) return summarise(t);
+
+  /** The summary `was` moved by these counts. */
+  applyTo(was: Summary): Summary {
+    const total: Counts = { error: was.error, warning: was.warning, info: was.info, waived: was.waived };
+    add(total, this.counts);
+    return total;
   }
-  if (!diff(was.railFindings, t.railFindings, listCounts, countLists)) return summarise(t);
-  const injected = zero();
-  for (const f of was.injection.values()) countInto(injected, f);
-  minus(injected);
-  for (const f of t.injection.values()) countInto(total, f);
-  return total;
 }
 
+/** Every finding of the tables counted: a full check's summary. */
 export function summarise(t: Tables): Summary {
-  const total = zero();
-  for (const table of t.nets.values()) add(total, tallyOf(table, netCounts, countNets, add, zero));
-  for (const table of t.lonePins.values()) add(total, tallyOf(table, listCounts, countLists, add, zero));
-  add(total, tallyOf(t.railFindings, listCounts, countLists, add, zero));
-  for (const f of t.injection.values()) countInto(total, f);
-  return total;
+  const tally = new Tally();
+  for (const [state, nets] of t.nets) tally.replaceTables(undefined, { nets, lone: t.lonePins.get(state)! });
+  for (const f of t.railFindings.values()) tally.replace(undefined, f);
+  for (const f of t.injection.values()) tally.replace(undefined, f);
+  return tally.applyTo(zero());
 }
 
 // ---------------------------------------------------------------------------------------------
@@ -347,6 +309,7 @@ function checkGroups(
   index: DesignIndex,
   keys: Iterable<string>,
   railFindings: LoneTable,
+  tally?: Tally,
 ): LoneTable {
   const railById = new Map(ctx.design.rails.map((r) => [r.id, r]));
   const changes: [string, readonly Finding[] | undefined][] = [];
@@ -354,7 +317,9 @@ function checkGroups(
     const [railId, profile] = splitGroupKey(group);
     const rail = railById.get(railId);
     const found = rail === undefined || !index.groups.has(group) ? [] : checkGroup(ctx, index, rail, profile);
-    changes.push([group, found.length > 0 ? found : undefined]);
+    const now = found.length > 0 ? found : undefined;
+    tally?.replace(railFindings.get(group), now);
+    changes.push([group, now]);
   }
   return railFindings.with(changes);
 }
@@ -364,7 +329,7 @@ function makeResult(
   states: readonly PowerState[],
   t: Tables,
   stats: CheckStats,
-  from?: { readonly tables: Tables; readonly summary: Summary },
+  summary: Summary,
 ): CheckResult {
   let sorted: Finding[] | undefined;
   const result = {
@@ -374,7 +339,7 @@ function makeResult(
     lonePins: t.lonePins,
     railFindings: t.railFindings,
     injectionFindings: t.injection,
-    summary: from === undefined ? summarise(t) : summariseFrom(t, from.tables, from.summary),
+    summary,
     stats,
   } as Omit<CheckResult, 'findings'> as CheckResult;
   // The ordered list is built when first read: an edit changes a few entries of the tables,
@@ -448,11 +413,13 @@ function fullCheck(design: Design, rules: readonly AnyRule[], started: number): 
     checkState(ctx, index, allOn),
   );
   const railFindings = checkGroups(allOnCtx, index, index.groups.keys(), ChunkedMap.empty());
+  const tables: Tables = { nets, lonePins, railFindings, injection };
   const result = makeResult(
     design,
     states,
-    { nets, lonePins, railFindings, injection },
+    tables,
     { netsChecked: checked, incremental: false, ms: now() - started },
+    summarise(tables),
   );
   internals.set(result, { index, rules, consumed: false });
   return result;
@@ -669,6 +636,24 @@ function advanceIndex(index: DesignIndex, design: Design, change: Change): void 
 // ---------------------------------------------------------------------------------------------
 // Stages 2 and 3: re-check what is dirty, keep what is clean.
 
+/**
+ * Whether two results of one net (one id, so the `net` of each current is the same) put the same
+ * clamp currents into the same rails through the same pins.
+ */
+function sameInjections(was: NetResult | undefined, now: NetResult | undefined): boolean {
+  const a = was?.view.path === undefined ? NO_INJECTIONS : injectionsOf(was.view);
+  const b = now?.view.path === undefined ? NO_INJECTIONS : injectionsOf(now.view);
+  if (a.length !== b.length) return false;
+  for (let k = 0; k < a.length; k++) {
+    const x = a[k]!;
+    const y = b[k]!;
+    if (x.pin !== y.pin || x.rail !== y.rail || !Object.is(x.current, y.current)) return false;
+  }
+  return true;
+}
+
+const NO_INJECTIONS: readonly Injection[] = [];
+
 /** One power state after an edit: its dirty nets and lone pins judged again, the rest kept. */
 function recheckState(
   ctx: StateContext,
@@ -677,28 +662,34 @@ function recheckState(
   was: StateTables,
   allOn: StateTables | undefined,
   injectionWas: readonly Finding[] | undefined,
+  tally: Tally,
 ): StateTables {
   const netChanges: [string, NetResult | undefined][] = [];
-  // Clamp current flows only through the paths of parts between chips: an edit that re-checks
-  // no net with such a path, before or after, leaves the state's injection findings as they were.
-  let pathTouched = false;
+  // Clamp current flows only through the paths of parts between chips: an edit whose re-checked
+  // nets inject what they injected before (none, for a net without such a path) leaves the
+  // state's injection findings as they were.
+  let injectionChanged = false;
   for (const id of dirty.nets) {
     const net = index.nets.get(id);
     const now = net === undefined ? undefined : checkNet(ctx, net, allOn?.nets.get(id));
-    if (now?.view.path !== undefined || was.nets.get(id)?.view.path !== undefined) pathTouched = true;
+    const before = was.nets.get(id);
+    if (!injectionChanged && !sameInjections(before, now)) injectionChanged = true;
+    tally.replace(before?.findings, now?.findings);
     netChanges.push([id, now]);
   }
   const loneChanges: [string, readonly Finding[] | undefined][] = [];
   for (const key of dirty.lone) {
     const alone = index.pins.has(key) && !index.netOfPin.has(key);
     const found = alone ? judgeLonePin(ctx, index, key, allOn?.lone) : [];
-    loneChanges.push([key, found.length > 0 ? found : undefined]);
+    const now = found.length > 0 ? found : undefined;
+    tally.replace(was.lone.get(key), now);
+    loneChanges.push([key, now]);
   }
   return {
     nets: was.nets.with(netChanges),
     lone: was.lone.with(loneChanges),
     checked: netChanges.length,
-    ...(pathTouched || injectionWas === undefined ? {} : { injection: injectionWas }),
+    ...(injectionChanged || injectionWas === undefined ? {} : { injection: injectionWas }),
   };
 }
 
@@ -714,28 +705,33 @@ function incrementalCheck(design: Design, prev: CheckResult, inner: Internals, s
     const lone = prev.lonePins.get(id) as LoneTable | undefined;
     return nets === undefined || lone === undefined ? undefined : { nets, lone, checked: 0 };
   };
+  const tally = new Tally();
   const { allOnCtx, nets, lonePins, injection, checked } = judgeStates(design, states, index, rules, (ctx, allOn) => {
     // all-on always has tables to re-check from; a new or changed scenario is judged whole.
     const was = previous(ctx.state.id);
     // Kept only while the rails (their minimum loads, labels and ranges) are the same objects.
     const injectionWas = design.rails === prev.design.rails ? prev.injectionFindings.get(ctx.state.id) : undefined;
-    return allOn !== undefined && (dirty.states.has(ctx.state.id) || was === undefined)
-      ? checkState(ctx, index, allOn)
-      : recheckState(ctx, index, dirty, was!, allOn, injectionWas);
+    if (allOn !== undefined && (dirty.states.has(ctx.state.id) || was === undefined)) {
+      const whole = checkState(ctx, index, allOn);
+      tally.replaceTables(was, whole);
+      return whole;
+    }
+    return recheckState(ctx, index, dirty, was!, allOn, injectionWas, tally);
   });
-  const railFindings = checkGroups(allOnCtx, index, dirty.groups, prev.railFindings as LoneTable);
-  const wasTables: Tables = {
-    nets: prev.nets as ReadonlyMap<string, NetTable>,
-    lonePins: prev.lonePins as ReadonlyMap<string, LoneTable>,
-    railFindings: prev.railFindings as LoneTable,
-    injection: prev.injectionFindings,
-  };
+  // Power states gone with the edit take their findings with them.
+  for (const s of prev.states) {
+    if (nets.has(s.id)) continue;
+    tally.replaceTables(previous(s.id), undefined);
+    tally.replace(prev.injectionFindings.get(s.id), undefined);
+  }
+  for (const [state, found] of injection) tally.replace(prev.injectionFindings.get(state), found);
+  const railFindings = checkGroups(allOnCtx, index, dirty.groups, prev.railFindings as LoneTable, tally);
   const result = makeResult(
     design,
     states,
     { nets, lonePins, railFindings, injection },
     { netsChecked: checked, incremental: true, ms: now() - started },
-    { tables: wasTables, summary: prev.summary },
+    tally.applyTo(prev.summary),
   );
   internals.set(result, { index, rules, consumed: false });
   return result;

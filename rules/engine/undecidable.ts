@@ -47,8 +47,29 @@ function at(path: string, root: unknown): unknown {
     );
 }
 
+/**
+ * Whether `value` holds a number that is not finite. Every finding's values and data are asked
+ * this, and almost every answer is no: it walks without building the paths (nor any array), so
+ * that the paths are worked out only for the rare draft that has one.
+ */
+export function hasNonFinite(value: unknown): boolean {
+  if (typeof value === 'number') return !Number.isFinite(value);
+  if (value === null || typeof value !== 'object') return false;
+  if (Array.isArray(value)) {
+    for (let k = 0; k < value.length; k++) if (hasNonFinite(value[k])) return true;
+    return false;
+  }
+  for (const k in value) {
+    if (Object.hasOwn(value, k) && hasNonFinite((value as Record<string, unknown>)[k])) return true;
+  }
+  return false;
+}
+
+const NONE: readonly string[] = Object.freeze([]);
+
 /** The non-finite numbers of a draft: its values' paths, then its message data's not already named. */
-export function undecidablePaths(values: unknown, data: unknown): string[] {
+export function undecidablePaths(values: unknown, data: unknown): readonly string[] {
+  if (!hasNonFinite(values) && !hasNonFinite(data)) return NONE;
   const paths = nonFinitePaths(values);
   for (const p of nonFinitePaths(data)) if (!paths.includes(p)) paths.push(p);
   return paths;

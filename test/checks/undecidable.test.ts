@@ -11,7 +11,7 @@ import { describe, expect, it } from 'vitest';
 import type { AnyRule } from '../../rules/checks/defineRule.ts';
 import { RULES } from '../../rules/checks/index.ts';
 import { check } from '../../rules/check/check.ts';
-import { nonFinitePaths } from '../../rules/engine/undecidable.ts';
+import { hasNonFinite, nonFinitePaths, undecidablePaths } from '../../rules/engine/undecidable.ts';
 import type { Design } from '../../rules/model/schema.ts';
 import { bidir, design, input, net, output, part, rail, rail3v3, rail5v0, scenario } from '../support/build.ts';
 import { findingsOf } from '../support/ruleTester.ts';
@@ -231,6 +231,26 @@ describe('a non-finite number is an error, never silence', () => {
     };
     const result = check(waived);
     expect(result.summary.error).toBeGreaterThan(0);
+  });
+});
+
+// The quick test that spares every finding the path walk must agree with the walk, at any depth.
+describe('hasNonFinite agrees with nonFinitePaths', () => {
+  const values: [string, unknown][] = [
+    ['a finite number', 3.3],
+    ['zero and negative zero', [0, -0]],
+    ['NaN', Number.NaN],
+    ['+infinity', Number.POSITIVE_INFINITY],
+    ['−infinity deep in an object', { a: { b: { c: Number.NEGATIVE_INFINITY } } }],
+    ['NaN in an array of objects', { currents: [{ current: 1e-3 }, { current: Number.NaN }] }],
+    ['null, strings and booleans', { a: null, b: 'NaN', c: true, d: undefined }],
+    ['the largest finite number', Number.MAX_VALUE],
+    ['an empty object and array', { a: {}, b: [] }],
+  ];
+  it.each(values)('%s', (_name, value) => {
+    expect(hasNonFinite(value)).toBe(nonFinitePaths(value).length > 0);
+    expect(undecidablePaths(value, {}).length > 0).toBe(hasNonFinite(value));
+    expect(undecidablePaths({}, value).length > 0).toBe(hasNonFinite(value));
   });
 });
 

@@ -6,7 +6,7 @@
  * Edits go through immer's `produce`, as the editor's commands do, so that everything an edit
  * did not touch keeps its identity: that sharing is what the incremental check relies on.
  */
-import { produce } from 'immer';
+import { original, produce } from 'immer';
 import type { Design, Discrete, Net, Part, Pin, Rail } from '../../rules/model/schema.ts';
 
 /** mulberry32: a small, fast, seedable generator (public-domain algorithm). */
@@ -295,9 +295,18 @@ export const EDIT_KINDS = [
 ] as const;
 export type EditKind = (typeof EDIT_KINDS)[number];
 
-/** Removes a pin from whatever net holds it (dropping a net left with fewer than two pins is not needed: one-pin nets are valid). */
+/**
+ * Removes a pin from whatever net holds it (dropping a net left with fewer than two pins is not
+ * needed: one-pin nets are valid). It searches the design as it was before this edit, not the
+ * draft: reading every net through immer's draft makes a proxy per net, whose garbage the
+ * collector then clears in the middle of the check being timed. The draft's nets keep the
+ * base's order (edits here only append nets), and a pin is unplugged at most once per edit.
+ */
 function unplug(d: Design, key: string): void {
-  for (const net of d.nets) {
+  const base = original(d)!.nets;
+  for (let i = 0; i < base.length; i++) {
+    if (!base[i]!.pins.includes(key)) continue;
+    const net = d.nets[i]!;
     const k = net.pins.indexOf(key);
     if (k >= 0) {
       net.pins.splice(k, 1);
@@ -316,7 +325,7 @@ export function applyEdit(design: Design, kind: EditKind, r: Rand): Design {
         partSerial++;
         const part = makePart(r, 100000 + partSerial, d.rails, 0.1);
         part.id = `X${partSerial}_${Math.floor(r() * 1e6)}`;
-        if (d.parts.some((p) => p.id === part.id)) return;
+        if (original(d)!.parts.some((p) => p.id === part.id)) return;
         d.parts.push(part);
         if (d.nets.length > 0 && part.pins.length > 0) pick(r, d.nets).pins.push(`${part.id}.${part.pins[0]!.id}`);
         return;
@@ -328,7 +337,8 @@ export function applyEdit(design: Design, kind: EditKind, r: Rand): Design {
         for (const pin of part.pins) unplug(d, `${part.id}.${pin.id}`);
         for (const sc of d.scenarios ?? [])
           if (sc.pins !== undefined) sc.pins = sc.pins.filter((p) => !p.pin.startsWith(`${part.id}.`));
-        d.parts.splice(k, 1);
+        // A splice through the draft would make a proxy of every later part.
+        d.parts = original(d)!.parts.filter((_, i) => i !== k);
         return;
       }
       case 'connect': {
@@ -341,7 +351,7 @@ export function applyEdit(design: Design, kind: EditKind, r: Rand): Design {
         return;
       }
       case 'disconnect': {
-        const withPins = d.nets.filter((n) => n.pins.length > 0);
+        const withPins = original(d)!.nets.filter((n) => n.pins.length > 0);
         if (withPins.length === 0) return;
         const net = pick(r, withPins);
         unplug(d, pick(r, net.pins));
@@ -399,8 +409,9 @@ export function applyEdit(design: Design, kind: EditKind, r: Rand): Design {
         if (a === b) return;
         discreteSerial++;
         const made = makeDiscrete(r, a, b, d.rails, `W${discreteSerial}_${Math.floor(r() * 1e6)}`);
-        if (d.parts.some((p) => p.id === made.id) || (d.discretes ?? []).some((x) => x.id === made.id)) return;
-        d.discretes = [...(d.discretes ?? []), made];
+        const base = original(d)!;
+        if (base.parts.some((p) => p.id === made.id) || (base.discretes ?? []).some((x) => x.id === made.id)) return;
+        d.discretes = [...(base.discretes ?? []), made];
         return;
       }
       case 'remove-discrete': {
