@@ -15,7 +15,7 @@
  */
 import type { Design, Discrete, Net, Part, Rail } from '../model/schema.ts';
 import { RULES } from '../checks/index.ts';
-import type { AnyRule } from '../engine/rule.ts';
+import type { AnyRule, Draft, MessageFns } from '../engine/rule.ts';
 import { ALL_ON, effectiveSettings, powerStates, railStates } from '../engine/powerStates.ts';
 import { namesOf } from '../engine/names.ts';
 import { loneRails, pinView, prepareNet, type PrepareContext } from '../engine/prepare.ts';
@@ -91,13 +91,14 @@ class Tally {
     was: Pick<StateTables, 'nets' | 'lone'> | undefined,
     now: Pick<StateTables, 'nets' | 'lone'> | undefined,
   ): void {
+    // Bucket by bucket: a generator's entries cost an object each, and this walks every net.
     if (was !== undefined) {
-      for (const r of was.nets.values()) this.replace(r.findings, undefined);
-      for (const f of was.lone.values()) this.replace(f, undefined);
+      for (const b of was.nets.chunks()) for (const r of b.values()) this.replace(r.findings, undefined);
+      for (const b of was.lone.chunks()) for (const f of b.values()) this.replace(f, undefined);
     }
     if (now !== undefined) {
-      for (const r of now.nets.values()) this.replace(undefined, r.findings);
-      for (const f of now.lone.values()) this.replace(undefined, f);
+      for (const b of now.nets.chunks()) for (const r of b.values()) this.replace(undefined, r.findings);
+      for (const b of now.lone.chunks()) for (const f of b.values()) this.replace(undefined, f);
     }
   }
 
@@ -225,16 +226,23 @@ function touchesOff(r: NetResult, state: PowerState): boolean {
   return false;
 }
 
-function checkLonePin(ctx: StateContext, pin: PinView): Finding[] {
-  const found: Finding[] = [];
-  for (const rule of ctx.rules) {
-    if (rule.checkPin === undefined) continue;
-    rule.checkPin({ pin, names: ctx.names, settings: ctx.settings, rails: loneRails(ctx.rails, pin) }, (draft) =>
-      found.push(completeFinding(rule, draft, ctx.state, null, pin.key, ctx.names, pin.pin.waivers)),
-    );
+function checkLonePin(ctx: StateContext, pin: PinView): readonly Finding[] {
+  // One view and one report function for every rule: a design has thousands of lone pins.
+  const view = { pin, names: ctx.names, settings: ctx.settings, rails: loneRails(ctx.rails, pin) };
+  let found: Finding[] | undefined;
+  let rule: AnyRule = ctx.rules[0]!;
+  const report = (draft: Draft<MessageFns>) => {
+    (found ??= []).push(completeFinding(rule, draft, ctx.state, null, pin.key, ctx.names, pin.pin.waivers));
+  };
+  for (const r of ctx.rules) {
+    if (r.checkPin === undefined) continue;
+    rule = r;
+    r.checkPin(view, report);
   }
-  return found;
+  return found ?? NO_FINDINGS;
 }
+
+const NO_FINDINGS: readonly Finding[] = Object.freeze([]);
 
 /**
  * A lone pin in one power state. In a scenario, a pin none of whose rails (its own, its pull's)
@@ -255,7 +263,8 @@ function judgeLonePin(
     (at.pullTo === undefined || !off.has(at.pullTo)) &&
     !ctx.state.pins.has(key)
   ) {
-    return (allOn.get(key) ?? []).map((f) => restampFinding(f, ctx.state, null, at.pin.waivers));
+    const had = allOn.get(key);
+    return had === undefined ? NO_FINDINGS : had.map((f) => restampFinding(f, ctx.state, null, at.pin.waivers));
   }
   return checkLonePin(ctx, pinView(at, ctx.rails, ctx.state));
 }

@@ -4,7 +4,9 @@
  * the report's margin table and the editor all read this one analysis.
  */
 import { levelAt } from '../levels/level.ts';
-import { outputLevel } from '../levels/output.ts';
+import { type OutputPoint, outputLevel, outputVolts } from '../levels/output.ts';
+import { pairCorners } from '../levels/rails.ts';
+import type { Level } from '../levels/level.ts';
 import { below, lowerScore } from '../levels/compare.ts';
 import { highThreshold, lowThreshold } from './resolve.ts';
 import { pullRails, thevenin, worstCorner } from './netMath.ts';
@@ -74,51 +76,63 @@ function highSide(input: AnalysisInput, driver: PinView, receiver: PinView, sumI
   }
   const voh = driver.params.voh;
   if (voh === undefined || voh.length === 0) return null;
-  const load = input.loads.get(driver.key)?.high ?? 0;
-  const worst = worstCorner<Scored>([driver.rail, receiver.rail], rails, (c) => {
-    const driverVdd = c.get(driver.rail) ?? 0;
-    const receiverVdd = c.get(receiver.rail) ?? 0;
-    const level = outputLevel(voh, load, driverVdd, 'high')!;
-    const threshold = levelAt(vih, receiverVdd);
-    return {
-      out: level.v,
-      threshold,
-      margin: level.v - threshold,
-      driverVdd,
-      receiverVdd,
-      estimate: level.estimate,
-      status: judge(level.v, threshold, settings.minMargin),
-      load,
-      score: level.v - threshold,
-    };
-  });
-  return worst === undefined ? null : strip(worst);
+  return drivenSide(input, driver, receiver, voh, vih, input.loads.get(driver.key)?.high ?? 0, 'high');
 }
 
 function lowSide(input: AnalysisInput, driver: PinView, receiver: PinView): LevelSide | null {
   const vil = lowThreshold(receiver);
   const vol = driver.params.vol;
   if (vil === undefined || vol === undefined || vol.length === 0) return null;
-  const { rails, settings } = input;
-  const load = input.loads.get(driver.key)?.low ?? 0;
-  const worst = worstCorner<Scored>([driver.rail, receiver.rail], rails, (c) => {
-    const driverVdd = c.get(driver.rail) ?? 0;
-    const receiverVdd = c.get(receiver.rail) ?? 0;
-    const level = outputLevel(vol, load, driverVdd, 'low')!;
-    const threshold = levelAt(vil, receiverVdd);
-    return {
-      out: level.v,
-      threshold,
-      margin: threshold - level.v,
-      driverVdd,
-      receiverVdd,
-      estimate: level.estimate,
-      status: judge(threshold, level.v, settings.minMargin),
-      load,
-      score: threshold - level.v,
-    };
-  });
-  return worst === undefined ? null : strip(worst);
+  return drivenSide(input, driver, receiver, vol, vil, input.loads.get(driver.key)?.low ?? 0, 'low');
+}
+
+/**
+ * A push-pull driver's side at its worst corner, as `worstCorner` would choose it (the first
+ * corner of the lowest margin, a non-finite one first). The corners are scored with numbers and
+ * one object is made, for the corner that wins: this runs for every pair of every net.
+ */
+function drivenSide(
+  input: AnalysisInput,
+  driver: PinView,
+  receiver: PinView,
+  points: readonly OutputPoint[],
+  level: Level,
+  load: number,
+  sense: 'high' | 'low',
+): LevelSide | null {
+  let found = false;
+  let margin = 0;
+  let out = 0;
+  let threshold = 0;
+  let driverVdd = 0;
+  let receiverVdd = 0;
+  for (const c of pairCorners(driver.rail, receiver.rail, input.rails.ranges)) {
+    const dv = c.get(driver.rail) ?? 0;
+    const rv = c.get(receiver.rail) ?? 0;
+    const v = outputVolts(points, load, dv, sense);
+    const th = levelAt(level, rv);
+    const m = sense === 'high' ? v - th : th - v;
+    if (found && !lowerScore(m, margin)) continue;
+    found = true;
+    margin = m;
+    out = v;
+    threshold = th;
+    driverVdd = dv;
+    receiverVdd = rv;
+  }
+  if (!found) return null;
+  const estimate = outputLevel(points, load, driverVdd, sense)!.estimate;
+  const minMargin = input.settings.minMargin;
+  return {
+    out,
+    threshold,
+    margin,
+    driverVdd,
+    receiverVdd,
+    estimate,
+    status: sense === 'high' ? judge(out, threshold, minMargin) : judge(threshold, out, minMargin),
+    load,
+  };
 }
 
 function strip(s: Scored): LevelSide {

@@ -26,9 +26,22 @@ function changedIn<T extends { id: string }>(
   onChange: (old: T | undefined, now: T | undefined) => void,
 ): void {
   let kept = 0;
+  // `shift` follows a deletion or insertion earlier in the array: after one, every later record
+  // sits one place away from where it was, and is found there by identity without a lookup.
+  let shift = 0;
   for (let k = 0; k < after.length; k++) {
     const item = after[k]!;
-    if (before[k] === item) {
+    if (before[k + shift] === item) {
+      kept++;
+      continue;
+    }
+    if (before[k + shift + 1] === item) {
+      shift++;
+      kept++;
+      continue;
+    }
+    if (k + shift > 0 && before[k + shift - 1] === item) {
+      shift--;
       kept++;
       continue;
     }

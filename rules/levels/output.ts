@@ -35,9 +35,24 @@ export function sortedPoints(points: readonly OutputPoint[]): readonly OutputPoi
  */
 export function rowsAt(points: readonly OutputPoint[], vdd: number): readonly OutputPoint[] {
   const sorted = sortedPoints(points);
-  if (!sorted.some((p) => p.vddMin !== undefined)) return sorted;
-  return sorted.filter((p) => p.vddMin === undefined || !exceeds(p.vddMin, vdd));
+  let limited = false;
+  for (let k = 0; k < sorted.length; k++) if (sorted[k]!.vddMin !== undefined) limited = true;
+  if (!limited) return sorted;
+  // Asked for every pair at every corner: the rows of one list at one supply are worked out once.
+  let bySupply = rowsMemo.get(sorted);
+  if (bySupply === undefined) {
+    bySupply = new Map();
+    rowsMemo.set(sorted, bySupply);
+  }
+  let rows = bySupply.get(vdd);
+  if (rows === undefined) {
+    rows = sorted.filter((p) => p.vddMin === undefined || !exceeds(p.vddMin, vdd));
+    bySupply.set(vdd, rows);
+  }
+  return rows;
 }
+
+const rowsMemo = new WeakMap<readonly OutputPoint[], Map<number, readonly OutputPoint[]>>();
 
 /**
  * The largest test current of a list, or undefined for an empty or missing list; with `vdd`,
@@ -73,28 +88,71 @@ export function outputLevel(
   sense: 'high' | 'low',
 ): OutputLevel | undefined {
   if (points === undefined || points.length === 0) return undefined;
+  const at: LevelAt = { atCurrent: 0, estimate: false };
+  const v = levelInto(points, load, vdd, sense, at);
+  return { v, atCurrent: at.atCurrent, estimate: at.estimate };
+}
+
+/**
+ * The volts of `outputLevel` alone (NaN for a missing or empty list), for loops that score
+ * every corner and keep one: it makes no object.
+ */
+export function outputVolts(
+  points: readonly OutputPoint[] | undefined,
+  load: number,
+  vdd: number,
+  sense: 'high' | 'low',
+): number {
+  if (points === undefined || points.length === 0) return Number.NaN;
+  return levelInto(points, load, vdd, sense, scratch);
+}
+
+interface LevelAt {
+  atCurrent: number;
+  estimate: boolean;
+}
+
+const scratch: LevelAt = { atCurrent: 0, estimate: false };
+
+/** The level's volts; the test current used and whether it is an estimate are written to `at`. */
+function levelInto(
+  points: readonly OutputPoint[],
+  load: number,
+  vdd: number,
+  sense: 'high' | 'low',
+  at: LevelAt,
+): number {
+  at.atCurrent = load;
+  at.estimate = true;
   // A load or supply that is not a finite number guarantees nothing: NaN, which every
   // comparison of the rules (rules/levels/compare.ts) judges as a failure.
-  if (!Number.isFinite(load) || !Number.isFinite(vdd)) return { v: Number.NaN, atCurrent: load, estimate: true };
+  if (!Number.isFinite(load) || !Number.isFinite(vdd)) return Number.NaN;
   const guaranteed = rowsAt(points, vdd);
   // No row holds at this supply: the rows are read all the same, and every level is an estimate.
   const sorted = guaranteed.length > 0 ? guaranteed : sortedPoints(points);
-  for (const p of sorted) {
-    if (!exceeds(load, p.i)) return { v: levelAt(p.v, vdd), atCurrent: p.i, estimate: guaranteed.length === 0 };
+  // Indexed, not for…of: the library's lists are frozen, and V8 iterates a frozen array through
+  // its generic iterator, an object per step (measured: the check's largest allocation).
+  for (let k = 0; k < sorted.length; k++) {
+    const p = sorted[k]!;
+    if (!exceeds(load, p.i)) {
+      at.atCurrent = p.i;
+      at.estimate = guaranteed.length === 0;
+      return levelAt(p.v, vdd);
+    }
   }
   const last = sorted[sorted.length - 1]!;
   const vLast = levelAt(last.v, vdd);
   if (sorted.length === 1) {
-    if (!(last.i > 0)) return { v: vLast, atCurrent: load, estimate: true };
+    if (!(last.i > 0)) return vLast;
     const scale = load / last.i;
     const line = sense === 'high' ? vdd - (vdd - vLast) * scale : vLast * scale;
-    return { v: bounded(line, vLast, vdd, sense), atCurrent: load, estimate: true };
+    return bounded(line, vLast, vdd, sense);
   }
   const prev = sorted[sorted.length - 2]!;
   const vPrev = levelAt(prev.v, vdd);
   const di = last.i - prev.i;
   const line = di > 0 ? vLast + ((vLast - vPrev) / di) * (load - last.i) : vLast;
-  return { v: bounded(line, vLast, vdd, sense), atCurrent: load, estimate: true };
+  return bounded(line, vLast, vdd, sense);
 }
 
 /** An extrapolated level: never better than the last guaranteed one, never past the output's own rails. */

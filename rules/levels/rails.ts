@@ -61,6 +61,31 @@ export function corners(railIds: Iterable<string>, ranges: ReadonlyMap<string, R
 
 const cornerMemo = new WeakMap<ReadonlyMap<string, Range>, Map<string, Corner[]>>();
 
+/**
+ * `corners([a, b], ranges)` for the two rails of a driver and a receiver, asked for every pair
+ * of every net: found by the two ids in nested maps, without joining them into a key.
+ */
+export function pairCorners(a: string, b: string, ranges: ReadonlyMap<string, Range>): Corner[] {
+  let byFirst = pairMemo.get(ranges);
+  if (byFirst === undefined) {
+    byFirst = new Map();
+    pairMemo.set(ranges, byFirst);
+  }
+  let bySecond = byFirst.get(a);
+  if (bySecond === undefined) {
+    bySecond = new Map();
+    byFirst.set(a, bySecond);
+  }
+  let hit = bySecond.get(b);
+  if (hit === undefined) {
+    hit = corners([a, b], ranges);
+    bySecond.set(b, hit);
+  }
+  return hit;
+}
+
+const pairMemo = new WeakMap<ReadonlyMap<string, Range>, Map<string, Map<string, Corner[]>>>();
+
 function enumerate(railIds: readonly string[], ranges: ReadonlyMap<string, Range>): Corner[] {
   let result: Map<string, number>[] = [new Map()];
   const seen = new Set<string>();
