@@ -275,12 +275,14 @@ function checkGroup(ctx: StateContext, index: DesignIndex, rail: Rail, profile: 
   const group = index.groups.get(groupKey(rail.id, profile));
   if (group === undefined) return [];
   const vddRanges = [...group.ranges.values()].map((slot) => slot.range);
-  const pinKeys = () => [...group.pins].filter((k) => index.pins.get(k)?.vddRange !== undefined).sort();
+  const pinKeys = () => index.rangedPins(group).keys();
+  const partIds = () => index.rangedPins(group).parts();
   const found: Finding[] = [];
   for (const rule of ctx.rules) {
     if (rule.checkRail === undefined) continue;
-    rule.checkRail({ rail, names: ctx.names, range, profile, vddRanges, pinKeys, settings: ctx.settings }, (draft) =>
-      found.push(completeFinding(rule, draft, ctx.state, null, undefined, ctx.names)),
+    rule.checkRail(
+      { rail, names: ctx.names, range, profile, vddRanges, pinKeys, partIds, settings: ctx.settings },
+      (draft) => found.push(completeFinding(rule, draft, ctx.state, null, undefined, ctx.names)),
     );
   }
   return found;

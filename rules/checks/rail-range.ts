@@ -5,7 +5,6 @@
 import { below, exceeds } from '../levels/compare.ts';
 import { defineRule } from './defineRule.ts';
 import { volts } from './format.ts';
-import { partsOfPins as partsOf } from '../model/pinKeys.ts';
 
 interface Data {
   rail: string;
@@ -59,7 +58,7 @@ export default defineRule({
       },
       severity: 'warning',
       pins: keys,
-      parts: partsOf(...keys),
+      parts: view.partIds(),
       subject: rail.id,
       suffix: profile,
       values: { rail: rail.id, railMin: range.min, railMax: range.max, profileMin, profileMax, profile },

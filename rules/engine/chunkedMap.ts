@@ -11,7 +11,7 @@
  */
 
 /** Entries a bucket aims at: small enough to copy per edit, large enough to keep the spine short. */
-const BUCKET = 32;
+const BUCKET = 16;
 
 function bucketCountFor(size: number): number {
   let n = 1;

@@ -7,6 +7,7 @@
 import type { Design, Discrete, Net, Part, Pin } from '../model/schema.ts';
 import { DISCRETE_PINS } from '../model/schema.ts';
 import { makeResolution, type Resolution } from './resolve.ts';
+import { RangedPins } from './rangedPins.ts';
 
 /** What the index remembers of a pin, to take it out again when the pin changes. */
 export interface PinEntry {
@@ -26,6 +27,8 @@ export interface PinGroup {
   readonly pins: Set<string>;
   /** Keyed by the range object itself: pins of one family share their profile's array. */
   readonly ranges: Map<readonly [number, number], { range: readonly [number, number]; count: number }>;
+  /** The pins with a `vddRange`, sorted: made when a rule first asks (`rangedPins`), then kept. */
+  ranged?: RangedPins;
 }
 
 function addTo(map: Map<string, Set<string>>, key: string, value: string): void {
@@ -135,6 +138,12 @@ export class DesignIndex {
     for (const pin of part.pins) this.addPin(design, part, pin);
   }
 
+  /** The group's pins that have a `vddRange`, sorted, with their parts (made on first use). */
+  rangedPins(group: PinGroup): RangedPins {
+    group.ranged ??= RangedPins.of([...group.pins].filter((k) => this.pins.get(k)?.vddRange !== undefined));
+    return group.ranged;
+  }
+
   /** Takes a pin out and puts it back as it is now (its part, pin or profile changed). */
   refreshPin(design: Design, key: string): void {
     const entry = this.pins.get(key);
@@ -180,6 +189,7 @@ export class DesignIndex {
     }
     group.pins.add(key);
     if (vddRange !== undefined) {
+      group.ranged?.add(key);
       const slot = group.ranges.get(vddRange);
       if (slot === undefined) group.ranges.set(vddRange, { range: vddRange, count: 1 });
       else slot.count++;
@@ -196,6 +206,7 @@ export class DesignIndex {
     if (group !== undefined) {
       group.pins.delete(key);
       if (entry.vddRange !== undefined) {
+        group.ranged?.delete(key);
         const slot = group.ranges.get(entry.vddRange);
         if (slot !== undefined && --slot.count === 0) group.ranges.delete(entry.vddRange);
       }

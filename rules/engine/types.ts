@@ -222,6 +222,8 @@ export interface RailView {
   readonly vddRanges: readonly (readonly [number, number])[];
   /** The keys of the group's pins that have a `vddRange`, sorted; built only when asked for. */
   readonly pinKeys: () => string[];
+  /** The distinct parts of those pins, in the order the keys name them first. */
+  readonly partIds: () => string[];
   readonly settings: EffectiveSettings;
 }
 
