@@ -21,75 +21,63 @@ export interface Network {
 /**
  * The voltage of every node: a fixed node's own, a free node's from the network, undefined for a
  * free node that no conductance path joins to a fixed voltage (its level is not defined).
+ *
+ * Solved for every corner and tolerance case of every path, so it is written with plain loops
+ * and number arrays (no closures or pairs per link); the arithmetic is done in the same order as
+ * ever, so the volts come out to the same bits.
  */
 export function solve(net: Network): (number | undefined)[] {
   const { n, fixed, links, ties, inject } = net;
   // A number that is not finite (a resistance of NaN Ω, an infinite rail) decides nothing: every
   // node comes out NaN, so that the rules report the path as undecidable rather than skip it.
-  const bad = (x: number | undefined) => x !== undefined && !Number.isFinite(x);
-  if (links.some((l) => bad(l.g)) || ties.some((t) => bad(t.g) || bad(t.v)) || fixed.some(bad) || inject.some(bad)) {
-    return new Array<number>(n).fill(Number.NaN);
-  }
+  if (hasBadNumber(net)) return new Array<number>(n).fill(Number.NaN);
   // Which free nodes are anchored: reached from a fixed node or a tie through conductances.
-  const anchored = new Array<boolean>(n).fill(false);
-  const adjacent: number[][] = Array.from({ length: n }, () => []);
-  for (const l of links) {
-    if (!(l.g > 0)) continue;
-    adjacent[l.a]!.push(l.b);
-    adjacent[l.b]!.push(l.a);
-  }
+  const anchored = new Uint8Array(n);
   const queue: number[] = [];
   for (let k = 0; k < n; k++)
     if (fixed[k] !== undefined) {
-      anchored[k] = true;
+      anchored[k] = 1;
       queue.push(k);
     }
-  for (const t of ties)
-    if (t.g > 0 && !anchored[t.a]) {
-      anchored[t.a] = true;
-      queue.push(t.a);
+  for (let t = 0; t < ties.length; t++) {
+    const tie = ties[t]!;
+    if (tie.g > 0 && anchored[tie.a] === 0) {
+      anchored[tie.a] = 1;
+      queue.push(tie.a);
     }
+  }
   while (queue.length > 0) {
     const k = queue.pop()!;
-    for (const j of adjacent[k]!)
-      if (!anchored[j]) {
-        anchored[j] = true;
+    for (let l = 0; l < links.length; l++) {
+      const link = links[l]!;
+      if (!(link.g > 0)) continue;
+      const j = link.a === k ? link.b : link.b === k ? link.a : -1;
+      if (j >= 0 && anchored[j] === 0) {
+        anchored[j] = 1;
         queue.push(j);
       }
+    }
   }
 
-  const free: number[] = [];
-  const slot = new Array<number>(n).fill(-1);
-  for (let k = 0; k < n; k++)
-    if (fixed[k] === undefined && anchored[k]) {
-      slot[k] = free.length;
-      free.push(k);
-    }
-  const m = free.length;
-  const G: number[][] = Array.from({ length: m }, () => new Array<number>(m + 1).fill(0));
-  for (const k of free) G[slot[k]!]![m] = inject[k] ?? 0;
-  for (const l of links) {
-    if (!(l.g > 0)) continue;
-    for (const [x, y] of [
-      [l.a, l.b],
-      [l.b, l.a],
-    ] as const) {
-      const sx = slot[x]!;
-      if (sx < 0) continue;
-      const row = G[sx]!;
-      row[sx] = row[sx]! + l.g;
-      const fy = fixed[y];
-      const sy = slot[y]!;
-      if (fy !== undefined) row[m] = row[m]! + l.g * fy;
-      else if (sy >= 0) row[sy] = row[sy]! - l.g;
-    }
+  const slot = new Int32Array(n).fill(-1);
+  let m = 0;
+  for (let k = 0; k < n; k++) if (fixed[k] === undefined && anchored[k] === 1) slot[k] = m++;
+  const G: Float64Array[] = [];
+  for (let r = 0; r < m; r++) G.push(new Float64Array(m + 1));
+  for (let k = 0; k < n; k++) if (slot[k]! >= 0) G[slot[k]!]![m] = inject[k] ?? 0;
+  for (let l = 0; l < links.length; l++) {
+    const link = links[l]!;
+    if (!(link.g > 0)) continue;
+    stamp(G, m, slot, fixed, link.a, link.b, link.g);
+    stamp(G, m, slot, fixed, link.b, link.a, link.g);
   }
-  for (const t of ties) {
-    const s = slot[t.a]!;
-    if (s < 0 || !(t.g > 0)) continue;
+  for (let t = 0; t < ties.length; t++) {
+    const tie = ties[t]!;
+    const s = slot[tie.a]!;
+    if (s < 0 || !(tie.g > 0)) continue;
     const row = G[s]!;
-    row[s] = row[s]! + t.g;
-    row[m] = row[m]! + t.g * t.v;
+    row[s] = row[s]! + tie.g;
+    row[m] = row[m]! + tie.g * tie.v;
   }
   const x = gauss(G, m);
   const out: (number | undefined)[] = new Array(n).fill(undefined);
@@ -100,13 +88,47 @@ export function solve(net: Network): (number | undefined)[] {
   return out;
 }
 
+/** A link's conductance `g` from node `x` to node `y`, in the row of `x` when `x` is free. */
+function stamp(
+  G: Float64Array[],
+  m: number,
+  slot: Int32Array,
+  fixed: readonly (number | undefined)[],
+  x: number,
+  y: number,
+  g: number,
+): void {
+  const sx = slot[x]!;
+  if (sx < 0) return;
+  const row = G[sx]!;
+  row[sx] = row[sx]! + g;
+  const fy = fixed[y];
+  const sy = slot[y]!;
+  if (fy !== undefined) row[m] = row[m]! + g * fy;
+  else if (sy >= 0) row[sy] = row[sy]! - g;
+}
+
+const bad = (x: number | undefined): boolean => x !== undefined && !Number.isFinite(x);
+
+function hasBadNumber({ fixed, links, ties, inject }: Network): boolean {
+  for (let k = 0; k < links.length; k++) if (bad(links[k]!.g)) return true;
+  for (let k = 0; k < ties.length; k++) if (bad(ties[k]!.g) || bad(ties[k]!.v)) return true;
+  for (let k = 0; k < fixed.length; k++) if (bad(fixed[k])) return true;
+  for (let k = 0; k < inject.length; k++) if (bad(inject[k])) return true;
+  return false;
+}
+
 /** Solves the augmented m × (m + 1) system in place; a singular system gives NaN (never a guess). */
-function gauss(A: number[][], m: number): number[] {
+function gauss(A: Float64Array[], m: number): number[] {
   for (let c = 0; c < m; c++) {
     let p = c;
     for (let r = c + 1; r < m; r++) if (Math.abs(A[r]![c]!) > Math.abs(A[p]![c]!)) p = r;
     if (!(Math.abs(A[p]![c]!) > 0)) return new Array<number>(m).fill(Number.NaN);
-    if (p !== c) [A[p], A[c]] = [A[c]!, A[p]!];
+    if (p !== c) {
+      const swap = A[p]!;
+      A[p] = A[c]!;
+      A[c] = swap;
+    }
     const row = A[c]!;
     for (let r = c + 1; r < m; r++) {
       const f = A[r]![c]! / row[c]!;

@@ -6,6 +6,7 @@
 import { describe, expect, it } from 'vitest';
 import { check } from '../../rules/check/check.ts';
 import { solve } from '../../rules/engine/nodal.ts';
+import { rng } from '../support/generator.ts';
 import { pathExposure } from '../../rules/engine/paths.ts';
 import { levelAt } from '../../rules/levels/level.ts';
 import type { NetView } from '../../rules/engine/types.ts';
@@ -83,6 +84,52 @@ describe('nodal solver', () => {
     want.forEach((w, k) => {
       w === undefined ? expect(got[k]).toBeUndefined() : close(got[k]!, w);
     });
+  });
+
+  // Kirchhoff's current law (common practice): at every free node with a defined level, the
+  // currents out through its links and ties equal the current injected. Random networks of up to
+  // eight nodes, some held, some floating, some joined to nothing.
+  it("meets Kirchhoff's current law at every free node of random networks", () => {
+    const r = rng(60063);
+    for (let trial = 0; trial < 300; trial++) {
+      const n = 1 + Math.floor(r() * 8);
+      const fixed = Array.from({ length: n }, () => (r() < 0.3 ? Math.round(r() * 50) / 10 : undefined));
+      const links = Array.from({ length: Math.floor(r() * 2 * n) }, () => ({
+        a: Math.floor(r() * n),
+        b: Math.floor(r() * n),
+        g: r() < 0.1 ? 0 : 1 / (100 + r() * 1e5),
+      })).filter((l) => l.a !== l.b);
+      const ties = Array.from({ length: Math.floor(r() * n) }, () => ({
+        a: Math.floor(r() * n),
+        g: 1 / (1e3 + r() * 1e5),
+        v: Math.round(r() * 50) / 10,
+      }));
+      const inject = Array.from({ length: n }, () => (r() < 0.5 ? 0 : (r() - 0.5) * 1e-4));
+      const net = { n, fixed, links, ties, inject };
+      const v = solve(net);
+      for (let k = 0; k < n; k++) {
+        if (fixed[k] !== undefined) {
+          expect(v[k]).toBe(fixed[k]);
+          continue;
+        }
+        if (v[k] === undefined) continue;
+        let out = 0;
+        let scale = Math.abs(inject[k]!);
+        for (const l of links) {
+          if (!(l.g > 0) || (l.a !== k && l.b !== k)) continue;
+          const other = v[l.a === k ? l.b : l.a];
+          expect(other, 'a node linked to a defined one is defined').toBeDefined();
+          out += (v[k]! - other!) * l.g;
+          scale += Math.abs(v[k]! * l.g);
+        }
+        for (const t of ties) {
+          if (t.a !== k) continue;
+          out += (v[k]! - t.v) * t.g;
+          scale += Math.abs(v[k]! * t.g);
+        }
+        expect(Math.abs(out - inject[k]!)).toBeLessThanOrEqual(1e-9 * scale + 1e-15);
+      }
+    }
   });
 });
 
