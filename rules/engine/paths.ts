@@ -588,6 +588,15 @@ function seriesDetail(path: ResistorPath, ohms: CaseOhms): Record<string, number
 }
 
 /**
+ * The quantities a high level pulled up across a shifter came from: the pull's resistance and,
+ * for a diode, the reverse leakage it draws through that pull. One record for a driver beside
+ * the shifter and for one beyond series resistors, so that both name the same quantities.
+ */
+function pulledDetail(part: Discrete, pullResistance: number, leakage: number): Record<string, number> {
+  return part.kind === 'diode-shifter' ? { pullResistance, leakage } : { pullResistance };
+}
+
+/**
  * A receiver's high across a shifter: its own node's pull-up level against its VIH (the driver
  * only lets go, so the driver's supply plays no part).
  */
@@ -662,7 +671,7 @@ function shifterPairs(
         const leakage = part.kind === 'diode-shifter' ? part.leakageMax : 0;
         const pulled = pulledHigh(link.self, c, leakage);
         if (vih !== undefined && pulled !== undefined) {
-          const detail = { pullResistance: pulled.r, ...(part.kind === 'diode-shifter' ? { leakage } : {}) };
+          const detail = pulledDetail(part, pulled.r, leakage);
           high = keepWorst(
             high,
             pulledHighSide(pulled, levelAt(vih, receiverVdd), receiverVdd, settings.minMargin, detail),
@@ -747,7 +756,7 @@ function throughPathPairs(
           const leakage = part.kind === 'diode-shifter' ? part.leakageMax : 0;
           const pulled = pulledHigh(link.self, c, leakage);
           if (vih !== undefined && pulled !== undefined) {
-            const detail = { pullResistance: pulled.r };
+            const detail = pulledDetail(part, pulled.r, leakage);
             high = keepWorst(
               high,
               pulledHighSide(pulled, levelAt(vih, receiverVdd), receiverVdd, settings.minMargin, detail),

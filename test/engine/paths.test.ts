@@ -13,6 +13,7 @@ import type { NetView } from '../../rules/engine/types.ts';
 import type { Design } from '../../rules/model/schema.ts';
 import { validateDesign } from '../../rules/model/reader.ts';
 import { diodeLink, divider, fetBus, seriesClamp } from '../support/paths.ts';
+import { resistor } from '../support/build.ts';
 
 const close = (a: number, b: number, rel = 1e-9) =>
   expect(Math.abs(a - b)).toBeLessThanOrEqual(rel * Math.max(Math.abs(a), Math.abs(b)) + 1e-15);
@@ -227,6 +228,19 @@ describe("FET shifter pairs (the I2C-bus specification's level-shifting section)
   });
 });
 
+/** The design with a 100 Ω resistor between the driver and the diode's cathode. */
+function throughSeries(d: Design): Design {
+  return {
+    ...d,
+    discretes: [...(d.discretes ?? []), resistor('RS', 100)],
+    nets: [
+      ...d.nets.filter((n) => n.id !== 'TX'),
+      { id: 'TX', pins: ['U1.Y', 'RS.1'] },
+      { id: 'MID', pins: ['RS.2', 'D1.K'] },
+    ],
+  };
+}
+
 describe('diode shifter pairs', () => {
   it('low = VOL + Vf; high = Vpull,min − Rp·(Σ iin + leakage)', () => {
     const view = viewOf(diodeLink({ vfMax: 0.45, leakageMax: 5e-6 }), 'RX');
@@ -236,6 +250,16 @@ describe('diode shifter pairs', () => {
     close(pair.low!.out, 0.4 + 0.45);
     // 74HCT input current ±1 µA (JESD7 restated); pull-up 10 kΩ +1 %.
     close(pair.high!.out, 4.75 - 10100 * (1e-6 + 5e-6));
+  });
+
+  // One set of quantities for the high level whether the driver sits beside the diode or beyond a
+  // series resistor: the pull's resistance and the diode's leakage it carries.
+  it.each([
+    ['beside the diode', diodeLink({ leakageMax: 5e-6 })],
+    ['beyond a series resistor', throughSeries(diodeLink({ leakageMax: 5e-6 }))],
+  ])("the high level's detail names the leakage, driver %s", (_where, d) => {
+    const pair = viewOf(d, 'RX').analysis.pairs.find((p) => p.driver === 'U1.Y' && p.receiver === 'U2.A')!;
+    expect(pair.high!.detail).toEqual({ pullResistance: 10100, leakage: 5e-6 });
   });
 
   it('passes nothing from its anode back to its cathode', () => {
