@@ -24,9 +24,27 @@ const sequences: [string, Step[]][] = [
   ['a part between a prefix and its extension', [['add', 'U1+.A']]],
   ['the only pin of a part leaves', [['delete', 'U1x.A']]],
   ['one of two pins of a part leaves', [['delete', 'U1.A']]],
-  ['both pins of a part leave', [['delete', 'U1.A'], ['delete', 'U1.B']]],
-  ['a pin leaves and comes back', [['delete', 'J2.10'], ['add', 'J2.10']]],
-  ['a key added twice counts once', [['add', 'Z.1'], ['add', 'Z.1']]],
+  [
+    'both pins of a part leave',
+    [
+      ['delete', 'U1.A'],
+      ['delete', 'U1.B'],
+    ],
+  ],
+  [
+    'a pin leaves and comes back',
+    [
+      ['delete', 'J2.10'],
+      ['add', 'J2.10'],
+    ],
+  ],
+  [
+    'a key added twice counts once',
+    [
+      ['add', 'Z.1'],
+      ['add', 'Z.1'],
+    ],
+  ],
   ['a key not there is not deleted', [['delete', 'Q.1']]],
   ['everything leaves', START.map((k): Step => ['delete', k])],
   ['everything leaves and a new part comes', [...START.map((k): Step => ['delete', k]), ['add', 'N.1']]],
