@@ -206,9 +206,16 @@ function checkNet(ctx: StateContext, net: Net, allOn?: NetResult): NetResult {
   }
   const view = prepareNet(ctx, net);
   const findings: Finding[] = [];
-  for (const rule of ctx.rules) {
-    if (rule.checkNet === undefined) continue;
-    rule.checkNet(view, (draft) => findings.push(completeFinding(rule, draft, ctx.state, net)));
+  // One report function for every rule of the net (a closure per rule and net was 180,000 of them
+  // in a check of 10,000 parts): it files the draft under the rule being run.
+  let rule: AnyRule = ctx.rules[0]!;
+  const report = (draft: Draft<MessageFns>) => {
+    findings.push(completeFinding(rule, draft, ctx.state, net));
+  };
+  for (const r of ctx.rules) {
+    if (r.checkNet === undefined) continue;
+    rule = r;
+    r.checkNet(view, report);
   }
   return { net, view, findings };
 }
@@ -227,7 +234,7 @@ function touchesOff(r: NetResult, state: PowerState): boolean {
 }
 
 function checkLonePin(ctx: StateContext, pin: PinView): readonly Finding[] {
-  // One view and one report function for every rule: a design has thousands of lone pins.
+  // One view and one report function for every rule, as for a net: thousands of lone pins.
   const view = { pin, names: ctx.names, settings: ctx.settings, rails: loneRails(ctx.rails, pin) };
   let found: Finding[] | undefined;
   let rule: AnyRule = ctx.rules[0]!;
