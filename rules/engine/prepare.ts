@@ -94,26 +94,36 @@ export function prepareNet(ctx: PrepareContext, net: Net): NetView {
   if (links?.linksOfNet.has(net.id)) return prepareLinkedNet(ctx, net);
   const { settings } = ctx;
   const pins = pinsOfNet(ctx, net);
-  const drivers = pins.filter((p) => p.powered && p.role !== 'input');
-  const receivers = pins.filter((p) => p.powered && p.role !== 'output');
-  const unpowered = pins.filter((p) => !p.powered);
-
+  // One pass over the pins for everything that is per pin (this runs for every net of every
+  // power state; three filters and four loops cost measurably more).
+  const drivers: PinView[] = [];
+  const receivers: PinView[] = [];
+  const unpowered: PinView[] = [];
   const pulls: PullSource[] = [];
   if (net.pull !== undefined) pulls.push(pullSource(net.pull, 'net'));
-  for (const p of pins) if (p.pull !== undefined) pulls.push(pullSource(p.pull, p.key));
-
   let capacitance = net.wiringCapacitance ?? settings.defaultWiringCapacitance;
-  for (const p of pins) capacitance += p.params.cin ?? 0;
+  const pinRails: string[] = [];
+  let allOpenDrain = true;
+  for (const p of pins) {
+    if (p.powered) {
+      if (p.role !== 'input') {
+        drivers.push(p);
+        if (p.drive !== 'open-drain') allOpenDrain = false;
+      }
+      if (p.role !== 'output') receivers.push(p);
+    } else unpowered.push(p);
+    if (p.pull !== undefined) pulls.push(pullSource(p.pull, p.key));
+    capacitance += p.params.cin ?? 0;
+    if (!pinRails.includes(p.rail)) pinRails.push(p.rail);
+  }
 
-  const highFromPull =
-    drivers.length > 0 && drivers.every((d) => d.drive === 'open-drain') && pulls.some((p) => p.to !== GROUND);
+  let pullsUp = false;
+  for (const p of pulls) if (p.to !== GROUND) pullsUp = true;
+  const highFromPull = drivers.length > 0 && allOpenDrain && pullsUp;
 
   const rails = netRails(ctx.rails, pins, pulls);
   const loads = new Map<string, DriverLoad>();
   for (const d of drivers) loads.set(d.key, driverLoad(d, pins, pulls, rails));
-
-  const pinRails: string[] = [];
-  for (const p of pins) if (!pinRails.includes(p.rail)) pinRails.push(p.rail);
 
   const analysis = analyseNet({ pins, drivers, receivers, pulls, highFromPull, loads, rails, settings });
   return {
