@@ -240,3 +240,16 @@ describe('IEC 60062 resistance codes', () => {
     expect(r).not.toHaveProperty('value');
   });
 });
+
+// formatQuantity remembers what it printed at the default digits: asking again, or at other
+// digits in between, must give what a fresh call gives.
+describe('formatQuantity remembered', () => {
+  const values = [3.3, 3.3, -0, 0, Number.NaN, Number.POSITIVE_INFINITY, -1e-3, 4700, 999.96, 1.23456];
+  it.each(['V', 'A', 'Ω'])('%s: the same text every time, and other digits are not remembered', (unit) => {
+    const first = values.map((v) => formatQuantity(v, unit));
+    const other = values.map((v) => formatQuantity(v, unit, 2));
+    expect(values.map((v) => formatQuantity(v, unit))).toEqual(first);
+    expect(values.map((v) => formatQuantity(v, unit, 2))).toEqual(other);
+    expect(formatQuantity(1.23456, unit, 2)).not.toEqual(formatQuantity(1.23456, unit, 5));
+  });
+});
