@@ -1,0 +1,105 @@
+/**
+ * Waits on what a test means by "once it has settled", instead of fixed sleeps: a sleep long
+ * enough on a loaded 2-core machine is needlessly long everywhere else, and one that is too short
+ * lets a test read a view in mid-flight and pass or fail by luck. Each wait here has a limit and
+ * throws, saying what never came, when it is reached.
+ */
+import { expect, type Locator, type Page } from '@playwright/test';
+
+/** The canvas's pan and zoom: the style transform React Flow sets on `.react-flow__viewport`. */
+export function viewTransform(page: Page): Promise<string> {
+  return page.locator('.react-flow__viewport').evaluate((el) => (el as HTMLElement).style.transform);
+}
+
+/**
+ * Waits until the canvas's view has stopped moving: its transform unchanged over two animation
+ * frames (an animated fit changes it every frame until it ends). `from`, the transform before the
+ * action, when the action must move the view (F or Shift+F after a change of what is on screen):
+ * then it first waits for the transform to differ from it, since an animated fit starts a frame or
+ * two after its key and the old view can look still meanwhile. Returns the settled transform.
+ */
+export function viewSettled(page: Page, options: { from?: string; timeout?: number } = {}): Promise<string> {
+  return page.evaluate(
+    ({ from, timeout }) =>
+      new Promise<string>((resolve, reject) => {
+        // Looked up each frame: reopening a design draws a new canvas.
+        const now = () =>
+          document.querySelector<HTMLElement>('.react-flow__viewport')?.style.transform ?? 'no .react-flow__viewport';
+        let last = now();
+        let moved = from === undefined || last !== from;
+        let same = 0;
+        const limit = setTimeout(
+          () =>
+            reject(
+              new Error(
+                moved
+                  ? `the canvas view (.react-flow__viewport transform) still changing after ${timeout} ms (last: ${last})`
+                  : `the canvas view (.react-flow__viewport transform) never moved from ${from} within ${timeout} ms`,
+              ),
+            ),
+          timeout,
+        );
+        const frame = () => {
+          const value = now();
+          if (!moved && value !== from) moved = true;
+          same = value === last ? same + 1 : 0;
+          last = value;
+          if (moved && same >= 2) {
+            clearTimeout(limit);
+            resolve(value);
+          } else requestAnimationFrame(frame);
+        };
+        requestAnimationFrame(frame);
+      }),
+    { from: options.from, timeout: options.timeout ?? 10_000 },
+  );
+}
+
+/**
+ * An element's box once it has stopped moving (unchanged over two animation frames): a view fitted
+ * with an animation moves every handle for a moment, and a slow machine may still be inside it.
+ */
+export async function settledBox(
+  locator: Locator,
+  timeout = 10_000,
+): Promise<{ x: number; y: number; width: number; height: number }> {
+  await expect(locator, 'the element to measure').toBeVisible({ timeout });
+  const handle = await locator.elementHandle({ timeout });
+  if (handle === null) throw new Error(`${locator} is not on the page`);
+  try {
+    const box = await handle.evaluate(
+      (el, timeout) =>
+        new Promise<string>((resolve, reject) => {
+          const read = () => {
+            const r = el.getBoundingClientRect();
+            return `${r.x},${r.y},${r.width},${r.height}`;
+          };
+          let last = read();
+          let same = 0;
+          const limit = setTimeout(() => reject(new Error(`still moving after ${timeout} ms (box ${last})`)), timeout);
+          const frame = () => {
+            const value = read();
+            same = value === last ? same + 1 : 0;
+            last = value;
+            if (same >= 2) {
+              clearTimeout(limit);
+              resolve(value);
+            } else requestAnimationFrame(frame);
+          };
+          requestAnimationFrame(frame);
+        }),
+      timeout,
+    );
+    const [x, y, width, height] = box.split(',').map(Number) as [number, number, number, number];
+    return { x, y, width, height };
+  } finally {
+    await handle.dispose();
+  }
+}
+
+/** Every wire drawn on its route: none left with the straight stand-in the canvas draws until its route comes. */
+export async function wiresRouted(page: Page, timeout = 30_000): Promise<void> {
+  await expect(page.locator('.rc-wire[data-routed="no"]'), 'wires still waiting for their route').toHaveCount(0, {
+    timeout,
+  });
+}
