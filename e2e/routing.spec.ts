@@ -21,7 +21,7 @@ interface Drawing {
 
 /** Every drawn wire (in flow units, from its path's `d`) and every chip body, once all are routed. */
 async function drawing(page: Page): Promise<Drawing> {
-  await expect(page.locator('.rc-wire[data-routed="no"]')).toHaveCount(0, { timeout: 30_000 });
+  await wiresRouted(page);
   const raw = await page.evaluate(() => {
     const wires = [...document.querySelectorAll('.react-flow__edge')].map((e) => ({
       net: (e.querySelector('.rc-wire') as SVGGElement).dataset.net ?? '',

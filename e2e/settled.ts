@@ -103,3 +103,29 @@ export async function wiresRouted(page: Page, timeout = 30_000): Promise<void> {
     timeout,
   });
 }
+
+/**
+ * The canvas at rest after a change of view: the view still (see viewSettled), then every chip it
+ * draws measured (React Flow hides a node until it has its size, and draws its wires after) and
+ * every drawn wire on its route. For the benchmark, whose figures must not include the drawing
+ * the view change left behind; without `expect`, which needs a running test.
+ */
+export async function canvasSettled(page: Page, options: { from?: string; timeout?: number } = {}): Promise<string> {
+  const timeout = options.timeout ?? 10_000;
+  const view = await viewSettled(page, { ...options, timeout });
+  try {
+    await page.waitForFunction(
+      () =>
+        ![...document.querySelectorAll<HTMLElement>('.react-flow__node')].some(
+          (n) => n.style.visibility === 'hidden',
+        ) && document.querySelector('.rc-wire[data-routed="no"]') === null,
+      null,
+      { timeout, polling: 'raf' },
+    );
+  } catch (e) {
+    throw new Error(
+      `the canvas did not draw every chip measured and every wire routed within ${timeout} ms: ${(e as Error).message}`,
+    );
+  }
+  return view;
+}
