@@ -12,47 +12,79 @@ export function viewTransform(page: Page): Promise<string> {
 }
 
 /**
+ * Runs in the page: resolves with what `el`'s box (or, without `el`, the canvas's view transform)
+ * reads once it has read the same in three animation frames in a row, and, with `from`, only after
+ * it has first read something else. Written without named inner functions: the benchmark runs
+ * under tsx, whose build gives every named function a helper call that the page does not have.
+ */
+const stillOverTwoFrames = async ({
+  el,
+  from,
+  timeout,
+  what,
+}: {
+  el: Element | null;
+  from: string | undefined;
+  timeout: number;
+  what: string;
+}): Promise<string> => {
+  let last: string | undefined;
+  let moved = from === undefined;
+  let same = 0;
+  let over = false;
+  let timer: ReturnType<typeof setTimeout> | undefined;
+  const limit = new Promise<never>((_, reject) => {
+    timer = setTimeout(() => {
+      over = true;
+      reject(
+        new Error(
+          moved
+            ? `${what} still changing after ${timeout} ms (last: ${last})`
+            : `${what} never moved from ${from} within ${timeout} ms`,
+        ),
+      );
+    }, timeout);
+  });
+  const still = (async () => {
+    while (!over) {
+      let value: string;
+      if (el === null)
+        value =
+          document.querySelector<HTMLElement>('.react-flow__viewport')?.style.transform ?? 'no .react-flow__viewport';
+      else {
+        const r = el.getBoundingClientRect();
+        value = `${r.x},${r.y},${r.width},${r.height}`;
+      }
+      if (!moved && value !== from) moved = true;
+      same = value === last ? same + 1 : 0;
+      last = value;
+      if (moved && same >= 2) return value;
+      await new Promise((r) => requestAnimationFrame(r));
+    }
+    return last ?? '';
+  })();
+  try {
+    return await Promise.race([still, limit]);
+  } finally {
+    clearTimeout(timer);
+  }
+};
+
+/**
  * Waits until the canvas's view has stopped moving: its transform unchanged over two animation
  * frames (an animated fit changes it every frame until it ends). `from`, the transform before the
  * action, when the action must move the view (F or Shift+F after a change of what is on screen):
  * then it first waits for the transform to differ from it, since an animated fit starts a frame or
- * two after its key and the old view can look still meanwhile. Returns the settled transform.
+ * two after its key and the old view can look still meanwhile. The view is looked up each frame
+ * (reopening a design draws a new canvas). Returns the settled transform.
  */
 export function viewSettled(page: Page, options: { from?: string; timeout?: number } = {}): Promise<string> {
-  return page.evaluate(
-    ({ from, timeout }) =>
-      new Promise<string>((resolve, reject) => {
-        // Looked up each frame: reopening a design draws a new canvas.
-        const now = () =>
-          document.querySelector<HTMLElement>('.react-flow__viewport')?.style.transform ?? 'no .react-flow__viewport';
-        let last = now();
-        let moved = from === undefined || last !== from;
-        let same = 0;
-        const limit = setTimeout(
-          () =>
-            reject(
-              new Error(
-                moved
-                  ? `the canvas view (.react-flow__viewport transform) still changing after ${timeout} ms (last: ${last})`
-                  : `the canvas view (.react-flow__viewport transform) never moved from ${from} within ${timeout} ms`,
-              ),
-            ),
-          timeout,
-        );
-        const frame = () => {
-          const value = now();
-          if (!moved && value !== from) moved = true;
-          same = value === last ? same + 1 : 0;
-          last = value;
-          if (moved && same >= 2) {
-            clearTimeout(limit);
-            resolve(value);
-          } else requestAnimationFrame(frame);
-        };
-        requestAnimationFrame(frame);
-      }),
-    { from: options.from, timeout: options.timeout ?? 10_000 },
-  );
+  return page.evaluate(stillOverTwoFrames, {
+    el: null,
+    from: options.from,
+    timeout: options.timeout ?? 10_000,
+    what: 'the canvas view (.react-flow__viewport transform)',
+  });
 }
 
 /**
@@ -64,36 +96,16 @@ export async function settledBox(
   timeout = 10_000,
 ): Promise<{ x: number; y: number; width: number; height: number }> {
   await expect(locator, 'the element to measure').toBeVisible({ timeout });
-  const handle = await locator.elementHandle({ timeout });
-  if (handle === null) throw new Error(`${locator} is not on the page`);
+  const el = await locator.elementHandle({ timeout });
+  if (el === null) throw new Error(`${locator} is not on the page`);
   try {
-    const box = await handle.evaluate(
-      (el, timeout) =>
-        new Promise<string>((resolve, reject) => {
-          const read = () => {
-            const r = el.getBoundingClientRect();
-            return `${r.x},${r.y},${r.width},${r.height}`;
-          };
-          let last = read();
-          let same = 0;
-          const limit = setTimeout(() => reject(new Error(`still moving after ${timeout} ms (box ${last})`)), timeout);
-          const frame = () => {
-            const value = read();
-            same = value === last ? same + 1 : 0;
-            last = value;
-            if (same >= 2) {
-              clearTimeout(limit);
-              resolve(value);
-            } else requestAnimationFrame(frame);
-          };
-          requestAnimationFrame(frame);
-        }),
-      timeout,
-    );
+    const box = await locator
+      .page()
+      .evaluate(stillOverTwoFrames, { el, from: undefined, timeout, what: `the box of ${locator}` });
     const [x, y, width, height] = box.split(',').map(Number) as [number, number, number, number];
     return { x, y, width, height };
   } finally {
-    await handle.dispose();
+    await el.dispose();
   }
 }
 
