@@ -1,4 +1,6 @@
 import { createServer } from 'node:net';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { defineConfig, devices } from '@playwright/test';
 
@@ -26,6 +28,11 @@ const port = Number(process.env.RAILCROSS_E2E_PORT);
 if (!Number.isInteger(port) || port <= 0 || port > 65535)
   throw new Error(`RAILCROSS_E2E_PORT must be a port number, not "${process.env.RAILCROSS_E2E_PORT}"`);
 const origin = `http://127.0.0.1:${port}`;
+// The build goes to a folder of this run's own (named by its port), not dist/: a run must not
+// rewrite the files that `npm start`, or another run in the same tree, is serving meanwhile.
+// teardown.ts removes it at the end.
+const outDir = join(tmpdir(), `railcross-e2e-${port}`);
+process.env.RAILCROSS_E2E_OUT = outDir;
 
 export default defineConfig({
   testDir: '.',
@@ -34,6 +41,7 @@ export default defineConfig({
   fullyParallel: false,
   workers: 1,
   retries: 0,
+  globalTeardown: './teardown.ts',
   use: { baseURL: origin, viewport: { width: 1440, height: 900 }, screenshot: 'only-on-failure' },
   projects: [
     {
@@ -49,7 +57,7 @@ export default defineConfig({
     },
   ],
   webServer: {
-    command: `npx vite build && npx vite preview --port ${port} --strictPort --host 127.0.0.1`,
+    command: `npx vite build --outDir ${JSON.stringify(outDir)} --emptyOutDir && npx vite preview --outDir ${JSON.stringify(outDir)} --port ${port} --strictPort --host 127.0.0.1`,
     // The repository's root, where index.html and vite.config.ts are (the default is this folder).
     cwd: fileURLToPath(new URL('..', import.meta.url)),
     url: origin,
