@@ -5,7 +5,7 @@
  * violation on the way.
  */
 import { expect, test } from '@playwright/test';
-import { handle, uncoveredPoint, wire } from './gestures.ts';
+import { fitAll, handle, uncoveredPoint, wire } from './gestures.ts';
 
 test("a newcomer's first minutes", async ({ page }) => {
   const problems: string[] = [];
@@ -44,8 +44,7 @@ test("a newcomer's first minutes", async ({ page }) => {
   await expect(page.locator(`[data-part="${lvc}"]`)).toContainText('74LVC');
 
   // Bring both into view, then wire the LVC output to the HC input.
-  await page.locator('.react-flow__controls-fitview').click();
-  await page.waitForTimeout(300);
+  await fitAll(page);
   await wire(page, handle(page, lvc, 'Y'), handle(page, hc, 'A'));
   const edge = page.locator(`.react-flow__edge[data-id$=":${lvc}.Y:${hc}.A"] .rc-wire`);
   await expect(edge).toHaveAttribute('data-severity', 'error');

@@ -6,6 +6,7 @@
  */
 import { expect, type Page, test } from '@playwright/test';
 import { watch } from './gestures.ts';
+import { viewSettled } from './settled.ts';
 
 /** The on-screen size of a pin name's text: its font size times the canvas's scale. */
 async function pinNamePixels(page: Page): Promise<number[]> {
@@ -22,7 +23,8 @@ test('the example opens with readable pin names', async ({ page }) => {
   const problems = watch(page);
   await page.goto('/');
   await expect(page.locator('.rc-wire[data-net="VALVE_EN"]').first()).toHaveAttribute('data-severity', 'error');
-  await page.waitForTimeout(300);
+  // The opening fit comes with the chips' first measures (as do the wires): sizes read once the view is still.
+  await viewSettled(page);
   const sizes = await pinNamePixels(page);
   expect(sizes.length).toBeGreaterThan(5);
   // Every pin name drawn is at least 11 px tall on screen (the fitted whole board gave about 7 px).

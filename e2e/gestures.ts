@@ -1,21 +1,14 @@
 /** What the browser tests share: wiring two pins by dragging, a wire's uncovered point, a page's problems. */
 import type { Locator, Page } from '@playwright/test';
+import { settledBox, viewSettled } from './settled.ts';
 
 /**
- * The middle of an element once it has stopped moving: a view fitted with an animation moves
- * every handle for a moment, and a slow machine may still be inside it.
+ * The middle of an element once it has stopped moving (its box unchanged over two animation
+ * frames): a view fitted with an animation moves every handle for a moment.
  */
 export async function centre(locator: Locator): Promise<{ x: number; y: number }> {
-  let last: string | undefined;
-  for (let tries = 0; tries < 60; tries++) {
-    const box = await locator.boundingBox();
-    if (box === null) throw new Error('not visible');
-    const now = `${box.x},${box.y},${box.width},${box.height}`;
-    if (now === last) return { x: box.x + box.width / 2, y: box.y + box.height / 2 };
-    last = now;
-    await locator.page().waitForTimeout(60);
-  }
-  throw new Error('still moving after 3.6 s');
+  const box = await settledBox(locator);
+  return { x: box.x + box.width / 2, y: box.y + box.height / 2 };
 }
 
 /** Drag from one pin's handle to another's, as a hand would. */
@@ -68,9 +61,9 @@ export async function uncoveredPoint(edge: Locator): Promise<{ x: number; y: num
 /**
  * The whole board in view (the fit button: F does the same). The example opens on its errors at a
  * readable zoom, and the canvas draws only what is in view: a test that reads every chip or wire
- * of it fits first.
+ * of it fits first, and reads once the view has stopped moving.
  */
 export async function fitAll(page: Page): Promise<void> {
   await page.locator('.react-flow__controls-fitview').click();
-  await page.waitForTimeout(300);
+  await viewSettled(page);
 }

@@ -5,6 +5,7 @@
  */
 import { expect, test, type Page } from '@playwright/test';
 import { fitAll, handle, wire } from './gestures.ts';
+import { viewSettled, viewTransform } from './settled.ts';
 
 const wireOf = (page: Page, net: string) => page.locator(`.rc-wire[data-net="${net}"]`);
 
@@ -49,8 +50,10 @@ test("a chip from the pin table, with one pin's VIH overridden, judged by the ov
   await page.getByTestId('palette-search').fill('single gate 74lvc');
   await page.getByTestId('palette-search').press('Enter');
   const lvc = (await page.locator('.react-flow__node').last().getAttribute('data-id')) ?? '';
+  // F fits the board with the new chip in an animation: the handles are aimed at once it has ended.
+  const view = await viewTransform(page);
   await onCanvas(page, 'f');
-  await page.waitForTimeout(400);
+  await viewSettled(page, { from: view });
   await wire(page, handle(page, lvc, 'Y'), handle(page, 'X1', 'A'));
   const edge = page.locator(`.react-flow__edge[data-id$=":${lvc}.Y:X1.A"] .rc-wire`);
   await expect(edge).toHaveCount(1);

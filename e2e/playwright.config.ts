@@ -1,11 +1,38 @@
+import { createServer } from 'node:net';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { defineConfig, devices } from '@playwright/test';
 
+/** A port nothing listens on now: the system's pick for port 0, let go at once for vite preview to take. */
+function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const probe = createServer();
+    probe.once('error', reject);
+    probe.listen(0, '127.0.0.1', () => {
+      const address = probe.address();
+      probe.close(() =>
+        typeof address === 'object' && address !== null ? resolve(address.port) : reject(new Error('no port')),
+      );
+    });
+  });
+}
+
 // Debian's Chromium (stack.md): Playwright cannot download its own browsers here.
-// The suite serves its own build on a port of its own (RAILCROSS_E2E_PORT, 4180 unless set), so
-// that `npm test` runs while `npm start` serves on 4173 and several work trees can test at once.
-const port = Number(process.env.RAILCROSS_E2E_PORT ?? 4180);
+// The suite serves its own build on a port of its own, so that `npm test` runs while `npm start`
+// serves on 4173 and several runs (work trees) test at once: RAILCROSS_E2E_PORT when set, else a
+// free port. This file is read again in every worker process; the port chosen in the first
+// process is put in the environment, which the workers inherit, so that all of them agree.
+if ((process.env.RAILCROSS_E2E_PORT ?? '') === '') process.env.RAILCROSS_E2E_PORT = String(await freePort());
+const port = Number(process.env.RAILCROSS_E2E_PORT);
+if (!Number.isInteger(port) || port <= 0 || port > 65535)
+  throw new Error(`RAILCROSS_E2E_PORT must be a port number, not "${process.env.RAILCROSS_E2E_PORT}"`);
 const origin = `http://127.0.0.1:${port}`;
+// The build goes to a folder of this run's own (named by its port), not dist/: a run must not
+// rewrite the files that `npm start`, or another run in the same tree, is serving meanwhile.
+// teardown.ts removes it at the end.
+const outDir = join(tmpdir(), `railcross-e2e-${port}`);
+process.env.RAILCROSS_E2E_OUT = outDir;
 
 export default defineConfig({
   testDir: '.',
@@ -14,6 +41,7 @@ export default defineConfig({
   fullyParallel: false,
   workers: 1,
   retries: 0,
+  globalTeardown: './teardown.ts',
   use: { baseURL: origin, viewport: { width: 1440, height: 900 }, screenshot: 'only-on-failure' },
   projects: [
     {
@@ -29,7 +57,7 @@ export default defineConfig({
     },
   ],
   webServer: {
-    command: `npx vite build && npx vite preview --port ${port} --strictPort --host 127.0.0.1`,
+    command: `npx vite build --outDir ${JSON.stringify(outDir)} --emptyOutDir && npx vite preview --outDir ${JSON.stringify(outDir)} --port ${port} --strictPort --host 127.0.0.1`,
     // The repository's root, where index.html and vite.config.ts are (the default is this folder).
     cwd: fileURLToPath(new URL('..', import.meta.url)),
     url: origin,

@@ -37,6 +37,7 @@ async function placeOf(page: Page, id: string): Promise<string> {
 }
 
 async function reloadAfter(page: Page, ms: number): Promise<void> {
+  // The fixed delay is the quantity under test: how long before the reload the edit was made.
   if (ms > 0) await page.waitForTimeout(ms);
   await page.reload();
   await expect(page.locator('.react-flow__node').first()).toBeVisible();
@@ -58,7 +59,11 @@ test('every committed edit, nudge and typed text survives a reload 0, 50 and 100
   for (const ms of DELAYS) {
     await chip(page, 'U1').locator('.rc-chip-head').click();
     await expect(chip(page, 'U1')).toHaveClass(/selected/);
-    await page.waitForTimeout(400);
+    // Nothing left to store before the nudges, so that what the reload may lose is the nudges alone.
+    await expect(page.getByTestId('save-status'), 'stored before the nudges').toHaveAttribute(
+      'data-state',
+      /saved|idle/,
+    );
     const before = await placeOf(page, 'U1');
     for (let k = 0; k < 10; k++) await page.keyboard.press('ArrowRight');
     const moved = await placeOf(page, 'U1');

@@ -7,6 +7,7 @@ import { expect, test, type Page } from '@playwright/test';
 import { bodyCrossings, pathPoints, sharedTracks, type DrawnWire, type Rect } from '../rules/routing/measure.ts';
 import { generateDesign } from '../test/support/generator.ts';
 import { fitAll } from './gestures.ts';
+import { viewSettled, viewTransform, wiresRouted } from './settled.ts';
 
 /** The heaviest wire drawn (a selected one) is 3 units wide (styles.css, .rc-wire). */
 const WIRE_WIDTH = 3;
@@ -20,7 +21,7 @@ interface Drawing {
 
 /** Every drawn wire (in flow units, from its path's `d`) and every chip body, once all are routed. */
 async function drawing(page: Page): Promise<Drawing> {
-  await expect(page.locator('.rc-wire[data-routed="no"]')).toHaveCount(0, { timeout: 30_000 });
+  await wiresRouted(page);
   const raw = await page.evaluate(() => {
     const wires = [...document.querySelectorAll('.react-flow__edge')].map((e) => ({
       net: (e.querySelector('.rc-wire') as SVGGElement).dataset.net ?? '',
@@ -104,13 +105,16 @@ test('Tidy layout arranges the example by signal flow, routes it clean, and is o
         .sort(),
     );
   const before = await where();
+  const view = await viewTransform(page);
   await page.getByTestId('tidy-layout').click();
   await expect.poll(where).not.toEqual(before);
   const d = await drawing(page);
   const { shared, through } = judge(d);
   expect(shared, 'runs of different nets on one track').toEqual([]);
   expect(through, 'runs through a chip').toEqual([]);
-  await page.waitForTimeout(400);
+  // Tidy fits the new layout in the frame after it: the picture once that view is still and every wire routed.
+  await viewSettled(page, { from: view });
+  await wiresRouted(page);
   await page.screenshot({ path: 'e2e/screenshots/routing-tidy.png' });
   await page.getByRole('button', { name: 'Undo' }).click();
   await expect.poll(where).toEqual(before);

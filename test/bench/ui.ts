@@ -39,6 +39,7 @@ import { createEditorStore } from '../../app/store/editorStore.ts';
 import { setPartProfile } from '../../app/store/commands/index.ts';
 import type { Design } from '../../rules/model/schema.ts';
 import { generateDesign } from '../support/generator.ts';
+import { canvasSettled, viewTransform } from '../../e2e/settled.ts';
 import { median, round as roundTo } from './stats.ts';
 
 const json = process.argv.includes('--json');
@@ -293,9 +294,9 @@ async function main() {
       nodes: number;
       edges: number;
     };
-    // A design opens zoomed to its errors; the first measures want the whole design in view.
+    // A design opens zoomed to its errors; the first measures want the whole design in view, drawn and still.
     await page.locator('.react-flow__controls-fitview').click();
-    await page.waitForTimeout(800);
+    await canvasSettled(page, { timeout: 60_000 });
     const overview = await page.evaluate('window.__probe.view()');
     log('opened, fitted view:', overview);
 
@@ -313,8 +314,10 @@ async function main() {
     await page.evaluate(
       `window.__railcrossBench.session.editor.getState().select({ parts: [${JSON.stringify(edit.part)}], wires: [], net: null })`,
     );
+    // Shift+F brings the chip into view in an animation: measured once the view has stopped there.
+    const whole = await viewTransform(page);
     await page.keyboard.press('Shift+F');
-    await page.waitForTimeout(800);
+    await canvasSettled(page, { from: whole, timeout: 60_000 });
     const working = await page.evaluate('window.__probe.view()');
     log('working view:', working);
     const work = (await page.evaluate(
