@@ -6,15 +6,18 @@
  */
 import type { Design, Discrete, Net, Part, Pin } from '../model/schema.ts';
 import { DISCRETE_PINS } from '../model/schema.ts';
-import { makeResolution, type Resolution } from './resolve.ts';
+import { makeResolved, type Resolution } from './resolve.ts';
 import { RangedPins } from './rangedPins.ts';
 
-/** What the index remembers of a pin, to take it out again when the pin changes. */
-export interface PinEntry {
+/**
+ * What the index remembers of a pin, to take it out again when the pin changes. It is the pin's
+ * `Resolution` too (its effective parameters, re-made whenever the pin, its part or its profile
+ * changes): one object per pin besides the resolved pin itself, since every object the index
+ * keeps is one more for the garbage collector to copy while a large board is read.
+ */
+export interface PinEntry extends Resolution {
   readonly part: Part;
   readonly pin: Pin;
-  /** Its effective parameters: re-made whenever the pin, its part or its profile changes. */
-  readonly resolution: Resolution;
   readonly rail: string;
   readonly profile: string;
   readonly pullTo: string | undefined;
@@ -160,15 +163,16 @@ export class DesignIndex {
   }
 
   addPin(design: Design, part: Part, pin: Pin): void {
-    const res = makeResolution(design, part, pin);
-    const key = res.resolved.key;
-    const vddRange = res.resolved.params.vddRange;
+    const resolved = makeResolved(design, part, pin);
+    const key = resolved.key;
+    const vddRange = resolved.params.vddRange;
     const entry: PinEntry = {
+      resolved,
+      unpowered: undefined,
       part,
       pin,
-      resolution: res,
-      rail: res.resolved.rail,
-      profile: res.resolved.profileId,
+      rail: resolved.rail,
+      profile: resolved.profileId,
       pullTo: pin.pull?.to,
       vddRange,
     };
@@ -231,7 +235,8 @@ export class DesignIndex {
     this.nets.set(net.id, net);
     for (const key of net.pins) {
       this.netOfPin.set(key, net.id);
-      this.lone.delete(key);
+      // While the index is built the nets come first, so no pin is lone yet: skip the lookup.
+      if (this.lone.size > 0) this.lone.delete(key);
       if (this.discretes.size > 0) {
         const id = key.slice(0, key.indexOf('.'));
         if (this.discretes.has(id)) addTo(this.linksOfNet, net.id, id);

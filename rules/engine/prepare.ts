@@ -35,7 +35,7 @@ export type PinIndex = ReadonlyMap<string, PinEntry>;
  * role, drive and internal pull the state gives it (a controller's pins at reset).
  */
 export function pinView(at: PinEntry, rails: RailStates, state?: PowerState): PinView {
-  const view = viewOf(at.resolution, !rails.off.has(at.rail) && rails.ranges.has(at.rail));
+  const view = viewOf(at, !rails.off.has(at.rail) && rails.ranges.has(at.rail));
   const set = state?.pins.get(view.key);
   return set === undefined ? view : withState(view, set);
 }

@@ -15,8 +15,8 @@ import type { ParamOrigin, PinView, ResolvedPin } from './types.ts';
 export interface Resolution {
   /** The resolved pin, which is also its view when powered. */
   readonly resolved: PinView;
-  /** The resolved pin as seen unpowered [0], made when first asked for. */
-  readonly views: [PinView | undefined];
+  /** The resolved pin as seen unpowered, made when first asked for. */
+  unpowered: PinView | undefined;
 }
 
 interface CacheEntry extends Resolution {
@@ -49,7 +49,7 @@ export function viewOf(entry: Resolution, powered: boolean): PinView {
   // The resolved pin is its own powered view (made with `powered: true`): one object per pin
   // where most pins of a board are powered in every state.
   if (powered) return entry.resolved;
-  let view = entry.views[0];
+  let view = entry.unpowered;
   if (view === undefined) {
     // A literal of the resolved pin's own shape: every view shares a hidden class, which keeps
     // the hot loops over pins monomorphic (an object spread does not).
@@ -68,7 +68,7 @@ export function viewOf(entry: Resolution, powered: boolean): PinView {
       pull: r.pull,
       powered: false,
     };
-    entry.views[0] = view;
+    entry.unpowered = view;
   }
   return view;
 }
@@ -126,16 +126,30 @@ function entryOf(design: Design, part: Part, pin: Pin): CacheEntry {
 }
 
 /**
- * A pin's resolution made afresh, not cached: the engine's index keeps each pin's own and makes
- * it again when the pin, its part or its profile changes, so a cache there would only cost (a
- * weak map of every pin, which the garbage collector walks).
+ * A pin resolved afresh, not cached: the engine's index keeps each pin's own (its entry is the
+ * pin's `Resolution`) and makes it again when the pin, its part or its profile changes, so a
+ * cache there would only cost (a weak map of every pin, which the garbage collector walks).
  */
-export function makeResolution(design: Design, part: Part, pin: Pin): Resolution {
-  return makeEntry(design, part, pin, profileIdOf(part, pin));
+export function makeResolved(design: Design, part: Part, pin: Pin): PinView {
+  const profileId = profileIdOf(part, pin);
+  return resolvedPin(part, pin, profileId, resolveProfile(design, profileId));
 }
 
 function makeEntry(design: Design, part: Part, pin: Pin, profileId: string): CacheEntry {
   const profile = resolveProfile(design, profileId);
+  return {
+    unpowered: undefined,
+    partId: part.id,
+    partRail: part.rail,
+    partParams: part.params,
+    profileId,
+    localProfiles: design.profiles,
+    profile,
+    resolved: resolvedPin(part, pin, profileId, profile),
+  };
+}
+
+function resolvedPin(part: Part, pin: Pin, profileId: string, profile: Profile | undefined): PinView {
   let params: Record<string, unknown>;
   let origin: Partial<Record<keyof Params, ParamOrigin>>;
   if (pin.params === undefined && part.params === undefined) {
@@ -145,13 +159,12 @@ function makeEntry(design: Design, part: Part, pin: Pin, profileId: string): Cac
   } else {
     ({ params, origin } = mergeParams(pin.params, part.params, profile?.params));
   }
-  const drive = driveOf(pin);
-  const resolved: PinView = {
+  return {
     key: `${part.id}.${pin.id}`,
     partId: part.id,
     pin,
     role: pin.role,
-    drive,
+    drive: driveOf(pin),
     rail: railOf(part, pin),
     profileId,
     profile,
@@ -160,17 +173,6 @@ function makeEntry(design: Design, part: Part, pin: Pin, profileId: string): Cac
     pull: pin.pull,
     powered: true,
   };
-  const entry: CacheEntry = {
-    views: [undefined],
-    partId: part.id,
-    partRail: part.rail,
-    partParams: part.params,
-    profileId,
-    localProfiles: design.profiles,
-    profile,
-    resolved,
-  };
-  return entry;
 }
 
 /** The VIH a receiver is judged by: `schmitt.vtPlus` for a Schmitt input, else `vih`. */
