@@ -3,7 +3,7 @@
  * equivalents, load currents on a driver, and the worst-corner search.
  */
 import type { Corner, Range } from '../levels/rails.ts';
-import { corners } from '../levels/rails.ts';
+import { corners, pairCorners } from '../levels/rails.ts';
 import { levelAt } from '../levels/level.ts';
 import { rowsAt } from '../levels/output.ts';
 import { higherScore, lowerScore } from '../levels/compare.ts';
@@ -169,18 +169,25 @@ export function worstExposure(
   rails: RailStates,
   limit: (pinVdd: number) => number,
 ): Exposure | undefined {
-  let worst: (Exposure & { excess: number }) | undefined;
+  // Scored with numbers, one object made for the worst: this runs for every input of every net.
+  let found: NetSource | undefined;
+  let vNet = 0;
+  let lim = 0;
+  let pinVdd = 0;
+  let excess = 0;
   for (const source of sources) {
-    for (const c of corners([source.rail, pin.rail], rails.ranges)) {
-      const vNet = c.get(source.rail) ?? 0;
-      const pinVdd = c.get(pin.rail) ?? 0;
-      const lim = limit(pinVdd);
-      const excess = vNet - lim;
-      if (worst === undefined || higherScore(excess, worst.excess))
-        worst = { vNet, limit: lim, source, pinVdd, excess };
+    for (const c of pairCorners(source.rail, pin.rail, rails.ranges)) {
+      const v = c.get(source.rail) ?? 0;
+      const p = c.get(pin.rail) ?? 0;
+      const l = limit(p);
+      const e = v - l;
+      if (found !== undefined && !higherScore(e, excess)) continue;
+      found = source;
+      vNet = v;
+      lim = l;
+      pinVdd = p;
+      excess = e;
     }
   }
-  if (worst === undefined) return undefined;
-  const { excess: _excess, ...exposure } = worst;
-  return exposure;
+  return found === undefined ? undefined : { vNet, limit: lim, source: found, pinVdd };
 }
