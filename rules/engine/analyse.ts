@@ -5,11 +5,11 @@
  */
 import { levelAt } from '../levels/level.ts';
 import { type OutputPoint, outputLevel, outputVolts } from '../levels/output.ts';
-import { pairCorners } from '../levels/rails.ts';
+import { corners, pairCorners } from '../levels/rails.ts';
 import type { Level } from '../levels/level.ts';
 import { below, lowerScore } from '../levels/compare.ts';
 import { highThreshold, lowThreshold } from './resolve.ts';
-import { pullRails, thevenin, worstCorner } from './netMath.ts';
+import { pullRails, thevenin } from './netMath.ts';
 import type {
   DriverLoad,
   EffectiveSettings,
@@ -44,8 +44,6 @@ function judge(better: number, worse: number, minMargin: number): PairStatus {
   return 'pass';
 }
 
-type Scored = LevelSide & { score: number };
-
 function highSide(input: AnalysisInput, driver: PinView, receiver: PinView, sumIih: number): LevelSide | null {
   const vih = highThreshold(receiver);
   if (vih === undefined) return null;
@@ -53,26 +51,37 @@ function highSide(input: AnalysisInput, driver: PinView, receiver: PinView, sumI
   if (driver.drive === 'open-drain') {
     if (!input.highFromPull) return null;
     const railIds = [...pullRails(input.pulls), receiver.rail];
-    const worst = worstCorner<Scored>(railIds, rails, (c) => {
+    // Scored with numbers, as a push-pull side is: one object for the worst corner.
+    let found = false;
+    let out = 0;
+    let threshold = 0;
+    let receiverVdd = 0;
+    let vpull = 0;
+    for (const c of corners(railIds, rails.ranges)) {
       // The pulls at the top of their ranges: the weakest pull-up gives the lowest high level.
       const th = thevenin(input.pulls, c, 'max')!;
-      const out = th.v - th.r * sumIih;
-      const receiverVdd = c.get(receiver.rail) ?? 0;
-      const threshold = levelAt(vih, receiverVdd);
-      return {
-        out,
-        threshold,
-        margin: out - threshold,
-        driverVdd: null,
-        receiverVdd,
-        vpull: th.v,
-        estimate: false,
-        status: judge(out, threshold, settings.minMargin),
-        load: sumIih,
-        score: out - threshold,
-      };
-    });
-    return worst === undefined ? null : strip(worst);
+      const o = th.v - th.r * sumIih;
+      const rv = c.get(receiver.rail) ?? 0;
+      const t = levelAt(vih, rv);
+      if (found && !lowerScore(o - t, out - threshold)) continue;
+      found = true;
+      out = o;
+      threshold = t;
+      receiverVdd = rv;
+      vpull = th.v;
+    }
+    if (!found) return null;
+    return {
+      out,
+      threshold,
+      margin: out - threshold,
+      driverVdd: null,
+      receiverVdd,
+      vpull,
+      estimate: false,
+      status: judge(out, threshold, settings.minMargin),
+      load: sumIih,
+    };
   }
   const voh = driver.params.voh;
   if (voh === undefined || voh.length === 0) return null;
@@ -133,11 +142,6 @@ function drivenSide(
     status: sense === 'high' ? judge(out, threshold, minMargin) : judge(threshold, out, minMargin),
     load,
   };
-}
-
-function strip(s: Scored): LevelSide {
-  const { score: _score, ...side } = s;
-  return side;
 }
 
 /** The analysis of one net in one power state. */
