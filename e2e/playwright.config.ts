@@ -1,22 +1,8 @@
-import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { defineConfig, devices } from '@playwright/test';
-
-/** A port nothing listens on now: the system's pick for port 0, let go at once for vite preview to take. */
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const probe = createServer();
-    probe.once('error', reject);
-    probe.listen(0, '127.0.0.1', () => {
-      const address = probe.address();
-      probe.close(() =>
-        typeof address === 'object' && address !== null ? resolve(address.port) : reject(new Error('no port')),
-      );
-    });
-  });
-}
+import { freePort } from './freePort.ts';
 
 // Debian's Chromium (stack.md): Playwright cannot download its own browsers here.
 // The suite serves its own build on a port of its own, so that `npm test` runs while `npm start`

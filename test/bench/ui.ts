@@ -31,7 +31,8 @@
  * a save under 100 ms (autosave's own assumption: a change stored within 500 ms).
  */
 import { spawn, spawnSync } from 'node:child_process';
-import { readFileSync } from 'node:fs';
+import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import os from 'node:os';
 import { chromium, type Browser, type Page } from '@playwright/test';
@@ -40,13 +41,17 @@ import { setPartProfile } from '../../app/store/commands/index.ts';
 import type { Design } from '../../rules/model/schema.ts';
 import { generateDesign } from '../support/generator.ts';
 import { canvasSettled, viewTransform } from '../../e2e/settled.ts';
+import { freePort } from '../../e2e/freePort.ts';
 import { median, round as roundTo } from './stats.ts';
 
 const json = process.argv.includes('--json');
 const PARTS = 1000;
 const EDITS = 50;
-// Another port through RAILCROSS_BENCH_PORT, so that work trees side by side can each measure.
-const PORT = Number(process.env.RAILCROSS_BENCH_PORT ?? 4183);
+// A free port unless RAILCROSS_BENCH_PORT names one, so that runs side by side (work trees, the
+// browser tests, `npm start`) never meet on one port.
+const PORT = process.env.RAILCROSS_BENCH_PORT ? Number(process.env.RAILCROSS_BENCH_PORT) : await freePort();
+// The build goes to a folder of this run's own, never dist/ (which `npm start` may be serving).
+const OUT = mkdtempSync(join(os.tmpdir(), 'railcross-bench-ui-'));
 /** `-- --import-only`: only the import figures (while working on them). */
 const importOnly = process.argv.includes('--import-only');
 const STORAGE_PARTS = 2000;
@@ -248,20 +253,22 @@ async function importBench(browser: Browser, errors: string[]): Promise<ImportFi
 
 async function main() {
   log('building…');
-  const build = spawnSync('npx', ['vite', 'build', '--logLevel', 'error'], {
+  const build = spawnSync('npx', ['vite', 'build', '--logLevel', 'error', '--outDir', OUT, '--emptyOutDir'], {
     stdio: ['ignore', json ? 'ignore' : 'inherit', 'inherit'],
   });
   if (build.status !== 0) throw new Error('vite build failed');
-  const server = spawn('npx', ['vite', 'preview', '--port', String(PORT), '--strictPort', '--host', '127.0.0.1'], {
-    stdio: 'ignore',
-    detached: true,
-  });
+  const server = spawn(
+    'npx',
+    ['vite', 'preview', '--outDir', OUT, '--port', String(PORT), '--strictPort', '--host', '127.0.0.1'],
+    { stdio: 'ignore', detached: true },
+  );
   const stop = () => {
     try {
       if (server.pid !== undefined) process.kill(-server.pid);
     } catch {
       // already gone
     }
+    rmSync(OUT, { recursive: true, force: true });
   };
   process.on('exit', stop);
   try {
