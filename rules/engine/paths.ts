@@ -20,7 +20,7 @@ import { pullEnds } from '../model/pullRange.ts';
 import { DEFAULT_RESISTOR_TOLERANCE, type DiodeShifter, type Discrete, type FetShifter } from '../model/schema.ts';
 import type { Corner, Range } from '../levels/rails.ts';
 import { corners } from '../levels/rails.ts';
-import { levelAt } from '../levels/level.ts';
+import { type Level, levelAt } from '../levels/level.ts';
 import { outputLevel, sortedPoints } from '../levels/output.ts';
 import { below } from '../levels/compare.ts';
 import { RISE_10_90 } from '../levels/rc.ts';
@@ -587,26 +587,30 @@ function seriesDetail(path: ResistorPath, ohms: CaseOhms): Record<string, number
   return out;
 }
 
-/**
- * The quantities a high level pulled up across a shifter came from: the pull's resistance and,
- * for a diode, the reverse leakage it draws through that pull. One record for a driver beside
- * the shifter and for one beyond series resistors, so that both name the same quantities.
- */
-function pulledDetail(part: Discrete, pullResistance: number, leakage: number): Record<string, number> {
-  return part.kind === 'diode-shifter' ? { pullResistance, leakage } : { pullResistance };
+/** A node's pulled-up level across a shifter at one corner: a diode's leakage is drawn through its pull. */
+function pulledAcross(
+  part: Discrete,
+  node: PathNode,
+  corner: Corner,
+): { v: number; r: number; vpull: number } | undefined {
+  return pulledHigh(node, corner, part.kind === 'diode-shifter' ? part.leakageMax : 0);
 }
 
 /**
  * A receiver's high across a shifter: its own node's pull-up level against its VIH (the driver
- * only lets go, so the driver's supply plays no part).
+ * only lets go, so the driver's supply plays no part), with the quantities it came from: the
+ * pull's resistance and, for a diode, the reverse leakage drawn through that pull. One function
+ * for a driver beside the shifter and for one beyond series resistors, so that both judge and
+ * name the same.
  */
 function pulledHighSide(
+  part: Discrete,
   pulled: { v: number; r: number; vpull: number },
-  threshold: number,
+  vih: Level,
   receiverVdd: number,
   minMargin: number,
-  detail: Record<string, number>,
 ): Scored {
+  const threshold = levelAt(vih, receiverVdd);
   return {
     out: pulled.v,
     threshold,
@@ -617,7 +621,10 @@ function pulledHighSide(
     estimate: false,
     status: judge(pulled.v, threshold, minMargin),
     load: 0,
-    detail,
+    detail:
+      part.kind === 'diode-shifter'
+        ? { pullResistance: pulled.r, leakage: part.leakageMax }
+        : { pullResistance: pulled.r },
     score: pulled.v - threshold,
   };
 }
@@ -668,15 +675,9 @@ function shifterPairs(
       for (const c of corners([driver.rail, rx.rail, ...pullRailIds], rails.ranges)) {
         const driverVdd = c.get(driver.rail) ?? 0;
         const receiverVdd = c.get(rx.rail) ?? 0;
-        const leakage = part.kind === 'diode-shifter' ? part.leakageMax : 0;
-        const pulled = pulledHigh(link.self, c, leakage);
-        if (vih !== undefined && pulled !== undefined) {
-          const detail = pulledDetail(part, pulled.r, leakage);
-          high = keepWorst(
-            high,
-            pulledHighSide(pulled, levelAt(vih, receiverVdd), receiverVdd, settings.minMargin, detail),
-          );
-        }
+        const pulled = pulledAcross(part, link.self, c);
+        if (vih !== undefined && pulled !== undefined)
+          high = keepWorst(high, pulledHighSide(part, pulled, vih, receiverVdd, settings.minMargin));
         const vol = outputLevel(driver.params.vol, load.low, driverVdd, 'low');
         if (vil !== undefined && vol !== undefined) {
           let v: number;
@@ -753,15 +754,9 @@ function throughPathPairs(
         for (const c of corners([driver.rail, rx.rail, ...railIds], rails.ranges)) {
           const driverVdd = c.get(driver.rail) ?? 0;
           const receiverVdd = c.get(rx.rail) ?? 0;
-          const leakage = part.kind === 'diode-shifter' ? part.leakageMax : 0;
-          const pulled = pulledHigh(link.self, c, leakage);
-          if (vih !== undefined && pulled !== undefined) {
-            const detail = pulledDetail(part, pulled.r, leakage);
-            high = keepWorst(
-              high,
-              pulledHighSide(pulled, levelAt(vih, receiverVdd), receiverVdd, settings.minMargin, detail),
-            );
-          }
+          const pulled = pulledAcross(part, link.self, c);
+          if (vih !== undefined && pulled !== undefined)
+            high = keepWorst(high, pulledHighSide(part, pulled, vih, receiverVdd, settings.minMargin));
           if (vil === undefined || driver.params.vol === undefined || driver.params.vol.length === 0) continue;
           const iFar = pullCurrentAt(link.self, c, 0);
           const threshold = levelAt(vil, receiverVdd);
